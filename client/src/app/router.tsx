@@ -1,0 +1,30 @@
+import { createBrowserRouter } from 'react-router-dom';
+import { AppLayout } from '@client/components/layouts/app-layout';
+import { RequireUser } from '@client/components/layouts/require-user';
+import { HomePage } from '@client/features/home/components/home-page';
+import { SignInPage } from '@client/features/session/components/sign-in-page';
+import { SignUpPage } from '@client/features/session/components/sign-up-page';
+import { ResetPasswordPage } from '@client/features/account/components/reset-password-page';
+import { AccountPage } from '@client/features/account/components/account-page';
+import { AccountsPage } from '@client/features/admin/components/accounts-page';
+import { MailListPage, MailMessagePage } from '@client/features/admin/components/mail-page';
+import { NotFoundPage } from './not-found-page';
+import { RouteError } from './route-error';
+
+export const router = createBrowserRouter([
+  {
+    element: <AppLayout />,
+    errorElement: <RouteError />,
+    children: [
+      { path: '/', element: <HomePage />, errorElement: <RouteError /> },
+      { path: '/sign-in', element: <SignInPage />, errorElement: <RouteError /> },
+      { path: '/sign-up', element: <SignUpPage />, errorElement: <RouteError /> },
+      { path: '/reset-password', element: <ResetPasswordPage />, errorElement: <RouteError /> },
+      { path: '/account', element: <RequireUser><AccountPage /></RequireUser>, errorElement: <RouteError /> },
+      { path: '/admin/accounts', element: <RequireUser ability="manageAccounts"><AccountsPage /></RequireUser>, errorElement: <RouteError /> },
+      { path: '/admin/mail', element: <RequireUser ability="readCaughtMail"><MailListPage /></RequireUser>, errorElement: <RouteError /> },
+      { path: '/admin/mail/:id', element: <RequireUser ability="readCaughtMail"><MailMessagePage /></RequireUser>, errorElement: <RouteError /> },
+      { path: '*', element: <NotFoundPage /> },
+    ],
+  },
+]);

@@ -1,0 +1,75 @@
+import { Link, NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { useSession } from '@client/features/session/api/get-session';
+import { useSignOut } from '@client/features/session/api/sign-out';
+
+const navClass = ({ isActive }: { isActive: boolean }) =>
+  `inline-flex min-h-11 items-center px-2 font-display uppercase tracking-wide hover:text-signal ${isActive ? 'text-signal underline decoration-2 underline-offset-8' : ''}`;
+
+/** Header, navigation that follows what the person may do, and the page. */
+export function AppLayout() {
+  const { data: session } = useSession();
+  const signOut = useSignOut();
+  const navigate = useNavigate();
+  const user = session?.user;
+
+  return (
+    <div className="flex min-h-screen flex-col">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-paper focus:p-2">
+        Skip to content
+      </a>
+      <header className="border-b-2 border-ink">
+        <div className="mx-auto flex max-w-5xl flex-wrap items-center justify-between gap-x-6 gap-y-1 px-4 py-2">
+          <Link to="/" className="font-display text-2xl font-semibold uppercase tracking-[0.2em]">
+            Placard<span className="text-signal">.</span>
+          </Link>
+          <nav aria-label="Main" className="flex flex-wrap items-center gap-x-3">
+            <NavLink to="/" end className={navClass}>
+              Home
+            </NavLink>
+            {user ? (
+              <>
+                <NavLink to="/account" className={navClass}>
+                  Account
+                </NavLink>
+                {user.abilities.manageAccounts ? (
+                  <NavLink to="/admin/accounts" className={navClass}>
+                    Accounts
+                  </NavLink>
+                ) : null}
+                {user.abilities.readCaughtMail ? (
+                  <NavLink to="/admin/mail" className={navClass}>
+                    Caught mail
+                  </NavLink>
+                ) : null}
+                <button
+                  type="button"
+                  className="inline-flex min-h-11 items-center px-2 font-display uppercase tracking-wide hover:text-signal"
+                  disabled={signOut.isPending}
+                  onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate('/') })}
+                >
+                  Sign out
+                </button>
+              </>
+            ) : (
+              <>
+                <NavLink to="/sign-in" className={navClass}>
+                  Sign in
+                </NavLink>
+                <NavLink to="/sign-up" className={navClass}>
+                  Sign up
+                </NavLink>
+              </>
+            )}
+          </nav>
+        </div>
+      </header>
+      <main id="main" className="mx-auto w-full max-w-5xl flex-1 px-4 py-6">
+        <Outlet />
+      </main>
+      <footer className="border-t border-rule px-4 py-4 text-center text-sm text-graphite">
+        Placard — build sheets, windshield cards and shows.
+        {user ? <span className="ml-2">Signed in as {user.name}.</span> : null}
+      </footer>
+    </div>
+  );
+}

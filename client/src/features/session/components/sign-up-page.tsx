@@ -1,0 +1,45 @@
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Link, useNavigate } from 'react-router-dom';
+import { PASSWORD_MIN_LENGTH } from '@shared/constants';
+import { SignUpSchema, type SignUpInput } from '@shared/schemas/user';
+import { useSignUp } from '../api/sign-up';
+import { applyServerErrors } from '@client/lib/form-errors';
+import { Button } from '@client/components/ui/button';
+import { TextField } from '@client/components/ui/text-field';
+import { Notice } from '@client/components/ui/notice';
+import { PageHeader } from '@client/components/ui/page-header';
+
+export function SignUpPage() {
+  const navigate = useNavigate();
+  const signUp = useSignUp();
+  const [formError, setFormError] = useState('');
+  const { register, handleSubmit, setError, formState: { errors } } = useForm<SignUpInput>({ resolver: zodResolver(SignUpSchema) });
+
+  const onSubmit = handleSubmit((input) => {
+    setFormError('');
+    signUp.mutate(input, {
+      onSuccess: () => navigate('/account', { replace: true }),
+      onError: (err) => setFormError(applyServerErrors(err, setError, ['email', 'name', 'password'])),
+    });
+  });
+
+  return (
+    <div className="mx-auto max-w-md">
+      <PageHeader title="Make an account">One account for your builds, the shows you enter and the shows you help run.</PageHeader>
+      <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+        {formError ? <Notice tone="danger">{formError}</Notice> : null}
+        <TextField label="Your name" autoComplete="name" {...register('name')} error={errors.name?.message} hint="Shown on your build pages and cards." />
+        <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" {...register('email')} error={errors.email?.message} hint="Never shown to anyone else." />
+        <TextField label="Password" type="password" autoComplete="new-password" {...register('password')} error={errors.password?.message} hint={`At least ${PASSWORD_MIN_LENGTH} characters.`} />
+        <Button type="submit" busy={signUp.isPending}>
+          Make my account
+        </Button>
+      </form>
+      <p className="mt-6 text-sm">
+        Already have one? <Link to="/sign-in" className="underline underline-offset-4">Sign in</Link>
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,55 @@
+import { ErrorResponseSchema, type ErrorCode } from '@shared/errors';
+
+/** An API error in the server's one shape; `fields` names what to fix. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: ErrorCode | 'NETWORK',
+    message: string,
+    readonly fields: Record<string, string> = {},
+  ) {
+    super(message);
+  }
+}
+
+let csrfToken: string | undefined;
+/** The session endpoint hands out the token; every write sends it back. */
+export const setCsrfToken = (token: string | undefined) => {
+  csrfToken = token;
+};
+
+type Options = { method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE'; body?: unknown; signal?: AbortSignal };
+
+async function send(path: string, { method = 'GET', body, signal }: Options): Promise<Response> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  if (method !== 'GET' && csrfToken) headers['X-CSRF-Token'] = csrfToken;
+  try {
+    return await fetch(path, { method, headers, body: body === undefined ? undefined : JSON.stringify(body), credentials: 'same-origin', signal });
+  } catch (err) {
+    if ((err as Error).name === 'AbortError') throw err;
+    throw new ApiError(0, 'NETWORK', 'No connection to Placard. Check your signal and try again.');
+  }
+}
+
+async function toError(res: Response): Promise<ApiError> {
+  const parsed = ErrorResponseSchema.safeParse(await res.json().catch(() => null));
+  if (parsed.success) return new ApiError(res.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.fields);
+  return new ApiError(res.status, 'INTERNAL', `The server answered ${res.status}. Please try again.`);
+}
+
+/** Calls the JSON API. A stale CSRF token is renewed once, transparently. */
+export async function api<T>(path: string, options: Options = {}): Promise<T> {
+  let res = await send(path, options);
+  if (res.status === 403 && options.method && options.method !== 'GET') {
+    const err = await toError(res.clone());
+    if (err.code === 'CSRF_INVALID') {
+      const session = await send('/api/session', {});
+      if (session.ok) setCsrfToken(((await session.json()) as { csrfToken: string }).csrfToken);
+      res = await send(path, options);
+    }
+  }
+  if (!res.ok) throw await toError(res);
+  if (res.status === 204) return undefined as T;
+  return (await res.json()) as T;
+}

@@ -1,0 +1,75 @@
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import './models/index';
+import { config } from './config';
+import { logger } from './logger';
+import { passport } from './auth/passport';
+import { sessionMiddleware } from './session-store';
+import { csrfProtection } from './middlewares/csrf';
+import { apiLimiter } from './middlewares/rate-limits';
+import { apiNotFound, errorHandler } from './middlewares/error-handler';
+import { healthRouter } from './routes/health';
+import { sessionRouter } from './routes/session';
+import { usersRouter } from './routes/users';
+import { accountRouter } from './routes/account';
+import { passwordResetsRouter } from './routes/password-resets';
+import { adminRouter } from './routes/admin';
+
+const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
+
+function apiRouter() {
+  const api = express.Router();
+  api.use(healthRouter); // before the limiter and the session: probes must stay cheap
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store'); // answers depend on who asks
+    next();
+  });
+  api.use(apiLimiter);
+  api.use(express.json({ limit: '1mb' }));
+  api.use(sessionMiddleware);
+  api.use(passport.session());
+  api.use(csrfProtection);
+  api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, adminRouter);
+  api.use(apiNotFound);
+  return api;
+}
+
+/** The built client: hashed assets cached for a year, and index.html for every client route. */
+function clientRouter() {
+  const client = express.Router();
+  client.use('/assets', express.static(path.join(CLIENT_DIST, 'assets'), { immutable: true, maxAge: '365d', fallthrough: false }));
+  client.use(express.static(CLIENT_DIST, { index: false, maxAge: '1h' }));
+  client.get('/{*splat}', (_req, res) => {
+    const index = path.join(CLIENT_DIST, 'index.html');
+    if (!existsSync(index)) {
+      res.status(503).type('text/plain').send('The client is not built yet: run `npm run build` (npm start does it for you).');
+      return;
+    }
+    res.set('Cache-Control', 'no-cache').sendFile(index);
+  });
+  return client;
+}
+
+/** Builds the Express app without listening, so tests drive it through supertest. */
+export function createApp(): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.trustProxy) app.set('trust proxy', 1);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'upgrade-insecure-requests': config.secureCookies ? [] : null },
+      },
+      strictTransportSecurity: config.secureCookies,
+    }),
+  );
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use('/api', apiRouter());
+  app.use(clientRouter());
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,32 @@
+import type { Request, Response } from 'express';
+import { passport } from './passport';
+import type { User } from '../models/user';
+
+/** Checks e-mail and password with the local strategy; resolves to the user or undefined. */
+export function authenticateLocal(req: Request, res: Response): Promise<User | undefined> {
+  return new Promise((resolve, reject) => {
+    passport.authenticate('local', { session: false }, (err: unknown, user: User | false) => {
+      if (err) reject(err);
+      else resolve(user || undefined);
+    })(req, res, reject);
+  });
+}
+
+/** Signs in: passport regenerates the session id first, so a planted pre-sign-in id is worthless. */
+export function signIn(req: Request, user: User): Promise<void> {
+  return new Promise((resolve, reject) => req.login(user, (err) => (err ? reject(err) : resolve())));
+}
+
+/** Signs out and destroys the session row itself, not just its user. */
+export function signOut(req: Request, res: Response, cookieName: string): Promise<void> {
+  return new Promise((resolve, reject) => {
+    req.logout({ keepSessionInfo: false }, (err) => {
+      if (err) return reject(err);
+      req.session.destroy((destroyErr) => {
+        if (destroyErr) return reject(destroyErr);
+        res.clearCookie(cookieName, { path: '/' });
+        resolve();
+      });
+    });
+  });
+}

@@ -1,0 +1,25 @@
+import { spawnSync } from 'node:child_process';
+import { existsSync, readdirSync, statSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
+const BUILT = path.join(ROOT, 'dist/client/index.html');
+const SOURCES = ['client', 'shared', 'vite.config.ts', 'package-lock.json'];
+
+function newestMtime(p: string): number {
+  if (!existsSync(p)) return 0;
+  const s = statSync(p);
+  if (!s.isDirectory()) return s.mtimeMs;
+  return readdirSync(p).reduce((m, name) => Math.max(m, newestMtime(path.join(p, name))), s.mtimeMs);
+}
+
+/** Builds the client with Vite when any of its sources is newer than the last build. */
+export function buildClientIfStale(): void {
+  const built = existsSync(BUILT) ? statSync(BUILT).mtimeMs : 0;
+  const newest = Math.max(...SOURCES.map((s) => newestMtime(path.join(ROOT, s))));
+  if (built >= newest) return;
+  console.log('Building the client…');
+  const r = spawnSync(process.execPath, [path.join(ROOT, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn'], { cwd: ROOT, stdio: 'inherit' });
+  if (r.status !== 0) throw new Error('The client build failed.');
+}

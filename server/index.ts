@@ -1,0 +1,20 @@
+import type { Server } from 'node:http';
+import { createApp } from './app';
+import { config } from './config';
+import { logger } from './logger';
+import { sequelize } from './db/sequelize';
+import { sessionPool } from './session-store';
+
+/** Listens on the configured address; resolves once the port is open. */
+export function listen(port = config.port, host = config.host): Promise<Server> {
+  const app = createApp();
+  return new Promise((resolve, reject) => {
+    const server = app.listen(port, host, (err?: Error) => (err ? reject(err) : resolve(server)));
+  });
+}
+
+export async function closeConnections(): Promise<void> {
+  await Promise.allSettled([sequelize.close(), sessionPool.end()]);
+}
+
+export { logger };

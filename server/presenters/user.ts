@@ -1,0 +1,34 @@
+import type { AdminUser, CurrentUser } from '@shared/schemas/user';
+import type { User } from '../models/user';
+import { can as canUser } from '../policies/user';
+import { can as canMail } from '../policies/mail';
+import { can as canEvent } from '../policies/event';
+import { config } from '../config';
+
+/** The signed-in person as their own client sees them, with what the policies allow. */
+export function presentCurrentUser(user: User): CurrentUser {
+  return {
+    id: user.id,
+    email: user.email,
+    name: user.name,
+    isSiteAdmin: user.isSiteAdmin,
+    mayOrganise: user.mayOrganise,
+    abilities: {
+      manageAccounts: canUser(user, 'list'),
+      readCaughtMail: canMail(user, 'read', { demoMode: config.demoMode }),
+      createEvents: canEvent(user, 'create'),
+    },
+  };
+}
+
+/** An account row in the site admin's list. */
+export function presentAdminUser(user: User): AdminUser {
+  return {
+    id: user.id,
+    email: user.email,
+    name: user.name,
+    isSiteAdmin: user.isSiteAdmin,
+    mayOrganise: user.mayOrganise,
+    createdAt: user.createdAt.toISOString(),
+  };
+}

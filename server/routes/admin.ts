@@ -1,0 +1,44 @@
+import { Router } from 'express';
+import { AdminUserListQuerySchema, AdminUserUpdateSchema, IdParamSchema, type AdminUserListQuery, type AdminUserUpdateInput } from '@shared/schemas/user';
+import type { CaughtMailListResponse } from '@shared/schemas/mail';
+import { validate } from '../middlewares/validate';
+import { currentUser, requireUser } from '../middlewares/authenticate';
+import { authorizeUser } from '../policies/user';
+import { authorizeMail } from '../policies/mail';
+import { listUsers, updateRoles } from '../services/users';
+import { getCaughtMail, listCaughtMail } from '../services/caught-mail';
+import { presentAdminUser } from '../presenters/user';
+import { presentCaughtMail, presentCaughtMailSummary } from '../presenters/caught-mail';
+import { NotFoundError } from '../errors';
+import { config } from '../config';
+
+export const adminRouter = Router();
+adminRouter.use('/admin', requireUser);
+
+adminRouter.get('/admin/users', validate('query', AdminUserListQuerySchema), async (req, res) => {
+  authorizeUser(currentUser(req), 'list');
+  const query = res.locals.query as AdminUserListQuery;
+  const { users, total } = await listUsers(query);
+  res.json({ users: users.map(presentAdminUser), total, page: query.page, pageSize: query.pageSize });
+});
+
+adminRouter.patch('/admin/users/:id', validate('params', IdParamSchema), validate('body', AdminUserUpdateSchema), async (req, res) => {
+  const actor = currentUser(req);
+  const { id } = res.locals.params as { id: number };
+  authorizeUser(actor, 'updateRoles', { id });
+  const user = await updateRoles(actor, id, res.locals.body as AdminUserUpdateInput);
+  res.json({ user: presentAdminUser(user) });
+});
+
+adminRouter.get('/admin/mail', async (req, res) => {
+  authorizeMail(currentUser(req), 'read', { demoMode: config.demoMode });
+  const body: CaughtMailListResponse = { mail: (await listCaughtMail()).map(presentCaughtMailSummary) };
+  res.json(body);
+});
+
+adminRouter.get('/admin/mail/:id', validate('params', IdParamSchema), async (req, res) => {
+  authorizeMail(currentUser(req), 'read', { demoMode: config.demoMode });
+  const mail = await getCaughtMail((res.locals.params as { id: number }).id);
+  if (!mail) throw new NotFoundError('No such message.');
+  res.json({ mail: presentCaughtMail(mail) });
+});

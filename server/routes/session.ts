@@ -1,0 +1,36 @@
+import { Router, type Request } from 'express';
+import { SignInSchema, type SessionResponse } from '@shared/schemas/user';
+import { validate } from '../middlewares/validate';
+import { csrfToken } from '../middlewares/csrf';
+import { signInLimiter } from '../middlewares/rate-limits';
+import { authenticateLocal, signIn, signOut } from '../auth/session-helpers';
+import { presentCurrentUser } from '../presenters/user';
+import { AppError } from '../errors';
+import { config } from '../config';
+
+export const SESSION_COOKIE = 'placard.sid';
+export const sessionRouter = Router();
+
+const sessionBody = (req: Request): SessionResponse => ({
+  user: req.user ? presentCurrentUser(req.user) : null,
+  csrfToken: csrfToken(req),
+  demoMode: config.demoMode,
+});
+
+/** Who is signed in, what they may do, and the CSRF token for the next write. */
+sessionRouter.get('/session', (req, res) => {
+  res.json(sessionBody(req));
+});
+
+sessionRouter.post('/session', signInLimiter, validate('body', SignInSchema), async (req, res) => {
+  const user = await authenticateLocal(req, res);
+  if (!user) throw new AppError(401, 'UNAUTHENTICATED', 'That e-mail and password do not match an account.', { password: 'E-mail or password is not right.' });
+  await signIn(req, user);
+  csrfToken(req, true);
+  res.json(sessionBody(req));
+});
+
+sessionRouter.delete('/session', async (req, res) => {
+  await signOut(req, res, SESSION_COOKIE);
+  res.status(204).end();
+});

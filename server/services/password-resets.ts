@@ -1,0 +1,54 @@
+import { createHash, randomBytes } from 'node:crypto';
+import { Op } from 'sequelize';
+import { PASSWORD_RESET_TTL_MINUTES } from '@shared/constants';
+import type { PasswordResetConfirmInput } from '@shared/schemas/user';
+import { passwordResetEmail } from '@templates/email/password-reset';
+import { sequelize } from '../db/sequelize';
+import { PasswordResetToken } from '../models/password-reset-token';
+import { User } from '../models/user';
+import { hashPassword } from '../auth/passwords';
+import { AppError } from '../errors';
+import { sendMail } from '../mail/mailer';
+import { destroySessionsOf } from './sessions';
+
+const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
+
+/**
+ * Mails a single-use link when the e-mail has an account. The caller answers the same either way,
+ * so the form does not reveal who has an account.
+ */
+export async function requestPasswordReset(email: string, publicBaseUrl: string): Promise<void> {
+  const user = await User.findOne({ where: { email } });
+  if (!user) return;
+  const token = randomBytes(32).toString('base64url');
+  await PasswordResetToken.create({
+    userId: user.id,
+    tokenHash: sha256(token),
+    expiresAt: new Date(Date.now() + PASSWORD_RESET_TTL_MINUTES * 60_000),
+    usedAt: null,
+  });
+  const link = `${publicBaseUrl}/reset-password?token=${token}`;
+  await sendMail({ to: user.email, ...passwordResetEmail({ name: user.name, link, minutes: PASSWORD_RESET_TTL_MINUTES }) });
+}
+
+const invalidLink = () =>
+  new AppError(400, 'VALIDATION_FAILED', 'This reset link has expired or was already used. Ask for a new one.', { token: 'Expired or already used.' });
+
+/** Sets the new password, spends the token and every other unspent one, and signs the person out everywhere. */
+export async function confirmPasswordReset(input: PasswordResetConfirmInput): Promise<User> {
+  const passwordHash = await hashPassword(input.password);
+  return sequelize.transaction(async (transaction) => {
+    const token = await PasswordResetToken.findOne({
+      where: { tokenHash: sha256(input.token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      lock: transaction.LOCK.UPDATE,
+      transaction,
+    });
+    if (!token) throw invalidLink();
+    const user = await User.findByPk(token.userId, { transaction });
+    if (!user) throw invalidLink();
+    await user.update({ passwordHash }, { transaction });
+    await PasswordResetToken.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: null }, transaction });
+    await destroySessionsOf(user.id, undefined, transaction);
+    return user;
+  });
+}

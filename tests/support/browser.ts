@@ -1,0 +1,25 @@
+import { chromium, type Browser } from 'playwright-core';
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+
+export const CHROMIUM = '/usr/bin/chromium';
+// Flags for a sandboxed root session on a machine with no outside network (see DEVELOPERS.md).
+export const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+
+export function launchBrowser(): Promise<Browser> {
+  if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: run the tests with \`npm test\`, which installs Debian's chromium.`);
+  return chromium.launch({ executablePath: CHROMIUM, args: CHROMIUM_ARGS });
+}
+
+/** The real server on a free loopback port, serving the built client (npm test builds it first). */
+export async function startTestServer(): Promise<{ server: Server; baseUrl: string }> {
+  if (!existsSync(path.resolve('dist/client/index.html'))) throw new Error('dist/client is missing: run `npm run build` or `npm test`.');
+  const { listen } = await import('@server/index');
+  const server = await listen(0, '127.0.0.1');
+  const { port } = server.address() as AddressInfo;
+  return { server, baseUrl: `http://127.0.0.1:${port}` };
+}
+
+export const SCREENSHOT_DIR = path.resolve('test-results/screenshots');

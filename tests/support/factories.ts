@@ -1,0 +1,20 @@
+import { randomUUID } from 'node:crypto';
+import { User } from '@server/models/user';
+import { hashPassword } from '@server/auth/passwords';
+
+export const DEFAULT_PASSWORD = 'correct horse battery';
+
+/** A user with a unique e-mail, so test files can run side by side on one database. */
+export async function createUser(overrides: Partial<{ email: string; name: string; password: string; isSiteAdmin: boolean; mayOrganise: boolean }> = {}) {
+  const password = overrides.password ?? DEFAULT_PASSWORD;
+  const user = await User.create({
+    email: overrides.email ?? `user-${randomUUID()}@example.test`,
+    name: overrides.name ?? 'Test Person',
+    passwordHash: await hashPassword(password),
+    isSiteAdmin: overrides.isSiteAdmin ?? false,
+    mayOrganise: overrides.mayOrganise ?? false,
+  });
+  return { user, password, email: user.email };
+}
+
+export const uniqueEmail = (label = 'user') => `${label}-${randomUUID()}@example.test`;
