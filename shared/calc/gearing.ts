@@ -17,10 +17,7 @@ export function roadSpeedMph(input: Driveline & { rpm: number; tyreDiameterIn: n
   const overall = overallRatio(input);
   requireNonNegative(input.rpm, 'rpm');
   requirePositive(input.tyreDiameterIn, 'tyreDiameterIn');
-  return finiteResult(
-    (input.rpm * input.tyreDiameterIn) / (overall * MPH_GEARING_CONSTANT),
-    'mph',
-  );
+  return finiteResult((input.rpm * input.tyreDiameterIn) / (overall * MPH_GEARING_CONSTANT), 'mph');
 }
 
 export function roadSpeedKmh(input: Driveline & { rpm: number; tyreDiameterMm: number }): number {
@@ -73,7 +70,7 @@ export function speedsInEachGear(input: GearTable & { rpm: number }): GearSpeed[
   return gears.map((ratio, index) => {
     requirePositive(ratio, `gears[${index}]`);
     const mph = roadSpeedMph({ rpm, gearRatio: ratio, finalDrive, tyreDiameterIn });
-    return { gear: index + 1, ratio, mph, kmh: mph * UNITS.speed.mph };
+    return { gear: index + 1, ratio, mph, kmh: finiteResult(mph * UNITS.speed.mph, 'kmh') };
   });
 }
 

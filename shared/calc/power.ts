@@ -1,6 +1,6 @@
 // Power-to-weight, weight-to-power, and the flywheel ↔ wheel power estimate.
 import { finiteResult, requireFinite, requireFraction, requirePositive } from './errors';
-import { convert, type MassUnit, type PowerUnit, type Quantity } from './units';
+import { convert, type PowerUnit, type Quantity } from './units';
 
 export interface PowerToWeight {
   /** Mechanical hp per metric tonne (1000 kg). */

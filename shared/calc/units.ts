@@ -4,6 +4,11 @@ import { CalcInputError, finiteResult, requireFinite } from './errors';
 
 // Exact by definition: 1 lbf = 0.45359237 kg × 9.80665 m/s² (standard gravity).
 const POUND_FORCE_N = 4.4482216152605;
+// 1 lbf·ft = 1.3558179483314004 N·m exactly; derived here because a double cannot hold all
+// those digits (the literal would lose precision and draw a lint error).
+const POUND_FOOT_NM = POUND_FORCE_N * 0.3048;
+// 1 hp = 550 ft·lbf/s = 745.69987158227022 W exactly; derived for the same reason.
+const HORSEPOWER_W = 550 * POUND_FORCE_N * 0.3048;
 
 /**
  * How many base units one of each unit is. Each kind's base is chosen so the common factors are
@@ -14,9 +19,9 @@ export const UNITS = {
   length: { mm: 1, cm: 10, m: 1000, km: 1_000_000, in: 25.4, ft: 304.8, mi: 1_609_344 },
   mass: { kg: 1, g: 0.001, t: 1000, lb: 0.45359237 },
   force: { N: 1, kN: 1000, lbf: POUND_FORCE_N, kgf: 9.80665 },
-  torque: { Nm: 1, lbft: 1.3558179483314004 },
+  torque: { Nm: 1, lbft: POUND_FOOT_NM },
   // Mechanical hp (550 ft·lbf/s), metric hp (PS, 75 kgf·m/s) and kW are three different units.
-  power: { W: 1, kW: 1000, hp: 745.69987158227022, PS: 735.49875 },
+  power: { W: 1, kW: 1000, hp: HORSEPOWER_W, PS: 735.49875 },
   pressure: { Pa: 1, kPa: 1000, bar: 100_000, psi: 6894.757293168361 },
   volume: { cm3: 1, L: 1000, in3: 16.387064 },
   speed: { 'km/h': 1, mph: 1.609344, 'm/s': 3.6 },
@@ -50,12 +55,30 @@ export type UnitSystem = 'metric' | 'imperial';
 
 export const PREFERRED_UNITS: { [S in UnitSystem]: { [K in QuantityKind]: UnitOf<K> } } = {
   metric: {
-    length: 'mm', mass: 'kg', force: 'N', torque: 'Nm', power: 'kW', pressure: 'bar',
-    volume: 'L', speed: 'km/h', springRate: 'N/mm', density: 'kg/m3', massPerLength: 'kg/m',
+    length: 'mm',
+    mass: 'kg',
+    force: 'N',
+    torque: 'Nm',
+    power: 'kW',
+    pressure: 'bar',
+    volume: 'L',
+    speed: 'km/h',
+    springRate: 'N/mm',
+    density: 'kg/m3',
+    massPerLength: 'kg/m',
   },
   imperial: {
-    length: 'in', mass: 'lb', force: 'lbf', torque: 'lbft', power: 'hp', pressure: 'psi',
-    volume: 'in3', speed: 'mph', springRate: 'lb/in', density: 'lb/in3', massPerLength: 'lb/ft',
+    length: 'in',
+    mass: 'lb',
+    force: 'lbf',
+    torque: 'lbft',
+    power: 'hp',
+    pressure: 'psi',
+    volume: 'in3',
+    speed: 'mph',
+    springRate: 'lb/in',
+    density: 'lb/in3',
+    massPerLength: 'lb/ft',
   },
 };
 
@@ -107,21 +130,49 @@ export function toSystem<K extends QuantityKind>(
 // 'PS', 'CV', 'ch' and 'pk' are the metric hp. Compared case-insensitively, spaces ignored.
 const UNIT_ALIASES: { [K in QuantityKind]: Record<string, UnitOf<K>> } = {
   length: {
-    millimetre: 'mm', millimetres: 'mm', millimeter: 'mm', millimeters: 'mm', inch: 'in',
-    inches: 'in', '"': 'in', foot: 'ft', feet: 'ft', mile: 'mi', miles: 'mi',
+    millimetre: 'mm',
+    millimetres: 'mm',
+    millimeter: 'mm',
+    millimeters: 'mm',
+    inch: 'in',
+    inches: 'in',
+    '"': 'in',
+    foot: 'ft',
+    feet: 'ft',
+    mile: 'mi',
+    miles: 'mi',
   },
   mass: { kgs: 'kg', lbs: 'lb', pound: 'lb', pounds: 'lb', tonne: 't', tonnes: 't' },
   force: {},
   torque: {
-    'n·m': 'Nm', 'n-m': 'Nm', 'n.m': 'Nm', 'lb·ft': 'lbft', 'lb-ft': 'lbft', 'lbf·ft': 'lbft',
-    'lbf-ft': 'lbft', 'ft-lb': 'lbft', 'ft·lb': 'lbft', 'ft-lbs': 'lbft', ftlb: 'lbft',
+    'n·m': 'Nm',
+    'n-m': 'Nm',
+    'n.m': 'Nm',
+    'lb·ft': 'lbft',
+    'lb-ft': 'lbft',
+    'lbf·ft': 'lbft',
+    'lbf-ft': 'lbft',
+    'ft-lb': 'lbft',
+    'ft·lb': 'lbft',
+    'ft-lbs': 'lbft',
+    ftlb: 'lbft',
     'lbs-ft': 'lbft',
   },
   power: { bhp: 'hp', whp: 'hp', cv: 'PS', ch: 'PS', pk: 'PS' },
   pressure: {},
   volume: {
-    cc: 'cm3', 'cm³': 'cm3', ml: 'cm3', l: 'L', litre: 'L', litres: 'L', liter: 'L', liters: 'L',
-    'in³': 'in3', ci: 'in3', cid: 'in3', cuin: 'in3',
+    cc: 'cm3',
+    'cm³': 'cm3',
+    ml: 'cm3',
+    l: 'L',
+    litre: 'L',
+    litres: 'L',
+    liter: 'L',
+    liters: 'L',
+    'in³': 'in3',
+    ci: 'in3',
+    cid: 'in3',
+    cuin: 'in3',
   },
   speed: { kph: 'km/h', kmh: 'km/h' },
   springRate: { 'lbs/in': 'lb/in', 'lbf/in': 'lb/in', 'kg/mm': 'kgf/mm' },

@@ -48,15 +48,15 @@ export function wheelSpacing(input: WheelSpacingInput): WheelSpacing {
     backspacingIn = overallWidthIn / 2 + offsetMm / UNITS.length.in;
     source = 'calculated';
   }
-  finiteResult(backspacingIn, 'backspacingIn');
   // Negative frontspacing is physically impossible; it is returned so a spec check can flag it.
   const frontspacingIn = overallWidthIn - backspacingIn;
+  const mmPerIn = UNITS.length.in;
   return {
-    backspacingIn,
-    frontspacingIn,
-    backspacingMm: backspacingIn * UNITS.length.in,
-    frontspacingMm: frontspacingIn * UNITS.length.in,
-    overallWidthIn,
+    backspacingIn: finiteResult(backspacingIn, 'backspacingIn'),
+    frontspacingIn: finiteResult(frontspacingIn, 'frontspacingIn'),
+    backspacingMm: finiteResult(backspacingIn * mmPerIn, 'backspacingMm'),
+    frontspacingMm: finiteResult(frontspacingIn * mmPerIn, 'frontspacingMm'),
+    overallWidthIn: finiteResult(overallWidthIn, 'overallWidthIn'),
     offsetMm,
     source,
     note: source === 'measured' ? 'Backspacing as measured.' : WHEEL_SPACING_NOTE,

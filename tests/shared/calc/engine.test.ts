@@ -42,7 +42,10 @@ describe('displacement', () => {
   });
 
   it('rejects nonsense', () => {
-    expect(() => displacement({ bore: 0, stroke: 3, unit: 'in', cylinders: 8 })).toThrow(CalcInputError);
+    // Our input rule: lengths and cylinder counts must be finite, above zero, whole.
+    expect(() => displacement({ bore: 0, stroke: 3, unit: 'in', cylinders: 8 })).toThrow(
+      CalcInputError,
+    );
     expect(() => displacement({ bore: 4, stroke: -3, unit: 'in', cylinders: 8 })).toThrow(
       CalcInputError,
     );
@@ -55,6 +58,7 @@ describe('displacement', () => {
   });
 
   it('names the offending field', () => {
+    // Our API: CalcInputError carries the field and the reason.
     try {
       displacement({ bore: 4, stroke: 3, unit: 'in', cylinders: 0 });
       expect.unreachable();

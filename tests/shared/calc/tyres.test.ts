@@ -38,7 +38,12 @@ describe('metric size codes', () => {
     const zr = parseTyreCode('275/35ZR18');
     expect(zr).toMatchObject({ system: 'metric', construction: 'ZR', sectionWidthMm: 275 });
     const p = parseTyreCode('P215/65R15');
-    expect(p).toMatchObject({ prefix: 'P', sectionWidthMm: 215, aspectRatio: 65, rimDiameterIn: 15 });
+    expect(p).toMatchObject({
+      prefix: 'P',
+      sectionWidthMm: 215,
+      aspectRatio: 65,
+      rimDiameterIn: 15,
+    });
     // 15 + 2 × 139.75 / 25.4 = 26.004 in.
     expect(tyreDimensions(p).diameterIn).toBeCloseTo(26.0039, 4);
     const lt = parseTyreCode('LT265/75R16');
@@ -48,6 +53,7 @@ describe('metric size codes', () => {
   });
 
   it('keeps the load index and speed symbol but ignores them for geometry', () => {
+    // Size code definition: the service description (load index + speed symbol) carries no dimension.
     const withService = parseTyreCode('245/40ZR18 93Y');
     expect(withService.service).toEqual({
       text: '93Y',
@@ -70,6 +76,7 @@ describe('metric size codes', () => {
   });
 
   it('is forgiving about case and spaces', () => {
+    // Our parsing rule: owners type codes loosely.
     expect(parseTyreCode(' p215/65 r15 ').code).toBe('P215/65R15');
   });
 });
@@ -78,7 +85,11 @@ describe('flotation size codes', () => {
   it('33x12.50R15 → 33 in overall, 12.5 in wide, 9 in sidewall', () => {
     // Flotation code definition: overall diameter × section width, rim 15 in.
     const size = parseTyreCode('33x12.50R15');
-    expect(size).toMatchObject({ system: 'flotation', overallDiameterIn: 33, sectionWidthIn: 12.5 });
+    expect(size).toMatchObject({
+      system: 'flotation',
+      overallDiameterIn: 33,
+      sectionWidthIn: 12.5,
+    });
     const d = tyreDimensions(size);
     expect(d.diameterIn).toBeCloseTo(33, 10);
     expect(d.sidewallIn).toBeCloseTo(9, 10);
@@ -88,6 +99,7 @@ describe('flotation size codes', () => {
   });
 
   it('accepts an LT suffix, a capital X and bias construction', () => {
+    // Size code definition: '-' or D for bias, LT for light truck (Tire and Rim Association).
     expect(parseTyreCode('35X12.50R17LT 121Q')).toMatchObject({ suffix: 'LT', rimDiameterIn: 17 });
     expect(parseTyreCode('31x10.50-15').construction).toBe('-');
   });
@@ -95,6 +107,7 @@ describe('flotation size codes', () => {
 
 describe('every result', () => {
   it('carries the nominal-figures note', () => {
+    // Common practice: a maker's loaded radius differs by a few percent from the nominal figure.
     expect(tyreDimensionsFromCode('315/30R18').note).toBe(NOMINAL_TYRE_NOTE);
     expect(NOMINAL_TYRE_NOTE).toMatch(/few percent/);
   });
@@ -108,7 +121,11 @@ describe('every result', () => {
         fc.integer({ min: 12, max: 24 }),
         (width, aspect, rim) => {
           const size = parseTyreCode(`${width}/${aspect}R${rim}`);
-          expect(size).toMatchObject({ sectionWidthMm: width, aspectRatio: aspect, rimDiameterIn: rim });
+          expect(size).toMatchObject({
+            sectionWidthMm: width,
+            aspectRatio: aspect,
+            rimDiameterIn: rim,
+          });
           const d = tyreDimensions(size);
           expect(d.diameterMm).toBeCloseTo(rim * 25.4 + (2 * width * aspect) / 100, 9);
           expect(d.revsPerMile * d.circumferenceIn).toBeCloseTo(63360, 6);
@@ -133,6 +150,7 @@ describe('unreadable codes', () => {
     ['33x12.50', /construction letter/],
   ];
   it.each(cases)('%j is rejected with a reason', (code, reason) => {
+    // Our parsing rule: each failure says which part of the code is wrong.
     expect(() => parseTyreCode(code)).toThrow(TyreCodeError);
     expect(() => parseTyreCode(code)).toThrow(reason);
     const result = tryParseTyreCode(code);
@@ -144,6 +162,7 @@ describe('unreadable codes', () => {
   });
 
   it('tryParseTyreCode returns the size when it can', () => {
+    // Our API for the live editor.
     const result = tryParseTyreCode('285/35R18');
     expect(result.ok && result.size.code).toBe('285/35R18');
   });
