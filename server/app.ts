@@ -18,12 +18,20 @@ import { usersRouter } from './routes/users';
 import { accountRouter } from './routes/account';
 import { passwordResetsRouter } from './routes/password-resets';
 import { adminRouter } from './routes/admin';
+import { buildsRouter } from './routes/builds';
+import { buildRecordsRouter } from './routes/build-records';
+import { photosRouter } from './routes/photos';
+import { cardsRouter } from './routes/cards';
+import { publicApiRouter } from './routes/public';
+import { mediaRouter } from './routes/media';
+import { pagesRouter } from './pages/router';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
 function apiRouter() {
   const api = express.Router();
   api.use(healthRouter); // before the limiter and the session: probes must stay cheap
+  api.use(publicApiRouter); // public JSON: no session, cacheable
   api.use((_req, res, next) => {
     res.set('Cache-Control', 'no-store'); // answers depend on who asks
     next();
@@ -34,6 +42,7 @@ function apiRouter() {
   api.use(passport.session());
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, adminRouter);
+  api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter);
   api.use(apiNotFound);
   return api;
 }
@@ -69,6 +78,8 @@ export function createApp(): Express {
   );
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
   app.use('/api', apiRouter());
+  app.use(mediaRouter); // uploaded photos under /media
+  app.use(pagesRouter); // public pages such as /c/<code>, complete HTML without the app bundle
   app.use(clientRouter());
   app.use(errorHandler);
   return app;

@@ -1,4 +1,10 @@
 import { z } from 'zod';
+import { randomBytes } from 'node:crypto';
+import os from 'node:os';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const PROJECT_ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
 const bool = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'])
@@ -10,7 +16,7 @@ const EnvSchema = z.object({
   HOST: z.string().default('127.0.0.1'),
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   PUBLIC_BASE_URL: z.url().optional(),
-  DATABASE_URL: z.string().optional(),
+  DATABASE_URL: z.string().optional().transform((v) => v || undefined),
   PGPORT: z.coerce.number().int().min(1024).max(65535).default(54329),
   DB_NAME: z.string().regex(/^[a-z_][a-z0-9_]*$/).default('placard'),
   SESSION_SECRET: z.string().min(16).optional(),
@@ -23,10 +29,13 @@ const EnvSchema = z.object({
   SIGNIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   SIGNIN_RATE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   API_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
+  STORAGE_DIR: z.string().optional().transform((v) => v || undefined),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
 });
 
 export type Config = ReturnType<typeof loadConfig>;
+
+const testStorageDir = () => path.join(os.tmpdir(), `placard-test-uploads-${process.pid}-${randomBytes(4).toString('hex')}`);
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
   const parsed = EnvSchema.safeParse(env);
@@ -61,6 +70,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     signInRateLimit: e.SIGNIN_RATE_LIMIT,
     signInRateWindowMs: e.SIGNIN_RATE_WINDOW_MINUTES * 60 * 1000,
     apiRateLimitPerMinute: e.API_RATE_LIMIT_PER_MINUTE,
+    /** Local-disk storage of uploads; tests get a fresh temporary folder per process unless told otherwise. */
+    storageDir: path.resolve(PROJECT_ROOT, e.STORAGE_DIR ?? (e.NODE_ENV === 'test' ? testStorageDir() : '.data/uploads')),
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
   };
 }

@@ -115,7 +115,7 @@ async function createDatabases(port: number, names: string[]) {
  * Makes sure the project's cluster exists, runs and holds the app and test databases.
  * Does nothing when DATABASE_URL points at a server of its own. Safe to call again and again.
  */
-export async function ensureDatabase(port = Number(process.env.PGPORT ?? 54329)): Promise<void> {
+export async function ensureDatabase(port = Number(process.env.PGPORT ?? 54329), extraDatabases: string[] = []): Promise<void> {
   if (process.env.DATABASE_URL) return;
   const bin = findBinDir() ?? installPostgres();
   const dir = dataDir();
@@ -124,7 +124,7 @@ export async function ensureDatabase(port = Number(process.env.PGPORT ?? 54329))
     initCluster(bin, dir);
   }
   if (!isRunning(bin, dir)) startCluster(bin, dir, port);
-  await createDatabases(port, APP_DATABASES);
+  await createDatabases(port, [...new Set([...APP_DATABASES, ...extraDatabases])]);
 }
 
 export function stopDatabase(): void {

@@ -7,7 +7,7 @@ import { TEST_ENV } from './test-env';
 export async function prepareTestDatabase(): Promise<() => Promise<void>> {
   Object.assign(process.env, TEST_ENV);
   const { ensureDatabase } = await import('@server/db/cluster');
-  await ensureDatabase();
+  await ensureDatabase(undefined, [TEST_ENV.DB_NAME]);
   await import('@server/models/index');
   const { sequelize } = await import('@server/db/sequelize');
   const { migrate } = await import('@server/db/migrator');

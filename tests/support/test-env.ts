@@ -1,9 +1,15 @@
+// Parallel runs (two checkouts, two engineers) each name their own database and catcher port.
+const db = process.env.PLACARD_TEST_DB ?? 'placard_test';
+const mailPort = process.env.PLACARD_TEST_MAIL_PORT ?? '54335';
+
 /** The environment every test process runs with: its own database and mail catcher, quiet logs. */
 export const TEST_ENV = {
   NODE_ENV: 'test',
-  DB_NAME: 'placard_test',
-  MAIL_CATCHER_PORT: '54335',
-  SMTP_URL: 'smtp://127.0.0.1:54335',
+  DB_NAME: db,
+  // Never the app's database: a managed server for tests comes only through TEST_DATABASE_URL.
+  DATABASE_URL: process.env.TEST_DATABASE_URL ?? '',
+  MAIL_CATCHER_PORT: mailPort,
+  SMTP_URL: `smtp://127.0.0.1:${mailPort}`,
   DEMO_MODE: 'true',
   SIGNIN_RATE_LIMIT: '5',
   API_RATE_LIMIT_PER_MINUTE: '100000',

@@ -17,6 +17,8 @@ let csrfToken: string | undefined;
 export const setCsrfToken = (token: string | undefined) => {
   csrfToken = token;
 };
+/** For requests that cannot go through api(), such as an upload with progress (XMLHttpRequest). */
+export const getCsrfToken = () => csrfToken;
 
 type Options = { method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE'; body?: unknown; signal?: AbortSignal };
 

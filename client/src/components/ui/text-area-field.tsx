@@ -1,0 +1,27 @@
+import { useId, type Ref, type TextareaHTMLAttributes } from 'react';
+
+type Props = TextareaHTMLAttributes<HTMLTextAreaElement> & { label: string; error?: string; hint?: string; ref?: Ref<HTMLTextAreaElement> };
+
+export function TextAreaField({ label, error, hint, id, ref, className = '', rows = 4, ...rest }: Props) {
+  const autoId = useId();
+  const areaId = id ?? autoId;
+  const describedBy = [error ? `${areaId}-error` : '', hint ? `${areaId}-hint` : ''].filter(Boolean).join(' ') || undefined;
+  return (
+    <div className={`flex flex-col gap-1 ${className}`}>
+      <label htmlFor={areaId} className="text-sm font-semibold">
+        {label}
+      </label>
+      <textarea
+        {...rest}
+        ref={ref}
+        id={areaId}
+        rows={rows}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy}
+        className={`border bg-white px-3 py-2 text-base outline-none focus:border-ink ${error ? 'border-danger' : 'border-rule'}`}
+      />
+      {hint ? <p id={`${areaId}-hint`} className="text-sm text-graphite">{hint}</p> : null}
+      {error ? <p id={`${areaId}-error`} role="alert" className="text-sm text-danger">{error}</p> : null}
+    </div>
+  );
+}

@@ -1,0 +1,7 @@
+import type { Credit, OwnerBuild } from '@shared/schemas/build';
+import { api } from '@client/lib/api';
+import { useBuildMutation } from './build-mutation';
+
+export const saveCredits = (id: number, credits: Credit[]) => api<{ build: OwnerBuild }>(`/api/builds/${id}/credits`, { method: 'PUT', body: { credits } });
+
+export const useSaveCredits = (id: number) => useBuildMutation(id, (credits: Credit[]) => saveCredits(id, credits));

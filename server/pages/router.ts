@@ -1,0 +1,4 @@
+import { Router } from 'express';
+
+/** Server-rendered public pages (/c/<code>). */
+export const pagesRouter = Router();

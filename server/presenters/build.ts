@@ -1,0 +1,80 @@
+import type { BuildSummary, DynoRun as DynoRunBody, FigureChange as FigureChangeBody, OwnerBuild, WeighIn as WeighInBody } from '@shared/schemas/build';
+import type { SectionKind, Sections } from '@shared/schemas/build-sections';
+import type { FigureInput } from '@shared/schemas/figure';
+import type { Build } from '../models/build';
+import type { DynoRun } from '../models/dyno-run';
+import type { WeighIn } from '../models/weigh-in';
+import type { FigureChange } from '../models/figure-change';
+import type { Actor } from '../policies/actor';
+import { buildAbilities } from '../policies/build';
+import { config } from '../config';
+import { presentPhoto } from './photo';
+
+export const publicBuildUrl = (code: string) => `${config.publicBaseUrl}/c/${code}`;
+
+export function sectionsOf(build: Build): Sections {
+  return Object.fromEntries((build.sections ?? []).map((s) => [s.kind, s.data])) as Sections;
+}
+
+export const presentDynoRun = (run: DynoRun): DynoRunBody => ({ ...run.data, id: run.id, createdAt: run.createdAt.toISOString() });
+export const presentWeighIn = (w: WeighIn): WeighInBody => ({ ...w.data, id: w.id, createdAt: w.createdAt.toISOString() });
+export const presentFigureChange = (c: FigureChange): FigureChangeBody => ({ id: c.id, path: c.path, before: c.before, after: c.after, changedAt: c.createdAt.toISOString() });
+
+/** The owner's whole build for the editor, private fields included (the owner's own data). */
+export function presentOwnerBuild(build: Build, actor: Actor): OwnerBuild {
+  return {
+    id: build.id,
+    code: build.code,
+    published: build.published,
+    overview: {
+      title: build.title,
+      modelYear: build.modelYear,
+      bodyOrigin: build.bodyOrigin ?? '',
+      style: build.style as OwnerBuild['overview']['style'],
+      story: build.story,
+      weight: build.weight as OwnerBuild['overview']['weight'],
+    },
+    private: { vin: build.vin ?? '', plate: build.plate ?? '', ownerPhone: build.ownerPhone ?? '', ownerAddress: build.ownerAddress ?? '' },
+    sections: sectionsOf(build),
+    sectionsUpdatedAt: Object.fromEntries((build.sections ?? []).map((s) => [s.kind, s.updatedAt.toISOString()])) as Partial<Record<SectionKind, string>>,
+    credits: build.credits,
+    photos: (build.photos ?? []).map(presentPhoto),
+    dynoRuns: (build.dynoRuns ?? []).map(presentDynoRun),
+    weighIns: (build.weighIns ?? []).map(presentWeighIn),
+    history: (build.figureChanges ?? []).map(presentFigureChange),
+    publicUrl: publicBuildUrl(build.code),
+    updatedAt: build.updatedAt.toISOString(),
+    abilities: buildAbilities(actor, build),
+  };
+}
+
+/** The headline figures: flywheel power when given (what builders quote), else wheel power; weight; displacement. */
+export function keyFigures(build: Build): BuildSummary['keyFigures'] {
+  const engine = sectionsOf(build).engine;
+  const power: (FigureInput & { at: 'wheel' | 'flywheel' }) | undefined = engine?.flywheelPower
+    ? { ...engine.flywheelPower, at: 'flywheel' }
+    : engine?.wheelPower
+      ? { ...engine.wheelPower, at: 'wheel' }
+      : undefined;
+  return {
+    ...(power ? { power } : {}),
+    ...(build.weight ? { weight: build.weight } : {}),
+    ...(engine?.displacement ? { displacement: engine.displacement } : {}),
+  };
+}
+
+export function presentBuildSummary(build: Build): BuildSummary {
+  const photos = [...(build.photos ?? [])].sort((a, b) => a.position - b.position);
+  const cover = photos.find((p) => p.isCover) ?? photos[0];
+  return {
+    id: build.id,
+    code: build.code,
+    title: build.title,
+    modelYear: build.modelYear,
+    style: build.style,
+    published: build.published,
+    cover: cover ? presentPhoto(cover) : null,
+    keyFigures: keyFigures(build),
+    updatedAt: build.updatedAt.toISOString(),
+  };
+}

@@ -1,0 +1,128 @@
+import type { Transaction } from 'sequelize';
+import type { BuildCreateInput, BuildPrivate, BuildUpdateInput, Credit } from '@shared/schemas/build';
+import { SECTION_SCHEMAS, type SectionKind } from '@shared/schemas/build-sections';
+import { sequelize } from '../db/sequelize';
+import { Build } from '../models/build';
+import { BuildSection } from '../models/build-section';
+import { Photo } from '../models/photo';
+import { DynoRun } from '../models/dyno-run';
+import { WeighIn } from '../models/weigh-in';
+import { FigureChange } from '../models/figure-change';
+import { RetiredBuildCode } from '../models/retired-build-code';
+import type { User } from '../models/user';
+import { NotFoundError } from '../errors';
+import { newBuildCode } from './build-codes';
+import { recordFigureChanges } from './figure-history';
+
+/** Everything the owner's editor and the public presenters read, in display order. */
+export const FULL_BUILD_INCLUDE = [
+  { model: BuildSection, as: 'sections' },
+  { model: Photo, as: 'photos' },
+  { model: DynoRun, as: 'dynoRuns' },
+  { model: WeighIn, as: 'weighIns' },
+  { model: FigureChange, as: 'figureChanges' },
+];
+
+export async function findBuild(id: number, transaction?: Transaction): Promise<Build> {
+  const build = await Build.findByPk(id, { transaction });
+  if (!build) throw new NotFoundError('No such build.');
+  return build;
+}
+
+/** The build with its sections, photos, dyno runs, weigh-ins and figure history. */
+export async function loadFullBuild(where: { id: number } | { code: string }, transaction?: Transaction): Promise<Build | null> {
+  const build = await Build.findOne({ where, include: FULL_BUILD_INCLUDE, transaction });
+  if (!build) return null;
+  build.photos?.sort((a, b) => a.position - b.position || a.id - b.id);
+  build.dynoRuns?.sort((a, b) => b.date.localeCompare(a.date) || b.id - a.id);
+  build.weighIns?.sort((a, b) => b.date.localeCompare(a.date) || b.id - a.id);
+  build.figureChanges?.sort((a, b) => b.createdAt.getTime() - a.createdAt.getTime() || b.id - a.id);
+  return build;
+}
+
+export async function loadFullBuildOrThrow(id: number, transaction?: Transaction): Promise<Build> {
+  const build = await loadFullBuild({ id }, transaction);
+  if (!build) throw new NotFoundError('No such build.');
+  return build;
+}
+
+export const listBuildsOf = (owner: User) =>
+  Build.findAll({
+    where: { ownerId: owner.id },
+    include: [{ model: BuildSection, as: 'sections' }, { model: Photo, as: 'photos' }],
+    order: [['updatedAt', 'DESC'], ['id', 'DESC']],
+  });
+
+export async function createBuild(owner: User, input: BuildCreateInput): Promise<Build> {
+  return sequelize.transaction(async (transaction) => {
+    const code = await newBuildCode(transaction);
+    return Build.create(
+      {
+        ownerId: owner.id,
+        code,
+        title: input.title,
+        modelYear: input.modelYear ?? null,
+        bodyOrigin: input.bodyOrigin || null,
+        style: input.style ?? null,
+        weight: null,
+        vin: null,
+        plate: null,
+        ownerPhone: null,
+        ownerAddress: null,
+      },
+      { transaction },
+    );
+  });
+}
+
+export async function updateOverview(build: Build, input: BuildUpdateInput): Promise<void> {
+  await sequelize.transaction(async (transaction) => {
+    if (input.weight !== undefined) await recordFigureChanges(build.id, 'overview', { weight: build.weight }, { weight: input.weight }, transaction);
+    await build.update(
+      {
+        ...(input.title !== undefined ? { title: input.title } : {}),
+        ...(input.modelYear !== undefined ? { modelYear: input.modelYear } : {}),
+        ...(input.bodyOrigin !== undefined ? { bodyOrigin: input.bodyOrigin || null } : {}),
+        ...(input.style !== undefined ? { style: input.style } : {}),
+        ...(input.story !== undefined ? { story: input.story } : {}),
+        ...(input.weight !== undefined ? { weight: input.weight } : {}),
+      },
+      { transaction },
+    );
+  });
+}
+
+/** Saves one section whole (replacing its previous content), keeping the history of its figures. */
+export async function saveSection(build: Build, kind: SectionKind, data: unknown): Promise<void> {
+  const parsed = SECTION_SCHEMAS[kind].parse(data) as Record<string, unknown>;
+  await sequelize.transaction(async (transaction) => {
+    const existing = await BuildSection.findOne({ where: { buildId: build.id, kind }, lock: transaction.LOCK.UPDATE, transaction });
+    await recordFigureChanges(build.id, kind, existing?.data ?? {}, parsed, transaction);
+    if (existing) await existing.update({ data: parsed }, { transaction });
+    else await BuildSection.create({ buildId: build.id, kind, data: parsed }, { transaction });
+    build.changed('updatedAt', true);
+    await build.save({ transaction });
+  });
+}
+
+export async function savePrivate(build: Build, input: BuildPrivate): Promise<void> {
+  await build.update({ vin: input.vin || null, plate: input.plate || null, ownerPhone: input.ownerPhone || null, ownerAddress: input.ownerAddress || null });
+}
+
+export async function saveCredits(build: Build, credits: Credit[]): Promise<void> {
+  await build.update({ credits });
+}
+
+export async function setPublished(build: Build, published: boolean): Promise<void> {
+  await build.update({ published });
+}
+
+/** Deletes the build and everything under it; its code is retired so an old card never opens another car. */
+export async function deleteBuild(build: Build): Promise<{ photoKeys: string[] }> {
+  return sequelize.transaction(async (transaction) => {
+    const photos = await Photo.findAll({ where: { buildId: build.id }, transaction });
+    await RetiredBuildCode.create({ code: build.code }, { transaction });
+    await build.destroy({ transaction });
+    return { photoKeys: photos.map((p) => p.storageKey) };
+  });
+}

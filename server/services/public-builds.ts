@@ -1,0 +1,40 @@
+import { QueryTypes } from 'sequelize';
+import type { PublicBuild } from '@shared/schemas/build';
+import { BuildCodeSchema } from '@shared/schemas/build';
+import { sequelize } from '../db/sequelize';
+import { User } from '../models/user';
+import { canViewPublic } from '../policies/build';
+import { presentPublicBuild } from '../presenters/public-build';
+import { loadFullBuild } from './builds';
+
+/**
+ * A fingerprint of everything the public page shows, in one cheap query: the newest change and
+ * the row count of the build, its owner and each child table (a deleted photo changes the count).
+ * Null when the code is unknown or the build is not published: callers answer both the same.
+ */
+export async function publicVersion(code: string): Promise<string | null> {
+  if (!BuildCodeSchema.safeParse(code).success) return null;
+  const rows = await sequelize.query<{ published: boolean; version: string }>(
+    `SELECT b.published,
+            concat_ws(':', extract(epoch FROM greatest(b.updated_at, u.updated_at, s.at, p.at, d.at, w.at))::text, s.n, p.n, d.n, w.n) AS version
+       FROM builds b
+       JOIN users u ON u.id = b.owner_id
+       CROSS JOIN LATERAL (SELECT max(updated_at) AS at, count(*) AS n FROM build_sections WHERE build_id = b.id) s
+       CROSS JOIN LATERAL (SELECT max(updated_at) AS at, count(*) AS n FROM photos WHERE build_id = b.id) p
+       CROSS JOIN LATERAL (SELECT max(updated_at) AS at, count(*) AS n FROM dyno_runs WHERE build_id = b.id) d
+       CROSS JOIN LATERAL (SELECT max(updated_at) AS at, count(*) AS n FROM weigh_ins WHERE build_id = b.id) w
+      WHERE b.code = :code`,
+    { replacements: { code }, type: QueryTypes.SELECT },
+  );
+  const row = rows[0];
+  return row && canViewPublic({ ownerId: 0, published: row.published }) ? row.version : null;
+}
+
+/** The public face of a published build, or null for an unknown or unpublished code. */
+export async function loadPublicBuild(code: string): Promise<PublicBuild | null> {
+  if (!BuildCodeSchema.safeParse(code).success) return null;
+  const build = await loadFullBuild({ code });
+  if (!build || !canViewPublic(build)) return null;
+  const owner = await User.findByPk(build.ownerId, { attributes: ['id', 'name'] });
+  return presentPublicBuild(build, { name: owner?.name ?? '' });
+}

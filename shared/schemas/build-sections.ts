@@ -1,0 +1,229 @@
+import { z } from 'zod';
+import { tryParseTyreCode } from '../calc/tyres';
+import { boundedNumber, figureSchema, shortText } from './figure';
+
+/** Who made a part or a section: the owner, a shop or person, a donor vehicle, or bought new. */
+export const MADE_BY_KINDS = ['owner', 'shop', 'donor', 'new'] as const;
+export const MadeBySchema = z
+  .object({ kind: z.enum(MADE_BY_KINDS, { error: 'Choose who made it.' }), name: shortText('Made by', 120).optional() })
+  .superRefine((m, ctx) => {
+    if ((m.kind === 'shop' || m.kind === 'donor') && !m.name) ctx.addIssue({ code: 'custom', path: ['name'], message: m.kind === 'shop' ? 'Name the shop or person.' : 'Describe the donor vehicle.' });
+  });
+
+const common = { madeBy: MadeBySchema.optional(), note: shortText('Why this choice', 2000).optional() };
+
+// Engine
+export const ENGINE_LAYOUTS = ['inline', 'V', 'flat', 'rotary', 'electric'] as const;
+export const ASPIRATIONS = ['natural', 'supercharged', 'turbocharged'] as const;
+const lengthMm = (label: string, min: number, max: number) => figureSchema('length', { label, min, max, unit: 'mm' });
+const rpm = (label: string) => boundedNumber(label, 300, 25_000, { int: true });
+const power = (label: string) => figureSchema('power', { label, min: 1, max: 3000, unit: 'kW' });
+const torque = (label: string) => figureSchema('torque', { label, min: 1, max: 6000, unit: 'Nm' });
+
+export const EngineSectionSchema = z.object({
+  ...common,
+  layout: z.enum(ENGINE_LAYOUTS, { error: 'Choose a layout.' }).optional(),
+  cylinders: boundedNumber('Cylinders', 1, 16, { int: true }).optional(),
+  bore: lengthMm('Bore', 20, 200).optional(),
+  stroke: lengthMm('Stroke', 20, 200).optional(),
+  displacement: figureSchema('volume', { label: 'Displacement', min: 50, max: 20_000, unit: 'cm3' }).optional(),
+  blockMaterial: shortText('Block material', 80).optional(),
+  headMaterial: shortText('Head material', 80).optional(),
+  aspiration: z.enum(ASPIRATIONS, { error: 'Choose natural, supercharged or turbocharged.' }).optional(),
+  superchargerType: shortText('Supercharger type', 120).optional(),
+  pulley: shortText('Pulley', 80).optional(),
+  turboCount: boundedNumber('Turbo count', 1, 4, { int: true }).optional(),
+  boost: figureSchema('pressure', { label: 'Boost', min: 0, max: 6, unit: 'bar' }).optional(),
+  fuel: shortText('Fuel', 80).optional(),
+  induction: shortText('Induction', 200).optional(),
+  ignition: shortText('Ignition', 200).optional(),
+  cooling: shortText('Cooling', 200).optional(),
+  exhaust: shortText('Exhaust', 200).optional(),
+  flywheelPower: power('Flywheel power').optional(),
+  flywheelPowerRpm: rpm('Flywheel power rpm').optional(),
+  wheelPower: power('Wheel power').optional(),
+  wheelPowerRpm: rpm('Wheel power rpm').optional(),
+  flywheelTorque: torque('Flywheel torque').optional(),
+  flywheelTorqueRpm: rpm('Flywheel torque rpm').optional(),
+  wheelTorque: torque('Wheel torque').optional(),
+  wheelTorqueRpm: rpm('Wheel torque rpm').optional(),
+  revLimit: boundedNumber('Rev limit', 1000, 25_000, { int: true }).optional(),
+});
+
+// Drivetrain
+export const TRANSMISSION_TYPES = ['manual', 'sequential', 'dog-engagement', 'automatic', 'cvt', 'direct-drive'] as const;
+export const LIMITED_SLIP_TYPES = ['open', 'clutch-type', 'gear-type', 'locker', 'spool', 'electronic'] as const;
+export const MAX_GEARS = 10;
+export const DrivetrainSectionSchema = z.object({
+  ...common,
+  transmissionType: z.enum(TRANSMISSION_TYPES, { error: 'Choose a transmission type.' }).optional(),
+  transmission: shortText('Transmission', 200).optional(),
+  gears: z.array(boundedNumber('Gear ratio', 0.3, 8), { error: 'Gear ratios must be a list of numbers.' }).max(MAX_GEARS, { error: `At most ${MAX_GEARS} forward gears.` }).optional(),
+  clutch: shortText('Clutch', 200).optional(),
+  driveshaft: shortText('Driveshaft', 200).optional(),
+  axle: shortText('Rear axle', 200).optional(),
+  finalDrive: boundedNumber('Final drive ratio', 1.5, 8).optional(),
+  axleSplines: boundedNumber('Axle splines', 10, 50, { int: true }).optional(),
+  limitedSlip: z.enum(LIMITED_SLIP_TYPES, { error: 'Choose a differential type.' }).optional(),
+});
+
+// Chassis and suspension
+export const FRAME_KINDS = ['factory', 'modified', 'custom'] as const;
+export const SUSPENSION_TYPES = ['double-wishbone', 'strut', 'beam-axle', 'solid-axle', 'four-link', 'triangulated-four-link', 'ladder-bar', 'leaf', 'independent-rear', 'other'] as const;
+export const SPRING_TYPES = ['coil-over', 'coil', 'leaf', 'air', 'torsion', 'transverse-leaf'] as const;
+export const TubeSchema = z
+  .object({
+    use: shortText('Tube use', 80),
+    shape: z.enum(['round', 'rectangular'], { error: 'Choose round or rectangular.' }),
+    material: shortText('Tube material', 80).optional(),
+    outside: lengthMm('Outside diameter or width', 5, 300),
+    height: lengthMm('Height', 5, 300).optional(),
+    wall: lengthMm('Wall', 0.3, 20),
+  })
+  .superRefine((t, ctx) => {
+    if (t.shape === 'rectangular' && !t.height) ctx.addIssue({ code: 'custom', path: ['height'], message: 'A rectangular tube needs a height.' });
+  });
+
+const LinkPointSchema = z.object({ x: boundedNumber('Link point x', -3000, 3000), y: boundedNumber('Link point y', 0, 1500) });
+/** Rear four-link side view, in mm: x forward from the axle centre, y up from the ground. */
+export const FourLinkSchema = z.object({
+  upperFront: LinkPointSchema,
+  upperRear: LinkPointSchema,
+  lowerFront: LinkPointSchema,
+  lowerRear: LinkPointSchema,
+  cgHeightMm: boundedNumber('Centre of gravity height', 100, 1500),
+});
+
+export const SuspensionEndSchema = z.object({
+  type: z.enum(SUSPENSION_TYPES, { error: 'Choose a suspension type.' }).optional(),
+  springType: z.enum(SPRING_TYPES, { error: 'Choose a spring type.' }).optional(),
+  springRate: figureSchema('springRate', { label: 'Spring rate', min: 1, max: 1000, unit: 'N/mm' }).optional(),
+  /** Spring travel / wheel travel (see shared/calc/suspension.ts). */
+  motionRatio: boundedNumber('Motion ratio', 0.1, 2).optional(),
+  springAngleDeg: boundedNumber('Spring angle', 0, 60).optional(),
+  bellCrankSpringArmMm: boundedNumber('Bell-crank spring arm', 10, 500).optional(),
+  bellCrankPushrodArmMm: boundedNumber('Bell-crank pushrod arm', 10, 500).optional(),
+  cornerSprungMass: figureSchema('mass', { label: 'Corner sprung mass', min: 20, max: 2000, unit: 'kg' }).optional(),
+  dampers: shortText('Dampers', 200).optional(),
+  antiRollBar: shortText('Anti-roll bar', 200).optional(),
+  description: shortText('Description', 300).optional(),
+  fourLink: FourLinkSchema.optional(),
+});
+
+export const ChassisSectionSchema = z.object({
+  ...common,
+  frame: z.enum(FRAME_KINDS, { error: 'Choose factory, modified or custom.' }).optional(),
+  frameDescription: shortText('Frame', 300).optional(),
+  tubes: z.array(TubeSchema).max(12, { error: 'At most 12 tube lines.' }).optional(),
+  wheelbase: lengthMm('Wheelbase', 1500, 5000).optional(),
+  trackFront: lengthMm('Front track', 900, 2500).optional(),
+  trackRear: lengthMm('Rear track', 900, 2500).optional(),
+  front: SuspensionEndSchema.optional(),
+  rear: SuspensionEndSchema.optional(),
+});
+
+// Brakes
+export const BRAKE_TYPES = ['disc', 'drum', 'none'] as const;
+export const BrakeEndSchema = z.object({
+  type: z.enum(BRAKE_TYPES, { error: 'Choose disc, drum or none.' }).optional(),
+  rotorDiameter: lengthMm('Rotor or drum diameter', 150, 500).optional(),
+  rotorThickness: lengthMm('Rotor thickness', 5, 60).optional(),
+  caliperPistons: boundedNumber('Caliper pistons', 1, 12, { int: true }).optional(),
+  caliper: shortText('Caliper', 200).optional(),
+  pad: shortText('Pads', 120).optional(),
+});
+export const BrakesSectionSchema = z.object({
+  ...common,
+  front: BrakeEndSchema.optional(),
+  rear: BrakeEndSchema.optional(),
+  masterCylinder: shortText('Master cylinder', 200).optional(),
+  booster: shortText('Booster', 200).optional(),
+  parkingBrake: shortText('Parking brake', 200).optional(),
+});
+
+// Wheels and tyres (staggered front and rear is normal). Rim sizes are quoted in inches by the trade.
+export const TyreCodeSchema = z
+  .string()
+  .trim()
+  .max(40)
+  .superRefine((code, ctx) => {
+    const parsed = tryParseTyreCode(code);
+    if (!parsed.ok) ctx.addIssue({ code: 'custom', message: `Tyre size "${code}" does not read as a size code: ${parsed.error.reason}.` });
+  });
+export const WheelEndSchema = z.object({
+  rimDiameterIn: boundedNumber('Rim diameter', 10, 30).optional(),
+  rimWidthIn: boundedNumber('Rim width', 3, 20).optional(),
+  offset: lengthMm('Offset', -150, 150).optional(),
+  backspacing: lengthMm('Backspacing', 0, 400).optional(),
+  construction: shortText('Wheel construction', 120).optional(),
+  tyreSize: TyreCodeSchema.optional(),
+  tyre: shortText('Tyre', 120).optional(),
+  pressure: figureSchema('pressure', { label: 'Tyre pressure', min: 0.3, max: 8, unit: 'bar' }).optional(),
+});
+export const WheelsSectionSchema = z.object({
+  ...common,
+  front: WheelEndSchema.optional(),
+  rear: WheelEndSchema.optional(),
+  /** A car built with the rear higher or bigger on purpose: the stagger check does not apply. */
+  raked: z.boolean().optional(),
+});
+
+// Body and interior
+export const BodySectionSchema = z.object({
+  ...common,
+  paint: shortText('Paint', 300).optional(),
+  bodyMods: shortText('Body modifications', 600).optional(),
+  glass: shortText('Glass', 200).optional(),
+  seats: shortText('Seats', 200).optional(),
+  gauges: shortText('Gauges', 200).optional(),
+  safety: shortText('Safety equipment', 400).optional(),
+});
+
+// Free lines for what the form lacks.
+export const ExtraSectionSchema = z.object({
+  ...common,
+  lines: z
+    .array(z.object({ label: shortText('Label', 60).min(1, { error: 'A line needs a label.' }), value: shortText('Value', 300).min(1, { error: 'A line needs a value.' }) }))
+    .max(30, { error: 'At most 30 extra lines.' })
+    .optional(),
+});
+
+export const SECTION_KINDS = ['engine', 'drivetrain', 'chassis', 'brakes', 'wheels', 'body', 'extra'] as const;
+export type SectionKind = (typeof SECTION_KINDS)[number];
+export const SECTION_LABELS: Record<SectionKind, string> = {
+  engine: 'Engine',
+  drivetrain: 'Drivetrain',
+  chassis: 'Chassis and suspension',
+  brakes: 'Brakes',
+  wheels: 'Wheels and tyres',
+  body: 'Body and interior',
+  extra: 'Extra lines',
+};
+
+export const SECTION_SCHEMAS = {
+  engine: EngineSectionSchema,
+  drivetrain: DrivetrainSectionSchema,
+  chassis: ChassisSectionSchema,
+  brakes: BrakesSectionSchema,
+  wheels: WheelsSectionSchema,
+  body: BodySectionSchema,
+  extra: ExtraSectionSchema,
+} as const satisfies Record<SectionKind, z.ZodType>;
+
+export type EngineSection = z.infer<typeof EngineSectionSchema>;
+export type DrivetrainSection = z.infer<typeof DrivetrainSectionSchema>;
+export type ChassisSection = z.infer<typeof ChassisSectionSchema>;
+export type BrakesSection = z.infer<typeof BrakesSectionSchema>;
+export type WheelsSection = z.infer<typeof WheelsSectionSchema>;
+export type BodySection = z.infer<typeof BodySectionSchema>;
+export type ExtraSection = z.infer<typeof ExtraSectionSchema>;
+export type Sections = {
+  engine?: EngineSection;
+  drivetrain?: DrivetrainSection;
+  chassis?: ChassisSection;
+  brakes?: BrakesSection;
+  wheels?: WheelsSection;
+  body?: BodySection;
+  extra?: ExtraSection;
+};
+export const SectionKindParamSchema = z.object({ kind: z.enum(SECTION_KINDS, { error: `Section must be one of ${SECTION_KINDS.join(', ')}.` }) });

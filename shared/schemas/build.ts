@@ -1,0 +1,203 @@
+import { z } from 'zod';
+import { boundedNumber, figureSchema, shortText, type FigureInput } from './figure';
+import type { Sections, SectionKind } from './build-sections';
+import { parseDynoCsv } from './dyno-csv';
+
+export const BUILD_STYLES = ['hot-rod', 'street-rod', 'custom', 'restomod', 'pro-touring', 'muscle', 'gasser', 'rat-rod', 'lowrider', 'truck', 'drag', 'other'] as const;
+export const BUILD_STYLE_LABELS: Record<(typeof BUILD_STYLES)[number], string> = {
+  'hot-rod': 'Hot rod',
+  'street-rod': 'Street rod',
+  custom: 'Custom',
+  restomod: 'Restomod',
+  'pro-touring': 'Pro touring',
+  muscle: 'Muscle',
+  gasser: 'Gasser',
+  'rat-rod': 'Rat rod',
+  lowrider: 'Lowrider',
+  truck: 'Truck',
+  drag: 'Drag car',
+  other: 'Other',
+};
+
+/** The short public code in /c/<code>: no 0/O, 1/I/L, so it reads aloud and types back. */
+export const BUILD_CODE_ALPHABET = '23456789ABCDEFGHJKMNPQRSTUVWXYZ';
+export const BUILD_CODE_LENGTH = 7;
+export const BuildCodeSchema = z.string().regex(new RegExp(`^[${BUILD_CODE_ALPHABET}]{6,8}$`), { error: 'Not a build code.' });
+
+export const TITLE_MAX = 120;
+export const STORY_MAX = 10_000;
+
+const currentYear = new Date().getFullYear();
+export const BuildOverviewSchema = z.object({
+  title: z.string({ error: 'Title is required.' }).trim().min(1, { error: 'Give the build a title.' }).max(TITLE_MAX, { error: `Title must be at most ${TITLE_MAX} characters.` }),
+  modelYear: boundedNumber('Model year', 1885, currentYear + 2, { int: true }).nullable().optional(),
+  bodyOrigin: shortText('Body origin', 200).optional(),
+  style: z.enum(BUILD_STYLES, { error: 'Choose a style.' }).nullable().optional(),
+  story: z.string().max(STORY_MAX, { error: `The story must be at most ${STORY_MAX} characters.` }).optional(),
+  weight: figureSchema('mass', { label: 'Weight', min: 100, max: 10_000, unit: 'kg' }).nullable().optional(),
+});
+export const BuildCreateSchema = BuildOverviewSchema.pick({ title: true, modelYear: true, bodyOrigin: true, style: true });
+export type BuildCreateInput = z.infer<typeof BuildCreateSchema>;
+export const BuildUpdateSchema = BuildOverviewSchema.partial();
+export type BuildUpdateInput = z.infer<typeof BuildUpdateSchema>;
+
+/** Never on a public page, public API or card: the owner and (with events) the show's organisers only. */
+export const BuildPrivateSchema = z.object({
+  vin: shortText('VIN or chassis number', 40).optional(),
+  plate: shortText('Plate', 20).optional(),
+  ownerPhone: shortText('Phone', 40).optional(),
+  ownerAddress: shortText('Address', 400).optional(),
+});
+export type BuildPrivate = z.infer<typeof BuildPrivateSchema>;
+export const PRIVATE_FIELD_NAMES = ['vin', 'plate', 'ownerPhone', 'ownerAddress'] as const;
+
+export const CREDIT_ROLES = ['paint', 'body', 'chassis', 'engine build', 'upholstery', 'wiring', 'fabrication', 'machining', 'other'] as const;
+export const CreditSchema = z.object({
+  role: shortText('Role', 60).min(1, { error: 'Say what they did.' }),
+  name: shortText('Name', 120).min(1, { error: 'Say who did it.' }),
+});
+export const CreditsSchema = z.object({ credits: z.array(CreditSchema).max(40, { error: 'At most 40 credits.' }) });
+export type Credit = z.infer<typeof CreditSchema>;
+
+export const PublishSchema = z.object({ published: z.boolean({ error: 'Published must be true or false.' }) });
+
+// Photos
+export const PHOTO_WIDTHS = [480, 960, 1600] as const;
+export const PHOTO_MAX_BYTES = 15 * 1024 * 1024;
+export const PHOTO_MAX_FILES = 12;
+export const PhotoSchema = z.object({
+  id: z.number().int(),
+  caption: z.string(),
+  position: z.number().int(),
+  isCover: z.boolean(),
+  width: z.number().int(),
+  height: z.number().int(),
+  /** One URL per stored width and format, smallest first. */
+  sources: z.array(z.object({ width: z.number().int(), height: z.number().int(), webp: z.string(), jpeg: z.string() })),
+});
+export type Photo = z.infer<typeof PhotoSchema>;
+export const PhotoUpdateSchema = z.object({ caption: shortText('Caption', 300).optional(), isCover: z.literal(true, { error: 'Set isCover to true to make this the cover.' }).optional() });
+export const PhotoOrderSchema = z.object({ photoIds: z.array(z.number().int().positive()).min(1, { error: 'Send the photo ids in their new order.' }) });
+
+// Dyno runs
+export const CORRECTION_STANDARDS = ['SAE J1349', 'DIN 70020', 'SAE J607', 'uncorrected'] as const;
+export const DynoPointSchema = z.object({
+  rpm: boundedNumber('Curve rpm', 300, 25_000),
+  power: boundedNumber('Curve power', 0, 5000),
+  torque: boundedNumber('Curve torque', 0, 8000),
+});
+export const DynoRunCreateSchema = z
+  .object({
+    date: z.iso.date({ error: 'Use a date like 2026-05-30.' }),
+    facility: shortText('Facility', 120).optional(),
+    standard: z.enum(CORRECTION_STANDARDS, { error: `Correction standard must be one of ${CORRECTION_STANDARDS.join(', ')}.` }),
+    measuredAt: z.enum(['wheel', 'flywheel'], { error: 'Say whether the dyno measured at the wheels or the flywheel.' }),
+    powerUnit: z.enum(['hp', 'PS', 'kW'], { error: 'Power unit must be hp, PS or kW.' }),
+    torqueUnit: z.enum(['lbft', 'Nm'], { error: 'Torque unit must be lbft or Nm.' }),
+    peakPower: boundedNumber('Peak power', 1, 5000),
+    peakPowerRpm: boundedNumber('Peak power rpm', 300, 25_000, { int: true }),
+    peakTorque: boundedNumber('Peak torque', 1, 8000),
+    peakTorqueRpm: boundedNumber('Peak torque rpm', 300, 25_000, { int: true }),
+    curve: z.array(DynoPointSchema).max(400, { error: 'At most 400 curve points.' }).default([]),
+    /** The curve pasted as CSV, instead of `curve`. */
+    curveCsv: z.string().max(40_000, { error: 'The pasted curve is too long.' }).optional(),
+    sheetPhotoId: z.number().int().positive().optional(),
+    note: shortText('Note', 500).optional(),
+  })
+  .transform(({ curveCsv, ...run }, ctx) => {
+    if (curveCsv === undefined || curveCsv.trim() === '') return run;
+    const parsed = parseDynoCsv(curveCsv);
+    if (!parsed.ok) {
+      ctx.addIssue({ code: 'custom', path: ['curveCsv'], message: parsed.message });
+      return z.NEVER;
+    }
+    const points = DynoPointSchema.array().max(400).safeParse(parsed.points);
+    if (!points.success) {
+      ctx.addIssue({ code: 'custom', path: ['curveCsv'], message: points.error.issues[0]!.message });
+      return z.NEVER;
+    }
+    return { ...run, curve: points.data };
+  })
+  .superRefine((run, ctx) => {
+    for (let i = 1; i < run.curve.length; i++) {
+      if (run.curve[i]!.rpm <= run.curve[i - 1]!.rpm) {
+        ctx.addIssue({ code: 'custom', path: ['curve', i, 'rpm'], message: 'Curve rpm must rise from one row to the next.' });
+        break;
+      }
+    }
+  });
+export type DynoRunCreateInput = z.infer<typeof DynoRunCreateSchema>;
+export type DynoRun = DynoRunCreateInput & { id: number; createdAt: string };
+export type DynoRunFormInput = z.input<typeof DynoRunCreateSchema>;
+
+// Weigh-ins
+export const FUEL_LEVELS = ['empty', 'quarter', 'half', 'three-quarters', 'full'] as const;
+export const WeighInCreateSchema = z.object({
+  date: z.iso.date({ error: 'Use a date like 2026-05-30.' }),
+  unit: z.enum(['kg', 'lb'], { error: 'Unit must be kg or lb.' }),
+  leftFront: boundedNumber('Left front', 10, 5000),
+  rightFront: boundedNumber('Right front', 10, 5000),
+  leftRear: boundedNumber('Left rear', 10, 5000),
+  rightRear: boundedNumber('Right rear', 10, 5000),
+  withDriver: z.boolean({ error: 'Say whether the driver was in the car.' }),
+  fuelLevel: z.enum(FUEL_LEVELS, { error: 'Choose a fuel level.' }),
+  note: shortText('Note', 500).optional(),
+});
+export type WeighInCreateInput = z.infer<typeof WeighInCreateSchema>;
+export type WeighIn = WeighInCreateInput & { id: number; createdAt: string };
+
+/** "estimated 1,250 kg → measured 1,287 kg on …": a figure's earlier value, kept when it changes. */
+export type FigureChange = { id: number; path: string; before: FigureInput; after: FigureInput | null; changedAt: string };
+
+export type BuildOverview = z.infer<typeof BuildOverviewSchema>;
+
+/** The owner's whole build, as the editor loads it. */
+export type OwnerBuild = {
+  id: number;
+  code: string;
+  published: boolean;
+  overview: BuildOverview;
+  private: BuildPrivate;
+  sections: Sections;
+  sectionsUpdatedAt: Partial<Record<SectionKind, string>>;
+  credits: Credit[];
+  photos: Photo[];
+  dynoRuns: DynoRun[];
+  weighIns: WeighIn[];
+  history: FigureChange[];
+  publicUrl: string;
+  updatedAt: string;
+  abilities: { edit: boolean; delete: boolean; publish: boolean };
+};
+
+/** A row in "My builds". */
+export type BuildSummary = {
+  id: number;
+  code: string;
+  title: string;
+  modelYear: number | null;
+  style: string | null;
+  published: boolean;
+  cover: Photo | null;
+  keyFigures: { power?: FigureInput & { at: 'wheel' | 'flywheel' }; weight?: FigureInput; displacement?: FigureInput };
+  updatedAt: string;
+};
+
+/** What anyone may see: no private field, no owner e-mail, no ids that reveal more. */
+export type PublicBuild = {
+  code: string;
+  url: string;
+  title: string;
+  modelYear: number | null;
+  bodyOrigin: string | null;
+  style: string | null;
+  story: string;
+  ownerName: string;
+  weight: FigureInput | null;
+  sections: Sections;
+  credits: Credit[];
+  photos: Photo[];
+  dynoRuns: Omit<DynoRun, 'sheetPhotoId' | 'createdAt' | 'id'>[];
+  weighIns: Omit<WeighIn, 'id' | 'createdAt'>[];
+  updatedAt: string;
+};

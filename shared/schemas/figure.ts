@@ -1,0 +1,53 @@
+import { z } from 'zod';
+import { UNITS, convert, type QuantityKind, type UnitOf } from '../calc/units';
+
+export const PROVENANCES = ['measured', 'estimated', 'target'] as const;
+export const ProvenanceSchema = z.enum(PROVENANCES, { error: 'Say whether the figure is measured, estimated or a target.' });
+
+const IsoDateSchema = z.iso.date({ error: 'Use a date like 2026-05-30.' });
+
+type Range<K extends QuantityKind> = { label: string; min: number; max: number; unit: UnitOf<K> };
+
+/**
+ * A build-sheet figure of one kind (length, mass, power, …): value, unit, provenance, and when
+ * measured, the date and an optional evidence photo. The range is checked in the range's own unit
+ * whatever unit the owner typed, so "a 200-inch rim" fails the same as "5 m".
+ */
+export function figureSchema<K extends QuantityKind>(kind: K, range: Range<K>) {
+  const units = Object.keys(UNITS[kind]) as [UnitOf<K>, ...UnitOf<K>[]];
+  return z
+    .object({
+      value: z.number({ error: `${range.label} must be a number.` }).finite({ error: `${range.label} must be a finite number.` }),
+      unit: z.enum(units, { error: `${range.label}: the unit must be one of ${units.join(', ')}.` }),
+      provenance: ProvenanceSchema,
+      measuredOn: IsoDateSchema.optional(),
+      evidencePhotoId: z.number().int().positive().optional(),
+    })
+    .superRefine((f, ctx) => {
+      const inRangeUnit = convert(kind, f.value, f.unit, range.unit);
+      if (inRangeUnit < range.min || inRangeUnit > range.max) {
+        ctx.addIssue({ code: 'custom', path: ['value'], message: `${range.label} must be between ${range.min} and ${range.max} ${range.unit}.` });
+      }
+      if (f.measuredOn && f.provenance !== 'measured') {
+        ctx.addIssue({ code: 'custom', path: ['measuredOn'], message: 'Only a measured figure has a measurement date.' });
+      }
+    });
+}
+
+export type FigureInput = {
+  value: number;
+  unit: string;
+  provenance: (typeof PROVENANCES)[number];
+  measuredOn?: string;
+  evidencePhotoId?: number;
+};
+
+/** A plain number with limits (ratios, counts, rpm), with an error that names the rule. */
+export const boundedNumber = (label: string, min: number, max: number, opts: { int?: boolean } = {}) => {
+  const base = z.number({ error: `${label} must be a number.` }).finite({ error: `${label} must be a finite number.` });
+  return (opts.int ? base.int({ error: `${label} must be a whole number.` }) : base)
+    .min(min, { error: `${label} must be at least ${min}.` })
+    .max(max, { error: `${label} must be at most ${max}.` });
+};
+
+export const shortText = (label: string, max = 200) => z.string().trim().max(max, { error: `${label} must be at most ${max} characters.` });
