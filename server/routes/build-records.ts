@@ -4,9 +4,10 @@ import { DynoRunCreateSchema, WeighInCreateSchema, type DynoRunCreateInput, type
 import { validate } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
-import { findBuild, loadFullBuildOrThrow } from '../services/builds';
+import { findBuild } from '../services/builds';
 import { addDynoRun, addWeighIn, applyDynoRun, applyWeighIn, deleteDynoRun, deleteWeighIn } from '../services/build-records';
-import { presentOwnerBuild } from '../presenters/build';
+import { respondWithBuild } from './respond-with-build';
+import type { Build } from '../models/build';
 
 /** Dyno runs and weigh-ins: dated measurements that can feed the build's figures. */
 export const buildRecordsRouter = Router();
@@ -23,42 +24,29 @@ async function editableBuild(req: Request, res: Response) {
   return build;
 }
 
-async function respondWithBuild(req: Request, res: Response, id: number, status = 200) {
-  res.status(status).json({ build: presentOwnerBuild(await loadFullBuildOrThrow(id), currentUser(req)) });
+
+// The same four routes for each kind of record: add, delete, and apply to the build's figures.
+const RECORD_KINDS = [
+  { path: 'dyno-runs', schema: DynoRunCreateSchema, add: (b: Build, body: unknown) => addDynoRun(b, body as DynoRunCreateInput), remove: deleteDynoRun, apply: applyDynoRun },
+  { path: 'weigh-ins', schema: WeighInCreateSchema, add: (b: Build, body: unknown) => addWeighIn(b, body as WeighInCreateInput), remove: deleteWeighIn, apply: applyWeighIn },
+];
+
+for (const kind of RECORD_KINDS) {
+  buildRecordsRouter.post(`/builds/:id/${kind.path}`, validate('params', BuildParams), validate('body', kind.schema), async (req, res) => {
+    const build = await editableBuild(req, res);
+    await kind.add(build, res.locals.body);
+    await respondWithBuild(req, res, build.id, 201);
+  });
+
+  buildRecordsRouter.delete(`/builds/:id/${kind.path}/:recordId`, validate('params', RecordParams), async (req, res) => {
+    const build = await editableBuild(req, res);
+    await kind.remove(build, (res.locals.params as Params).recordId);
+    await respondWithBuild(req, res, build.id);
+  });
+
+  buildRecordsRouter.post(`/builds/:id/${kind.path}/:recordId/apply`, validate('params', RecordParams), async (req, res) => {
+    const build = await editableBuild(req, res);
+    await kind.apply(build, (res.locals.params as Params).recordId);
+    await respondWithBuild(req, res, build.id);
+  });
 }
-
-buildRecordsRouter.post('/builds/:id/dyno-runs', validate('params', BuildParams), validate('body', DynoRunCreateSchema), async (req, res) => {
-  const build = await editableBuild(req, res);
-  await addDynoRun(build, res.locals.body as DynoRunCreateInput);
-  await respondWithBuild(req, res, build.id, 201);
-});
-
-buildRecordsRouter.delete('/builds/:id/dyno-runs/:recordId', validate('params', RecordParams), async (req, res) => {
-  const build = await editableBuild(req, res);
-  await deleteDynoRun(build, (res.locals.params as Params).recordId);
-  await respondWithBuild(req, res, build.id);
-});
-
-buildRecordsRouter.post('/builds/:id/dyno-runs/:recordId/apply', validate('params', RecordParams), async (req, res) => {
-  const build = await editableBuild(req, res);
-  await applyDynoRun(build, (res.locals.params as Params).recordId);
-  await respondWithBuild(req, res, build.id);
-});
-
-buildRecordsRouter.post('/builds/:id/weigh-ins', validate('params', BuildParams), validate('body', WeighInCreateSchema), async (req, res) => {
-  const build = await editableBuild(req, res);
-  await addWeighIn(build, res.locals.body as WeighInCreateInput);
-  await respondWithBuild(req, res, build.id, 201);
-});
-
-buildRecordsRouter.delete('/builds/:id/weigh-ins/:recordId', validate('params', RecordParams), async (req, res) => {
-  const build = await editableBuild(req, res);
-  await deleteWeighIn(build, (res.locals.params as Params).recordId);
-  await respondWithBuild(req, res, build.id);
-});
-
-buildRecordsRouter.post('/builds/:id/weigh-ins/:recordId/apply', validate('params', RecordParams), async (req, res) => {
-  const build = await editableBuild(req, res);
-  await applyWeighIn(build, (res.locals.params as Params).recordId);
-  await respondWithBuild(req, res, build.id);
-});

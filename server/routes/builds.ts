@@ -1,4 +1,4 @@
-import { Router, type Request, type Response } from 'express';
+import { Router, type Response } from 'express';
 import { BuildCreateSchema, BuildPrivateSchema, BuildUpdateSchema, CreditsSchema, PublishSchema, type BuildCreateInput, type BuildPrivate, type BuildUpdateInput } from '@shared/schemas/build';
 import { SECTION_SCHEMAS, SectionKindParamSchema, type SectionKind } from '@shared/schemas/build-sections';
 import { IdParamSchema } from '@shared/schemas/user';
@@ -6,9 +6,10 @@ import { fieldsFromIssues } from '@shared/errors';
 import { validate } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
-import { createBuild, deleteBuild, findBuild, listBuildsOf, loadFullBuildOrThrow, saveCredits, savePrivate, saveSection, setPublished, updateOverview } from '../services/builds';
+import { createBuild, deleteBuild, findBuild, listBuildsOf, saveCredits, savePrivate, saveSection, setPublished, updateOverview } from '../services/builds';
 import { deletePhotoFiles } from '../services/photos';
-import { presentBuildSummary, presentOwnerBuild } from '../presenters/build';
+import { presentBuildSummary } from '../presenters/build';
+import { respondWithBuild } from './respond-with-build';
 import { ValidationError } from '../errors';
 
 export const buildsRouter = Router();
@@ -16,11 +17,6 @@ buildsRouter.use('/builds', requireUser);
 
 const idOf = (res: Response) => (res.locals.params as { id: number }).id;
 
-/** Answers with the whole build as the editor shows it after any change. */
-async function respondWithBuild(req: Request, res: Response, id: number, status = 200) {
-  const build = await loadFullBuildOrThrow(id);
-  res.status(status).json({ build: presentOwnerBuild(build, currentUser(req)) });
-}
 
 buildsRouter.get('/builds', async (req, res) => {
   const builds = await listBuildsOf(currentUser(req));
