@@ -49,7 +49,7 @@ describe('a newcomer in the browser', () => {
     await page.getByLabel('Password').fill(password);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL(`${baseUrl}/account`);
-    expect(await page.getByText('Signed in as Kit Ellery.').count()).toBe(1);
+    await page.getByText('Signed in as Kit Ellery.').waitFor();
     await page.close();
   });
 
