@@ -5,17 +5,17 @@ import { DynoRun } from '../models/dyno-run';
 import { WeighIn } from '../models/weigh-in';
 import type { Build } from '../models/build';
 import { NotFoundError } from '../errors';
-import { saveSection, updateOverview } from './builds';
+import { saveSection, touchBuild, updateOverview } from './builds';
 
 export async function addDynoRun(build: Build, input: DynoRunCreateInput): Promise<DynoRun> {
   const run = await DynoRun.create({ buildId: build.id, date: input.date, data: input });
-  await build.update({ updatedAt: new Date() });
+  await touchBuild(build);
   return run;
 }
 
 export async function addWeighIn(build: Build, input: WeighInCreateInput): Promise<WeighIn> {
   const w = await WeighIn.create({ buildId: build.id, date: input.date, data: input });
-  await build.update({ updatedAt: new Date() });
+  await touchBuild(build);
   return w;
 }
 
@@ -27,10 +27,12 @@ async function findRecord<M extends typeof DynoRun | typeof WeighIn>(model: M, b
 
 export async function deleteDynoRun(build: Build, id: number): Promise<void> {
   await (await findRecord(DynoRun, build, id)).destroy();
+  await touchBuild(build);
 }
 
 export async function deleteWeighIn(build: Build, id: number): Promise<void> {
   await (await findRecord(WeighIn, build, id)).destroy();
+  await touchBuild(build);
 }
 
 /** The run's peaks become the engine's measured power and torque (at the wheels or the flywheel, as the dyno measured). */

@@ -23,6 +23,12 @@ export const FULL_BUILD_INCLUDE = [
   { model: FigureChange, as: 'figureChanges' },
 ];
 
+/** Marks the build as changed (the public page's cache and ETag follow updatedAt). */
+export async function touchBuild(build: Build, transaction?: Transaction): Promise<void> {
+  build.changed('updatedAt', true);
+  await build.save({ transaction });
+}
+
 export async function findBuild(id: number, transaction?: Transaction): Promise<Build> {
   const build = await Build.findByPk(id, { transaction });
   if (!build) throw new NotFoundError('No such build.');
@@ -100,8 +106,7 @@ export async function saveSection(build: Build, kind: SectionKind, data: unknown
     await recordFigureChanges(build.id, kind, existing?.data ?? {}, parsed, transaction);
     if (existing) await existing.update({ data: parsed }, { transaction });
     else await BuildSection.create({ buildId: build.id, kind, data: parsed }, { transaction });
-    build.changed('updatedAt', true);
-    await build.save({ transaction });
+    await touchBuild(build, transaction);
   });
 }
 

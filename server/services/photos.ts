@@ -9,6 +9,7 @@ import { storage } from '../storage/index';
 import { logger } from '../logger';
 import { AppError, NotFoundError, ValidationError } from '../errors';
 import { processImage, ImageRejectedError, type ProcessedImage } from './image-processing';
+import { touchBuild } from './builds';
 
 export type PhotoFile = { buffer: Buffer; originalName: string };
 
@@ -33,11 +34,6 @@ async function lockBuild(buildId: number, transaction: Transaction): Promise<Bui
   const build = await Build.findByPk(buildId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!build) throw new NotFoundError('No such build.');
   return build;
-}
-
-async function touch(build: Build, transaction: Transaction) {
-  build.changed('updatedAt', true);
-  await build.save({ transaction });
 }
 
 async function findPhotoOf(buildId: number, photoId: number, transaction: Transaction): Promise<Photo> {
@@ -116,7 +112,7 @@ export async function storePhotosForBuild(buildId: number, files: PhotoFile[], c
           { transaction },
         );
       }
-      await touch(build, transaction);
+      await touchBuild(build, transaction);
       return listPhotos(buildId, transaction);
     });
   } catch (err) {
@@ -136,7 +132,7 @@ export async function updatePhoto(buildId: number, photoId: number, input: { cap
     }
     if (input.caption !== undefined) photo.caption = input.caption;
     await photo.save({ transaction });
-    await touch(build, transaction);
+    await touchBuild(build, transaction);
     return photo;
   });
 }
@@ -155,7 +151,7 @@ export async function reorderPhotos(buildId: number, photoIds: number[]): Promis
       const photo = byId.get(id)!;
       if (photo.position !== position) await photo.update({ position }, { transaction });
     }
-    await touch(build, transaction);
+    await touchBuild(build, transaction);
     return listPhotos(buildId, transaction);
   });
 }
@@ -170,7 +166,7 @@ export async function deletePhoto(buildId: number, photoId: number): Promise<voi
       const [next] = await listPhotos(buildId, transaction);
       if (next) await next.update({ isCover: true }, { transaction });
     }
-    await touch(build, transaction);
+    await touchBuild(build, transaction);
     return photo.storageKey;
   });
   // Files go after the rows: a failed delete leaves an orphan file, never a photo with no file.

@@ -216,3 +216,40 @@ describe('dyno runs, weigh-ins and history', () => {
     expect((await client.post(`/api/builds/${id}/weigh-ins/${weighIn.id}/apply`)).status).toBe(404);
   });
 });
+
+describe('every build route refuses other owners and anonymous visitors', () => {
+  it('answers 403 to another owner and 401 to nobody on each route, and changes nothing', async () => {
+    const alice = await owner();
+    const { id } = await newBuild(alice);
+    const weighIn = { date: '2026-06-01', unit: 'kg', leftFront: 300, rightFront: 300, leftRear: 300, rightRear: 300, withDriver: false, fuelLevel: 'full' };
+    const created = await alice.post(`/api/builds/${id}/weigh-ins`, weighIn);
+    const recordId = created.body.build.weighIns[0].id;
+    const routes: [method: 'get' | 'patch' | 'put' | 'post' | 'delete', path: string, body?: object][] = [
+      ['get', `/api/builds/${id}`],
+      ['patch', `/api/builds/${id}`, { title: 'Taken' }],
+      ['put', `/api/builds/${id}/sections/engine`, { cylinders: 4 }],
+      ['put', `/api/builds/${id}/private`, { vin: 'X' }],
+      ['put', `/api/builds/${id}/credits`, { credits: [] }],
+      ['put', `/api/builds/${id}/published`, { published: true }],
+      ['post', `/api/builds/${id}/weigh-ins`, weighIn],
+      ['post', `/api/builds/${id}/weigh-ins/${recordId}/apply`],
+      ['delete', `/api/builds/${id}/weigh-ins/${recordId}`],
+      ['post', `/api/builds/${id}/dyno-runs/${recordId}/apply`],
+      ['delete', `/api/builds/${id}`],
+    ];
+    const bob = await owner();
+    const nobody = await apiClient();
+    for (const [method, path, body] of routes) {
+      for (const [client, status] of [[bob, 403], [nobody, 401]] as const) {
+        const req = client.raw[method](path);
+        const res = method === 'get' ? await req : await req.set('X-CSRF-Token', client.csrf).send(body ?? {});
+        expect(res.status, `${method.toUpperCase()} ${path}`).toBe(status);
+      }
+    }
+    const after = (await alice.get(`/api/builds/${id}`)).body.build;
+    expect(after.overview.title).toBe('Coupe with a long story');
+    expect(after.published).toBe(false);
+    expect(after.weighIns).toHaveLength(1);
+    expect(after.sections.engine).toBeUndefined();
+  });
+});

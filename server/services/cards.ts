@@ -1,0 +1,99 @@
+import { createElement } from 'react';
+import { renderToBuffer } from '@react-pdf/renderer';
+import QRCode from 'qrcode';
+import { BUILD_STYLE_LABELS, type PublicBuild } from '@shared/schemas/build';
+import { ENGINEERING_CAUTION } from '@shared/calc';
+import { CARD_FIGURES, DEFAULT_CARD_SETTINGS, CardSettingsSchema, type CardQuery, type CardSettings, type CardShow } from '@shared/schemas/card';
+import { CardDocument } from '@templates/cards/card-document';
+import type { CardContent } from '@templates/cards/content';
+import { registerCardFonts } from '@templates/cards/fonts';
+import type { Build } from '../models/build';
+import { computeKeyFigures } from '../presenters/public-build';
+import { engineLine, sectionViews } from '../presenters/public-spec-lines';
+
+/** Medium error correction (about 15% of the code can be lost to glare or a scuff) and a short URL: a low version, big modules. */
+export const QR_ERROR_CORRECTION = 'M' as const;
+const QR_INK = '#1C1B19';
+
+export function qrMatrix(url: string): CardContent['qr'] {
+  const { modules } = QRCode.create(url, { errorCorrectionLevel: QR_ERROR_CORRECTION });
+  return { size: modules.size, dark: Array.from(modules.data, (v) => v === 1) };
+}
+
+export const qrPng = (url: string, width = 1200) =>
+  QRCode.toBuffer(url, { type: 'png', errorCorrectionLevel: QR_ERROR_CORRECTION, margin: 4, width, color: { dark: QR_INK, light: '#FFFFFF' } });
+
+export const qrSvg = (url: string) => QRCode.toString(url, { type: 'svg', errorCorrectionLevel: QR_ERROR_CORRECTION, margin: 4, color: { dark: QR_INK, light: '#FFFFFF' } });
+
+/** "placard.example/c/K7P2M9Q": what a person can type if the code will not scan. */
+export const shortUrlOf = (url: string) => url.replace(/^https?:\/\//, '');
+
+/** The owner's saved choices, read leniently: a stored value that no longer parses falls back to the defaults. */
+export function savedCardSettings(build: Pick<Build, 'cardSettings'>): CardSettings {
+  const parsed = CardSettingsSchema.safeParse(build.cardSettings ?? {});
+  return parsed.success ? parsed.data : DEFAULT_CARD_SETTINGS;
+}
+
+/** Query over saved settings over defaults. */
+export function settingsFromQuery(saved: CardSettings, q: CardQuery): CardSettings {
+  return {
+    design: q.design ?? saved.design,
+    paper: q.paper ?? saved.paper,
+    orientation: q.orientation ?? saved.orientation,
+    sections: q.sections ?? saved.sections,
+    figures: q.figures ?? saved.figures,
+    units: q.units ?? saved.units,
+  };
+}
+
+export const showFromQuery = (q: CardQuery): CardShow | null => (q.showName || q.className || q.entryNumber ? { showName: q.showName, className: q.className, entryNumber: q.entryNumber } : null);
+
+export type CoverImage = NonNullable<CardContent['cover']>;
+
+/** The words and figures of a card, from the public face of the build only (never the model). */
+export function cardContent(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null } = {}): CardContent {
+  const units = settings.units;
+  const heading = [build.modelYear ?? '', build.bodyOrigin ?? ''].join(' ').trim() || build.title;
+  const name = build.title.trim().toLowerCase() === heading.toLowerCase() ? null : build.title;
+  const style = build.style && build.style in BUILD_STYLE_LABELS ? BUILD_STYLE_LABELS[build.style as keyof typeof BUILD_STYLE_LABELS] : null;
+  const figures = computeKeyFigures(build)
+    .filter((f) => settings.figures.includes(f.key))
+    .sort((a, b) => CARD_FIGURES.indexOf(a.key) - CARD_FIGURES.indexOf(b.key))
+    .map((f) => {
+      const [value = '', unit = ''] = f[units].text.split('\u00a0');
+      const note = [f.note, f.measuredOn ? `measured ${f.measuredOn}` : ''].filter(Boolean).join(', ');
+      return { label: f.label, value, unit, mark: f.provenance === 'estimated' ? 'est.' : f.provenance === 'target' ? 'target' : '', note };
+    });
+  const views = sectionViews(build.sections, units, settings.sections);
+  return {
+    heading,
+    name,
+    byline: [style, build.ownerName ? `owned by ${build.ownerName}` : null].filter(Boolean).join('  ·  '),
+    figures,
+    engineLine: settings.sections.includes('engine') ? engineLine(build.sections.engine, units) : '',
+    sections: views.map((v) => ({ label: v.label, summary: v.summary || v.madeBy || v.note || '', rows: v.rows, madeBy: v.madeBy })),
+    credits: build.credits,
+    caution: views.some((v) => v.caution) ? ENGINEERING_CAUTION : null,
+    qr: qrMatrix(build.url),
+    shortUrl: shortUrlOf(build.url),
+    cover: opts.cover ?? null,
+    show: opts.show ?? null,
+  };
+}
+
+/** The stored photo a card prints: the cover (or the first photo), as JPEG, big enough for the paper. */
+export function coverSourceKey(build: PublicBuild, settings: CardSettings): string | null {
+  const photo = build.photos.find((p) => p.isCover) ?? build.photos[0];
+  if (!photo || photo.sources.length === 0) return null;
+  const want = settings.paper === 'tabloid' || settings.paper === 'a3' ? 1600 : 960;
+  const source = photo.sources.find((s) => s.width >= want) ?? photo.sources[photo.sources.length - 1]!;
+  return source.jpeg.replace(/^\/media\//, '');
+}
+
+/** One card, one page, as a PDF. */
+export async function renderCardPdf(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null } = {}): Promise<Buffer> {
+  registerCardFonts();
+  const content = cardContent(build, settings, opts);
+  const doc = createElement(CardDocument, { content, design: settings.design, paper: settings.paper, orientation: settings.orientation, title: `${build.title} (${build.code})` });
+  return renderToBuffer(doc as Parameters<typeof renderToBuffer>[0]);
+}
