@@ -55,7 +55,9 @@ const rpm = (n: number | undefined) => (n ? `${formatNumber(n)} rpm` : '');
 const at = (figure: string, r: number | undefined) => (figure && r ? `${figure} at ${rpm(r)}` : figure);
 const join = (parts: Array<string | undefined | null | false>, sep = ', ') => parts.filter((p): p is string => Boolean(p && p.trim())).join(sep);
 const cap = (s: string) => (s ? s[0]!.toUpperCase() + s.slice(1) : s);
-const words = (id: string) => id.replace(/-/g, ' ');
+// Enum ids in words; the trade writes some with a hyphen (double-wishbone, coil-over, four-link).
+const SPACED = new Set(['beam-axle', 'solid-axle', 'ladder-bar', 'independent-rear', 'transverse-leaf', 'direct-drive']);
+const words = (id: string) => (id === 'triangulated-four-link' ? 'triangulated four-link' : SPACED.has(id) ? id.replace(/-/g, ' ') : id);
 const row = (label: string, value: string | undefined): SpecRow[] => (value && value.trim() ? [{ label, value: value.trim() }] : []);
 
 export function cylindersText(e: EngineSection): string {
@@ -268,7 +270,7 @@ export function sectionViews(sections: Sections, units: UnitSystem, only: readon
     if (rows.length === 0 && !madeBy && !note) continue;
     views.push({
       kind,
-      label: SECTION_LABELS[kind],
+      label: kind === 'extra' ? 'Extras' : SECTION_LABELS[kind],
       rows,
       summary: rows.length ? summaryOf(kind, sections, rows, units) : '',
       madeBy,

@@ -1,3 +1,14 @@
 import { Router } from 'express';
+import { loadPublicBuild } from '../services/public-builds';
+import { presentPublicBuildResponse } from '../presenters/public-build';
+import { NotFoundError } from '../errors';
 
+/** Public JSON, mounted before the session: anyone may read a published build. */
 export const publicApiRouter = Router();
+
+publicApiRouter.get('/public/builds/:code', async (req, res) => {
+  const build = await loadPublicBuild(String(req.params.code).toUpperCase());
+  // Unknown and unpublished answer alike, so the API tells no one which codes exist.
+  if (!build) throw new NotFoundError('No published build has that code.');
+  res.set('Cache-Control', 'public, max-age=30').json(presentPublicBuildResponse(build));
+});

@@ -8,6 +8,7 @@ import { CardDocument } from '@templates/cards/card-document';
 import type { CardContent } from '@templates/cards/content';
 import { registerCardFonts } from '@templates/cards/fonts';
 import type { Build } from '../models/build';
+import { storage } from '../storage/index';
 import { computeKeyFigures } from '../presenters/public-build';
 import { engineLine, sectionViews } from '../presenters/public-spec-lines';
 
@@ -88,6 +89,18 @@ export function coverSourceKey(build: PublicBuild, settings: CardSettings): stri
   const want = settings.paper === 'tabloid' || settings.paper === 'a3' ? 1600 : 960;
   const source = photo.sources.find((s) => s.width >= want) ?? photo.sources[photo.sources.length - 1]!;
   return source.jpeg.replace(/^\/media\//, '');
+}
+
+/** The cover photo's bytes from storage, or null (no photo, or the file is gone: the card prints without it). */
+export async function loadCoverImage(build: PublicBuild, settings: CardSettings): Promise<CoverImage | null> {
+  const key = coverSourceKey(build, settings);
+  if (!key) return null;
+  const object = await storage.get(key);
+  if (!object) return null;
+  const chunks: Buffer[] = [];
+  for await (const chunk of object.body) chunks.push(chunk as Buffer);
+  const photo = build.photos.find((p) => p.isCover) ?? build.photos[0]!;
+  return { data: Buffer.concat(chunks), format: 'jpg', width: photo.width, height: photo.height };
 }
 
 /** One card, one page, as a PDF. */

@@ -3,7 +3,7 @@ import type { Style } from '@react-pdf/types';
 import type { CardContent, CardFigure } from './content';
 import { DISPLAY, TEXT } from './fonts';
 import { GRAPHITE, INK, RULE, SIGNAL, WHITE } from './theme';
-import { fitDisplaySize } from './fit';
+import { clampText, displayWidth, fitDisplaySize } from './fit';
 
 /** Quiet zone around the code, in modules: the standard asks for four. */
 export const QR_QUIET = 4;
@@ -18,7 +18,7 @@ export function QrCode({ qr, size }: { qr: CardContent['qr']; size: number }) {
     }
   }
   return (
-    <Svg width={size} height={size} viewBox={`0 0 ${n} ${n}`} style={{ backgroundColor: WHITE }}>
+    <Svg width={size} height={size} viewBox={`0 0 ${n} ${n}`} style={{ backgroundColor: WHITE, flexShrink: 0 }}>
       <Path d={d} fill={INK} />
     </Svg>
   );
@@ -28,7 +28,7 @@ export function QrCode({ qr, size }: { qr: CardContent['qr']; size: number }) {
 export function QrBlock({ content, size, k, dark = false, caption = 'Scan for the whole build' }: { content: CardContent; size: number; k: number; dark?: boolean; caption?: string }) {
   const urlSize = fitDisplaySize(content.shortUrl, size, 11 * k, 6 * k);
   return (
-    <View style={{ width: size, alignItems: 'center' }}>
+    <View style={{ width: size, alignItems: 'center', flexShrink: 0 }}>
       <QrCode qr={content.qr} size={size} />
       <Text style={{ fontFamily: DISPLAY, fontWeight: 500, fontSize: urlSize, color: dark ? WHITE : INK, marginTop: 4 * k, letterSpacing: 0.2, maxLines: 1 }}>{content.shortUrl}</Text>
       <Text style={{ fontFamily: TEXT, fontSize: 7.5 * k, color: dark ? RULE : GRAPHITE, marginTop: 1 * k, maxLines: 1 }}>{caption}</Text>
@@ -40,20 +40,24 @@ export function QrBlock({ content, size, k, dark = false, caption = 'Scan for th
 export function ShowBlock({ show, width, k, tone = 'light' }: { show: NonNullable<CardContent['show']>; width: number; k: number; tone?: 'light' | 'signal' }) {
   const fg = tone === 'signal' ? WHITE : INK;
   const sub = tone === 'signal' ? WHITE : GRAPHITE;
-  const inner = width - 20 * k;
-  const numberSize = show.entryNumber ? fitDisplaySize(show.entryNumber, inner * 0.55, 64 * k, 24 * k) : 0;
+  const pad = 10 * k;
+  const inner = width - 2 * pad - 4 * k;
+  const stacked = width < 200 * k || !show.showName;
+  const numberSize = show.entryNumber ? fitDisplaySize(show.entryNumber, ((stacked ? inner : inner * 0.5) - 8 * k) / 1.2, 64 * k, 22 * k) : 0;
+  const numberW = show.entryNumber ? Math.min(stacked ? inner : inner * 0.5, displayWidth(show.entryNumber, numberSize) * 1.2 + 8 * k) : 0;
+  const nameW = stacked ? inner : inner - numberW - 10 * k;
   return (
-    <View style={{ width, backgroundColor: tone === 'signal' ? SIGNAL : WHITE, borderWidth: 2 * k, borderColor: tone === 'signal' ? SIGNAL : INK, padding: 10 * k, flexDirection: 'row', alignItems: 'center' }}>
+    <View style={{ width, flexShrink: 0, backgroundColor: tone === 'signal' ? SIGNAL : WHITE, borderWidth: 2 * k, borderColor: tone === 'signal' ? SIGNAL : INK, padding: pad, flexDirection: stacked ? 'column' : 'row', alignItems: stacked ? 'flex-start' : 'center' }}>
       {show.entryNumber ? (
-        <View style={{ marginRight: 10 * k, alignItems: 'flex-start' }}>
+        <View style={{ width: numberW, marginRight: stacked ? 0 : 10 * k, flexShrink: 0 }}>
           <Text style={{ fontFamily: DISPLAY, fontSize: 7.5 * k, color: sub, letterSpacing: 1, textTransform: 'uppercase' }}>Entry</Text>
-          <Text style={{ fontFamily: DISPLAY, fontWeight: 700, fontSize: numberSize, color: fg, lineHeight: 1, maxLines: 1 }}>{show.entryNumber}</Text>
+          <Text style={{ fontFamily: DISPLAY, fontWeight: 700, fontSize: numberSize, color: fg, lineHeight: 1.1, maxLines: 1 }}>{show.entryNumber}</Text>
         </View>
       ) : null}
-      <View style={{ flexGrow: 1, flexShrink: 1 }}>
-        {show.showName ? <Text style={{ fontFamily: DISPLAY, fontWeight: 600, fontSize: 14 * k, color: fg, textTransform: 'uppercase', lineHeight: 1.1, maxLines: 2, textOverflow: 'ellipsis' }}>{show.showName}</Text> : null}
+      <View style={{ width: nameW, flexShrink: 0 }}>
+        {show.showName ? <Text style={{ fontFamily: DISPLAY, fontWeight: 600, fontSize: 14 * k, color: fg, textTransform: 'uppercase', lineHeight: 1.15, maxLines: 2 }}>{clampText(show.showName.toUpperCase(), nameW, 14 * k, 2, 'display')}</Text> : null}
         {show.className ? (
-          <Text style={{ fontFamily: TEXT, fontSize: 10 * k, color: sub, marginTop: 2 * k, maxLines: 2, textOverflow: 'ellipsis' }}>
+          <Text style={{ fontFamily: TEXT, fontSize: 10 * k, color: sub, marginTop: 2 * k, maxLines: 2 }}>
             Class: <Text style={{ fontWeight: 700, color: fg }}>{show.className}</Text>
           </Text>
         ) : null}
@@ -75,7 +79,7 @@ export function Figure({ figure, valueSize, width, k, dark = false, style }: { f
   return (
     <View style={style ? [{ width }, style] : { width }}>
       <Text style={{ fontFamily: DISPLAY, fontSize: 8 * k, letterSpacing: 1, color: dark ? RULE : GRAPHITE, textTransform: 'uppercase', maxLines: 1 }}>{figure.label}</Text>
-      <Text style={{ fontFamily: DISPLAY, fontWeight: 600, fontSize: size, color: fg, lineHeight: 1.05, maxLines: 1 }}>
+      <Text style={{ fontFamily: DISPLAY, fontWeight: 600, fontSize: size, color: fg, lineHeight: 1.18, maxLines: 1 }}>
         {figure.value}
         <Text style={{ fontSize: size * 0.5, fontWeight: 500 }}>{` ${figure.unit}`}</Text>
         <Mark mark={figure.mark} size={size * 0.36} color={dark ? '#F08A63' : SIGNAL} />

@@ -8,6 +8,7 @@ import { ResetPasswordPage } from '@client/features/account/components/reset-pas
 import { AccountPage } from '@client/features/account/components/account-page';
 import { AccountsPage } from '@client/features/admin/components/accounts-page';
 import { MailListPage, MailMessagePage } from '@client/features/admin/components/mail-page';
+import { MyBuildsPage } from '@client/features/builds/components/my-builds-page';
 import { NotFoundPage } from './not-found-page';
 import { RouteError } from './route-error';
 
@@ -21,6 +22,24 @@ export const router = createBrowserRouter([
       { path: '/sign-up', element: <SignUpPage />, errorElement: <RouteError /> },
       { path: '/reset-password', element: <ResetPasswordPage />, errorElement: <RouteError /> },
       { path: '/account', element: <RequireUser><AccountPage /></RequireUser>, errorElement: <RouteError /> },
+      { path: '/builds', element: <RequireUser><MyBuildsPage /></RequireUser>, errorElement: <RouteError /> },
+      {
+        path: '/builds/:id',
+        // The editor (forms, the numbers, the dyno chart) loads only when opened, so the home page stays light.
+        lazy: async () => {
+          const { BuildEditorPage } = await import('@client/features/builds/components/build-editor-page');
+          return { element: <RequireUser><BuildEditorPage /></RequireUser> };
+        },
+        errorElement: <RouteError />,
+      },
+      {
+        path: '/builds/:id/card',
+        lazy: async () => {
+          const { CardDesignerPage } = await import('@client/features/cards/components/card-designer-page');
+          return { element: <RequireUser><CardDesignerPage /></RequireUser> };
+        },
+        errorElement: <RouteError />,
+      },
       { path: '/admin/accounts', element: <RequireUser ability="manageAccounts"><AccountsPage /></RequireUser>, errorElement: <RouteError /> },
       { path: '/admin/mail', element: <RequireUser ability="readCaughtMail"><MailListPage /></RequireUser>, errorElement: <RouteError /> },
       { path: '/admin/mail/:id', element: <RequireUser ability="readCaughtMail"><MailMessagePage /></RequireUser>, errorElement: <RouteError /> },

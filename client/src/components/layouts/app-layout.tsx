@@ -28,6 +28,9 @@ export function AppLayout() {
             </NavLink>
             {user ? (
               <>
+                <NavLink to="/builds" className={navClass}>
+                  My builds
+                </NavLink>
                 <NavLink to="/account" className={navClass}>
                   Account
                 </NavLink>

@@ -98,7 +98,7 @@ export function FigureInput({ label, kind, value, onChange, onBlur, system, erro
           }}
           onBlur={onBlur}
           aria-invalid={error?.value || error?.message ? true : undefined}
-          className={`w-28 min-w-0 flex-1 tabular-nums ${boxClass} ${error?.value || error?.message ? 'border-danger' : 'border-rule'}`}
+          className={`min-w-[8rem] flex-1 tabular-nums ${boxClass} ${error?.value || error?.message ? 'border-danger' : 'border-rule'}`}
         />
         <select aria-label={`${label} unit`} value={unit} onChange={(e) => emit({ unit: e.target.value })} onBlur={onBlur} className={`w-24 ${boxClass} border-rule`}>
           {offered.map((u) => (

@@ -4,4 +4,4 @@ import { useBuildMutation } from './build-mutation';
 
 export const saveCredits = (id: number, credits: Credit[]) => api<{ build: OwnerBuild }>(`/api/builds/${id}/credits`, { method: 'PUT', body: { credits } });
 
-export const useSaveCredits = (id: number) => useBuildMutation(id, (credits: Credit[]) => saveCredits(id, credits));
+export const useSaveCredits = (id: number) => useBuildMutation(id, (input: { credits: Credit[] }) => saveCredits(id, input.credits));

@@ -1,0 +1,79 @@
+import { useState } from 'react';
+import { useParams } from 'react-router-dom';
+import { ApiError } from '@client/lib/api';
+import { ErrorState, LoadingState } from '@client/components/ui/states';
+import { Notice } from '@client/components/ui/notice';
+import type { OwnerBuild } from '@shared/schemas/build';
+import { useBuild } from '../api/get-build';
+import { EditorContext, MapStore, type Editor } from './editor/editor-stores';
+import { EditorHeader } from './editor/editor-header';
+import { SectionNav } from './editor/section-nav';
+import { UnsavedGuard } from './editor/unsaved-guard';
+import { NumbersProvider } from './numbers/numbers-context';
+import { NumbersPanel } from './numbers/numbers-panel';
+import { OverviewForm } from './sections/overview-form';
+import { EngineForm } from './sections/engine-form';
+import { DrivetrainForm } from './sections/drivetrain-form';
+import { ChassisForm } from './sections/chassis-form';
+import { BrakesForm } from './sections/brakes-form';
+import { WheelsForm } from './sections/wheels-form';
+import { BodyForm } from './sections/body-form';
+import { ExtraForm } from './sections/extra-form';
+import { CreditsForm } from './sections/credits-form';
+import { PrivateForm } from './sections/private-form';
+import { PhotosPanel } from './photos/photos-panel';
+import { DynoPanel } from './records/dyno-panel';
+import { WeighInsPanel } from './records/weigh-ins-panel';
+import { HistoryPanel } from './records/history-list';
+
+function Editor({ build }: { build: OwnerBuild }) {
+  const [stores] = useState(() => ({ drafts: new MapStore<unknown>(), dirty: new MapStore<true>() }));
+  const editor: Editor = { build, ...stores };
+  return (
+    <EditorContext.Provider value={editor}>
+      <NumbersProvider>
+        <UnsavedGuard />
+        <EditorHeader build={build} />
+        <div className="grid gap-4 lg:grid-cols-[10rem_minmax(0,1fr)_18rem]">
+          <SectionNav />
+          <div className="flex min-w-0 flex-col gap-6">
+            <OverviewForm build={build} />
+            <EngineForm build={build} />
+            <DrivetrainForm build={build} />
+            <ChassisForm build={build} />
+            <BrakesForm build={build} />
+            <WheelsForm build={build} />
+            <BodyForm build={build} />
+            <ExtraForm build={build} />
+            <CreditsForm build={build} />
+            <PhotosPanel build={build} />
+            <DynoPanel build={build} />
+            <WeighInsPanel build={build} />
+            <HistoryPanel build={build} />
+            <PrivateForm build={build} />
+          </div>
+          <aside className="hidden lg:block">
+            <div className="sticky top-4 max-h-[calc(100vh-2rem)] overflow-y-auto">
+              <NumbersPanel />
+            </div>
+          </aside>
+        </div>
+      </NumbersProvider>
+    </EditorContext.Provider>
+  );
+}
+
+/** /builds/:id — the build editor: one form per section, each saved on its own, and the live numbers. */
+export function BuildEditorPage() {
+  const id = Number(useParams().id);
+  const { data, isPending, error, refetch } = useBuild(id);
+  if (!Number.isInteger(id) || id <= 0) return <Notice tone="danger">That is not a build’s address.</Notice>;
+  if (isPending) return <LoadingState label="Loading the build sheet…" />;
+  if (error) {
+    if (error instanceof ApiError && (error.status === 404 || error.status === 403)) return <Notice tone="danger">No build of yours at this address. It may have been deleted.</Notice>;
+    return <ErrorState error={error} onRetry={() => void refetch()} />;
+  }
+  return <Editor build={data.build} />;
+}
+
+export default BuildEditorPage;

@@ -1,0 +1,59 @@
+import { createContext, useContext, useSyncExternalStore } from 'react';
+import type { OwnerBuild } from '@shared/schemas/build';
+
+/** A tiny external store: forms write to it as the owner types without re-rendering the page. */
+export class MapStore<V> {
+  private map = new Map<string, V>();
+  private version = 0;
+  private listeners = new Set<() => void>();
+  get = (key: string) => this.map.get(key);
+  set = (key: string, value: V | undefined) => {
+    if (value === undefined ? !this.map.has(key) : this.map.get(key) === value) return;
+    if (value === undefined) this.map.delete(key);
+    else this.map.set(key, value);
+    this.version++;
+    this.listeners.forEach((l) => l());
+  };
+  entries = () => [...this.map.entries()];
+  getVersion = () => this.version;
+  subscribe = (listener: () => void) => {
+    this.listeners.add(listener);
+    return () => this.listeners.delete(listener);
+  };
+}
+
+export type FormKey = 'overview' | 'engine' | 'drivetrain' | 'chassis' | 'brakes' | 'wheels' | 'body' | 'extra' | 'credits' | 'private';
+
+export type Editor = {
+  build: OwnerBuild;
+  /** The forms' current values (unsaved included), for the live numbers. */
+  drafts: MapStore<unknown>;
+  /** Which forms hold unsaved changes. */
+  dirty: MapStore<true>;
+};
+
+export const EditorContext = createContext<Editor | null>(null);
+
+export function useEditor(): Editor {
+  const editor = useContext(EditorContext);
+  if (!editor) throw new Error('useEditor outside the build editor');
+  return editor;
+}
+
+/** Re-renders when the store changes; returns the store's version. */
+export function useStoreVersion<V>(store: MapStore<V>): number {
+  return useSyncExternalStore(store.subscribe, store.getVersion, store.getVersion);
+}
+
+export const FORM_LABELS: Record<FormKey, string> = {
+  overview: 'Overview',
+  engine: 'Engine',
+  drivetrain: 'Drivetrain',
+  chassis: 'Chassis and suspension',
+  brakes: 'Brakes',
+  wheels: 'Wheels and tyres',
+  body: 'Body and interior',
+  extra: 'Extra lines',
+  credits: 'Credits',
+  private: 'Private details',
+};

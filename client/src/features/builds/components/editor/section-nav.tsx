@@ -1,0 +1,70 @@
+import { useEditor, useStoreVersion } from './editor-stores';
+
+export const EDITOR_SECTIONS = [
+  ['overview', 'Overview'],
+  ['engine', 'Engine'],
+  ['drivetrain', 'Drivetrain'],
+  ['chassis', 'Chassis and suspension'],
+  ['brakes', 'Brakes'],
+  ['wheels', 'Wheels and tyres'],
+  ['body', 'Body and interior'],
+  ['extra', 'Extra lines'],
+  ['credits', 'Credits'],
+  ['photos', 'Photos'],
+  ['dyno', 'Dyno runs'],
+  ['weighIns', 'Weigh-ins'],
+  ['history', 'History'],
+  ['private', 'Private details'],
+] as const;
+
+/** Scrolls to a section and moves focus to its heading, without touching the URL. */
+function goTo(id: string) {
+  const el = document.getElementById(`section-${id}`);
+  if (!el) return;
+  el.scrollIntoView({ behavior: 'smooth', block: 'start' });
+  document.getElementById(`section-${id}-title`)?.focus({ preventScroll: true });
+}
+
+/** Desktop: a sticky list beside the forms. Phone: a sticky select at the top. */
+export function SectionNav() {
+  const { dirty } = useEditor();
+  useStoreVersion(dirty);
+  const mark = (id: string) => (dirty.get(id) ? ' ●' : '');
+  return (
+    <>
+      <div className="sticky top-0 z-10 -mx-4 border-b border-rule bg-paper px-4 py-2 lg:hidden">
+        <label htmlFor="section-jump" className="sr-only">
+          Go to section
+        </label>
+        <select id="section-jump" className="min-h-11 w-full border border-ink bg-white px-2 font-display uppercase" value="" onChange={(e) => e.target.value && goTo(e.target.value)}>
+          <option value="">Go to a section…</option>
+          {EDITOR_SECTIONS.map(([id, label]) => (
+            <option key={id} value={id}>
+              {label}
+              {mark(id) ? ' (unsaved)' : ''}
+            </option>
+          ))}
+        </select>
+      </div>
+      <nav aria-label="Build sheet sections" className="sticky top-4 hidden max-h-[calc(100vh-2rem)] overflow-y-auto lg:block">
+        <ol className="flex flex-col border-l border-rule">
+          {EDITOR_SECTIONS.map(([id, label]) => (
+            <li key={id}>
+              <a
+                href={`#section-${id}`}
+                onClick={(e) => {
+                  e.preventDefault();
+                  goTo(id);
+                }}
+                className="flex min-h-11 items-center px-3 text-sm hover:text-signal"
+              >
+                {label}
+                {mark(id) ? <span className="ml-1 text-caution" aria-label="unsaved changes">●</span> : null}
+              </a>
+            </li>
+          ))}
+        </ol>
+      </nav>
+    </>
+  );
+}

@@ -1,0 +1,101 @@
+import { useId } from 'react';
+import type { UnitSystem } from '@shared/calc';
+import { FORM_LABELS } from '../editor/editor-stores';
+import { useNumbers } from './numbers-context';
+import { NumberGroupView } from './number-group-view';
+import type { NumberGroup } from './types';
+
+export function UnitToggle() {
+  const { system, setSystem } = useNumbers();
+  return (
+    <div role="group" aria-label="Units" className="flex border border-ink">
+      {(['metric', 'imperial'] as UnitSystem[]).map((s) => (
+        <button key={s} type="button" aria-pressed={system === s} onClick={() => setSystem(s)} className={`min-h-11 px-3 font-display text-sm uppercase ${system === s ? 'bg-ink text-paper' : 'hover:text-signal'}`}>
+          {s}
+        </button>
+      ))}
+    </div>
+  );
+}
+
+function CruiseInput() {
+  const { system, cruise, setCruise } = useNumbers();
+  const id = useId();
+  return (
+    <div className="flex items-center gap-2 text-sm">
+      <label htmlFor={id} className="text-graphite">
+        Cruise
+      </label>
+      <input id={id} inputMode="numeric" value={String(cruise)} onChange={(e) => setCruise(Number(e.target.value) || 0)} className="min-h-11 w-20 border border-rule bg-white px-2 tabular-nums" />
+      <span>{system === 'metric' ? 'km/h' : 'mph'}</span>
+    </div>
+  );
+}
+
+export function SpecWarnings() {
+  const { warnings } = useNumbers();
+  if (!warnings.length) return <p className="text-sm text-ok">Spec check: the figures agree with each other.</p>;
+  return (
+    <div>
+      <h3 className="font-display text-sm uppercase tracking-wide text-caution">Spec check · {warnings.length} to look at</h3>
+      <ul className="mt-1 flex flex-col gap-2">
+        {warnings.map((w) => (
+          <li key={`${w.code}-${w.form}-${w.path}`} className="border-l-4 border-caution pl-2 text-sm">
+            <span className="font-semibold">{FORM_LABELS[w.form]}: </span>
+            {w.message}
+            <span className="block text-xs text-graphite">{w.why}</span>
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}
+
+/** The whole numbers panel (desktop: sticky beside the forms). */
+export function NumbersPanel() {
+  const { groups } = useNumbers();
+  return (
+    <section aria-labelledby="numbers-title" data-testid="numbers-panel" className="border border-ink bg-white/70">
+      <header className="flex flex-wrap items-center justify-between gap-2 border-b border-ink px-3 py-2">
+        <h2 id="numbers-title" className="font-display text-lg uppercase tracking-wide">
+          The numbers
+        </h2>
+        <UnitToggle />
+      </header>
+      <div className="flex flex-col gap-3 p-3">
+        <p className="text-xs text-graphite">Worked out live from what you type, saved or not.</p>
+        <SpecWarnings />
+        {groups.map((g) => (
+          <div key={g.id}>
+            <NumberGroupView group={g} showHint={false} />
+            {g.id === 'gearing' && g.rows.length ? <CruiseInput /> : null}
+          </div>
+        ))}
+        {groups.every((g) => !g.rows.length) ? <p className="text-sm text-graphite">Nothing to work out yet: fill in the engine, drivetrain, wheels or chassis.</p> : null}
+      </div>
+    </section>
+  );
+}
+
+/** On a phone: the numbers that belong to one section, right under its form. */
+export function SectionNumbers({ section }: { section: NumberGroup['section'] }) {
+  const { groups } = useNumbers();
+  const mine = groups.filter((g) => g.section === section);
+  if (!mine.length) return null;
+  return (
+    <div className="mt-4 border border-ink bg-white/70 p-3 lg:hidden" data-testid={`section-numbers-${section}`}>
+      <div className="mb-2 flex flex-wrap items-center justify-between gap-2">
+        <h3 className="font-display text-base uppercase tracking-wide">The numbers</h3>
+        <UnitToggle />
+      </div>
+      <div className="flex flex-col gap-3">
+        {mine.map((g) => (
+          <div key={g.id}>
+            <NumberGroupView group={g} />
+            {g.id === 'gearing' && g.rows.length ? <CruiseInput /> : null}
+          </div>
+        ))}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,32 @@
+import type { UnitSystem } from '@shared/calc';
+import type { Sections } from '@shared/schemas/build-sections';
+import type { WeighIn } from '@shared/schemas/build';
+import type { FigureInput } from '@shared/schemas/figure';
+
+/** One computed line: what it is, the figure in the chosen system, the other system beside it. */
+export type NumberRow = { label: string; value: string; other?: string; estimate?: boolean };
+
+export type NumberGroupId = 'engine' | 'power' | 'gearing' | 'tyres' | 'spacing' | 'suspension' | 'antiSquat' | 'tubes' | 'corners';
+
+export type NumberGroup = {
+  id: NumberGroupId;
+  title: string;
+  /** Which editor section it belongs under on a phone. */
+  section: 'engine' | 'drivetrain' | 'chassis' | 'wheels' | 'weighIns' | 'overview';
+  rows: NumberRow[];
+  /** What is missing, when nothing can be worked out yet. */
+  hint?: string;
+  notes?: string[];
+  caution?: boolean;
+};
+
+export type NumbersInput = {
+  sections: Sections;
+  weight?: FigureInput | null;
+  weighIns: WeighIn[];
+  system: UnitSystem;
+  /** Cruising speed for the rpm-at-cruise line, in the chosen system's unit (km/h or mph). */
+  cruise: number;
+};
+
+export const other = (system: UnitSystem): UnitSystem => (system === 'metric' ? 'imperial' : 'metric');

@@ -1,0 +1,146 @@
+import { useState } from 'react';
+import { useFieldArray, useForm, useWatch } from 'react-hook-form';
+import { CORRECTION_STANDARDS, DynoRunCreateSchema, type DynoRunFormInput, type OwnerBuild } from '@shared/schemas/build';
+import { parseDynoCsv } from '@shared/schemas/dyno-csv';
+import { formatNumber } from '@shared/calc';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/notice';
+import { SelectField } from '@client/components/ui/select-field';
+import { TextAreaField } from '@client/components/ui/text-area-field';
+import { TextField } from '@client/components/ui/text-field';
+import { useAddDynoRun } from '../../api/add-dyno-run';
+import { asNumber, formResolver, placeServerErrors } from '../editor/form-values';
+import { errorAt } from '../editor/fields';
+
+type Values = DynoRunFormInput & { curveMode: 'csv' | 'table' };
+
+const today = () => new Date().toISOString().slice(0, 10);
+const blank = (): Values => ({ date: today(), facility: '', standard: 'SAE J1349', measuredAt: 'wheel', powerUnit: 'hp', torqueUnit: 'lbft', curveMode: 'csv', curve: [], curveCsv: '' }) as unknown as Values;
+
+/** Only the chosen way of giving the curve is sent. */
+const clean = (v: Values) => {
+  const { curveMode, ...run } = v;
+  const out: Record<string, unknown> = { ...run, facility: run.facility?.trim() || undefined, note: run.note?.trim() || undefined };
+  if (curveMode === 'csv') out.curve = [];
+  else delete out.curveCsv;
+  return out;
+};
+
+/** The first message anywhere in a nested error (a list's rows). */
+function firstMessage(error: unknown): string | undefined {
+  if (!error || typeof error !== 'object') return undefined;
+  const { message } = error as { message?: unknown };
+  if (typeof message === 'string') return message;
+  for (const child of Object.values(error)) {
+    const found = firstMessage(child);
+    if (found) return found;
+  }
+  return undefined;
+}
+
+function CsvPreview({ text }: { text: string | undefined }) {
+  if (!text?.trim()) return <p className="text-sm text-graphite">Paste a header line naming rpm, power and torque (any order, comma, semicolon or tab), then one row per point.</p>;
+  const parsed = parseDynoCsv(text);
+  if (!parsed.ok) return <p role="alert" className="text-sm text-danger">{parsed.message}</p>;
+  const first = parsed.points[0]!;
+  const last = parsed.points[parsed.points.length - 1]!;
+  return (
+    <p className="text-sm text-ok" data-testid="csv-preview">
+      Reads as {parsed.points.length} points, {formatNumber(first.rpm)}–{formatNumber(last.rpm)} rpm; highest power {formatNumber(Math.max(...parsed.points.map((p) => p.power)), { decimals: 1 })}, highest torque {formatNumber(Math.max(...parsed.points.map((p) => p.torque)), { decimals: 1 })}.
+    </p>
+  );
+}
+
+export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () => void }) {
+  const add = useAddDynoRun(build.id);
+  const [formError, setFormError] = useState('');
+  const { register, control, handleSubmit, setError, formState: { errors } } = useForm<Values>({ resolver: formResolver<Values>(DynoRunCreateSchema, clean), defaultValues: blank() });
+  const { fields, append, remove } = useFieldArray({ control, name: 'curve' });
+  const mode = useWatch({ control, name: 'curveMode' });
+  const csv = useWatch({ control, name: 'curveCsv' });
+  const onSubmit = handleSubmit((run) => {
+    setFormError('');
+    add.mutate(run as DynoRunFormInput, {
+      onSuccess: onDone,
+      onError: (err) => setFormError(placeServerErrors(err, setError, [...Object.keys(blank()), 'peakPower', 'peakPowerRpm', 'peakTorque', 'peakTorqueRpm', 'note'])),
+    });
+  });
+  const num = (name: 'peakPower' | 'peakPowerRpm' | 'peakTorque' | 'peakTorqueRpm', label: string) => <TextField label={label} inputMode="decimal" autoComplete="off" {...register(name, asNumber as never)} error={errorAt(errors, name)} />;
+  return (
+    <form onSubmit={onSubmit} noValidate aria-label="Add a dyno run" className="flex flex-col gap-4 border border-ink p-3">
+      <h3 className="font-display text-base uppercase tracking-wide">Add a dyno run</h3>
+      {formError ? <Notice tone="danger">{formError}</Notice> : null}
+      <div className="grid gap-4 sm:grid-cols-2">
+        <TextField label="Date" type="date" {...register('date')} error={errorAt(errors, 'date')} />
+        <TextField label="Facility" placeholder="e.g. the rolling road at the county fairground" {...register('facility')} error={errorAt(errors, 'facility')} />
+        <SelectField label="Correction standard" options={CORRECTION_STANDARDS.map((s) => ({ value: s, label: s }))} {...register('standard')} error={errorAt(errors, 'standard')} />
+        <SelectField label="Measured at" options={[{ value: 'wheel', label: 'The wheels (chassis dyno)' }, { value: 'flywheel', label: 'The flywheel (engine dyno)' }]} {...register('measuredAt')} error={errorAt(errors, 'measuredAt')} />
+        <SelectField label="Power unit" options={[{ value: 'hp', label: 'hp' }, { value: 'PS', label: 'PS' }, { value: 'kW', label: 'kW' }]} {...register('powerUnit')} />
+        <SelectField label="Torque unit" options={[{ value: 'lbft', label: 'lb·ft' }, { value: 'Nm', label: 'N·m' }]} {...register('torqueUnit')} />
+        {num('peakPower', 'Peak power')}
+        {num('peakPowerRpm', 'at rpm')}
+        {num('peakTorque', 'Peak torque')}
+        {num('peakTorqueRpm', 'at rpm')}
+      </div>
+      <fieldset className="flex flex-col gap-2">
+        <legend className="mb-1 text-sm font-semibold">The curve</legend>
+        <div className="flex flex-wrap gap-4">
+          <label className="flex min-h-11 items-center gap-2">
+            <input type="radio" value="csv" className="h-5 w-5 accent-ink" {...register('curveMode')} /> Paste CSV
+          </label>
+          <label className="flex min-h-11 items-center gap-2">
+            <input type="radio" value="table" className="h-5 w-5 accent-ink" {...register('curveMode')} /> Type rows
+          </label>
+        </div>
+        {mode === 'csv' ? (
+          <>
+            <TextAreaField label="Curve as CSV" rows={6} className="[&_textarea]:font-mono" placeholder={'rpm,power,torque\n3000,210,368\n3500,250,375'} {...register('curveCsv')} error={errorAt(errors, 'curveCsv')} />
+            <CsvPreview text={csv} />
+          </>
+        ) : (
+          <>
+            <table className="w-full text-sm">
+              <thead>
+                <tr className="text-left text-graphite">
+                  <th className="font-normal">rpm</th>
+                  <th className="font-normal">Power</th>
+                  <th className="font-normal">Torque</th>
+                  <th />
+                </tr>
+              </thead>
+              <tbody>
+                {fields.map((field, i) => (
+                  <tr key={field.id}>
+                    {(['rpm', 'power', 'torque'] as const).map((k) => (
+                      <td key={k} className="pr-1">
+                        <input aria-label={`Row ${i + 1} ${k}`} inputMode="decimal" className={`min-h-11 w-full min-w-0 border bg-white px-2 tabular-nums ${errorAt(errors, `curve.${i}.${k}`) ? 'border-danger' : 'border-rule'}`} {...register(`curve.${i}.${k}`, asNumber as never)} />
+                      </td>
+                    ))}
+                    <td>
+                      <Button type="button" variant="quiet" aria-label={`Remove row ${i + 1}`} onClick={() => remove(i)}>
+                        ✕
+                      </Button>
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+            {errors.curve ? <p role="alert" className="text-sm text-danger">{firstMessage(errors.curve)}</p> : null}
+            <Button type="button" variant="secondary" className="self-start" onClick={() => append({ rpm: undefined, power: undefined, torque: undefined } as never)}>
+              Add a row
+            </Button>
+          </>
+        )}
+      </fieldset>
+      <TextField label="Note" {...register('note')} error={errorAt(errors, 'note')} />
+      <div className="flex flex-wrap gap-2">
+        <Button type="submit" busy={add.isPending}>
+          Add the run
+        </Button>
+        <Button type="button" variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
+      </div>
+    </form>
+  );
+}

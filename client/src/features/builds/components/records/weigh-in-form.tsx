@@ -1,0 +1,87 @@
+import { useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { FUEL_LEVELS, WeighInCreateSchema, type OwnerBuild, type WeighInCreateInput } from '@shared/schemas/build';
+import { cornerWeights, formatNumber, formatPercent } from '@shared/calc';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/notice';
+import { SelectField } from '@client/components/ui/select-field';
+import { TextField } from '@client/components/ui/text-field';
+import { useAddWeighIn } from '../../api/add-weigh-in';
+import { asNumber, placeServerErrors } from '../editor/form-values';
+import { errorAt } from '../editor/fields';
+import { attempt } from '../numbers/read';
+
+export const FUEL_LABELS: Record<(typeof FUEL_LEVELS)[number], string> = { empty: 'Empty', quarter: 'A quarter', half: 'Half', 'three-quarters': 'Three quarters', full: 'Full' };
+const CORNERS = [
+  ['leftFront', 'LF', 'Left front'],
+  ['rightFront', 'RF', 'Right front'],
+  ['leftRear', 'LR', 'Left rear'],
+  ['rightRear', 'RR', 'Right rear'],
+] as const;
+
+type Values = Omit<WeighInCreateInput, 'withDriver'> & { withDriver: boolean };
+
+function LiveSplits({ values, unit }: { values: Partial<Values>; unit: string }) {
+  const { leftFront, rightFront, leftRear, rightRear } = values;
+  if ([leftFront, rightFront, leftRear, rightRear].some((v) => typeof v !== 'number' || !Number.isFinite(v))) return <p className="text-sm text-graphite">Enter all four corners to see the total and splits.</p>;
+  const r = attempt(() => cornerWeights({ leftFront: leftFront!, rightFront: rightFront!, leftRear: leftRear!, rightRear: rightRear! }));
+  if (!r.ok) return <p className="text-sm text-graphite">The corners must not be negative.</p>;
+  const w = r.value;
+  return (
+    <p className="text-sm tabular-nums">
+      Total <span className="font-display text-base">{formatNumber(w.total)} {unit}</span> · front {formatPercent(w.frontPercent)} · left {formatPercent(w.leftPercent)} · cross {formatPercent(w.crossPercent)}
+    </p>
+  );
+}
+
+export function WeighInForm({ build, onDone }: { build: OwnerBuild; onDone: () => void }) {
+  const add = useAddWeighIn(build.id);
+  const [formError, setFormError] = useState('');
+  const { register, control, handleSubmit, setError, formState: { errors } } = useForm<Values>({
+    resolver: zodResolver(WeighInCreateSchema) as never,
+    defaultValues: { date: new Date().toISOString().slice(0, 10), unit: 'kg', withDriver: false, fuelLevel: 'full', note: '' },
+  });
+  const values = useWatch({ control });
+  const onSubmit = handleSubmit((input) => {
+    setFormError('');
+    add.mutate({ ...input, note: input.note?.trim() || undefined }, { onSuccess: onDone, onError: (err) => setFormError(placeServerErrors(err, setError, ['date', 'unit', 'leftFront', 'rightFront', 'leftRear', 'rightRear', 'withDriver', 'fuelLevel', 'note'])) });
+  });
+  return (
+    <form onSubmit={onSubmit} noValidate aria-label="Add a weigh-in" className="flex flex-col gap-4 border border-ink p-3">
+      <h3 className="font-display text-base uppercase tracking-wide">Add a weigh-in</h3>
+      {formError ? <Notice tone="danger">{formError}</Notice> : null}
+      <div className="grid gap-4 sm:grid-cols-2">
+        <TextField label="Date" type="date" {...register('date')} error={errorAt(errors, 'date')} />
+        <SelectField label="Unit" options={[{ value: 'kg', label: 'kg' }, { value: 'lb', label: 'lb' }]} {...register('unit')} error={errorAt(errors, 'unit')} />
+      </div>
+      {/* The scales as they sit under the car: front at the top. */}
+      <div className="mx-auto w-full max-w-sm border-2 border-ink p-3" aria-label="Corner weights, front at the top" role="group">
+        <p className="mb-2 text-center font-display text-xs uppercase tracking-widest text-graphite">Front</p>
+        <div className="grid grid-cols-2 items-end gap-x-8 gap-y-4">
+          {CORNERS.map(([name, short, long]) => (
+            <TextField key={name} label={`${short} · ${long}`} inputMode="decimal" autoComplete="off" {...register(name, asNumber as never)} error={errorAt(errors, name)} />
+          ))}
+        </div>
+        <p className="mt-2 text-center font-display text-xs uppercase tracking-widest text-graphite">Rear</p>
+      </div>
+      <LiveSplits values={values as Partial<Values>} unit={values.unit ?? 'kg'} />
+      <div className="grid gap-4 sm:grid-cols-2">
+        <SelectField label="Fuel" options={FUEL_LEVELS.map((f) => ({ value: f, label: FUEL_LABELS[f] }))} {...register('fuelLevel')} error={errorAt(errors, 'fuelLevel')} />
+        <label className="flex min-h-11 items-center gap-3 self-end">
+          <input type="checkbox" className="h-5 w-5 accent-ink" {...register('withDriver')} />
+          <span>Driver in the car</span>
+        </label>
+        <TextField label="Note" className="sm:col-span-2" {...register('note')} error={errorAt(errors, 'note')} />
+      </div>
+      <div className="flex flex-wrap gap-2">
+        <Button type="submit" busy={add.isPending}>
+          Add the weigh-in
+        </Button>
+        <Button type="button" variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
+      </div>
+    </form>
+  );
+}

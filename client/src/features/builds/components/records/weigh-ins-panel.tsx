@@ -1,0 +1,103 @@
+import { useState } from 'react';
+import type { OwnerBuild, WeighIn } from '@shared/schemas/build';
+import { cornerWeights, formatNumber, formatPercent } from '@shared/calc';
+import { Button } from '@client/components/ui/button';
+import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
+import { Notice } from '@client/components/ui/notice';
+import { useApplyWeighIn } from '../../api/apply-weigh-in';
+import { useDeleteWeighIn } from '../../api/delete-weigh-in';
+import { EditorSection } from '../editor/section-form';
+import { attempt } from '../numbers/read';
+import { FUEL_LABELS, WeighInForm } from './weigh-in-form';
+
+const newestFirst = (a: WeighIn, b: WeighIn) => (a.date < b.date ? 1 : a.date > b.date ? -1 : b.id - a.id);
+
+function Corners({ w }: { w: WeighIn }) {
+  const c = attempt(() => cornerWeights(w));
+  const cell = (label: string, v: number) => (
+    <div className="border border-rule px-2 py-1 text-center">
+      <span className="block text-xs text-graphite">{label}</span>
+      <span className="font-display tabular-nums">{formatNumber(v)}</span>
+    </div>
+  );
+  return (
+    <div className="flex flex-wrap items-center gap-4">
+      <div className="grid w-44 grid-cols-2 gap-1" aria-label="Corners, front at the top">
+        {cell('LF', w.leftFront)}
+        {cell('RF', w.rightFront)}
+        {cell('LR', w.leftRear)}
+        {cell('RR', w.rightRear)}
+      </div>
+      {c.ok ? (
+        <table className="text-sm">
+          <tbody>
+            <tr><th scope="row" className="pr-3 text-left font-normal text-graphite">Total</th><td className="font-display">{formatNumber(c.value.total)} {w.unit}</td></tr>
+            <tr><th scope="row" className="pr-3 text-left font-normal text-graphite">Front / rear</th><td>{formatPercent(c.value.frontPercent)} / {formatPercent(c.value.rearPercent)}</td></tr>
+            <tr><th scope="row" className="pr-3 text-left font-normal text-graphite">Left / right</th><td>{formatPercent(c.value.leftPercent)} / {formatPercent(c.value.rightPercent)}</td></tr>
+            <tr><th scope="row" className="pr-3 text-left font-normal text-graphite">Cross</th><td>{formatPercent(c.value.crossPercent)}</td></tr>
+          </tbody>
+        </table>
+      ) : null}
+    </div>
+  );
+}
+
+export function WeighInsPanel({ build }: { build: OwnerBuild }) {
+  const list = [...build.weighIns].sort(newestFirst);
+  const [adding, setAdding] = useState(false);
+  const [deleting, setDeleting] = useState<WeighIn | null>(null);
+  const [message, setMessage] = useState<{ tone: 'ok' | 'danger'; text: string } | null>(null);
+  const apply = useApplyWeighIn(build.id);
+  const remove = useDeleteWeighIn(build.id);
+  return (
+    <EditorSection id="weighIns" title="Weigh-ins">
+      <div className="flex flex-col gap-4">
+        {message ? <Notice tone={message.tone}>{message.text}</Notice> : null}
+        {list.length === 0 ? <p className="text-sm text-graphite">No weigh-ins yet. Four corner scales give the weight and its splits.</p> : null}
+        <ul className="flex flex-col gap-3">
+          {list.map((w) => (
+            <li key={w.id} className="border border-rule p-3">
+              <p className="font-display uppercase">
+                {w.date} · {w.withDriver ? 'with driver' : 'no driver'} · fuel {FUEL_LABELS[w.fuelLevel].toLowerCase()}
+              </p>
+              {w.note ? <p className="text-sm text-graphite">{w.note}</p> : null}
+              <div className="mt-2">
+                <Corners w={w} />
+              </div>
+              <div className="mt-2 flex flex-wrap gap-2">
+                <Button
+                  type="button"
+                  variant="secondary"
+                  busy={apply.isPending && apply.variables === w.id}
+                  onClick={() => apply.mutate(w.id, { onSuccess: () => setMessage({ tone: 'ok', text: `The build’s weight is now measured on ${w.date}. The earlier figure is kept in the history.` }), onError: (err) => setMessage({ tone: 'danger', text: err.message }) })}
+                >
+                  Use as the build’s weight
+                </Button>
+                <Button type="button" variant="quiet" onClick={() => setDeleting(w)}>
+                  Delete
+                </Button>
+              </div>
+            </li>
+          ))}
+        </ul>
+        {adding ? (
+          <WeighInForm build={build} onDone={() => setAdding(false)} />
+        ) : (
+          <Button type="button" className="self-start" onClick={() => setAdding(true)}>
+            Add a weigh-in
+          </Button>
+        )}
+      </div>
+      <ConfirmDialog
+        open={deleting !== null}
+        title="Delete this weigh-in?"
+        confirmLabel="Delete the weigh-in"
+        busy={remove.isPending}
+        onCancel={() => setDeleting(null)}
+        onConfirm={() => deleting && remove.mutate(deleting.id, { onSettled: () => setDeleting(null), onError: (err) => setMessage({ tone: 'danger', text: err.message }) })}
+      >
+        The weigh-in of {deleting?.date} goes for good. A weight already taken from it stays as it is.
+      </ConfirmDialog>
+    </EditorSection>
+  );
+}

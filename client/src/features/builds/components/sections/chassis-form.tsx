@@ -1,0 +1,42 @@
+import { ChassisSectionSchema, FRAME_KINDS, type ChassisSection } from '@shared/schemas/build-sections';
+import type { OwnerBuild } from '@shared/schemas/build';
+import { useSaveSection } from '../../api/save-section';
+import { useEditorForm } from '../editor/use-editor-form';
+import { MADE_BY_BLANKS, withBlanks } from '../editor/form-values';
+import { SectionForm } from '../editor/section-form';
+import { Choice, FigureField, MadeByFields, TextInput } from '../editor/fields';
+import { SectionNumbers } from '../numbers/numbers-panel';
+import { FourLinkFields, SuspensionEndFields } from './suspension-end-fields';
+import { TubesFields } from './tubes-fields';
+
+const END_TEXT = ['type', 'springType', 'dampers', 'antiRollBar', 'description'];
+const TEXT = ['frame', 'frameDescription', ...END_TEXT.map((k) => `front.${k}`), ...END_TEXT.map((k) => `rear.${k}`), ...MADE_BY_BLANKS];
+const fromBuild = (b: OwnerBuild) => {
+  const values = withBlanks<ChassisSection>(b.sections.chassis, TEXT);
+  return { ...values, tubes: (values.tubes ?? []).map((t) => ({ ...t, material: t.material ?? '' })) };
+};
+const FIELDS = Object.keys(ChassisSectionSchema.shape);
+const FRAME_LABELS = { factory: 'Factory', modified: 'Modified factory', custom: 'Custom tube' };
+
+export function ChassisForm({ build }: { build: OwnerBuild }) {
+  const mutation = useSaveSection(build.id, 'chassis');
+  const { form, onSubmit, formError, status, saving } = useEditorForm<ChassisSection, ChassisSection>({ formKey: 'chassis', schema: ChassisSectionSchema, fromBuild, mutation, fields: FIELDS });
+  const { register, control, formState: { errors } } = form;
+  const f = { register, errors, form: 'chassis' as const };
+  return (
+    <SectionForm id="chassis" title="Chassis and suspension" caution status={status} formError={formError} saving={saving} onSubmit={onSubmit} below={<SectionNumbers section="chassis" />}>
+      <div className="grid gap-4 sm:grid-cols-2">
+        <Choice {...f} name="frame" label="Frame" options={FRAME_KINDS} labels={FRAME_LABELS} />
+        <TextInput {...f} name="frameDescription" label="Frame description" />
+        <FigureField control={control} form="chassis" name="wheelbase" label="Wheelbase" kind="length" />
+        <FigureField control={control} form="chassis" name="trackFront" label="Front track" kind="length" />
+        <FigureField control={control} form="chassis" name="trackRear" label="Rear track" kind="length" />
+      </div>
+      <TubesFields register={register} errors={errors} control={control} />
+      <SuspensionEndFields end="front" register={register} errors={errors} control={control} />
+      <SuspensionEndFields end="rear" register={register} errors={errors} control={control} />
+      <FourLinkFields register={register} errors={errors} />
+      <MadeByFields register={register} errors={errors} control={control} />
+    </SectionForm>
+  );
+}

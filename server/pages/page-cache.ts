@@ -1,0 +1,94 @@
+import { createHash } from 'node:crypto';
+import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
+
+/** A rendered page in the three encodings we send, with the version of the build it shows. */
+export type CachedPage = { version: string; etag: string; identity: Buffer; gzip: Buffer; br: Buffer; checkedAt: number };
+
+export function compressPage(html: string, version: string): Omit<CachedPage, 'checkedAt'> {
+  const identity = Buffer.from(html, 'utf8');
+  return {
+    version,
+    // Weak: the same page is sent in three encodings under one validator.
+    etag: `W/"${createHash('sha1').update(identity).digest('base64url').slice(0, 22)}"`,
+    identity,
+    gzip: gzipSync(identity, { level: 9 }),
+    br: brotliCompressSync(identity, { params: { [zlib.BROTLI_PARAM_QUALITY]: 11, [zlib.BROTLI_PARAM_SIZE_HINT]: identity.length } }),
+  };
+}
+
+/**
+ * In-process LRU of rendered public pages, keyed by code and unit system. Each entry carries the
+ * build's version (see publicVersion), so any server process can check it is current with one
+ * cheap query; under a crowd an entry checked in the last `revalidateAfterMs` is served as is.
+ */
+export class PageCache {
+  private entries = new Map<string, CachedPage>();
+  private pending = new Map<string, Promise<CachedPage | null>>();
+
+  constructor(
+    public maxEntries = 500,
+    /** How long a checked entry is trusted without asking the database again. */
+    public revalidateAfterMs = 1000,
+  ) {}
+
+  get(key: string): CachedPage | undefined {
+    const hit = this.entries.get(key);
+    if (hit) {
+      this.entries.delete(key); // re-insert: Map order is our recency order
+      this.entries.set(key, hit);
+    }
+    return hit;
+  }
+
+  set(key: string, page: CachedPage): void {
+    this.entries.delete(key);
+    this.entries.set(key, page);
+    while (this.entries.size > this.maxEntries) this.entries.delete(this.entries.keys().next().value!);
+  }
+
+  delete(key: string): void {
+    this.entries.delete(key);
+  }
+
+  clear(): void {
+    this.entries.clear();
+  }
+
+  get size() {
+    return this.entries.size;
+  }
+
+  /** Renders once when many visitors ask for the same cold page at the same moment. */
+  once(key: string, render: () => Promise<CachedPage | null>): Promise<CachedPage | null> {
+    const running = this.pending.get(key);
+    if (running) return running;
+    const p = render().finally(() => this.pending.delete(key));
+    this.pending.set(key, p);
+    return p;
+  }
+}
+
+export const publicPageCache = new PageCache();
+
+/** br, then gzip, then none, honouring q=0. */
+export function pickEncoding(header: string | undefined): 'br' | 'gzip' | 'identity' {
+  if (!header) return 'identity';
+  const accepted = new Set<string>();
+  for (const part of header.toLowerCase().split(',')) {
+    const [name = '', ...params] = part.trim().split(';');
+    const q = params.map((p) => p.trim()).find((p) => p.startsWith('q='));
+    if (q && Number(q.slice(2)) === 0) continue;
+    accepted.add(name.trim());
+  }
+  if (accepted.has('br')) return 'br';
+  if (accepted.has('gzip') || accepted.has('*')) return 'gzip';
+  return 'identity';
+}
+
+/** If-None-Match against our weak ETag (weak comparison, as RFC 9110 asks for GET). */
+export function matchesEtag(header: string | undefined, etag: string): boolean {
+  if (!header) return false;
+  if (header.trim() === '*') return true;
+  const bare = etag.replace(/^W\//, '');
+  return header.split(',').some((t) => t.trim().replace(/^W\//, '') === bare);
+}

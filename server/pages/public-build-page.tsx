@@ -1,0 +1,301 @@
+import { renderToStaticMarkup } from 'react-dom/server';
+import { ENGINEERING_CAUTION, convert, cornerWeights, formatNumber, formatPercent, formatQuantity, type Unit, type UnitSystem } from '@shared/calc';
+import { BUILD_STYLE_LABELS, type Photo, type PublicBuild } from '@shared/schemas/build';
+import type { KeyFigure } from '@shared/schemas/card';
+import { config } from '../config';
+import { computeKeyFigures } from '../presenters/public-build';
+import { engineLine, sectionViews, type SectionView } from '../presenters/public-spec-lines';
+import { DynoChart } from './dyno-chart';
+import { PAGE_CSS } from './page-styles';
+
+/** What a show adds to the page once events exist: the entry, and the people's choice vote while it is open. */
+export type ShowEntrySlot = { showName: string; className?: string; entryNumber?: string; voteUrl?: string } | null;
+
+const absolute = (url: string) => (url.startsWith('http') ? url : `${config.publicBaseUrl}${url}`);
+const cover = (b: PublicBuild) => b.photos.find((p) => p.isCover) ?? b.photos[0] ?? null;
+const styleLabel = (s: string | null) => (s && s in BUILD_STYLE_LABELS ? BUILD_STYLE_LABELS[s as keyof typeof BUILD_STYLE_LABELS] : null);
+export const headingOf = (b: PublicBuild) => [b.modelYear ?? '', b.bodyOrigin ?? ''].join(' ').trim() || b.title;
+const mark = (f: { provenance: KeyFigure['provenance'] }) => (f.provenance === 'estimated' ? 'est.' : f.provenance === 'target' ? 'target' : null);
+
+function Picture({ photo, sizes, lazy, alt }: { photo: Photo; sizes: string; lazy: boolean; alt: string }) {
+  const src = photo.sources.find((s) => s.width >= 960) ?? photo.sources[photo.sources.length - 1];
+  if (!src) return null;
+  return (
+    <picture>
+      <source type="image/webp" srcSet={photo.sources.map((s) => `${s.webp} ${s.width}w`).join(', ')} sizes={sizes} />
+      <img
+        src={src.jpeg}
+        srcSet={photo.sources.map((s) => `${s.jpeg} ${s.width}w`).join(', ')}
+        sizes={sizes}
+        width={src.width}
+        height={src.height}
+        alt={alt}
+        decoding="async"
+        {...(lazy ? { loading: 'lazy' as const } : { fetchPriority: 'high' as const })}
+      />
+    </picture>
+  );
+}
+
+function Figures({ figures, units }: { figures: KeyFigure[]; units: UnitSystem }) {
+  if (figures.length === 0) return null;
+  return (
+    <dl className="fig">
+      {figures.map((f) => (
+        <div key={f.key}>
+          <dt>{f.label}</dt>
+          <dd>
+            {f[units].text}
+            {mark(f) ? <span className="mk"> {mark(f)}</span> : null}
+            {f.note || f.measuredOn ? <small>{[f.note, f.measuredOn ? `measured ${f.measuredOn}` : null].filter(Boolean).join(', ')}</small> : null}
+          </dd>
+        </div>
+      ))}
+    </dl>
+  );
+}
+
+function Section({ view }: { view: SectionView }) {
+  return (
+    <section id={view.kind} aria-labelledby={`h-${view.kind}`}>
+      <h2 id={`h-${view.kind}`}>{view.label}</h2>
+      {view.rows.length ? (
+        <dl className="spec">
+          {view.rows.map((r, i) => (
+            <Row key={i} label={r.label} value={r.value} />
+          ))}
+        </dl>
+      ) : null}
+      {view.madeBy ? <p className="made">Made by: {view.madeBy}</p> : null}
+      {view.note ? <p className="why">{view.note}</p> : null}
+      {view.caution ? <p className="care">{view.caution}</p> : null}
+    </section>
+  );
+}
+
+const Row = ({ label, value }: { label: string; value: string }) => (
+  <>
+    <dt>{label}</dt>
+    <dd>{value}</dd>
+  </>
+);
+
+function Dyno({ build, units }: { build: PublicBuild; units: UnitSystem }) {
+  if (build.dynoRuns.length === 0) return null;
+  const pu = units === 'imperial' ? 'hp' : 'kW';
+  const tu = units === 'imperial' ? 'lbft' : 'Nm';
+  const figure = (kind: 'power' | 'torque', v: number, from: string) => computeUnit(kind, v, from, kind === 'power' ? pu : tu);
+  return (
+    <section id="dyno" className="dyno" aria-labelledby="h-dyno">
+      <h2 id="h-dyno">Dyno</h2>
+      <DynoChart runs={build.dynoRuns} units={units} />
+      <table>
+        <thead>
+          <tr>
+            <th>Date</th>
+            <th>Peak power</th>
+            <th>Peak torque</th>
+            <th>Measured</th>
+          </tr>
+        </thead>
+        <tbody>
+          {build.dynoRuns.map((r, i) => (
+            <tr key={i}>
+              <td>{r.date}</td>
+              <td>
+                {figure('power', r.peakPower, r.powerUnit)} at {formatNumber(r.peakPowerRpm)} rpm
+              </td>
+              <td>
+                {figure('torque', r.peakTorque, r.torqueUnit)} at {formatNumber(r.peakTorqueRpm)} rpm
+              </td>
+              <td>
+                {r.measuredAt === 'wheel' ? 'at the wheels' : 'at the flywheel'}, {r.standard}
+                {r.facility ? `, ${r.facility}` : ''}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <p>Power solid, torque dashed; the latest run in the accent colour.</p>
+    </section>
+  );
+}
+
+function computeUnit(kind: 'power' | 'torque', value: number, from: string, to: string) {
+  return formatQuantity({ value: convert(kind, value, from as never, to as never), unit: to as Unit });
+}
+
+function WeighIns({ build, units }: { build: PublicBuild; units: UnitSystem }) {
+  const w = build.weighIns[0];
+  if (!w) return null;
+  const to = units === 'imperial' ? 'lb' : 'kg';
+  const cw = cornerWeights(w);
+  const mass = (v: number) => formatQuantity({ value: convert('mass', v, w.unit, to), unit: to });
+  return (
+    <section id="weigh-in" aria-labelledby="h-weigh">
+      <h2 id="h-weigh">Corner weights</h2>
+      <table>
+        <tbody>
+          <tr>
+            <th>Left front</th>
+            <td>{mass(w.leftFront)}</td>
+            <th>Right front</th>
+            <td>{mass(w.rightFront)}</td>
+          </tr>
+          <tr>
+            <th>Left rear</th>
+            <td>{mass(w.leftRear)}</td>
+            <th>Right rear</th>
+            <td>{mass(w.rightRear)}</td>
+          </tr>
+        </tbody>
+      </table>
+      <p className="made">
+        Total {mass(cw.total)} · front {formatPercent(cw.frontPercent)} · left {formatPercent(cw.leftPercent)} · cross {formatPercent(cw.crossPercent)}. Weighed {w.date}, {w.withDriver ? 'with driver' : 'without driver'}, fuel {w.fuelLevel.replace('-', ' ')}.
+      </p>
+    </section>
+  );
+}
+
+function ShowEntry({ slot }: { slot: ShowEntrySlot }) {
+  if (!slot) return null;
+  return (
+    <section id="show-entry" className="show" aria-label="Show entry">
+      <p className="d">{slot.showName}</p>
+      {slot.className ? <p>Class: {slot.className}</p> : null}
+      {slot.entryNumber ? <p className="d">Entry {slot.entryNumber}</p> : null}
+      {slot.voteUrl ? (
+        <form method="post" action={slot.voteUrl}>
+          <button type="submit">Vote for this car: people&apos;s choice</button>
+        </form>
+      ) : null}
+    </section>
+  );
+}
+
+function Page({ build, units, show }: { build: PublicBuild; units: UnitSystem; show: ShowEntrySlot }) {
+  const heading = headingOf(build);
+  const photo = cover(build);
+  const figures = computeKeyFigures(build);
+  const views = sectionViews(build.sections, units);
+  const engine = engineLine(build.sections.engine, units);
+  const byline = [styleLabel(build.style), build.ownerName ? `owned by ${build.ownerName}` : null].filter(Boolean).join(' · ');
+  const description = [engine, figures.map((f) => `${f.label} ${f[units].text}${mark(f) ? ` ${mark(f)}` : ''}`).join(', ')].filter(Boolean).join('. ') || `${heading} on Placard.`;
+  const og = photo?.sources.find((s) => s.width >= 960) ?? photo?.sources[photo.sources.length - 1];
+  const title = build.title !== heading ? `${build.title}: ${heading}` : heading;
+  const gallery = build.photos.filter((p) => p !== photo);
+  const other: UnitSystem = units === 'metric' ? 'imperial' : 'metric';
+  return (
+    <html lang="en">
+      <head>
+        <meta charSet="utf-8" />
+        <meta name="viewport" content="width=device-width, initial-scale=1" />
+        <title>{`${title} · Placard`}</title>
+        <meta name="description" content={description} />
+        <link rel="canonical" href={build.url} />
+        <meta property="og:type" content="website" />
+        <meta property="og:site_name" content="Placard" />
+        <meta property="og:title" content={title} />
+        <meta property="og:description" content={description} />
+        <meta property="og:url" content={build.url} />
+        {og ? <meta property="og:image" content={absolute(og.jpeg)} /> : null}
+        {og ? <meta property="og:image:width" content={String(og.width)} /> : null}
+        {og ? <meta property="og:image:height" content={String(og.height)} /> : null}
+        <meta name="twitter:card" content={og ? 'summary_large_image' : 'summary'} />
+        <meta name="twitter:title" content={title} />
+        <meta name="twitter:description" content={description} />
+        {og ? <meta name="twitter:image" content={absolute(og.jpeg)} /> : null}
+        <meta name="theme-color" content="#F5F0E6" />
+        <style dangerouslySetInnerHTML={{ __html: PAGE_CSS }} />
+      </head>
+      <body>
+        <header className="bar">
+          <a className="brand" href="/">
+            PLACARD
+          </a>
+          <nav className="units" aria-label="Units">
+            <a href={`?units=metric`} {...(units === 'metric' ? { 'aria-current': 'true' as const } : {})}>
+              Metric
+            </a>
+            <a href={`?units=imperial`} {...(units === 'imperial' ? { 'aria-current': 'true' as const } : {})}>
+              Imperial
+            </a>
+          </nav>
+        </header>
+        <main>
+          {photo ? (
+            <figure className="cover">
+              <Picture photo={photo} sizes="(min-width: 800px) 760px, 100vw" lazy={false} alt={photo.caption || heading} />
+            </figure>
+          ) : null}
+          <h1>
+            {build.title !== heading ? <span className="kicker">{build.title}</span> : null}
+            {heading}
+          </h1>
+          {byline ? <p className="by">{byline}</p> : null}
+          <ShowEntry slot={show} />
+          <Figures figures={figures} units={units} />
+          {engine ? <p className="eng">{engine}</p> : null}
+          {build.story.trim() ? (
+            <section className="story" aria-labelledby="h-story">
+              <h2 id="h-story">The story</h2>
+              {build.story
+                .split(/\n{2,}/)
+                .filter((p) => p.trim())
+                .map((p, i) => (
+                  <p key={i}>{p.trim()}</p>
+                ))}
+            </section>
+          ) : null}
+          {views.map((v) => (
+            <Section key={v.kind} view={v} />
+          ))}
+          <Dyno build={build} units={units} />
+          <WeighIns build={build} units={units} />
+          {gallery.length ? (
+            <section id="photos" aria-labelledby="h-photos">
+              <h2 id="h-photos">Photos</h2>
+              <ul className="gal">
+                {gallery.map((p) => (
+                  <li key={p.id}>
+                    <figure>
+                      <Picture photo={p} sizes="(min-width: 800px) 372px, 100vw" lazy alt={p.caption || heading} />
+                      {p.caption ? <figcaption>{p.caption}</figcaption> : null}
+                    </figure>
+                  </li>
+                ))}
+              </ul>
+            </section>
+          ) : null}
+          {build.credits.length ? (
+            <section id="credits" aria-labelledby="h-credits">
+              <h2 id="h-credits">Credits</h2>
+              <dl className="spec">
+                {build.credits.map((c, i) => (
+                  <Row key={i} label={c.role} value={c.name} />
+                ))}
+              </dl>
+            </section>
+          ) : null}
+        </main>
+        <footer>
+          <p>
+            Figures marked est. are estimates and those marked target are goals; the rest were measured. {views.some((v) => v.caution) ? ENGINEERING_CAUTION : ''}
+          </p>
+          <p>
+            Build sheet {build.code} on Placard · updated {build.updatedAt.slice(0, 10)} ·{' '}
+            <a href={`?units=${other}`}>show in {other} units</a>
+          </p>
+        </footer>
+      </body>
+    </html>
+  );
+}
+
+/** The whole public page as a string: complete HTML with its style inlined and no script. */
+export function renderPublicBuildPage(build: PublicBuild, units: UnitSystem, show: ShowEntrySlot = null): string {
+  return `<!doctype html>${renderToStaticMarkup(<Page build={build} units={units} show={show} />)}`;
+}
+
+/** One plain page for every code that is not a published build, so a guess learns nothing. */
+export const NOT_FOUND_HTML = `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><meta name="robots" content="noindex"><title>No build here · Placard</title><style>html{background:#F5F0E6;color:#1C1B19;font:16px/1.5 system-ui,sans-serif}main{max-width:560px;margin:15vh auto;padding:0 16px}h1{font:600 2rem/1.1 Oswald,"Arial Narrow",sans-serif;text-transform:uppercase}</style></head><body><main><h1>No build here</h1><p>There is no published build sheet at this address. Check the code on the card and try again.</p><p><a href="/">Placard</a></p></main></body></html>`;

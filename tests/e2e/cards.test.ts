@@ -1,0 +1,66 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import type { Server } from 'node:http';
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { launchBrowser, SCREENSHOT_DIR, startTestServer } from '../support/browser';
+import { createUser } from '../support/factories';
+import { createFullBuild } from '../support/build-factory';
+import { mediaBoxes, pageCount } from '../support/pdf';
+import { Build } from '@server/models/build';
+
+let browser: Browser;
+let server: Server;
+let baseUrl: string;
+
+beforeAll(async () => {
+  ({ server, baseUrl } = await startTestServer());
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await new Promise((r) => server?.close(r));
+});
+
+describe('the card designer', () => {
+  it('changes the design and the paper, saves the choices and downloads the PDF', async () => {
+    const { user, email, password } = await createUser({ name: 'Rowan Teller' });
+    const build = await createFullBuild(user.id);
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, acceptDownloads: true });
+    const page = await context.newPage();
+    await page.goto(`${baseUrl}/sign-in`);
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByLabel('Password').fill(password);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+
+    await page.goto(`${baseUrl}/builds/${build.id}/card`);
+    await expect.poll(() => page.getByRole('heading', { name: 'Windshield card' }).count()).toBe(1);
+    const preview = page.getByTitle('Card preview');
+    await expect.poll(() => preview.getAttribute('src')).toContain('design=poster&paper=letter&orientation=portrait');
+
+    await page.getByRole('radio', { name: /Data sheet/ }).check();
+    await page.getByRole('radio', { name: /A4/ }).check();
+    await page.getByRole('radio', { name: 'Landscape' }).check();
+    await page.getByRole('checkbox', { name: 'Extras' }).uncheck();
+    await expect.poll(() => preview.getAttribute('src')).toContain('design=data-sheet&paper=a4&orientation=landscape');
+    await expect.poll(() => page.getByText('Choices saved with the build.').count(), { timeout: 10_000 }).toBe(1);
+    const saved = (await Build.findByPk(build.id))!.cardSettings as Record<string, unknown>;
+    expect(saved).toMatchObject({ design: 'data-sheet', paper: 'a4', orientation: 'landscape' });
+    expect(saved.sections).not.toContain('extra');
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'card-designer.png'), fullPage: true });
+
+    const [download] = await Promise.all([page.waitForEvent('download', (d) => d.suggestedFilename().includes('data-sheet-a4-landscape')), page.getByRole('link', { name: 'Download PDF' }).click()]);
+    const pdf = readFileSync((await download.path())!);
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    const [box] = mediaBoxes(pdf);
+    expect(box![2]).toBeCloseTo(841.8898, 2);
+    expect(box![3]).toBeCloseTo(595.2756, 2);
+    expect(pageCount(pdf).objects).toBe(1);
+
+    // Next time, the saved choices are already there: one click to print.
+    await page.reload();
+    await expect.poll(() => page.getByRole('radio', { name: /Data sheet/ }).isChecked()).toBe(true);
+    await context.close();
+  });
+});

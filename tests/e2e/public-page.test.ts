@@ -1,0 +1,50 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import type { Server } from 'node:http';
+import path from 'node:path';
+import { launchBrowser, SCREENSHOT_DIR, startTestServer } from '../support/browser';
+import { createUser } from '../support/factories';
+import { createFullBuild } from '../support/build-factory';
+import { storePhotosForBuild } from '@server/services/photos';
+import { jpegWithGps } from '../support/images';
+
+let browser: Browser;
+let server: Server;
+let baseUrl: string;
+
+beforeAll(async () => {
+  ({ server, baseUrl } = await startTestServer());
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await new Promise((r) => server?.close(r));
+});
+
+describe('the public build page on a phone', () => {
+  it('reads whole with JavaScript turned off, and the units switch still works', async () => {
+    const { user } = await createUser({ name: 'Rowan Teller' });
+    const build = await createFullBuild(user.id);
+    await storePhotosForBuild(build.id, [{ buffer: await jpegWithGps(), originalName: 'cover.jpg' }]);
+    const context = await browser.newContext({ javaScriptEnabled: false, viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, locale: 'en-US' });
+    const page = await context.newPage();
+    const res = await page.goto(`${baseUrl}/c/${build.code}`);
+    expect(res?.status()).toBe(200);
+    expect(await page.locator('script').count()).toBe(0);
+    await expect.poll(() => page.getByRole('heading', { level: 1 }).innerText()).toMatch(/1969 fastback coupe/i);
+    for (const name of ['Engine', 'Drivetrain', 'Chassis and suspension', 'Brakes', 'Wheels and tyres', 'Body and interior', 'Dyno', 'Credits']) {
+      expect(await page.getByRole('heading', { name, exact: true }).count(), name).toBe(1);
+    }
+    expect(await page.getByText('275/35R18').count()).toBeGreaterThan(0);
+    expect(await page.getByText(/3,415\s*lb/).count()).toBeGreaterThan(0);
+    // Nothing wider than the phone.
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'public-page-phone.png'), fullPage: true });
+
+    await page.getByRole('link', { name: 'Metric', exact: true }).click();
+    await page.waitForURL(/units=metric/);
+    expect(await page.getByText(/1,549\s*kg/).count()).toBeGreaterThan(0);
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'public-page-phone-top.png') });
+    await context.close();
+  });
+});
