@@ -6,8 +6,6 @@ import { SignInPage } from '@client/features/session/components/sign-in-page';
 import { SignUpPage } from '@client/features/session/components/sign-up-page';
 import { ResetPasswordPage } from '@client/features/account/components/reset-password-page';
 import { AccountPage } from '@client/features/account/components/account-page';
-import { AccountsPage } from '@client/features/admin/components/accounts-page';
-import { MailListPage, MailMessagePage } from '@client/features/admin/components/mail-page';
 import { MyBuildsPage } from '@client/features/builds/components/my-builds-page';
 import { NotFoundPage } from './not-found-page';
 import { RouteError } from './route-error';
@@ -40,9 +38,31 @@ export const router = createBrowserRouter([
         },
         errorElement: <RouteError />,
       },
-      { path: '/admin/accounts', element: <RequireUser ability="manageAccounts"><AccountsPage /></RequireUser>, errorElement: <RouteError /> },
-      { path: '/admin/mail', element: <RequireUser ability="readCaughtMail"><MailListPage /></RequireUser>, errorElement: <RouteError /> },
-      { path: '/admin/mail/:id', element: <RequireUser ability="readCaughtMail"><MailMessagePage /></RequireUser>, errorElement: <RouteError /> },
+      // The site admin's screens (and the table library they use) load only for the site admin.
+      {
+        path: '/admin/accounts',
+        lazy: async () => {
+          const { AccountsPage } = await import('@client/features/admin/components/accounts-page');
+          return { element: <RequireUser ability="manageAccounts"><AccountsPage /></RequireUser> };
+        },
+        errorElement: <RouteError />,
+      },
+      {
+        path: '/admin/mail',
+        lazy: async () => {
+          const { MailListPage } = await import('@client/features/admin/components/mail-page');
+          return { element: <RequireUser ability="readCaughtMail"><MailListPage /></RequireUser> };
+        },
+        errorElement: <RouteError />,
+      },
+      {
+        path: '/admin/mail/:id',
+        lazy: async () => {
+          const { MailMessagePage } = await import('@client/features/admin/components/mail-page');
+          return { element: <RequireUser ability="readCaughtMail"><MailMessagePage /></RequireUser> };
+        },
+        errorElement: <RouteError />,
+      },
       { path: '*', element: <NotFoundPage /> },
     ],
   },
