@@ -38,6 +38,7 @@ dl.spec dd{font-variant-numeric:tabular-nums}
 .care{margin:8px 0 0;padding:8px 10px;border-left:3px solid var(--signal);background:#fff8;font-size:.875rem;color:var(--graphite)}
 .dyno svg{width:100%;height:auto;display:block;background:#fff;border:1px solid var(--rule)}
 .dyno p{font-size:.875rem;color:var(--graphite);margin:6px 0 0}
+.dyno td:first-child,.nw{white-space:nowrap}
 table{border-collapse:collapse;width:100%;font-variant-numeric:tabular-nums}
 th,td{text-align:left;padding:6px 8px 6px 0;border-bottom:1px solid var(--rule);vertical-align:top}
 th{font-weight:600;color:var(--graphite);font-size:.875rem}

@@ -47,7 +47,13 @@ function Figures({ figures, units }: { figures: KeyFigure[]; units: UnitSystem }
           <dd>
             {f[units].text}
             {mark(f) ? <span className="mk"> {mark(f)}</span> : null}
-            {f.note || f.measuredOn ? <small>{[f.note, f.measuredOn ? `measured ${f.measuredOn}` : null].filter(Boolean).join(', ')}</small> : null}
+            {f.note || f.measuredOn ? (
+              <small>
+                {f.note}
+                {f.note && f.measuredOn ? ', ' : ''}
+                {f.measuredOn ? <span className="nw">measured {f.measuredOn}</span> : null}
+              </small>
+            ) : null}
           </dd>
         </div>
       ))}

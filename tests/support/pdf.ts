@@ -1,5 +1,5 @@
 import { execFileSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { PNG } from 'pngjs';
@@ -28,7 +28,7 @@ export async function pdfText(pdf: Buffer): Promise<string> {
 }
 
 export const PDFTOPPM = '/usr/bin/pdftoppm';
-export const canRasterize = () => existsSync(PDFTOPPM);
+// npm test installs poppler-utils when pdftoppm is missing (tests/support/run-all.ts).
 
 /** The first page as RGBA pixels at `dpi` (needs poppler's pdftoppm). */
 export function rasterize(pdf: Buffer, dpi: number): { width: number; height: number; data: Buffer } {

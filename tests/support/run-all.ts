@@ -10,17 +10,24 @@ import { CHROMIUM } from './browser';
 
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 
-function ensureChromium() {
-  if (existsSync(CHROMIUM)) return;
-  if (process.getuid?.() !== 0) throw new Error(`${CHROMIUM} is missing: install Debian's chromium package (apt-get install chromium).`);
-  console.log("Installing Debian's chromium for the browser tests…");
-  for (const args of [['update'], ['install', '-y', '--no-install-recommends', 'chromium']]) {
+// Debian packages the tests need: the browser for journeys, poppler to print cards to pixels and read their QR codes.
+const TOOLS = [
+  { binary: CHROMIUM, pkg: 'chromium' },
+  { binary: '/usr/bin/pdftoppm', pkg: 'poppler-utils' },
+];
+
+function ensureTools() {
+  const missing = TOOLS.filter((t) => !existsSync(t.binary)).map((t) => t.pkg);
+  if (!missing.length) return;
+  if (process.getuid?.() !== 0) throw new Error(`Missing Debian packages for the tests: ${missing.join(', ')} (apt-get install ${missing.join(' ')}).`);
+  console.log(`Installing Debian's ${missing.join(' and ')} for the tests…`);
+  for (const args of [['update'], ['install', '-y', '--no-install-recommends', ...missing]]) {
     const r = spawnSync('apt-get', args, { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
     if (r.status !== 0) throw new Error(`apt-get ${args.join(' ')} failed`);
   }
 }
 
-ensureChromium();
+ensureTools();
 await ensureDatabase();
 buildClientIfStale();
 const vitest = spawnSync(process.execPath, [path.join(ROOT, 'node_modules/vitest/vitest.mjs'), 'run', ...process.argv.slice(2)], { cwd: ROOT, stdio: 'inherit' });
