@@ -54,8 +54,10 @@ export type CoverImage = NonNullable<CardContent['cover']>;
 /** The words and figures of a card, from the public face of the build only (never the model). */
 export function cardContent(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null } = {}): CardContent {
   const units = settings.units;
-  const heading = [build.modelYear ?? '', build.bodyOrigin ?? ''].join(' ').trim() || build.title;
-  const name = build.title.trim().toLowerCase() === heading.toLowerCase() ? null : build.title;
+  // The owner's title leads (with the model year in front when the title leaves it out); the body line sits above it.
+  const year = build.modelYear ? String(build.modelYear) : '';
+  const heading = year && !build.title.includes(year) ? `${year} ${build.title}` : build.title;
+  const name = build.bodyOrigin?.trim() || null;
   const style = build.style && build.style in BUILD_STYLE_LABELS ? BUILD_STYLE_LABELS[build.style as keyof typeof BUILD_STYLE_LABELS] : null;
   const figures = computeKeyFigures(build)
     .filter((f) => settings.figures.includes(f.key))

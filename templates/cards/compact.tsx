@@ -25,7 +25,8 @@ export function CompactCard({ content, paper, orientation }: CardProps) {
   const figValue = 44 * k;
   const sections = content.sections.slice(0, 4);
   const figuresH = figures.length * (figValue * 1.18 + 30 * k);
-  const headH = (content.name ? 19 * k : 0) + headingSize * 1.2 * headingLines + 24 * k;
+  // Oswald's line box is taller than 1.2 × size in react-pdf: allow 1.32 so the byline never rides on the title.
+  const headH = (content.name ? 19 * k : 0) + headingSize * 1.32 * headingLines + 26 * k;
   const qrAreaH = box.landscape ? 0 : qr + 30 * k;
   const topShowH = content.show && !box.landscape ? 126 * k : 0;
   const listH = Math.max(30 * k, ch - footerH - topShowH - headH - (box.landscape ? figuresH : Math.max(figuresH, qrAreaH)) - 34 * k - gap * 3);
@@ -51,8 +52,8 @@ export function CompactCard({ content, paper, orientation }: CardProps) {
           ) : null}
           <View style={{ height: headH, justifyContent: 'flex-end', borderBottomWidth: 6 * k, borderBottomColor: SIGNAL, paddingBottom: 6 * k, marginBottom: gap }}>
             {content.name ? <Text style={{ fontFamily: DISPLAY, fontWeight: 500, fontSize: 14 * k, color: SIGNAL, letterSpacing: 1.2, textTransform: 'uppercase', maxLines: 1, flexShrink: 0 }}>{content.name}</Text> : null}
-            <Text style={{ fontFamily: DISPLAY, fontWeight: 700, fontSize: headingSize, lineHeight: 1.2, textTransform: 'uppercase', maxLines: 2, flexShrink: 0 }}>{clampText(content.heading.toUpperCase(), mainW, headingSize, 2, 'display')}</Text>
-            <Text style={{ fontFamily: TEXT, fontSize: 11 * k, color: GRAPHITE, marginTop: 5 * k, maxLines: 1, flexShrink: 0 }}>{content.byline}</Text>
+            <Text style={{ fontFamily: DISPLAY, fontWeight: 700, fontSize: headingSize, lineHeight: 1.32, textTransform: 'uppercase', maxLines: 2, flexShrink: 0 }}>{clampText(content.heading.toUpperCase(), mainW, headingSize, 2, 'display')}</Text>
+            <Text style={{ fontFamily: TEXT, fontSize: 11 * k, color: GRAPHITE, marginTop: 8 * k, maxLines: 1, flexShrink: 0 }}>{content.byline}</Text>
           </View>
           {box.landscape ? (
             figureStack

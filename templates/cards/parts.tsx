@@ -84,7 +84,7 @@ export function Figure({ figure, valueSize, width, k, dark = false, style }: { f
         <Text style={{ fontSize: size * 0.5, fontWeight: 500 }}>{` ${figure.unit}`}</Text>
         <Mark mark={figure.mark} size={size * 0.36} color={dark ? '#F08A63' : SIGNAL} />
       </Text>
-      {figure.note ? <Text style={{ fontFamily: TEXT, fontSize: 7 * k, color: dark ? RULE : GRAPHITE, maxLines: 1 }}>{figure.note}</Text> : null}
+      {figure.note ? <Text style={{ fontFamily: TEXT, fontSize: 7 * k, marginTop: size * 0.2, color: dark ? RULE : GRAPHITE, maxLines: 1 }}>{figure.note}</Text> : null}
     </View>
   );
 }
