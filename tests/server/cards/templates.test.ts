@@ -54,7 +54,8 @@ describe('windshield card templates', () => {
     const build = typicalPublicBuild({ weight: { value: 1540, unit: 'kg', provenance: 'estimated' }, dynoRuns: [] });
     for (const design of CARD_DESIGNS) {
       const text = (await pdfText(await renderCardPdf(build, { ...settingsFor({ design, paper: 'letter', orientation: 'portrait' }), units: 'metric' }, { show: SHOW }))).replace(/\s+/g, ' ');
-      expect(text).toContain('1969 FASTBACK COUPE');
+      expect(text).toMatch(/1969\s*NIGHT\s*SHIFT/); // the owner's title, with the model year
+      expect(text).toMatch(/FASTBACK\s*COUPE/i); // the body line
       expect(text).toMatch(/est\./i); // 650 hp est. flywheel power, in words
       expect(text).toContain('127.0.0.1:3999/c/K7P2M9Q');
       expect(text).toContain('117');
