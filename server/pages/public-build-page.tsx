@@ -3,7 +3,7 @@ import { ENGINEERING_CAUTION, convert, cornerWeights, formatNumber, formatPercen
 import { BUILD_STYLE_LABELS, type Photo, type PublicBuild } from '@shared/schemas/build';
 import type { KeyFigure } from '@shared/schemas/card';
 import { config } from '../config';
-import { computeKeyFigures } from '../presenters/public-build';
+import { computeKeyFigures, headlineOf } from '../presenters/public-build';
 import { engineLine, sectionViews, type SectionView } from '../presenters/public-spec-lines';
 import { DynoChart } from './dyno-chart';
 import { PAGE_CSS } from './page-styles';
@@ -14,7 +14,6 @@ export type ShowEntrySlot = { showName: string; className?: string; entryNumber?
 const absolute = (url: string) => (url.startsWith('http') ? url : `${config.publicBaseUrl}${url}`);
 const cover = (b: PublicBuild) => b.photos.find((p) => p.isCover) ?? b.photos[0] ?? null;
 const styleLabel = (s: string | null) => (s && s in BUILD_STYLE_LABELS ? BUILD_STYLE_LABELS[s as keyof typeof BUILD_STYLE_LABELS] : null);
-export const headingOf = (b: PublicBuild) => [b.modelYear ?? '', b.bodyOrigin ?? ''].join(' ').trim() || b.title;
 const mark = (f: { provenance: KeyFigure['provenance'] }) => (f.provenance === 'estimated' ? 'est.' : f.provenance === 'target' ? 'target' : null);
 
 function Picture({ photo, sizes, lazy, alt }: { photo: Photo; sizes: string; lazy: boolean; alt: string }) {
@@ -180,7 +179,7 @@ function ShowEntry({ slot }: { slot: ShowEntrySlot }) {
 }
 
 function Page({ build, units, show }: { build: PublicBuild; units: UnitSystem; show: ShowEntrySlot }) {
-  const heading = headingOf(build);
+  const { heading, kicker } = headlineOf(build);
   const photo = cover(build);
   const figures = computeKeyFigures(build);
   const views = sectionViews(build.sections, units);
@@ -188,7 +187,7 @@ function Page({ build, units, show }: { build: PublicBuild; units: UnitSystem; s
   const byline = [styleLabel(build.style), build.ownerName ? `owned by ${build.ownerName}` : null].filter(Boolean).join(' · ');
   const description = [engine, figures.map((f) => `${f.label} ${f[units].text}${mark(f) ? ` ${mark(f)}` : ''}`).join(', ')].filter(Boolean).join('. ') || `${heading} on Placard.`;
   const og = photo?.sources.find((s) => s.width >= 960) ?? photo?.sources[photo.sources.length - 1];
-  const title = build.title !== heading ? `${build.title}: ${heading}` : heading;
+  const title = kicker ? `${heading}: ${kicker}` : heading;
   const gallery = build.photos.filter((p) => p !== photo);
   const other: UnitSystem = units === 'metric' ? 'imperial' : 'metric';
   return (
@@ -235,7 +234,7 @@ function Page({ build, units, show }: { build: PublicBuild; units: UnitSystem; s
             </figure>
           ) : null}
           <h1>
-            {build.title !== heading ? <span className="kicker">{build.title}</span> : null}
+            {kicker ? <span className="kicker">{kicker}</span> : null}
             {heading}
           </h1>
           {byline ? <p className="by">{byline}</p> : null}

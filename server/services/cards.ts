@@ -9,7 +9,7 @@ import type { CardContent } from '@templates/cards/content';
 import { registerCardFonts } from '@templates/cards/fonts';
 import type { Build } from '../models/build';
 import { storage } from '../storage/index';
-import { computeKeyFigures } from '../presenters/public-build';
+import { computeKeyFigures, headlineOf } from '../presenters/public-build';
 import { engineLine, sectionViews } from '../presenters/public-spec-lines';
 
 /** Medium error correction (about 15% of the code can be lost to glare or a scuff) and a short URL: a low version, big modules. */
@@ -54,10 +54,7 @@ export type CoverImage = NonNullable<CardContent['cover']>;
 /** The words and figures of a card, from the public face of the build only (never the model). */
 export function cardContent(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null } = {}): CardContent {
   const units = settings.units;
-  // The owner's title leads (with the model year in front when the title leaves it out); the body line sits above it.
-  const year = build.modelYear ? String(build.modelYear) : '';
-  const heading = year && !build.title.includes(year) ? `${year} ${build.title}` : build.title;
-  const name = build.bodyOrigin?.trim() || null;
+  const { heading, kicker: name } = headlineOf(build);
   const style = build.style && build.style in BUILD_STYLE_LABELS ? BUILD_STYLE_LABELS[build.style as keyof typeof BUILD_STYLE_LABELS] : null;
   const figures = computeKeyFigures(build)
     .filter((f) => settings.figures.includes(f.key))

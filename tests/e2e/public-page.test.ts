@@ -31,7 +31,7 @@ describe('the public build page on a phone', () => {
     const res = await page.goto(`${baseUrl}/c/${build.code}`);
     expect(res?.status()).toBe(200);
     expect(await page.locator('script').count()).toBe(0);
-    await expect.poll(() => page.getByRole('heading', { level: 1 }).innerText()).toMatch(/1969 fastback coupe/i);
+    await expect.poll(() => page.getByRole('heading', { level: 1 }).innerText()).toMatch(/1969 Night Shift/i);
     for (const name of ['Engine', 'Drivetrain', 'Chassis and suspension', 'Brakes', 'Wheels and tyres', 'Body and interior', 'Dyno', 'Credits']) {
       expect(await page.getByRole('heading', { name, exact: true }).count(), name).toBe(1);
     }

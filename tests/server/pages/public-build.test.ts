@@ -30,7 +30,7 @@ describe('GET /c/:code, the public build page', () => {
     expect(html).not.toMatch(/<script/i);
     expect(html).not.toMatch(/\/assets\/index-/);
     expect(html).toContain('<style>');
-    for (const text of ['1969 fastback coupe', 'Night Shift', 'owned by Rowan Teller', 'Engine', 'Drivetrain', 'Chassis and suspension', 'Brakes', 'Wheels and tyres', 'Body and interior', 'Extras', '275/35R18', 'Double-wishbone', 'The story', 'Credits', 'Kestrel Lane Paint', 'Corner weights']) {
+    for (const text of ['1969 Night Shift', 'fastback coupe', 'owned by Rowan Teller', 'Engine', 'Drivetrain', 'Chassis and suspension', 'Brakes', 'Wheels and tyres', 'Body and interior', 'Extras', '275/35R18', 'Double-wishbone', 'The story', 'Credits', 'Kestrel Lane Paint', 'Corner weights']) {
       expect(html).toContain(text);
     }
     // Provenance in words, and the engineering caution beside chassis and brakes.
@@ -68,7 +68,7 @@ describe('GET /c/:code, the public build page', () => {
       { buffer: await sidewaysJpeg(), originalName: 'side.jpg' },
     ]);
     const html = (await page(build.code).expect(200)).text;
-    expect(html).toMatch(/<meta property="og:title" content="Night Shift: 1969 fastback coupe"\/>/);
+    expect(html).toMatch(/<meta property="og:title" content="1969 Night Shift: fastback coupe"\/>/);
     expect(html).toMatch(/<meta property="og:image" content="http:\/\/127\.0\.0\.1:3999\/media\/photos\/[0-9a-f]{32}-960\.jpg"\/>/);
     expect(html).toContain('<meta name="twitter:card" content="summary_large_image"/>');
     const imgs = html.match(/<img [^>]*>/g) ?? [];
