@@ -9,11 +9,14 @@ import { AccountPage } from '@client/features/account/components/account-page';
 import { MyBuildsPage } from '@client/features/builds/components/my-builds-page';
 import { NotFoundPage } from './not-found-page';
 import { RouteError } from './route-error';
+import { LoadingState } from '@client/components/ui/states';
 
 export const router = createBrowserRouter([
   {
     element: <AppLayout />,
     errorElement: <RouteError />,
+    // Shown while a lazy screen's code arrives on a first visit straight to its address.
+    hydrateFallbackElement: <LoadingState />,
     children: [
       { path: '/', element: <HomePage />, errorElement: <RouteError /> },
       { path: '/sign-in', element: <SignInPage />, errorElement: <RouteError /> },

@@ -1,4 +1,4 @@
-import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
+import { useEffect, useId, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
 import { Button } from './button';
 
 type Props = {
@@ -34,6 +34,16 @@ export function ConfirmDialog({ open, title, children, confirmLabel, cancelLabel
     setTyped('');
     onCancel();
   };
+  const confirm = () => {
+    setTyped('');
+    onConfirm();
+  };
+  // Enter in the box, once the text matches, does what the confirm button does: no Tab needed.
+  const confirmOnEnter = (e: KeyboardEvent<HTMLInputElement>) => {
+    if (e.key !== 'Enter' || !ready || busy) return;
+    e.preventDefault();
+    confirm();
+  };
 
   return (
     <dialog
@@ -55,7 +65,14 @@ export function ConfirmDialog({ open, title, children, confirmLabel, cancelLabel
             <label htmlFor={inputId} className="text-sm font-semibold">
               Type “{typeToConfirm}” to confirm
             </label>
-            <input id={inputId} value={typed} onChange={(e) => setTyped(e.target.value)} autoComplete="off" className="min-h-11 border border-rule bg-white px-3 text-base outline-none focus:border-ink" />
+            <input
+              id={inputId}
+              value={typed}
+              onChange={(e) => setTyped(e.target.value)}
+              onKeyDown={confirmOnEnter}
+              autoComplete="off"
+              className="min-h-11 border border-rule bg-white px-3 text-base outline-none focus:border-ink focus:ring-1 focus:ring-ink"
+            />
           </div>
         ) : null}
         <div className="mt-5 flex flex-wrap justify-end gap-2">
@@ -67,10 +84,7 @@ export function ConfirmDialog({ open, title, children, confirmLabel, cancelLabel
             variant={danger ? 'danger' : 'primary'}
             busy={busy}
             disabled={!ready}
-            onClick={() => {
-              setTyped('');
-              onConfirm();
-            }}
+            onClick={confirm}
           >
             {confirmLabel}
           </Button>

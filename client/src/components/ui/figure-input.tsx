@@ -1,5 +1,5 @@
 import { useId, useState } from 'react';
-import { CalcInputError, formatQuantity, toSystem, UNIT_LABELS, type QuantityKind, type Unit, type UnitOf, type UnitSystem, PREFERRED_UNITS } from '@shared/calc';
+import { CalcInputError, convert, formatQuantity, toSystem, UNIT_LABELS, type QuantityKind, type Unit, type UnitOf, type UnitSystem, PREFERRED_UNITS } from '@shared/calc';
 import { PROVENANCES, type FigureInput as Figure } from '@shared/schemas/figure';
 
 /** The units offered for each kind, both systems; a saved figure in another unit is still shown. */
@@ -33,6 +33,8 @@ type Props = {
   warning?: { message: string; why: string };
   hint?: string;
   units?: string[];
+  /** The unit a new figure starts in when the trade quotes it one way in both systems (wheel offset in mm). */
+  defaultUnit?: string;
 };
 
 const parseNumber = (text: string) => (text.trim() === '' ? undefined : Number(text.trim().replace(',', '.')));
@@ -52,11 +54,25 @@ function otherSystem(kind: QuantityKind, figure: Figure | undefined): string {
   }
 }
 
+const RANGE_MESSAGE = /between (-?[\d.]+) and (-?[\d.]+) (\S+)\.$/;
+
+/** "Bore must be between 20 and 200 mm." said again in the unit the owner typed, so inches need no sums. */
+function rangeInOwnersUnit(kind: QuantityKind, message: string, unit: string): string {
+  const m = RANGE_MESSAGE.exec(message);
+  if (!m || m[3] === unit) return message;
+  try {
+    const [lo, hi] = [Number(m[1]), Number(m[2])].map((v) => convert(kind, v, m[3] as UnitOf<typeof kind>, unit as UnitOf<typeof kind>));
+    return `${message.slice(0, -1)} (${formatQuantity({ value: lo!, unit: unit as Unit })} to ${formatQuantity({ value: hi!, unit: unit as Unit })}).`;
+  } catch {
+    return message;
+  }
+}
+
 /**
  * A build-sheet figure: number, unit (both systems), provenance and, when measured, the date.
  * Controlled: the value is the whole figure, or undefined while the number box is empty.
  */
-export function FigureInput({ label, kind, value, onChange, onBlur, system, error, warning, hint, units }: Props) {
+export function FigureInput({ label, kind, value, onChange, onBlur, system, error, warning, hint, units, defaultUnit }: Props) {
   const id = useId();
   const [text, setText] = useState(value ? String(value.value) : '');
   // Follow the form when it changes the figure from outside (a reset after saving, a dyno run applied).
@@ -64,7 +80,7 @@ export function FigureInput({ label, kind, value, onChange, onBlur, system, erro
   const offered = [...(units ?? FIGURE_UNITS[kind] ?? Object.keys(PREFERRED_UNITS.metric))] as string[];
   // A unit or provenance chosen before any number is typed is kept until there is a figure to hold it.
   const [draft, setDraft] = useState<{ unit?: string; provenance?: Figure['provenance'] }>({});
-  const unit = value?.unit ?? draft.unit ?? (PREFERRED_UNITS[system][kind] as string);
+  const unit = value?.unit ?? draft.unit ?? defaultUnit ?? (PREFERRED_UNITS[system][kind] as string);
   if (!offered.includes(unit)) offered.push(unit);
   const provenance = value?.provenance ?? draft.provenance ?? 'estimated';
 
@@ -78,9 +94,9 @@ export function FigureInput({ label, kind, value, onChange, onBlur, system, erro
     onChange({ value: number, unit: next.unit ?? unit, provenance: nextProvenance, ...(measuredOn ? { measuredOn } : {}), ...(value?.evidencePhotoId ? { evidencePhotoId: value.evidencePhotoId } : {}) });
   };
 
-  const messages = [error?.message, error?.value?.message, error?.unit?.message, error?.provenance?.message, error?.measuredOn?.message].filter(Boolean);
+  const messages = [error?.message, error?.value?.message, error?.unit?.message, error?.provenance?.message, error?.measuredOn?.message].filter((m): m is string => Boolean(m)).map((m) => rangeInOwnersUnit(kind, m, unit));
   const other = otherSystem(kind, value);
-  const boxClass = 'min-h-11 border bg-white px-2 text-base outline-none focus:border-ink';
+  const boxClass = 'min-h-11 border bg-white px-2 text-base outline-none focus:border-ink focus:ring-1 focus:ring-ink';
 
   return (
     <fieldset className="flex min-w-0 flex-col gap-1" aria-describedby={messages.length ? `${id}-error` : undefined}>
@@ -132,7 +148,7 @@ export function FigureInput({ label, kind, value, onChange, onBlur, system, erro
           {messages.join(' ')}
         </p>
       ) : null}
-      {warning ? (
+      {warning && !messages.length ? (
         <p className="border-l-4 border-caution bg-white/70 px-2 py-1 text-sm">
           <span className="font-semibold">Check: </span>
           {warning.message} <span className="text-graphite">{warning.why}</span>

@@ -27,7 +27,7 @@ export function SelectField({ label, options, placeholder, error, hint, id, ref,
         id={selectId}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy}
-        className={`min-h-11 border bg-white px-2 text-base outline-none focus:border-ink ${error ? 'border-danger' : 'border-rule'}`}
+        className={`min-h-11 border bg-white px-2 text-base outline-none focus:border-ink focus:ring-1 focus:ring-ink ${error ? 'border-danger' : 'border-rule'}`}
       >
         {placeholder !== undefined ? <option value="">{placeholder}</option> : null}
         {options.map((o) => (

@@ -18,7 +18,7 @@ export function TextAreaField({ label, error, hint, id, ref, className = '', row
         rows={rows}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy}
-        className={`border bg-white px-3 py-2 text-base outline-none focus:border-ink ${error ? 'border-danger' : 'border-rule'}`}
+        className={`border bg-white px-3 py-2 text-base outline-none focus:border-ink focus:ring-1 focus:ring-ink ${error ? 'border-danger' : 'border-rule'}`}
       />
       {hint ? <p id={`${areaId}-hint`} className="text-sm text-graphite">{hint}</p> : null}
       {error ? <p id={`${areaId}-error`} role="alert" className="text-sm text-danger">{error}</p> : null}

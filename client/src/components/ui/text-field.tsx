@@ -18,7 +18,7 @@ export function TextField({ label, error, hint, id, ref, className = '', ...rest
         id={inputId}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy}
-        className={`min-h-11 border bg-white px-3 text-base outline-none focus:border-ink ${error ? 'border-danger' : 'border-rule'}`}
+        className={`min-h-11 border bg-white px-3 text-base outline-none focus:border-ink focus:ring-1 focus:ring-ink ${error ? 'border-danger' : 'border-rule'}`}
       />
       {hint ? <p id={`${inputId}-hint`} className="text-sm text-graphite">{hint}</p> : null}
       {error ? <p id={`${inputId}-error`} role="alert" className="text-sm text-danger">{error}</p> : null}

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useParams } from 'react-router-dom';
+import { Link, useParams } from 'react-router-dom';
 import { ApiError } from '@client/lib/api';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
 import { Notice } from '@client/components/ui/notice';
@@ -64,13 +64,24 @@ function Editor({ build }: { build: OwnerBuild }) {
 }
 
 /** /builds/:id — the build editor: one form per section, each saved on its own, and the live numbers. */
+function NoSuchBuild({ children }: { children: string }) {
+  return (
+    <div className="flex flex-col items-start gap-3">
+      <Notice tone="danger">{children}</Notice>
+      <Link to="/builds" className="inline-flex min-h-11 items-center underline underline-offset-4 hover:text-signal">
+        ← Back to My builds
+      </Link>
+    </div>
+  );
+}
+
 export function BuildEditorPage() {
   const id = Number(useParams().id);
   const { data, isPending, error, refetch } = useBuild(id);
-  if (!Number.isInteger(id) || id <= 0) return <Notice tone="danger">That is not a build’s address.</Notice>;
+  if (!Number.isInteger(id) || id <= 0) return <NoSuchBuild>That is not a build’s address.</NoSuchBuild>;
   if (isPending) return <LoadingState label="Loading the build sheet…" />;
   if (error) {
-    if (error instanceof ApiError && (error.status === 404 || error.status === 403)) return <Notice tone="danger">No build of yours at this address. It may have been deleted.</Notice>;
+    if (error instanceof ApiError && (error.status === 404 || error.status === 403)) return <NoSuchBuild>No build of yours at this address. It may have been deleted.</NoSuchBuild>;
     return <ErrorState error={error} onRetry={() => void refetch()} />;
   }
   return <Editor build={data.build} />;

@@ -41,9 +41,12 @@ export function EditorHeader({ build }: { build: OwnerBuild }) {
               {build.published ? 'Unpublish' : 'Publish'}
             </Button>
           ) : null}
-          <a href={build.publicUrl} target="_blank" rel="noopener" className={linkClass}>
-            Preview public page ↗
-          </a>
+          {/* A draft's public address answers "not found" until it is published, so there is nothing to preview yet. */}
+          {build.published ? (
+            <a href={build.publicUrl} target="_blank" rel="noopener" className={linkClass}>
+              Preview public page ↗
+            </a>
+          ) : null}
           <Link to={`/builds/${build.id}/card`} className={linkClass}>
             Print a card
           </Link>

@@ -17,10 +17,10 @@ export function errorAt(errors: FieldErrors, path: string): string | undefined {
   return (at as { message?: string } | undefined)?.message;
 }
 
-type FigureFieldProps<T extends FieldValues> = { control: Control<T>; name: Path<T>; label: string; kind: QuantityKind; form: FormKey; hint?: string };
+type FigureFieldProps<T extends FieldValues> = { control: Control<T>; name: Path<T>; label: string; kind: QuantityKind; form: FormKey; hint?: string; defaultUnit?: string };
 
 /** A figure box bound to the form, with the spec check's warning for it beside it. */
-export function FigureField<T extends FieldValues>({ control, name, label, kind, form, hint }: FigureFieldProps<T>) {
+export function FigureField<T extends FieldValues>({ control, name, label, kind, form, hint, defaultUnit }: FigureFieldProps<T>) {
   const { system } = useNumbers();
   const warning = useFieldWarning(form, name);
   return (
@@ -38,6 +38,7 @@ export function FigureField<T extends FieldValues>({ control, name, label, kind,
           error={fieldState.error as never}
           {...(warning ? { warning } : {})}
           {...(hint ? { hint } : {})}
+          {...(defaultUnit ? { defaultUnit } : {})}
         />
       )}
     />
@@ -52,7 +53,7 @@ export function NumberField<T extends FieldValues>({ register, errors, name, lab
   return (
     <div className="flex flex-col gap-1">
       <TextField label={label} inputMode="decimal" autoComplete="off" className="tabular-nums" {...register(name, asNumber as never)} error={errorAt(errors, name)} {...(hint ? { hint } : {})} />
-      {warning ? <Warning message={warning.message} why={warning.why} /> : null}
+      {warning && !errorAt(errors, name) ? <Warning message={warning.message} why={warning.why} /> : null}
     </div>
   );
 }
@@ -71,7 +72,8 @@ export function TextInput<T extends FieldValues>({ register, errors, name, label
   return (
     <div className="flex flex-col gap-1">
       <TextField label={label} autoComplete="off" {...register(name)} error={errorAt(errors, name)} {...(hint ? { hint } : {})} />
-      {warning ? <Warning message={warning.message} why={warning.why} /> : null}
+      {/* The field's own error already says what is wrong; the spec check would only repeat it. */}
+      {warning && !errorAt(errors, name) ? <Warning message={warning.message} why={warning.why} /> : null}
     </div>
   );
 }
@@ -91,7 +93,7 @@ export function MadeByFields<T extends FieldValues>({ register, errors, control 
       {kind === 'shop' || kind === 'donor' ? (
         <TextField label={kind === 'shop' ? 'Shop or person' : 'Donor vehicle'} autoComplete="off" {...register('madeBy.name' as Path<T>)} error={errorAt(errors, 'madeBy.name')} />
       ) : (
-        <div />
+        <div className="hidden sm:block" />
       )}
       <TextAreaField label="Why this choice" rows={3} className="sm:col-span-2" {...register('note' as Path<T>)} error={errorAt(errors, 'note')} />
     </div>

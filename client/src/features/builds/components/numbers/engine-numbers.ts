@@ -1,5 +1,5 @@
 import { boreStrokeRatio, displacement, DRIVETRAIN_LOSS, DRIVETRAIN_LOSS_NOTE, flywheelPowerFromWheel, impliedDrivetrainLoss, powerToWeight, formatQuantity, wheelPowerFromFlywheel, formatPercent, type UnitSystem } from '@shared/calc';
-import { attempt, fmt, num, read, show } from './read';
+import { attempt, firmness, fmt, num, read, show } from './read';
 import { other, type NumberGroup, type NumberRow, type NumbersInput } from './types';
 
 /** Metric leads with cm³ (litres beside it), imperial with cubic inches. */
@@ -17,12 +17,12 @@ export function engineNumbers({ sections, system }: NumbersInput): NumberGroup {
   if (bore !== undefined && stroke !== undefined && cylinders !== undefined) {
     const d = attempt(() => displacement({ bore, stroke, unit: 'mm', cylinders }));
     if (d.ok) {
-      rows.push({ label: 'Displacement (bore × stroke × cylinders)', value: volume(d.value.cm3, system), other: volumeOther(d.value.cm3, system) });
+      rows.push({ label: 'Displacement (bore × stroke × cylinders)', value: volume(d.value.cm3, system), other: volumeOther(d.value.cm3, system), ...firmness(e.bore, e.stroke) });
       const stated = read('volume', e.displacement, 'cm3');
-      if (stated !== undefined) rows.push({ label: 'Displacement on the sheet', value: volume(stated, system), other: volumeOther(stated, system) });
+      if (stated !== undefined) rows.push({ label: 'Displacement on the sheet', value: volume(stated, system), other: volumeOther(stated, system), ...firmness(e.displacement) });
     } else hint = 'Bore, stroke and cylinders must all be above zero (cylinders a whole number).';
     const ratio = attempt(() => boreStrokeRatio(bore, stroke));
-    if (ratio.ok) rows.push({ label: 'Bore ÷ stroke', value: fmt(ratio.value, 2), other: ratio.value > 1.005 ? 'oversquare' : ratio.value < 0.995 ? 'undersquare' : 'square' });
+    if (ratio.ok) rows.push({ label: 'Bore ÷ stroke', value: fmt(ratio.value, 2), other: ratio.value > 1.005 ? 'oversquare' : ratio.value < 0.995 ? 'undersquare' : 'square', ...firmness(e.bore, e.stroke) });
   } else hint = 'Enter bore, stroke and cylinders to work out the displacement.';
   return { id: 'engine', title: 'Engine', section: 'engine', rows, ...(hint ? { hint } : {}) };
 }
@@ -36,13 +36,13 @@ export function powerNumbers({ sections, weight, system }: NumbersInput): Number
   const lossText = formatPercent(DRIVETRAIN_LOSS.manualRearDrive * 100, { decimals: 0 });
   if (fly !== undefined && wheel === undefined) {
     const est = attempt(() => wheelPowerFromFlywheel({ value: fly, unit: 'hp' }));
-    if (est.ok) rows.push({ label: `At the wheels (${lossText} loss)`, value: show('power', est.value.value, 'hp', system), other: show('power', est.value.value, 'hp', other(system)), estimate: true });
+    if (est.ok) rows.push({ label: `At the wheels (${lossText} loss)`, value: show('power', est.value.value, 'hp', system), other: show('power', est.value.value, 'hp', other(system)), estimate: true, ...firmness(e.flywheelPower) });
   } else if (wheel !== undefined && fly === undefined) {
     const est = attempt(() => flywheelPowerFromWheel({ value: wheel, unit: 'hp' }));
-    if (est.ok) rows.push({ label: `At the flywheel (${lossText} loss)`, value: show('power', est.value.value, 'hp', system), other: show('power', est.value.value, 'hp', other(system)), estimate: true });
+    if (est.ok) rows.push({ label: `At the flywheel (${lossText} loss)`, value: show('power', est.value.value, 'hp', system), other: show('power', est.value.value, 'hp', other(system)), estimate: true, ...firmness(e.wheelPower) });
   } else if (wheel !== undefined && fly !== undefined) {
     const loss = attempt(() => impliedDrivetrainLoss({ value: fly, unit: 'hp' }, { value: wheel, unit: 'hp' }));
-    if (loss.ok && Number.isFinite(loss.value)) rows.push({ label: 'Drivetrain loss the two figures imply', value: formatPercent(loss.value * 100) });
+    if (loss.ok && Number.isFinite(loss.value)) rows.push({ label: 'Drivetrain loss the two figures imply', value: formatPercent(loss.value * 100), ...firmness(e.flywheelPower, e.wheelPower) });
   }
   if (rows.some((r) => r.estimate)) notes.push(DRIVETRAIN_LOSS_NOTE + ' (common practice)');
   const power = fly ?? wheel;
@@ -52,8 +52,11 @@ export function powerNumbers({ sections, weight, system }: NumbersInput): Number
     const pw = attempt(() => powerToWeight({ value: power, unit: 'hp' }, { value: kg, unit: 'kg' }));
     if (pw.ok) {
       const at = fly !== undefined ? 'flywheel' : 'wheels';
-      rows.push({ label: `Power to weight (${at})`, value: `${fmt(pw.value.hpPerTonne)} hp per tonne`, other: `${fmt(pw.value.wPerKg, 1)} W/kg` });
-      rows.push({ label: 'Weight to power', value: system === 'metric' ? `${fmt(pw.value.kgPerKw, 2)} kg/kW` : `${fmt(pw.value.lbPerHp, 2)} lb/hp`, other: system === 'metric' ? `${fmt(pw.value.lbPerHp, 2)} lb/hp` : `${fmt(pw.value.kgPerKw, 2)} kg/kW` });
+      const firm = firmness(fly !== undefined ? e.flywheelPower : e.wheelPower, weight);
+      const hpPerTonne = `${fmt(pw.value.hpPerTonne)} hp per tonne`;
+      const wPerKg = `${fmt(pw.value.wPerKg, 1)} W/kg`;
+      rows.push({ label: `Power to weight (${at})`, value: system === 'metric' ? wPerKg : hpPerTonne, other: system === 'metric' ? hpPerTonne : wPerKg, ...firm });
+      rows.push({ label: 'Weight to power', value: system === 'metric' ? `${fmt(pw.value.kgPerKw, 2)} kg/kW` : `${fmt(pw.value.lbPerHp, 2)} lb/hp`, other: system === 'metric' ? `${fmt(pw.value.lbPerHp, 2)} lb/hp` : `${fmt(pw.value.kgPerKw, 2)} kg/kW`, ...firm });
     }
   } else if (power === undefined) hint = 'Enter a power figure (engine) to see the estimates and power to weight.';
   else hint = 'Enter the build’s weight (overview) for power to weight.';

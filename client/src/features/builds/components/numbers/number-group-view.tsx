@@ -1,4 +1,5 @@
 import { ENGINEERING_CAUTION } from '@shared/calc';
+import { ProvenanceMark } from '@client/components/ui/provenance-mark';
 import type { NumberGroup } from './types';
 
 /** One block of computed figures: a small data table, with its notes in words. */
@@ -17,7 +18,7 @@ export function NumberGroupView({ group, showHint = true }: { group: NumberGroup
                 </th>
                 <td className="py-1 text-right whitespace-nowrap">
                   <span className="font-display text-base">{row.value}</span>
-                  {row.estimate ? <span className="ml-1 text-xs uppercase text-graphite">est.</span> : null}
+                  <ProvenanceMark provenance={row.provenance ?? (row.estimate ? 'estimated' : undefined)} />
                   {row.other ? <span className="block text-xs text-graphite">{row.other}</span> : null}
                 </td>
               </tr>

@@ -1,4 +1,4 @@
-import { useId } from 'react';
+import { useId, useState } from 'react';
 import type { UnitSystem } from '@shared/calc';
 import { FORM_LABELS } from '../editor/editor-stores';
 import { useNumbers } from './numbers-context';
@@ -21,12 +21,30 @@ export function UnitToggle() {
 function CruiseInput() {
   const { system, cruise, setCruise } = useNumbers();
   const id = useId();
+  // The box keeps its own text, so it can be emptied and retyped; the numbers follow a valid speed only.
+  const [text, setText] = useState(String(cruise));
+  const parse = (t: string) => (t.trim() === '' ? NaN : Number(t.trim().replace(',', '.')));
+  const valid = (n: number) => Number.isFinite(n) && n > 0;
+  // A valid text that differs from the speed in use is stale (the unit system changed): show the speed.
+  const shown = valid(parse(text)) && parse(text) !== cruise ? String(cruise) : text;
   return (
     <div className="flex items-center gap-2 text-sm">
       <label htmlFor={id} className="text-graphite">
         Cruise
       </label>
-      <input id={id} inputMode="numeric" value={String(cruise)} onChange={(e) => setCruise(Number(e.target.value) || 0)} className="min-h-11 w-20 border border-rule bg-white px-2 tabular-nums" />
+      <input
+        id={id}
+        inputMode="numeric"
+        autoComplete="off"
+        value={shown}
+        aria-invalid={valid(parse(shown)) ? undefined : true}
+        onChange={(e) => {
+          setText(e.target.value);
+          const next = parse(e.target.value);
+          if (valid(next)) setCruise(next);
+        }}
+        className="min-h-11 w-20 border border-rule bg-white px-2 tabular-nums"
+      />
       <span>{system === 'metric' ? 'km/h' : 'mph'}</span>
     </div>
   );
@@ -65,7 +83,8 @@ export function NumbersPanel() {
       <div className="flex flex-col gap-3 p-3">
         <p className="text-xs text-graphite">Worked out live from what you type, saved or not.</p>
         <SpecWarnings />
-        {groups.map((g) => (
+        {/* Only groups with figures: an empty wrapper would still take a gap in the column. */}
+        {groups.filter((g) => g.rows.length).map((g) => (
           <div key={g.id}>
             <NumberGroupView group={g} showHint={false} />
             {g.id === 'gearing' && g.rows.length ? <CruiseInput /> : null}

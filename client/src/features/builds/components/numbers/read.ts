@@ -35,3 +35,17 @@ export function show<K extends QuantityKind>(kind: K, value: number, unit: UnitO
 const defaultDecimals = (unit: Unit) => DEFAULT_DECIMALS[unit] ?? 0;
 
 export const fmt = (value: number, decimals = 0) => formatNumber(value, { decimals });
+
+/** The weakest provenance among a result's inputs: any target makes it a target, else any estimate an estimate. */
+export function weakest(...figures: (FigureInput | undefined | null)[]): 'estimated' | 'target' | undefined {
+  const words = figures.map((f) => f?.provenance);
+  if (words.includes('target')) return 'target';
+  if (words.includes('estimated')) return 'estimated';
+  return undefined;
+}
+
+/** `{ provenance }` to spread into a row, or nothing for a result from measured figures. */
+export const firmness = (...figures: (FigureInput | undefined | null)[]) => {
+  const p = weakest(...figures);
+  return p ? { provenance: p } : {};
+};

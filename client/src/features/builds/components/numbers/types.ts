@@ -3,8 +3,12 @@ import type { Sections } from '@shared/schemas/build-sections';
 import type { WeighIn } from '@shared/schemas/build';
 import type { FigureInput } from '@shared/schemas/figure';
 
-/** One computed line: what it is, the figure in the chosen system, the other system beside it. */
-export type NumberRow = { label: string; value: string; other?: string; estimate?: boolean };
+/**
+ * One computed line: what it is, the figure in the chosen system, the other system beside it.
+ * `estimate` marks a rule-of-thumb result; `provenance` carries the weakest input's word, since a
+ * worked-out figure is only as firm as what it is worked out from.
+ */
+export type NumberRow = { label: string; value: string; other?: string; estimate?: boolean; provenance?: 'estimated' | 'target' };
 
 export type NumberGroupId = 'engine' | 'power' | 'gearing' | 'tyres' | 'spacing' | 'suspension' | 'antiSquat' | 'tubes' | 'corners';
 

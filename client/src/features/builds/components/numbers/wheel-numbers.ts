@@ -1,6 +1,6 @@
 import { GEARING_TOP_SPEED_NOTE, NOMINAL_TYRE_NOTE, rpmAtMph, topSpeedAtRevLimit, tryParseTyreCode, tyreDimensions, wheelSpacing, WHEEL_SPACING_NOTE, type TyreDimensions, type UnitSystem } from '@shared/calc';
 import type { WheelsSection } from '@shared/schemas/build-sections';
-import { attempt, fmt, num, read, show } from './read';
+import { attempt, firmness, fmt, num, read, show } from './read';
 import { other, type NumberGroup, type NumberRow, type NumbersInput } from './types';
 
 type End = 'front' | 'rear';
@@ -59,9 +59,10 @@ export function spacingNumbers({ sections, system }: NumbersInput): NumberGroup 
     if (!s.ok) continue;
     measured ||= s.value.source === 'measured';
     const L = END_LABEL[end];
-    rows.push({ label: `${L} backspacing${s.value.source === 'measured' ? ' (as measured)' : ''}`, value: len(s.value.backspacingMm, system, 1), other: len(s.value.backspacingMm, other(system), 1) });
-    rows.push({ label: `${L} frontspacing`, value: len(s.value.frontspacingMm, system, 1), other: len(s.value.frontspacingMm, other(system), 1) });
-    if (s.value.source === 'measured') rows.push({ label: `${L} offset from that`, value: `${fmt(s.value.offsetMm)} mm` });
+    const firm = firmness(s.value.source === 'measured' ? w?.backspacing : w?.offset);
+    rows.push({ label: `${L} backspacing${s.value.source === 'measured' ? ' (as measured)' : ''}`, value: len(s.value.backspacingMm, system, 1), other: len(s.value.backspacingMm, other(system), 1), ...firm });
+    rows.push({ label: `${L} frontspacing`, value: len(s.value.frontspacingMm, system, 1), other: len(s.value.frontspacingMm, other(system), 1), ...firm });
+    if (s.value.source === 'measured') rows.push({ label: `${L} offset from that`, value: `${fmt(s.value.offsetMm)} mm`, ...firm });
   }
   return {
     id: 'spacing',

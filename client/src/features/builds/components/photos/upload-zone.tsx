@@ -3,7 +3,11 @@ import { formatNumber } from '@shared/calc';
 import { useUploadPhoto } from '../../api/upload-photos';
 
 const TYPES = ['image/jpeg', 'image/png', 'image/webp', 'image/avif'];
-const mb = (bytes: number) => `${formatNumber(bytes / (1024 * 1024), { decimals: 1 })} MB`;
+// Whole megabytes print without a decimal ("15 MB", not "15.0 MB").
+const mb = (bytes: number) => {
+  const value = bytes / (1024 * 1024);
+  return `${formatNumber(value, { decimals: Number.isInteger(value) ? 0 : 1 })} MB`;
+};
 
 type Upload = { key: string; name: string; progress: number; state: 'uploading' | 'done' | 'error' | 'refused'; message?: string };
 

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { DynoRun, OwnerBuild } from '@shared/schemas/build';
-import { formatNumber } from '@shared/calc';
+import { convert, formatNumber, type UnitSystem } from '@shared/calc';
 import { Button } from '@client/components/ui/button';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { Notice } from '@client/components/ui/notice';
@@ -12,6 +12,18 @@ import { DynoChart } from './dyno-chart';
 import { DynoRunForm } from './dyno-run-form';
 
 const UNIT = { hp: 'hp', PS: 'PS', kW: 'kW', lbft: 'lb·ft', Nm: 'N·m' } as const;
+/** A run's peaks in the owner's unit system, and as recorded when that differs. */
+function peaks(run: DynoRun, system: UnitSystem): { shown: string; recorded?: string } {
+  const powerUnit = system === 'metric' ? 'kW' : 'hp';
+  const torqueUnit = system === 'metric' ? 'Nm' : 'lbft';
+  const line = (power: number, pUnit: keyof typeof UNIT, torque: number, tUnit: keyof typeof UNIT) =>
+    `${formatNumber(power, { decimals: 1 })} ${UNIT[pUnit]} at ${formatNumber(run.peakPowerRpm)} rpm · ${formatNumber(torque, { decimals: 1 })} ${UNIT[tUnit]} at ${formatNumber(run.peakTorqueRpm)} rpm`;
+  const recorded = line(run.peakPower, run.powerUnit, run.peakTorque, run.torqueUnit);
+  if (run.powerUnit === powerUnit && run.torqueUnit === torqueUnit) return { shown: recorded };
+  const shown = line(convert('power', run.peakPower, run.powerUnit, powerUnit), powerUnit, convert('torque', run.peakTorque, run.torqueUnit, torqueUnit), torqueUnit);
+  return { shown, recorded };
+}
+
 const newestFirst = (a: DynoRun, b: DynoRun) => (a.date < b.date ? 1 : a.date > b.date ? -1 : b.id - a.id);
 
 export function DynoPanel({ build }: { build: OwnerBuild }) {
@@ -31,25 +43,25 @@ export function DynoPanel({ build }: { build: OwnerBuild }) {
     <EditorSection id="dyno" title="Dyno runs">
       <div className="flex flex-col gap-4" data-testid="dyno-panel">
         {message ? <Notice tone={message.tone}>{message.text}</Notice> : null}
-        {runs.length ? <DynoChart runs={runs.filter((r) => shownIds.includes(r.id))} system={system} /> : <p className="text-sm text-graphite">No dyno runs yet. Add one after a dyno day: the peaks can become the engine’s measured figures.</p>}
+        {runs.length && !shownIds.length ? <p className="text-sm text-graphite">No run is on the chart: tick “On the chart” on one or two below.</p> : runs.length ? <DynoChart runs={runs.filter((r) => shownIds.includes(r.id))} system={system} /> : <p className="text-sm text-graphite">No dyno runs yet. Add one after a dyno day: the peaks can become the engine’s measured figures.</p>}
         <ul className="flex flex-col gap-3">
           {runs.map((run) => (
             <li key={run.id} className="border border-rule p-3">
               <div className="flex flex-wrap items-start justify-between gap-2">
-                <label className="flex min-h-11 items-center gap-2">
+                <p className="font-display uppercase">
+                  {run.date}
+                  {run.facility ? ` · ${run.facility}` : ''}
+                </p>
+                <label className="flex min-h-11 items-center gap-2 text-sm">
                   <input type="checkbox" className="h-5 w-5 accent-ink" checked={shownIds.includes(run.id)} onChange={() => toggle(run.id)} />
-                  <span className="font-display uppercase">
-                    {run.date}
-                    {run.facility ? ` · ${run.facility}` : ''}
-                  </span>
+                  On the chart
                 </label>
-                <span className="text-sm text-graphite">
-                  {run.standard} · at the {run.measuredAt === 'wheel' ? 'wheels' : 'flywheel'}
-                </span>
               </div>
-              <p className="font-display text-lg tabular-nums">
-                {formatNumber(run.peakPower, { decimals: 1 })} {UNIT[run.powerUnit]} at {formatNumber(run.peakPowerRpm)} rpm · {formatNumber(run.peakTorque, { decimals: 1 })} {UNIT[run.torqueUnit]} at {formatNumber(run.peakTorqueRpm)} rpm
+              <p className="text-sm text-graphite">
+                {run.standard} · at the {run.measuredAt === 'wheel' ? 'wheels' : 'flywheel'}
               </p>
+              <p className="font-display text-lg tabular-nums">{peaks(run, system).shown}</p>
+              {peaks(run, system).recorded ? <p className="text-sm text-graphite">As recorded: {peaks(run, system).recorded}</p> : null}
               {run.note ? <p className="text-sm text-graphite">{run.note}</p> : null}
               <div className="mt-2 flex flex-wrap gap-2">
                 <Button

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { OwnerBuild, WeighIn } from '@shared/schemas/build';
-import { cornerWeights, formatNumber, formatPercent } from '@shared/calc';
+import { cornerWeights, formatNumber, formatPercent, formatQuantity, toSystem, type Unit } from '@shared/calc';
 import { Button } from '@client/components/ui/button';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { Notice } from '@client/components/ui/notice';
@@ -12,6 +12,12 @@ import { FUEL_LABELS, WeighInForm } from './weigh-in-form';
 
 const newestFirst = (a: WeighIn, b: WeighIn) => (a.date < b.date ? 1 : a.date > b.date ? -1 : b.id - a.id);
 
+/** The total in the other unit system, e.g. "≈ 3,411 lb" beside kilograms. */
+function otherSystem(value: number, unit: WeighIn['unit']): string {
+  const r = attempt(() => toSystem('mass', { value, unit }, unit === 'kg' ? 'imperial' : 'metric'));
+  return r.ok ? `≈ ${formatQuantity(r.value as { value: number; unit: Unit })}` : '';
+}
+
 function Corners({ w }: { w: WeighIn }) {
   const c = attempt(() => cornerWeights(w));
   const cell = (label: string, v: number) => (
@@ -22,7 +28,8 @@ function Corners({ w }: { w: WeighIn }) {
   );
   return (
     <div className="flex flex-wrap items-center gap-4">
-      <div className="grid w-44 grid-cols-2 gap-1" aria-label="Corners, front at the top">
+      <div className="grid w-44 grid-cols-2 gap-1" role="group" aria-label={`Corners in ${w.unit}, front at the top`}>
+        <span className="col-span-2 text-xs text-graphite">Corners, {w.unit} (front at the top)</span>
         {cell('LF', w.leftFront)}
         {cell('RF', w.rightFront)}
         {cell('LR', w.leftRear)}
@@ -31,7 +38,7 @@ function Corners({ w }: { w: WeighIn }) {
       {c.ok ? (
         <table className="text-sm">
           <tbody>
-            <tr><th scope="row" className="pr-3 text-left font-normal text-graphite">Total</th><td className="font-display">{formatNumber(c.value.total)} {w.unit}</td></tr>
+            <tr><th scope="row" className="pr-3 text-left font-normal text-graphite">Total</th><td className="tabular-nums"><span className="font-display">{formatNumber(c.value.total)} {w.unit}</span> <span className="text-graphite">{otherSystem(c.value.total, w.unit)}</span></td></tr>
             <tr><th scope="row" className="pr-3 text-left font-normal text-graphite">Front / rear</th><td>{formatPercent(c.value.frontPercent)} / {formatPercent(c.value.rearPercent)}</td></tr>
             <tr><th scope="row" className="pr-3 text-left font-normal text-graphite">Left / right</th><td>{formatPercent(c.value.leftPercent)} / {formatPercent(c.value.rightPercent)}</td></tr>
             <tr><th scope="row" className="pr-3 text-left font-normal text-graphite">Cross</th><td>{formatPercent(c.value.crossPercent)}</td></tr>
@@ -58,7 +65,7 @@ export function WeighInsPanel({ build }: { build: OwnerBuild }) {
           {list.map((w) => (
             <li key={w.id} className="border border-rule p-3">
               <p className="font-display uppercase">
-                {w.date} · {w.withDriver ? 'with driver' : 'no driver'} · fuel {FUEL_LABELS[w.fuelLevel].toLowerCase()}
+                {w.date} · {w.withDriver ? 'with driver' : 'no driver'} · fuel: {FUEL_LABELS[w.fuelLevel].toLowerCase()}
               </p>
               {w.note ? <p className="text-sm text-graphite">{w.note}</p> : null}
               <div className="mt-2">

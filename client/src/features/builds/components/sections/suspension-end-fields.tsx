@@ -27,7 +27,7 @@ export function SuspensionEndFields({ end, register, errors, control }: Props) {
       <Choice {...f} name={`${end}.springType`} label="Springs" options={SPRING_TYPES} labels={SPRING_LABELS} />
       <FigureField control={control} form="chassis" name={`${end}.springRate`} label="Spring rate" kind="springRate" />
       <NumberField {...f} name={`${end}.motionRatio`} label="Motion ratio" hint="Spring travel ÷ wheel travel (with a bell-crank: the pushrod’s)." />
-      <NumberField {...f} name={`${end}.springAngleDeg`} label="Spring angle (degrees from vertical travel)" />
+      <NumberField {...f} name={`${end}.springAngleDeg`} label="Spring angle (degrees from the line of wheel travel)" />
       <FigureField control={control} form="chassis" name={`${end}.cornerSprungMass`} label="Sprung mass on one corner" kind="mass" />
       <NumberField {...f} name={`${end}.bellCrankSpringArmMm`} label="Bell-crank spring arm (mm)" />
       <NumberField {...f} name={`${end}.bellCrankPushrodArmMm`} label="Bell-crank pushrod arm (mm)" />

@@ -29,8 +29,8 @@ export function WheelsForm({ build }: { build: OwnerBuild }) {
           <TextInput {...f} name={`${end}.tyre`} label="Tyre (make and pattern in your words)" />
           <NumberField {...f} name={`${end}.rimDiameterIn`} label="Rim diameter (in)" />
           <NumberField {...f} name={`${end}.rimWidthIn`} label="Rim width (in)" />
-          <FigureField control={control} form="wheels" name={`${end}.offset`} label="Offset (ET)" kind="length" hint="Positive towards the outside of the car." />
-          <FigureField control={control} form="wheels" name={`${end}.backspacing`} label="Backspacing (measured)" kind="length" hint="Overrides the one worked out from the offset." />
+          <FigureField control={control} form="wheels" name={`${end}.offset`} label="Offset (ET)" kind="length" defaultUnit="mm" hint="Positive: the mounting face sits outboard of the rim’s centreline." />
+          <FigureField control={control} form="wheels" name={`${end}.backspacing`} label="Backspacing, if measured" kind="length" hint="Overrides the one worked out from the offset." />
           <TextInput {...f} name={`${end}.construction`} label="Wheel construction" hint="e.g. two-piece forged" />
           <FigureField control={control} form="wheels" name={`${end}.pressure`} label="Tyre pressure" kind="pressure" />
         </FieldGroup>
