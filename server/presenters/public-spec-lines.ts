@@ -132,7 +132,7 @@ function transmissionText(d: DrivetrainSection): string {
   return join([kind, d.transmission], ' — ');
 }
 
-function drivetrainRows(d: DrivetrainSection): SpecRow[] {
+function drivetrainRows(d: DrivetrainSection, u: UnitSystem): SpecRow[] {
   return [
     ...row('Transmission', cap(transmissionText(d))),
     ...row('Gear ratios', d.gears?.map((g) => formatNumber(g, { decimals: 2 })).join(' · ')),
@@ -142,6 +142,7 @@ function drivetrainRows(d: DrivetrainSection): SpecRow[] {
     ...row('Final drive', d.finalDrive ? `${formatNumber(d.finalDrive, { decimals: 2 })}:1` : ''),
     ...row('Differential', d.limitedSlip ? cap(d.limitedSlip === 'open' ? 'open' : `${words(d.limitedSlip)}${['clutch-type', 'gear-type', 'electronic'].includes(d.limitedSlip) ? ' limited slip' : ''}`) : ''),
     ...row('Axle splines', d.axleSplines ? String(d.axleSplines) : ''),
+    ...row('Top speed', showFigure('speed', d.topSpeed, u, { decimals: 0 })),
   ];
 }
 
@@ -247,7 +248,7 @@ export function sectionViews(sections: Sections, units: UnitSystem, only: readon
         rows = engineRows(s as EngineSection, units);
         break;
       case 'drivetrain':
-        rows = drivetrainRows(s as DrivetrainSection);
+        rows = drivetrainRows(s as DrivetrainSection, units);
         break;
       case 'chassis':
         rows = chassisRows(s as ChassisSection, units);

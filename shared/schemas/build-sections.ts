@@ -65,6 +65,8 @@ export const DrivetrainSectionSchema = z.object({
   finalDrive: boundedNumber('Final drive ratio', 1.5, 8).optional(),
   axleSplines: boundedNumber('Axle splines', 10, 50, { int: true }).optional(),
   limitedSlip: z.enum(LIMITED_SLIP_TYPES, { error: 'Choose a differential type.' }).optional(),
+  /** The top speed the owner claims; the spec check compares it with what the gearing reaches at the rev limit. */
+  topSpeed: figureSchema('speed', { label: 'Top speed', min: 20, max: 600, unit: 'km/h' }).optional(),
 });
 
 // Chassis and suspension

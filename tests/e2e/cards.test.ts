@@ -45,9 +45,10 @@ describe('the card designer', () => {
     await page.getByRole('checkbox', { name: 'Extras' }).uncheck();
     await expect.poll(() => preview.getAttribute('src')).toContain('design=data-sheet&paper=a4&orientation=landscape');
     await expect.poll(() => page.getByText('Choices saved with the build.').count(), { timeout: 10_000 }).toBe(1);
-    const saved = (await Build.findByPk(build.id))!.cardSettings as Record<string, unknown>;
-    expect(saved).toMatchObject({ design: 'data-sheet', paper: 'a4', orientation: 'landscape' });
-    expect(saved.sections).not.toContain('extra');
+    // The designer saves as the owner clicks; wait for the last click's save to land.
+    const savedSettings = async () => (await Build.findByPk(build.id))!.cardSettings as Record<string, unknown> & { sections?: string[] };
+    await expect.poll(async () => (await savedSettings()).sections?.includes('extra')).toBe(false);
+    expect(await savedSettings()).toMatchObject({ design: 'data-sheet', paper: 'a4', orientation: 'landscape' });
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'card-designer.png'), fullPage: true });
 
     const [download] = await Promise.all([page.waitForEvent('download', (d) => d.suggestedFilename().includes('data-sheet-a4-landscape')), page.getByRole('link', { name: 'Download PDF' }).click()]);

@@ -64,7 +64,7 @@ export const DEMO_BUILDS: DemoBuild[] = [
       },
       drivetrain: {
         transmissionType: 'manual', transmission: 'Six-speed manual with a twin-disc clutch', gears: [2.66, 1.78, 1.3, 1.0, 0.8, 0.63], clutch: 'Twin-disc, 10.5 in',
-        driveshaft: '3.5 in aluminium, one piece', axle: '9 in style rear with a nodular case', finalDrive: 3.55, axleSplines: 31, limitedSlip: 'clutch-type',
+        driveshaft: '3.5 in aluminium, one piece', axle: '9 in style rear with a nodular case', finalDrive: 3.55, axleSplines: 31, limitedSlip: 'clutch-type', topSpeed: est(290, 'km/h'),
         madeBy: { kind: 'owner' }, note: 'The tall sixth gear makes motorway trips quiet.',
       },
       chassis: {

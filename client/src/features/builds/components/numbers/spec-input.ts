@@ -26,6 +26,7 @@ export function toSpecInput(sections: Sections, overview: Overview): SpecCheckIn
     drivetrain: drivetrain && { gearRatios: drivetrain.gears, finalDrive: drivetrain.finalDrive },
     wheels: wheels && { front: end(wheels.front), rear: end(wheels.rear), raked: wheels.raked },
     chassis: overview.weight ? { weight: overview.weight } : undefined,
+    performance: drivetrain?.topSpeed ? { topSpeed: drivetrain.topSpeed } : undefined,
   };
 }
 
@@ -36,6 +37,7 @@ const FIELD_MAP: Record<string, [FormKey, string]> = {
   'engine.revLimitRpm': ['engine', 'revLimit'],
   'engine.torque': ['engine', 'flywheelTorque'],
   'chassis.weight': ['overview', 'weight'],
+  'performance.topSpeed': ['drivetrain', 'topSpeed'],
   'wheels.front.tyre': ['wheels', 'front.tyreSize'],
   'wheels.rear.tyre': ['wheels', 'rear.tyreSize'],
   'wheels.front.rimWidth': ['wheels', 'front.rimWidthIn'],

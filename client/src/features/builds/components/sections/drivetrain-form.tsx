@@ -4,7 +4,7 @@ import { useSaveSection } from '../../api/save-section';
 import { useEditorForm } from '../editor/use-editor-form';
 import { MADE_BY_BLANKS, withBlanks } from '../editor/form-values';
 import { SectionForm } from '../editor/section-form';
-import { Choice, MadeByFields, NumberField, TextInput } from '../editor/fields';
+import { Choice, FigureField, MadeByFields, NumberField, TextInput } from '../editor/fields';
 import { GearsInput } from '../editor/gears-input';
 import { SectionNumbers } from '../numbers/numbers-panel';
 
@@ -36,6 +36,7 @@ export function DrivetrainForm({ build }: { build: OwnerBuild }) {
         <NumberField {...f} name="axleSplines" label="Axle splines" />
         <TextInput {...f} name="clutch" label="Clutch" />
         <TextInput {...f} name="driveshaft" label="Driveshaft" />
+        <FigureField control={control} form="drivetrain" name="topSpeed" label="Top speed" kind="speed" />
       </div>
       <MadeByFields register={register} errors={errors} control={control} />
     </SectionForm>
