@@ -37,13 +37,15 @@ describe('the card designer', () => {
     await page.goto(`${baseUrl}/builds/${build.id}/card`);
     await expect.poll(() => page.getByRole('heading', { name: 'Windshield card' }).count()).toBe(1);
     const preview = page.getByTitle('Card preview');
-    await expect.poll(() => preview.getAttribute('src')).toContain('design=poster&paper=letter&orientation=portrait');
+    await expect.poll(() => preview.getAttribute('data-src')).toContain('design=poster&paper=letter&orientation=portrait');
 
+    // The first page is drawn on a canvas (pdf.js), so even a browser with no PDF viewer shows it.
+    await expect.poll(() => preview.getAttribute('data-state')).toBe('ready');
     await page.getByRole('radio', { name: /Data sheet/ }).check();
     await page.getByRole('radio', { name: /A4/ }).check();
     await page.getByRole('radio', { name: 'Landscape' }).check();
     await page.getByRole('checkbox', { name: 'Extras' }).uncheck();
-    await expect.poll(() => preview.getAttribute('src')).toContain('design=data-sheet&paper=a4&orientation=landscape');
+    await expect.poll(() => preview.getAttribute('data-src')).toContain('design=data-sheet&paper=a4&orientation=landscape');
     await expect.poll(() => page.getByText('Choices saved with the build.').count(), { timeout: 10_000 }).toBe(1);
     // The designer saves as the owner clicks; wait for the last click's save to land.
     const savedSettings = async () => (await Build.findByPk(build.id))!.cardSettings as Record<string, unknown> & { sections?: string[] };

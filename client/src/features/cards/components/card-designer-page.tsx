@@ -1,5 +1,6 @@
 import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
+import { CardPreview } from './card-preview';
 import {
   CARD_DESIGNS,
   CARD_DESIGN_LABELS,
@@ -144,9 +145,7 @@ function Designer({ buildId, data }: { buildId: number; data: CardSettingsRespon
               {save.isPending ? 'Saving your choices…' : save.isError ? 'Your choices could not be saved; try again.' : save.isSuccess ? 'Choices saved with the build.' : data.saved ? 'Your saved choices.' : ''}
             </span>
           </div>
-          <div className="border border-rule bg-white" style={{ aspectRatio: ratio }}>
-            <iframe key={preview} title="Card preview" src={`${preview}#toolbar=0&view=Fit`} className="h-full w-full" />
-          </div>
+          <CardPreview url={preview} ratio={ratio} />
           <p className="text-sm text-graphite">
             Preview of the PDF as it prints: {PAPER_SIZES_PT[settings.paper].label}, {settings.orientation}. Print at 100% (actual size).
           </p>
