@@ -1,4 +1,4 @@
-import type { Transaction } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { BuildCreateInput, BuildPrivate, BuildUpdateInput, Credit } from '@shared/schemas/build';
 import { SECTION_SCHEMAS, type SectionKind } from '@shared/schemas/build-sections';
 import { sequelize } from '../db/sequelize';
@@ -10,9 +10,9 @@ import { WeighIn } from '../models/weigh-in';
 import { FigureChange } from '../models/figure-change';
 import { RetiredBuildCode } from '../models/retired-build-code';
 import type { User } from '../models/user';
-import { NotFoundError } from '../errors';
+import { NotFoundError, ValidationError } from '../errors';
 import { newBuildCode } from './build-codes';
-import { recordFigureChanges } from './figure-history';
+import { figuresByPath, recordFigureChanges } from './figure-history';
 
 /** Everything the owner's editor and the public presenters read, in display order. */
 export const FULL_BUILD_INCLUDE = [
@@ -83,6 +83,7 @@ export async function createBuild(owner: User, input: BuildCreateInput): Promise
 
 export async function updateOverview(build: Build, input: BuildUpdateInput): Promise<void> {
   await sequelize.transaction(async (transaction) => {
+    if (input.weight) await checkEvidencePhotos(build.id, '', { weight: input.weight }, transaction);
     if (input.weight !== undefined) await recordFigureChanges(build.id, 'overview', { weight: build.weight }, { weight: input.weight }, transaction);
     await build.update(
       {
@@ -98,10 +99,23 @@ export async function updateOverview(build: Build, input: BuildUpdateInput): Pro
   });
 }
 
+/** A measured figure's evidence photo must be one of this build's own photos. */
+async function checkEvidencePhotos(buildId: number, prefix: string, data: unknown, transaction?: Transaction): Promise<void> {
+  const wanted = [...figuresByPath(data)].filter(([, f]) => f.evidencePhotoId !== undefined);
+  if (!wanted.length) return;
+  const ids = [...new Set(wanted.map(([, f]) => f.evidencePhotoId!))];
+  const found = new Set((await Photo.findAll({ where: { id: { [Op.in]: ids }, buildId }, attributes: ['id'], transaction })).map((p) => p.id));
+  const fields = Object.fromEntries(
+    wanted.filter(([, f]) => !found.has(f.evidencePhotoId!)).map(([path]) => [`${prefix ? `${prefix}.` : ''}${path}.evidencePhotoId`, 'That photo is not one of this build’s photos.']),
+  );
+  if (Object.keys(fields).length) throw new ValidationError(fields);
+}
+
 /** Saves one section whole (replacing its previous content), keeping the history of its figures. */
 export async function saveSection(build: Build, kind: SectionKind, data: unknown): Promise<void> {
   const parsed = SECTION_SCHEMAS[kind].parse(data) as Record<string, unknown>;
   await sequelize.transaction(async (transaction) => {
+    await checkEvidencePhotos(build.id, '', parsed, transaction);
     const existing = await BuildSection.findOne({ where: { buildId: build.id, kind }, lock: transaction.LOCK.UPDATE, transaction });
     await recordFigureChanges(build.id, kind, existing?.data ?? {}, parsed, transaction);
     if (existing) await existing.update({ data: parsed }, { transaction });

@@ -253,3 +253,25 @@ describe('every build route refuses other owners and anonymous visitors', () => 
     expect(after.sections.engine).toBeUndefined();
   });
 });
+
+describe('evidence photos', () => {
+  it('lets a measured figure point at one of the build’s own photos, and no one else’s', async () => {
+    const { createBuild: makeBuild } = await import('../../support/build-factory');
+    const { Photo } = await import('@server/models/photo');
+    const client = await owner();
+    const { id } = await newBuild(client);
+    const mine = await Photo.create({ buildId: id, storageKey: 'a'.repeat(24) + Date.now().toString(16).padStart(8, '0').slice(-8), width: 480, height: 300, variants: [{ width: 480, height: 300 }] });
+    const other = await createUser();
+    const theirs = await makeBuild(other.user.id, { title: 'Not yours' });
+    const foreign = await Photo.create({ buildId: theirs.id, storageKey: 'b'.repeat(24) + Date.now().toString(16).padStart(8, '0').slice(-8), width: 480, height: 300, variants: [{ width: 480, height: 300 }] });
+    const figure = (photoId: number) => ({ wheelbase: { value: 2743, unit: 'mm', provenance: 'measured', measuredOn: '2026-03-01', evidencePhotoId: photoId } });
+    const ok = await client.raw.put(`/api/builds/${id}/sections/chassis`).set('X-CSRF-Token', client.csrf).send(figure(mine.id));
+    expect(ok.status).toBe(200);
+    expect(ok.body.build.sections.chassis.wheelbase.evidencePhotoId).toBe(mine.id);
+    const bad = await client.raw.put(`/api/builds/${id}/sections/chassis`).set('X-CSRF-Token', client.csrf).send(figure(foreign.id));
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields['wheelbase.evidencePhotoId']).toMatch(/not one of this build/);
+    const weight = await client.patch(`/api/builds/${id}`, { weight: { value: 1287, unit: 'kg', provenance: 'measured', measuredOn: '2026-06-01', evidencePhotoId: foreign.id } });
+    expect(weight.body.error.fields['weight.evidencePhotoId']).toBeDefined();
+  });
+});

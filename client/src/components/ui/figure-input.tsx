@@ -35,6 +35,8 @@ type Props = {
   units?: string[];
   /** The unit a new figure starts in when the trade quotes it one way in both systems (wheel offset in mm). */
   defaultUnit?: string;
+  /** Photos of the build that can back a measured figure (a dyno sheet, a scale ticket). */
+  evidencePhotos?: { id: number; label: string }[];
 };
 
 const parseNumber = (text: string) => (text.trim() === '' ? undefined : Number(text.trim().replace(',', '.')));
@@ -72,7 +74,7 @@ function rangeInOwnersUnit(kind: QuantityKind, message: string, unit: string): s
  * A build-sheet figure: number, unit (both systems), provenance and, when measured, the date.
  * Controlled: the value is the whole figure, or undefined while the number box is empty.
  */
-export function FigureInput({ label, kind, value, onChange, onBlur, system, error, warning, hint, units, defaultUnit }: Props) {
+export function FigureInput({ label, kind, value, onChange, onBlur, system, error, warning, hint, units, defaultUnit, evidencePhotos }: Props) {
   const id = useId();
   const [text, setText] = useState(value ? String(value.value) : '');
   // Follow the form when it changes the figure from outside (a reset after saving, a dyno run applied).
@@ -91,7 +93,8 @@ export function FigureInput({ label, kind, value, onChange, onBlur, system, erro
     if (number === undefined) return onChange(undefined);
     const nextProvenance = next.provenance ?? provenance;
     const measuredOn = nextProvenance === 'measured' ? ('measuredOn' in next ? next.measuredOn : value?.measuredOn) : undefined;
-    onChange({ value: number, unit: next.unit ?? unit, provenance: nextProvenance, ...(measuredOn ? { measuredOn } : {}), ...(value?.evidencePhotoId ? { evidencePhotoId: value.evidencePhotoId } : {}) });
+    const evidencePhotoId = nextProvenance === 'measured' ? ('evidencePhotoId' in next ? next.evidencePhotoId : value?.evidencePhotoId) : undefined;
+    onChange({ value: number, unit: next.unit ?? unit, provenance: nextProvenance, ...(measuredOn ? { measuredOn } : {}), ...(evidencePhotoId ? { evidencePhotoId } : {}) });
   };
 
   const messages = [error?.message, error?.value?.message, error?.unit?.message, error?.provenance?.message, error?.measuredOn?.message].filter((m): m is string => Boolean(m)).map((m) => rangeInOwnersUnit(kind, m, unit));
@@ -139,6 +142,22 @@ export function FigureInput({ label, kind, value, onChange, onBlur, system, erro
             onBlur={onBlur}
             className={`w-40 ${boxClass} ${error?.measuredOn ? 'border-danger' : 'border-rule'}`}
           />
+        ) : null}
+        {provenance === 'measured' && evidencePhotos?.length ? (
+          <select
+            aria-label={`${label}: evidence photo`}
+            value={value?.evidencePhotoId ?? ''}
+            onChange={(e) => emit({ evidencePhotoId: e.target.value ? Number(e.target.value) : undefined })}
+            onBlur={onBlur}
+            className={`w-48 ${boxClass} border-rule`}
+          >
+            <option value="">No evidence photo</option>
+            {evidencePhotos.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.label}
+              </option>
+            ))}
+          </select>
         ) : null}
       </div>
       {other ? <p className="text-sm tabular-nums text-graphite">{other}</p> : null}

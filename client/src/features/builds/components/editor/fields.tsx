@@ -8,7 +8,7 @@ import { TextField } from '@client/components/ui/text-field';
 import { TextAreaField } from '@client/components/ui/text-area-field';
 import { useFieldWarning, useNumbers } from '../numbers/numbers-context';
 import { asNumber } from './form-values';
-import type { FormKey } from './editor-stores';
+import { useEditor, type FormKey } from './editor-stores';
 
 /** A dotted path's error message in react-hook-form's nested errors. */
 export function errorAt(errors: FieldErrors, path: string): string | undefined {
@@ -23,6 +23,8 @@ type FigureFieldProps<T extends FieldValues> = { control: Control<T>; name: Path
 export function FigureField<T extends FieldValues>({ control, name, label, kind, form, hint, defaultUnit }: FigureFieldProps<T>) {
   const { system } = useNumbers();
   const warning = useFieldWarning(form, name);
+  const { build } = useEditor();
+  const evidencePhotos = build.photos.map((p, i) => ({ id: p.id, label: p.caption ? `Photo ${i + 1}: ${p.caption}` : `Photo ${i + 1}` }));
   return (
     <Controller
       control={control}
@@ -39,6 +41,7 @@ export function FigureField<T extends FieldValues>({ control, name, label, kind,
           {...(warning ? { warning } : {})}
           {...(hint ? { hint } : {})}
           {...(defaultUnit ? { defaultUnit } : {})}
+          evidencePhotos={evidencePhotos}
         />
       )}
     />
