@@ -1,22 +1,17 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import type { Server } from 'node:http';
+import type { Page } from 'playwright-core';
 import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
-import { launchBrowser, SCREENSHOT_DIR, startTestServer } from '../support/browser';
+import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 
-let browser: Browser;
-let server: Server;
-let baseUrl: string;
+const env = useBrowserAndServer();
 let tmp: string;
 let photoPath: string;
 
 beforeAll(async () => {
-  ({ server, baseUrl } = await startTestServer());
-  browser = await launchBrowser();
   tmp = await mkdtemp(path.join(os.tmpdir(), 'placard-editor-'));
   // A drawn test image (no real photo): a 1600×1000 JPEG of blocks of colour.
   photoPath = path.join(tmp, 'three-quarter-view.jpg');
@@ -24,19 +19,17 @@ beforeAll(async () => {
   await sharp({ create: { width: 1600, height: 1000, channels: 3, background: '#f5f0e6' } }).composite(blocks).jpeg({ quality: 85 }).toFile(photoPath);
 });
 afterAll(async () => {
-  await browser?.close();
-  await new Promise((r) => server?.close(r));
   if (tmp) await rm(tmp, { recursive: true, force: true });
 });
 
 const shot = (page: Page, name: string) => page.screenshot({ path: path.join(SCREENSHOT_DIR, name), fullPage: true });
 
 async function signIn(page: Page, email: string, password: string, next: string) {
-  await page.goto(`${baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
+  await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${baseUrl}${next}`);
+  await page.waitForURL(`${env.baseUrl}${next}`);
 }
 
 const DYNO_CSV = ['rpm,power,torque', '2500,160,336', '3000,205,359', '3500,244,366', '4000,281,369', '4500,312,364', '5000,334,351', '5500,342,327', '6000,338,296'].join('\n');
@@ -44,7 +37,7 @@ const DYNO_CSV = ['rpm,power,torque', '2500,160,336', '3000,205,359', '3500,244,
 describe('the build editor in the browser', () => {
   it('creates a build, fills engine and wheels, uploads a photo and adds a dyno run', async () => {
     const { email, password } = await createUser({ name: 'Rowan Tesk' });
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 }, locale: 'en-US' });
+    const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, locale: 'en-US' });
     const page = await context.newPage();
     const pageErrors: string[] = [];
     page.on('pageerror', (err) => pageErrors.push(err.message));
@@ -176,7 +169,7 @@ describe('the build editor in the browser', () => {
 
     // My builds: the cover and the key figures with provenance.
     await page.getByRole('link', { name: '← My builds' }).click();
-    await page.waitForURL(`${baseUrl}/builds`);
+    await page.waitForURL(`${env.baseUrl}/builds`);
     const card = page.getByRole('listitem').filter({ hasText: 'The Ember Coupe' });
     await card.locator('img[srcset*="480w"]').waitFor();
     await expect.poll(() => card.textContent()).toContain('Draft');
@@ -186,7 +179,7 @@ describe('the build editor in the browser', () => {
     await context.close();
 
     // The desktop layout: section nav, forms and the sticky numbers panel side by side.
-    const desk = await browser.newContext({ viewport: { width: 1280, height: 900 }, locale: 'en-GB' });
+    const desk = await env.browser.newContext({ viewport: { width: 1280, height: 900 }, locale: 'en-GB' });
     const deskPage = await desk.newPage();
     await signIn(deskPage, email, password, new URL(buildUrl).pathname);
     const panel = deskPage.getByTestId('numbers-panel');
@@ -208,7 +201,7 @@ describe('the build editor in the browser', () => {
     await expect.poll(() => dialog.getByRole('button', { name: 'Delete for good' }).isDisabled()).toBe(true);
     await dialog.getByLabel(/Type “The Ember Coupe” to confirm/).fill('The Ember Coupe');
     await dialog.getByRole('button', { name: 'Delete for good' }).click();
-    await deskPage.waitForURL(`${baseUrl}/builds`);
+    await deskPage.waitForURL(`${env.baseUrl}/builds`);
     await expect.poll(() => deskPage.getByText('No builds yet').count()).toBe(1);
     await desk.close();
   }, 90_000);

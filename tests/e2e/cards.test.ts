@@ -1,40 +1,27 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import type { Server } from 'node:http';
+import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
-import { launchBrowser, SCREENSHOT_DIR, startTestServer } from '../support/browser';
+import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 import { mediaBoxes, pageCount } from '../support/pdf';
 import { Build } from '@server/models/build';
 
-let browser: Browser;
-let server: Server;
-let baseUrl: string;
-
-beforeAll(async () => {
-  ({ server, baseUrl } = await startTestServer());
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await new Promise((r) => server?.close(r));
-});
+const env = useBrowserAndServer();
 
 describe('the card designer', () => {
   it('changes the design and the paper, saves the choices and downloads the PDF', async () => {
     const { user, email, password } = await createUser({ name: 'Rowan Teller' });
     const build = await createFullBuild(user.id);
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, acceptDownloads: true });
+    const context = await env.browser.newContext({ viewport: { width: 1280, height: 900 }, acceptDownloads: true });
     const page = await context.newPage();
-    await page.goto(`${baseUrl}/sign-in`);
+    await page.goto(`${env.baseUrl}/sign-in`);
     await page.getByLabel('E-mail').fill(email);
     await page.getByLabel('Password').fill(password);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
 
-    await page.goto(`${baseUrl}/builds/${build.id}/card`);
+    await page.goto(`${env.baseUrl}/builds/${build.id}/card`);
     await expect.poll(() => page.getByRole('heading', { name: 'Windshield card' }).count()).toBe(1);
     const preview = page.getByTitle('Card preview');
     await expect.poll(() => preview.getAttribute('data-src')).toContain('design=poster&paper=letter&orientation=portrait');

@@ -1,42 +1,29 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import type { Server } from 'node:http';
+import { describe, it } from 'vitest';
 import path from 'node:path';
-import { launchBrowser, SCREENSHOT_DIR, startTestServer } from '../support/browser';
+import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 
-let browser: Browser;
-let server: Server;
-let baseUrl: string;
-
-beforeAll(async () => {
-  ({ server, baseUrl } = await startTestServer());
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await new Promise((r) => server?.close(r));
-});
+const env = useBrowserAndServer();
 
 describe('a forgotten password, in demo mode', () => {
   it('is reset through the e-mail the site admin reads under Caught mail', async () => {
     const admin = await createUser({ isSiteAdmin: true, name: 'Demo Admin' });
     const forgetful = await createUser({ name: 'Forgetful Owner' });
 
-    const phone = await browser.newPage({ viewport: { width: 390, height: 844 } });
-    await phone.goto(`${baseUrl}/sign-in`);
+    const phone = await env.browser.newPage({ viewport: { width: 390, height: 844 } });
+    await phone.goto(`${env.baseUrl}/sign-in`);
     await phone.getByRole('link', { name: 'Forgot your password?' }).click();
     await phone.getByLabel('E-mail').fill(forgetful.email);
     await phone.getByRole('button', { name: 'Send the link' }).click();
     await phone.getByText('a reset link is on its way').waitFor();
     await phone.getByText('Demo mode: mail is caught, not sent.').waitFor();
 
-    const desk = await browser.newPage();
-    await desk.goto(`${baseUrl}/sign-in`);
+    const desk = await env.browser.newPage();
+    await desk.goto(`${env.baseUrl}/sign-in`);
     await desk.getByLabel('E-mail').fill(admin.email);
     await desk.getByLabel('Password').fill(admin.password);
     await desk.getByRole('button', { name: 'Sign in' }).click();
-    await desk.waitForURL(`${baseUrl}/account`);
+    await desk.waitForURL(`${env.baseUrl}/account`);
     await desk.getByRole('link', { name: 'Caught mail' }).click();
     await desk.getByRole('link', { name: new RegExp(`Reset your Placard password.*${forgetful.email}`) }).click();
     const link = desk.getByRole('link', { name: /reset-password\?token=/ });
@@ -44,7 +31,7 @@ describe('a forgotten password, in demo mode', () => {
     await desk.screenshot({ path: path.join(SCREENSHOT_DIR, 'caught-mail.png'), fullPage: true });
     // The mail points at PUBLIC_BASE_URL; the test server listens elsewhere, so follow the same path here.
     const { pathname, search } = new URL((await link.getAttribute('href'))!);
-    await phone.goto(`${baseUrl}${pathname}${search}`);
+    await phone.goto(`${env.baseUrl}${pathname}${search}`);
 
     await phone.getByLabel('New password').fill('short');
     await phone.getByRole('button', { name: 'Save the new password' }).click();
@@ -56,7 +43,7 @@ describe('a forgotten password, in demo mode', () => {
     await phone.getByLabel('E-mail').fill(forgetful.email);
     await phone.getByLabel('Password').fill('a new and longer password');
     await phone.getByRole('button', { name: 'Sign in' }).click();
-    await phone.waitForURL(`${baseUrl}/account`);
+    await phone.waitForURL(`${env.baseUrl}/account`);
     await phone.getByText('Signed in as Forgetful Owner.').waitFor();
   });
 });

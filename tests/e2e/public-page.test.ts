@@ -1,34 +1,21 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import type { Server } from 'node:http';
+import { describe, expect, it } from 'vitest';
 import path from 'node:path';
-import { launchBrowser, SCREENSHOT_DIR, startTestServer } from '../support/browser';
+import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 import { storePhotosForBuild } from '@server/services/photos';
 import { jpegWithGps } from '../support/images';
 
-let browser: Browser;
-let server: Server;
-let baseUrl: string;
-
-beforeAll(async () => {
-  ({ server, baseUrl } = await startTestServer());
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await new Promise((r) => server?.close(r));
-});
+const env = useBrowserAndServer();
 
 describe('the public build page on a phone', () => {
   it('reads whole with JavaScript turned off, and the units switch still works', async () => {
     const { user } = await createUser({ name: 'Rowan Teller' });
     const build = await createFullBuild(user.id);
     await storePhotosForBuild(build.id, [{ buffer: await jpegWithGps(), originalName: 'cover.jpg' }]);
-    const context = await browser.newContext({ javaScriptEnabled: false, viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, locale: 'en-US' });
+    const context = await env.browser.newContext({ javaScriptEnabled: false, viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, locale: 'en-US' });
     const page = await context.newPage();
-    const res = await page.goto(`${baseUrl}/c/${build.code}`);
+    const res = await page.goto(`${env.baseUrl}/c/${build.code}`);
     expect(res?.status()).toBe(200);
     expect(await page.locator('script').count()).toBe(0);
     await expect.poll(() => page.getByRole('heading', { level: 1 }).innerText()).toMatch(/1969 Night Shift/i);

@@ -1,3 +1,4 @@
+import { afterAll, beforeAll } from 'vitest';
 import { chromium, type Browser } from 'playwright-core';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
@@ -23,3 +24,20 @@ export async function startTestServer(): Promise<{ server: Server; baseUrl: stri
 }
 
 export const SCREENSHOT_DIR = path.resolve('test-results/screenshots');
+
+/**
+ * For a browser test file: starts the test server and the browser before its tests and stops them
+ * after. Read `env.browser` and `env.baseUrl` inside the tests.
+ */
+export function useBrowserAndServer(): { browser: Browser; server: Server; baseUrl: string } {
+  const env = {} as { browser: Browser; server: Server; baseUrl: string };
+  beforeAll(async () => {
+    Object.assign(env, await startTestServer());
+    env.browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await env.browser?.close();
+    await new Promise((r) => env.server?.close(r));
+  });
+  return env;
+}
