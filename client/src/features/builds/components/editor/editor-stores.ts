@@ -1,3 +1,4 @@
+import { SECTION_LABELS } from '@shared/schemas/build-sections';
 import { createContext, useContext, useSyncExternalStore } from 'react';
 import type { OwnerBuild } from '@shared/schemas/build';
 
@@ -47,13 +48,7 @@ export function useStoreVersion<V>(store: MapStore<V>): number {
 
 export const FORM_LABELS: Record<FormKey, string> = {
   overview: 'Overview',
-  engine: 'Engine',
-  drivetrain: 'Drivetrain',
-  chassis: 'Chassis and suspension',
-  brakes: 'Brakes',
-  wheels: 'Wheels and tyres',
-  body: 'Body and interior',
-  extra: 'Extra lines',
+  ...SECTION_LABELS,
   credits: 'Credits',
   private: 'Private details',
 };
