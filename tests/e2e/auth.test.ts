@@ -44,9 +44,9 @@ describe('a newcomer in the browser', () => {
     const page = await env.browser.newPage();
     await page.goto(`${env.baseUrl}/account`);
     await page.waitForURL(/\/sign-in\?next=%2Faccount/);
-    expect(await page.getByRole('heading', { name: 'Sign in' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('heading', { name: 'Sign in' }).count()).toBe(1);
     await page.goto(`${env.baseUrl}/no/such/page`);
-    expect(await page.getByRole('heading', { name: 'Nothing parked here' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('heading', { name: 'Nothing parked here' }).count()).toBe(1);
     await page.close();
   });
 });

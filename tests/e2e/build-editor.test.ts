@@ -131,7 +131,7 @@ describe('the build editor in the browser', () => {
     await run.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-dyno-form-phone.png') });
     await run.getByRole('button', { name: 'Add the run' }).click();
     await dyno.locator('svg.recharts-surface').first().waitFor({ timeout: 10_000 });
-    expect(await dyno.locator('.recharts-line').count()).toBeGreaterThanOrEqual(2);
+    await expect.poll(() => dyno.locator('.recharts-line').count()).toBeGreaterThanOrEqual(2);
     await dyno.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-dyno-phone.png') });
     await dyno.getByRole('button', { name: 'Use as the build’s power figure' }).click();
     await expect.poll(() => dyno.getByText(/now measured on/).count()).toBe(1);
