@@ -22,6 +22,7 @@ import { buildsRouter } from './routes/builds';
 import { buildRecordsRouter } from './routes/build-records';
 import { photosRouter } from './routes/photos';
 import { cardsRouter } from './routes/cards';
+import { buildPreviewRouter } from './routes/build-preview';
 import { publicApiRouter } from './routes/public';
 import { mediaRouter } from './routes/media';
 import { pagesRouter } from './pages/router';
@@ -42,7 +43,7 @@ function apiRouter() {
   api.use(passport.session());
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, adminRouter);
-  api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter);
+  api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
   api.use(apiNotFound);
   return api;
 }

@@ -48,4 +48,5 @@ th{font-weight:600;color:var(--graphite);font-size:.875rem}
 .gal figure{margin:0}
 .show{border:2px solid var(--ink);padding:12px;margin-top:20px}
 footer{max-width:760px;margin:0 auto;padding:16px;border-top:1px solid var(--rule);font-size:.8rem;color:var(--graphite)}
-@media (min-width:800px){.cover{margin:16px 0 0}}`;
+@media (min-width:800px){.cover{margin:16px 0 0}}
+.preview{margin:0;padding:10px 16px;background:#1C1B19;color:#F5F0E6;font-size:15px;text-align:center}`;

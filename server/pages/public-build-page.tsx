@@ -178,7 +178,7 @@ function ShowEntry({ slot }: { slot: ShowEntrySlot }) {
   );
 }
 
-function Page({ build, units, show }: { build: PublicBuild; units: UnitSystem; show: ShowEntrySlot }) {
+function Page({ build, units, show, preview }: { build: PublicBuild; units: UnitSystem; show: ShowEntrySlot; preview: 'draft' | 'published' | null }) {
   const { heading, kicker } = headlineOf(build);
   const photo = cover(build);
   const figures = computeKeyFigures(build);
@@ -211,6 +211,7 @@ function Page({ build, units, show }: { build: PublicBuild; units: UnitSystem; s
         <meta name="twitter:description" content={description} />
         {og ? <meta name="twitter:image" content={absolute(og.jpeg)} /> : null}
         <meta name="theme-color" content="#F5F0E6" />
+        {preview ? <meta name="robots" content="noindex" /> : null}
         <style dangerouslySetInnerHTML={{ __html: PAGE_CSS }} />
       </head>
       <body>
@@ -227,6 +228,11 @@ function Page({ build, units, show }: { build: PublicBuild; units: UnitSystem; s
             </a>
           </nav>
         </header>
+        {preview ? (
+          <p className="preview" role="status">
+            {preview === 'draft' ? 'Preview of a draft: visitors see this page once you publish the build.' : 'Preview: this is the page visitors see.'}
+          </p>
+        ) : null}
         <main>
           {photo ? (
             <figure className="cover">
@@ -298,8 +304,9 @@ function Page({ build, units, show }: { build: PublicBuild; units: UnitSystem; s
 }
 
 /** The whole public page as a string: complete HTML with its style inlined and no script. */
-export function renderPublicBuildPage(build: PublicBuild, units: UnitSystem, show: ShowEntrySlot = null): string {
-  return `<!doctype html>${renderToStaticMarkup(<Page build={build} units={units} show={show} />)}`;
+/** `preview` marks the owner's own look at the page (a draft included), never cached or indexed. */
+export function renderPublicBuildPage(build: PublicBuild, units: UnitSystem, show: ShowEntrySlot = null, preview: 'draft' | 'published' | null = null): string {
+  return `<!doctype html>${renderToStaticMarkup(<Page build={build} units={units} show={show} preview={preview} />)}`;
 }
 
 /** One plain page for every code that is not a published build, so a guess learns nothing. */

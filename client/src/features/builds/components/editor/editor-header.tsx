@@ -41,12 +41,10 @@ export function EditorHeader({ build }: { build: OwnerBuild }) {
               {build.published ? 'Unpublish' : 'Publish'}
             </Button>
           ) : null}
-          {/* A draft's public address answers "not found" until it is published, so there is nothing to preview yet. */}
-          {build.published ? (
-            <a href={build.publicUrl} target="_blank" rel="noopener" className={linkClass}>
-              Preview public page ↗
-            </a>
-          ) : null}
+          {/* A draft's public address answers "not found" until it is published: the owner previews it through their own session. */}
+          <a href={build.published ? build.publicUrl : `/api/builds/${build.id}/preview`} target="_blank" rel="noopener" className={linkClass}>
+            {build.published ? 'Open public page ↗' : 'Preview public page ↗'}
+          </a>
           <Link to={`/builds/${build.id}/card`} className={linkClass}>
             Print a card
           </Link>
