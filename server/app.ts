@@ -6,7 +6,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import './models/index';
 import { config } from './config';
-import { logger } from './logger';
+import { httpLogSerializers, logger } from './logger';
 import { passport } from './auth/passport';
 import { sessionMiddleware } from './session-store';
 import { csrfProtection } from './middlewares/csrf';
@@ -32,12 +32,12 @@ const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '
 function apiRouter() {
   const api = express.Router();
   api.use(healthRouter); // before the limiter and the session: probes must stay cheap
+  api.use(apiLimiter); // every other API request, the public JSON included, is metered per address
   api.use(publicApiRouter); // public JSON: no session, cacheable
   api.use((_req, res, next) => {
     res.set('Cache-Control', 'no-store'); // answers depend on who asks
     next();
   });
-  api.use(apiLimiter);
   api.use(express.json({ limit: '1mb' }));
   api.use(sessionMiddleware);
   api.use(passport.session());
@@ -77,7 +77,7 @@ export function createApp(): Express {
       strictTransportSecurity: config.secureCookies,
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(pinoHttp({ logger, serializers: httpLogSerializers, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
   app.use('/api', apiRouter());
   app.use(mediaRouter); // uploaded photos under /media
   app.use(pagesRouter); // public pages such as /c/<code>, complete HTML without the app bundle

@@ -28,6 +28,8 @@ const EnvSchema = z.object({
   MAIL_CATCHER_PORT: z.coerce.number().int().min(0).max(65535).default(1025),
   SIGNIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   SIGNIN_RATE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+  SIGNIN_ADDRESS_RATE_LIMIT: z.coerce.number().int().min(1).default(100),
+  SIGNUP_RATE_LIMIT_PER_HOUR: z.coerce.number().int().min(1).default(30),
   API_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
   STORAGE_DIR: z.string().optional().transform((v) => v || undefined),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
@@ -69,6 +71,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     mailCatcherPort: e.MAIL_CATCHER_PORT,
     signInRateLimit: e.SIGNIN_RATE_LIMIT,
     signInRateWindowMs: e.SIGNIN_RATE_WINDOW_MINUTES * 60 * 1000,
+    /** Sign-ins per address in the same window whatever the e-mail: one address trying many accounts. */
+    signInAddressRateLimit: e.SIGNIN_ADDRESS_RATE_LIMIT,
+    signUpRateLimitPerHour: e.SIGNUP_RATE_LIMIT_PER_HOUR,
     apiRateLimitPerMinute: e.API_RATE_LIMIT_PER_MINUTE,
     /** Local-disk storage of uploads; tests get a fresh temporary folder per process unless told otherwise. */
     storageDir: path.resolve(PROJECT_ROOT, e.STORAGE_DIR ?? (e.NODE_ENV === 'test' ? testStorageDir() : '.data/uploads')),

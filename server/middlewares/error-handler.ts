@@ -22,6 +22,12 @@ function toAppError(err: unknown): AppError | undefined {
   if (e?.code === 'EBADCSRFTOKEN') return new AppError(403, 'CSRF_INVALID', 'Your session expired or the form is stale. Reload the page and try again.');
   if (e?.type === 'entity.parse.failed') return new AppError(400, 'BAD_REQUEST', 'The request body is not valid JSON.');
   if (e?.type === 'entity.too.large') return new AppError(413, 'PAYLOAD_TOO_LARGE', 'The request is too large.');
+  // Express, the body parser and static files throw http-errors for the client's own mistakes (a broken
+  // %-escape in the path, an unknown charset, a missing asset): answer those with their status, in our
+  // words (their messages can name files on the server, so they are never passed on).
+  if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500) {
+    return e.status === 404 ? new NotFoundError() : new AppError(e.status, 'BAD_REQUEST', 'The request could not be read.');
+  }
   return undefined;
 }
 

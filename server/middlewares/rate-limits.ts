@@ -1,4 +1,5 @@
-import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
+import { rateLimit, ipKeyGenerator, type RateLimitRequestHandler } from 'express-rate-limit';
+import { createHash } from 'node:crypto';
 import type { Request } from 'express';
 import { AppError } from '../errors';
 import { config } from '../config';
@@ -9,37 +10,90 @@ const tooMany = (message: string) => () => {
 };
 
 const ip = (req: Request) => ipKeyGenerator(req.ip ?? '0.0.0.0');
-const emailOf = (req: Request) => String((req.body as { email?: unknown } | undefined)?.email ?? '').trim().toLowerCase();
+/**
+ * The e-mail of the body as a short hash: read before validation, so it may be anything and any
+ * length, and the counters table then never holds an address in clear.
+ */
+const emailOf = (req: Request) => {
+  const email = String((req.body as { email?: unknown } | undefined)?.email ?? '').trim().toLowerCase();
+  return createHash('sha256').update(email).digest('hex').slice(0, 32);
+};
+/** The signed-in person (the limiter runs after requireUser), else the address. */
+const person = (req: Request) => (req.user ? `user:${(req.user as { id: number }).id}` : ip(req));
+
+function limiter(name: string, opts: { windowMs: number; limit: number; key: (req: Request) => string; message: string }): RateLimitRequestHandler {
+  return rateLimit({
+    windowMs: opts.windowMs,
+    limit: opts.limit,
+    identifier: name,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    keyGenerator: opts.key,
+    store: new PostgresRateLimitStore(`${name}:`),
+    handler: tooMany(opts.message),
+  });
+}
 
 /** Sign-in attempts per address and e-mail: slows password guessing without locking out a whole show's Wi-Fi. */
-export const signInLimiter = rateLimit({
+export const signInLimiter = limiter('signin', {
   windowMs: config.signInRateWindowMs,
   limit: config.signInRateLimit,
-  standardHeaders: 'draft-8',
-  legacyHeaders: false,
-  keyGenerator: (req) => `${ip(req)}|${emailOf(req)}`,
-  store: new PostgresRateLimitStore('signin:'),
-  handler: tooMany('Too many sign-in attempts. Wait a few minutes and try again.'),
+  key: (req) => `${ip(req)}|${emailOf(req)}`,
+  message: 'Too many sign-in attempts. Wait a few minutes and try again.',
+});
+
+/** Sign-ins per address whatever the e-mail: one address trying many accounts (and a password hash each time). */
+export const signInAddressLimiter = limiter('signin-address', {
+  windowMs: config.signInRateWindowMs,
+  limit: config.signInAddressRateLimit,
+  key: ip,
+  message: 'Too many sign-in attempts from this network. Wait a few minutes and try again.',
+});
+
+/** New accounts per address, so sign-up cannot be scripted into many accounts or an e-mail probe. */
+export const signUpLimiter = limiter('signup-address', {
+  windowMs: 60 * 60 * 1000,
+  limit: config.signUpRateLimitPerHour,
+  key: ip,
+  message: 'Too many new accounts from this network. Try again in an hour.',
 });
 
 /** Reset e-mails per address and e-mail, so the form cannot be used to flood an inbox. */
-export const passwordResetLimiter = rateLimit({
+export const passwordResetLimiter = limiter('reset', {
   windowMs: 60 * 60 * 1000,
   limit: 5,
-  standardHeaders: 'draft-8',
-  legacyHeaders: false,
-  keyGenerator: (req) => `${ip(req)}|${emailOf(req)}`,
-  store: new PostgresRateLimitStore('reset:'),
-  handler: tooMany('Too many reset requests. Try again in an hour.'),
+  key: (req) => `${ip(req)}|${emailOf(req)}`,
+  message: 'Too many reset requests. Try again in an hour.',
 });
 
-/** Every API request per address. */
-export const apiLimiter = rateLimit({
+/** Reset confirmations per address: each one that holds a live token spends a password hash. */
+export const passwordResetConfirmLimiter = limiter('reset-confirm', {
+  windowMs: 60 * 60 * 1000,
+  limit: 20,
+  key: ip,
+  message: 'Too many attempts. Ask for a new reset link and try again in an hour.',
+});
+
+/** Card PDFs per person: each render lays out a whole page and embeds a photo (the designer asks for one per change, 350 ms apart). */
+export const CARD_RENDER_LIMIT = { windowMs: 60 * 1000, limit: 60 };
+export const cardRenderLimiter = limiter('card-render', {
+  ...CARD_RENDER_LIMIT,
+  key: person,
+  message: 'Too many cards at once. Wait a minute and try again.',
+});
+
+/** Photo uploads per person (the client sends one file per request): each is decoded and re-encoded six times. */
+export const PHOTO_UPLOAD_LIMIT = { windowMs: 15 * 60 * 1000, limit: 120 };
+export const photoUploadLimiter = limiter('photo-upload', {
+  ...PHOTO_UPLOAD_LIMIT,
+  key: person,
+  message: 'Too many uploads in a short time. Wait a few minutes and try again.',
+});
+
+/** Every API request per address, the public JSON included. */
+export const apiLimiter = limiter('api', {
   windowMs: 60 * 1000,
   limit: config.apiRateLimitPerMinute,
-  standardHeaders: 'draft-8',
-  legacyHeaders: false,
-  keyGenerator: ip,
-  store: new PostgresRateLimitStore('api:'),
-  handler: tooMany('Too many requests. Slow down a little and try again.'),
+  key: ip,
+  message: 'Too many requests. Slow down a little and try again.',
 });

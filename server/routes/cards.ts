@@ -3,6 +3,7 @@ import { IdParamSchema } from '@shared/schemas/user';
 import { CardQuerySchema, CardSettingsSchema, type CardQuery, type CardSettings, type CardSettingsResponse } from '@shared/schemas/card';
 import { SECTION_KINDS } from '@shared/schemas/build-sections';
 import { validate } from '../middlewares/validate';
+import { cardRenderLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
 import { findBuild, loadFullBuildOrThrow } from '../services/builds';
@@ -42,7 +43,7 @@ cardsRouter.put('/builds/:id/card-settings', requireUser, validate('params', IdP
   res.json({ settings });
 });
 
-cardsRouter.get('/builds/:id/card.pdf', requireUser, validate('params', IdParamSchema), validate('query', CardQuerySchema), async (req, res) => {
+cardsRouter.get('/builds/:id/card.pdf', requireUser, cardRenderLimiter, validate('params', IdParamSchema), validate('query', CardQuerySchema), async (req, res) => {
   const build = await loadFullBuildOrThrow(idOf(res));
   authorizeBuild(currentUser(req), 'edit', build);
   const query = res.locals.query as CardQuery;

@@ -5,6 +5,7 @@ import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES, PhotoOrderSchema, PhotoUpdateSchema }
 import { shortText } from '@shared/schemas/figure';
 import { IdParamSchema } from '@shared/schemas/user';
 import { validate } from '../middlewares/validate';
+import { photoUploadLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
 import { findBuild } from '../services/builds';
@@ -56,7 +57,7 @@ const loadEditableBuild: RequestHandler = async (req, res, next) => {
 const buildOf = (res: Response) => res.locals.build as Build;
 const photoIdOf = (res: Response) => (res.locals.params as { photoId: number }).photoId;
 
-photosRouter.post('/builds/:id/photos', requireUser, validate('params', IdParamSchema), loadEditableBuild, receivePhotos, validate('body', PhotoUploadFieldsSchema), async (req, res) => {
+photosRouter.post('/builds/:id/photos', requireUser, photoUploadLimiter, validate('params', IdParamSchema), loadEditableBuild, receivePhotos, validate('body', PhotoUploadFieldsSchema), async (req, res) => {
   const files = ((req.files as Express.Multer.File[] | undefined) ?? []).map((f) => ({ buffer: f.buffer, originalName: f.originalname }));
   const { captions } = res.locals.body as z.infer<typeof PhotoUploadFieldsSchema>;
   const photos = await storePhotosForBuild(buildOf(res).id, files, captions);

@@ -2,7 +2,7 @@ import { Router, type Request } from 'express';
 import { SignInSchema, type SessionResponse } from '@shared/schemas/user';
 import { validate } from '../middlewares/validate';
 import { csrfToken } from '../middlewares/csrf';
-import { signInLimiter } from '../middlewares/rate-limits';
+import { signInAddressLimiter, signInLimiter } from '../middlewares/rate-limits';
 import { authenticateLocal, signIn, signOut } from '../auth/session-helpers';
 import { presentCurrentUser } from '../presenters/user';
 import { AppError } from '../errors';
@@ -22,7 +22,7 @@ sessionRouter.get('/session', (req, res) => {
   res.json(sessionBody(req));
 });
 
-sessionRouter.post('/session', signInLimiter, validate('body', SignInSchema), async (req, res) => {
+sessionRouter.post('/session', signInAddressLimiter, signInLimiter, validate('body', SignInSchema), async (req, res) => {
   const user = await authenticateLocal(req, res);
   if (!user) throw new AppError(401, 'UNAUTHENTICATED', 'That e-mail and password do not match an account.', { password: 'E-mail or password is not right.' });
   await signIn(req, user);

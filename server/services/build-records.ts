@@ -4,10 +4,15 @@ import { BuildSection } from '../models/build-section';
 import { DynoRun } from '../models/dyno-run';
 import { WeighIn } from '../models/weigh-in';
 import type { Build } from '../models/build';
-import { NotFoundError } from '../errors';
+import { Photo } from '../models/photo';
+import { NotFoundError, ValidationError } from '../errors';
 import { saveSection, touchBuild, updateOverview } from './builds';
 
 export async function addDynoRun(build: Build, input: DynoRunCreateInput): Promise<DynoRun> {
+  // The photo of the printed sheet must be one of this build's own photos, never another owner's.
+  if (input.sheetPhotoId !== undefined && !(await Photo.count({ where: { id: input.sheetPhotoId, buildId: build.id } }))) {
+    throw new ValidationError({ sheetPhotoId: 'That photo is not one of this build’s photos.' });
+  }
   const run = await DynoRun.create({ buildId: build.id, date: input.date, data: input });
   await touchBuild(build);
   return run;

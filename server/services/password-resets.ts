@@ -36,10 +36,13 @@ const invalidLink = () =>
 
 /** Sets the new password, spends the token and every other unspent one, and signs the person out everywhere. */
 export async function confirmPasswordReset(input: PasswordResetConfirmInput): Promise<User> {
+  const live = () => ({ tokenHash: sha256(input.token), usedAt: null, expiresAt: { [Op.gt]: new Date() } });
+  // A password hash costs real memory and time: spend it only for a link that works (checked again under the lock).
+  if ((await PasswordResetToken.count({ where: live() })) === 0) throw invalidLink();
   const passwordHash = await hashPassword(input.password);
   return sequelize.transaction(async (transaction) => {
     const token = await PasswordResetToken.findOne({
-      where: { tokenHash: sha256(input.token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      where: live(),
       lock: transaction.LOCK.UPDATE,
       transaction,
     });

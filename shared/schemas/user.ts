@@ -32,7 +32,10 @@ export const AccountUpdateSchema = z.object({ name: NameSchema });
 export type AccountUpdateInput = z.infer<typeof AccountUpdateSchema>;
 
 export const PasswordChangeSchema = z.object({
-  currentPassword: z.string({ error: 'Current password is required.' }).min(1, { error: 'Current password is required.' }),
+  currentPassword: z
+    .string({ error: 'Current password is required.' })
+    .min(1, { error: 'Current password is required.' })
+    .max(PASSWORD_MAX_LENGTH, { error: `Password must be at most ${PASSWORD_MAX_LENGTH} characters.` }),
   newPassword: PasswordSchema,
 });
 export type PasswordChangeInput = z.infer<typeof PasswordChangeSchema>;

@@ -1,4 +1,20 @@
-/** Only same-site paths are followed after sign-in, never another origin. */
+// Characters a browser ignores or reads as "/" inside a URL, which can turn "/…" into another origin.
+const unsafeChar = (c: string) => c === '\\' || c.charCodeAt(0) < 0x20 || c.charCodeAt(0) === 0x7f;
+const BASE = 'https://placard.invalid';
+
+/**
+ * Only same-site paths are followed after sign-in, never another origin. "/\elsewhere.example"
+ * is "//elsewhere.example" to a browser, so such paths are refused, and what is left is resolved
+ * as a browser would and kept only when it stays on our origin.
+ */
 export function safeNext(next: string | null): string {
-  return next && next.startsWith('/') && !next.startsWith('//') ? next : '/account';
+  const fallback = '/account';
+  if (!next || !next.startsWith('/') || [...next].some(unsafeChar)) return fallback;
+  let url: URL;
+  try {
+    url = new URL(next, BASE);
+  } catch {
+    return fallback;
+  }
+  return url.origin === BASE ? `${url.pathname}${url.search}${url.hash}` : fallback;
 }
