@@ -29,3 +29,25 @@ export function carDrawingSvg(d: Drawing, width = 1600, height = 1000): string {
   ${wheel(rearX)}${wheel(frontX)}
 </svg>`;
 }
+
+/** A drawn stand-in for the photo of a printed dyno sheet: ruled paper, power and torque traces. */
+export function dynoSheetSvg(points: { rpm: number; power: number; torque: number }[], width = 1600, height = 1100): string {
+  const left = 140, right = width - 80, top = 160, bottom = height - 140;
+  const rpms = points.map((p) => p.rpm);
+  const [r0, r1] = [Math.min(...rpms), Math.max(...rpms)];
+  const most = Math.max(...points.flatMap((p) => [p.power, p.torque])) * 1.1;
+  const x = (rpm: number) => left + ((rpm - r0) / (r1 - r0)) * (right - left);
+  const y = (v: number) => bottom - (v / most) * (bottom - top);
+  const trace = (key: 'power' | 'torque') => points.map((p, i) => `${i ? 'L' : 'M'} ${x(p.rpm).toFixed(1)} ${y(p[key]).toFixed(1)}`).join(' ');
+  const grid = Array.from({ length: 11 }, (_, i) => `<line x1="${left}" x2="${right}" y1="${top + (i * (bottom - top)) / 10}" y2="${top + (i * (bottom - top)) / 10}" stroke="#B9C7D8" stroke-width="2"/>`).join('');
+  return `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}">
+  <rect width="${width}" height="${height}" fill="#6B655B"/>
+  <rect x="40" y="30" width="${width - 80}" height="${height - 60}" fill="#FBFAF6" transform="rotate(-1.2 ${width / 2} ${height / 2})"/>
+  <g transform="rotate(-1.2 ${width / 2} ${height / 2})">
+    <rect x="${left}" y="70" width="520" height="40" fill="#1C1B19"/>
+    ${grid}
+    <path d="${trace('power')}" fill="none" stroke="#A8261B" stroke-width="6"/>
+    <path d="${trace('torque')}" fill="none" stroke="#1F4E8C" stroke-width="6" stroke-dasharray="18 10"/>
+  </g>
+</svg>`;
+}

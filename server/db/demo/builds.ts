@@ -11,6 +11,8 @@ export type DemoBuild = BuildCreateInput & {
   sections: Sections;
   credits: Credit[];
   drawings: { drawing: Drawing; caption: string }[];
+  /** A drawn photo of the newest dyno run's printed sheet, kept with that run. */
+  dynoSheet?: { caption: string };
   dynoRuns?: DynoRunCreateInput[];
   weighIns?: WeighInCreateInput[];
   private?: { vin?: string; plate?: string };
@@ -106,6 +108,7 @@ export const DEMO_BUILDS: DemoBuild[] = [
       { drawing: { body: '#3A3D42', sky: '#D8D0C0', ground: '#55524C', roof: 'low', stance: 18 }, caption: 'Side view at the spring meet' },
       { drawing: { body: '#3A3D42', sky: '#F5F0E6', ground: '#8A8478', roof: 'low', stance: 18 }, caption: 'In the shop before the stripes' },
     ],
+    dynoSheet: { caption: 'The printed sheet from the dyno day' },
     dynoRuns: [
       {
         date: '2026-05-30', facility: 'A rolling-road shop by the airfield', standard: 'SAE J1349', measuredAt: 'wheel', powerUnit: 'hp', torqueUnit: 'lbft',

@@ -2,7 +2,7 @@ import { randomBytes } from 'node:crypto';
 import sharp from 'sharp';
 import type { Migration } from '../migrator';
 import { DEMO_BUILDS, DEMO_OWNERS } from '../demo/builds';
-import { carDrawingSvg } from '../demo/art';
+import { carDrawingSvg, dynoSheetSvg } from '../demo/art';
 import { User } from '../../models/user';
 import { hashPassword } from '../../auth/passwords';
 import { createBuild, saveCredits, savePrivate, saveSection, setPublished, updateOverview } from '../../services/builds';
@@ -30,7 +30,14 @@ export const up: Migration = async () => {
     );
     if (images.length) await storePhotosForBuild(build.id, images, demo.drawings.map((d) => d.caption));
     const runs = [];
-    for (const run of demo.dynoRuns ?? []) runs.push(await addDynoRun(build, run));
+    const newestFirst = [...(demo.dynoRuns ?? [])].sort((a, b) => b.date.localeCompare(a.date));
+    let sheetPhotoId: number | undefined;
+    if (demo.dynoSheet && newestFirst[0]) {
+      const sheet = await sharp(Buffer.from(dynoSheetSvg(newestFirst[0].curve))).jpeg({ quality: 85 }).toBuffer();
+      const photos = await storePhotosForBuild(build.id, [{ buffer: sheet, originalName: 'dyno-sheet.jpg' }], [demo.dynoSheet.caption]);
+      sheetPhotoId = photos[photos.length - 1]?.id;
+    }
+    for (const run of demo.dynoRuns ?? []) runs.push(await addDynoRun(build, run === newestFirst[0] && sheetPhotoId ? { ...run, sheetPhotoId } : run));
     const newestRun = [...runs].sort((a, b) => b.date.localeCompare(a.date))[0];
     if (newestRun) await applyDynoRun(build, newestRun.id);
     for (const w of demo.weighIns ?? []) await applyWeighIn(build, (await addWeighIn(build, w)).id);

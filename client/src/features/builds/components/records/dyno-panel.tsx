@@ -63,6 +63,7 @@ export function DynoPanel({ build }: { build: OwnerBuild }) {
               <p className="font-display text-lg tabular-nums">{peaks(run, system).shown}</p>
               {peaks(run, system).recorded ? <p className="text-sm text-graphite">As recorded: {peaks(run, system).recorded}</p> : null}
               {run.note ? <p className="text-sm text-graphite">{run.note}</p> : null}
+              <SheetPhotoLink build={build} photoId={run.sheetPhotoId} />
               <div className="mt-2 flex flex-wrap gap-2">
                 <Button
                   type="button"
@@ -103,5 +104,17 @@ export function DynoPanel({ build }: { build: OwnerBuild }) {
         The run of {deleting?.date} and its curve go for good. Figures already taken from it stay as they are.
       </ConfirmDialog>
     </EditorSection>
+  );
+}
+
+/** The photo of the printed dyno sheet kept with a run, opened at its largest size. */
+function SheetPhotoLink({ build, photoId }: { build: OwnerBuild; photoId: number | undefined }) {
+  const photo = photoId ? build.photos.find((p) => p.id === photoId) : undefined;
+  const largest = photo?.sources[photo.sources.length - 1];
+  if (!largest) return null;
+  return (
+    <a href={largest.jpeg} target="_blank" rel="noopener" className="inline-flex min-h-11 items-center text-sm underline underline-offset-4">
+      Photo of the printed sheet ↗
+    </a>
   );
 }

@@ -20,7 +20,8 @@ const blank = (): Values => ({ date: today(), facility: '', standard: 'SAE J1349
 /** Only the chosen way of giving the curve is sent. */
 const clean = (v: Values) => {
   const { curveMode, ...run } = v;
-  const out: Record<string, unknown> = { ...run, facility: run.facility?.trim() || undefined, note: run.note?.trim() || undefined };
+  const sheet = Number(run.sheetPhotoId);
+  const out: Record<string, unknown> = { ...run, facility: run.facility?.trim() || undefined, note: run.note?.trim() || undefined, sheetPhotoId: sheet > 0 ? sheet : undefined };
   if (curveMode === 'csv') out.curve = [];
   else delete out.curveCsv;
   return out;
@@ -62,7 +63,7 @@ export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () =
     setFormError('');
     add.mutate(run as DynoRunFormInput, {
       onSuccess: onDone,
-      onError: (err) => setFormError(placeServerErrors(err, setError, [...Object.keys(blank()), 'peakPower', 'peakPowerRpm', 'peakTorque', 'peakTorqueRpm', 'note'])),
+      onError: (err) => setFormError(placeServerErrors(err, setError, [...Object.keys(blank()), 'peakPower', 'peakPowerRpm', 'peakTorque', 'peakTorqueRpm', 'note', 'sheetPhotoId'])),
     });
   });
   const num = (name: 'peakPower' | 'peakPowerRpm' | 'peakTorque' | 'peakTorqueRpm', label: string) => <TextField label={label} inputMode="decimal" autoComplete="off" {...register(name, asNumber as never)} error={errorAt(errors, name)} />;
@@ -133,6 +134,18 @@ export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () =
         )}
       </fieldset>
       <TextField label="Note" {...register('note')} error={errorAt(errors, 'note')} />
+      {build.photos.length ? (
+        <SelectField
+          label="Photo of the printed sheet"
+          hint="Upload it under Photos first, then pick it here."
+          placeholder="None"
+          options={build.photos.map((p, i) => ({ value: String(p.id), label: p.caption ? `Photo ${i + 1}: ${p.caption}` : `Photo ${i + 1}` }))}
+          {...register('sheetPhotoId')}
+          error={errorAt(errors, 'sheetPhotoId')}
+        />
+      ) : (
+        <p className="text-sm text-graphite">To keep a photo of the printed dyno sheet with the run, upload it under Photos first.</p>
+      )}
       <div className="flex flex-wrap gap-2">
         <Button type="submit" busy={add.isPending}>
           Add the run
