@@ -17,8 +17,12 @@ const sessionBody = (req: Request): SessionResponse => ({
   demoMode: config.demoMode,
 });
 
+// A visitor's session only carries a CSRF token: keep it a day, not the signed-in month, so the table stays small.
+const ANONYMOUS_SESSION_MS = 24 * 3600 * 1000;
+
 /** Who is signed in, what they may do, and the CSRF token for the next write. */
 sessionRouter.get('/session', (req, res) => {
+  if (!req.user) req.session.cookie.maxAge = ANONYMOUS_SESSION_MS;
   res.json(sessionBody(req));
 });
 

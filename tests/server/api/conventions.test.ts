@@ -34,3 +34,23 @@ describe('API conventions', () => {
     expect(cookie).not.toMatch(/Secure/);
   });
 });
+
+describe('session lifetimes', () => {
+  const expiresInDays = (res: request.Response) => {
+    const cookie = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('placard.sid='))!;
+    const expires = /Expires=([^;]+)/.exec(cookie)![1]!;
+    return (new Date(expires).getTime() - Date.now()) / (24 * 3600 * 1000);
+  };
+
+  it('keeps a visitor’s session a day and a signed-in one for SESSION_MAX_AGE_DAYS (30)', async () => {
+    const { createUser } = await import('../../support/factories');
+    const client = await apiClient();
+    const anonymous = await client.refresh();
+    expect(expiresInDays(anonymous)).toBeGreaterThan(0.9);
+    expect(expiresInDays(anonymous)).toBeLessThan(1.1);
+    const { email, password } = await createUser();
+    const signedIn = await client.signIn(email, password);
+    expect(expiresInDays(signedIn)).toBeGreaterThan(29);
+    expect(expiresInDays(await client.get('/api/session'))).toBeGreaterThan(29);
+  });
+});
