@@ -1,5 +1,5 @@
 import { convert, cornerWeights, displacement, formatNumber, formatQuantity, parseUnit, powerToWeight, preferredUnit, type QuantityKind, type Unit, type UnitSystem } from '@shared/calc';
-import type { PublicBuild } from '@shared/schemas/build';
+import type { PublicBuild, PublicBuildTile } from '@shared/schemas/build';
 import type { Sections } from '@shared/schemas/build-sections';
 import type { FigureInput } from '@shared/schemas/figure';
 import { CARD_FIGURE_LABELS, type CardFigureKey, type KeyFigure, type PublicBuildResponse } from '@shared/schemas/card';
@@ -166,4 +166,11 @@ export function presentPublicBuildResponse(b: PublicBuild): PublicBuildResponse 
 export function headlineOf(b: Pick<PublicBuild, 'title' | 'modelYear' | 'bodyOrigin'>): { heading: string; kicker: string | null } {
   const year = b.modelYear ? String(b.modelYear) : '';
   return { heading: year && !b.title.includes(year) ? `${year} ${b.title}` : b.title, kicker: b.bodyOrigin?.trim() || null };
+}
+
+/** A published build as a tile: title, year, style, cover and its public address; nothing else. */
+export function presentPublicBuildTile(build: Build): PublicBuildTile {
+  const photos = [...(build.photos ?? [])].sort((a, b) => a.position - b.position);
+  const cover = photos.find((p) => p.isCover) ?? photos[0];
+  return { code: build.code, url: publicBuildUrl(build.code), title: build.title, modelYear: build.modelYear, style: build.style, cover: cover ? presentPhoto(cover) : null };
 }

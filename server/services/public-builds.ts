@@ -3,6 +3,8 @@ import type { PublicBuild } from '@shared/schemas/build';
 import { BuildCodeSchema } from '@shared/schemas/build';
 import { sequelize } from '../db/sequelize';
 import { User } from '../models/user';
+import { Build } from '../models/build';
+import { Photo } from '../models/photo';
 import { canViewPublic } from '../policies/build';
 import { presentPublicBuild } from '../presenters/public-build';
 import { loadFullBuild } from './builds';
@@ -38,3 +40,7 @@ export async function loadPublicBuild(code: string): Promise<PublicBuild | null>
   const owner = await User.findByPk(build.ownerId, { attributes: ['id', 'name'] });
   return presentPublicBuild(build, { name: owner?.name ?? '' });
 }
+
+/** The most recently changed published builds, for the home page. */
+export const listRecentPublicBuilds = (limit: number) =>
+  Build.findAll({ where: { published: true }, include: [{ model: Photo, as: 'photos' }], order: [['updatedAt', 'DESC'], ['id', 'DESC']], limit });

@@ -201,3 +201,10 @@ export type PublicBuild = {
   weighIns: Omit<WeighIn, 'id' | 'createdAt'>[];
   updatedAt: string;
 };
+
+/** A published build as a tile in a list (the home page): its public face in a few words. */
+export type PublicBuildTile = { code: string; url: string; title: string; modelYear: number | null; style: string | null; cover: Photo | null };
+export type PublicBuildTileListResponse = { builds: PublicBuildTile[] };
+export const PublicBuildListQuerySchema = z.object({
+  limit: z.coerce.number({ error: 'Limit must be a number.' }).int({ error: 'Limit must be a whole number.' }).min(1, { error: 'Limit is at least 1.' }).max(24, { error: 'Limit is at most 24.' }).default(8),
+});

@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { useSession } from '@client/features/session/api/get-session';
 import { EmptyState } from '@client/components/ui/states';
+import { RecentBuilds } from './recent-builds';
 
 const audiences = [
   {
@@ -45,6 +46,10 @@ export function HomePage() {
             <p className="mt-2 text-graphite">{a.body}</p>
           </article>
         ))}
+      </section>
+      <section className="border-b border-rule py-8" aria-labelledby="builds-heading">
+        <h2 id="builds-heading" className="mb-4 font-display text-2xl uppercase">Builds on Placard</h2>
+        <RecentBuilds />
       </section>
       <section className="py-8" aria-labelledby="shows-heading">
         <h2 id="shows-heading" className="mb-4 font-display text-2xl uppercase">Shows that are on</h2>
