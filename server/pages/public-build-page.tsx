@@ -51,6 +51,12 @@ function Figures({ figures, units }: { figures: KeyFigure[]; units: UnitSystem }
                 {f.note}
                 {f.note && f.measuredOn ? ', ' : ''}
                 {f.measuredOn ? <span className="nw">measured {f.measuredOn}</span> : null}
+                {f.evidenceUrl ? (
+                  <>
+                    {' · '}
+                    <a href={f.evidenceUrl}>see the evidence</a>
+                  </>
+                ) : null}
               </small>
             ) : null}
           </dd>

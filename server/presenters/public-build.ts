@@ -113,8 +113,16 @@ function displacementCandidate(s: Sections): Candidate | undefined {
   return undefined;
 }
 
-function keyFigure(key: CardFigureKey, kind: QuantityKind, c: Candidate | undefined, opts: { decimals?: Partial<Record<UnitSystem, number>>; units?: Partial<Record<UnitSystem, Unit>> } = {}): KeyFigure | null {
+/** The largest JPEG of the build's photo that backs a measured figure, if it is one of the build's photos. */
+function evidenceUrlOf(b: PublicBuild, c: Candidate): string | undefined {
+  const id = c.figure.provenance === 'measured' ? c.figure.evidencePhotoId : undefined;
+  const photo = id ? b.photos.find((p) => p.id === id) : undefined;
+  return photo?.sources[photo.sources.length - 1]?.jpeg;
+}
+
+function keyFigure(b: PublicBuild, key: CardFigureKey, kind: QuantityKind, c: Candidate | undefined, opts: { decimals?: Partial<Record<UnitSystem, number>>; units?: Partial<Record<UnitSystem, Unit>> } = {}): KeyFigure | null {
   if (!c) return null;
+  const evidenceUrl = evidenceUrlOf(b, c);
   const unit = parseUnit(kind, c.figure.unit);
   if (!unit) return null;
   return {
@@ -122,6 +130,7 @@ function keyFigure(key: CardFigureKey, kind: QuantityKind, c: Candidate | undefi
     label: CARD_FIGURE_LABELS[key],
     provenance: c.figure.provenance,
     ...(c.figure.measuredOn ? { measuredOn: c.figure.measuredOn } : {}),
+    ...(evidenceUrl ? { evidenceUrl } : {}),
     ...(c.note ? { note: c.note } : {}),
     ...both(kind, c.figure.value, unit, opts.decimals, opts.units),
   };
@@ -132,9 +141,9 @@ export function computeKeyFigures(b: PublicBuild): KeyFigure[] {
   const power = powerCandidate(b);
   const weight = weightCandidate(b);
   const out: Array<KeyFigure | null> = [
-    keyFigure('power', 'power', power),
-    keyFigure('torque', 'torque', torqueCandidate(b)),
-    keyFigure('weight', 'mass', weight),
+    keyFigure(b, 'power', 'power', power),
+    keyFigure(b, 'torque', 'torque', torqueCandidate(b)),
+    keyFigure(b, 'weight', 'mass', weight),
   ];
   if (power && weight) {
     const pu = parseUnit('power', power.figure.unit);
@@ -151,7 +160,7 @@ export function computeKeyFigures(b: PublicBuild): KeyFigure[] {
       });
     }
   }
-  out.push(keyFigure('displacement', 'volume', displacementCandidate(b.sections), { units: { metric: 'L', imperial: 'in3' }, decimals: { metric: 1, imperial: 0 } }));
+  out.push(keyFigure(b, 'displacement', 'volume', displacementCandidate(b.sections), { units: { metric: 'L', imperial: 'in3' }, decimals: { metric: 1, imperial: 0 } }));
   return out.filter((f): f is KeyFigure => f !== null);
 }
 

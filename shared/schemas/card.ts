@@ -97,6 +97,8 @@ export type KeyFigure = {
   label: string;
   provenance: (typeof PROVENANCES)[number];
   measuredOn?: string;
+  /** The photo that backs a measured figure (a scale ticket, a dyno sheet), at its largest size. */
+  evidenceUrl?: string;
   /** "at the wheels", "from the latest weigh-in", …: what the number is. */
   note?: string;
   metric: { value: number; unit: string; text: string };
