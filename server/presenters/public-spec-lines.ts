@@ -235,6 +235,17 @@ function summaryOf(kind: SectionKind, s: Sections, rows: SpecRow[], u: UnitSyste
   }
 }
 
+/** How each section becomes rows of the public page. */
+const ROWS_OF: Record<SectionKind, (s: Sections, u: UnitSystem) => SpecRow[]> = {
+  engine: (s, u) => engineRows(s.engine!, u),
+  drivetrain: (s, u) => drivetrainRows(s.drivetrain!, u),
+  chassis: (s, u) => chassisRows(s.chassis!, u),
+  brakes: (s, u) => brakeRows(s.brakes!, u),
+  wheels: (s, u) => wheelRows(s.wheels!, u),
+  body: (s) => bodyRows(s.body!),
+  extra: (s) => (s.extra?.lines ?? []).map((l) => ({ label: l.label, value: l.value })),
+};
+
 /** Every public section that has something to show, in the sheet's order. */
 export function sectionViews(sections: Sections, units: UnitSystem, only: readonly SectionKind[] = SECTION_KINDS): SectionView[] {
   const views: SectionView[] = [];
@@ -242,30 +253,7 @@ export function sectionViews(sections: Sections, units: UnitSystem, only: readon
     if (!only.includes(kind)) continue;
     const s = sections[kind];
     if (!s) continue;
-    let rows: SpecRow[];
-    switch (kind) {
-      case 'engine':
-        rows = engineRows(s as EngineSection, units);
-        break;
-      case 'drivetrain':
-        rows = drivetrainRows(s as DrivetrainSection, units);
-        break;
-      case 'chassis':
-        rows = chassisRows(s as ChassisSection, units);
-        break;
-      case 'brakes':
-        rows = brakeRows(s as BrakesSection, units);
-        break;
-      case 'wheels':
-        rows = wheelRows(s as WheelsSection, units);
-        break;
-      case 'body':
-        rows = bodyRows(s as NonNullable<Sections['body']>);
-        break;
-      case 'extra':
-        rows = (sections.extra?.lines ?? []).map((l) => ({ label: l.label, value: l.value }));
-        break;
-    }
+    const rows = ROWS_OF[kind](sections, units);
     const madeBy = madeByText(s.madeBy);
     const note = s.note?.trim() || null;
     if (rows.length === 0 && !madeBy && !note) continue;
