@@ -2,7 +2,14 @@ import nodemailer, { type Transporter } from 'nodemailer';
 import type SMTPTransport from 'nodemailer/lib/smtp-transport';
 import { config } from '../config';
 
-export type OutgoingMail = { to: string; subject: string; text: string; html?: string };
+export type OutgoingMail = {
+  to: string;
+  subject: string;
+  text: string;
+  html?: string;
+  /** Files sent with the mail, e.g. the entrant's card as a PDF. */
+  attachments?: ReadonlyArray<{ filename: string; contentType: string; content: Buffer }>;
+};
 
 let transport: Transporter | undefined;
 
@@ -15,5 +22,5 @@ function getTransport(): Transporter {
 }
 
 export async function sendMail(mail: OutgoingMail): Promise<void> {
-  await getTransport().sendMail({ from: config.mailFrom, ...mail });
+  await getTransport().sendMail({ from: config.mailFrom, ...mail, attachments: mail.attachments?.map((a) => ({ ...a })) });
 }

@@ -1,5 +1,6 @@
 import { Router } from 'express';
-import { AdminUserListQuerySchema, AdminUserUpdateSchema, IdParamSchema, type AdminUserListQuery, type AdminUserUpdateInput } from '@shared/schemas/user';
+import { AdminUserListQuerySchema, AdminUserUpdateSchema, type AdminUserListQuery, type AdminUserUpdateInput } from '@shared/schemas/user';
+import { IdParamSchema } from '@shared/schemas/params';
 import type { CaughtMailListResponse } from '@shared/schemas/mail';
 import { validate } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';

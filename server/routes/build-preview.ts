@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { IdParamSchema } from '@shared/schemas/user';
+import { IdParamSchema } from '@shared/schemas/params';
 import { validate } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';

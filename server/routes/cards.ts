@@ -1,5 +1,5 @@
 import { Router, type Response } from 'express';
-import { IdParamSchema } from '@shared/schemas/user';
+import { IdParamSchema } from '@shared/schemas/params';
 import { CardQuerySchema, CardSettingsSchema, type CardQuery, type CardSettings, type CardSettingsResponse } from '@shared/schemas/card';
 import { SECTION_KINDS } from '@shared/schemas/build-sections';
 import { validate } from '../middlewares/validate';

@@ -3,7 +3,7 @@ import multer from 'multer';
 import { z } from 'zod';
 import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES, PhotoOrderSchema, PhotoUpdateSchema } from '@shared/schemas/build';
 import { shortText } from '@shared/schemas/figure';
-import { IdParamSchema } from '@shared/schemas/user';
+import { IdParamSchema } from '@shared/schemas/params';
 import { validate } from '../middlewares/validate';
 import { photoUploadLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';

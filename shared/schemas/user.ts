@@ -105,4 +105,3 @@ export const AdminUserUpdateSchema = z
   .refine((v) => v.mayOrganise !== undefined || v.isSiteAdmin !== undefined, { error: 'Send mayOrganise or isSiteAdmin.', path: ['mayOrganise'] });
 export type AdminUserUpdateInput = z.infer<typeof AdminUserUpdateSchema>;
 
-export const IdParamSchema = z.object({ id: z.coerce.number({ error: 'Id must be a number.' }).int().positive({ error: 'Id must be a positive whole number.' }) });
