@@ -17,7 +17,8 @@ passport.use(
     User.findOne({ where: { email: email.trim().toLowerCase() } })
       .then(async (user) => {
         const ok = await verifyPassword(user?.passwordHash, password);
-        done(null, ok && user ? user : false);
+        // A disabled account is refused like a wrong password: the message never tells who has an account.
+        done(null, ok && user && !user.disabledAt ? user : false);
       })
       .catch(done);
   }),
@@ -27,7 +28,7 @@ passport.use(
 passport.serializeUser((user, done) => done(null, (user as User).id));
 passport.deserializeUser((id: number, done) => {
   User.findByPk(id)
-    .then((user) => done(null, user ?? false))
+    .then((user) => done(null, user && !user.disabledAt ? user : false)) // disabling ends every session at once
     .catch(done);
 });
 

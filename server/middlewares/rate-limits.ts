@@ -21,33 +21,50 @@ const emailOf = (req: Request) => {
 /** The signed-in person (the limiter runs after requireUser), else the address. */
 const person = (req: Request) => (req.user ? `user:${(req.user as { id: number }).id}` : ip(req));
 
-function limiter(name: string, opts: { windowMs: number; limit: number; key: (req: Request) => string; message: string }): RateLimitRequestHandler {
+function limiter(
+  name: string,
+  opts: { windowMs: number; limit: number; key: (req: Request) => string; message: string; skipSuccessfulRequests?: boolean; store?: PostgresRateLimitStore },
+): RateLimitRequestHandler {
   return rateLimit({
+    skipSuccessfulRequests: opts.skipSuccessfulRequests ?? false,
     windowMs: opts.windowMs,
     limit: opts.limit,
     identifier: name,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     keyGenerator: opts.key,
-    store: new PostgresRateLimitStore(`${name}:`),
+    store: opts.store ?? new PostgresRateLimitStore(`${name}:`),
     handler: tooMany(opts.message),
   });
 }
 
-/** Sign-in attempts per address and e-mail: slows password guessing without locking out a whole show's Wi-Fi. */
+const signInKey = (req: Request) => `${ip(req)}|${emailOf(req)}`;
+const signInStore = new PostgresRateLimitStore('signin:');
+
+/**
+ * Failed sign-ins per address and e-mail: slows password guessing without locking out a whole show's Wi-Fi.
+ * Only failures count: a successful sign-in wipes the count (`forgiveSignInFailures`), so a person who signs
+ * in often is never locked out.
+ */
 export const signInLimiter = limiter('signin', {
   windowMs: config.signInRateWindowMs,
   limit: config.signInRateLimit,
-  key: (req) => `${ip(req)}|${emailOf(req)}`,
+  key: signInKey,
   message: 'Too many sign-in attempts. Wait a few minutes and try again.',
+  skipSuccessfulRequests: true,
+  store: signInStore,
 });
 
-/** Sign-ins per address whatever the e-mail: one address trying many accounts (and a password hash each time). */
+/** After a good password: the failures before it no longer count against this address and e-mail. */
+export const forgiveSignInFailures = (req: Request) => signInStore.resetKey(signInKey(req));
+
+/** Failed sign-ins per address whatever the e-mail: one address trying many accounts (and a password hash each time). */
 export const signInAddressLimiter = limiter('signin-address', {
   windowMs: config.signInRateWindowMs,
   limit: config.signInAddressRateLimit,
   key: ip,
   message: 'Too many sign-in attempts from this network. Wait a few minutes and try again.',
+  skipSuccessfulRequests: true,
 });
 
 /** New accounts per address, so sign-up cannot be scripted into many accounts or an e-mail probe. */

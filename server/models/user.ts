@@ -7,6 +7,9 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordHash: string;
   declare isSiteAdmin: CreationOptional<boolean>;
   declare mayOrganise: CreationOptional<boolean>;
+  /** Set by a site admin: the account cannot sign in and its public pages are offline. */
+  declare disabledAt: CreationOptional<Date | null>;
+  declare lastSignInAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -19,6 +22,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         passwordHash: { type: DataTypes.STRING(255), allowNull: false },
         isSiteAdmin: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         mayOrganise: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        disabledAt: { type: DataTypes.DATE, allowNull: true },
+        lastSignInAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -16,8 +16,9 @@ export function can(actor: Actor | null | undefined, action: BuildAction | 'crea
   return build.ownerId === actor.id;
 }
 
-/** Anyone, signed in or not, may read a published build's public face. */
-export const canViewPublic = (build: BuildRecord | null | undefined) => Boolean(build?.published);
+/** Anyone, signed in or not, may read a published build's public face, unless a site admin disabled its owner. */
+export const canViewPublic = (build: Pick<BuildRecord, 'published'> | null | undefined, owner: { disabledAt: Date | null } | null | undefined) =>
+  Boolean(build?.published && owner && !owner.disabledAt);
 
 export const authorizeBuild = (actor: Actor | null | undefined, action: BuildAction | 'create', build?: BuildRecord) =>
   authorize(can(actor, action, build), actor, 'This build belongs to someone else.');

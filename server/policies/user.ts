@@ -1,7 +1,7 @@
 import type { Actor } from './actor';
 import { authorize } from './authorize';
 
-export type UserAction = 'list' | 'updateRoles' | 'viewAccount' | 'updateAccount';
+export type UserAction = 'list' | 'updateRoles' | 'disable' | 'sendReset' | 'viewAccount' | 'updateAccount';
 
 /** Accounts: each person manages their own; the site admin lists everyone and grants roles. */
 export function can(actor: Actor | null | undefined, action: UserAction, target?: { id: number }): boolean {
@@ -11,6 +11,11 @@ export function can(actor: Actor | null | undefined, action: UserAction, target?
       return actor.isSiteAdmin;
     case 'updateRoles':
       // An admin may not take away their own admin flag by accident; that check lives in the service.
+      return actor.isSiteAdmin && target !== undefined;
+    case 'disable':
+      // Never oneself: an admin who locks themselves out needs another admin to get back in.
+      return actor.isSiteAdmin && target !== undefined && target.id !== actor.id;
+    case 'sendReset':
       return actor.isSiteAdmin && target !== undefined;
     case 'viewAccount':
     case 'updateAccount':

@@ -1,4 +1,4 @@
-import type { AdminUser, CurrentUser } from '@shared/schemas/user';
+import type { AdminUser, AdminUserDetail, CurrentUser } from '@shared/schemas/user';
 import type { User } from '../models/user';
 import { can as canUser } from '../policies/user';
 import { can as canMail } from '../policies/mail';
@@ -30,5 +30,15 @@ export function presentAdminUser(user: User): AdminUser {
     isSiteAdmin: user.isSiteAdmin,
     mayOrganise: user.mayOrganise,
     createdAt: user.createdAt.toISOString(),
+    disabledAt: user.disabledAt?.toISOString() ?? null,
+    lastSignInAt: user.lastSignInAt?.toISOString() ?? null,
+  };
+}
+
+/** One account as the site admin opens it: the row and its builds (titles and public addresses only). */
+export function presentAdminUserDetail(user: User, builds: ReadonlyArray<{ id: number; title: string; published: boolean; code: string; updatedAt: Date }>): AdminUserDetail {
+  return {
+    user: presentAdminUser(user),
+    builds: builds.map((b) => ({ id: b.id, title: b.title, published: b.published, publicUrl: `${config.publicBaseUrl}/c/${b.code}`, updatedAt: b.updatedAt.toISOString() })),
   };
 }

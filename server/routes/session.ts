@@ -2,7 +2,8 @@ import { Router, type Request } from 'express';
 import { SignInSchema, type SessionResponse } from '@shared/schemas/user';
 import { validate } from '../middlewares/validate';
 import { csrfToken } from '../middlewares/csrf';
-import { signInAddressLimiter, signInLimiter } from '../middlewares/rate-limits';
+import { forgiveSignInFailures, signInAddressLimiter, signInLimiter } from '../middlewares/rate-limits';
+import { recordSignIn } from '../services/accounts';
 import { authenticateLocal, signIn, signOut } from '../auth/session-helpers';
 import { presentCurrentUser } from '../presenters/user';
 import { AppError } from '../errors';
@@ -29,7 +30,9 @@ sessionRouter.get('/session', (req, res) => {
 sessionRouter.post('/session', signInAddressLimiter, signInLimiter, validate('body', SignInSchema), async (req, res) => {
   const user = await authenticateLocal(req, res);
   if (!user) throw new AppError(401, 'UNAUTHENTICATED', 'That e-mail and password do not match an account.', { password: 'E-mail or password is not right.' });
+  await forgiveSignInFailures(req);
   await signIn(req, user);
+  await recordSignIn(user);
   csrfToken(req, true);
   res.json(sessionBody(req));
 });

@@ -1,4 +1,4 @@
-import { QueryTypes } from 'sequelize';
+import { Op, QueryTypes, literal } from 'sequelize';
 import type { PublicBuild } from '@shared/schemas/build';
 import { BuildCodeSchema } from '@shared/schemas/build';
 import { sequelize } from '../db/sequelize';
@@ -16,8 +16,8 @@ import { loadFullBuild } from './builds';
  */
 export async function publicVersion(code: string): Promise<string | null> {
   if (!BuildCodeSchema.safeParse(code).success) return null;
-  const rows = await sequelize.query<{ published: boolean; version: string }>(
-    `SELECT b.published,
+  const rows = await sequelize.query<{ published: boolean; disabled_at: Date | null; version: string }>(
+    `SELECT b.published, u.disabled_at,
             concat_ws(':', extract(epoch FROM greatest(b.updated_at, u.updated_at, s.at, p.at, d.at, w.at))::text, s.n, p.n, d.n, w.n) AS version
        FROM builds b
        JOIN users u ON u.id = b.owner_id
@@ -29,18 +29,24 @@ export async function publicVersion(code: string): Promise<string | null> {
     { replacements: { code }, type: QueryTypes.SELECT },
   );
   const row = rows[0];
-  return row && canViewPublic({ ownerId: 0, published: row.published }) ? row.version : null;
+  return row && canViewPublic({ published: row.published }, { disabledAt: row.disabled_at }) ? row.version : null;
 }
 
 /** The public face of a published build, or null for an unknown or unpublished code. */
 export async function loadPublicBuild(code: string): Promise<PublicBuild | null> {
   if (!BuildCodeSchema.safeParse(code).success) return null;
   const build = await loadFullBuild({ code });
-  if (!build || !canViewPublic(build)) return null;
-  const owner = await User.findByPk(build.ownerId, { attributes: ['id', 'name'] });
-  return presentPublicBuild(build, { name: owner?.name ?? '' });
+  if (!build) return null;
+  const owner = await User.findByPk(build.ownerId, { attributes: ['id', 'name', 'disabledAt'] });
+  if (!owner || !canViewPublic(build, owner)) return null;
+  return presentPublicBuild(build, { name: owner.name });
 }
 
-/** The most recently changed published builds, for the home page. */
+/** The most recently changed published builds of accounts that are not disabled, for the home page. */
 export const listRecentPublicBuilds = (limit: number) =>
-  Build.findAll({ where: { published: true }, include: [{ model: Photo, as: 'photos' }], order: [['updatedAt', 'DESC'], ['id', 'DESC']], limit });
+  Build.findAll({
+    where: { published: true, ownerId: { [Op.notIn]: literal('(SELECT id FROM users WHERE disabled_at IS NOT NULL)') } },
+    include: [{ model: Photo, as: 'photos' }],
+    order: [['updatedAt', 'DESC'], ['id', 'DESC']],
+    limit,
+  });

@@ -82,8 +82,21 @@ export const AdminUserSchema = z.object({
   isSiteAdmin: z.boolean(),
   mayOrganise: z.boolean(),
   createdAt: z.string(),
+  /** When a site admin disabled the account; null while it is active. */
+  disabledAt: z.string().nullable(),
+  lastSignInAt: z.string().nullable(),
 });
 export type AdminUser = z.infer<typeof AdminUserSchema>;
+
+/** One account opened by the site admin: the row plus its builds. */
+export const AdminUserDetailSchema = z.object({
+  user: AdminUserSchema,
+  builds: z.array(z.object({ id: z.number().int(), title: z.string(), published: z.boolean(), publicUrl: z.string(), updatedAt: z.string() })),
+});
+export type AdminUserDetail = z.infer<typeof AdminUserDetailSchema>;
+
+export const AdminUserDisableSchema = z.object({ disabled: z.boolean({ error: 'Disabled must be true or false.' }) });
+export type AdminUserDisableInput = z.infer<typeof AdminUserDisableSchema>;
 
 export const AdminUserListQuerySchema = z.object({
   q: z.string().trim().max(EMAIL_MAX_LENGTH).optional(),

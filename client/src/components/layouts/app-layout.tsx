@@ -66,7 +66,7 @@ export function AppLayout() {
           </nav>
         </div>
       </header>
-      <main id="main" className="mx-auto w-full max-w-5xl flex-1 px-4 py-6">
+      <main id="main" className="mx-auto w-full min-w-0 max-w-5xl flex-1 px-4 py-6">
         <Outlet />
       </main>
       <footer className="border-t border-rule px-4 py-4 text-center text-sm text-graphite">

@@ -8,6 +8,8 @@ import { PageHeader } from '@client/components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/states';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
+import { countOf, formatDate, formatDateTime } from '@shared/words';
+import { AccountPanel } from './account-panel';
 
 const PAGE_SIZE = 25;
 const column = createColumnHelper<AdminUser>();
@@ -42,6 +44,7 @@ function RoleToggle({ user, role, label, selfId }: { user: AdminUser; role: 'may
 export function AccountsPage() {
   const [q, setQ] = useState('');
   const [page, setPage] = useState(1);
+  const [openId, setOpenId] = useState<number | null>(null);
   const { data: session } = useSession();
   const selfId = session?.user?.id ?? 0;
   const { data, isPending, error, refetch, isFetching } = useUsers({ q, page, pageSize: PAGE_SIZE });
@@ -50,9 +53,20 @@ export function AccountsPage() {
     () => [
       column.accessor('name', { header: 'Name' }),
       column.accessor('email', { header: 'E-mail' }),
-      column.accessor('createdAt', { header: 'Joined', cell: (c) => new Date(c.getValue()).toLocaleDateString() }),
+      column.accessor('createdAt', { header: 'Joined', cell: (c) => <span className="whitespace-nowrap tabular-nums">{formatDate(c.getValue())}</span> }),
+      column.accessor('lastSignInAt', { header: 'Last sign-in', cell: (c) => <span className="whitespace-nowrap tabular-nums">{c.getValue() ? formatDateTime(c.getValue()!) : 'Never'}</span> }),
+      column.accessor('disabledAt', { header: 'Status', cell: (c) => (c.getValue() ? <span className="font-semibold text-danger">Disabled</span> : 'Active') }),
       column.display({ id: 'mayOrganise', header: 'May organise', cell: (c) => <RoleToggle user={c.row.original} role="mayOrganise" label="May organise" selfId={selfId} /> }),
       column.display({ id: 'isSiteAdmin', header: 'Site admin', cell: (c) => <RoleToggle user={c.row.original} role="isSiteAdmin" label="Site admin" selfId={selfId} /> }),
+      column.display({
+        id: 'open',
+        header: () => <span className="sr-only">Open</span>,
+        cell: (c) => (
+          <Button variant="secondary" aria-label={`Open ${c.row.original.name}`} onClick={() => setOpenId(c.row.original.id)}>
+            Open
+          </Button>
+        ),
+      }),
     ],
     [selfId],
   );
@@ -78,7 +92,30 @@ export function AccountsPage() {
       {error ? <ErrorState error={error} onRetry={() => void refetch()} /> : null}
       {data && data.users.length === 0 ? <EmptyState title="No accounts match">Try part of a name or an e-mail.</EmptyState> : null}
       {data && data.users.length > 0 ? (
-        <div className="overflow-x-auto border border-rule bg-white/60" aria-busy={isFetching}>
+        <>
+        {/* On a phone each account is a block of its own; the table needs a desk-sized screen. */}
+        <ul className="divide-y divide-rule border border-rule bg-white/60 md:hidden" aria-busy={isFetching}>
+          {data.users.map((u) => (
+            <li key={u.id} className="flex flex-col gap-1 p-3">
+              <span className="font-semibold">{u.name}</span>
+              <span className="break-all text-sm text-graphite">{u.email}</span>
+              <span className="text-sm">
+                {u.disabledAt ? <span className="font-semibold text-danger">Disabled</span> : 'Active'} · last sign-in{' '}
+                {u.lastSignInAt ? formatDateTime(u.lastSignInAt) : 'never'}
+              </span>
+              <div className="mt-1 flex flex-wrap items-center gap-3">
+                <span className="text-sm">May organise</span>
+                <RoleToggle user={u} role="mayOrganise" label="May organise" selfId={selfId} />
+                <span className="text-sm">Site admin</span>
+                <RoleToggle user={u} role="isSiteAdmin" label="Site admin" selfId={selfId} />
+                <Button variant="secondary" aria-label={`Open ${u.name}`} onClick={() => setOpenId(u.id)}>
+                  Open
+                </Button>
+              </div>
+            </li>
+          ))}
+        </ul>
+        <div className="hidden overflow-x-auto border border-rule bg-white/60 md:block" aria-busy={isFetching}>
           <table className="w-full border-collapse text-left">
             <thead>
               {table.getHeaderGroups().map((g) => (
@@ -104,6 +141,7 @@ export function AccountsPage() {
             </tbody>
           </table>
         </div>
+        </>
       ) : null}
       {data && data.total > PAGE_SIZE ? (
         <div className="mt-4 flex items-center gap-3">
@@ -111,16 +149,17 @@ export function AccountsPage() {
             Previous
           </Button>
           <span>
-            Page {page} of {pages} · {data.total} accounts
+            Page {page} of {pages} · {countOf(data.total, 'account')}
           </span>
           <Button variant="secondary" disabled={page >= pages} onClick={() => setPage((p) => p + 1)}>
             Next
           </Button>
         </div>
       ) : null}
-      {data ? <p className="mt-4 text-sm text-graphite">{data.total} accounts in all.</p> : null}
+      {data ? <p className="mt-4 text-sm text-graphite">{countOf(data.total, 'account')} in all.</p> : null}
+      {openId !== null ? <AccountPanel key={openId} id={openId} selfId={selfId} onClose={() => setOpenId(null)} /> : null}
       <div className="mt-6">
-        <Notice>Removing a site admin needs a confirmation; you cannot remove your own.</Notice>
+        <Notice>Removing a site admin or disabling an account needs a confirmation; you cannot do either to yourself.</Notice>
       </div>
     </div>
   );

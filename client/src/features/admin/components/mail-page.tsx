@@ -1,3 +1,4 @@
+import { formatDateTime } from '@shared/words';
 import { Link, useParams } from 'react-router-dom';
 import { useMail } from '../api/list-mail';
 import { useMailMessage } from '../api/get-mail';
@@ -38,7 +39,7 @@ export function MailListPage() {
               <Link to={`/admin/mail/${m.id}`} className="flex min-h-11 flex-wrap items-baseline justify-between gap-2 px-4 py-3 hover:bg-paper">
                 <span className="font-semibold">{m.subject}</span>
                 <span className="text-sm text-graphite">
-                  to {m.to} · {new Date(m.receivedAt).toLocaleString()}
+                  to {m.to} · {formatDateTime(m.receivedAt)}
                 </span>
               </Link>
             </li>
@@ -67,7 +68,7 @@ export function MailMessagePage() {
             <dt className="text-graphite">To</dt>
             <dd>{data.mail.to}</dd>
             <dt className="text-graphite">Received</dt>
-            <dd>{new Date(data.mail.receivedAt).toLocaleString()}</dd>
+            <dd>{formatDateTime(data.mail.receivedAt)}</dd>
           </dl>
           <Linkified text={data.mail.text} />
         </Panel>

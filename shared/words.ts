@@ -1,0 +1,25 @@
+// Words and dates a person reads, in one place, so every screen says them the same way.
+
+/** "1 account", "2 accounts", "1,204 builds". `many` for the irregular plurals ("entries"). */
+export function countOf(count: number, one: string, many = `${one}s`): string {
+  return `${count.toLocaleString('en-GB')} ${count === 1 ? one : many}`;
+}
+
+const pad = (n: number) => String(n).padStart(2, '0');
+
+/**
+ * A calendar date the same way on every screen: year-month-day (2026-12-02), which no reader
+ * mistakes for day-month or month-day. Timestamps are shown in the reader's own time zone.
+ */
+export function formatDate(value: string | Date): string {
+  const d = typeof value === 'string' ? new Date(value) : value;
+  if (Number.isNaN(d.getTime())) return '—';
+  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
+}
+
+/** A moment, as a date and a 24-hour time in the reader's time zone: 2026-12-02 14:05. */
+export function formatDateTime(value: string | Date): string {
+  const d = typeof value === 'string' ? new Date(value) : value;
+  if (Number.isNaN(d.getTime())) return '—';
+  return `${formatDate(d)} ${pad(d.getHours())}:${pad(d.getMinutes())}`;
+}

@@ -1,0 +1,20 @@
+import { describe, expect, it } from 'vitest';
+import { countOf, formatDate, formatDateTime } from '@shared/words';
+
+describe('words a person reads', () => {
+  it('counts with the right plural and thousands separators', () => {
+    expect(countOf(1, 'account')).toBe('1 account');
+    expect(countOf(0, 'account')).toBe('0 accounts');
+    expect(countOf(2, 'entry', 'entries')).toBe('2 entries');
+    expect(countOf(1204, 'build')).toBe('1,204 builds');
+  });
+
+  it('writes dates year-month-day and times on a 24-hour clock, and never "Invalid Date"', () => {
+    // Local time on purpose: the reader's own clock. Built from local parts so the test holds in any zone.
+    const d = new Date(2026, 0, 5, 9, 7);
+    expect(formatDate(d)).toBe('2026-01-05');
+    expect(formatDateTime(d)).toBe('2026-01-05 09:07');
+    expect(formatDate(d.toISOString())).toBe('2026-01-05');
+    expect(formatDate('not a date')).toBe('—');
+  });
+});
