@@ -9,9 +9,26 @@ export const CHROMIUM = '/usr/bin/chromium';
 // Flags for a sandboxed root session on a machine with no outside network (see DEVELOPERS.md).
 export const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 
-export function launchBrowser(): Promise<Browser> {
+/** How long one browser action may wait: patient, because a busy two-core machine can take many seconds per step. */
+export const BROWSER_ACTION_TIMEOUT_MS = 90_000;
+
+export async function launchBrowser(): Promise<Browser> {
   if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: run the tests with \`npm test\`, which installs Debian's chromium.`);
-  return chromium.launch({ executablePath: CHROMIUM, args: CHROMIUM_ARGS });
+  const browser = await chromium.launch({ executablePath: CHROMIUM, args: CHROMIUM_ARGS, timeout: 120_000 });
+  // Every page and context made from this browser gets the patient limit instead of Playwright's 30 s.
+  const newContext = browser.newContext.bind(browser);
+  browser.newContext = async (options) => {
+    const context = await newContext(options);
+    context.setDefaultTimeout(BROWSER_ACTION_TIMEOUT_MS);
+    return context;
+  };
+  const newPage = browser.newPage.bind(browser);
+  browser.newPage = async (options) => {
+    const page = await newPage(options);
+    page.setDefaultTimeout(BROWSER_ACTION_TIMEOUT_MS);
+    return page;
+  };
+  return browser;
 }
 
 /** The real server on a free loopback port, serving the built client (npm test builds it first). */
