@@ -1,9 +1,7 @@
-import type { Request, RequestHandler } from 'express';
+import type { Request } from 'express';
 import type { z } from 'zod';
 import { fieldsFromIssues } from '@shared/errors';
 import { ValidationError } from '../errors';
-
-type Part = 'body' | 'query' | 'params';
 
 /** Parses a value with a shared zod schema and keeps its type; a failure is a 400 naming each field. */
 export function parseWith<S extends z.ZodType>(schema: S, value: unknown): z.output<S> {
@@ -20,14 +18,3 @@ export function parseWith<S extends z.ZodType>(schema: S, value: unknown): z.out
 export const parseParams = <S extends z.ZodType>(req: Request, schema: S): z.output<S> => parseWith(schema, req.params);
 export const parseQuery = <S extends z.ZodType>(req: Request, schema: S): z.output<S> => parseWith(schema, req.query);
 export const parseBody = <S extends z.ZodType>(req: Request, schema: S): z.output<S> => parseWith(schema, req.body);
-
-/**
- * Older middleware form: the parsed value lands in res.locals[part]. Being replaced by the
- * parse helpers above, which keep the type; new routes use those.
- */
-export function validate<S extends z.ZodType>(part: Part, schema: S): RequestHandler {
-  return (req, res, next) => {
-    res.locals[part] = parseWith(schema, req[part]);
-    next();
-  };
-}

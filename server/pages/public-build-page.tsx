@@ -3,8 +3,9 @@ import { ENGINEERING_CAUTION, convert, cornerWeights, formatNumber, formatPercen
 import { BUILD_STYLE_LABELS, type Photo, type PublicBuild } from '@shared/schemas/build';
 import type { KeyFigure } from '@shared/schemas/card';
 import { config } from '../config';
-import { computeKeyFigures, headlineOf } from '../presenters/public-build';
-import { engineLine, sectionViews, type SectionView } from '../presenters/public-spec-lines';
+import { computeKeyFigures } from '@shared/build-sheet/key-figures';
+import { headlineOf } from '@shared/build-sheet/headline';
+import { engineLine, sectionViews, type SectionView } from '@shared/build-sheet/spec-lines';
 import { DynoChart } from './dyno-chart';
 import { PAGE_CSS } from './page-styles';
 

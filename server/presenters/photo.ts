@@ -1,9 +1,7 @@
 import type { Photo as PhotoBody } from '@shared/schemas/build';
 import type { Photo } from '../models/photo';
 
-/** Public URL of one stored variant; the storage driver serves /media/<key>. */
-export const photoVariantKey = (storageKey: string, width: number, ext: 'webp' | 'jpg') => `photos/${storageKey}-${width}.${ext}`;
-export const mediaUrl = (key: string) => `/media/${key}`;
+import { mediaUrl, photoVariantKey } from '../storage/keys';
 
 export function presentPhoto(photo: Photo): PhotoBody {
   return {

@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { AccountUpdateSchema, PasswordChangeSchema, type AccountUpdateInput, type PasswordChangeInput } from '@shared/schemas/user';
-import { validate } from '../middlewares/validate';
+import { AccountUpdateSchema, PasswordChangeSchema } from '@shared/schemas/user';
+import { parseBody } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeUser } from '../policies/user';
 import { changePassword, updateAccount } from '../services/users';
@@ -8,16 +8,18 @@ import { presentCurrentUser } from '../presenters/user';
 
 export const accountRouter = Router();
 
-accountRouter.patch('/account', requireUser, validate('body', AccountUpdateSchema), async (req, res) => {
+accountRouter.patch('/account', requireUser, async (req, res) => {
+  const input = parseBody(req, AccountUpdateSchema);
   const user = currentUser(req);
   authorizeUser(user, 'updateAccount', user);
-  const updated = await updateAccount(user, res.locals.body as AccountUpdateInput);
+  const updated = await updateAccount(user, input);
   res.json({ user: presentCurrentUser(updated) });
 });
 
-accountRouter.post('/account/password', requireUser, validate('body', PasswordChangeSchema), async (req, res) => {
+accountRouter.post('/account/password', requireUser, async (req, res) => {
+  const input = parseBody(req, PasswordChangeSchema);
   const user = currentUser(req);
   authorizeUser(user, 'updateAccount', user);
-  await changePassword(user, res.locals.body as PasswordChangeInput, req.sessionID);
+  await changePassword(user, input, req.sessionID);
   res.status(204).end();
 });

@@ -1,8 +1,8 @@
 import { Router } from 'express';
-import { AdminUserDisableSchema, AdminUserListQuerySchema, AdminUserUpdateSchema, type AdminUserListQuery, type AdminUserUpdateInput } from '@shared/schemas/user';
+import { AdminUserDisableSchema, AdminUserListQuerySchema, AdminUserUpdateSchema } from '@shared/schemas/user';
 import { IdParamSchema } from '@shared/schemas/params';
 import type { CaughtMailListResponse } from '@shared/schemas/mail';
-import { parseBody, parseParams, validate } from '../middlewares/validate';
+import { parseBody, parseParams, parseQuery } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeUser } from '../policies/user';
 import { authorizeMail } from '../policies/mail';
@@ -18,18 +18,19 @@ import { config } from '../config';
 export const adminRouter = Router();
 adminRouter.use('/admin', requireUser);
 
-adminRouter.get('/admin/users', validate('query', AdminUserListQuerySchema), async (req, res) => {
+adminRouter.get('/admin/users', async (req, res) => {
+  const query = parseQuery(req, AdminUserListQuerySchema);
   authorizeUser(currentUser(req), 'list');
-  const query = res.locals.query as AdminUserListQuery;
   const { users, total } = await listUsers(query);
   res.json({ users: users.map(presentAdminUser), total, page: query.page, pageSize: query.pageSize });
 });
 
-adminRouter.patch('/admin/users/:id', validate('params', IdParamSchema), validate('body', AdminUserUpdateSchema), async (req, res) => {
+adminRouter.patch('/admin/users/:id', async (req, res) => {
+  const { id } = parseParams(req, IdParamSchema);
+  const input = parseBody(req, AdminUserUpdateSchema);
   const actor = currentUser(req);
-  const { id } = res.locals.params as { id: number };
   authorizeUser(actor, 'updateRoles', { id });
-  const user = await updateRoles(actor, id, res.locals.body as AdminUserUpdateInput);
+  const user = await updateRoles(actor, id, input);
   res.json({ user: presentAdminUser(user) });
 });
 
@@ -63,9 +64,10 @@ adminRouter.get('/admin/mail', async (req, res) => {
   res.json(body);
 });
 
-adminRouter.get('/admin/mail/:id', validate('params', IdParamSchema), async (req, res) => {
+adminRouter.get('/admin/mail/:id', async (req, res) => {
+  const { id } = parseParams(req, IdParamSchema);
   authorizeMail(currentUser(req), 'read', { demoMode: config.demoMode });
-  const mail = await getCaughtMail((res.locals.params as { id: number }).id);
+  const mail = await getCaughtMail(id);
   if (!mail) throw new NotFoundError('No such message.');
   res.json({ mail: presentCaughtMail(mail) });
 });

@@ -1,13 +1,12 @@
-import { Router, type Request, type Response } from 'express';
+import { Router, type Request } from 'express';
 import { z } from 'zod';
-import { DynoRunCreateSchema, WeighInCreateSchema, type DynoRunCreateInput, type WeighInCreateInput } from '@shared/schemas/build';
-import { validate } from '../middlewares/validate';
+import { DynoRunCreateSchema, WeighInCreateSchema } from '@shared/schemas/build';
+import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
 import { findBuild } from '../services/builds';
 import { addDynoRun, addWeighIn, applyDynoRun, applyWeighIn, deleteDynoRun, deleteWeighIn } from '../services/build-records';
 import { respondWithBuild } from './respond-with-build';
-import type { Build } from '../models/build';
 
 /** Dyno runs and weigh-ins: dated measurements that can feed the build's figures. */
 export const buildRecordsRouter = Router();
@@ -16,37 +15,45 @@ buildRecordsRouter.use('/builds', requireUser);
 const positiveId = (label: string) => z.coerce.number({ error: `${label} must be a number.` }).int().positive({ error: `${label} must be a positive whole number.` });
 const BuildParams = z.object({ id: positiveId('Id') });
 const RecordParams = BuildParams.extend({ recordId: positiveId('Record id') });
-type Params = { id: number; recordId: number };
 
-async function editableBuild(req: Request, res: Response) {
-  const build = await findBuild((res.locals.params as Params).id);
+async function editableBuild(req: Request, id: number) {
+  const build = await findBuild(id);
   authorizeBuild(currentUser(req), 'edit', build);
   return build;
 }
 
+type EditableBuild = Awaited<ReturnType<typeof editableBuild>>;
 
-// The same four routes for each kind of record: add, delete, and apply to the build's figures.
-const RECORD_KINDS = [
-  { path: 'dyno-runs', schema: DynoRunCreateSchema, add: (b: Build, body: unknown) => addDynoRun(b, body as DynoRunCreateInput), remove: deleteDynoRun, apply: applyDynoRun },
-  { path: 'weigh-ins', schema: WeighInCreateSchema, add: (b: Build, body: unknown) => addWeighIn(b, body as WeighInCreateInput), remove: deleteWeighIn, apply: applyWeighIn },
-];
-
-for (const kind of RECORD_KINDS) {
-  buildRecordsRouter.post(`/builds/:id/${kind.path}`, validate('params', BuildParams), validate('body', kind.schema), async (req, res) => {
-    const build = await editableBuild(req, res);
-    await kind.add(build, res.locals.body);
+/** The same three routes for each kind of record: add, delete, and apply to the build's figures. */
+function recordRoutes<S extends z.ZodType>(kind: {
+  path: string;
+  schema: S;
+  add: (build: EditableBuild, input: z.output<S>) => Promise<unknown>;
+  remove: (build: EditableBuild, recordId: number) => Promise<void>;
+  apply: (build: EditableBuild, recordId: number) => Promise<void>;
+}) {
+  buildRecordsRouter.post(`/builds/:id/${kind.path}`, async (req, res) => {
+    const { id } = parseParams(req, BuildParams);
+    const input = parseBody(req, kind.schema);
+    const build = await editableBuild(req, id);
+    await kind.add(build, input);
     await respondWithBuild(req, res, build.id, 201);
   });
 
-  buildRecordsRouter.delete(`/builds/:id/${kind.path}/:recordId`, validate('params', RecordParams), async (req, res) => {
-    const build = await editableBuild(req, res);
-    await kind.remove(build, (res.locals.params as Params).recordId);
+  buildRecordsRouter.delete(`/builds/:id/${kind.path}/:recordId`, async (req, res) => {
+    const { id, recordId } = parseParams(req, RecordParams);
+    const build = await editableBuild(req, id);
+    await kind.remove(build, recordId);
     await respondWithBuild(req, res, build.id);
   });
 
-  buildRecordsRouter.post(`/builds/:id/${kind.path}/:recordId/apply`, validate('params', RecordParams), async (req, res) => {
-    const build = await editableBuild(req, res);
-    await kind.apply(build, (res.locals.params as Params).recordId);
+  buildRecordsRouter.post(`/builds/:id/${kind.path}/:recordId/apply`, async (req, res) => {
+    const { id, recordId } = parseParams(req, RecordParams);
+    const build = await editableBuild(req, id);
+    await kind.apply(build, recordId);
     await respondWithBuild(req, res, build.id);
   });
 }
+
+recordRoutes({ path: 'dyno-runs', schema: DynoRunCreateSchema, add: addDynoRun, remove: deleteDynoRun, apply: applyDynoRun });
+recordRoutes({ path: 'weigh-ins', schema: WeighInCreateSchema, add: addWeighIn, remove: deleteWeighIn, apply: applyWeighIn });

@@ -1,7 +1,6 @@
 import { Router } from 'express';
 import { pipeline } from 'node:stream/promises';
-import { storage } from '../storage/index';
-import { PHOTO_FILE_KEY } from '../services/photos';
+import { openMediaFile } from '../services/media';
 import { NotFoundError } from '../errors';
 
 export const mediaRouter = Router();
@@ -12,8 +11,7 @@ export const mediaRouter = Router();
  */
 mediaRouter.get('/media/{*key}', async (req, res) => {
   const key = ([] as string[]).concat((req.params as { key?: string | string[] }).key ?? []).join('/');
-  if (!PHOTO_FILE_KEY.test(key)) throw new NotFoundError('No such file.');
-  const object = await storage.get(key);
+  const object = await openMediaFile(key);
   if (!object) throw new NotFoundError('No such file.');
   res.set({
     'Content-Type': object.contentType,

@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { PasswordResetConfirmSchema, PasswordResetRequestSchema, type PasswordResetConfirmInput, type PasswordResetRequestInput } from '@shared/schemas/user';
-import { validate } from '../middlewares/validate';
+import { PasswordResetConfirmSchema, PasswordResetRequestSchema } from '@shared/schemas/user';
+import { parseBody } from '../middlewares/validate';
 import { passwordResetConfirmLimiter, passwordResetLimiter } from '../middlewares/rate-limits';
 import { confirmPasswordReset, requestPasswordReset } from '../services/password-resets';
 import { config } from '../config';
@@ -10,13 +10,13 @@ export const passwordResetsRouter = Router();
 // The same 202 whether or not the e-mail has an account, so the form tells nobody who is registered.
 // The answer goes first and the token and mail are made after it: waiting for them would make a
 // known e-mail answer measurably slower than an unknown one.
-passwordResetsRouter.post('/password-resets', passwordResetLimiter, validate('body', PasswordResetRequestSchema), (req, res) => {
-  const { email } = res.locals.body as PasswordResetRequestInput;
+passwordResetsRouter.post('/password-resets', passwordResetLimiter, (req, res) => {
+  const { email } = parseBody(req, PasswordResetRequestSchema);
   res.status(202).json({ message: 'If that e-mail has an account, a reset link is on its way.' });
   void requestPasswordReset(email, config.publicBaseUrl).catch((err: unknown) => req.log.error({ err }, 'password reset mail failed'));
 });
 
-passwordResetsRouter.post('/password-resets/confirm', passwordResetConfirmLimiter, validate('body', PasswordResetConfirmSchema), async (_req, res) => {
-  await confirmPasswordReset(res.locals.body as PasswordResetConfirmInput);
+passwordResetsRouter.post('/password-resets/confirm', passwordResetConfirmLimiter, async (req, res) => {
+  await confirmPasswordReset(parseBody(req, PasswordResetConfirmSchema));
   res.status(204).end();
 });

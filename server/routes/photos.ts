@@ -1,10 +1,10 @@
-import { Router, type RequestHandler, type Response } from 'express';
+import { Router, type Request, type Response } from 'express';
 import multer from 'multer';
 import { z } from 'zod';
 import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES, PhotoOrderSchema, PhotoUpdateSchema } from '@shared/schemas/build';
 import { shortText } from '@shared/schemas/figure';
 import { IdParamSchema } from '@shared/schemas/params';
-import { validate } from '../middlewares/validate';
+import { parseBody, parseParams } from '../middlewares/validate';
 import { photoUploadLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
@@ -12,7 +12,6 @@ import { findBuild } from '../services/builds';
 import { deletePhoto, reorderPhotos, storePhotosForBuild, tooLargeError, tooManyError, updatePhoto } from '../services/photos';
 import { presentPhoto } from '../presenters/photo';
 import { AppError, ValidationError } from '../errors';
-import type { Build } from '../models/build';
 
 export const photosRouter = Router();
 
@@ -44,37 +43,48 @@ function uploadError(err: unknown): AppError {
   return new AppError(400, 'BAD_REQUEST', 'The upload could not be read. Please try again.', { photos: 'The upload could not be read.' });
 }
 
-const receivePhotos: RequestHandler = (req, res, next) => upload(req, res, (err?: unknown) => next(err ? uploadError(err) : undefined));
+/** Reads the multipart upload into memory; called after the build is loaded and authorized, so a stranger's upload is never read. */
+function receivePhotos(req: Request, res: Response): Promise<Express.Multer.File[]> {
+  return new Promise((resolve, reject) =>
+    upload(req, res, (err?: unknown) => (err ? reject(uploadError(err)) : resolve((req.files as Express.Multer.File[] | undefined) ?? []))),
+  );
+}
 
-/** Loads the build and checks the signed-in person may edit it, before any upload is read. */
-const loadEditableBuild: RequestHandler = async (req, res, next) => {
-  const build = await findBuild((res.locals.params as { id: number }).id);
+/** Loads the build and checks the signed-in person may edit it. */
+async function editableBuild(req: Request, id: number) {
+  const build = await findBuild(id);
   authorizeBuild(currentUser(req), 'edit', build);
-  res.locals.build = build;
-  next();
-};
+  return build;
+}
 
-const buildOf = (res: Response) => res.locals.build as Build;
-const photoIdOf = (res: Response) => (res.locals.params as { photoId: number }).photoId;
-
-photosRouter.post('/builds/:id/photos', requireUser, photoUploadLimiter, validate('params', IdParamSchema), loadEditableBuild, receivePhotos, validate('body', PhotoUploadFieldsSchema), async (req, res) => {
-  const files = ((req.files as Express.Multer.File[] | undefined) ?? []).map((f) => ({ buffer: f.buffer, originalName: f.originalname }));
-  const { captions } = res.locals.body as z.infer<typeof PhotoUploadFieldsSchema>;
-  const photos = await storePhotosForBuild(buildOf(res).id, files, captions);
+photosRouter.post('/builds/:id/photos', requireUser, photoUploadLimiter, async (req, res) => {
+  const { id } = parseParams(req, IdParamSchema);
+  const build = await editableBuild(req, id);
+  const files = (await receivePhotos(req, res)).map((f) => ({ buffer: f.buffer, originalName: f.originalname }));
+  const { captions } = parseBody(req, PhotoUploadFieldsSchema);
+  const photos = await storePhotosForBuild(build.id, files, captions);
   res.status(201).json({ photos: photos.map(presentPhoto) });
 });
 
-photosRouter.put('/builds/:id/photos/order', requireUser, validate('params', IdParamSchema), validate('body', PhotoOrderSchema), loadEditableBuild, async (_req, res) => {
-  const photos = await reorderPhotos(buildOf(res).id, (res.locals.body as z.infer<typeof PhotoOrderSchema>).photoIds);
+photosRouter.put('/builds/:id/photos/order', requireUser, async (req, res) => {
+  const { id } = parseParams(req, IdParamSchema);
+  const { photoIds } = parseBody(req, PhotoOrderSchema);
+  const build = await editableBuild(req, id);
+  const photos = await reorderPhotos(build.id, photoIds);
   res.json({ photos: photos.map(presentPhoto) });
 });
 
-photosRouter.patch('/builds/:id/photos/:photoId', requireUser, validate('params', PhotoParamsSchema), validate('body', PhotoUpdateSchema), loadEditableBuild, async (_req, res) => {
-  const photo = await updatePhoto(buildOf(res).id, photoIdOf(res), res.locals.body as z.infer<typeof PhotoUpdateSchema>);
+photosRouter.patch('/builds/:id/photos/:photoId', requireUser, async (req, res) => {
+  const { id, photoId } = parseParams(req, PhotoParamsSchema);
+  const input = parseBody(req, PhotoUpdateSchema);
+  const build = await editableBuild(req, id);
+  const photo = await updatePhoto(build.id, photoId, input);
   res.json({ photo: presentPhoto(photo) });
 });
 
-photosRouter.delete('/builds/:id/photos/:photoId', requireUser, validate('params', PhotoParamsSchema), loadEditableBuild, async (_req, res) => {
-  await deletePhoto(buildOf(res).id, photoIdOf(res));
+photosRouter.delete('/builds/:id/photos/:photoId', requireUser, async (req, res) => {
+  const { id, photoId } = parseParams(req, PhotoParamsSchema);
+  const build = await editableBuild(req, id);
+  await deletePhoto(build.id, photoId);
   res.status(204).end();
 });

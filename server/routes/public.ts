@@ -1,8 +1,8 @@
 import { Router } from 'express';
 import { PublicBuildListQuerySchema, type PublicBuildTileListResponse } from '@shared/schemas/build';
-import { validate } from '../middlewares/validate';
+import { parseQuery } from '../middlewares/validate';
 import { listRecentPublicBuilds, loadPublicBuild } from '../services/public-builds';
-import { presentPublicBuildResponse, presentPublicBuildTile } from '../presenters/public-build';
+import { presentPublicBuild, presentPublicBuildResponse, presentPublicBuildTile } from '../presenters/public-build';
 import { NotFoundError } from '../errors';
 
 /** Public JSON, mounted before the session: anyone may read a published build. */
@@ -12,11 +12,11 @@ publicApiRouter.get('/public/builds/:code', async (req, res) => {
   const build = await loadPublicBuild(String(req.params.code).toUpperCase());
   // Unknown and unpublished answer alike, so the API tells no one which codes exist.
   if (!build) throw new NotFoundError('No published build has that code.');
-  res.set('Cache-Control', 'public, max-age=30').json(presentPublicBuildResponse(build));
+  res.set('Cache-Control', 'public, max-age=30').json(presentPublicBuildResponse(presentPublicBuild(build)));
 });
 
-publicApiRouter.get('/public/builds', validate('query', PublicBuildListQuerySchema), async (_req, res) => {
-  const { limit } = res.locals.query as { limit: number };
+publicApiRouter.get('/public/builds', async (req, res) => {
+  const { limit } = parseQuery(req, PublicBuildListQuerySchema);
   const body: PublicBuildTileListResponse = { builds: (await listRecentPublicBuilds(limit)).map(presentPublicBuildTile) };
   res.set('Cache-Control', 'public, max-age=60').json(body);
 });

@@ -1,6 +1,6 @@
 import { Router, type Request } from 'express';
 import { SignInSchema, type SessionResponse } from '@shared/schemas/user';
-import { validate } from '../middlewares/validate';
+import { parseBody } from '../middlewares/validate';
 import { csrfToken } from '../middlewares/csrf';
 import { forgiveSignInFailures, signInAddressLimiter, signInLimiter } from '../middlewares/rate-limits';
 import { recordSignIn } from '../services/accounts';
@@ -27,7 +27,8 @@ sessionRouter.get('/session', (req, res) => {
   res.json(sessionBody(req));
 });
 
-sessionRouter.post('/session', signInAddressLimiter, signInLimiter, validate('body', SignInSchema), async (req, res) => {
+sessionRouter.post('/session', signInAddressLimiter, signInLimiter, async (req, res) => {
+  parseBody(req, SignInSchema); // a 400 naming the field before passport looks at the body
   const user = await authenticateLocal(req, res);
   if (!user) throw new AppError(401, 'UNAUTHENTICATED', 'That e-mail and password do not match an account.', { password: 'E-mail or password is not right.' });
   await forgiveSignInFailures(req);

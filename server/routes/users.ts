@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { SignUpSchema, type SignUpInput } from '@shared/schemas/user';
-import { validate } from '../middlewares/validate';
+import { SignUpSchema } from '@shared/schemas/user';
+import { parseBody } from '../middlewares/validate';
 import { csrfToken } from '../middlewares/csrf';
 import { signInLimiter, signUpLimiter } from '../middlewares/rate-limits';
 import { signIn } from '../auth/session-helpers';
@@ -11,8 +11,8 @@ import { config } from '../config';
 export const usersRouter = Router();
 
 /** Sign-up: makes the account and signs it in (new session id, new CSRF token). */
-usersRouter.post('/users', signUpLimiter, signInLimiter, validate('body', SignUpSchema), async (req, res) => {
-  const user = await signUp(res.locals.body as SignUpInput);
+usersRouter.post('/users', signUpLimiter, signInLimiter, async (req, res) => {
+  const user = await signUp(parseBody(req, SignUpSchema));
   await signIn(req, user);
   res.status(201).json({ user: presentCurrentUser(user), csrfToken: csrfToken(req, true), demoMode: config.demoMode });
 });

@@ -9,13 +9,14 @@ import { DynoRun } from '../models/dyno-run';
 import { WeighIn } from '../models/weigh-in';
 import { FigureChange } from '../models/figure-change';
 import { RetiredBuildCode } from '../models/retired-build-code';
-import type { User } from '../models/user';
+import { User } from '../models/user';
 import { NotFoundError, ValidationError } from '../errors';
 import { newBuildCode } from './build-codes';
 import { figuresByPath, recordFigureChanges } from './figure-history';
 
-/** Everything the owner's editor and the public presenters read, in display order. */
+/** Everything the owner's editor and the public presenters read, in display order; of the owner only the display name (and whether a site admin disabled the account). */
 export const FULL_BUILD_INCLUDE = [
+  { model: User, as: 'owner', attributes: ['id', 'name', 'disabledAt'] },
   { model: BuildSection, as: 'sections' },
   { model: Photo, as: 'photos' },
   { model: DynoRun, as: 'dynoRuns' },
@@ -35,7 +36,7 @@ export async function findBuild(id: number, transaction?: Transaction): Promise<
   return build;
 }
 
-/** The build with its sections, photos, dyno runs, weigh-ins and figure history. */
+/** The build with its owner's name, sections, photos, dyno runs, weigh-ins and figure history. */
 export async function loadFullBuild(where: { id: number } | { code: string }, transaction?: Transaction): Promise<Build | null> {
   const build = await Build.findOne({ where, include: FULL_BUILD_INCLUDE, transaction });
   if (!build) return null;

@@ -9,8 +9,10 @@ import type { CardContent } from '@templates/cards/content';
 import { registerCardFonts } from '@templates/cards/fonts';
 import type { Build } from '../models/build';
 import { storage } from '../storage/index';
-import { computeKeyFigures, headlineOf } from '../presenters/public-build';
-import { engineLine, sectionViews } from '../presenters/public-spec-lines';
+import { keyOfMediaUrl } from '../storage/keys';
+import { computeKeyFigures } from '@shared/build-sheet/key-figures';
+import { headlineOf } from '@shared/build-sheet/headline';
+import { engineLine, sectionViews } from '@shared/build-sheet/spec-lines';
 
 /** Medium error correction (about 15% of the code can be lost to glare or a scuff) and a short URL: a low version, big modules. */
 export const QR_ERROR_CORRECTION = 'M' as const;
@@ -33,6 +35,10 @@ export const shortUrlOf = (url: string) => url.replace(/^https?:\/\//, '');
 export function savedCardSettings(build: Pick<Build, 'cardSettings'>): CardSettings {
   const parsed = CardSettingsSchema.safeParse(build.cardSettings ?? {});
   return parsed.success ? parsed.data : DEFAULT_CARD_SETTINGS;
+}
+
+export async function saveCardSettings(build: Build, settings: CardSettings): Promise<void> {
+  await build.update({ cardSettings: settings });
 }
 
 /** Query over saved settings over defaults. */
@@ -87,7 +93,7 @@ export function coverSourceKey(build: PublicBuild, settings: CardSettings): stri
   if (!photo || photo.sources.length === 0) return null;
   const want = settings.paper === 'tabloid' || settings.paper === 'a3' ? 1600 : 960;
   const source = photo.sources.find((s) => s.width >= want) ?? photo.sources[photo.sources.length - 1]!;
-  return source.jpeg.replace(/^\/media\//, '');
+  return keyOfMediaUrl(source.jpeg);
 }
 
 /** The cover photo's bytes from storage, or null (no photo, or the file is gone: the card prints without it). */

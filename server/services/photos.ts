@@ -1,10 +1,9 @@
-import { randomBytes } from 'node:crypto';
 import { Op, type Transaction } from 'sequelize';
 import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES } from '@shared/schemas/build';
 import { sequelize } from '../db/sequelize';
 import { Build } from '../models/build';
 import { Photo } from '../models/photo';
-import { photoVariantKey } from '../presenters/photo';
+import { newPhotoStorageKey, PHOTO_STORAGE_KEY, photoVariantKey } from '../storage/keys';
 import { storage } from '../storage/index';
 import { logger } from '../logger';
 import { AppError, NotFoundError, ValidationError } from '../errors';
@@ -13,10 +12,6 @@ import { touchBuild } from './builds';
 
 export type PhotoFile = { buffer: Buffer; originalName: string };
 
-/** A storage key is 32 random hex digits: unique, never reused, so its files can be cached forever. */
-const STORAGE_KEY = /^[0-9a-f]{32}$/;
-/** The only keys /media serves: `photos/<storageKey>-<width>.<webp|jpg>`. */
-export const PHOTO_FILE_KEY = /^photos\/[0-9a-f]{32}-[1-9][0-9]{0,4}\.(?:webp|jpg)$/;
 
 export const maxPhotoMegabytes = () => Math.round((PHOTO_MAX_BYTES / (1024 * 1024)) * 10) / 10;
 export const tooLargeError = () =>
@@ -89,7 +84,7 @@ async function putAll(files: { key: string; body: Buffer; type: string }[]): Pro
 export async function storePhotosForBuild(buildId: number, files: PhotoFile[], captions: string[] = []): Promise<Photo[]> {
   if (captions.length > files.length) throw new ValidationError({ captions: 'There are more captions than photos.' });
   const images = await processAll(files);
-  const prepared = images.map((image, i) => ({ image, storageKey: randomBytes(16).toString('hex'), caption: captions[i]?.trim() ?? '' }));
+  const prepared = images.map((image, i) => ({ image, storageKey: newPhotoStorageKey(), caption: captions[i]?.trim() ?? '' }));
   const written = await putAll(prepared.flatMap((p) => variantFiles(p.storageKey, p.image)));
   try {
     return await sequelize.transaction(async (transaction) => {
@@ -175,7 +170,7 @@ export async function deletePhoto(buildId: number, photoId: number): Promise<voi
 
 /** Removes every stored file of these photos (all widths, both formats). Used when a photo or a whole build goes. */
 export async function deletePhotoFiles(storageKeys: string[]): Promise<void> {
-  const valid = storageKeys.filter((key) => STORAGE_KEY.test(key));
+  const valid = storageKeys.filter((key) => PHOTO_STORAGE_KEY.test(key));
   const keys = (await Promise.all(valid.map((key) => storage.list(`photos/${key}-`)))).flat();
   await deleteKeys(keys);
 }

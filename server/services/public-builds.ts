@@ -1,12 +1,9 @@
 import { Op, QueryTypes, literal } from 'sequelize';
-import type { PublicBuild } from '@shared/schemas/build';
 import { BuildCodeSchema } from '@shared/schemas/build';
 import { sequelize } from '../db/sequelize';
-import { User } from '../models/user';
 import { Build } from '../models/build';
 import { Photo } from '../models/photo';
 import { canViewPublic } from '../policies/build';
-import { presentPublicBuild } from '../presenters/public-build';
 import { loadFullBuild } from './builds';
 
 /**
@@ -32,14 +29,11 @@ export async function publicVersion(code: string): Promise<string | null> {
   return row && canViewPublic({ published: row.published }, { disabledAt: row.disabled_at }) ? row.version : null;
 }
 
-/** The public face of a published build, or null for an unknown or unpublished code. */
-export async function loadPublicBuild(code: string): Promise<PublicBuild | null> {
+/** A published build with all the public presenter reads (its owner's name included), or null for an unknown or unpublished code. */
+export async function loadPublicBuild(code: string): Promise<Build | null> {
   if (!BuildCodeSchema.safeParse(code).success) return null;
   const build = await loadFullBuild({ code });
-  if (!build) return null;
-  const owner = await User.findByPk(build.ownerId, { attributes: ['id', 'name', 'disabledAt'] });
-  if (!owner || !canViewPublic(build, owner)) return null;
-  return presentPublicBuild(build, { name: owner.name });
+  return build && canViewPublic(build, build.owner) ? build : null;
 }
 
 /** The most recently changed published builds of accounts that are not disabled, for the home page. */

@@ -28,10 +28,11 @@ async function serve(): Promise<void> {
   const { createApp } = await import('@server/app');
   const { renderPublicBuildPage } = await import('@server/pages/public-build-page');
   const { loadPublicBuild } = await import('@server/services/public-builds');
+  const { presentPublicBuild } = await import('@server/presenters/public-build');
 
   // The same bytes the page route sends, written to a file and served by express.static.
   const dir = mkdtempSync(path.join(tmpdir(), 'placard-bench-'));
-  writeFileSync(path.join(dir, 'page.html'), renderPublicBuildPage((await loadPublicBuild(build.code))!, 'metric'));
+  writeFileSync(path.join(dir, 'page.html'), renderPublicBuildPage(presentPublicBuild((await loadPublicBuild(build.code))!), 'metric'));
   const outer = express();
   outer.use('/bench-static', express.static(dir));
   outer.use(createApp());

@@ -1,5 +1,8 @@
-// `npm test`: what a fresh machine lacks (PostgreSQL, Debian's chromium), a current client build,
-// then every test (unit, API, browser) against the test database. Exits non-zero on any failure.
+// `npm test`: lint and typecheck (the layer rules live there), what a fresh machine lacks
+// (PostgreSQL, Debian's chromium), a current client build, then every test (unit, API, browser)
+// against the test database. Exits non-zero on any failure.
+// `npm test -- <files>` runs just those files and skips lint and typecheck (they take a minute or
+// two on this machine); PLACARD_CHECKS=1 runs them there too.
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
@@ -25,6 +28,22 @@ function ensureTools() {
     const r = spawnSync('apt-get', args, { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
     if (r.status !== 0) throw new Error(`apt-get ${args.join(' ')} failed`);
   }
+}
+
+/** Runs an npm script's tool from node_modules/.bin; a failure ends the run before any test starts. */
+function check(name: string, bin: string, args: string[]) {
+  console.log(`npm test: ${name}…`);
+  const r = spawnSync(path.join(ROOT, 'node_modules/.bin', bin), args, { cwd: ROOT, stdio: 'inherit' });
+  if (r.status !== 0) {
+    console.error(`npm test: ${name} failed, so no test ran.`);
+    process.exit(r.status ?? 1);
+  }
+}
+
+const targeted = process.argv.slice(2).some((a) => !a.startsWith('-'));
+if (!targeted || process.env.PLACARD_CHECKS === '1') {
+  check('lint', 'eslint', ['.']);
+  check('typecheck', 'tsc', ['-b']);
 }
 
 ensureTools();

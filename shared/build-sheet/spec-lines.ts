@@ -1,7 +1,7 @@
 // The build sheet in words, in one unit system: the rows the public page lists and the one-line
-// summaries a card prints. Both read only the public presenter's output, never a model.
-import { ENGINEERING_CAUTION, convert, formatNumber, formatQuantity, parseUnit, preferredUnit, type QuantityKind, type Unit, type UnitOf, type UnitSystem } from '@shared/calc';
-import type { FigureInput } from '@shared/schemas/figure';
+// summaries a card prints. Both read only the public presenter's output (PublicBuild), never a model.
+import { ENGINEERING_CAUTION, convert, formatNumber, formatQuantity, parseUnit, preferredUnit, type QuantityKind, type Unit, type UnitOf, type UnitSystem } from '../calc';
+import type { FigureInput } from '../schemas/figure';
 import {
   SECTION_KINDS,
   SECTION_LABELS,
@@ -12,7 +12,7 @@ import {
   type SectionKind,
   type Sections,
   type WheelsSection,
-} from '@shared/schemas/build-sections';
+} from '../schemas/build-sections';
 
 export type SpecRow = { label: string; value: string };
 export type SectionView = {

@@ -1,0 +1,116 @@
+// Which figure a build shows, and how firm it is: the one rule every screen and card reads
+// (My builds, the editor, the public page, its JSON twin and the cards), so none can disagree.
+import { convert, cornerWeights, displacement, formatNumber, formatQuantity, parseUnit, powerToWeight, preferredUnit, type QuantityKind, type Unit, type UnitSystem } from '../calc';
+import type { PublicBuild } from '../schemas/build';
+import type { Sections } from '../schemas/build-sections';
+import type { FigureInput } from '../schemas/figure';
+import { CARD_FIGURE_LABELS, type CardFigureKey, type KeyFigure } from '../schemas/card';
+
+type Provenance = FigureInput['provenance'];
+const RANK: Record<Provenance, number> = { measured: 0, estimated: 1, target: 2 };
+/** A figure worked out from others is only as firm as the weakest of them. */
+const weakest = (...ps: Provenance[]): Provenance => ps.reduce((a, b) => (RANK[b] > RANK[a] ? b : a), 'measured');
+
+function both(kind: QuantityKind, value: number, unit: Unit, decimals?: Partial<Record<UnitSystem, number>>, override?: Partial<Record<UnitSystem, Unit>>) {
+  const side = (system: UnitSystem) => {
+    const to = (override?.[system] ?? preferredUnit(kind, system)) as never;
+    const v = convert(kind, value, unit as never, to);
+    const d = decimals?.[system];
+    return { value: v, unit: to as string, text: formatQuantity({ value: v, unit: to }, d === undefined ? {} : { decimals: d }) };
+  };
+  return { metric: side('metric'), imperial: side('imperial') };
+}
+
+type Candidate = { figure: FigureInput; note?: string };
+/** Measured beats estimated beats target; among equals the first listed wins. */
+const firmest = (cands: Array<Candidate | null | undefined>) =>
+  cands.filter((c): c is Candidate => Boolean(c)).sort((a, b) => RANK[a.figure.provenance] - RANK[b.figure.provenance])[0];
+
+function powerCandidate(b: PublicBuild): Candidate | undefined {
+  const e = b.sections.engine;
+  const dyno = b.dynoRuns[0];
+  return firmest([
+    e?.flywheelPower ? { figure: e.flywheelPower } : null,
+    e?.wheelPower ? { figure: e.wheelPower, note: 'at the wheels' } : null,
+    dyno ? { figure: { value: dyno.peakPower, unit: dyno.powerUnit, provenance: 'measured', measuredOn: dyno.date }, note: dyno.measuredAt === 'wheel' ? 'at the wheels, on the dyno' : 'on the dyno' } : null,
+  ]);
+}
+
+function torqueCandidate(b: PublicBuild): Candidate | undefined {
+  const e = b.sections.engine;
+  const dyno = b.dynoRuns[0];
+  return firmest([
+    e?.flywheelTorque ? { figure: e.flywheelTorque } : null,
+    e?.wheelTorque ? { figure: e.wheelTorque, note: 'at the wheels' } : null,
+    dyno ? { figure: { value: dyno.peakTorque, unit: dyno.torqueUnit, provenance: 'measured', measuredOn: dyno.date }, note: dyno.measuredAt === 'wheel' ? 'at the wheels, on the dyno' : 'on the dyno' } : null,
+  ]);
+}
+
+function weightCandidate(b: PublicBuild): Candidate | undefined {
+  const w = b.weighIns[0];
+  const weighed = w ? { figure: { value: cornerWeights(w).total, unit: w.unit, provenance: 'measured' as const, measuredOn: w.date }, note: w.withDriver ? 'weighed with driver' : 'weighed' } : null;
+  return firmest([b.weight ? { figure: b.weight } : null, weighed]);
+}
+
+function displacementCandidate(s: Sections): Candidate | undefined {
+  const e = s.engine;
+  if (e?.displacement) return { figure: e.displacement };
+  if (e?.bore && e.stroke && e.cylinders) {
+    const bore = convert('length', e.bore.value, parseUnit('length', e.bore.unit) ?? 'mm', 'mm');
+    const stroke = convert('length', e.stroke.value, parseUnit('length', e.stroke.unit) ?? 'mm', 'mm');
+    const d = displacement({ bore, stroke, unit: 'mm', cylinders: e.cylinders });
+    return { figure: { value: d.cm3, unit: 'cm3', provenance: weakest(e.bore.provenance, e.stroke.provenance) }, note: 'from bore and stroke' };
+  }
+  return undefined;
+}
+
+/** The largest JPEG of the build's photo that backs a measured figure, if it is one of the build's photos. */
+function evidenceUrlOf(b: PublicBuild, c: Candidate): string | undefined {
+  const id = c.figure.provenance === 'measured' ? c.figure.evidencePhotoId : undefined;
+  const photo = id ? b.photos.find((p) => p.id === id) : undefined;
+  return photo?.sources[photo.sources.length - 1]?.jpeg;
+}
+
+function keyFigure(b: PublicBuild, key: CardFigureKey, kind: QuantityKind, c: Candidate | undefined, opts: { decimals?: Partial<Record<UnitSystem, number>>; units?: Partial<Record<UnitSystem, Unit>> } = {}): KeyFigure | null {
+  if (!c) return null;
+  const evidenceUrl = evidenceUrlOf(b, c);
+  const unit = parseUnit(kind, c.figure.unit);
+  if (!unit) return null;
+  return {
+    key,
+    label: CARD_FIGURE_LABELS[key],
+    provenance: c.figure.provenance,
+    ...(c.figure.measuredOn ? { measuredOn: c.figure.measuredOn } : {}),
+    ...(evidenceUrl ? { evidenceUrl } : {}),
+    ...(c.note ? { note: c.note } : {}),
+    ...both(kind, c.figure.value, unit, opts.decimals, opts.units),
+  };
+}
+
+/** The headline figures of a build in both unit systems, in card order. */
+export function computeKeyFigures(b: PublicBuild): KeyFigure[] {
+  const power = powerCandidate(b);
+  const weight = weightCandidate(b);
+  const out: Array<KeyFigure | null> = [
+    keyFigure(b, 'power', 'power', power),
+    keyFigure(b, 'torque', 'torque', torqueCandidate(b)),
+    keyFigure(b, 'weight', 'mass', weight),
+  ];
+  if (power && weight) {
+    const pu = parseUnit('power', power.figure.unit);
+    const mu = parseUnit('mass', weight.figure.unit);
+    if (pu && mu && power.figure.value > 0 && weight.figure.value > 0) {
+      const r = powerToWeight({ value: power.figure.value, unit: pu }, { value: weight.figure.value, unit: mu });
+      out.push({
+        key: 'powerToWeight',
+        label: CARD_FIGURE_LABELS.powerToWeight,
+        provenance: weakest(power.figure.provenance, weight.figure.provenance),
+        ...(power.note?.startsWith('at the wheels') ? { note: 'with power at the wheels' } : {}),
+        metric: { value: r.wPerKg, unit: 'kW/t', text: `${formatNumber(r.wPerKg)}\u00a0kW/t` },
+        imperial: { value: r.lbPerHp, unit: 'lb/hp', text: `${formatNumber(r.lbPerHp, { decimals: 1 })}\u00a0lb/hp` },
+      });
+    }
+  }
+  out.push(keyFigure(b, 'displacement', 'volume', displacementCandidate(b.sections), { units: { metric: 'L', imperial: 'in3' }, decimals: { metric: 1, imperial: 0 } }));
+  return out.filter((f): f is KeyFigure => f !== null);
+}
