@@ -2,7 +2,8 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { UniqueConstraintError, ValidationError as SequelizeValidationError } from 'sequelize';
 import { ZodError } from 'zod';
 import { fieldsFromIssues, type ErrorResponse } from '@shared/errors';
-import { AppError, NotFoundError } from '../errors';
+import { AppError, NotFoundError, UnavailableError } from '../errors';
+import { isDatabaseUnavailable } from '../services/database-unavailable';
 
 export const apiNotFound: RequestHandler = () => {
   throw new NotFoundError('No such API endpoint.');
@@ -10,6 +11,7 @@ export const apiNotFound: RequestHandler = () => {
 
 function toAppError(err: unknown): AppError | undefined {
   if (err instanceof AppError) return err;
+  if (isDatabaseUnavailable(err)) return new UnavailableError();
   if (err instanceof ZodError) return new AppError(400, 'VALIDATION_FAILED', 'Some fields need attention.', fieldsFromIssues(err.issues));
   if (err instanceof UniqueConstraintError) {
     const fields = Object.fromEntries(err.errors.map((e) => [e.path ?? '_', `This ${e.path ?? 'value'} is already taken.`]));
@@ -26,7 +28,9 @@ function toAppError(err: unknown): AppError | undefined {
   // %-escape in the path, an unknown charset, a missing asset): answer those with their status, in our
   // words (their messages can name files on the server, so they are never passed on).
   if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500) {
-    return e.status === 404 ? new NotFoundError() : new AppError(e.status, 'BAD_REQUEST', 'The request could not be read.');
+    if (e.status === 404) return new NotFoundError();
+    if (e.status === 415) return new AppError(415, 'UNSUPPORTED_MEDIA_TYPE', 'The request body is in an encoding we do not read: send UTF-8 JSON.');
+    return new AppError(e.status, 'BAD_REQUEST', 'The request could not be read.');
   }
   return undefined;
 }
@@ -35,6 +39,10 @@ function toAppError(err: unknown): AppError | undefined {
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const known = toAppError(err);
   if (!known) req.log?.error({ err }, 'unhandled error');
+  else if (known instanceof UnavailableError) {
+    req.log?.warn({ err }, 'database unavailable');
+    if (!res.headersSent) res.set('Retry-After', '5');
+  }
   const status = known?.status ?? 500;
   const body: ErrorResponse = {
     error: {

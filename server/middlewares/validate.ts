@@ -1,7 +1,7 @@
 import type { Request } from 'express';
 import type { z } from 'zod';
 import { fieldsFromIssues } from '@shared/errors';
-import { ValidationError } from '../errors';
+import { AppError, ValidationError } from '../errors';
 
 /** Parses a value with a shared zod schema and keeps its type; a failure is a 400 naming each field. */
 export function parseWith<S extends z.ZodType>(schema: S, value: unknown): z.output<S> {
@@ -17,4 +17,10 @@ export function parseWith<S extends z.ZodType>(schema: S, value: unknown): z.out
  */
 export const parseParams = <S extends z.ZodType>(req: Request, schema: S): z.output<S> => parseWith(schema, req.params);
 export const parseQuery = <S extends z.ZodType>(req: Request, schema: S): z.output<S> => parseWith(schema, req.query);
-export const parseBody = <S extends z.ZodType>(req: Request, schema: S): z.output<S> => parseWith(schema, req.body);
+export const parseBody = <S extends z.ZodType>(req: Request, schema: S): z.output<S> => parseWith(schema, requireBody(req));
+
+/** A route that reads a body needs one: no body (or zero bytes of JSON) is a 400, never taken for `{}`. */
+function requireBody(req: Request): unknown {
+  if (req.body === undefined) throw new AppError(400, 'BAD_REQUEST', 'The request has no body: send the fields as a JSON object.', { _: 'Send a JSON object.' });
+  return req.body;
+}

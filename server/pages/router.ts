@@ -7,6 +7,7 @@ import { presentPublicBuild } from '../presenters/public-build';
 import { NOT_FOUND_HTML, renderPublicBuildPage } from './public-build-page';
 import { compressPage, matchesEtag, pickEncoding, publicPageCache, type CachedPage } from './page-cache';
 import { OSWALD_URL } from './page-styles';
+import { isDatabaseUnavailable } from '../services/database-unavailable';
 
 /** Server-rendered public pages (/c/<code>): complete HTML, no app bundle, no session. */
 export const pagesRouter = Router();
@@ -53,7 +54,15 @@ pagesRouter.get('/c/:code', async (req, res) => {
   const now = Date.now();
   if (cached && now - cached.checkedAt < publicPageCache.revalidateAfterMs) return send(req, res, cached, !chosen);
 
-  const version = await publicVersion(code);
+  let version: string | null;
+  try {
+    version = await publicVersion(code);
+  } catch (err) {
+    // The database is away: a page we already rendered is still the build as last published.
+    if (!cached || !isDatabaseUnavailable(err)) throw err;
+    req.log.warn({ err }, 'database unavailable: public page served from the cache');
+    return send(req, res, cached, !chosen);
+  }
   if (!version) {
     publicPageCache.delete(key);
     return notFound(res);

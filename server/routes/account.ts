@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { AccountUpdateSchema, PasswordChangeSchema } from '@shared/schemas/user';
 import { parseBody } from '../middlewares/validate';
+import { passwordChangeLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeUser } from '../policies/user';
 import { changePassword, updateAccount } from '../services/users';
@@ -16,7 +17,7 @@ accountRouter.patch('/account', requireUser, async (req, res) => {
   res.json({ user: presentCurrentUser(updated) });
 });
 
-accountRouter.post('/account/password', requireUser, async (req, res) => {
+accountRouter.post('/account/password', requireUser, passwordChangeLimiter, async (req, res) => {
   const input = parseBody(req, PasswordChangeSchema);
   const user = currentUser(req);
   authorizeUser(user, 'updateAccount', user);

@@ -1,6 +1,7 @@
 import { Router, type Request } from 'express';
-import { z } from 'zod';
 import { DynoRunCreateSchema, WeighInCreateSchema } from '@shared/schemas/build';
+import type { z } from 'zod';
+import { IdParamSchema, IdSchema } from '@shared/schemas/params';
 import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
@@ -12,9 +13,8 @@ import { respondWithBuild } from './respond-with-build';
 export const buildRecordsRouter = Router();
 buildRecordsRouter.use('/builds', requireUser);
 
-const positiveId = (label: string) => z.coerce.number({ error: `${label} must be a number.` }).int().positive({ error: `${label} must be a positive whole number.` });
-const BuildParams = z.object({ id: positiveId('Id') });
-const RecordParams = BuildParams.extend({ recordId: positiveId('Record id') });
+const BuildParams = IdParamSchema;
+const RecordParams = IdParamSchema.extend({ recordId: IdSchema });
 
 async function editableBuild(req: Request, id: number) {
   const build = await findBuild(id);

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { IdParamSchema } from '@shared/schemas/params';
+import { replaceBody } from '@shared/schemas/body';
 import { CardQuerySchema, CardSettingsSchema, type CardSettingsResponse } from '@shared/schemas/card';
 import { SECTION_KINDS } from '@shared/schemas/build-sections';
 import { parseBody, parseParams, parseQuery } from '../middlewares/validate';
@@ -13,6 +14,8 @@ import { presentPublicBuild } from '../presenters/public-build';
 
 /** The owner's windshield cards and QR codes (mounted under /api, after session and CSRF). */
 export const cardsRouter = Router();
+
+const CardSettingsReplaceSchema = replaceBody(CardSettingsSchema);
 
 cardsRouter.get('/builds/:id/card-settings', requireUser, async (req, res) => {
   const { id } = parseParams(req, IdParamSchema);
@@ -35,7 +38,7 @@ cardsRouter.get('/builds/:id/card-settings', requireUser, async (req, res) => {
 
 cardsRouter.put('/builds/:id/card-settings', requireUser, async (req, res) => {
   const { id } = parseParams(req, IdParamSchema);
-  const settings = parseBody(req, CardSettingsSchema);
+  const settings = parseBody(req, CardSettingsReplaceSchema);
   const build = await findBuild(id);
   authorizeBuild(currentUser(req), 'edit', build);
   await saveCardSettings(build, settings);
