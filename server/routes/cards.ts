@@ -1,13 +1,13 @@
-import { Router, type Response } from 'express';
+import { Router } from 'express';
 import { IdParamSchema } from '@shared/schemas/params';
-import { CardQuerySchema, CardSettingsSchema, type CardQuery, type CardSettings, type CardSettingsResponse } from '@shared/schemas/card';
+import { CARD_LEFT_OFF_HEADER, CardQuerySchema, CardSettingsSchema, type CardSettingsResponse } from '@shared/schemas/card';
 import { SECTION_KINDS } from '@shared/schemas/build-sections';
-import { validate } from '../middlewares/validate';
+import { parseBody, parseParams, parseQuery } from '../middlewares/validate';
 import { cardRenderLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
 import { findBuild, loadFullBuildOrThrow } from '../services/builds';
-import { loadCoverImage, qrPng, qrSvg, renderCardPdf, savedCardSettings, settingsFromQuery, showFromQuery } from '../services/cards';
+import { availableFigures, loadCoverImage, qrPng, qrSvg, renderCard, savedCardSettings, settingsFromQuery, showFromQuery } from '../services/cards';
 import { publicBuildUrl } from '../presenters/build';
 import { presentPublicBuild } from '../presenters/public-build';
 import { User } from '../models/user';
@@ -15,10 +15,9 @@ import { User } from '../models/user';
 /** The owner's windshield cards and QR codes (mounted under /api, after session and CSRF). */
 export const cardsRouter = Router();
 
-const idOf = (res: Response) => (res.locals.params as { id: number }).id;
-
-cardsRouter.get('/builds/:id/card-settings', requireUser, validate('params', IdParamSchema), async (req, res) => {
-  const build = await loadFullBuildOrThrow(idOf(res));
+cardsRouter.get('/builds/:id/card-settings', requireUser, async (req, res) => {
+  const { id } = parseParams(req, IdParamSchema);
+  const build = await loadFullBuildOrThrow(id);
   authorizeBuild(currentUser(req), 'edit', build);
   const body: CardSettingsResponse = {
     settings: savedCardSettings(build),
@@ -30,43 +29,50 @@ cardsRouter.get('/builds/:id/card-settings', requireUser, validate('params', IdP
       published: build.published,
       publicUrl: publicBuildUrl(build.code),
       sections: SECTION_KINDS.filter((kind) => build.sections?.some((s) => s.kind === kind)),
+      figures: availableFigures(presentPublicBuild(build, { name: '' })),
     },
   };
   res.json(body);
 });
 
-cardsRouter.put('/builds/:id/card-settings', requireUser, validate('params', IdParamSchema), validate('body', CardSettingsSchema), async (req, res) => {
-  const build = await findBuild(idOf(res));
+cardsRouter.put('/builds/:id/card-settings', requireUser, async (req, res) => {
+  const { id } = parseParams(req, IdParamSchema);
+  const settings = parseBody(req, CardSettingsSchema);
+  const build = await findBuild(id);
   authorizeBuild(currentUser(req), 'edit', build);
-  const settings = res.locals.body as CardSettings;
   await build.update({ cardSettings: settings });
   res.json({ settings });
 });
 
-cardsRouter.get('/builds/:id/card.pdf', requireUser, cardRenderLimiter, validate('params', IdParamSchema), validate('query', CardQuerySchema), async (req, res) => {
-  const build = await loadFullBuildOrThrow(idOf(res));
+cardsRouter.get('/builds/:id/card.pdf', requireUser, cardRenderLimiter, async (req, res) => {
+  const { id } = parseParams(req, IdParamSchema);
+  const query = parseQuery(req, CardQuerySchema);
+  const build = await loadFullBuildOrThrow(id);
   authorizeBuild(currentUser(req), 'edit', build);
-  const query = res.locals.query as CardQuery;
   const settings = settingsFromQuery(savedCardSettings(build), query);
   // The card is drawn from the public face only, so nothing private can reach the paper.
   const owner = await User.findByPk(build.ownerId, { attributes: ['id', 'name'] });
   const publicBuild = presentPublicBuild(build, { name: owner?.name ?? '' });
-  const pdf = await renderCardPdf(publicBuild, settings, { show: showFromQuery(query), cover: await loadCoverImage(publicBuild, settings) });
+  const { pdf, leftOff } = await renderCard(publicBuild, settings, { show: showFromQuery(query), cover: await loadCoverImage(publicBuild, settings) });
   const file = `placard-${build.code}-${settings.design}-${settings.paper}-${settings.orientation}.pdf`;
   res
     .type('application/pdf')
     .set('Content-Disposition', `${query.download === '1' ? 'attachment' : 'inline'}; filename="${file}"`)
+    // What did not fit, for the designer to say; a header keeps the PDF one plain GET.
+    .set(CARD_LEFT_OFF_HEADER, encodeURIComponent(JSON.stringify(leftOff)))
     .send(pdf);
 });
 
-cardsRouter.get('/builds/:id/qr.png', requireUser, validate('params', IdParamSchema), async (req, res) => {
-  const build = await findBuild(idOf(res));
+cardsRouter.get('/builds/:id/qr.png', requireUser, async (req, res) => {
+  const { id } = parseParams(req, IdParamSchema);
+  const build = await findBuild(id);
   authorizeBuild(currentUser(req), 'edit', build);
   res.type('image/png').set('Content-Disposition', `attachment; filename="placard-${build.code}-qr.png"`).send(await qrPng(publicBuildUrl(build.code)));
 });
 
-cardsRouter.get('/builds/:id/qr.svg', requireUser, validate('params', IdParamSchema), async (req, res) => {
-  const build = await findBuild(idOf(res));
+cardsRouter.get('/builds/:id/qr.svg', requireUser, async (req, res) => {
+  const { id } = parseParams(req, IdParamSchema);
+  const build = await findBuild(id);
   authorizeBuild(currentUser(req), 'edit', build);
   res.type('image/svg+xml').set('Content-Disposition', `attachment; filename="placard-${build.code}-qr.svg"`).send(await qrSvg(publicBuildUrl(build.code)));
 });

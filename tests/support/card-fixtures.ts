@@ -158,3 +158,28 @@ export function longestPublicBuild(): PublicBuild {
     credits: Array.from({ length: 40 }, (_, i) => ({ role: long('upholstery', 60), name: `${long('Person', 110)} ${i}` })),
   });
 }
+
+/** A build with a title and little else: the card must still fill its page. */
+export function sparsePublicBuild(overrides: Partial<PublicBuild> = {}): PublicBuild {
+  return typicalPublicBuild({
+    title: 'Barn Find',
+    modelYear: 1951,
+    bodyOrigin: 'two-door sedan',
+    style: null,
+    story: 'Found under a tarp; running again after one summer.',
+    weight: null,
+    sections: { engine: { layout: 'inline', cylinders: 6, flywheelPower: est(95, 'hp') } },
+    credits: [],
+    dynoRuns: [],
+    weighIns: [],
+    ...overrides,
+  });
+}
+
+/** The entry blocks the card tests print: small to four-digit numbers, long show names and classes. */
+export const ENTRY_SHOWS = [
+  { showName: 'Riverside Autumn Run', className: 'Restomod', entryNumber: '7' },
+  { showName: 'Harbour Lights Charity Show and Shine, Saturday Evening Session', className: 'Pre-1949 closed cars, full fenders, any engine', entryNumber: '47' },
+  { showName: 'Long Valley Gathering of Hot Rods, Customs and Trucks, Day 2', className: 'Street machines 1970–1989 with modified engines', entryNumber: '1047' },
+  { showName: 'Northern Plains Regional Championship for Pro-Touring Builds', className: 'Best engineered chassis, tube frame or unibody', entryNumber: '9999' },
+];
