@@ -77,10 +77,10 @@ export function layEntryBlock(show: CardShow, width: number, opts: { k: number; 
   const inner = width - 2 * pad;
   const numberSize = sizeForCap(leg.entryCapPt, 'display-700') * (opts.numberScale ?? 1);
   // Room for four digits whatever the number, so a show's cards line up.
-  const numberW = show.entryNumber ? Math.max(textWidth('8888', 'display-700', numberSize), textWidth(show.entryNumber, 'display-700', numberSize)) : 0;
+  const numberW = show.entryNumber ? Math.max(textWidth('8888', 'display-700', numberSize), textWidth(show.entryNumber, 'display-700', numberSize)) / 0.97 + 2 : 0;
   const labelSize = Math.max(9, 9 * k);
   const numberLines: Line[] = show.entryNumber
-    ? [...setLines([{ text: 'ENTRY', face: 'display-500', letterSpacing: 1 }], labelSize, Math.max(numberW, 40), 1.2), ...setLines([{ text: show.entryNumber, face: 'display-700' }], numberSize, numberW + 2, DISPLAY_LH)]
+    ? [...setLines([{ text: 'ENTRY', face: 'display-500', letterSpacing: 1 }], labelSize, Math.max(numberW, 40), 1.2), ...setLines([{ text: show.entryNumber, face: 'display-700' }], numberSize, numberW, DISPLAY_LH)]
     : [];
   const side = show.entryNumber && inner - numberW - 12 * k >= 130 * k;
   const namesW = side ? inner - numberW - 12 * k : inner;
@@ -230,15 +230,22 @@ export function flowBlock(label: string, items: FlowItem[], sizes: number[], opt
   if (!items.length) return undefined;
   const cols = opts.cols ?? 1;
   const colGap = opts.colGap ?? 12;
+  const linesCache = new Map<string, Line[][]>();
+  const itemLines = (size: number, colW: number) => {
+    const key = `${size}|${colW}`;
+    if (!linesCache.has(key)) linesCache.set(key, items.map((it) => it.lines(size, colW)));
+    return linesCache.get(key)!;
+  };
   const pour = (size: number, width: number, limit: number) => {
     const colW = (width - (cols - 1) * colGap) / cols;
+    const allLines = itemLines(size, colW);
     const columns: Line[][] = [[]];
     const used = [0];
     const status = items.map(() => 'whole' as 'whole' | 'cut' | 'off');
     let full = false;
     items.forEach((item, i) => {
       if (full) return void (status[i] = 'off');
-      const lines = item.lines(size, colW);
+      const lines = allLines[i]!;
       const spacer: Line = { spans: [], size, height: size * (opts.itemGap ?? 0.45) };
       let printed = 0;
       const queue = [...(i && used[used.length - 1]! > 0 ? [spacer] : []), ...lines];
@@ -271,9 +278,15 @@ export function flowBlock(label: string, items: FlowItem[], sizes: number[], opt
     });
     return { columns, colW, height: Math.max(...used), status };
   };
+  const naturals = new Map<string, ReturnType<typeof pour>>();
   const natural = (size: number, width: number) => {
+    const key = `${size}|${width}`;
+    if (!naturals.has(key)) naturals.set(key, naturalOf(size, width));
+    return naturals.get(key)!;
+  };
+  const naturalOf = (size: number, width: number) => {
     if (cols === 1) return pour(size, width, Infinity);
-    const total = items.reduce((h, it) => h + height(it.lines(size, (width - (cols - 1) * colGap) / cols)), 0);
+    const total = itemLines(size, (width - (cols - 1) * colGap) / cols).reduce((h, lines) => h + height(lines), 0);
     let lo = 0;
     let hi = total + items.length * size;
     for (let i = 0; i < 16 && hi - lo > 0.5; i++) {
@@ -421,7 +434,7 @@ export function footerBlock({ content, k }: Ctx): BlockSpec {
     keep: true,
     lay(_, width) {
       const markSize = 8 * k;
-      const markW = textWidth('PLACARD', 'display-600', markSize, 1.5) + 4;
+      const markW = textWidth('PLACARD', 'display-600', markSize, 1.5) / 0.97 + 4;
       const caution = content.caution ? clamp(setLines([{ text: content.caution, face: 'text-400' }], Math.max(7, 7 * k), width - markW - 10 * k, 1.25), 2, width - markW - 10 * k) : [];
       const mark = setLines([{ text: 'PLACARD', face: 'display-600', letterSpacing: 1.5 }], markSize, markW + 2, 1.25);
       return {

@@ -58,11 +58,26 @@ export function heightOf(geo: Geo, laid: Map<BlockId, Laid>): number {
  * as soon as anything is cut.
  */
 export function fitBlocks(geo: Geo, blocks: Partial<Record<BlockId, BlockSpec>>, priority: BlockId[], height: number): Fitted {
+  // Every block is laid out once per size, width and cut: the search below asks for the same ones often.
+  const cache = new Map<string, Laid | null>();
+  const memo = Object.fromEntries(
+    Object.entries(blocks).map(([id, spec]) => [
+      id,
+      {
+        ...spec,
+        lay(step: number, width: number, maxHeight?: number) {
+          const key = `${id}|${step}|${width}|${maxHeight ?? ''}`;
+          if (!cache.has(key)) cache.set(key, spec.lay(step, width, maxHeight));
+          return cache.get(key)!;
+        },
+      },
+    ]),
+  ) as Partial<Record<BlockId, BlockSpec>>;
   const ids = priority.filter((id) => blocks[id]);
   const state: State = { step: Object.fromEntries(ids.map((id) => [id, blocks[id]!.steps - 1])), cut: {}, dropped: new Set() };
   const evaluate = () => {
     const laid = new Map<BlockId, Laid>();
-    layAll(geo, blocks, state, laid);
+    layAll(geo, memo, state, laid);
     return { laid, h: heightOf(geo, laid) };
   };
   const fits = () => evaluate().h <= height + 0.01;

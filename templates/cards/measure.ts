@@ -94,18 +94,25 @@ export function wrap(spans: Span[], size: number, width: number): Span[][] {
   const limit = width * SLACK;
   const lines: Span[][] = [];
   let current: Array<{ span: Span; spaced: boolean }> = [];
+  let used = 0;
   for (const w of words(spans)) {
-    const tryLine = [...current, w];
-    if (lineWidth(join(tryLine), size) <= limit) {
-      current = tryLine;
+    // Word by word, each measured in its own face; a space is measured in the face of the word it precedes.
+    const wordW = spanWidth(w.span, size);
+    const spaceW = current.length && w.spaced ? spanWidth({ ...w.span, text: ' ' }, size) : 0;
+    if (used + spaceW + wordW <= limit) {
+      current.push(w);
+      used += spaceW + wordW;
       continue;
     }
     if (current.length) lines.push(join(current));
-    if (spanWidth(w.span, size) <= limit) current = [{ ...w, spaced: false }];
-    else {
+    if (wordW <= limit) {
+      current = [{ ...w, spaced: false }];
+      used = wordW;
+    } else {
       const pieces = breakWord(w.span, size, limit);
       for (const p of pieces.slice(0, -1)) lines.push([p]);
       current = [{ span: pieces[pieces.length - 1]!, spaced: false }];
+      used = spanWidth(current[0]!.span, size);
     }
   }
   if (current.length) lines.push(join(current));
