@@ -85,7 +85,6 @@ export function fitBlocks(geo: Geo, blocks: Partial<Record<BlockId, BlockSpec>>,
   if (fits()) {
     // Grow: the most important block first takes the largest size that still fits.
     for (const id of ids) {
-      const spec = blocks[id]!;
       const min = state.step[id]!;
       for (let s = 0; s < min; s++) {
         state.step[id] = s;

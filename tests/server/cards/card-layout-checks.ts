@@ -68,62 +68,66 @@ function check(design: CardDesign, c: Case, { pdf, layout, leftOff }: Rendered) 
   const box = pageBox(c.paper, c.orientation);
   const leg = CARD_LEGIBILITY[paperClass(c.paper)];
 
-  // Exact paper, one page.
+  // Every problem found is collected, then asserted once: a failure lists them all.
+  const problems: string[] = [];
+  const fail = (why: string) => problems.push(`${label}: ${why}`);
+
+  // Exact paper.
   const [w, h] = c.orientation === 'portrait' ? EXACT_PT[c.paper] : [EXACT_PT[c.paper][1], EXACT_PT[c.paper][0]];
-  expect(layout.pages, label).toBe(1);
-  expect(layout.mediaBox.slice(0, 2), label).toEqual([0, 0]);
-  expect(layout.mediaBox[2], label).toBeCloseTo(w, 3);
-  expect(layout.mediaBox[3], label).toBeCloseTo(h, 3);
+  const mb = layout.mediaBox;
+  if (layout.pages !== 1) fail(`${layout.pages} pages`);
+  if (mb[0] !== 0 || mb[1] !== 0 || Math.abs(mb[2]! - w) > 0.001 || Math.abs(mb[3]! - h) > 0.001) fail(`MediaBox ${mb.join(' ')}, not 0 0 ${w} ${h}`);
 
   // Everything inside the safe margins.
   const safe: Box = { x0: box.margin, y0: box.margin, x1: w - box.margin, y1: h - box.margin };
-  for (const t of layout.texts) expect(inside(t, safe, 0.5), `${label}: "${t.str}" crosses the margin`).toBe(true);
-  for (const img of layout.images) expect(inside(img, safe, 0.5), `${label}: the photo crosses the margin`).toBe(true);
+  for (const t of layout.texts) if (!inside(t, safe, 0.5)) fail(`"${t.str}" crosses the margin`);
+  for (const img of layout.images) if (!inside(img, safe, 0.5)) fail('the photo crosses the margin');
 
-  // The QR code: present, big enough, its quiet zone clear of text, inside the margins.
+  // The QR code: present, big enough, its quiet zone clear of text and inside the margins.
   const qr = layout.qr;
-  expect(qr, `${label}: no QR code`).not.toBeNull();
-  const side = qr!.x1 - qr!.x0;
-  expect(side, `${label}: QR code ${side.toFixed(1)} pt`).toBeGreaterThanOrEqual(leg.qrPt - 0.5);
+  if (!qr) return [`${label}: no QR code`];
+  const side = qr.x1 - qr.x0;
+  if (side < leg.qrPt - 0.5) fail(`QR code ${side.toFixed(1)} pt, under ${leg.qrPt.toFixed(1)}`);
   const quiet = (side / qrMatrix(c.build.url).size) * QR_QUIET;
-  const qrZone = { x0: qr!.x0 - quiet, y0: qr!.y0 - quiet, x1: qr!.x1 + quiet, y1: qr!.y1 + quiet };
-  expect(inside(qrZone, safe, 0.5), `${label}: QR quiet zone crosses the margin`).toBe(true);
+  const qrZone = { x0: qr.x0 - quiet, y0: qr.y0 - quiet, x1: qr.x1 + quiet, y1: qr.y1 + quiet };
+  if (!inside(qrZone, safe, 0.5)) fail('the QR quiet zone crosses the margin');
 
   // No two text boxes overlap, and no text sits on the photo or the QR code.
   const texts = layout.texts;
   for (let i = 0; i < texts.length; i++) {
-    for (let j = i + 1; j < texts.length; j++) expect(overlaps(texts[i]!, texts[j]!, 0.25), `${label}: "${texts[i]!.str}" overlaps "${texts[j]!.str}"`).toBe(false);
-    expect(overlaps(texts[i]!, qrZone, 0.25), `${label}: "${texts[i]!.str}" is on the QR code`).toBe(false);
-    for (const img of layout.images) expect(overlaps(texts[i]!, img, 0.25), `${label}: "${texts[i]!.str}" is on the photo`).toBe(false);
+    for (let j = i + 1; j < texts.length; j++) if (overlaps(texts[i]!, texts[j]!, 0.25)) fail(`"${texts[i]!.str}" overlaps "${texts[j]!.str}"`);
+    if (overlaps(texts[i]!, qrZone, 0.25)) fail(`"${texts[i]!.str}" is on the QR code`);
+    for (const img of layout.images) if (overlaps(texts[i]!, img, 0.25)) fail(`"${texts[i]!.str}" is on the photo`);
   }
-  for (const img of layout.images) expect(overlaps(img, qrZone), `${label}: the photo is on the QR code`).toBe(false);
+  for (const img of layout.images) if (overlaps(img, qrZone)) fail('the photo is on the QR code');
 
   // Sizes: the title and the entry number, the key figures, and every other line.
   const cap = (t: (typeof texts)[number]) => t.size * capShare(t.face!);
   const heading = norm(content.heading);
-  const titleItems = texts.filter((t) => t.face === 'display-700' && heading.includes(norm(t.str)) && t.str.trim() !== c.show?.entryNumber);
-  expect(titleItems.length, `${label}: title printed`).toBeGreaterThan(0);
-  for (const t of titleItems) expect(cap(t), `${label}: title "${t.str}"`).toBeGreaterThanOrEqual(leg.titleCapPt - 0.01);
+  const titleItems = texts.filter((t) => t.face === 'display-700' && heading.includes(norm(t.str).replace(/…$/, '')) && t.str.trim() !== c.show?.entryNumber);
+  if (!titleItems.length) fail('no title');
+  for (const t of titleItems) if (cap(t) < leg.titleCapPt - 0.01) fail(`title "${t.str}" cap height ${cap(t).toFixed(1)} pt`);
   if (c.show?.entryNumber) {
     const number = texts.find((t) => t.str.trim() === c.show!.entryNumber && t.face === 'display-700');
-    expect(number, `${label}: entry number printed`).toBeDefined();
-    expect(cap(number!), `${label}: entry number`).toBeGreaterThanOrEqual(leg.entryCapPt - 0.01);
+    if (!number) fail('no entry number');
+    else if (cap(number) < leg.entryCapPt - 0.01) fail(`entry number cap height ${cap(number).toFixed(1)} pt`);
   }
   const values = new Set(content.figures.map((f) => f.value));
   const figureItems = texts.filter((t) => t.face === 'display-600' && values.has(t.str.trim()));
-  if (values.size) expect(figureItems.length, `${label}: key figures printed`).toBeGreaterThan(0);
-  for (const t of figureItems) expect(cap(t), `${label}: figure "${t.str}"`).toBeGreaterThanOrEqual(leg.figureCapPt - 0.01);
+  if (values.size && !figureItems.length) fail('no key figure');
+  for (const t of figureItems) if (cap(t) < leg.figureCapPt - 0.01) fail(`figure "${t.str}" cap height ${cap(t).toFixed(1)} pt`);
   // Small print allowed only for these: the footer, figure labels and notes, the QR caption, the entry label.
   const small = [ENGINEERING_CAUTION, 'PLACARD', 'ENTRY', 'Scan for the whole build', ...Object.values(CARD_FIGURE_LABELS), ...content.figures.map((f) => f.note), ...content.figures.map((f) => `${f.unit} ${f.mark}`)].map(norm).filter(Boolean);
   for (const t of texts) {
-    if (small.some((s) => s.includes(norm(t.str).replace(/…$/, '')))) continue;
-    expect(t.size, `${label}: "${t.str}" at ${t.size.toFixed(1)} pt`).toBeGreaterThanOrEqual(leg.linePt - 0.01);
+    if (t.size >= leg.linePt - 0.01 || small.some((s) => s.includes(norm(t.str).replace(/…$/, '')))) continue;
+    fail(`"${t.str}" at ${t.size.toFixed(1)} pt`);
   }
 
   // What did not fit is named, and the card says where the rest is.
   const all = norm(texts.map((t) => t.str).join(''));
-  expect(all, label).toContain(norm(content.shortUrl));
-  if (leftOff.length) expect(all, `${label}: the "more on the phone" line`).toContain(norm('More on the phone:'));
+  if (!all.includes(norm(content.shortUrl))) fail('no short URL');
+  if (leftOff.length && !all.includes(norm('More on the phone:'))) fail('no "more on the phone" line');
+  expect(problems).toEqual([]);
 
   if (pdf) {
     // Rendered alone through the service: one page, and a coarse scan (36 px per inch) reads the code back to the public address.

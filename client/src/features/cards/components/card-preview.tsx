@@ -4,18 +4,20 @@ import workerUrl from 'pdfjs-dist/build/pdf.worker.min.mjs?url';
 import { LoadingState } from '@client/components/ui/states';
 import { CARD_LEFT_OFF_HEADER, type CardLeftOff } from '@shared/schemas/card';
 
+function parseLeftOff(header: string | null): CardLeftOff[] {
+  try {
+    return header ? (JSON.parse(decodeURIComponent(header)) as CardLeftOff[]) : [];
+  } catch {
+    return [];
+  }
+}
+
 /** The card PDF and, from its header, what did not fit on it. */
 async function fetchCard(url: string): Promise<{ data: Uint8Array; leftOff: CardLeftOff[] }> {
   const res = await fetch(url, { credentials: 'same-origin' });
   if (!res.ok) throw new Error(`The card could not be drawn (${res.status}).`);
   const header = res.headers.get(CARD_LEFT_OFF_HEADER);
-  let leftOff: CardLeftOff[] = [];
-  try {
-    leftOff = header ? (JSON.parse(decodeURIComponent(header)) as CardLeftOff[]) : [];
-  } catch {
-    leftOff = [];
-  }
-  return { data: new Uint8Array(await res.arrayBuffer()), leftOff };
+  return { data: new Uint8Array(await res.arrayBuffer()), leftOff: parseLeftOff(header) };
 }
 
 GlobalWorkerOptions.workerSrc = workerUrl;
