@@ -1,14 +1,14 @@
 import { Router } from 'express';
 import { IdParamSchema } from '@shared/schemas/params';
 import { replaceBody } from '@shared/schemas/body';
-import { CardQuerySchema, CardSettingsSchema, type CardSettingsResponse } from '@shared/schemas/card';
+import { CARD_LEFT_OFF_HEADER, CardQuerySchema, CardSettingsSchema, type CardSettingsResponse } from '@shared/schemas/card';
 import { SECTION_KINDS } from '@shared/schemas/build-sections';
 import { parseBody, parseParams, parseQuery } from '../middlewares/validate';
 import { cardRenderLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
 import { findBuild, loadFullBuildOrThrow } from '../services/builds';
-import { loadCoverImage, qrPng, qrSvg, renderCardPdf, saveCardSettings, savedCardSettings, settingsFromQuery, showFromQuery } from '../services/cards';
+import { availableFigures, loadCoverImage, qrPng, qrSvg, renderCard, saveCardSettings, savedCardSettings, settingsFromQuery, showFromQuery } from '../services/cards';
 import { publicBuildUrl } from '../presenters/build';
 import { presentPublicBuild } from '../presenters/public-build';
 
@@ -31,6 +31,7 @@ cardsRouter.get('/builds/:id/card-settings', requireUser, async (req, res) => {
       published: build.published,
       publicUrl: publicBuildUrl(build.code),
       sections: SECTION_KINDS.filter((kind) => build.sections?.some((s) => s.kind === kind)),
+      figures: availableFigures(presentPublicBuild(build)),
     },
   };
   res.json(body);
@@ -53,11 +54,13 @@ cardsRouter.get('/builds/:id/card.pdf', requireUser, cardRenderLimiter, async (r
   const settings = settingsFromQuery(savedCardSettings(build), query);
   // The card is drawn from the public face only, so nothing private can reach the paper.
   const publicBuild = presentPublicBuild(build);
-  const pdf = await renderCardPdf(publicBuild, settings, { show: showFromQuery(query), cover: await loadCoverImage(publicBuild, settings) });
+  const { pdf, leftOff } = await renderCard(publicBuild, settings, { show: showFromQuery(query), cover: await loadCoverImage(publicBuild, settings) });
   const file = `placard-${build.code}-${settings.design}-${settings.paper}-${settings.orientation}.pdf`;
   res
     .type('application/pdf')
     .set('Content-Disposition', `${query.download === '1' ? 'attachment' : 'inline'}; filename="${file}"`)
+    // What did not fit, for the designer to say; a header keeps the PDF one plain GET.
+    .set(CARD_LEFT_OFF_HEADER, encodeURIComponent(JSON.stringify(leftOff)))
     .send(pdf);
 });
 

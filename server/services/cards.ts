@@ -3,8 +3,8 @@ import { renderToBuffer } from '@react-pdf/renderer';
 import QRCode from 'qrcode';
 import { BUILD_STYLE_LABELS, type PublicBuild } from '@shared/schemas/build';
 import { ENGINEERING_CAUTION } from '@shared/calc';
-import { CARD_FIGURES, DEFAULT_CARD_SETTINGS, CardSettingsSchema, type CardQuery, type CardSettings, type CardShow } from '@shared/schemas/card';
-import { CardDocument } from '@templates/cards/card-document';
+import { CARD_FIGURES, DEFAULT_CARD_SETTINGS, CardSettingsSchema, type CardFigureKey, type CardLeftOff, type CardQuery, type CardSettings, type CardShow } from '@shared/schemas/card';
+import { CardDocument, layoutCard } from '@templates/cards/card-document';
 import type { CardContent } from '@templates/cards/content';
 import { registerCardFonts } from '@templates/cards/fonts';
 import type { Build } from '../models/build';
@@ -57,6 +57,12 @@ export const showFromQuery = (q: CardQuery): CardShow | null => (q.showName || q
 
 export type CoverImage = NonNullable<CardContent['cover']>;
 
+/** The headline figures this build can print, in the card's order: the default offer in the designer. */
+export const availableFigures = (build: PublicBuild): CardFigureKey[] => {
+  const have = new Set(computeKeyFigures(build).map((f) => f.key));
+  return CARD_FIGURES.filter((key) => have.has(key));
+};
+
 /** The words and figures of a card, from the public face of the build only (never the model). */
 export function cardContent(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null } = {}): CardContent {
   const units = settings.units;
@@ -79,6 +85,7 @@ export function cardContent(build: PublicBuild, settings: CardSettings, opts: { 
     engineLine: settings.sections.includes('engine') ? engineLine(build.sections.engine, units) : '',
     sections: views.map((v) => ({ label: v.label, summary: v.summary || v.madeBy || v.note || '', rows: v.rows, madeBy: v.madeBy })),
     credits: build.credits,
+    story: build.story ?? '',
     caution: views.some((v) => v.caution) ? ENGINEERING_CAUTION : null,
     qr: qrMatrix(build.url),
     shortUrl: shortUrlOf(build.url),
@@ -108,10 +115,13 @@ export async function loadCoverImage(build: PublicBuild, settings: CardSettings)
   return { data: Buffer.concat(chunks), format: 'jpg', width: photo.width, height: photo.height };
 }
 
-/** One card, one page, as a PDF. */
-export async function renderCardPdf(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null } = {}): Promise<Buffer> {
+/** One card, one page, as a PDF, and what did not fit on it (the designer tells the owner). */
+export async function renderCard(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null } = {}): Promise<{ pdf: Buffer; leftOff: CardLeftOff[] }> {
   registerCardFonts();
   const content = cardContent(build, settings, opts);
-  const doc = createElement(CardDocument, { content, design: settings.design, paper: settings.paper, orientation: settings.orientation, title: `${build.title} (${build.code})` });
-  return renderToBuffer(doc as Parameters<typeof renderToBuffer>[0]);
+  const { page, leftOff } = layoutCard(content, settings.design, settings.paper, settings.orientation);
+  const doc = createElement(CardDocument, { page, title: `${build.title} (${build.code})` });
+  return { pdf: await renderToBuffer(doc as Parameters<typeof renderToBuffer>[0]), leftOff };
 }
+
+export const renderCardPdf = async (...args: Parameters<typeof renderCard>): Promise<Buffer> => (await renderCard(...args)).pdf;

@@ -26,7 +26,8 @@ export const PAPER_SIZES_PT: Record<Paper, { width: number; height: number; labe
 export const ORIENTATIONS = ['portrait', 'landscape'] as const;
 export type Orientation = (typeof ORIENTATIONS)[number];
 
-export const CARD_FIGURES = ['power', 'torque', 'weight', 'powerToWeight', 'displacement'] as const;
+/** The headline figures, in the order a card prints them. */
+export const CARD_FIGURES = ['power', 'torque', 'weight', 'displacement', 'powerToWeight'] as const;
 export type CardFigureKey = (typeof CARD_FIGURES)[number];
 export const CARD_FIGURE_LABELS: Record<CardFigureKey, string> = {
   power: 'Power',
@@ -40,7 +41,25 @@ export const UNIT_SYSTEMS = ['metric', 'imperial'] as const;
 
 /** Print-true limits every design keeps (tests check them). */
 export const CARD_MIN_MARGIN_PT = 0.25 * 72;
-export const CARD_MIN_QR_PT = 1.5 * 72;
+const MM = 72 / 25.4;
+
+/**
+ * Legibility through a windshield, per paper class (Letter and A4 are "small"; Tabloid and A3 "large").
+ * - Title and entry number: 12 mm cap height reads at about two metres (common practice, figure from memory: roughly
+ *   1 mm of capital height per 170 mm of distance for bold condensed capitals); 16 mm on the large sheets.
+ * - Key figures: 8 mm (10 mm large), read from a step back; section lines 10 pt (12 pt large), read up close.
+ * - QR code: a code scans from about ten times its width (common practice), so 50 mm scans from
+ *   about half a metre through the glass, 75 mm from about three quarters of a metre; the four-module
+ *   quiet zone is kept outside that size.
+ */
+export type Legibility = { titleCapPt: number; entryCapPt: number; figureCapPt: number; linePt: number; qrPt: number };
+export const CARD_LEGIBILITY: Record<'small' | 'large', Legibility> = {
+  small: { titleCapPt: 12 * MM, entryCapPt: 12 * MM, figureCapPt: 8 * MM, linePt: 10, qrPt: 50 * MM },
+  large: { titleCapPt: 16 * MM, entryCapPt: 16 * MM, figureCapPt: 10 * MM, linePt: 12, qrPt: 75 * MM },
+};
+export const paperClass = (paper: Paper): keyof typeof CARD_LEGIBILITY => (paper === 'tabloid' || paper === 'a3' ? 'large' : 'small');
+/** Entry numbers run 1 to 9999. */
+export const CARD_ENTRY_NUMBER_MAX = 9999;
 
 export const CardSettingsSchema = z.object({
   design: z.enum(CARD_DESIGNS, { error: `Design must be one of ${CARD_DESIGNS.join(', ')}.` }).default('poster'),
@@ -53,7 +72,8 @@ export const CardSettingsSchema = z.object({
   figures: z
     .array(z.enum(CARD_FIGURES, { error: `Figures must be among ${CARD_FIGURES.join(', ')}.` }))
     .max(CARD_FIGURES.length)
-    .default(['power', 'weight', 'powerToWeight']),
+    // All of them: a card prints the ones the build has, so a sparse build still shows what it has.
+    .default([...CARD_FIGURES]),
   units: z.enum(UNIT_SYSTEMS, { error: 'Units must be metric or imperial.' }).default('imperial'),
 });
 export type CardSettings = z.infer<typeof CardSettingsSchema>;
@@ -64,7 +84,11 @@ export const DEFAULT_CARD_SETTINGS: CardSettings = CardSettingsSchema.parse({});
 export const CardShowSchema = z.object({
   showName: shortText('Show name', 80).optional(),
   className: shortText('Class', 60).optional(),
-  entryNumber: shortText('Entry number', 8).optional(),
+  entryNumber: z
+    .string()
+    .trim()
+    .regex(/^[1-9]\d{0,3}$/, { error: `Entry number must be a whole number from 1 to ${CARD_ENTRY_NUMBER_MAX}.` })
+    .optional(),
 });
 export type CardShow = z.infer<typeof CardShowSchema>;
 
@@ -89,8 +113,14 @@ export type CardQuery = z.infer<typeof CardQuerySchema>;
 export type CardSettingsResponse = {
   settings: CardSettings;
   saved: boolean;
-  build: { id: number; code: string; title: string; published: boolean; publicUrl: string; sections: SectionKind[] };
+  /** sections: the ones the build has filled in; figures: the headline figures it can print. */
+  build: { id: number; code: string; title: string; published: boolean; publicUrl: string; sections: SectionKind[]; figures: CardFigureKey[] };
 };
+
+/** The response header of a card PDF naming what did not fit (JSON array of CardLeftOff, URI-encoded). */
+export const CARD_LEFT_OFF_HEADER = 'X-Card-Left-Off';
+/** Something the card could not print whole: "Story", "Credits: 12 of 40 printed", …; the phone page has it all. */
+export type CardLeftOff = { block: string; detail: string };
 
 /** A headline figure already worked out in both systems, with its provenance for the "est." / "target" mark. */
 export type KeyFigure = {

@@ -15,6 +15,8 @@ export type CardContent = {
   engineLine: string;
   sections: CardSection[];
   credits: Array<{ role: string; name: string }>;
+  /** The owner's story, paragraphs split by blank lines: printed last, when there is room. */
+  story: string;
   /** Chassis, brake and suspension figures carry it. */
   caution: string | null;
   qr: { size: number; dark: boolean[] };

@@ -158,3 +158,39 @@ export function longestPublicBuild(): PublicBuild {
     credits: Array.from({ length: 40 }, (_, i) => ({ role: long('upholstery', 60), name: `${long('Person', 110)} ${i}` })),
   });
 }
+
+/** A build with a title and little else: the card must still fill its page. */
+export function sparsePublicBuild(overrides: Partial<PublicBuild> = {}): PublicBuild {
+  return typicalPublicBuild({
+    title: 'Barn Find',
+    modelYear: 1951,
+    bodyOrigin: 'two-door sedan',
+    style: null,
+    story: 'Found under a tarp; running again after one summer.',
+    weight: null,
+    sections: { engine: { layout: 'inline', cylinders: 6, flywheelPower: est(95, 'hp') } },
+    credits: [],
+    dynoRuns: [],
+    weighIns: [],
+    ...overrides,
+  });
+}
+
+const exactly = (n: number, text: string) => text.padEnd(n, ' x').slice(0, n).trim().padEnd(n, 'x');
+
+/** The entry blocks the card tests print: numbers 7, 47, 1047 and 9999 with 60-character show names and classes. */
+export const ENTRY_SHOWS = [
+  { showName: exactly(60, 'Riverside Autumn Run and Swap Meet, Sunday Show Field, Row C'), className: exactly(60, 'Restomods 1960 to 1975, steel bodies, modern running gear'), entryNumber: '7' },
+  { showName: exactly(60, 'Harbour Lights Charity Show and Shine, Saturday Evening Session'), className: exactly(60, 'Pre-1949 closed cars with full fenders and any engine at all'), entryNumber: '47' },
+  { showName: exactly(60, 'Long Valley Gathering of Hot Rods, Customs and Trucks, Day 2'), className: exactly(60, 'Street machines 1970 to 1989 with modified engines and paint'), entryNumber: '1047' },
+  { showName: exactly(60, 'Northern Plains Regional Championship for Pro-Touring Builds'), className: exactly(60, 'Best engineered chassis, tube frame or unibody, judged on lift'), entryNumber: '9999' },
+];
+/** The longest show name and class the schema allows. */
+export const LONGEST_SHOW = { showName: exactly(80, 'Grand Autumn Gathering of Hot Rods, Customs, Trucks and Restomods, Main Field East'), className: exactly(60, 'Modified street cars and trucks with engines of any layout'), entryNumber: '9999' };
+
+/** A build with nothing but its title. */
+export const emptyPublicBuild = (): PublicBuild =>
+  typicalPublicBuild({ title: 'Untitled project', modelYear: null, bodyOrigin: null, style: null, story: '', weight: null, sections: {}, credits: [], dynoRuns: [], weighIns: [] });
+
+/** The longest title allowed (120 characters) on an otherwise typical build. */
+export const longTitlePublicBuild = (): PublicBuild => typicalPublicBuild({ title: exactly(120, 'The Midnight Oxblood Fastback That Took Four Winters, Two Engines and One Very Patient Neighbour to Finish') });

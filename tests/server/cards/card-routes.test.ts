@@ -29,6 +29,10 @@ describe('card routes', () => {
     const pdf = res.body as Buffer;
     expect(mediaBoxes(pdf)).toEqual([[0, 0, 1224, 792]]);
     expect(pageCount(pdf).objects).toBe(1);
+    // What did not fit travels with the PDF, for the designer to say.
+    const leftOff = JSON.parse(decodeURIComponent(res.headers['x-card-left-off'] as string)) as Array<{ block: string; detail: string }>;
+    expect(Array.isArray(leftOff)).toBe(true);
+    for (const l of leftOff) expect(l).toEqual({ block: expect.any(String), detail: expect.any(String) });
     const download = await binary(api.raw.get(`/api/builds/${build.id}/card.pdf?download=1`)).expect(200);
     expect(download.headers['content-disposition']).toMatch(/^attachment; filename="placard-.+-poster-letter-portrait\.pdf"$/);
   });
@@ -48,9 +52,10 @@ describe('card routes', () => {
 
   it('rejects a bad query naming the field', async () => {
     const { build, api } = await ownerWithBuild();
-    const res = await api.get(`/api/builds/${build.id}/card.pdf?design=fancy&paper=legal&sections=engine,roof`).expect(400);
+    const res = await api.get(`/api/builds/${build.id}/card.pdf?design=fancy&paper=legal&sections=engine,roof&entryNumber=10000`).expect(400);
     expect(res.body.error.code).toBe('VALIDATION_FAILED');
-    expect(Object.keys(res.body.error.fields)).toEqual(expect.arrayContaining(['design', 'paper', 'sections.1']));
+    expect(Object.keys(res.body.error.fields)).toEqual(expect.arrayContaining(['design', 'paper', 'sections.1', 'entryNumber']));
+    expect(res.body.error.fields.entryNumber).toBe('Entry number must be a whole number from 1 to 9999.');
   });
 
   it('saves the card settings with the build, validated, and prints the next card with them', async () => {
@@ -58,6 +63,8 @@ describe('card routes', () => {
     const initial = await api.get(`/api/builds/${build.id}/card-settings`).expect(200);
     expect(initial.body).toMatchObject({ saved: false, settings: { design: 'poster', paper: 'letter', orientation: 'portrait', units: 'imperial' }, build: { code: build.code, published: true } });
     expect(initial.body.build.sections).toEqual(['engine', 'drivetrain', 'chassis', 'brakes', 'wheels', 'body', 'extra']);
+    expect(initial.body.build.figures).toEqual(['power', 'torque', 'weight', 'displacement', 'powerToWeight']);
+    expect(initial.body.settings.figures).toEqual(['power', 'torque', 'weight', 'displacement', 'powerToWeight']);
 
     const put = (body: object) => api.raw.put(`/api/builds/${build.id}/card-settings`).set('X-CSRF-Token', api.csrf).send(body);
     const bad = await put({ design: 'poster', paper: 'A5', orientation: 'sideways', sections: ['engine', 'roof'], figures: ['speed'], units: 'furlongs' });

@@ -1,13 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { CARD_DESIGNS, CARD_MIN_MARGIN_PT, CARD_MIN_QR_PT, DEFAULT_CARD_SETTINGS, ORIENTATIONS, PAPERS, PAPER_SIZES_PT, type CardSettings } from '@shared/schemas/card';
+import { CARD_DESIGNS, DEFAULT_CARD_SETTINGS, PAPERS, PAPER_SIZES_PT, type CardSettings } from '@shared/schemas/card';
 import { SECTION_KINDS } from '@shared/schemas/build-sections';
-import { renderCardPdf } from '@server/services/cards';
-import { pageBox, qrSize } from '@templates/cards/theme';
-import { longestPublicBuild, typicalPublicBuild } from '../../support/card-fixtures';
-import { mediaBoxes, pageCount, pdfText, rasterize, readQr } from '../../support/pdf';
+import { availableFigures, cardContent, renderCard, renderCardPdf } from '@server/services/cards';
+import { emptyPublicBuild, longestPublicBuild, sparsePublicBuild, typicalPublicBuild } from '../../support/card-fixtures';
+import { pdfText } from '../../support/pdf';
 
-const ALL = CARD_DESIGNS.flatMap((design) => PAPERS.flatMap((paper) => ORIENTATIONS.map((orientation) => ({ design, paper, orientation }))));
-const settingsFor = (c: (typeof ALL)[number]): CardSettings => ({ ...DEFAULT_CARD_SETTINGS, ...c, sections: [...SECTION_KINDS], figures: ['power', 'torque', 'weight', 'powerToWeight', 'displacement'] });
+const settingsFor = (c: Pick<CardSettings, 'design' | 'paper' | 'orientation'>): CardSettings => ({ ...DEFAULT_CARD_SETTINGS, ...c, sections: [...SECTION_KINDS] });
 const SHOW = { showName: 'Riverside Autumn Run', className: 'Restomod, 1960–1975', entryNumber: '117' };
 
 // The sizes by definition: Letter 8.5 × 11 in, Tabloid 11 × 17 in, A4 210 × 297 mm, A3 297 × 420 mm.
@@ -21,34 +19,7 @@ describe('windshield card templates', () => {
     }
   });
 
-  it.each(ALL)('renders $design on $paper $orientation at exactly the paper size, on one page', async (c) => {
-    const pdf = await renderCardPdf(typicalPublicBuild(), settingsFor(c), { show: SHOW });
-    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
-    const boxes = mediaBoxes(pdf);
-    expect(boxes).toHaveLength(1);
-    const [x0, y0, x1, y1] = boxes[0]!;
-    const [w, h] = EXPECTED_PT[c.paper];
-    expect(x0).toBe(0);
-    expect(y0).toBe(0);
-    expect(x1).toBeCloseTo(c.orientation === 'portrait' ? w : h, 2);
-    expect(y1).toBeCloseTo(c.orientation === 'portrait' ? h : w, 2);
-    expect(pageCount(pdf)).toEqual({ tree: 1, objects: 1 });
-  });
-
-  it('keeps a margin of at least 0.25 in and a QR code of at least 1.5 in in every layout', () => {
-    for (const c of ALL) {
-      const box = pageBox(c.paper, c.orientation);
-      expect(box.margin).toBeGreaterThanOrEqual(CARD_MIN_MARGIN_PT);
-      // The drawn block holds the quiet zone too: the code inside it (≤ 33 of 41 modules) is still 1.5 in.
-      expect((qrSize(c.design, box) * 33) / 41).toBeGreaterThanOrEqual(CARD_MIN_QR_PT);
-    }
-  });
-
-  it.each(ALL)('keeps the longest possible build on one page: $design, $paper, $orientation', async (c) => {
-    const pdf = await renderCardPdf(longestPublicBuild(), settingsFor(c), { show: { showName: 'A'.repeat(80), className: 'B'.repeat(60), entryNumber: '88888888' } });
-    expect(pageCount(pdf)).toEqual({ tree: 1, objects: 1 });
-    expect(mediaBoxes(pdf)).toHaveLength(1);
-  });
+  // Exact paper, one page and the boxes of every design, paper and orientation: layout-*.test.ts.
 
   it('prints the title, figures with their provenance in words, section lines, credits, the short URL and the show', async () => {
     const build = typicalPublicBuild({ weight: { value: 1540, unit: 'kg', provenance: 'estimated' }, dynoRuns: [] });
@@ -76,22 +47,21 @@ describe('windshield card templates', () => {
     expect(text).not.toMatch(/650\s*hp/);
   });
 
-  it('prints a QR code that scans back to the URL and nothing in the outer quarter inch', async () => {
-    for (const c of ALL.filter((x) => x.paper === 'letter' || x.paper === 'a3')) {
-      const dpi = 72;
-      const img = rasterize(await renderCardPdf(longestPublicBuild(), settingsFor(c), { show: SHOW }), dpi);
-      const qr = readQr(img);
-      expect(qr?.data, `${c.design} ${c.paper} ${c.orientation}`).toBe('http://127.0.0.1:3999/c/K7P2M9Q');
-      const side = Math.hypot(qr!.location.topRightCorner.x - qr!.location.topLeftCorner.x, qr!.location.topRightCorner.y - qr!.location.topLeftCorner.y);
-      expect(side / dpi, `${c.design} ${c.paper} ${c.orientation}`).toBeGreaterThanOrEqual(1.47); // the code itself, quiet zone aside: 1.5 in less a pixel of detection
-      const edge = Math.ceil(0.25 * dpi) - 1;
-      for (let y = 0; y < img.height; y++) {
-        for (let x = 0; x < img.width; x++) {
-          if (x >= edge && x < img.width - edge && y >= edge && y < img.height - edge) continue;
-          const i = (y * img.width + x) * 4;
-          expect(img.data[i]! + img.data[i + 1]! + img.data[i + 2]!, `${c.design} ${c.paper} ${c.orientation} ink at ${x},${y}`).toBeGreaterThan(750);
-        }
-      }
-    }
-  }, 60_000);
+  it('offers by default the figures the build has, in the order power, torque, weight, displacement, power-to-weight', () => {
+    expect(DEFAULT_CARD_SETTINGS.figures).toEqual(['power', 'torque', 'weight', 'displacement', 'powerToWeight']);
+    expect(availableFigures(typicalPublicBuild())).toEqual(['power', 'torque', 'weight', 'displacement', 'powerToWeight']);
+    // A sparse build with only a power estimate still prints that figure, not an empty row.
+    const sparse = cardContent(sparsePublicBuild(), DEFAULT_CARD_SETTINGS);
+    expect(sparse.figures.map((f) => f.label)).toEqual(['Power']);
+    expect(availableFigures(emptyPublicBuild())).toEqual([]);
+  });
+
+  it('says what it left off, and prints where the rest is', async () => {
+    const { pdf, leftOff } = await renderCard(longestPublicBuild(), { ...settingsFor({ design: 'compact', paper: 'letter', orientation: 'portrait' }) });
+    expect(leftOff.map((l) => l.block)).toEqual(expect.arrayContaining(['Story', 'Credits']));
+    expect((await pdfText(pdf)).replace(/\s+/g, ' ')).toContain('More on the phone: 127.0.0.1:3999/c/K7P2M9Q');
+    const whole = await renderCard(emptyPublicBuild(), settingsFor({ design: 'poster', paper: 'letter', orientation: 'portrait' }));
+    expect(whole.leftOff).toEqual([]);
+    expect(await pdfText(whole.pdf)).not.toContain('More on the phone');
+  });
 });

@@ -11,6 +11,7 @@ import {
   PAPER_SIZES_PT,
   type CardSettings,
   type CardSettingsResponse,
+  type CardLeftOff,
   type CardShow,
 } from '@shared/schemas/card';
 import { SECTION_KINDS, SECTION_LABELS, type SectionKind } from '@shared/schemas/build-sections';
@@ -37,6 +38,7 @@ function Designer({ buildId, data }: { buildId: number; data: CardSettingsRespon
   const [settings, setSettings] = useState<CardSettings>(data.settings);
   const [show, setShow] = useState<CardShow>({});
   const [preview, setPreview] = useState(() => cardPdfUrl(buildId, data.settings));
+  const [leftOff, setLeftOff] = useState<CardLeftOff[] | null>(null);
   const save = useSaveCardSettings(buildId);
   const changed = useRef(false);
 
@@ -79,8 +81,9 @@ function Designer({ buildId, data }: { buildId: number; data: CardSettingsRespon
         </div>
       ) : null}
 
+      {/* On a phone the preview comes first and the choices follow; side by side from lg up. */}
       <div className="grid gap-6 lg:grid-cols-[minmax(0,22rem)_1fr]">
-        <div className="space-y-4">
+        <div className="order-2 space-y-4 lg:order-1">
           <Panel title="Design">
             <Choices legend="Design" hideLegend>
               {CARD_DESIGNS.map((d) => (
@@ -108,7 +111,12 @@ function Designer({ buildId, data }: { buildId: number; data: CardSettingsRespon
             </Choices>
             <Choices legend="Figures">
               {CARD_FIGURES.map((f) => (
-                <Check key={f} label={CARD_FIGURE_LABELS[f]} checked={settings.figures.includes(f)} onChange={() => update({ figures: toggle(settings.figures, f, CARD_FIGURES) })} />
+                <Check
+                  key={f}
+                  label={data.build.figures.includes(f) ? CARD_FIGURE_LABELS[f] : `${CARD_FIGURE_LABELS[f]} (not in the build yet)`}
+                  checked={settings.figures.includes(f)}
+                  onChange={() => update({ figures: toggle(settings.figures, f, CARD_FIGURES) })}
+                />
               ))}
             </Choices>
             <Choices legend="Units" row>
@@ -121,12 +129,12 @@ function Designer({ buildId, data }: { buildId: number; data: CardSettingsRespon
             <div className="space-y-3">
               <ShowField label="Show name" value={show.showName ?? ''} max={80} onChange={(v) => setShow((s) => ({ ...s, showName: v }))} />
               <ShowField label="Class" value={show.className ?? ''} max={60} onChange={(v) => setShow((s) => ({ ...s, className: v }))} />
-              <ShowField label="Entry number" value={show.entryNumber ?? ''} max={8} onChange={(v) => setShow((s) => ({ ...s, entryNumber: v }))} />
+              <ShowField label="Entry number (1 to 9999)" value={show.entryNumber ?? ''} max={4} inputMode="numeric" onChange={(v) => setShow((s) => ({ ...s, entryNumber: v.replace(/\D/g, '') }))} />
             </div>
           </Panel>
         </div>
 
-        <div className="space-y-3">
+        <div className="order-1 space-y-3 lg:order-2">
           <div className="flex flex-wrap items-center gap-3">
             <a
               href={cardPdfUrl(buildId, settings, show, { download: true })}
@@ -145,12 +153,35 @@ function Designer({ buildId, data }: { buildId: number; data: CardSettingsRespon
               {save.isPending ? 'Saving your choices…' : save.isError ? 'Your choices could not be saved; try again.' : save.isSuccess ? 'Choices saved with the build.' : data.saved ? 'Your saved choices.' : ''}
             </span>
           </div>
-          <CardPreview url={preview} ratio={ratio} />
+          <div className="mx-auto max-w-md lg:max-w-none">
+            <CardPreview url={preview} ratio={ratio} onLeftOff={setLeftOff} />
+          </div>
+          <LeftOffNotice leftOff={leftOff} />
           <p className="text-sm text-graphite">
             Preview of the PDF as it prints: {PAPER_SIZES_PT[settings.paper].label}, {settings.orientation}. Print at 100% (actual size).
           </p>
         </div>
       </div>
+    </div>
+  );
+}
+
+/** What the card could not print whole, as the last render reported it; the phone page has all of it. */
+function LeftOffNotice({ leftOff }: { leftOff: CardLeftOff[] | null }) {
+  if (!leftOff) return null;
+  if (!leftOff.length) return <p className="text-sm text-graphite">Everything you ticked fits on this card.</p>;
+  return (
+    <div role="status" aria-label="Left off the card">
+      <Notice tone="caution">
+        <p className="font-medium">Not everything fits on this paper; the card prints "More on the phone" with its short address.</p>
+        <ul className="mt-1 list-disc pl-5">
+          {leftOff.map((l, i) => (
+            <li key={i}>
+              {l.block}: {l.detail}
+            </li>
+          ))}
+        </ul>
+      </Notice>
     </div>
   );
 }
@@ -185,11 +216,11 @@ function Check({ label, checked, onChange }: { label: string; checked: boolean; 
   );
 }
 
-function ShowField({ label, value, max, onChange }: { label: string; value: string; max: number; onChange: (v: string) => void }) {
+function ShowField({ label, value, max, onChange, inputMode }: { label: string; value: string; max: number; onChange: (v: string) => void; inputMode?: 'numeric' }) {
   return (
     <label className="block">
       <span className="mb-1 block text-sm font-medium">{label}</span>
-      <input value={value} maxLength={max} onChange={(e) => onChange(e.target.value)} className="min-h-11 w-full border border-rule bg-white px-3" />
+      <input value={value} maxLength={max} inputMode={inputMode} onChange={(e) => onChange(e.target.value)} className="min-h-11 w-full border border-rule bg-white px-3" />
     </label>
   );
 }

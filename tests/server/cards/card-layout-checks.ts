@@ -1,0 +1,155 @@
+import { describe, expect, it } from 'vitest';
+import { CARD_FIGURE_LABELS, DEFAULT_CARD_SETTINGS, ORIENTATIONS, PAPERS, paperClass, CARD_LEGIBILITY, type CardDesign, type CardLeftOff, type CardShow, type Orientation, type Paper } from '@shared/schemas/card';
+import { SECTION_KINDS } from '@shared/schemas/build-sections';
+import { ENGINEERING_CAUTION } from '@shared/calc';
+import type { PublicBuild } from '@shared/schemas/build';
+import { cardContent, qrMatrix, renderCard, type CoverImage } from '@server/services/cards';
+import { pageBox } from '@templates/cards/theme';
+import { capShare } from '@templates/cards/measure';
+import { QR_QUIET } from '@templates/cards/parts';
+import { ENTRY_SHOWS, LONGEST_SHOW, emptyPublicBuild, longTitlePublicBuild, longestPublicBuild, sparsePublicBuild, typicalPublicBuild } from '../../support/card-fixtures';
+import { createDemoCardBuilds, type DemoCardBuild } from '../../support/demo-card-builds';
+import { inside, overlaps, pageCount, rasterize, readCardLayout, readCardLayouts, readQr, type Box, type CardLayout } from '../../support/pdf';
+import { Fragment, cloneElement, createElement } from 'react';
+import { renderToBuffer } from '@react-pdf/renderer';
+import { CardDocument, layoutCard } from '@templates/cards/card-document';
+import { registerCardFonts } from '@templates/cards/fonts';
+
+// The verification of every card layout: each design on every paper and orientation, for a corpus of
+// builds, read back from the PDF with pdf.js. One file per design, so the three run side by side.
+
+type Case = { name: string; build: PublicBuild; show: CardShow | null; cover: CoverImage | null; paper: Paper; orientation: Orientation; decode?: boolean };
+const ALL = PAPERS.flatMap((paper) => ORIENTATIONS.map((orientation) => ({ paper, orientation })));
+const EXACT_PT: Record<Paper, [number, number]> = { letter: [612, 792], tabloid: [792, 1224], a4: [595.2756, 841.8898], a3: [841.8898, 1190.5512] };
+const norm = (s: string) => s.replace(/\s+/g, '').toUpperCase();
+
+function corpus(demo: DemoCardBuild[]): Case[] {
+  const every = (name: string, build: PublicBuild, show: CardShow | null, cover: CoverImage | null = null): Case[] => ALL.map((c) => ({ name, build, show, cover, ...c }));
+  const [complete, ...others] = demo;
+  return [
+    ...every('full build, entry 1047', typicalPublicBuild(), ENTRY_SHOWS[2]!, null).map((c) => ({ ...c, decode: c.paper === 'letter' || c.paper === 'a3' })),
+    ...every('demo complete build with its photo, entry 47', complete!.build, ENTRY_SHOWS[1]!, complete!.cover),
+    ...every('empty build', emptyPublicBuild(), null),
+    ...every('sparse build, entry 7', sparsePublicBuild(), ENTRY_SHOWS[0]!),
+    ...every('120-character title, entry 9999', longTitlePublicBuild(), ENTRY_SHOWS[3]!),
+    ...every('notes and credits at their longest, longest show name', longestPublicBuild(), LONGEST_SHOW),
+    // The other demo builds, each on one paper, so every paper and orientation sees some of them.
+    ...others.flatMap((d, i) => [ALL[i % 8]!].map((c) => ({ name: `demo ${d.name}`, build: d.build, show: i % 2 ? ENTRY_SHOWS[i % 4]! : null, cover: d.cover, ...c }))),
+  ];
+}
+
+type Rendered = { pdf: Buffer | null; layout: CardLayout; leftOff: CardLeftOff[] };
+
+/**
+ * Lays out every case and prints them as pages of one document (as the bulk print of a show does),
+ * so pdf.js reads the fonts once; the cases that also scan their QR code are rendered alone through
+ * the card service too, exactly as an owner downloads them.
+ */
+async function renderAll(design: CardDesign, cases: Case[]): Promise<Rendered[]> {
+  registerCardFonts();
+  const laid = cases.map((c) => layoutCard(cardContent(c.build, settingsOf(design, c), { show: c.show, cover: c.cover }), design, c.paper, c.orientation));
+  const doc = createElement(CardDocument, { page: createElement(Fragment, null, ...laid.map((l, i) => cloneElement(l.page, { key: i }))), title: `${design} corpus` });
+  const layouts = await readCardLayouts(await renderToBuffer(doc as Parameters<typeof renderToBuffer>[0]));
+  return Promise.all(
+    cases.map(async (c, i) => {
+      if (!c.decode) return { pdf: null, layout: { ...layouts[i]!, pages: 1 }, leftOff: laid[i]!.leftOff };
+      const { pdf, leftOff } = await renderCard(c.build, settingsOf(design, c), { show: c.show, cover: c.cover });
+      return { pdf, layout: await readCardLayout(pdf), leftOff };
+    }),
+  );
+}
+
+const settingsOf = (design: CardDesign, c: Case) => ({ ...DEFAULT_CARD_SETTINGS, design, paper: c.paper, orientation: c.orientation, sections: [...SECTION_KINDS] });
+
+function check(design: CardDesign, c: Case, { pdf, layout, leftOff }: Rendered) {
+  const label = `${design} ${c.paper} ${c.orientation}, ${c.name}`;
+  const settings = settingsOf(design, c);
+  const content = cardContent(c.build, settings, { show: c.show });
+  const box = pageBox(c.paper, c.orientation);
+  const leg = CARD_LEGIBILITY[paperClass(c.paper)];
+
+  // Every problem found is collected, then asserted once: a failure lists them all.
+  const problems: string[] = [];
+  const fail = (why: string) => problems.push(`${label}: ${why}`);
+
+  // Exact paper.
+  const [w, h] = c.orientation === 'portrait' ? EXACT_PT[c.paper] : [EXACT_PT[c.paper][1], EXACT_PT[c.paper][0]];
+  const mb = layout.mediaBox;
+  if (layout.pages !== 1) fail(`${layout.pages} pages`);
+  if (mb[0] !== 0 || mb[1] !== 0 || Math.abs(mb[2]! - w) > 0.001 || Math.abs(mb[3]! - h) > 0.001) fail(`MediaBox ${mb.join(' ')}, not 0 0 ${w} ${h}`);
+
+  // Everything inside the safe margins.
+  const safe: Box = { x0: box.margin, y0: box.margin, x1: w - box.margin, y1: h - box.margin };
+  for (const t of layout.texts) if (!inside(t, safe, 0.5)) fail(`"${t.str}" crosses the margin`);
+  for (const img of layout.images) if (!inside(img, safe, 0.5)) fail('the photo crosses the margin');
+
+  // The QR code: present, big enough, its quiet zone clear of text and inside the margins.
+  const qr = layout.qr;
+  if (!qr) return [`${label}: no QR code`];
+  const side = qr.x1 - qr.x0;
+  if (side < leg.qrPt - 0.5) fail(`QR code ${side.toFixed(1)} pt, under ${leg.qrPt.toFixed(1)}`);
+  const quiet = (side / qrMatrix(c.build.url).size) * QR_QUIET;
+  const qrZone = { x0: qr.x0 - quiet, y0: qr.y0 - quiet, x1: qr.x1 + quiet, y1: qr.y1 + quiet };
+  if (!inside(qrZone, safe, 0.5)) fail('the QR quiet zone crosses the margin');
+
+  // No two text boxes overlap, and no text sits on the photo or the QR code.
+  const texts = layout.texts;
+  for (let i = 0; i < texts.length; i++) {
+    for (let j = i + 1; j < texts.length; j++) if (overlaps(texts[i]!, texts[j]!, 0.25)) fail(`"${texts[i]!.str}" overlaps "${texts[j]!.str}"`);
+    if (overlaps(texts[i]!, qrZone, 0.25)) fail(`"${texts[i]!.str}" is on the QR code`);
+    for (const img of layout.images) if (overlaps(texts[i]!, img, 0.25)) fail(`"${texts[i]!.str}" is on the photo`);
+  }
+  for (const img of layout.images) if (overlaps(img, qrZone)) fail('the photo is on the QR code');
+
+  // Sizes: the title and the entry number, the key figures, and every other line.
+  const cap = (t: (typeof texts)[number]) => t.size * capShare(t.face!);
+  const heading = norm(content.heading);
+  const titleItems = texts.filter((t) => t.face === 'display-700' && heading.includes(norm(t.str).replace(/…$/, '')) && t.str.trim() !== c.show?.entryNumber);
+  if (!titleItems.length) fail('no title');
+  for (const t of titleItems) if (cap(t) < leg.titleCapPt - 0.01) fail(`title "${t.str}" cap height ${cap(t).toFixed(1)} pt`);
+  if (c.show?.entryNumber) {
+    const number = texts.find((t) => t.str.trim() === c.show!.entryNumber && t.face === 'display-700');
+    if (!number) fail('no entry number');
+    else if (cap(number) < leg.entryCapPt - 0.01) fail(`entry number cap height ${cap(number).toFixed(1)} pt`);
+  }
+  const values = new Set(content.figures.map((f) => f.value));
+  const figureItems = texts.filter((t) => t.face === 'display-600' && values.has(t.str.trim()));
+  if (values.size && !figureItems.length) fail('no key figure');
+  for (const t of figureItems) if (cap(t) < leg.figureCapPt - 0.01) fail(`figure "${t.str}" cap height ${cap(t).toFixed(1)} pt`);
+  // Small print allowed only for these: the footer, figure labels and notes, the QR caption, the entry label.
+  const small = [ENGINEERING_CAUTION, 'PLACARD', 'ENTRY', 'Scan for the whole build', ...Object.values(CARD_FIGURE_LABELS), ...content.figures.map((f) => f.note), ...content.figures.map((f) => `${f.unit} ${f.mark}`)].map(norm).filter(Boolean);
+  for (const t of texts) {
+    if (t.size >= leg.linePt - 0.01 || small.some((s) => s.includes(norm(t.str).replace(/…$/, '')))) continue;
+    fail(`"${t.str}" at ${t.size.toFixed(1)} pt`);
+  }
+
+  // What did not fit is named, and the card says where the rest is.
+  const all = norm(texts.map((t) => t.str).join(''));
+  if (!all.includes(norm(content.shortUrl))) fail('no short URL');
+  if (leftOff.length && !all.includes(norm('More on the phone:'))) fail('no "more on the phone" line');
+  expect(problems).toEqual([]);
+
+  if (pdf) {
+    // Rendered alone through the service: one page, and a coarse scan (36 px per inch) reads the code back to the public address.
+    expect(pageCount(pdf), label).toEqual({ tree: 1, objects: 1 });
+    expect(readQr(rasterize(pdf, 36))?.data, `${label}: QR decode`).toBe(c.build.url);
+  }
+  return leftOff;
+}
+
+/** Renders `design` for the whole corpus and checks every card. */
+export function describeCardLayouts(design: CardDesign) {
+  describe(`${design} cards, read back from the PDF`, () => {
+    it('never overlap, keep the margins, the minimum sizes, the QR code and the exact paper, for every build, paper and orientation', async () => {
+      const cases = corpus(await createDemoCardBuilds());
+      expect(cases.length).toBe(6 * 8 + 11);
+      const rendered = await renderAll(design, cases);
+      const leftOffs = cases.map((c, i) => ({ c, leftOff: check(design, c, rendered[i]!) }));
+      // The longest build cannot fit whole anywhere: it is cut, and says so; the empty one never is.
+      expect(leftOffs.filter((l) => l.c.name.startsWith('notes')).every((l) => l.leftOff.length > 0)).toBe(true);
+      expect(leftOffs.filter((l) => l.c.name === 'empty build').every((l) => l.leftOff.length === 0)).toBe(true);
+    }, 240_000);
+  });
+}
+
+

@@ -1,0 +1,3 @@
+import { describeCardLayouts } from './card-layout-checks';
+
+describeCardLayouts('data-sheet');
