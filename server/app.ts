@@ -26,6 +26,9 @@ import { buildPreviewRouter } from './routes/build-preview';
 import { publicApiRouter } from './routes/public';
 import { mediaRouter } from './routes/media';
 import { pagesRouter } from './pages/router';
+import { eventsRouter } from './routes/events';
+import { eventPeopleRouter } from './routes/event-people';
+import { entriesRouter } from './routes/entries';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -44,6 +47,7 @@ function apiRouter() {
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
+  api.use(eventsRouter, eventPeopleRouter, entriesRouter);
   api.use(apiNotFound);
   return api;
 }
