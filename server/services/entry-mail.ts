@@ -15,11 +15,10 @@ import type { Event } from '../models/event';
 
 /** The notices an entrant gets about one entry, each queued in the transaction that made the change. */
 async function parts(entry: Entry, transaction: Transaction) {
-  const [owner, build, cls] = await Promise.all([
-    User.findByPk(entry.ownerId, { attributes: ['email', 'name'], transaction }),
-    Build.findByPk(entry.buildId, { attributes: ['title'], transaction }),
-    EventClass.findByPk(entry.classId, { attributes: ['name'], transaction }),
-  ]);
+  // One after another: queries in one transaction share one connection.
+  const owner = await User.findByPk(entry.ownerId, { attributes: ['email', 'name'], transaction });
+  const build = await Build.findByPk(entry.buildId, { attributes: ['title'], transaction });
+  const cls = await EventClass.findByPk(entry.classId, { attributes: ['name'], transaction });
   return { to: owner?.email ?? '', name: owner?.name ?? '', buildTitle: build?.title ?? '', className: cls?.name ?? '' };
 }
 const myEntriesLink = () => `${config.publicBaseUrl}/entries`;
@@ -33,7 +32,7 @@ export async function mailEntryReceived(entry: Entry, event: Event, transaction:
 
 export async function mailOffer(entry: Entry, event: Event, transaction: Transaction) {
   const p = await parts(entry, transaction);
-  const deadline = formatInZone(entry.offerExpiresAt!.toISOString(), event.timeZone, { dateStyle: 'full', timeStyle: 'short', timeZoneName: 'short' } as Intl.DateTimeFormatOptions);
+  const deadline = formatInZone(entry.offerExpiresAt!.toISOString(), event.timeZone, { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZoneName: 'short' });
   const mail = waitlistOfferEmail({ ...p, showName: event.name, deadline, link: myEntriesLink() });
   await queueMail({ to: p.to, ...mail }, { transaction, dedupeKey: `offer:${entry.id}:${entry.offerExpiresAt!.getTime()}` });
 }

@@ -45,7 +45,7 @@ export async function inviteToEvent(eventId: number, person: Person, email: stri
     await writeAudit({ eventId, actorId: person.id, action: 'person_invited', after: { invitationId: invitation.id, role } }, transaction);
     const link = `${config.publicBaseUrl}/invitations/${token}`;
     await queueMail({ to: email, ...showInvitationEmail({ showName: event.name, roleLabel: EVENT_ROLE_LABELS[role], inviterName: person.name, link, days: INVITATION_TTL_DAYS }) }, { transaction, dedupeKey: `invitation:${invitation.id}` });
-    return invitation;
+    return (await EventInvitation.findByPk(invitation.id, { include: [{ model: User, as: 'inviter', attributes: ['name'] }], transaction }))!;
   });
 }
 
