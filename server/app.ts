@@ -26,6 +26,7 @@ import { buildPreviewRouter } from './routes/build-preview';
 import { publicApiRouter } from './routes/public';
 import { mediaRouter } from './routes/media';
 import { pagesRouter } from './pages/router';
+import { eventPagesRouter } from './pages/event-router';
 import { eventsRouter } from './routes/events';
 import { eventPeopleRouter } from './routes/event-people';
 import { entriesRouter } from './routes/entries';
@@ -85,6 +86,7 @@ export function createApp(): Express {
   app.use('/api', apiRouter());
   app.use(mediaRouter); // uploaded photos under /media
   app.use(pagesRouter); // public pages such as /c/<code>, complete HTML without the app bundle
+  app.use(eventPagesRouter); // public show pages /e/<slug> and their calendar files
   app.use(clientRouter());
   app.use(errorHandler);
   return app;

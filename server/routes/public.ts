@@ -4,6 +4,8 @@ import { validate } from '../middlewares/validate';
 import { listRecentPublicBuilds, loadPublicBuild } from '../services/public-builds';
 import { presentPublicBuildResponse, presentPublicBuildTile } from '../presenters/public-build';
 import { NotFoundError } from '../errors';
+import { loadPublicEvent } from '../services/public-events';
+import { presentPublicEvent } from '../presenters/public-event';
 
 /** Public JSON, mounted before the session: anyone may read a published build. */
 export const publicApiRouter = Router();
@@ -19,4 +21,11 @@ publicApiRouter.get('/public/builds', validate('query', PublicBuildListQuerySche
   const { limit } = res.locals.query as { limit: number };
   const body: PublicBuildTileListResponse = { builds: (await listRecentPublicBuilds(limit)).map(presentPublicBuildTile) };
   res.set('Cache-Control', 'public, max-age=60').json(body);
+});
+
+/** The public show page's JSON twin: the same allow-list as /e/<slug>. */
+publicApiRouter.get('/public/events/:slug', async (req, res) => {
+  const found = await loadPublicEvent(String(req.params.slug));
+  if (!found) throw new NotFoundError('No public show at that address.');
+  res.set('Cache-Control', 'public, max-age=30').json({ event: presentPublicEvent(found.event, found.entries) });
 });

@@ -209,7 +209,7 @@ export async function listEntriesOf(person: Person) {
 export function listPublicEntries(eventId: number) {
   return Entry.findAll({
     where: { eventId, status: { [Op.in]: ['confirmed', 'checked_in'] }, number: { [Op.ne]: null } },
-    include: [{ model: Build, as: 'build', attributes: ['title', 'code', 'published'], where: { published: true } }],
+    include: [{ model: Build, as: 'build', attributes: ['id', 'title', 'code', 'published'], where: { published: true } }],
     attributes: ['id', 'classId', 'number', 'status'],
     order: [['number', 'ASC']],
   });
