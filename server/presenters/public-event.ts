@@ -9,6 +9,7 @@ import type { Event } from '../models/event';
 export function presentPublicEvent(event: Event, entries: Entry[], now = new Date()): PublicEvent {
   const url = `${config.publicBaseUrl}/e/${event.slug}`;
   return {
+    id: event.id,
     name: event.name,
     slug: event.slug,
     url,

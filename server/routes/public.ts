@@ -5,6 +5,8 @@ import { listRecentPublicBuilds, loadPublicBuild } from '../services/public-buil
 import { presentPublicBuildResponse, presentPublicBuildTile } from '../presenters/public-build';
 import { NotFoundError } from '../errors';
 import { loadPublicEvent } from '../services/public-events';
+import { listOpenEvents } from '../services/events';
+import { presentEventSummary } from '../presenters/event';
 import { presentPublicEvent } from '../presenters/public-event';
 
 /** Public JSON, mounted before the session: anyone may read a published build. */
@@ -28,4 +30,10 @@ publicApiRouter.get('/public/events/:slug', async (req, res) => {
   const found = await loadPublicEvent(String(req.params.slug));
   if (!found) throw new NotFoundError('No public show at that address.');
   res.set('Cache-Control', 'public, max-age=30').json({ event: presentPublicEvent(found.event, found.entries) });
+});
+
+/** Shows taking entries now, soonest first: the home page and the entrant's "find a show". */
+publicApiRouter.get('/public/events', async (_req, res) => {
+  const events = await listOpenEvents();
+  res.set('Cache-Control', 'public, max-age=60').json({ events: events.map((e) => presentEventSummary(e)) });
 });

@@ -35,7 +35,14 @@ export async function updateClass(eventId: number, classId: number, person: Pers
     const cls = await EventClass.findOne({ where: { id: classId, eventId }, transaction });
     if (!cls) throw new NotFoundError('No such class in this show.');
     const before = { name: cls.name, description: cls.description, position: cls.position, capacity: cls.capacity };
-    await cls.update(input, { transaction });
+    const { position, ...rest } = input;
+    await cls.update(rest, { transaction });
+    if (position !== undefined) {
+      // Moving one class renumbers them all 0…n−1, so the order has no ties.
+      const ordered = (await EventClass.findAll({ where: { eventId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction })).filter((c) => c.id !== cls.id);
+      ordered.splice(Math.min(position, ordered.length), 0, cls);
+      for (const [i, c] of ordered.entries()) if (c.position !== i) await c.update({ position: i }, { transaction });
+    }
     await writeAudit({ eventId, actorId: person.id, action: 'class_changed', before, after: input }, transaction);
     if ('capacity' in input) await offerFreedPlaces(eventId, transaction);
     return cls;

@@ -3,6 +3,7 @@ import { EVENT_STATUSES } from '../constants';
 
 /** The public face of a show: nothing about any person (no e-mail, phone, plate, VIN, home address). */
 export const PublicEventSchema = z.object({
+  id: z.number(),
   name: z.string(),
   slug: z.string(),
   url: z.string(),
