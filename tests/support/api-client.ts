@@ -30,7 +30,6 @@ export async function apiClient() {
     refresh,
     get: (path: string) => raw.get(path),
     post: async (path: string, body?: object) => keepToken(await raw.post(path).set('X-CSRF-Token', csrf).send(body ?? {})),
-    put: async (path: string, body?: object) => keepToken(await raw.put(path).set('X-CSRF-Token', csrf).send(body ?? {})),
     patch: async (path: string, body?: object) => keepToken(await raw.patch(path).set('X-CSRF-Token', csrf).send(body ?? {})),
     put: async (path: string, body?: object) => keepToken(await raw.put(path).set('X-CSRF-Token', csrf).send(body ?? {})),
     delete: async (path: string) => keepToken(await raw.delete(path).set('X-CSRF-Token', csrf)),
