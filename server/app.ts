@@ -27,6 +27,10 @@ import { buildPreviewRouter } from './routes/build-preview';
 import { publicApiRouter } from './routes/public';
 import { mediaRouter } from './routes/media';
 import { pagesRouter } from './pages/router';
+import { eventPagesRouter } from './pages/event-router';
+import { eventsRouter } from './routes/events';
+import { eventPeopleRouter } from './routes/event-people';
+import { entriesRouter } from './routes/entries';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -46,6 +50,7 @@ function apiRouter() {
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
+  api.use(eventsRouter, eventPeopleRouter, entriesRouter);
   api.use(apiNotFound);
   return api;
 }
@@ -83,6 +88,7 @@ export function createApp(): Express {
   app.use('/api', apiRouter());
   app.use(mediaRouter); // uploaded photos under /media
   app.use(pagesRouter); // public pages such as /c/<code>, complete HTML without the app bundle
+  app.use(eventPagesRouter); // public show pages /e/<slug> and their calendar files
   app.use(clientRouter());
   app.use(errorHandler);
   return app;

@@ -22,7 +22,7 @@ const lines = [
     ? [
         '',
         '  Demo accounts (e-mail / password):',
-        ...DEMO_ACCOUNTS.map((a) => `    ${a.role.padEnd(11)} ${a.email.padEnd(24)} ${a.password}`),
+        ...DEMO_ACCOUNTS.map((a) => `    ${a.role.padEnd(12)} ${a.email.padEnd(26)} ${a.password}`),
         '',
         `  Mail is caught, not sent: the site admin reads it at ${url}/admin/mail`,
       ]

@@ -9,8 +9,17 @@ import { DynoRun } from './dyno-run';
 import { WeighIn } from './weigh-in';
 import { FigureChange } from './figure-change';
 import { RetiredBuildCode } from './retired-build-code';
+import { Event } from './event';
+import { EventClass } from './event-class';
+import { Criterion } from './criterion';
+import { EventMembership } from './event-membership';
+import { EventInvitation } from './event-invitation';
+import { Entry } from './entry';
+import { AuditLine } from './audit-line';
 
-for (const model of [User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode]) model.initModel(sequelize);
+for (const model of [User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine]) {
+  model.initModel(sequelize);
+}
 
 User.hasMany(PasswordResetToken, { foreignKey: 'userId', onDelete: 'CASCADE' });
 PasswordResetToken.belongsTo(User, { foreignKey: 'userId' });
@@ -28,4 +37,19 @@ WeighIn.belongsTo(Build, { foreignKey: 'buildId' });
 Build.hasMany(FigureChange, { foreignKey: 'buildId', as: 'figureChanges', onDelete: 'CASCADE' });
 FigureChange.belongsTo(Build, { foreignKey: 'buildId' });
 
+Event.hasMany(EventClass, { foreignKey: 'eventId', as: 'classes', onDelete: 'CASCADE' });
+EventClass.belongsTo(Event, { foreignKey: 'eventId' });
+Event.hasMany(Criterion, { foreignKey: 'eventId', as: 'criteria', onDelete: 'CASCADE' });
+Event.hasMany(EventMembership, { foreignKey: 'eventId', as: 'memberships', onDelete: 'CASCADE' });
+EventMembership.belongsTo(Event, { foreignKey: 'eventId', as: 'event' });
+EventMembership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+EventInvitation.belongsTo(Event, { foreignKey: 'eventId', as: 'event' });
+EventInvitation.belongsTo(User, { foreignKey: 'invitedBy', as: 'inviter' });
+Entry.belongsTo(Event, { foreignKey: 'eventId', as: 'event' });
+Entry.belongsTo(Build, { foreignKey: 'buildId', as: 'build' });
+Entry.belongsTo(EventClass, { foreignKey: 'classId', as: 'eventClass' });
+Entry.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });
+AuditLine.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+
+export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine };
 export { sequelize, User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode };

@@ -10,7 +10,7 @@ import { DynoChart } from './dyno-chart';
 import { PAGE_CSS } from './page-styles';
 
 /** What a show adds to the page once events exist: the entry, and the people's choice vote while it is open. */
-export type ShowEntrySlot = { showName: string; className?: string; entryNumber?: string; voteUrl?: string } | null;
+export type ShowEntrySlot = { showName: string; showUrl?: string; className?: string; entryNumber?: string; voteUrl?: string } | null;
 
 const absolute = (url: string) => (url.startsWith('http') ? url : `${config.publicBaseUrl}${url}`);
 const cover = (b: PublicBuild) => b.photos.find((p) => p.isCover) ?? b.photos[0] ?? null;
@@ -173,7 +173,7 @@ function ShowEntry({ slot }: { slot: ShowEntrySlot }) {
   if (!slot) return null;
   return (
     <section id="show-entry" className="show" aria-label="Show entry">
-      <p className="d">{slot.showName}</p>
+      <p className="d">{slot.showUrl ? <a href={slot.showUrl}>{slot.showName}</a> : slot.showName}</p>
       {slot.className ? <p>Class: {slot.className}</p> : null}
       {slot.entryNumber ? <p className="d">Entry {slot.entryNumber}</p> : null}
       {slot.voteUrl ? (

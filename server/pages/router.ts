@@ -4,6 +4,7 @@ import { readFileSync } from 'node:fs';
 import type { UnitSystem } from '@shared/calc';
 import { loadPublicBuild, publicVersion } from '../services/public-builds';
 import { presentPublicBuild } from '../presenters/public-build';
+import { showSlotOfBuild } from '../services/public-events';
 import { NOT_FOUND_HTML, renderPublicBuildPage } from './public-build-page';
 import { compressPage, matchesEtag, pickEncoding, publicPageCache, type CachedPage } from './page-cache';
 import { OSWALD_URL } from './page-styles';
@@ -74,7 +75,8 @@ pagesRouter.get('/c/:code', async (req, res) => {
   const page = await publicPageCache.once(`${key}|${version}`, async () => {
     const build = await loadPublicBuild(code);
     if (!build) return null;
-    const fresh = { ...compressPage(renderPublicBuildPage(presentPublicBuild(build), units), version), checkedAt: Date.now() };
+    const show = await showSlotOfBuild(code);
+    const fresh = { ...compressPage(renderPublicBuildPage(presentPublicBuild(build), units, show), version), checkedAt: Date.now() };
     publicPageCache.set(key, fresh);
     return fresh;
   });

@@ -1,9 +1,63 @@
-import type { Actor } from './actor';
+import type { EventStatus } from '@shared/constants';
+import { hasEventRole, type Actor } from './actor';
 import { authorize } from './authorize';
 
-/** Events arrive with their issue; creating one is already decided by the site-wide may-organise flag. */
-export function can(actor: Actor | null | undefined, action: 'create'): boolean {
-  return action === 'create' && Boolean(actor && (actor.mayOrganise || actor.isSiteAdmin));
+export type EventAction = 'create' | 'view' | 'manage' | 'viewEntries' | 'checkIn' | 'judge' | 'register';
+type EventRecord = { id: number; status: EventStatus };
+
+/**
+ * The hook for "an unverified account cannot register for a show or accept an invitation".
+ * True for everyone until e-mail verification lands; then it reads the account's verified flag.
+ */
+export function mayTakePartInShows(actor: Actor | null | undefined): boolean {
+  return Boolean(actor);
 }
 
-export const authorizeEvent = (actor: Actor | null | undefined, action: 'create') => authorize(can(actor, action), actor);
+const isOrganiser = (actor: Actor | null | undefined, event: EventRecord) => hasEventRole(actor, event.id, 'organiser');
+
+/**
+ * Shows: the may-organise flag creates one; everything else follows the person's role in that
+ * show only (an organiser of one show has no say in another). Gate staff check in, judges judge.
+ */
+export function can(actor: Actor | null | undefined, action: EventAction, event?: EventRecord): boolean {
+  if (!actor) return false;
+  if (action === 'create') return actor.mayOrganise || actor.isSiteAdmin;
+  if (!event) return false;
+  switch (action) {
+    case 'view':
+      return isOrganiser(actor, event) || hasEventRole(actor, event.id, 'judge') || hasEventRole(actor, event.id, 'gate');
+    case 'manage':
+    case 'viewEntries':
+      return isOrganiser(actor, event);
+    case 'checkIn':
+      return (isOrganiser(actor, event) || hasEventRole(actor, event.id, 'gate')) && event.status === 'show_day';
+    case 'judge':
+      return hasEventRole(actor, event.id, 'judge') && event.status === 'judging';
+    case 'register':
+      // Whether the show takes entries now is the registration service's rule (a 409 naming the reason).
+      return mayTakePartInShows(actor);
+  }
+}
+
+export const authorizeEvent = (actor: Actor | null | undefined, action: EventAction, event?: EventRecord) =>
+  authorize(can(actor, action, event), actor, action === 'create' ? 'Your account may not create shows; ask a site admin.' : 'You have no role in this show that allows that.');
+
+/** What the client may offer for this show, so screens never re-implement the rules. */
+export const eventAbilities = (actor: Actor | null | undefined, event: EventRecord) => ({
+  manage: can(actor, 'manage', event),
+  viewEntries: can(actor, 'viewEntries', event),
+  checkIn: can(actor, 'checkIn', event),
+  judge: can(actor, 'judge', event),
+  register: can(actor, 'register', event) && event.status === 'registration_open',
+});
+
+/** An entry: its owner sees and withdraws it; the show's organisers see and withdraw every entry of their show. */
+export type EntryAction = 'view' | 'withdraw' | 'acceptOffer';
+export function canEntry(actor: Actor | null | undefined, action: EntryAction, entry: { ownerId: number; eventId: number }): boolean {
+  if (!actor) return false;
+  const owner = entry.ownerId === actor.id;
+  if (action === 'acceptOffer') return owner && mayTakePartInShows(actor);
+  return owner || hasEventRole(actor, entry.eventId, 'organiser');
+}
+export const authorizeEntry = (actor: Actor | null | undefined, action: EntryAction, entry: { ownerId: number; eventId: number }) =>
+  authorize(canEntry(actor, action, entry), actor, 'This entry is someone else’s.');

@@ -4,6 +4,10 @@ import { parseQuery } from '../middlewares/validate';
 import { listRecentPublicBuilds, loadPublicBuild } from '../services/public-builds';
 import { presentPublicBuild, presentPublicBuildResponse, presentPublicBuildTile } from '../presenters/public-build';
 import { NotFoundError } from '../errors';
+import { loadPublicEvent } from '../services/public-events';
+import { listOpenEvents } from '../services/events';
+import { presentEventSummary } from '../presenters/event';
+import { presentPublicEvent } from '../presenters/public-event';
 
 /** Public JSON, mounted before the session: anyone may read a published build. */
 export const publicApiRouter = Router();
@@ -19,4 +23,17 @@ publicApiRouter.get('/public/builds', async (req, res) => {
   const { limit } = parseQuery(req, PublicBuildListQuerySchema);
   const body: PublicBuildTileListResponse = { builds: (await listRecentPublicBuilds(limit)).map(presentPublicBuildTile) };
   res.set('Cache-Control', 'public, max-age=60').json(body);
+});
+
+/** The public show page's JSON twin: the same allow-list as /e/<slug>. */
+publicApiRouter.get('/public/events/:slug', async (req, res) => {
+  const found = await loadPublicEvent(String(req.params.slug));
+  if (!found) throw new NotFoundError('No public show at that address.');
+  res.set('Cache-Control', 'public, max-age=30').json({ event: presentPublicEvent(found.event, found.entries) });
+});
+
+/** Shows taking entries now, soonest first: the home page and the entrant's "find a show". */
+publicApiRouter.get('/public/events', async (_req, res) => {
+  const events = await listOpenEvents();
+  res.set('Cache-Control', 'public, max-age=60').json({ events: events.map((e) => presentEventSummary(e)) });
 });

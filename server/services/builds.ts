@@ -10,9 +10,10 @@ import { WeighIn } from '../models/weigh-in';
 import { FigureChange } from '../models/figure-change';
 import { RetiredBuildCode } from '../models/retired-build-code';
 import { User } from '../models/user';
-import { NotFoundError, ValidationError } from '../errors';
+import { ConflictError, NotFoundError, ValidationError } from '../errors';
 import { newBuildCode } from './build-codes';
 import { figuresByPath, recordFigureChanges } from './figure-history';
+import { blockingEntryOf } from './entries';
 
 /** Everything the owner's editor and the public presenters read, in display order; of the owner only the display name (and whether a site admin disabled the account). */
 export const FULL_BUILD_INCLUDE = [
@@ -140,6 +141,8 @@ export async function setPublished(build: Build, published: boolean): Promise<vo
 /** Deletes the build and everything under it; its code is retired so an old card never opens another car. */
 export async function deleteBuild(build: Build): Promise<{ photoKeys: string[] }> {
   return sequelize.transaction(async (transaction) => {
+    const show = await blockingEntryOf(build.id, transaction);
+    if (show) throw new ConflictError(`This build is entered in ${show}. Withdraw the entry, or wait until the show is over, before deleting the build.`, { id: `Entered in ${show}.` });
     const photos = await Photo.findAll({ where: { buildId: build.id }, transaction });
     await RetiredBuildCode.create({ code: build.code }, { transaction });
     await build.destroy({ transaction });

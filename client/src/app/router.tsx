@@ -7,6 +7,12 @@ import { SignUpPage } from '@client/features/session/components/sign-up-page';
 import { ResetPasswordPage } from '@client/features/account/components/reset-password-page';
 import { AccountPage } from '@client/features/account/components/account-page';
 import { MyBuildsPage } from '@client/features/builds/components/my-builds-page';
+import { ShowsPage } from '@client/features/shows/components/shows-page';
+import { CreateShowPage } from '@client/features/shows/components/create-show-page';
+import { ShowPage } from '@client/features/shows/components/show-page';
+import { EnterShowPage } from '@client/features/shows/components/enter-show-page';
+import { MyEntriesPage } from '@client/features/shows/components/my-entries-page';
+import { InvitationPage } from '@client/features/shows/components/invitation-page';
 import { NotFoundPage } from './not-found-page';
 import { RouteError } from './route-error';
 import { LoadingState } from '@client/components/ui/states';
@@ -66,6 +72,12 @@ export const router = createBrowserRouter([
         },
         errorElement: <RouteError />,
       },
+      { path: '/shows', element: <RequireUser><ShowsPage /></RequireUser>, errorElement: <RouteError /> },
+      { path: '/shows/new', element: <RequireUser><CreateShowPage /></RequireUser>, errorElement: <RouteError /> },
+      { path: '/shows/:id', element: <RequireUser><ShowPage /></RequireUser>, errorElement: <RouteError /> },
+      { path: '/enter/:slug', element: <RequireUser><EnterShowPage /></RequireUser>, errorElement: <RouteError /> },
+      { path: '/entries', element: <RequireUser><MyEntriesPage /></RequireUser>, errorElement: <RouteError /> },
+      { path: '/invitations/:token', element: <InvitationPage />, errorElement: <RouteError /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

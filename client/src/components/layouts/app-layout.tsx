@@ -31,6 +31,12 @@ export function AppLayout() {
                 <NavLink to="/builds" className={navClass}>
                   My builds
                 </NavLink>
+                <NavLink to="/shows" className={navClass}>
+                  Shows
+                </NavLink>
+                <NavLink to="/entries" className={navClass}>
+                  Entries
+                </NavLink>
                 <NavLink to="/account" className={navClass}>
                   Account
                 </NavLink>

@@ -1,7 +1,13 @@
 import { Link } from 'react-router-dom';
 import { useSession } from '@client/features/session/api/get-session';
-import { EmptyState } from '@client/components/ui/states';
 import { RecentBuilds } from './recent-builds';
+import { OpenShowList } from '@client/features/shows/components/shows-page';
+import { useOpenShows } from '@client/features/shows/api/list-open-shows';
+
+function OpenShows() {
+  const open = useOpenShows();
+  return <OpenShowList shows={open.data?.events} pending={open.isPending} error={open.error} />;
+}
 
 const audiences = [
   {
@@ -53,7 +59,7 @@ export function HomePage() {
       </section>
       <section className="py-8" aria-labelledby="shows-heading">
         <h2 id="shows-heading" className="mb-4 font-display text-2xl uppercase">Shows that are on</h2>
-        <EmptyState title="No shows are open yet">When an organiser opens registration, the show appears here.</EmptyState>
+        <OpenShows />
       </section>
     </div>
   );

@@ -10,6 +10,7 @@ import { TextField } from '@client/components/ui/text-field';
 import { Notice } from '@client/components/ui/notice';
 import { PageHeader } from '@client/components/ui/page-header';
 import { safeNext } from '../safe-next';
+import { landingAfterSignIn } from '@client/features/shows/api/landing';
 
 export function SignInPage() {
   const [params] = useSearchParams();
@@ -21,7 +22,7 @@ export function SignInPage() {
   const onSubmit = handleSubmit((input) => {
     setFormError('');
     signIn.mutate(input, {
-      onSuccess: () => navigate(safeNext(params.get('next')), { replace: true }),
+      onSuccess: async () => navigate(params.get('next') ? safeNext(params.get('next')) : await landingAfterSignIn(), { replace: true }),
       onError: (err) => setFormError(applyServerErrors(err, setError, ['email', 'password'])),
     });
   });

@@ -1,0 +1,30 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { EntryCreateInput, MyEntry } from '@shared/schemas/event';
+import { api } from '@client/lib/api';
+
+export const myEntriesQueryKey = ['entries', 'mine'] as const;
+export const listMyEntries = () => api<{ entries: MyEntry[] }>('/api/entries');
+export const myEntriesQueryOptions = () => queryOptions({ queryKey: myEntriesQueryKey, queryFn: listMyEntries });
+export const useMyEntries = () => useQuery(myEntriesQueryOptions());
+
+export function useRegisterEntry(eventId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: EntryCreateInput) => api<{ entry: MyEntry }>(`/api/events/${eventId}/entries`, { method: 'POST', body: input }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: myEntriesQueryKey }),
+  });
+}
+export function useWithdrawEntry() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (entryId: number) => api<{ entry: { id: number; status: string; refundDue: number | null; currency: string } }>(`/api/entries/${entryId}/withdraw`, { method: 'POST' }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: ['entries'] }).then(() => qc.invalidateQueries({ queryKey: ['shows'] })),
+  });
+}
+export function useAcceptOffer() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (entryId: number) => api<{ entry: MyEntry }>(`/api/entries/${entryId}/accept-offer`, { method: 'POST' }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: myEntriesQueryKey }),
+  });
+}

@@ -1,0 +1,56 @@
+import { Link, useParams } from 'react-router-dom';
+import { EVENT_ROLE_LABELS, EVENT_STATUS_LABELS } from '@shared/constants';
+import { formatMoney } from '@shared/calc/money';
+import { PageHeader } from '@client/components/ui/page-header';
+import { Panel } from '@client/components/ui/panel';
+import { ErrorState, LoadingState } from '@client/components/ui/states';
+import { Notice } from '@client/components/ui/notice';
+import { useShow } from '../api/get-show';
+import { useUpdateShow } from '../api/update-show';
+import { LifecyclePanel } from './lifecycle-panel';
+import { ClassesPanel } from './classes-panel';
+import { JudgingSheetPanel } from './judging-sheet-panel';
+import { PeoplePanel } from './people-panel';
+import { EntriesPanel } from './entries-panel';
+import { GatePanel } from './gate-panel';
+import { ShowSettingsForm } from './show-settings-form';
+import { showTime } from './show-dates';
+
+/** One show, as the person's roles in it allow: organisers run everything; judges read the sheet; the gate checks in. */
+export function ShowPage() {
+  const id = Number(useParams().id);
+  const { data, isPending, error, refetch } = useShow(id);
+  const update = useUpdateShow(id);
+  if (isPending) return <LoadingState />;
+  if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
+  const show = data.event;
+  const a = show.abilities;
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader title={show.name}>
+        {EVENT_STATUS_LABELS[show.status]} · you are {show.myRoles.map((r) => EVENT_ROLE_LABELS[r].toLowerCase()).join(' and ')} ·{' '}
+        <a href={show.publicUrl} className="underline">public page</a>
+      </PageHeader>
+      <Panel title="The show">
+        <p>{showTime(show.startsAt, show.timeZone)} – {showTime(show.endsAt, show.timeZone)} ({show.timeZone})</p>
+        <p>{show.venueName}{show.venueAddress ? `, ${show.venueAddress}` : ''}</p>
+        <p>Entries {showTime(show.registrationOpensAt, show.timeZone)} – {showTime(show.registrationClosesAt, show.timeZone)} · fee {show.entryFee === 0 ? 'free' : formatMoney(show.entryFee, show.currency)}</p>
+      </Panel>
+      <LifecyclePanel show={show} />
+      {show.myRoles.includes('gate') || a.checkIn ? <GatePanel show={show} /> : null}
+      {a.viewEntries ? <EntriesPanel show={show} /> : null}
+      <ClassesPanel show={show} />
+      <JudgingSheetPanel key={show.criteria.map((c) => c.id).join()} show={show} />
+      {a.manage ? <PeoplePanel show={show} /> : null}
+      {a.manage ? (
+        <Panel title="Settings">
+          {update.isSuccess ? <Notice tone="ok">Saved.</Notice> : null}
+          <ShowSettingsForm key={show.id} show={show} submitLabel="Save settings" busy={update.isPending} serverError={update.error} onSubmit={(input) => update.mutate(input)} />
+        </Panel>
+      ) : null}
+      <p>
+        <Link to="/shows" className="underline">All your shows</Link>
+      </p>
+    </div>
+  );
+}

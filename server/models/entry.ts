@@ -1,0 +1,61 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import type { EntryStatus } from '@shared/constants';
+import type { Build } from './build';
+import type { Event } from './event';
+import type { EventClass } from './event-class';
+import type { User } from './user';
+
+/** A build entered in a show. Money in integer minor units of `currency`. */
+export class Entry extends Model<InferAttributes<Entry>, InferCreationAttributes<Entry>> {
+  declare id: CreationOptional<number>;
+  declare eventId: number;
+  declare buildId: number;
+  declare classId: number;
+  declare ownerId: number;
+  declare number: CreationOptional<number | null>;
+  declare status: EntryStatus;
+  declare feeAmount: number;
+  declare currency: string;
+  declare paymentRef: CreationOptional<string | null>;
+  declare paidAt: CreationOptional<Date | null>;
+  declare paidAmount: CreationOptional<number | null>;
+  declare refundDue: CreationOptional<number | null>;
+  declare withdrawnAt: CreationOptional<Date | null>;
+  declare waitlistedAt: CreationOptional<Date | null>;
+  declare offerExpiresAt: CreationOptional<Date | null>;
+  declare checkedInAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  declare build?: NonAttribute<Build>;
+  declare event?: NonAttribute<Event>;
+  declare eventClass?: NonAttribute<EventClass>;
+  declare owner?: NonAttribute<User>;
+
+  static initModel(sequelize: Sequelize) {
+    Entry.init(
+      {
+        id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+        eventId: { type: DataTypes.INTEGER, allowNull: false },
+        buildId: { type: DataTypes.INTEGER, allowNull: false },
+        classId: { type: DataTypes.INTEGER, allowNull: false },
+        ownerId: { type: DataTypes.INTEGER, allowNull: false },
+        number: { type: DataTypes.INTEGER, allowNull: true },
+        status: { type: DataTypes.STRING(20), allowNull: false },
+        feeAmount: { type: DataTypes.INTEGER, allowNull: false },
+        currency: { type: DataTypes.STRING(3), allowNull: false },
+        paymentRef: { type: DataTypes.STRING(255), allowNull: true },
+        paidAt: { type: DataTypes.DATE, allowNull: true },
+        paidAmount: { type: DataTypes.INTEGER, allowNull: true },
+        refundDue: { type: DataTypes.INTEGER, allowNull: true },
+        withdrawnAt: { type: DataTypes.DATE, allowNull: true },
+        waitlistedAt: { type: DataTypes.DATE, allowNull: true },
+        offerExpiresAt: { type: DataTypes.DATE, allowNull: true },
+        checkedInAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'entries', underscored: true },
+    );
+  }
+}

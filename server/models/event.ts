@@ -1,0 +1,60 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import type { EventStatus } from '@shared/constants';
+import type { RefundRule } from '@shared/calc/refund';
+import type { EventClass } from './event-class';
+import type { Criterion } from './criterion';
+
+/** A show. Instants are stored in UTC; `timeZone` says how to show them. */
+export class Event extends Model<InferAttributes<Event>, InferCreationAttributes<Event>> {
+  declare id: CreationOptional<number>;
+  declare name: string;
+  declare slug: string;
+  declare status: CreationOptional<EventStatus>;
+  declare venueName: string;
+  declare venueAddress: string;
+  declare timeZone: string;
+  declare startsAt: Date;
+  declare endsAt: Date;
+  declare registrationOpensAt: Date;
+  declare registrationClosesAt: Date;
+  declare capacity: number | null;
+  declare entryFee: number;
+  declare currency: string;
+  declare refundRule: RefundRule;
+  declare description: string;
+  declare lastEntryNumber: CreationOptional<number>;
+  declare createdBy: number | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  declare classes?: NonAttribute<EventClass[]>;
+  declare criteria?: NonAttribute<Criterion[]>;
+
+  static initModel(sequelize: Sequelize) {
+    Event.init(
+      {
+        id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        slug: { type: DataTypes.STRING(60), allowNull: false, unique: true },
+        status: { type: DataTypes.STRING(24), allowNull: false, defaultValue: 'draft' },
+        venueName: { type: DataTypes.STRING(200), allowNull: false },
+        venueAddress: { type: DataTypes.STRING(400), allowNull: false, defaultValue: '' },
+        timeZone: { type: DataTypes.STRING(64), allowNull: false },
+        startsAt: { type: DataTypes.DATE, allowNull: false },
+        endsAt: { type: DataTypes.DATE, allowNull: false },
+        registrationOpensAt: { type: DataTypes.DATE, allowNull: false },
+        registrationClosesAt: { type: DataTypes.DATE, allowNull: false },
+        capacity: { type: DataTypes.INTEGER, allowNull: true },
+        entryFee: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        currency: { type: DataTypes.STRING(3), allowNull: false },
+        refundRule: { type: DataTypes.JSONB, allowNull: false },
+        description: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        lastEntryNumber: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        createdBy: { type: DataTypes.INTEGER, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'events', underscored: true },
+    );
+  }
+}

@@ -1,0 +1,118 @@
+import { renderToStaticMarkup } from 'react-dom/server';
+import { formatInZone } from '@shared/calc/time-zone';
+import type { PublicEvent } from '@shared/schemas/public-event';
+import { PAGE_CSS } from './page-styles';
+
+const EVENT_CSS = `.meta{margin:12px 0 0;display:grid;grid-template-columns:max-content 1fr;gap:4px 16px}
+.meta dt{font-size:.75rem;letter-spacing:.08em;text-transform:uppercase;color:var(--graphite);padding-top:3px}
+.meta dd{margin:0}
+.status{display:inline-block;margin-top:8px;padding:2px 8px;border:1px solid var(--ink);font-size:.85rem;text-transform:uppercase;letter-spacing:.06em}
+ol.entries{list-style:none;margin:0;padding:0}
+ol.entries li{display:flex;gap:12px;align-items:baseline;border-bottom:1px solid var(--rule);min-height:44px;padding:8px 0}
+ol.entries .n{font-family:Oswald,"Arial Narrow",sans-serif;font-weight:600;font-size:1.3rem;min-width:3ch;text-align:right;font-variant-numeric:tabular-nums}
+.cal a,.enter a{display:inline-block;min-height:44px;line-height:44px}
+.muted{color:var(--graphite)}`;
+
+/** Dates in the show's own time zone, with the zone named so a visitor from elsewhere is not misled. */
+function when(e: PublicEvent, iso: string) {
+  return formatInZone(iso, e.timeZone, { weekday: 'short', day: 'numeric', month: 'long', year: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+}
+
+function Page({ e }: { e: PublicEvent }) {
+  const description = `${e.name}: ${e.venueName}, ${when(e, e.startsAt)}.`;
+  return (
+    <html lang="en">
+      <head>
+        <meta charSet="utf-8" />
+        <meta name="viewport" content="width=device-width, initial-scale=1" />
+        <title>{`${e.name} · Placard`}</title>
+        <meta name="description" content={description} />
+        <link rel="canonical" href={e.url} />
+        <meta property="og:type" content="website" />
+        <meta property="og:title" content={e.name} />
+        <meta property="og:description" content={description} />
+        <meta name="theme-color" content="#F5F0E6" />
+        <style dangerouslySetInnerHTML={{ __html: PAGE_CSS + EVENT_CSS }} />
+      </head>
+      <body>
+        <header className="bar">
+          <a className="brand" href="/">
+            PLACARD
+          </a>
+        </header>
+        <main>
+          <h1>{e.name}</h1>
+          <span className="status">{e.statusLabel}</span>
+          <dl className="meta">
+            <dt>When</dt>
+            <dd>
+              {when(e, e.startsAt)} – {when(e, e.endsAt)} <span className="muted">({e.timeZone})</span>
+            </dd>
+            <dt>Where</dt>
+            <dd>
+              {e.venueName}
+              {e.venueAddress ? <>, {e.venueAddress}</> : null}
+            </dd>
+            <dt>Entry fee</dt>
+            <dd>{e.feeText}</dd>
+          </dl>
+          <p className="cal">
+            <a href={e.calendarUrl}>Add to your calendar (.ics)</a>
+          </p>
+          {e.description ? (
+            <section className="story" aria-label="About the show">
+              {e.description.split(/\n{2,}/).map((p, i) => (
+                <p key={i}>{p}</p>
+              ))}
+            </section>
+          ) : null}
+          <section aria-labelledby="how">
+            <h2 id="how">How to enter</h2>
+            {e.takingEntries ? (
+              <>
+                <p>
+                  Entries are open until {when(e, e.registrationClosesAt)}. Publish your car’s build sheet on Placard, then enter it in one class.
+                  {e.entryFee > 0 ? ` The fee of ${e.feeText} is paid when you enter.` : ''}
+                </p>
+                <p className="enter">
+                  <a href={`/enter/${e.slug}`}>Enter a car</a>
+                </p>
+              </>
+            ) : e.status === 'registration_open' && new Date(e.registrationOpensAt) > new Date() ? (
+              <p>Entries open on {when(e, e.registrationOpensAt)}.</p>
+            ) : (
+              <p>Entries are closed.</p>
+            )}
+          </section>
+          <section aria-labelledby="classes">
+            <h2 id="classes">Classes and entries</h2>
+            {e.classes.map((c) => (
+              <section key={c.id} aria-label={c.name}>
+                <h3 className="d">{c.name}</h3>
+                {c.description ? <p className="muted">{c.description}</p> : null}
+                {c.entries.length ? (
+                  <ol className="entries">
+                    {c.entries.map((x) => (
+                      <li key={x.number}>
+                        <span className="n">{x.number}</span>
+                        <a href={x.url}>{x.title}</a>
+                      </li>
+                    ))}
+                  </ol>
+                ) : (
+                  <p className="muted">No confirmed entries yet.</p>
+                )}
+              </section>
+            ))}
+          </section>
+        </main>
+      </body>
+    </html>
+  );
+}
+
+export function renderPublicEventPage(e: PublicEvent): string {
+  return `<!doctype html>${renderToStaticMarkup(<Page e={e} />)}`;
+}
+
+export const EVENT_NOT_FOUND_HTML = `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><meta name="robots" content="noindex"><title>No show here · Placard</title><style>html{background:#F5F0E6;color:#1C1B19;font:16px/1.5 system-ui,sans-serif}main{max-width:560px;margin:15vh auto;padding:0 16px}h1{font:600 2rem/1.1 Oswald,"Arial Narrow",sans-serif;text-transform:uppercase}</style></head><body><main><h1>No show here</h1><p>There is no public show at this address.</p><p><a href="/">Placard</a></p></main></body></html>`;

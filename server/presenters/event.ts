@@ -1,0 +1,82 @@
+import type { EventRole } from '@shared/constants';
+import type { AuditLine as AuditLineOut, Criterion as CriterionOut, Entry as EntryOut, EventClass as ClassOut, EventDetail, EventSummary, Invitation, Member, MyEntry, OrganiserEntry } from '@shared/schemas/event';
+import { config } from '../config';
+import type { Actor } from '../policies/actor';
+import { eventAbilities } from '../policies/event';
+import type { Event } from '../models/event';
+import type { EventClass } from '../models/event-class';
+import type { Criterion } from '../models/criterion';
+import type { Entry } from '../models/entry';
+import type { EventMembership } from '../models/event-membership';
+import type { EventInvitation } from '../models/event-invitation';
+import type { AuditLine } from '../models/audit-line';
+
+const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
+export const eventPublicUrl = (slug: string) => `${config.publicBaseUrl}/e/${slug}`;
+
+export const presentClass = (c: EventClass): ClassOut => ({ id: c.id, name: c.name, description: c.description, position: c.position, capacity: c.capacity });
+export const presentCriterion = (c: Criterion): CriterionOut => ({ id: c.id, name: c.name, maxPoints: c.maxPoints, weight: Number(c.weight), tieBreakOrder: c.tieBreakOrder, position: c.position });
+
+export function presentEventSummary(e: Event, myRoles: EventRole[] = []): EventSummary {
+  return {
+    id: e.id,
+    name: e.name,
+    slug: e.slug,
+    status: e.status,
+    venueName: e.venueName,
+    timeZone: e.timeZone,
+    startsAt: e.startsAt.toISOString(),
+    endsAt: e.endsAt.toISOString(),
+    registrationOpensAt: e.registrationOpensAt.toISOString(),
+    registrationClosesAt: e.registrationClosesAt.toISOString(),
+    entryFee: e.entryFee,
+    currency: e.currency,
+    myRoles,
+    publicUrl: eventPublicUrl(e.slug),
+  };
+}
+
+/** Everything about a show for the people who run it (the event's own settings carry no one's private data). */
+export function presentEvent(e: Event, actor: Actor | null): EventDetail {
+  const myRoles = (actor?.memberships ?? []).filter((m) => m.eventId === e.id).map((m) => m.role);
+  return {
+    ...presentEventSummary(e, myRoles),
+    venueAddress: e.venueAddress,
+    capacity: e.capacity,
+    refundRule: { fullRefundUntil: e.refundRule.fullRefundUntil, afterwardsPercent: e.refundRule.afterwardsPercent },
+    description: e.description,
+    classes: (e.classes ?? []).map(presentClass),
+    criteria: (e.criteria ?? []).map(presentCriterion),
+    abilities: eventAbilities(actor, e),
+  };
+}
+
+export function presentEntry(e: Entry, positions: Map<number, number>): EntryOut {
+  return {
+    id: e.id,
+    eventId: e.eventId,
+    buildId: e.buildId,
+    buildTitle: e.build?.title ?? '',
+    buildCode: e.build?.code ?? '',
+    classId: e.classId,
+    className: e.eventClass?.name ?? '',
+    number: e.number,
+    status: e.status,
+    feeAmount: e.feeAmount,
+    currency: e.currency,
+    paymentRef: e.paymentRef,
+    paidAt: iso(e.paidAt),
+    refundDue: e.refundDue,
+    offerExpiresAt: e.status === 'waiting_list' ? iso(e.offerExpiresAt) : null,
+    waitingPosition: positions.get(e.id) ?? null,
+    createdAt: e.createdAt.toISOString(),
+  };
+}
+
+export const presentOrganiserEntry = (e: Entry, positions: Map<number, number>): OrganiserEntry => ({ ...presentEntry(e, positions), ownerName: e.owner?.name ?? '' });
+export const presentMyEntry = (e: Entry, positions: Map<number, number>): MyEntry => ({ ...presentEntry(e, positions), event: presentEventSummary(e.event!) });
+
+/** Members are shown to the show's organisers only, so the e-mail is there to reach them. */
+export const presentMember = (m: EventMembership): Member => ({ userId: m.userId, name: m.user?.name ?? '', email: m.user?.email ?? '', role: m.role });
+export const presentInvitation = (i: EventInvitation): Invitation => ({ id: i.id, email: i.email, role: i.role, expiresAt: i.expiresAt.toISOString(), invitedBy: i.inviter?.name ?? '' });
+export const presentAuditLine = (a: AuditLine): AuditLineOut => ({ id: a.id, at: a.createdAt.toISOString(), who: a.actor?.name ?? null, action: a.action, entryId: a.entryId, before: a.before, after: a.after });

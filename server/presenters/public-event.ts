@@ -1,0 +1,40 @@
+import { EVENT_STATUS_LABELS, type EventStatus } from '@shared/constants';
+import { formatMoney } from '@shared/calc/money';
+import type { PublicEvent } from '@shared/schemas/public-event';
+import { config } from '../config';
+import type { Entry } from '../models/entry';
+import type { Event } from '../models/event';
+
+/** The allow-list of a show's public face: every field named; entries by number and title only. */
+export function presentPublicEvent(event: Event, entries: Entry[], now = new Date()): PublicEvent {
+  const url = `${config.publicBaseUrl}/e/${event.slug}`;
+  return {
+    id: event.id,
+    name: event.name,
+    slug: event.slug,
+    url,
+    calendarUrl: `${url}/calendar.ics`,
+    status: event.status,
+    statusLabel: EVENT_STATUS_LABELS[event.status as EventStatus],
+    takingEntries: event.status === 'registration_open' && event.registrationOpensAt <= now && now < event.registrationClosesAt,
+    venueName: event.venueName,
+    venueAddress: event.venueAddress,
+    timeZone: event.timeZone,
+    startsAt: event.startsAt.toISOString(),
+    endsAt: event.endsAt.toISOString(),
+    registrationOpensAt: event.registrationOpensAt.toISOString(),
+    registrationClosesAt: event.registrationClosesAt.toISOString(),
+    entryFee: event.entryFee,
+    currency: event.currency,
+    feeText: event.entryFee === 0 ? 'Free' : formatMoney(event.entryFee, event.currency),
+    description: event.description,
+    classes: (event.classes ?? []).map((c) => ({
+      id: c.id,
+      name: c.name,
+      description: c.description,
+      entries: entries
+        .filter((e) => e.classId === c.id && e.number !== null && e.build)
+        .map((e) => ({ number: e.number!, title: e.build!.title, url: `${config.publicBaseUrl}/c/${e.build!.code}` })),
+    })),
+  };
+}

@@ -1,0 +1,34 @@
+import { z } from 'zod';
+import { EVENT_STATUSES } from '../constants';
+
+/** The public face of a show: nothing about any person (no e-mail, phone, plate, VIN, home address). */
+export const PublicEventSchema = z.object({
+  id: z.number(),
+  name: z.string(),
+  slug: z.string(),
+  url: z.string(),
+  calendarUrl: z.string(),
+  status: z.enum(EVENT_STATUSES),
+  statusLabel: z.string(),
+  takingEntries: z.boolean(),
+  venueName: z.string(),
+  venueAddress: z.string(),
+  timeZone: z.string(),
+  startsAt: z.string(),
+  endsAt: z.string(),
+  registrationOpensAt: z.string(),
+  registrationClosesAt: z.string(),
+  entryFee: z.number(),
+  currency: z.string(),
+  feeText: z.string(),
+  description: z.string(),
+  classes: z.array(
+    z.object({
+      id: z.number(),
+      name: z.string(),
+      description: z.string(),
+      entries: z.array(z.object({ number: z.number(), title: z.string(), url: z.string() })),
+    }),
+  ),
+});
+export type PublicEvent = z.infer<typeof PublicEventSchema>;
