@@ -3,6 +3,7 @@ import { config } from '../config';
 import { DEMO_ACCOUNTS } from '../db/demo-accounts';
 import { closeConnections, listen, logger } from '../index';
 import { startMailCatcher } from '../mail/catcher';
+import { startMailWorker } from '../jobs/send-mail';
 
 const catcherWanted = config.demoMode && config.smtpUrl === `smtp://127.0.0.1:${config.mailCatcherPort}`;
 const catcher = catcherWanted
@@ -14,6 +15,8 @@ const catcher = catcherWanted
   : undefined;
 
 const server = await listen();
+// The one-machine default: this process also works the job queue (mail now; more jobs join it).
+await startMailWorker();
 const url = `http://${config.host}:${config.port}`;
 const lines = [
   '',
