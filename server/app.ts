@@ -17,6 +17,7 @@ import { sessionRouter } from './routes/session';
 import { usersRouter } from './routes/users';
 import { accountRouter } from './routes/account';
 import { passwordResetsRouter } from './routes/password-resets';
+import { emailVerificationsRouter } from './routes/email-verifications';
 import { adminRouter } from './routes/admin';
 import { buildsRouter } from './routes/builds';
 import { buildRecordsRouter } from './routes/build-records';
@@ -42,7 +43,7 @@ function apiRouter() {
   api.use(sessionMiddleware);
   api.use(passport.session());
   api.use(csrfProtection);
-  api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, adminRouter);
+  api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
   api.use(apiNotFound);
   return api;

@@ -1,6 +1,7 @@
 import { sequelize } from '../db/sequelize';
 import { User } from './user';
 import { PasswordResetToken } from './password-reset-token';
+import { EmailVerificationToken } from './email-verification-token';
 import { CaughtMail } from './caught-mail';
 import { Build } from './build';
 import { BuildSection } from './build-section';
@@ -10,10 +11,12 @@ import { WeighIn } from './weigh-in';
 import { FigureChange } from './figure-change';
 import { RetiredBuildCode } from './retired-build-code';
 
-for (const model of [User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode]) model.initModel(sequelize);
+for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode]) model.initModel(sequelize);
 
 User.hasMany(PasswordResetToken, { foreignKey: 'userId', onDelete: 'CASCADE' });
 PasswordResetToken.belongsTo(User, { foreignKey: 'userId' });
+User.hasMany(EmailVerificationToken, { foreignKey: 'userId', onDelete: 'CASCADE' });
+EmailVerificationToken.belongsTo(User, { foreignKey: 'userId' });
 
 User.hasMany(Build, { foreignKey: 'ownerId', as: 'builds', onDelete: 'CASCADE' });
 Build.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });
