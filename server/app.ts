@@ -27,6 +27,7 @@ import { buildPreviewRouter } from './routes/build-preview';
 import { publicApiRouter } from './routes/public';
 import { mediaRouter } from './routes/media';
 import { pagesRouter } from './pages/router';
+import { paymentsWebhookRouter } from './routes/payments';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -34,6 +35,7 @@ function apiRouter() {
   const api = express.Router();
   api.use(healthRouter); // before the limiter and the session: probes must stay cheap
   api.use(apiLimiter); // every other API request, the public JSON included, is metered per address
+  api.use(paymentsWebhookRouter); // raw body, no session, no CSRF: the signature is the proof
   api.use(publicApiRouter); // public JSON: no session, cacheable
   api.use((_req, res, next) => {
     res.set('Cache-Control', 'no-store'); // answers depend on who asks
