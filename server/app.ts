@@ -18,6 +18,7 @@ import { sessionRouter } from './routes/session';
 import { usersRouter } from './routes/users';
 import { accountRouter } from './routes/account';
 import { passwordResetsRouter } from './routes/password-resets';
+import { emailVerificationsRouter } from './routes/email-verifications';
 import { adminRouter } from './routes/admin';
 import { buildsRouter } from './routes/builds';
 import { buildRecordsRouter } from './routes/build-records';
@@ -31,6 +32,7 @@ import { eventPagesRouter } from './pages/event-router';
 import { eventsRouter } from './routes/events';
 import { eventPeopleRouter } from './routes/event-people';
 import { entriesRouter } from './routes/entries';
+import { paymentsWebhookRouter } from './routes/payments';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -38,6 +40,7 @@ function apiRouter() {
   const api = express.Router();
   api.use(healthRouter); // before the limiter and the session: probes must stay cheap
   api.use(apiLimiter); // every other API request, the public JSON included, is metered per address
+  api.use(paymentsWebhookRouter); // raw body, no session, no CSRF: the signature is the proof
   api.use(publicApiRouter); // public JSON: no session, cacheable
   api.use((_req, res, next) => {
     res.set('Cache-Control', 'no-store'); // answers depend on who asks
@@ -48,7 +51,7 @@ function apiRouter() {
   api.use(sessionMiddleware);
   api.use(passport.session());
   api.use(csrfProtection);
-  api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, adminRouter);
+  api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
   api.use(eventsRouter, eventPeopleRouter, entriesRouter);
   api.use(apiNotFound);

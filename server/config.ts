@@ -34,9 +34,26 @@ const EnvSchema = z.object({
   API_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
   STORAGE_DIR: z.string().optional().transform((v) => v || undefined),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+  JOB_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(2),
+  MAIL_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).max(3600).default(10),
+  MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).max(50).default(14),
+  STRIPE_SECRET_KEY: z.string().optional().transform((v) => v || undefined),
+  STRIPE_WEBHOOK_SECRET: z.string().optional().transform((v) => v || undefined),
+  PAYMENTS_FAKE_PORT: z.coerce.number().int().min(0).max(65535).default(12111),
 });
 
 export type Config = ReturnType<typeof loadConfig>;
+
+/** Secret key and webhook secret of the local fake payment service (it is ours and on loopback only). */
+export const FAKE_PAYMENTS_KEY = 'sk_test_placard_local_fake';
+export const FAKE_WEBHOOK_SECRET = 'whsec_placard_local_fake_signing_secret';
+
+/** A real key talks to the hosted payment service; without one the local fake stands in. */
+function paymentsConfig(secretKey: string | undefined, webhookSecret: string | undefined, fakePort: number) {
+  return secretKey
+    ? { mode: 'hosted' as const, secretKey, webhookSecret: webhookSecret!, fakePort }
+    : { mode: 'fake' as const, secretKey: FAKE_PAYMENTS_KEY, webhookSecret: FAKE_WEBHOOK_SECRET, fakePort };
+}
 
 const testStorageDir = () => path.join(os.tmpdir(), `placard-test-uploads-${process.pid}-${randomBytes(4).toString('hex')}`);
 
@@ -57,6 +74,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
   const catcherUrl = `smtp://127.0.0.1:${mailCatcherPort}`;
   if (e.MAIL_CATCHER_PORT !== undefined && e.SMTP_URL !== undefined && e.SMTP_URL.replace(/\/$/, '') !== catcherUrl) {
     throw new Error(`Invalid environment:\n  MAIL_CATCHER_PORT: the catcher would listen on ${mailCatcherPort} but SMTP_URL sends mail to ${e.SMTP_URL}; set only one of them (or SMTP_URL=${catcherUrl})`);
+  }
+  if (e.STRIPE_SECRET_KEY && !/^(sk|rk)_(test|live)_/.test(e.STRIPE_SECRET_KEY)) {
+    throw new Error('Invalid environment:\n  STRIPE_SECRET_KEY: a secret or restricted key starts with sk_live_, sk_test_, rk_live_ or rk_test_');
+  }
+  if (e.STRIPE_SECRET_KEY && !e.STRIPE_WEBHOOK_SECRET) {
+    throw new Error('Invalid environment:\n  STRIPE_WEBHOOK_SECRET: required with STRIPE_SECRET_KEY (the signing secret of the webhook endpoint)');
   }
   const publicBaseUrl = (e.PUBLIC_BASE_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/$/, '');
   return {
@@ -89,6 +112,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     /** Local-disk storage of uploads; tests get a fresh temporary folder per process unless told otherwise. */
     storageDir: path.resolve(PROJECT_ROOT, e.STORAGE_DIR ?? (e.NODE_ENV === 'test' ? testStorageDir() : '.data/uploads')),
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
+    /** How often an idle worker asks the queue for work (a worker in the same process is woken at once). */
+    jobPollSeconds: e.JOB_POLL_SECONDS,
+    /** Mail that fails is retried after about delay × 2^n seconds (with jitter), up to the limit, then kept aside. */
+    mailRetryDelaySeconds: e.MAIL_RETRY_DELAY_SECONDS,
+    mailRetryLimit: e.MAIL_RETRY_LIMIT,
+    payments: paymentsConfig(e.STRIPE_SECRET_KEY, e.STRIPE_WEBHOOK_SECRET, e.PAYMENTS_FAKE_PORT),
   };
 }
 

@@ -3,6 +3,9 @@ import { config } from '../config';
 import { DEMO_ACCOUNTS } from '../db/demo-accounts';
 import { closeConnections, listen, logger } from '../index';
 import { startMailCatcher } from '../mail/catcher';
+import { startMailWorker } from '../jobs/send-mail';
+import { pointPaymentsAtFake } from '../payments/client';
+import { startLocalPayments } from '../payments/fake';
 
 const catcherWanted = config.demoMode && config.smtpUrl === `smtp://127.0.0.1:${config.mailCatcherPort}`;
 const catcher = catcherWanted
@@ -14,10 +17,28 @@ const catcher = catcherWanted
   : undefined;
 
 const server = await listen();
+// The one-machine default: this process also works the job queue (mail now; more jobs join it).
+await startMailWorker();
 const url = `http://${config.host}:${config.port}`;
+
+// No payment key: the local fake stands in, posting its webhooks to this server.
+const fakePayments =
+  config.payments.mode === 'fake'
+    ? await startLocalPayments({ port: config.payments.fakePort, webhookUrl: `${url}/api/payments/webhook` }).catch((err: NodeJS.ErrnoException) => {
+        if (err.code !== 'EADDRINUSE') throw err;
+        logger.warn(`Port ${config.payments.fakePort} is taken: assuming another Placard's fake payment service is running there.`);
+        pointPaymentsAtFake({ host: '127.0.0.1', port: config.payments.fakePort });
+        return undefined;
+      })
+    : undefined;
+const paymentsLine =
+  config.payments.mode === 'hosted'
+    ? '  Payments: the hosted payment service (STRIPE_SECRET_KEY is set)'
+    : `  Payments: the local fake payment service on http://127.0.0.1:${fakePayments?.port ?? config.payments.fakePort} (no STRIPE_SECRET_KEY: no money moves)`;
 const lines = [
   '',
   `  Placard is running on ${url}`,
+  paymentsLine,
   ...(config.demoMode
     ? [
         '',
@@ -37,6 +58,7 @@ async function stop() {
   stopping = true;
   server.close();
   catcher?.close(() => undefined);
+  await fakePayments?.close();
   await closeConnections();
   process.exit(0);
 }

@@ -11,16 +11,26 @@ export type OutgoingMail = {
   attachments?: ReadonlyArray<{ filename: string; contentType: string; content: Buffer }>;
 };
 
-let transport: Transporter | undefined;
+export type MailSender = (mail: OutgoingMail) => Promise<void>;
 
-function getTransport(): Transporter {
+/**
+ * A sender to one SMTP server. Only the queue's worker sends: everything else calls queueMail().
+ * Timeouts stay well under the job's expiry, so a hung server fails the attempt instead of letting
+ * the queue start a second one beside it.
+ */
+export function createMailSender(smtpUrl: string, from = config.mailFrom): MailSender {
   // The local catcher speaks plain SMTP on loopback; a real server negotiates TLS as its URL says.
-  const loopback = /^smtp:\/\/(127\.0\.0\.1|localhost)[:/]/.test(config.smtpUrl);
-  const options: SMTPTransport.Options & { url: string } = { url: config.smtpUrl, ignoreTLS: loopback };
-  transport ??= nodemailer.createTransport(options);
-  return transport;
-}
-
-export async function sendMail(mail: OutgoingMail): Promise<void> {
-  await getTransport().sendMail({ from: config.mailFrom, ...mail, attachments: mail.attachments?.map((a) => ({ ...a })) });
+  const loopback = /^smtp:\/\/(127\.0\.0\.1|localhost)[:/]/.test(smtpUrl);
+  const options: SMTPTransport.Options & { url: string } = {
+    url: smtpUrl,
+    ignoreTLS: loopback,
+    connectionTimeout: 20_000,
+    greetingTimeout: 20_000,
+    socketTimeout: 60_000,
+  };
+  let transport: Transporter | undefined;
+  return async (mail) => {
+    transport ??= nodemailer.createTransport(options);
+    await transport.sendMail({ from, ...mail, attachments: mail.attachments?.map((a) => ({ ...a })) });
+  };
 }

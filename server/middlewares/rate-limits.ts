@@ -1,6 +1,7 @@
 import { rateLimit, ipKeyGenerator, type RateLimitRequestHandler } from 'express-rate-limit';
 import { createHash } from 'node:crypto';
 import type { Request } from 'express';
+import { EMAIL_VERIFICATION_RESENDS_PER_HOUR } from '@shared/constants';
 import { AppError } from '../errors';
 import { config } from '../config';
 import { PostgresRateLimitStore } from './rate-limit-store';
@@ -97,6 +98,22 @@ export const passwordChangeLimiter = limiter('password-change', {
   ...PASSWORD_CHANGE_LIMIT,
   key: person,
   message: 'Too many password changes. Wait a few minutes and try again.',
+});
+
+/** New confirmation links per signed-in person (each one is a mail). */
+export const verificationResendLimiter = limiter('verify-resend', {
+  windowMs: 60 * 60 * 1000,
+  limit: EMAIL_VERIFICATION_RESENDS_PER_HOUR,
+  key: person,
+  message: 'You asked for several links already. Use the newest one, or try again in an hour.',
+});
+
+/** Confirmation attempts per address: guessing a token is hopeless, and this keeps it so. */
+export const verificationConfirmLimiter = limiter('verify-confirm', {
+  windowMs: 60 * 60 * 1000,
+  limit: 30,
+  key: ip,
+  message: 'Too many attempts. Try again in an hour.',
 });
 
 /** Card PDFs per person: each render lays out a whole page and embeds a photo (the designer asks for one per change, 350 ms apart). */

@@ -1,6 +1,7 @@
 import { sequelize } from '../db/sequelize';
 import { User } from './user';
 import { PasswordResetToken } from './password-reset-token';
+import { EmailVerificationToken } from './email-verification-token';
 import { CaughtMail } from './caught-mail';
 import { Build } from './build';
 import { BuildSection } from './build-section';
@@ -17,12 +18,14 @@ import { EventInvitation } from './event-invitation';
 import { Entry } from './entry';
 import { AuditLine } from './audit-line';
 
-for (const model of [User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine]) {
+for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine]) {
   model.initModel(sequelize);
 }
 
 User.hasMany(PasswordResetToken, { foreignKey: 'userId', onDelete: 'CASCADE' });
 PasswordResetToken.belongsTo(User, { foreignKey: 'userId' });
+User.hasMany(EmailVerificationToken, { foreignKey: 'userId', onDelete: 'CASCADE' });
+EmailVerificationToken.belongsTo(User, { foreignKey: 'userId' });
 
 User.hasMany(Build, { foreignKey: 'ownerId', as: 'builds', onDelete: 'CASCADE' });
 Build.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });

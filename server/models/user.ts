@@ -1,4 +1,4 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
   declare id: CreationOptional<number>;
@@ -10,8 +10,15 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   /** Set by a site admin: the account cannot sign in and its public pages are offline. */
   declare disabledAt: CreationOptional<Date | null>;
   declare lastSignInAt: CreationOptional<Date | null>;
+  /** When the person followed the confirmation link; null until then. */
+  declare emailVerifiedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  /** The policies read this (Actor.emailVerified): an unconfirmed account cannot take part in shows. */
+  get emailVerified(): NonAttribute<boolean> {
+    return this.emailVerifiedAt != null;
+  }
 
   static initModel(sequelize: Sequelize) {
     User.init(
@@ -24,6 +31,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         mayOrganise: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         disabledAt: { type: DataTypes.DATE, allowNull: true },
         lastSignInAt: { type: DataTypes.DATE, allowNull: true },
+        emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -8,6 +8,11 @@ export type Actor = {
   id: number;
   isSiteAdmin: boolean;
   mayOrganise: boolean;
+  /**
+   * The account's e-mail address is confirmed. Taking part in shows (registering, accepting an
+   * invitation) needs it; building and publishing do not. Absent counts as not confirmed.
+   */
+  emailVerified?: boolean;
   memberships?: ReadonlyArray<{ eventId: number; role: EventRole }>;
 };
 

@@ -5,12 +5,9 @@ import { authorize } from './authorize';
 export type EventAction = 'create' | 'view' | 'manage' | 'viewEntries' | 'checkIn' | 'judge' | 'register';
 type EventRecord = { id: number; status: EventStatus };
 
-/**
- * The hook for "an unverified account cannot register for a show or accept an invitation".
- * True for everyone until e-mail verification lands; then it reads the account's verified flag.
- */
+/** An unverified account can build and publish, but not register for a show or accept an invitation. */
 export function mayTakePartInShows(actor: Actor | null | undefined): boolean {
-  return Boolean(actor);
+  return Boolean(actor?.emailVerified);
 }
 
 const isOrganiser = (actor: Actor | null | undefined, event: EventRecord) => hasEventRole(actor, event.id, 'organiser');

@@ -13,6 +13,7 @@ export function presentCurrentUser(user: User): CurrentUser {
     name: user.name,
     isSiteAdmin: user.isSiteAdmin,
     mayOrganise: user.mayOrganise,
+    emailVerified: user.emailVerified,
     abilities: {
       manageAccounts: canUser(user, 'list'),
       readCaughtMail: canMail(user, 'read', { demoMode: config.demoMode }),

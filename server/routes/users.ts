@@ -1,18 +1,22 @@
 import { Router } from 'express';
-import { SignUpSchema } from '@shared/schemas/user';
+import { SignUpSchema, type SignUpResponse } from '@shared/schemas/user';
 import { parseBody } from '../middlewares/validate';
-import { csrfToken } from '../middlewares/csrf';
 import { signInLimiter, signUpLimiter } from '../middlewares/rate-limits';
-import { signIn } from '../auth/session-helpers';
 import { signUp } from '../services/users';
-import { presentCurrentUser } from '../presenters/user';
 import { config } from '../config';
 
 export const usersRouter = Router();
 
-/** Sign-up: makes the account and signs it in (new session id, new CSRF token). */
-usersRouter.post('/users', signUpLimiter, signInLimiter, async (req, res) => {
-  const user = await signUp(parseBody(req, SignUpSchema));
-  await signIn(req, user);
-  res.status(201).json({ user: presentCurrentUser(user), csrfToken: csrfToken(req, true), demoMode: config.demoMode });
+const SIGN_UP_MESSAGE = 'Check your inbox: we sent a message to that address. Open the link in it to confirm your e-mail, then sign in.';
+
+/**
+ * Sign-up answers the same 202 whether or not the address already has an account, and answers
+ * before any work is done (a password hash, rows, a mail), so neither the words nor the time tell
+ * who is registered. The mail says which it was; the new account signs in as usual.
+ */
+usersRouter.post('/users', signUpLimiter, signInLimiter, (req, res) => {
+  const input = parseBody(req, SignUpSchema);
+  const body: SignUpResponse = { message: SIGN_UP_MESSAGE, demoMode: config.demoMode };
+  res.status(202).json(body);
+  void signUp(input, config.publicBaseUrl).catch((err: unknown) => req.log.error({ err }, 'sign-up failed after answering'));
 });

@@ -8,7 +8,7 @@ import { PasswordResetToken } from '../models/password-reset-token';
 import { User } from '../models/user';
 import { hashPassword } from '../auth/passwords';
 import { AppError } from '../errors';
-import { sendMail } from '../mail/mailer';
+import { queueMail } from '../mail/outbox';
 import { destroySessionsOf } from './sessions';
 
 const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
@@ -21,14 +21,15 @@ export async function requestPasswordReset(email: string, publicBaseUrl: string)
   const user = await User.findOne({ where: { email } });
   if (!user) return;
   const token = randomBytes(32).toString('base64url');
-  await PasswordResetToken.create({
-    userId: user.id,
-    tokenHash: sha256(token),
-    expiresAt: new Date(Date.now() + PASSWORD_RESET_TTL_MINUTES * 60_000),
-    usedAt: null,
-  });
   const link = `${publicBaseUrl}/reset-password?token=${token}`;
-  await sendMail({ to: user.email, ...passwordResetEmail({ name: user.name, link, minutes: PASSWORD_RESET_TTL_MINUTES }) });
+  // The token and its mail are one write: no mail for a token that was not saved, no token without its mail.
+  await sequelize.transaction(async (transaction) => {
+    await PasswordResetToken.create(
+      { userId: user.id, tokenHash: sha256(token), expiresAt: new Date(Date.now() + PASSWORD_RESET_TTL_MINUTES * 60_000), usedAt: null },
+      { transaction },
+    );
+    await queueMail({ to: user.email, ...passwordResetEmail({ name: user.name, link, minutes: PASSWORD_RESET_TTL_MINUTES }) }, { transaction });
+  });
 }
 
 const invalidLink = () =>

@@ -1,16 +1,43 @@
-import { Op, type Transaction } from 'sequelize';
+import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { AccountUpdateInput, AdminUserListQuery, AdminUserUpdateInput, PasswordChangeInput, SignUpInput } from '@shared/schemas/user';
 import { sequelize } from '../db/sequelize';
 import { User } from '../models/user';
 import { hashPassword, verifyPassword } from '../auth/passwords';
-import { AppError, ConflictError, NotFoundError, ValidationError } from '../errors';
+import { accountExistsEmail } from '@templates/email/account-exists';
+import { AppError, NotFoundError, ValidationError } from '../errors';
+import { queueMail } from '../mail/outbox';
 import { destroySessionsOf } from './sessions';
+import { sendVerificationMail } from './email-verification';
 
-export async function signUp(input: SignUpInput, transaction?: Transaction): Promise<User> {
-  const existing = await User.findOne({ where: { email: input.email }, transaction });
-  if (existing) throw new ConflictError('An account with this e-mail already exists.', { email: 'An account with this e-mail already exists. Sign in or reset the password.' });
+/**
+ * Sign-up tells the caller nothing about the address: a new one gets an unconfirmed account and a
+ * confirmation link; one that already has an account gets a mail saying so (at most one an hour, so
+ * sign-up cannot flood someone's inbox). Resolves with the new account, or null.
+ */
+export async function signUp(input: SignUpInput, publicBaseUrl: string): Promise<User | null> {
   const passwordHash = await hashPassword(input.password);
-  return User.create({ email: input.email, name: input.name, passwordHash }, { transaction });
+  try {
+    return await sequelize.transaction(async (transaction) => {
+      const existing = await User.findOne({ where: { email: input.email }, transaction });
+      if (existing) {
+        await mailAccountExists(existing, publicBaseUrl, transaction);
+        return null;
+      }
+      const user = await User.create({ email: input.email, name: input.name, passwordHash, emailVerifiedAt: null }, { transaction });
+      await sendVerificationMail(user, publicBaseUrl, transaction);
+      return user;
+    });
+  } catch (err) {
+    // Two sign-ups with one address at once: the second finds the first's account on a second look.
+    if (err instanceof UniqueConstraintError) return signUp(input, publicBaseUrl);
+    throw err;
+  }
+}
+
+async function mailAccountExists(user: User, publicBaseUrl: string, transaction: Transaction) {
+  const hour = new Date().toISOString().slice(0, 13);
+  const mail = accountExistsEmail({ name: user.name, signInLink: `${publicBaseUrl}/sign-in`, resetLink: `${publicBaseUrl}/reset-password` });
+  await queueMail({ to: user.email, ...mail }, { transaction, dedupeKey: `account-exists:${user.id}:${hour}` });
 }
 
 export async function updateAccount(user: User, input: AccountUpdateInput): Promise<User> {

@@ -49,6 +49,18 @@ export const PasswordResetConfirmSchema = z.object({
 });
 export type PasswordResetConfirmInput = z.infer<typeof PasswordResetConfirmSchema>;
 
+/** Sign-up answers the same whether or not the address has an account: the mail tells the person which. */
+export const SignUpResponseSchema = z.object({ message: z.string(), demoMode: z.boolean() });
+export type SignUpResponse = z.infer<typeof SignUpResponseSchema>;
+
+export const EmailVerificationConfirmSchema = z.object({
+  token: z.string({ error: 'The confirmation link is incomplete.' }).regex(/^[A-Za-z0-9_-]{20,100}$/, { error: 'The confirmation link is not valid.' }),
+});
+export type EmailVerificationConfirmInput = z.infer<typeof EmailVerificationConfirmSchema>;
+
+export const EmailVerificationConfirmResponseSchema = z.object({ verified: z.literal(true) });
+export type EmailVerificationConfirmResponse = z.infer<typeof EmailVerificationConfirmResponseSchema>;
+
 /** What the signed-in person may do across the site; event roles add to it per event. */
 export const AbilitiesSchema = z.object({
   manageAccounts: z.boolean(),
@@ -63,6 +75,8 @@ export const CurrentUserSchema = z.object({
   name: z.string(),
   isSiteAdmin: z.boolean(),
   mayOrganise: z.boolean(),
+  /** The address is confirmed; until then the person cannot register for shows or accept invitations. */
+  emailVerified: z.boolean(),
   abilities: AbilitiesSchema,
 });
 export type CurrentUser = z.infer<typeof CurrentUserSchema>;

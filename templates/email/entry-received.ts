@@ -1,4 +1,4 @@
-import { notice } from './layout';
+import { notice } from './notice';
 
 /** Registration received: confirmed (free show), awaiting payment, or on the waiting list. */
 export function entryReceivedEmail(p: {

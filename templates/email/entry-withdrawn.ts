@@ -1,4 +1,4 @@
-import { notice } from './layout';
+import { notice } from './notice';
 
 /** An entry was withdrawn, by its owner or an organiser; says what refund is due by the show's rule. */
 export function entryWithdrawnEmail(p: { name: string; showName: string; buildTitle: string; byOrganiser: boolean; refund: string | null }) {

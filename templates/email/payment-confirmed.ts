@@ -1,4 +1,4 @@
-import { notice } from './layout';
+import { notice } from './notice';
 
 /** The entry fee arrived: the entry is confirmed. */
 export function paymentConfirmedEmail(p: { name: string; showName: string; buildTitle: string; number: number | null; amount: string; link: string }) {

@@ -1,4 +1,4 @@
-import { notice } from './layout';
+import { notice } from './notice';
 
 /** An invitation to take a role in a show: the link works once, until it expires. */
 export function showInvitationEmail(p: { showName: string; roleLabel: string; inviterName: string; link: string; days: number }) {

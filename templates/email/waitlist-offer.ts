@@ -1,4 +1,4 @@
-import { notice } from './layout';
+import { notice } from './notice';
 
 /** A place freed up: the first in line has until the deadline to take it. */
 export function waitlistOfferEmail(p: { name: string; showName: string; buildTitle: string; className: string; deadline: string; link: string }) {

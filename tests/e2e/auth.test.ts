@@ -1,12 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import path from 'node:path';
 import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
-import { uniqueEmail } from '../support/factories';
+import { createUser, uniqueEmail } from '../support/factories';
+import { waitForMail } from '../support/mailbox';
 
 const env = useBrowserAndServer();
 
 describe('a newcomer in the browser', () => {
-  it('signs up, signs out and signs back in', async () => {
+  it('signs up, confirms the address from the e-mail, signs out and signs back in', async () => {
+    const admin = await createUser({ isSiteAdmin: true, name: 'Mail Reader' });
     const page = await env.browser.newPage({ viewport: { width: 390, height: 844 } });
     const email = uniqueEmail('browser');
     const password = 'a long browser password';
@@ -20,9 +22,40 @@ describe('a newcomer in the browser', () => {
     await page.getByLabel('E-mail').fill(email);
     await page.getByLabel('Password').fill(password);
     await page.getByRole('button', { name: 'Make my account' }).click();
+    await page.getByRole('heading', { name: 'Check your inbox' }).waitFor();
+    await page.getByText('Demo mode: mail is caught, not sent.').waitFor();
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'sign-up-check-inbox-phone.png'), fullPage: true });
+
+    // Signed in before confirming (once the mail is there, as a person would): a banner asks for the confirmation.
+    await waitForMail(email);
+    await page.getByRole('link', { name: 'sign in', exact: true }).click();
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByLabel('Password').fill(password);
+    await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL(`${env.baseUrl}/account`);
-    await expect.poll(() => page.getByRole('heading', { name: 'Account' }).count()).toBe(1);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'account-phone.png'), fullPage: true });
+    const banner = page.getByRole('region', { name: 'Confirm your e-mail address' });
+    await banner.waitFor();
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'verify-banner-phone.png'), fullPage: true });
+
+    // The site admin reads the caught confirmation mail; the newcomer follows its link.
+    const desk = await env.browser.newPage();
+    await desk.goto(`${env.baseUrl}/sign-in`);
+    await desk.getByLabel('E-mail').fill(admin.email);
+    await desk.getByLabel('Password').fill(admin.password);
+    await desk.getByRole('button', { name: 'Sign in' }).click();
+    await desk.waitForURL(`${env.baseUrl}/account`);
+    await desk.getByRole('link', { name: 'Caught mail' }).click();
+    await desk.getByRole('link', { name: new RegExp(`Confirm your e-mail address for Placard.*${email}`) }).click();
+    const link = desk.getByRole('link', { name: /verify-email\?token=/ });
+    await link.waitFor();
+    await desk.screenshot({ path: path.join(SCREENSHOT_DIR, 'caught-confirmation-mail.png'), fullPage: true });
+    // The mail points at PUBLIC_BASE_URL; the test server listens elsewhere, so follow the same path here.
+    const { pathname, search } = new URL((await link.getAttribute('href'))!);
+    await desk.close();
+    await page.goto(`${env.baseUrl}${pathname}${search}`);
+    await page.getByText('Your e-mail address is confirmed.').waitFor();
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'verify-email-done-phone.png'), fullPage: true });
+    await expect.poll(() => banner.count()).toBe(0);
 
     await page.getByRole('button', { name: 'Sign out' }).click();
     await expect.poll(() => page.getByRole('link', { name: 'Sign in' }).count()).toBeGreaterThan(0);
@@ -37,6 +70,8 @@ describe('a newcomer in the browser', () => {
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL(`${env.baseUrl}/account`);
     await page.getByText('Signed in as Kit Ellery.').waitFor();
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'account-phone.png'), fullPage: true });
+    expect(await banner.count()).toBe(0);
     await page.close();
   });
 

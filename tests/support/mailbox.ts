@@ -1,8 +1,8 @@
 import { Op } from 'sequelize';
 import { CaughtMail } from '@server/models/caught-mail';
 
-/** Waits for the test mail catcher to have a message for this address (SMTP is asynchronous). */
-export async function waitForMail(to: string, timeoutMs = 5000): Promise<CaughtMail> {
+/** Waits for the test mail catcher to have a message for this address (mail goes through the job queue, then SMTP). */
+export async function waitForMail(to: string, timeoutMs = 15_000): Promise<CaughtMail> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     const mail = await CaughtMail.findOne({ where: { to: { [Op.iLike]: `%${to}%` } }, order: [['id', 'DESC']] });

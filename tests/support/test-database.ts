@@ -1,8 +1,8 @@
 import { TEST_ENV } from './test-env';
 
 /**
- * Gives the run a clean, migrated test database (never the app's), and the catcher that
- * keeps mail sent during the tests. Runs in vitest's main process before any test file.
+ * Gives the run a clean, migrated test database (never the app's), the catcher that keeps mail
+ * sent during the tests, and the worker that sends the queued mail to it. Runs in vitest's main process before any test file.
  */
 export async function prepareTestDatabase(): Promise<() => Promise<void>> {
   Object.assign(process.env, TEST_ENV);
@@ -11,11 +11,16 @@ export async function prepareTestDatabase(): Promise<() => Promise<void>> {
   await import('@server/models/index');
   const { sequelize } = await import('@server/db/sequelize');
   const { migrate } = await import('@server/db/migrator');
-  await sequelize.query('DROP SCHEMA public CASCADE; CREATE SCHEMA public;');
+  await sequelize.query('DROP SCHEMA public CASCADE; CREATE SCHEMA public; DROP SCHEMA IF EXISTS pgboss CASCADE;');
   await migrate();
   const { startMailCatcher } = await import('@server/mail/catcher');
   const catcher = await startMailCatcher(Number(TEST_ENV.MAIL_CATCHER_PORT));
+  // The one mail worker of the run, as the server would run it: test files queue, this process sends.
+  const { startMailWorker } = await import('@server/jobs/send-mail');
+  const { stopJobQueue } = await import('@server/jobs/queue');
+  await startMailWorker();
   return async () => {
+    await stopJobQueue();
     await new Promise<void>((resolve) => catcher.close(() => resolve()));
     await sequelize.close();
   };

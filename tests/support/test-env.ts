@@ -18,4 +18,7 @@ export const TEST_ENV = {
   API_RATE_LIMIT_PER_MINUTE: '100000',
   PUBLIC_BASE_URL: 'http://127.0.0.1:3999',
   LOG_LEVEL: 'silent',
+  // Test files queue mail and the global setup's worker sends it: poll often, retry soon.
+  JOB_POLL_SECONDS: '0.5',
+  MAIL_RETRY_DELAY_SECONDS: '1',
 } as const;

@@ -6,6 +6,7 @@ import { SignInPage } from '@client/features/session/components/sign-in-page';
 import { SignUpPage } from '@client/features/session/components/sign-up-page';
 import { ResetPasswordPage } from '@client/features/account/components/reset-password-page';
 import { AccountPage } from '@client/features/account/components/account-page';
+import { VerifyEmailPage } from '@client/features/account/components/verify-email-page';
 import { MyBuildsPage } from '@client/features/builds/components/my-builds-page';
 import { ShowsPage } from '@client/features/shows/components/shows-page';
 import { CreateShowPage } from '@client/features/shows/components/create-show-page';
@@ -28,6 +29,7 @@ export const router = createBrowserRouter([
       { path: '/sign-in', element: <SignInPage />, errorElement: <RouteError /> },
       { path: '/sign-up', element: <SignUpPage />, errorElement: <RouteError /> },
       { path: '/reset-password', element: <ResetPasswordPage />, errorElement: <RouteError /> },
+      { path: '/verify-email', element: <VerifyEmailPage />, errorElement: <RouteError /> },
       { path: '/account', element: <RequireUser><AccountPage /></RequireUser>, errorElement: <RouteError /> },
       { path: '/builds', element: <RequireUser><MyBuildsPage /></RequireUser>, errorElement: <RouteError /> },
       {

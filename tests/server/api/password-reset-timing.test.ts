@@ -2,7 +2,7 @@ import { afterAll, describe, expect, it, vi } from 'vitest';
 import { apiClient } from '../../support/api-client';
 import { createUser } from '../../support/factories';
 
-// The mailer is held back until the test lets it go, and hashing is watched, so both the order of
+// Queuing the mail is held back until the test lets it go, and hashing is watched, so both the order of
 // work and what an unknown token costs can be seen without timing anything.
 const held = vi.hoisted(() => {
   let release!: () => void;
@@ -10,8 +10,8 @@ const held = vi.hoisted(() => {
   return { gate, release, sent: [] as string[] };
 });
 
-vi.mock('@server/mail/mailer', () => ({
-  sendMail: vi.fn(async (mail: { to: string }) => {
+vi.mock('@server/mail/outbox', () => ({
+  queueMail: vi.fn(async (mail: { to: string }) => {
     await held.gate;
     held.sent.push(mail.to);
   }),
@@ -30,7 +30,7 @@ const within = <T>(ms: number, p: Promise<T>) =>
   Promise.race([p, new Promise<never>((_, reject) => setTimeout(() => reject(new Error(`no answer within ${ms} ms`)), ms))]);
 
 describe('password reset: nothing to learn from how long it takes', () => {
-  it('answers a known e-mail before any mail is sent, so it takes no longer than an unknown one', async () => {
+  it('answers a known e-mail before any mail is queued, so it takes no longer than an unknown one', async () => {
     const { email } = await createUser();
     const client = await apiClient();
     const res = await within(3000, client.post('/api/password-resets', { email }));

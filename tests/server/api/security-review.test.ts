@@ -125,7 +125,7 @@ describe('rate limits on expensive and abusable endpoints', () => {
     expect(signIn.status).toBe(401);
     expect(policies(signIn)).toContain('"signin-address"');
     const signUp = await client.post('/api/users', { email: uniqueEmail('newcomer'), name: 'New Person', password: 'long enough password' });
-    expect(signUp.status).toBe(201);
+    expect(signUp.status).toBe(202);
     expect(policies(signUp)).toContain('"signup-address"');
     const confirm = await (await apiClient()).post('/api/password-resets/confirm', { token: 'x'.repeat(43), password: 'long enough password' });
     expect(confirm.status).toBe(400);

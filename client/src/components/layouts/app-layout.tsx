@@ -1,6 +1,7 @@
 import { Link, NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { useSession } from '@client/features/session/api/get-session';
 import { useSignOut } from '@client/features/session/api/sign-out';
+import { VerifyEmailBanner } from '@client/features/account/components/verify-email-banner';
 
 const navClass = ({ isActive }: { isActive: boolean }) =>
   `inline-flex min-h-11 items-center px-2 font-display uppercase tracking-wide hover:text-signal ${isActive ? 'text-signal underline decoration-2 underline-offset-8' : ''}`;
@@ -72,6 +73,7 @@ export function AppLayout() {
           </nav>
         </div>
       </header>
+      {user && !user.emailVerified ? <VerifyEmailBanner user={user} demoMode={session.demoMode} /> : null}
       <main id="main" className="mx-auto w-full min-w-0 max-w-5xl flex-1 px-4 py-6">
         <Outlet />
       </main>

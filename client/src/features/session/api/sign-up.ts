@@ -1,18 +1,8 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SessionResponse, SignUpInput } from '@shared/schemas/user';
-import { api, setCsrfToken } from '@client/lib/api';
-import { sessionQueryKey } from './get-session';
+import { useMutation } from '@tanstack/react-query';
+import type { SignUpInput, SignUpResponse } from '@shared/schemas/user';
+import { api } from '@client/lib/api';
 
-export const signUp = (input: SignUpInput) => api<SessionResponse>('/api/users', { method: 'POST', body: input });
+/** Sign-up signs nobody in: the answer is the same for a new and a known address, and the mail says which. */
+export const signUp = (input: SignUpInput) => api<SignUpResponse>('/api/users', { method: 'POST', body: input });
 
-export function useSignUp() {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: signUp,
-    onSuccess: (session) => {
-      setCsrfToken(session.csrfToken);
-      qc.clear();
-      qc.setQueryData(sessionQueryKey, session);
-    },
-  });
-}
+export const useSignUp = () => useMutation({ mutationFn: signUp });

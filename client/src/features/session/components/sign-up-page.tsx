@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Link, useNavigate } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import { PASSWORD_MIN_LENGTH } from '@shared/constants';
 import { SignUpSchema, type SignUpInput } from '@shared/schemas/user';
 import { useSignUp } from '../api/sign-up';
@@ -12,7 +12,6 @@ import { Notice } from '@client/components/ui/notice';
 import { PageHeader } from '@client/components/ui/page-header';
 
 export function SignUpPage() {
-  const navigate = useNavigate();
   const signUp = useSignUp();
   const [formError, setFormError] = useState('');
   const { register, handleSubmit, setError, formState: { errors } } = useForm<SignUpInput>({ resolver: zodResolver(SignUpSchema) });
@@ -20,10 +19,24 @@ export function SignUpPage() {
   const onSubmit = handleSubmit((input) => {
     setFormError('');
     signUp.mutate(input, {
-      onSuccess: () => navigate('/account', { replace: true }),
       onError: (err) => setFormError(applyServerErrors(err, setError, ['email', 'name', 'password'])),
     });
   });
+
+  if (signUp.isSuccess) {
+    return (
+      <div className="mx-auto max-w-md">
+        <PageHeader title="Check your inbox" />
+        <Notice tone="ok">
+          <p>{signUp.data.message}</p>
+          {signUp.data.demoMode ? <p className="mt-1 text-sm">Demo mode: mail is caught, not sent. The site admin reads it under Caught mail.</p> : null}
+        </Notice>
+        <p className="mt-6 text-sm">
+          Nothing arrived? Look in the spam folder, then <Link to="/sign-in" className="underline underline-offset-4">sign in</Link> and ask for a new link.
+        </p>
+      </div>
+    );
+  }
 
   return (
     <div className="mx-auto max-w-md">

@@ -1,0 +1,134 @@
+import PgBoss from 'pg-boss';
+import { QueryTypes, type Transaction } from 'sequelize';
+import { config } from '../config';
+import { logger } from '../logger';
+import { sequelize } from '../db/sequelize';
+
+/** The queues Placard uses, each made with createQueue() before anything is sent to it (pg-boss 10 drops sends to unknown queues). */
+export const MAIL_QUEUE = 'mail';
+/** Mail that failed every retry is moved here and kept, so an administrator can see and resend it. */
+export const MAIL_UNDELIVERED_QUEUE = 'mail-undelivered';
+
+export type JobQueueOptions = {
+  connectionString: string;
+  /** pg-boss keeps its tables in its own schema, which it creates and migrates itself on start. */
+  schema?: string;
+  /** Names the queue's connections in pg_stat_activity. */
+  applicationName?: string;
+  /** Maintenance (expiring, archiving, retrying stuck jobs) runs in processes that work jobs. */
+  supervise: boolean;
+  pollSeconds: number;
+  mailRetryDelaySeconds: number;
+  mailRetryLimit: number;
+};
+
+/**
+ * pg-boss on the same PostgreSQL, with its queues made. `start()` is idempotent, so any process that
+ * sends (a request, a seeder) starts it on first use; the server also works the jobs.
+ */
+export class JobQueue {
+  readonly boss: PgBoss;
+  private starting?: Promise<PgBoss>;
+  private readonly workerIds: string[] = [];
+
+  constructor(readonly options: JobQueueOptions) {
+    this.boss = new PgBoss({
+      connectionString: options.connectionString,
+      schema: options.schema ?? 'pgboss',
+      application_name: options.applicationName ?? 'placard-jobs',
+      max: 4,
+      supervise: options.supervise,
+      schedule: false,
+    });
+    // A database restart makes idle pool clients and the polling loop fail: log it and carry on
+    // (pg-boss reconnects on its next query). Without a listener the 'error' event would end the process.
+    this.boss.on('error', (err: Error) => logger.error({ err }, 'job queue: database error (jobs wait until it is back)'));
+  }
+
+  start(): Promise<PgBoss> {
+    this.starting ??= this.open().catch((err: unknown) => {
+      this.starting = undefined; // let a later call try again, e.g. once the database is back
+      throw err;
+    });
+    return this.starting;
+  }
+
+  private async open(): Promise<PgBoss> {
+    await this.boss.start();
+    const mail = {
+      retryLimit: this.options.mailRetryLimit,
+      retryDelay: this.options.mailRetryDelaySeconds,
+      retryBackoff: true,
+      // An attempt that takes longer than this is treated as lost and retried; the SMTP timeouts are far shorter.
+      expireInSeconds: 5 * 60,
+      deadLetter: MAIL_UNDELIVERED_QUEUE,
+    };
+    await this.boss.createQueue(MAIL_UNDELIVERED_QUEUE, { name: MAIL_UNDELIVERED_QUEUE, retentionMinutes: 60 * 24 * 30 });
+    await this.boss.createQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...mail });
+    await this.boss.updateQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...mail }); // settings changed in config apply to the existing queue
+    return this.boss;
+  }
+
+  /** Works the named queue one job at a time; returns when the worker is registered. */
+  async work<T extends object>(name: string, handler: (job: PgBoss.Job<T>) => Promise<void>): Promise<void> {
+    const boss = await this.start();
+    const id = await boss.work<T>(name, { batchSize: 1, pollingIntervalSeconds: this.options.pollSeconds }, async ([job]) => {
+      if (job) await handler(job);
+    });
+    this.workerIds.push(id);
+  }
+
+  /** Wakes this process's workers now instead of at their next poll (a job was just committed). */
+  wake(): void {
+    for (const id of this.workerIds) this.boss.notifyWorker(id);
+  }
+
+  /** Sends a job; inside `transaction` the job exists only if that transaction commits. */
+  async send(name: string, data: object, transaction?: Transaction): Promise<string> {
+    const boss = await this.start();
+    const id = await boss.send(name, data, transaction ? { db: inTransaction(transaction) } : {});
+    if (!id) throw new Error(`job queue: ${name} refused the job (is the queue created?)`);
+    if (transaction) transaction.afterCommit(() => this.wake());
+    else this.wake();
+    return id;
+  }
+
+  /** Stops working and closes the pool; waits for a job in progress (up to the timeout). */
+  async stop(timeoutMs = 10_000): Promise<void> {
+    if (!this.starting) return;
+    const starting = this.starting;
+    this.starting = undefined;
+    await starting.catch(() => undefined);
+    await this.boss.stop({ graceful: true, timeout: timeoutMs, wait: true }).catch((err: unknown) => logger.error({ err }, 'job queue: stop failed'));
+  }
+}
+
+/** pg-boss's way to write a job through someone else's connection: here, the caller's Sequelize transaction. */
+function inTransaction(transaction: Transaction): PgBoss.Db {
+  return {
+    executeSql: async (text: string, values: unknown[] = []) => {
+      const rows = await sequelize.query<Record<string, unknown>>(text, { bind: values.map((v) => v ?? null), transaction, type: QueryTypes.SELECT });
+      return { rows };
+    },
+  };
+}
+
+let shared: JobQueue | undefined;
+
+/** The process's queue on the configured database. */
+export function jobQueue(): JobQueue {
+  shared ??= new JobQueue({
+    connectionString: config.databaseUrl,
+    // Every process may do the upkeep; pg-boss lets one at a time do it.
+    supervise: true,
+    pollSeconds: config.jobPollSeconds,
+    mailRetryDelaySeconds: config.mailRetryDelaySeconds,
+    mailRetryLimit: config.mailRetryLimit,
+  });
+  return shared;
+}
+
+/** Stops the process's queue, if it was started. */
+export async function stopJobQueue(): Promise<void> {
+  await shared?.stop();
+}
