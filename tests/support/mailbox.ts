@@ -13,3 +13,15 @@ export async function waitForMail(to: string, timeoutMs = 15_000): Promise<Caugh
 }
 
 export const countMail = (to: string) => CaughtMail.count({ where: { to: { [Op.iLike]: `%${to}%` } } });
+
+/** Waits for a mail to this address whose subject or text matches: notices of one person arrive in any order. */
+export async function waitForMailAbout(to: string, about: RegExp, timeoutMs = 30_000): Promise<CaughtMail> {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    const mails = await CaughtMail.findAll({ where: { to: { [Op.iLike]: `%${to}%` } }, order: [['id', 'DESC']] });
+    const found = mails.find((m) => about.test(m.subject) || about.test(m.text));
+    if (found) return found;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`No mail for ${to} matching ${about} within ${timeoutMs} ms`);
+}

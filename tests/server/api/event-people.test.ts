@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { EventInvitation } from '@server/models/event-invitation';
 import { apiClient } from '../../support/api-client';
 import { ownerWithBuild, showWithClasses, signedIn } from '../../support/event-factory';
-import { waitForMail } from '../../support/mailbox';
+import { waitForMail, waitForMailAbout } from '../../support/mailbox';
 import { uniqueEmail } from '../../support/factories';
 
 const linkToken = (text: string) => /\/invitations\/([A-Za-z0-9_-]+)/.exec(text)![1]!;
@@ -47,7 +47,12 @@ describe('people of a show: invitations', () => {
     await organiser.client.post(`/api/events/${eventId}/invitations`, { email, role: 'gate' });
     const token = linkToken((await waitForMail(email)).text);
     const newcomer = await apiClient();
-    expect((await newcomer.post('/api/users', { email, name: 'Gale Gatekeeper', password: 'a long enough password' })).status).toBe(201);
+    expect((await newcomer.post('/api/users', { email, name: 'Gale Gatekeeper', password: 'a long enough password' })).status).toBe(202);
+    // A new account confirms its address before it takes a role: follow the confirmation mail, then sign in.
+    const confirmation = await waitForMailAbout(email, /Confirm your e-mail/);
+    const verifyToken = /verify-email\?token=([A-Za-z0-9_-]+)/.exec(confirmation.text)?.[1];
+    expect((await newcomer.post('/api/email-verifications/confirm', { token: verifyToken })).status).toBeLessThan(300);
+    expect((await newcomer.signIn(email, 'a long enough password')).status).toBe(200);
     expect((await newcomer.post(`/api/invitations/${token}/accept`)).body.role).toBe('gate');
 
     const email2 = uniqueEmail('late');
