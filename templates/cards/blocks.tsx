@@ -331,7 +331,7 @@ const lineSizes = (leg: Legibility, k: number, grow = 1.35) => sizeSteps(Math.ma
 
 export function engineBlock({ content, k, leg }: Ctx): BlockSpec | undefined {
   if (!content.engineLine) return undefined;
-  return flowBlock('Engine line', [{ label: 'Engine', lines: para([{ text: content.engineLine, face: 'text-600' }]) }], lineSizes(leg, k, 1.45), {});
+  return flowBlock('Engine line', [{ label: 'Engine', lines: para([{ text: 'ENGINE  ', face: 'display-600', color: SIGNAL, letterSpacing: 0.5 }, { text: content.engineLine, face: 'text-600' }]) }], lineSizes(leg, k, 1.45), {});
 }
 
 /** One line per section: the label in the signal colour, then its summary. */

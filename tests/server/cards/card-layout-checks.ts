@@ -148,7 +148,7 @@ export function describeCardLayouts(design: CardDesign) {
       // The longest build cannot fit whole anywhere: it is cut, and says so; the empty one never is.
       expect(leftOffs.filter((l) => l.c.name.startsWith('notes')).every((l) => l.leftOff.length > 0)).toBe(true);
       expect(leftOffs.filter((l) => l.c.name === 'empty build').every((l) => l.leftOff.length === 0)).toBe(true);
-    }, 240_000);
+    });
   });
 }
 

@@ -24,7 +24,10 @@ describe('windshield card templates', () => {
   it('prints the title, figures with their provenance in words, section lines, credits, the short URL and the show', async () => {
     const build = typicalPublicBuild({ weight: { value: 1540, unit: 'kg', provenance: 'estimated' }, dynoRuns: [] });
     for (const design of CARD_DESIGNS) {
-      const text = (await pdfText(await renderCardPdf(build, { ...settingsFor({ design, paper: 'letter', orientation: 'portrait' }), units: 'metric' }, { show: SHOW }))).replace(/\s+/g, ' ');
+      // Tabloid, where all of it fits (nothing left off), so every part must be there.
+      const { pdf, leftOff } = await renderCard(build, { ...settingsFor({ design, paper: 'tabloid', orientation: 'portrait' }), units: 'metric' }, { show: SHOW });
+      expect(leftOff, design).toEqual([]);
+      const text = (await pdfText(pdf)).replace(/\s+/g, ' ');
       expect(text).toMatch(/1969\s*NIGHT\s*SHIFT/); // the owner's title, with the model year
       expect(text).toMatch(/FASTBACK\s*COUPE/i); // the body line
       expect(text).toMatch(/est\./i); // 650 hp est. flywheel power, in words
