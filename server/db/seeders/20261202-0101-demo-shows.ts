@@ -7,6 +7,7 @@ import { Event } from '../../models/event';
 import { EventMembership } from '../../models/event-membership';
 import { hashPassword } from '../../auth/passwords';
 import { config } from '../../config';
+import { wallTimeToInstant } from '@shared/calc/time-zone';
 import { startMailCatcher } from '../../mail/catcher';
 import { createEvent, takeLifecycleStep } from '../../services/events';
 import { addClass } from '../../services/event-classes';
@@ -37,15 +38,17 @@ async function seedShows() {
   const build = async (title: string) => (await Build.findOne({ where: { title } }))!;
   const organiser = await person('organiser@placard.test');
   const now = Date.now();
+  // Round times on the show's own clock: "in 30 days at 08:00", not whatever minute the demo was loaded.
+  const at = (days: number, time: string, timeZone: string) => wallTimeToInstant(`${new Date(now + days * DAY).toISOString().slice(0, 10)}T${time}`, timeZone);
 
   // The show taking entries.
   const open = await createEvent(organiser, {
     ...DEMO_OPEN_SHOW,
-    startsAt: new Date(now + 30 * DAY).toISOString(),
-    endsAt: new Date(now + 31 * DAY + 8 * 3600_000).toISOString(),
-    registrationOpensAt: new Date(now - 10 * DAY).toISOString(),
-    registrationClosesAt: new Date(now + 23 * DAY).toISOString(),
-    refundRule: { fullRefundUntil: new Date(now + 16 * DAY).toISOString(), afterwardsPercent: 50 },
+    startsAt: at(30, '08:00', DEMO_OPEN_SHOW.timeZone),
+    endsAt: at(31, '17:00', DEMO_OPEN_SHOW.timeZone),
+    registrationOpensAt: at(-10, '09:00', DEMO_OPEN_SHOW.timeZone),
+    registrationClosesAt: at(23, '23:59', DEMO_OPEN_SHOW.timeZone),
+    refundRule: { fullRefundUntil: at(16, '23:59', DEMO_OPEN_SHOW.timeZone), afterwardsPercent: 50 },
   });
   const classes = [];
   for (const c of DEMO_SHOW_CLASSES) classes.push(await addClass(open.id, organiser, { ...c, description: c.description }));
@@ -105,10 +108,10 @@ async function seedShows() {
   // Move it into the past, keeping the order of its dates.
   await Event.update(
     {
-      startsAt: new Date(now - 40 * DAY),
-      endsAt: new Date(now - 40 * DAY + 9 * 3600_000),
-      registrationOpensAt: new Date(now - 70 * DAY),
-      registrationClosesAt: new Date(now - 42 * DAY),
+      startsAt: new Date(at(-40, '09:00', DEMO_FINISHED_SHOW.timeZone)),
+      endsAt: new Date(at(-40, '18:00', DEMO_FINISHED_SHOW.timeZone)),
+      registrationOpensAt: new Date(at(-70, '09:00', DEMO_FINISHED_SHOW.timeZone)),
+      registrationClosesAt: new Date(at(-42, '23:59', DEMO_FINISHED_SHOW.timeZone)),
     },
     { where: { id: done.id } },
   );

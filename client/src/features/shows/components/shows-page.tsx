@@ -22,7 +22,7 @@ function nextFor(show: EventSummary): string {
     return 'The show is over.';
   }
   if (show.myRoles.includes('judge')) return show.status === 'judging' ? 'Judging is open: score your cars.' : show.status === 'results_published' || show.status === 'archived' ? 'The show is over.' : 'Read the judging sheet before the day; scoring opens when judging starts.';
-  if (show.myRoles.includes('gate')) return show.status === 'show_day' ? 'The gate is open: check cars in by their number.' : 'Check-in opens on show day.';
+  if (show.myRoles.includes('gate')) return show.status === 'show_day' ? 'The gate is open: check cars in by their number.' : ['judging', 'results_published', 'archived'].includes(show.status) ? 'The gate is closed: the cars are in.' : 'Check-in opens on show day.';
   return '';
 }
 
