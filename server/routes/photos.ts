@@ -62,7 +62,7 @@ photosRouter.post('/builds/:id/photos', requireUser, photoUploadLimiter, async (
   const build = await editableBuild(req, id);
   const files = (await receivePhotos(req, res)).map((f) => ({ buffer: f.buffer, originalName: f.originalname }));
   const { captions } = parseBody(req, PhotoUploadFieldsSchema);
-  const photos = await storePhotosForBuild(build.id, files, captions);
+  const photos = await storePhotosForBuild(build.id, files, captions, currentUser(req).id);
   res.status(201).json({ photos: photos.map(presentPhoto) });
 });
 
