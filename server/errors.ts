@@ -37,3 +37,9 @@ export class ConflictError extends AppError {
     super(409, 'CONFLICT', message, fields);
   }
 }
+/** The database (or another service a request needs) cannot be reached: try again shortly. */
+export class UnavailableError extends AppError {
+  constructor(message = 'Placard cannot reach its database right now. Please try again in a moment.') {
+    super(503, 'UNAVAILABLE', message);
+  }
+}

@@ -2,7 +2,8 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { UniqueConstraintError, ValidationError as SequelizeValidationError } from 'sequelize';
 import { ZodError } from 'zod';
 import { fieldsFromIssues, type ErrorResponse } from '@shared/errors';
-import { AppError, NotFoundError } from '../errors';
+import { AppError, NotFoundError, UnavailableError } from '../errors';
+import { isDatabaseUnavailable } from '../db/unavailable';
 
 export const apiNotFound: RequestHandler = () => {
   throw new NotFoundError('No such API endpoint.');
@@ -10,6 +11,7 @@ export const apiNotFound: RequestHandler = () => {
 
 function toAppError(err: unknown): AppError | undefined {
   if (err instanceof AppError) return err;
+  if (isDatabaseUnavailable(err)) return new UnavailableError();
   if (err instanceof ZodError) return new AppError(400, 'VALIDATION_FAILED', 'Some fields need attention.', fieldsFromIssues(err.issues));
   if (err instanceof UniqueConstraintError) {
     const fields = Object.fromEntries(err.errors.map((e) => [e.path ?? '_', `This ${e.path ?? 'value'} is already taken.`]));
@@ -35,6 +37,10 @@ function toAppError(err: unknown): AppError | undefined {
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const known = toAppError(err);
   if (!known) req.log?.error({ err }, 'unhandled error');
+  else if (known instanceof UnavailableError) {
+    req.log?.warn({ err }, 'database unavailable');
+    if (!res.headersSent) res.set('Retry-After', '5');
+  }
   const status = known?.status ?? 500;
   const body: ErrorResponse = {
     error: {

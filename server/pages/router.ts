@@ -6,6 +6,7 @@ import { loadPublicBuild, publicVersion } from '../services/public-builds';
 import { NOT_FOUND_HTML, renderPublicBuildPage } from './public-build-page';
 import { compressPage, matchesEtag, pickEncoding, publicPageCache, type CachedPage } from './page-cache';
 import { OSWALD_URL } from './page-styles';
+import { isDatabaseUnavailable } from '../db/unavailable';
 
 /** Server-rendered public pages (/c/<code>): complete HTML, no app bundle, no session. */
 export const pagesRouter = Router();
@@ -52,7 +53,15 @@ pagesRouter.get('/c/:code', async (req, res) => {
   const now = Date.now();
   if (cached && now - cached.checkedAt < publicPageCache.revalidateAfterMs) return send(req, res, cached, !chosen);
 
-  const version = await publicVersion(code);
+  let version: string | null;
+  try {
+    version = await publicVersion(code);
+  } catch (err) {
+    // The database is away: a page we already rendered is still the build as last published.
+    if (!cached || !isDatabaseUnavailable(err)) throw err;
+    req.log.warn({ err }, 'database unavailable: public page served from the cache');
+    return send(req, res, cached, !chosen);
+  }
   if (!version) {
     publicPageCache.delete(key);
     return notFound(res);

@@ -19,8 +19,9 @@ describe('health when the database is down', () => {
     expect(res.status).toBe(503);
     expect(res.body).toEqual({ status: 'degraded', db: 'down' });
     const session = await request(app).get('/api/session');
-    expect(session.status).toBe(500);
-    expect(session.body.error.code).toBe('INTERNAL');
+    expect(session.status).toBe(503);
+    expect(session.body.error.code).toBe('UNAVAILABLE');
+    expect(session.headers['retry-after']).toBe('5');
     expect(JSON.stringify(session.body)).not.toMatch(/ECONNREFUSED|127\.0\.0\.1|at .*\.ts/);
   });
 });
