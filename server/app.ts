@@ -11,6 +11,7 @@ import { passport } from './auth/passport';
 import { sessionMiddleware } from './session-store';
 import { csrfProtection } from './middlewares/csrf';
 import { apiLimiter } from './middlewares/rate-limits';
+import { emptyBodyIsNoBody, jsonBodiesOnly, noteEmptyBody } from './middlewares/body-type';
 import { apiNotFound, errorHandler } from './middlewares/error-handler';
 import { healthRouter } from './routes/health';
 import { sessionRouter } from './routes/session';
@@ -21,7 +22,7 @@ import { emailVerificationsRouter } from './routes/email-verifications';
 import { adminRouter } from './routes/admin';
 import { buildsRouter } from './routes/builds';
 import { buildRecordsRouter } from './routes/build-records';
-import { photosRouter } from './routes/photos';
+import { PHOTO_UPLOAD_PATH, photosRouter } from './routes/photos';
 import { cardsRouter } from './routes/cards';
 import { buildPreviewRouter } from './routes/build-preview';
 import { publicApiRouter } from './routes/public';
@@ -41,7 +42,8 @@ function apiRouter() {
     res.set('Cache-Control', 'no-store'); // answers depend on who asks
     next();
   });
-  api.use(express.json({ limit: '1mb' }));
+  api.use(jsonBodiesOnly([PHOTO_UPLOAD_PATH]));
+  api.use(express.json({ limit: '1mb', verify: noteEmptyBody }), emptyBodyIsNoBody);
   api.use(sessionMiddleware);
   api.use(passport.session());
   api.use(csrfProtection);

@@ -23,10 +23,10 @@ const EnvSchema = z.object({
   SESSION_SECRET: z.string().min(16).optional(),
   SESSION_MAX_AGE_DAYS: z.coerce.number().int().min(1).max(365).default(30),
   TRUST_PROXY: bool.default(false),
-  SMTP_URL: z.string().default('smtp://127.0.0.1:1025'),
+  SMTP_URL: z.string().optional().transform((v) => v || undefined),
   MAIL_FROM: z.string().default('Placard <no-reply@placard.test>'),
   DEMO_MODE: bool.optional(),
-  MAIL_CATCHER_PORT: z.coerce.number().int().min(0).max(65535).default(1025),
+  MAIL_CATCHER_PORT: z.coerce.number().int().min(0).max(65535).optional(),
   SIGNIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   SIGNIN_RATE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   SIGNIN_ADDRESS_RATE_LIMIT: z.coerce.number().int().min(1).default(100),
@@ -73,6 +73,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
   if (e.STRIPE_SECRET_KEY && !e.STRIPE_WEBHOOK_SECRET) {
     throw new Error('Invalid environment:\n  STRIPE_WEBHOOK_SECRET: required with STRIPE_SECRET_KEY (the signing secret of the webhook endpoint)');
   }
+  // One setting moves both ends of demo mail: the catcher listens on MAIL_CATCHER_PORT and, unless
+  // SMTP_URL names another server, mail is sent there. Both set and disagreeing is refused, since
+  // mail would go where no catcher listens.
+  const mailCatcherPort = e.MAIL_CATCHER_PORT ?? 1025;
+  const catcherUrl = `smtp://127.0.0.1:${mailCatcherPort}`;
+  if (e.MAIL_CATCHER_PORT !== undefined && e.SMTP_URL !== undefined && e.SMTP_URL.replace(/\/$/, '') !== catcherUrl) {
+    throw new Error(`Invalid environment:\n  MAIL_CATCHER_PORT: the catcher would listen on ${mailCatcherPort} but SMTP_URL sends mail to ${e.SMTP_URL}; set only one of them (or SMTP_URL=${catcherUrl})`);
+  }
   const publicBaseUrl = (e.PUBLIC_BASE_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/$/, '');
   return {
     env: e.NODE_ENV,
@@ -91,10 +99,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     sessionMaxAgeMs: e.SESSION_MAX_AGE_DAYS * 24 * 3600 * 1000,
     secureCookies: publicBaseUrl.startsWith('https://'),
     trustProxy: e.TRUST_PROXY,
-    smtpUrl: e.SMTP_URL,
+    smtpUrl: e.SMTP_URL ?? catcherUrl,
     mailFrom: e.MAIL_FROM,
     demoMode: e.DEMO_MODE ?? !production,
-    mailCatcherPort: e.MAIL_CATCHER_PORT,
+    mailCatcherPort,
     signInRateLimit: e.SIGNIN_RATE_LIMIT,
     signInRateWindowMs: e.SIGNIN_RATE_WINDOW_MINUTES * 60 * 1000,
     /** Sign-ins per address in the same window whatever the e-mail: one address trying many accounts. */

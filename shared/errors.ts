@@ -11,6 +11,7 @@ export const ERROR_CODES = [
   'CONFLICT',
   'RATE_LIMITED',
   'PAYLOAD_TOO_LARGE',
+  'UNSUPPORTED_MEDIA_TYPE',
   'UNAVAILABLE',
   'INTERNAL',
 ] as const;
@@ -26,12 +27,22 @@ export const ErrorResponseSchema = z.object({
 });
 export type ErrorResponse = z.infer<typeof ErrorResponseSchema>;
 
-/** Turns zod issues into the `fields` map of the error shape (first message per field wins). */
-export function fieldsFromIssues(issues: ReadonlyArray<{ path: PropertyKey[]; message: string }>): Record<string, string> {
+type Issue = { path: PropertyKey[]; message: string; code?: string; keys?: readonly string[] };
+
+/**
+ * Turns zod issues into the `fields` map of the error shape (first message per field wins).
+ * A key the schema does not know (a strict object's `unrecognized_keys`) is named as its own field.
+ */
+export function fieldsFromIssues(issues: ReadonlyArray<Issue>): Record<string, string> {
   const fields: Record<string, string> = {};
+  const put = (key: string, message: string) => {
+    if (!(key in fields)) fields[key] = message;
+  };
   for (const issue of issues) {
-    const key = issue.path.map(String).join('.') || '_';
-    if (!(key in fields)) fields[key] = issue.message;
+    const at = issue.path.map(String).join('.');
+    if (issue.code === 'unrecognized_keys' && issue.keys?.length) {
+      for (const k of issue.keys) put(at ? `${at}.${k}` : k, `There is no field "${k}" here.`);
+    } else put(at || '_', issue.message);
   }
   return fields;
 }

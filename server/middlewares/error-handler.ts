@@ -28,7 +28,9 @@ function toAppError(err: unknown): AppError | undefined {
   // %-escape in the path, an unknown charset, a missing asset): answer those with their status, in our
   // words (their messages can name files on the server, so they are never passed on).
   if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500) {
-    return e.status === 404 ? new NotFoundError() : new AppError(e.status, 'BAD_REQUEST', 'The request could not be read.');
+    if (e.status === 404) return new NotFoundError();
+    if (e.status === 415) return new AppError(415, 'UNSUPPORTED_MEDIA_TYPE', 'The request body is in an encoding we do not read: send UTF-8 JSON.');
+    return new AppError(e.status, 'BAD_REQUEST', 'The request could not be read.');
   }
   return undefined;
 }

@@ -108,6 +108,14 @@ export const verificationConfirmLimiter = limiter('verify-confirm', {
   message: 'Too many attempts. Try again in an hour.',
 });
 
+/** Password changes per person: each attempt checks the current password with a full argon2 hash. */
+export const PASSWORD_CHANGE_LIMIT = { windowMs: 15 * 60 * 1000, limit: 10 };
+export const passwordChangeLimiter = limiter('password-change', {
+  ...PASSWORD_CHANGE_LIMIT,
+  key: person,
+  message: 'Too many password changes. Wait a few minutes and try again.',
+});
+
 /** Card PDFs per person: each render lays out a whole page and embeds a photo (the designer asks for one per change, 350 ms apart). */
 export const CARD_RENDER_LIMIT = { windowMs: 60 * 1000, limit: 60 };
 export const cardRenderLimiter = limiter('card-render', {

@@ -1,7 +1,7 @@
 import type { Request, RequestHandler } from 'express';
 import type { z } from 'zod';
 import { fieldsFromIssues } from '@shared/errors';
-import { ValidationError } from '../errors';
+import { AppError, ValidationError } from '../errors';
 
 type Part = 'body' | 'query' | 'params';
 
@@ -19,7 +19,13 @@ export function parseWith<S extends z.ZodType>(schema: S, value: unknown): z.out
  */
 export const parseParams = <S extends z.ZodType>(req: Request, schema: S): z.output<S> => parseWith(schema, req.params);
 export const parseQuery = <S extends z.ZodType>(req: Request, schema: S): z.output<S> => parseWith(schema, req.query);
-export const parseBody = <S extends z.ZodType>(req: Request, schema: S): z.output<S> => parseWith(schema, req.body);
+export const parseBody = <S extends z.ZodType>(req: Request, schema: S): z.output<S> => parseWith(schema, requireBody(req));
+
+/** A route that reads a body needs one: no body (or zero bytes of JSON) is a 400, never taken for `{}`. */
+function requireBody(req: Request): unknown {
+  if (req.body === undefined) throw new AppError(400, 'BAD_REQUEST', 'The request has no body: send the fields as a JSON object.', { _: 'Send a JSON object.' });
+  return req.body;
+}
 
 /**
  * Older middleware form: the parsed value lands in res.locals[part]. Being replaced by the
@@ -27,7 +33,7 @@ export const parseBody = <S extends z.ZodType>(req: Request, schema: S): z.outpu
  */
 export function validate<S extends z.ZodType>(part: Part, schema: S): RequestHandler {
   return (req, res, next) => {
-    res.locals[part] = parseWith(schema, req[part]);
+    res.locals[part] = parseWith(schema, part === 'body' ? requireBody(req) : req[part]);
     next();
   };
 }

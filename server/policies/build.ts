@@ -1,5 +1,6 @@
 import type { Actor } from './actor';
 import { authorize } from './authorize';
+import { NotFoundError } from '../errors';
 
 export type BuildAction = 'view' | 'edit' | 'delete' | 'publish' | 'viewPrivate';
 type BuildRecord = { ownerId: number; published: boolean };
@@ -20,8 +21,14 @@ export function can(actor: Actor | null | undefined, action: BuildAction | 'crea
 export const canViewPublic = (build: Pick<BuildRecord, 'published'> | null | undefined, owner: { disabledAt: Date | null } | null | undefined) =>
   Boolean(build?.published && owner && !owner.disabledAt);
 
-export const authorizeBuild = (actor: Actor | null | undefined, action: BuildAction | 'create', build?: BuildRecord) =>
-  authorize(can(actor, action, build), actor, 'This build belongs to someone else.');
+/**
+ * Someone signed in who may not even see a build is told it does not exist (404), exactly as for a
+ * missing one, so ids cannot be probed for which builds exist; one who may see it but not do this gets 403.
+ */
+export function authorizeBuild(actor: Actor | null | undefined, action: BuildAction | 'create', build?: BuildRecord): void {
+  if (actor && build && !can(actor, 'view', build)) throw new NotFoundError('No such build.');
+  authorize(can(actor, action, build), actor, 'You may not do that with this build.');
+}
 
 export const buildAbilities = (actor: Actor | null | undefined, build: BuildRecord) => ({
   edit: can(actor, 'edit', build),

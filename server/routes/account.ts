@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { AccountUpdateSchema, PasswordChangeSchema, type AccountUpdateInput, type PasswordChangeInput } from '@shared/schemas/user';
 import { validate } from '../middlewares/validate';
+import { passwordChangeLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeUser } from '../policies/user';
 import { changePassword, updateAccount } from '../services/users';
@@ -15,7 +16,7 @@ accountRouter.patch('/account', requireUser, validate('body', AccountUpdateSchem
   res.json({ user: presentCurrentUser(updated) });
 });
 
-accountRouter.post('/account/password', requireUser, validate('body', PasswordChangeSchema), async (req, res) => {
+accountRouter.post('/account/password', requireUser, passwordChangeLimiter, validate('body', PasswordChangeSchema), async (req, res) => {
   const user = currentUser(req);
   authorizeUser(user, 'updateAccount', user);
   await changePassword(user, res.locals.body as PasswordChangeInput, req.sessionID);

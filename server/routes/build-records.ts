@@ -1,6 +1,6 @@
 import { Router, type Request, type Response } from 'express';
-import { z } from 'zod';
 import { DynoRunCreateSchema, WeighInCreateSchema, type DynoRunCreateInput, type WeighInCreateInput } from '@shared/schemas/build';
+import { IdParamSchema, IdSchema } from '@shared/schemas/params';
 import { validate } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
@@ -13,9 +13,8 @@ import type { Build } from '../models/build';
 export const buildRecordsRouter = Router();
 buildRecordsRouter.use('/builds', requireUser);
 
-const positiveId = (label: string) => z.coerce.number({ error: `${label} must be a number.` }).int().positive({ error: `${label} must be a positive whole number.` });
-const BuildParams = z.object({ id: positiveId('Id') });
-const RecordParams = BuildParams.extend({ recordId: positiveId('Record id') });
+const BuildParams = IdParamSchema;
+const RecordParams = IdParamSchema.extend({ recordId: IdSchema });
 type Params = { id: number; recordId: number };
 
 async function editableBuild(req: Request, res: Response) {

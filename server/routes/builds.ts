@@ -1,7 +1,9 @@
 import { Router } from 'express';
+import type { z } from 'zod';
 import { BuildCreateSchema, BuildPrivateSchema, BuildUpdateSchema, CreditsSchema, PublishSchema } from '@shared/schemas/build';
 import { SECTION_SCHEMAS, SectionKindParamSchema } from '@shared/schemas/build-sections';
 import { IdParamSchema } from '@shared/schemas/params';
+import { replaceBody } from '@shared/schemas/body';
 import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
@@ -14,6 +16,10 @@ export const buildsRouter = Router();
 buildsRouter.use('/builds', requireUser);
 
 const SectionParamsSchema = IdParamSchema.extend(SectionKindParamSchema.shape);
+// PUT replaces the whole object, so a body must name only fields it knows (see replaceBody).
+const SECTION_REPLACE_SCHEMAS = Object.fromEntries(Object.entries(SECTION_SCHEMAS).map(([kind, schema]) => [kind, replaceBody(schema as z.ZodObject)])) as unknown as typeof SECTION_SCHEMAS;
+const PrivateReplaceSchema = replaceBody(BuildPrivateSchema);
+const CreditsReplaceSchema = replaceBody(CreditsSchema);
 
 buildsRouter.get('/builds', async (req, res) => {
   const builds = await listBuildsOf(currentUser(req));
@@ -46,7 +52,7 @@ buildsRouter.patch('/builds/:id', async (req, res) => {
 
 buildsRouter.put('/builds/:id/sections/:kind', async (req, res) => {
   const { id, kind } = parseParams(req, SectionParamsSchema);
-  const section = parseBody(req, SECTION_SCHEMAS[kind]);
+  const section = parseBody(req, SECTION_REPLACE_SCHEMAS[kind]);
   const build = await findBuild(id);
   authorizeBuild(currentUser(req), 'edit', build);
   await saveSection(build, kind, section);
@@ -55,7 +61,7 @@ buildsRouter.put('/builds/:id/sections/:kind', async (req, res) => {
 
 buildsRouter.put('/builds/:id/private', async (req, res) => {
   const { id } = parseParams(req, IdParamSchema);
-  const input = parseBody(req, BuildPrivateSchema);
+  const input = parseBody(req, PrivateReplaceSchema);
   const build = await findBuild(id);
   authorizeBuild(currentUser(req), 'edit', build);
   await savePrivate(build, input);
@@ -64,7 +70,7 @@ buildsRouter.put('/builds/:id/private', async (req, res) => {
 
 buildsRouter.put('/builds/:id/credits', async (req, res) => {
   const { id } = parseParams(req, IdParamSchema);
-  const input = parseBody(req, CreditsSchema);
+  const input = parseBody(req, CreditsReplaceSchema);
   const build = await findBuild(id);
   authorizeBuild(currentUser(req), 'edit', build);
   await saveCredits(build, input.credits);

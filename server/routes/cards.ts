@@ -1,5 +1,6 @@
 import { Router, type Response } from 'express';
 import { IdParamSchema } from '@shared/schemas/params';
+import { replaceBody } from '@shared/schemas/body';
 import { CardQuerySchema, CardSettingsSchema, type CardQuery, type CardSettings, type CardSettingsResponse } from '@shared/schemas/card';
 import { SECTION_KINDS } from '@shared/schemas/build-sections';
 import { validate } from '../middlewares/validate';
@@ -15,6 +16,7 @@ import { User } from '../models/user';
 /** The owner's windshield cards and QR codes (mounted under /api, after session and CSRF). */
 export const cardsRouter = Router();
 
+const CardSettingsReplaceSchema = replaceBody(CardSettingsSchema);
 const idOf = (res: Response) => (res.locals.params as { id: number }).id;
 
 cardsRouter.get('/builds/:id/card-settings', requireUser, validate('params', IdParamSchema), async (req, res) => {
@@ -35,7 +37,7 @@ cardsRouter.get('/builds/:id/card-settings', requireUser, validate('params', IdP
   res.json(body);
 });
 
-cardsRouter.put('/builds/:id/card-settings', requireUser, validate('params', IdParamSchema), validate('body', CardSettingsSchema), async (req, res) => {
+cardsRouter.put('/builds/:id/card-settings', requireUser, validate('params', IdParamSchema), validate('body', CardSettingsReplaceSchema), async (req, res) => {
   const build = await findBuild(idOf(res));
   authorizeBuild(currentUser(req), 'edit', build);
   const settings = res.locals.body as CardSettings;

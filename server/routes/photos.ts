@@ -3,7 +3,7 @@ import multer from 'multer';
 import { z } from 'zod';
 import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES, PhotoOrderSchema, PhotoUpdateSchema } from '@shared/schemas/build';
 import { shortText } from '@shared/schemas/figure';
-import { IdParamSchema } from '@shared/schemas/params';
+import { IdParamSchema, IdSchema } from '@shared/schemas/params';
 import { validate } from '../middlewares/validate';
 import { photoUploadLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
@@ -15,10 +15,10 @@ import { AppError, ValidationError } from '../errors';
 import type { Build } from '../models/build';
 
 export const photosRouter = Router();
+/** The one route that takes multipart (see jsonBodiesOnly in app.ts). */
+export const PHOTO_UPLOAD_PATH = /^\/builds\/[^/]+\/photos\/?$/;
 
-const PhotoParamsSchema = IdParamSchema.extend({
-  photoId: z.coerce.number({ error: 'Photo id must be a number.' }).int().positive({ error: 'Photo id must be a positive whole number.' }),
-});
+const PhotoParamsSchema = IdParamSchema.extend({ photoId: IdSchema });
 const caption = shortText('Caption', 300);
 /** The text fields sent beside the files: `captions`, one per photo in the same order (repeat the field). */
 const PhotoUploadFieldsSchema = z.object({

@@ -99,9 +99,9 @@ export async function updateOverview(build: Build, input: BuildUpdateInput): Pro
   });
 }
 
-/** A measured figure's evidence photo must be one of this build's own photos. */
+/** A measured figure's evidence photo, wherever it sits (lists included), must be one of this build's own photos. */
 async function checkEvidencePhotos(buildId: number, prefix: string, data: unknown, transaction?: Transaction): Promise<void> {
-  const wanted = [...figuresByPath(data)].filter(([, f]) => f.evidencePhotoId !== undefined);
+  const wanted = [...figuresByPath(data, '', { lists: true })].filter(([, f]) => f.evidencePhotoId !== undefined);
   if (!wanted.length) return;
   const ids = [...new Set(wanted.map(([, f]) => f.evidencePhotoId!))];
   const found = new Set((await Photo.findAll({ where: { id: { [Op.in]: ids }, buildId }, attributes: ['id'], transaction })).map((p) => p.id));

@@ -5,16 +5,20 @@ import { FigureChange } from '../models/figure-change';
 const isFigure = (v: unknown): v is FigureInput =>
   typeof v === 'object' && v !== null && 'value' in v && 'unit' in v && 'provenance' in v && typeof (v as FigureInput).value === 'number';
 
-/** Every figure in a nested section object, by dotted path ("front.springRate"). */
-export function figuresByPath(data: unknown, prefix = ''): Map<string, FigureInput> {
+/**
+ * Every figure in a nested section object, by dotted path ("front.springRate"). With `lists`, the
+ * figures inside lists too ("tubes.2.wall"): every figure that can carry an evidence photo. The
+ * history leaves lists out, since a row's index is not a lasting name for it.
+ */
+export function figuresByPath(data: unknown, prefix = '', opts: { lists?: boolean } = {}): Map<string, FigureInput> {
   const found = new Map<string, FigureInput>();
   if (isFigure(data)) {
     found.set(prefix, data);
     return found;
   }
-  if (data && typeof data === 'object' && !Array.isArray(data)) {
+  if (data && typeof data === 'object' && (opts.lists || !Array.isArray(data))) {
     for (const [key, value] of Object.entries(data)) {
-      for (const [p, f] of figuresByPath(value, prefix ? `${prefix}.${key}` : key)) found.set(p, f);
+      for (const [p, f] of figuresByPath(value, prefix ? `${prefix}.${key}` : key, opts)) found.set(p, f);
     }
   }
   return found;

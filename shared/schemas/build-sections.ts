@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { tryParseTyreCode } from '../calc/tyres';
 import { boundedNumber, figureSchema, shortText } from './figure';
+import { text } from './text';
 
 /** Who made a part or a section: the owner, a shop or person, a donor vehicle, or bought new. */
 export const MADE_BY_KINDS = ['owner', 'shop', 'donor', 'new'] as const;
@@ -144,8 +145,7 @@ export const BrakesSectionSchema = z.object({
 });
 
 // Wheels and tyres (staggered front and rear is normal). Rim sizes are quoted in inches by the trade.
-export const TyreCodeSchema = z
-  .string()
+export const TyreCodeSchema = text('Tyre size')
   .trim()
   .max(40)
   .superRefine((code, ctx) => {

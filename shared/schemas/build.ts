@@ -2,6 +2,8 @@ import { z } from 'zod';
 import { boundedNumber, figureSchema, shortText, type FigureInput } from './figure';
 import type { Sections, SectionKind } from './build-sections';
 import { parseDynoCsv } from './dyno-csv';
+import { text } from './text';
+import { calendarDate } from './dates';
 
 export const BUILD_STYLES = ['hot-rod', 'street-rod', 'custom', 'restomod', 'pro-touring', 'muscle', 'gasser', 'rat-rod', 'lowrider', 'truck', 'drag', 'other'] as const;
 export const BUILD_STYLE_LABELS: Record<(typeof BUILD_STYLES)[number], string> = {
@@ -29,11 +31,11 @@ export const STORY_MAX = 10_000;
 
 const currentYear = new Date().getFullYear();
 export const BuildOverviewSchema = z.object({
-  title: z.string({ error: 'Title is required.' }).trim().min(1, { error: 'Give the build a title.' }).max(TITLE_MAX, { error: `Title must be at most ${TITLE_MAX} characters.` }),
+  title: text('Title').trim().min(1, { error: 'Give the build a title.' }).max(TITLE_MAX, { error: `Title must be at most ${TITLE_MAX} characters.` }),
   modelYear: boundedNumber('Model year', 1885, currentYear + 2, { int: true }).nullable().optional(),
   bodyOrigin: shortText('Body origin', 200).optional(),
   style: z.enum(BUILD_STYLES, { error: 'Choose a style.' }).nullable().optional(),
-  story: z.string().max(STORY_MAX, { error: `The story must be at most ${STORY_MAX} characters.` }).optional(),
+  story: text('Story').max(STORY_MAX, { error: `The story must be at most ${STORY_MAX} characters.` }).optional(),
   weight: figureSchema('mass', { label: 'Weight', min: 100, max: 10_000, unit: 'kg' }).nullable().optional(),
 });
 export const BuildCreateSchema = BuildOverviewSchema.pick({ title: true, modelYear: true, bodyOrigin: true, style: true });
@@ -88,7 +90,7 @@ export const DynoPointSchema = z.object({
 });
 export const DynoRunCreateSchema = z
   .object({
-    date: z.iso.date({ error: 'Use a date like 2026-05-30.' }),
+    date: calendarDate('Date'),
     facility: shortText('Facility', 120).optional(),
     standard: z.enum(CORRECTION_STANDARDS, { error: `Correction standard must be one of ${CORRECTION_STANDARDS.join(', ')}.` }),
     measuredAt: z.enum(['wheel', 'flywheel'], { error: 'Say whether the dyno measured at the wheels or the flywheel.' }),
@@ -100,7 +102,7 @@ export const DynoRunCreateSchema = z
     peakTorqueRpm: boundedNumber('Peak torque rpm', 300, 25_000, { int: true }),
     curve: z.array(DynoPointSchema).max(400, { error: 'At most 400 curve points.' }).default([]),
     /** The curve pasted as CSV, instead of `curve`. */
-    curveCsv: z.string().max(40_000, { error: 'The pasted curve is too long.' }).optional(),
+    curveCsv: text('Pasted curve').max(40_000, { error: 'The pasted curve is too long.' }).optional(),
     sheetPhotoId: z.number().int().positive().optional(),
     note: shortText('Note', 500).optional(),
   })
@@ -133,7 +135,7 @@ export type DynoRunFormInput = z.input<typeof DynoRunCreateSchema>;
 // Weigh-ins
 export const FUEL_LEVELS = ['empty', 'quarter', 'half', 'three-quarters', 'full'] as const;
 export const WeighInCreateSchema = z.object({
-  date: z.iso.date({ error: 'Use a date like 2026-05-30.' }),
+  date: calendarDate('Date'),
   unit: z.enum(['kg', 'lb'], { error: 'Unit must be kg or lb.' }),
   leftFront: boundedNumber('Left front', 10, 5000),
   rightFront: boundedNumber('Right front', 10, 5000),

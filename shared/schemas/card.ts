@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { SECTION_KINDS, type SectionKind } from './build-sections';
 import type { PROVENANCES } from './figure';
 import type { PublicBuild } from './build';
+import { shortText } from './text';
 
 /** Our three windshield-card designs. */
 export const CARD_DESIGNS = ['poster', 'data-sheet', 'compact'] as const;
@@ -61,9 +62,9 @@ export const DEFAULT_CARD_SETTINGS: CardSettings = CardSettingsSchema.parse({});
 
 /** The show block printed large on a card; filled from the entry once events exist, or typed by the owner. */
 export const CardShowSchema = z.object({
-  showName: z.string().trim().max(80, { error: 'Show name must be at most 80 characters.' }).optional(),
-  className: z.string().trim().max(60, { error: 'Class must be at most 60 characters.' }).optional(),
-  entryNumber: z.string().trim().max(8, { error: 'Entry number must be at most 8 characters.' }).optional(),
+  showName: shortText('Show name', 80).optional(),
+  className: shortText('Class', 60).optional(),
+  entryNumber: shortText('Entry number', 8).optional(),
 });
 export type CardShow = z.infer<typeof CardShowSchema>;
 

@@ -4,7 +4,8 @@ import { UNITS, convert, type QuantityKind, type UnitOf } from '../calc/units';
 export const PROVENANCES = ['measured', 'estimated', 'target'] as const;
 export const ProvenanceSchema = z.enum(PROVENANCES, { error: 'Say whether the figure is measured, estimated or a target.' });
 
-const IsoDateSchema = z.iso.date({ error: 'Use a date like 2026-05-30.' });
+import { calendarDate } from './dates';
+export { shortText } from './text';
 
 type Range<K extends QuantityKind> = { label: string; min: number; max: number; unit: UnitOf<K> };
 
@@ -20,7 +21,7 @@ export function figureSchema<K extends QuantityKind>(kind: K, range: Range<K>) {
       value: z.number({ error: `${range.label} must be a number.` }).finite({ error: `${range.label} must be a finite number.` }),
       unit: z.enum(units, { error: `${range.label}: the unit must be one of ${units.join(', ')}.` }),
       provenance: ProvenanceSchema,
-      measuredOn: IsoDateSchema.optional(),
+      measuredOn: calendarDate('Measurement date').optional(),
       evidencePhotoId: z.number().int().positive().optional(),
     })
     .superRefine((f, ctx) => {
@@ -49,5 +50,3 @@ export const boundedNumber = (label: string, min: number, max: number, opts: { i
     .min(min, { error: `${label} must be at least ${min}.` })
     .max(max, { error: `${label} must be at most ${max}.` });
 };
-
-export const shortText = (label: string, max = 200) => z.string().trim().max(max, { error: `${label} must be at most ${max} characters.` });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { EMAIL_MAX_LENGTH, NAME_MAX_LENGTH, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, PAGE_SIZE_MAX } from '../constants';
 
 export const EmailSchema = z
@@ -13,8 +14,7 @@ export const PasswordSchema = z
   .min(PASSWORD_MIN_LENGTH, { error: `Password must be at least ${PASSWORD_MIN_LENGTH} characters.` })
   .max(PASSWORD_MAX_LENGTH, { error: `Password must be at most ${PASSWORD_MAX_LENGTH} characters.` });
 
-export const NameSchema = z
-  .string({ error: 'Name is required.' })
+export const NameSchema = text('Name')
   .trim()
   .min(1, { error: 'Name is required.' })
   .max(NAME_MAX_LENGTH, { error: `Name must be at most ${NAME_MAX_LENGTH} characters.` });
@@ -113,7 +113,7 @@ export const AdminUserDisableSchema = z.object({ disabled: z.boolean({ error: 'D
 export type AdminUserDisableInput = z.infer<typeof AdminUserDisableSchema>;
 
 export const AdminUserListQuerySchema = z.object({
-  q: z.string().trim().max(EMAIL_MAX_LENGTH).optional(),
+  q: text('Search').trim().max(EMAIL_MAX_LENGTH).optional(),
   page: z.coerce.number({ error: 'Page must be a number.' }).int().min(1, { error: 'Page starts at 1.' }).default(1),
   pageSize: z.coerce.number().int().min(1).max(PAGE_SIZE_MAX, { error: `Page size is at most ${PAGE_SIZE_MAX}.` }).default(25),
 });

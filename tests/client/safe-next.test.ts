@@ -15,6 +15,14 @@ describe('safeNext', () => {
     }
   });
 
+  it('falls back for paths whose dot segments resolve to "//host" (plain or percent-encoded)', () => {
+    for (const next of ['/.//elsewhere.example', '/..//elsewhere.example', '/%2e//elsewhere.example', '/%2E%2E//elsewhere.example', '/builds/..//elsewhere.example']) {
+      expect(safeNext(next), next).toBe('/account');
+    }
+    // A double slash further along is an ordinary same-site path.
+    expect(safeNext('/builds/./12')).toBe('/builds/12');
+  });
+
   it('falls back for paths a browser turns into another origin (backslashes, tabs, newlines)', () => {
     for (const next of ['/\\elsewhere.example', '/\\/elsewhere.example', '/\t/elsewhere.example', '/\n/elsewhere.example', '\\\\elsewhere.example']) {
       expect(safeNext(next), JSON.stringify(next)).toBe('/account');

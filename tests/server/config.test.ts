@@ -23,3 +23,18 @@ describe('config', () => {
     expect(() => loadConfig({ NODE_ENV: 'production' })).toThrow(/SESSION_SECRET/);
   });
 });
+
+describe('config: demo mail', () => {
+  it('sends mail to the catcher on MAIL_CATCHER_PORT when only that is set', () => {
+    const c = loadConfig({ MAIL_CATCHER_PORT: '2626' });
+    expect(c.mailCatcherPort).toBe(2626);
+    expect(c.smtpUrl).toBe('smtp://127.0.0.1:2626');
+    expect(loadConfig({}).smtpUrl).toBe('smtp://127.0.0.1:1025');
+  });
+
+  it('refuses a catcher port that SMTP_URL does not send to, and accepts the two agreeing', () => {
+    expect(() => loadConfig({ MAIL_CATCHER_PORT: '2626', SMTP_URL: 'smtp://127.0.0.1:1025' })).toThrow(/MAIL_CATCHER_PORT/);
+    expect(loadConfig({ MAIL_CATCHER_PORT: '2626', SMTP_URL: 'smtp://127.0.0.1:2626' }).smtpUrl).toBe('smtp://127.0.0.1:2626');
+    expect(loadConfig({ SMTP_URL: 'smtp://mail.example.test:587' }).smtpUrl).toBe('smtp://mail.example.test:587');
+  });
+});

@@ -34,7 +34,7 @@ describe("the owner's preview of the public page", () => {
     const { client } = await signedIn();
     const { body } = await client.post('/api/builds', { title: 'Mine' });
     const other = await signedIn();
-    expect((await other.client.get(`/api/builds/${body.build.id}/preview`)).status).toBe(403);
+    expect((await other.client.get(`/api/builds/${body.build.id}/preview`)).status).toBe(404);
     expect((await (await apiClient()).get(`/api/builds/${body.build.id}/preview`)).status).toBe(401);
     const bad = await client.get(`/api/builds/${body.build.id}/preview?units=furlongs`);
     expect(bad.status).toBe(400);

@@ -39,15 +39,23 @@ describe('builds: create, read, list', () => {
     expect(list.body.builds.map((b: { id: number }) => b.id)).toEqual([build.id]);
   });
 
-  it('keeps builds to their owner: another owner gets 403, anonymous 401, unknown 404', async () => {
+  it('keeps builds to their owner: another owner gets the same 404 as an unknown id, anonymous 401', async () => {
     const alice = await owner();
     const build = await newBuild(alice);
     const bob = await owner();
     const anonymous = await apiClient();
-    expect((await bob.get(`/api/builds/${build.id}`)).status).toBe(403);
-    expect((await bob.patch(`/api/builds/${build.id}`, { title: 'Mine now' })).status).toBe(403);
-    expect((await bob.delete(`/api/builds/${build.id}`)).status).toBe(403);
-    expect((await bob.post(`/api/builds/${build.id}/weigh-ins`, { date: '2026-06-01', unit: 'kg', leftFront: 300, rightFront: 300, leftRear: 300, rightRear: 300, withDriver: false, fuelLevel: 'full' })).status).toBe(403);
+    const missing = await bob.get('/api/builds/999999999');
+    expect(missing.status).toBe(404);
+    // Someone else's build and one that does not exist answer alike, so ids reveal nothing.
+    for (const res of [
+      await bob.get(`/api/builds/${build.id}`),
+      await bob.patch(`/api/builds/${build.id}`, { title: 'Mine now' }),
+      await bob.delete(`/api/builds/${build.id}`),
+      await bob.post(`/api/builds/${build.id}/weigh-ins`, { date: '2026-06-01', unit: 'kg', leftFront: 300, rightFront: 300, leftRear: 300, rightRear: 300, withDriver: false, fuelLevel: 'full' }),
+    ]) {
+      expect(res.status).toBe(404);
+      expect(res.body).toEqual(missing.body);
+    }
     expect((await bob.get('/api/builds')).body.builds).toEqual([]);
     expect((await anonymous.get(`/api/builds/${build.id}`)).status).toBe(401);
     expect((await anonymous.get('/api/builds')).status).toBe(401);
@@ -218,7 +226,7 @@ describe('dyno runs, weigh-ins and history', () => {
 });
 
 describe('every build route refuses other owners and anonymous visitors', () => {
-  it('answers 403 to another owner and 401 to nobody on each route, and changes nothing', async () => {
+  it('answers 404 to another owner and 401 to nobody on each route, and changes nothing', async () => {
     const alice = await owner();
     const { id } = await newBuild(alice);
     const weighIn = { date: '2026-06-01', unit: 'kg', leftFront: 300, rightFront: 300, leftRear: 300, rightRear: 300, withDriver: false, fuelLevel: 'full' };
@@ -240,7 +248,7 @@ describe('every build route refuses other owners and anonymous visitors', () => 
     const bob = await owner();
     const nobody = await apiClient();
     for (const [method, path, body] of routes) {
-      for (const [client, status] of [[bob, 403], [nobody, 401]] as const) {
+      for (const [client, status] of [[bob, 404], [nobody, 401]] as const) {
         const req = client.raw[method](path);
         const res = method === 'get' ? await req : await req.set('X-CSRF-Token', client.csrf).send(body ?? {});
         expect(res.status, `${method.toUpperCase()} ${path}`).toBe(status);

@@ -192,17 +192,17 @@ describe('uploading photos', () => {
 });
 
 describe('who may change photos', () => {
-  it('answers another owner 403, anonymous 401 and an unknown build or photo 404', async () => {
+  it('answers another owner 404 (as for an unknown build), anonymous 401 and an unknown build or photo 404', async () => {
     const { client, build } = await signedInOwner();
     const { body } = await upload(client, build.id, [{ buffer: png, name: 'a.png' }]).expect(201);
     const photoId = (body.photos as PhotoBody[])[0]!.id;
     const base = `/api/builds/${build.id}/photos`;
 
     const stranger = (await signedInOwner()).client;
-    expect((await upload(stranger, build.id, [{ buffer: png, name: 'b.png' }])).status).toBe(403);
-    expect((await stranger.patch(`${base}/${photoId}`, { caption: 'mine now' })).status).toBe(403);
-    expect((await put(stranger, `${base}/order`, { photoIds: [photoId] })).status).toBe(403);
-    expect((await stranger.delete(`${base}/${photoId}`)).status).toBe(403);
+    expect((await upload(stranger, build.id, [{ buffer: png, name: 'b.png' }])).status).toBe(404);
+    expect((await stranger.patch(`${base}/${photoId}`, { caption: 'mine now' })).status).toBe(404);
+    expect((await put(stranger, `${base}/order`, { photoIds: [photoId] })).status).toBe(404);
+    expect((await stranger.delete(`${base}/${photoId}`)).status).toBe(404);
 
     const anonymous = await apiClient();
     const anon = await upload(anonymous, build.id, [{ buffer: png, name: 'c.png' }]);

@@ -32,7 +32,7 @@ describe('malformed requests are answered as the client’s mistake, never as a 
     const client = await apiClient();
     const charset = await client.raw.post('/api/session').set('X-CSRF-Token', client.csrf).set('Content-Type', 'application/json; charset=latin9').send('{}');
     expect(charset.status).toBe(415);
-    expect(charset.body.error.code).toBe('BAD_REQUEST');
+    expect(charset.body.error.code).toBe('UNSUPPORTED_MEDIA_TYPE');
   });
 
   it('keeps an over-long e-mail out of the rate-limit keys (400, not a database error)', async () => {

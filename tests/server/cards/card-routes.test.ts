@@ -39,11 +39,11 @@ describe('card routes', () => {
     const other = await apiClient();
     await other.signIn(email, password);
     for (const path of ['card.pdf', 'qr.png', 'qr.svg', 'card-settings']) {
-      await other.get(`/api/builds/${build.id}/${path}`).expect(403);
+      await other.get(`/api/builds/${build.id}/${path}`).expect(404);
       await request(testApp()).get(`/api/builds/${build.id}/${path}`).expect(401);
     }
     const put = await other.raw.put(`/api/builds/${build.id}/card-settings`).set('X-CSRF-Token', other.csrf).send({ design: 'compact' });
-    expect(put.status).toBe(403);
+    expect(put.status).toBe(404);
   });
 
   it('rejects a bad query naming the field', async () => {

@@ -16,5 +16,9 @@ export function safeNext(next: string | null): string {
   } catch {
     return fallback;
   }
-  return url.origin === BASE ? `${url.pathname}${url.search}${url.hash}` : fallback;
+  if (url.origin !== BASE) return fallback;
+  // "/.//host", "/..//host" and "/%2e//host" resolve to the path "//host", which a router or a
+  // browser then reads as another origin: a path we follow starts with exactly one slash.
+  if (url.pathname.startsWith('//')) return fallback;
+  return `${url.pathname}${url.search}${url.hash}`;
 }
