@@ -32,6 +32,10 @@ const EnvSchema = z.object({
   SIGNIN_ADDRESS_RATE_LIMIT: z.coerce.number().int().min(1).default(100),
   SIGNUP_RATE_LIMIT_PER_HOUR: z.coerce.number().int().min(1).default(30),
   API_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
+  PHOTO_UPLOADS_PER_WINDOW: z.coerce.number().int().min(1).default(120),
+  PHOTO_REQUEST_MEGAPIXELS: z.coerce.number().int().min(1).default(100),
+  PHOTO_MEGAPIXELS_PER_WINDOW: z.coerce.number().int().min(1).default(1500),
+  IMAGE_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(1),
   STORAGE_DIR: z.string().optional().transform((v) => v || undefined),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   JOB_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(2),
@@ -109,6 +113,15 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     signInAddressRateLimit: e.SIGNIN_ADDRESS_RATE_LIMIT,
     signUpRateLimitPerHour: e.SIGNUP_RATE_LIMIT_PER_HOUR,
     apiRateLimitPerMinute: e.API_RATE_LIMIT_PER_MINUTE,
+    /** Upload requests per person per window (the editor sends one photo per request). */
+    photoUploadsPerWindow: e.PHOTO_UPLOADS_PER_WINDOW,
+    /** Decoded megapixels of all files in one upload request together. */
+    photoRequestMegapixels: e.PHOTO_REQUEST_MEGAPIXELS,
+    /** Decoded megapixels one person may upload per window (15 minutes). */
+    photoMegapixelsPerWindow: e.PHOTO_MEGAPIXELS_PER_WINDOW,
+    photoPixelWindowMs: 15 * 60 * 1000,
+    /** Images one server process decodes and resizes at once (each on one libvips thread). */
+    imageConcurrency: e.IMAGE_CONCURRENCY,
     /** Local-disk storage of uploads; tests get a fresh temporary folder per process unless told otherwise. */
     storageDir: path.resolve(PROJECT_ROOT, e.STORAGE_DIR ?? (e.NODE_ENV === 'test' ? testStorageDir() : '.data/uploads')),
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),

@@ -125,7 +125,7 @@ export const cardRenderLimiter = limiter('card-render', {
 });
 
 /** Photo uploads per person (the client sends one file per request): each is decoded and re-encoded six times. */
-export const PHOTO_UPLOAD_LIMIT = { windowMs: 15 * 60 * 1000, limit: 120 };
+export const PHOTO_UPLOAD_LIMIT = { windowMs: 15 * 60 * 1000, limit: config.photoUploadsPerWindow };
 export const photoUploadLimiter = limiter('photo-upload', {
   ...PHOTO_UPLOAD_LIMIT,
   key: person,

@@ -60,7 +60,7 @@ const photoIdOf = (res: Response) => (res.locals.params as { photoId: number }).
 photosRouter.post('/builds/:id/photos', requireUser, photoUploadLimiter, validate('params', IdParamSchema), loadEditableBuild, receivePhotos, validate('body', PhotoUploadFieldsSchema), async (req, res) => {
   const files = ((req.files as Express.Multer.File[] | undefined) ?? []).map((f) => ({ buffer: f.buffer, originalName: f.originalname }));
   const { captions } = res.locals.body as z.infer<typeof PhotoUploadFieldsSchema>;
-  const photos = await storePhotosForBuild(buildOf(res).id, files, captions);
+  const photos = await storePhotosForBuild(buildOf(res).id, files, captions, currentUser(req).id);
   res.status(201).json({ photos: photos.map(presentPhoto) });
 });
 

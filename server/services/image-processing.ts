@@ -8,6 +8,10 @@ export const ACCEPTED_KINDS_TEXT = 'JPEG, PNG, WebP or AVIF';
 // A decompression bomb is small on the wire and huge in memory: refuse it before decoding.
 export const MAX_INPUT_PIXELS = 100_000_000;
 
+// libvips gives each image one thread per core by default; one thread per image leaves the other
+// core to the event loop (visitors), and imageSlots in image-budget.ts bounds how many run at once.
+sharp.concurrency(1);
+
 const ascii = (bytes: Buffer, start: number, end: number) => bytes.subarray(start, end).toString('latin1');
 
 /** Reads the ISO-BMFF `ftyp` box (AVIF, HEIC) and returns its major and compatible brands. */
@@ -39,6 +43,16 @@ export function variantWidths(originalWidth: number): number[] {
 export type ProcessedVariant = { width: number; height: number; webp: Buffer; jpeg: Buffer };
 export type ProcessedImage = { kind: ImageKind; width: number; height: number; variants: ProcessedVariant[] };
 
+/** Decoded pixels of an image from its header alone (cheap); 0 when the header cannot be read (processImage then says why). */
+export async function imagePixels(bytes: Buffer): Promise<number> {
+  try {
+    const meta = await sharp(bytes, { limitInputPixels: false }).metadata();
+    return (meta.width ?? 0) * (meta.height ?? 0);
+  } catch {
+    return 0;
+  }
+}
+
 /** Thrown with a sentence for the uploader when the bytes are not a photo we can use. */
 export class ImageRejectedError extends Error {}
 
@@ -67,8 +81,17 @@ export async function processImage(bytes: Buffer): Promise<ProcessedImage> {
 
   const variants: ProcessedVariant[] = [];
   try {
-    for (const width of variantWidths(meta.autoOrient.width)) {
-      const resized = open().resize({ width, withoutEnlargement: true });
+    // Decode the original once, down to the largest width we keep (upright, sRGB, no metadata: raw
+    // pixels carry none), then make every variant from those pixels rather than decoding it again.
+    const widths = variantWidths(meta.autoOrient.width);
+    const base = await open()
+      .resize({ width: widths[widths.length - 1], withoutEnlargement: true })
+      .toColourspace('srgb')
+      .raw()
+      .toBuffer({ resolveWithObject: true });
+    const raw = { width: base.info.width, height: base.info.height, channels: base.info.channels };
+    for (const width of widths) {
+      const resized = sharp(base.data, { raw }).resize({ width, withoutEnlargement: true });
       const webp = await resized.clone().webp({ quality: 80 }).toBuffer({ resolveWithObject: true });
       const jpeg = await resized.clone().flatten({ background: '#ffffff' }).jpeg({ quality: 80, mozjpeg: true }).toBuffer();
       variants.push({ width: webp.info.width, height: webp.info.height, webp: webp.data, jpeg });

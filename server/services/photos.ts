@@ -8,7 +8,8 @@ import { photoVariantKey } from '../presenters/photo';
 import { storage } from '../storage/index';
 import { logger } from '../logger';
 import { AppError, NotFoundError, ValidationError } from '../errors';
-import { processImage, ImageRejectedError, type ProcessedImage } from './image-processing';
+import { imagePixels, processImage, ImageRejectedError, type ProcessedImage } from './image-processing';
+import { chargePersonPixels, checkRequestPixels, imageSlots } from './image-budget';
 import { touchBuild } from './builds';
 
 export type PhotoFile = { buffer: Buffer; originalName: string };
@@ -42,15 +43,19 @@ async function findPhotoOf(buildId: number, photoId: number, transaction: Transa
   return photo;
 }
 
-async function processAll(files: PhotoFile[]): Promise<ProcessedImage[]> {
+async function processAll(files: PhotoFile[], uploaderId?: number): Promise<ProcessedImage[]> {
   if (files.length === 0) throw new ValidationError({ photos: 'Choose at least one photo.' });
   if (files.length > PHOTO_MAX_FILES) throw tooManyError();
   if (files.some((f) => f.buffer.length > PHOTO_MAX_BYTES)) throw tooLargeError();
+  // The pixel budgets are checked from the headers, before any decoding.
+  const pixels = (await Promise.all(files.map((f) => imagePixels(f.buffer)))).reduce((a, b) => a + b, 0);
+  checkRequestPixels(pixels);
+  if (uploaderId !== undefined) await chargePersonPixels(uploaderId, pixels);
   const processed: ProcessedImage[] = [];
-  // One at a time: a dozen large photos decoded at once would need a lot of memory.
+  // One at a time, and in turn with every other upload to this process (imageSlots).
   for (const file of files) {
     try {
-      processed.push(await processImage(file.buffer));
+      processed.push(await imageSlots.run(() => processImage(file.buffer)));
     } catch (err) {
       if (err instanceof ImageRejectedError) throw refused(`${shownName(file.originalName)} ${err.message}.`);
       throw err;
@@ -86,9 +91,9 @@ async function putAll(files: { key: string; body: Buffer; type: string }[]): Pro
  * files are written, then the rows in one transaction (the files are removed if it fails).
  * The first photo of a build becomes its cover. Returns all of the build's photos in order.
  */
-export async function storePhotosForBuild(buildId: number, files: PhotoFile[], captions: string[] = []): Promise<Photo[]> {
+export async function storePhotosForBuild(buildId: number, files: PhotoFile[], captions: string[] = [], uploaderId?: number): Promise<Photo[]> {
   if (captions.length > files.length) throw new ValidationError({ captions: 'There are more captions than photos.' });
-  const images = await processAll(files);
+  const images = await processAll(files, uploaderId);
   const prepared = images.map((image, i) => ({ image, storageKey: randomBytes(16).toString('hex'), caption: captions[i]?.trim() ?? '' }));
   const written = await putAll(prepared.flatMap((p) => variantFiles(p.storageKey, p.image)));
   try {

@@ -194,7 +194,7 @@ describe('changing the password is rate limited', () => {
     const { client, password } = await owner();
     for (let i = 0; i < PASSWORD_CHANGE_LIMIT.limit; i++) {
       const res = await client.post('/api/account/password', { currentPassword: `wrong guess ${i}`, newPassword: 'a brand new passphrase' });
-      expect(res.status).toBe(400);
+      expect(res.status, JSON.stringify(res.body)).toBe(400);
     }
     const refused = await client.post('/api/account/password', { currentPassword: password, newPassword: 'a brand new passphrase' });
     expect(refused.status).toBe(429);

@@ -1,0 +1,95 @@
+// npm run bench:uploads — what heavy photo uploads do to a visitor reading a public page.
+// A child process runs the server (tests/support/forked-server.ts) on its own database; this process
+// measures the visitor's latency on /c/<code> with autocannon, first on an idle server, then while
+// signed-in uploaders keep sending photos: the attack from the hardening review (12 images just under
+// the per-image pixel limit in one request) and an ordinary busy moment (several owners each sending
+// one 24-megapixel photo per request, as the editor does). Loopback only; figures go in README.md.
+import sharp from 'sharp';
+import { ensureDatabase } from '@server/db/cluster';
+import { PHOTO_MAX_FILES } from '@shared/schemas/build';
+import { forkServer, type ForkedServer } from '../support/forked-server';
+
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
+const VISITORS = Number(process.env.BENCH_CONNECTIONS ?? 10);
+const DATABASE = 'placard_bench_uploads';
+
+type Session = { cookie: string; csrf: string };
+
+async function signIn(server: ForkedServer): Promise<Session> {
+  const first = await fetch(`${server.base}/api/session`);
+  let cookie = first.headers.get('set-cookie')?.split(';')[0] ?? '';
+  const { csrfToken } = (await first.json()) as { csrfToken: string };
+  const res = await fetch(`${server.base}/api/session`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', 'x-csrf-token': csrfToken, cookie },
+    body: JSON.stringify({ email: server.email, password: server.password }),
+  });
+  cookie = res.headers.get('set-cookie')?.split(';')[0] ?? cookie;
+  return { cookie, csrf: ((await res.json()) as { csrfToken: string }).csrfToken };
+}
+
+/** A photo-like JPEG of the given size: smooth gradients with grain, so it decodes like a real picture. */
+async function photo(width: number, height: number): Promise<Buffer> {
+  const tile = await sharp({ create: { width: 64, height: 64, channels: 3, background: '#808080', noise: { type: 'gaussian', mean: 128, sigma: 40 } } }).png().toBuffer();
+  return sharp({ create: { width, height, channels: 3, background: '#6b4a2f' } })
+    .composite([{ input: tile, tile: true, blend: 'soft-light' }])
+    .jpeg({ quality: 70 })
+    .toBuffer();
+}
+
+type Tally = Map<number, number>;
+
+/** Keeps `parallel` uploaders busy until `until` resolves; counts the answers by status. */
+async function uploadLoop(server: ForkedServer, session: Session, files: Buffer[], parallel: number, until: Promise<unknown>): Promise<Tally> {
+  let done = false;
+  void until.then(() => (done = true));
+  const tally: Tally = new Map();
+  const one = async () => {
+    while (!done) {
+      const form = new FormData();
+      files.forEach((f, i) => form.append('photos', new Blob([new Uint8Array(f)], { type: 'image/jpeg' }), `p${i}.jpg`));
+      const res = await fetch(`${server.base}/api/builds/${server.buildId}/photos`, { method: 'POST', headers: { cookie: session.cookie, 'x-csrf-token': session.csrf }, body: form }).catch(() => null);
+      await res?.arrayBuffer();
+      tally.set(res?.status ?? 0, (tally.get(res?.status ?? 0) ?? 0) + 1);
+    }
+  };
+  await Promise.all(Array.from({ length: parallel }, one));
+  return tally;
+}
+
+async function main() {
+  const { default: autocannon } = await import('autocannon');
+  await ensureDatabase(undefined, [DATABASE]);
+  // A high upload limit, so the requests reach the image work (the per-request rate limit is not what is measured).
+  const server = await forkServer({ DATABASE_URL: process.env.BENCH_DATABASE_URL ?? '', DB_NAME: DATABASE, LOG_LEVEL: 'silent', PHOTO_UPLOADS_PER_WINDOW: '100000' });
+  try {
+    const page = `${server.base}/c/${server.code}?units=metric`;
+    const visit = () => autocannon({ url: page, connections: VISITORS, duration: SECONDS, headers: { 'accept-encoding': 'br' } });
+    console.log('Making test photos…');
+    const nearLimit = await photo(9_999, 9_999); // just under the 100-megapixel limit per image
+    const ordinary = await photo(6_000, 4_000); // a 24-megapixel camera frame
+    await visit(); // warm-up (JIT, page cache, connection pools)
+
+    const line = (name: string, r: Awaited<ReturnType<typeof visit>>, tally?: Tally) =>
+      `${name.padEnd(44)} p50 ${String(r.latency.p50).padStart(5)} ms   p99 ${String(r.latency.p99).padStart(5)} ms   max ${String(r.latency.max).padStart(5)} ms   ${Math.round(r.requests.average)} req/s` +
+      (tally ? `   uploads: ${[...tally].map(([s, n]) => `${n}× ${s || 'failed'}`).join(', ')}` : '');
+
+    console.log(`\nVisitor latency on /c/<code>: ${VISITORS} connections, ${SECONDS} s each, loopback`);
+    console.log(line('idle server', await visit()));
+
+    const session = await signIn(server);
+    for (const [name, files, parallel] of [
+      [`attack: ${PHOTO_MAX_FILES} × 100 MP in one request, 2 at once`, Array(PHOTO_MAX_FILES).fill(nearLimit), 2],
+      ['busy: 4 owners, one 24 MP photo per request', [ordinary], 4],
+    ] as const) {
+      const run = visit();
+      const tally = await uploadLoop(server, session, [...files], parallel, run);
+      console.log(line(name, await run, tally));
+    }
+  } finally {
+    await server.stop();
+  }
+}
+
+await main();
+process.exit(0);
