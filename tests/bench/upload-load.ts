@@ -6,7 +6,7 @@
 // one 24-megapixel photo per request, as the editor does). Loopback only; figures go in README.md.
 import sharp from 'sharp';
 import { ensureDatabase } from '@server/db/cluster';
-import { PHOTO_MAX_FILES } from '@shared/schemas/build';
+import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES } from '@shared/schemas/build';
 import { forkServer, type ForkedServer } from '../support/forked-server';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
@@ -28,13 +28,14 @@ async function signIn(server: ForkedServer): Promise<Session> {
   return { cookie, csrf: ((await res.json()) as { csrfToken: string }).csrfToken };
 }
 
-/** A photo-like JPEG of the given size: smooth gradients with grain, so it decodes like a real picture. */
+/** A photo-like JPEG of the given size (gradients with grain, so it decodes like a real picture), under the upload size limit. */
 async function photo(width: number, height: number): Promise<Buffer> {
-  const tile = await sharp({ create: { width: 64, height: 64, channels: 3, background: '#808080', noise: { type: 'gaussian', mean: 128, sigma: 40 } } }).png().toBuffer();
-  return sharp({ create: { width, height, channels: 3, background: '#6b4a2f' } })
-    .composite([{ input: tile, tile: true, blend: 'soft-light' }])
-    .jpeg({ quality: 70 })
-    .toBuffer();
+  const tile = await sharp({ create: { width: 64, height: 64, channels: 3, background: '#808080', noise: { type: 'gaussian', mean: 128, sigma: 12 } } }).png().toBuffer();
+  for (const quality of [70, 50, 30, 15]) {
+    const jpeg = await sharp({ create: { width, height, channels: 3, background: '#6b4a2f' } }).composite([{ input: tile, tile: true, blend: 'soft-light' }]).jpeg({ quality }).toBuffer();
+    if (jpeg.length < PHOTO_MAX_BYTES) return jpeg;
+  }
+  throw new Error(`cannot make a ${width} × ${height} JPEG under ${PHOTO_MAX_BYTES} bytes`);
 }
 
 type Tally = Map<number, number>;
