@@ -1,4 +1,5 @@
-import { describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { publicPageCache } from '@server/pages/page-cache';
 import request from 'supertest';
 import { AdminUserDetailSchema, AdminUserSchema } from '@shared/schemas/user';
 import { apiClient, testApp } from '../../support/api-client';
@@ -14,6 +15,16 @@ async function signedIn(flags: { isSiteAdmin?: boolean } = {}) {
 }
 
 describe('disabling an account (site admin)', () => {
+  // Each server process trusts a cached page for up to a second; here every request checks the version.
+  let trust = 0;
+  beforeAll(() => {
+    trust = publicPageCache.revalidateAfterMs;
+    publicPageCache.revalidateAfterMs = 0;
+  });
+  afterAll(() => {
+    publicPageCache.revalidateAfterMs = trust;
+  });
+
   it('stops its sign-in, ends its sessions, takes its public pages offline, and re-enabling brings all back', async () => {
     const { client: admin } = await signedIn({ isSiteAdmin: true });
     const owner = await signedIn();
