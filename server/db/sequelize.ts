@@ -10,9 +10,7 @@ import { config } from '../config';
 export const sequelize = new Sequelize(config.databaseUrl, {
   dialect: 'postgres',
   logging: false,
-  // A busy but healthy database queues requests for a pooled connection (50 entrants at once); a database
-  // that is down fails each connection attempt within the connect timeout, so the wait here can be long.
-  pool: { max: 10, min: 0, idle: 10_000, acquire: 30_000, evict: 1000 },
+  pool: { max: 10, min: 0, idle: 10_000, acquire: config.dbConnectTimeoutMs + 2000, evict: 1000 },
   dialectOptions: { connectionTimeoutMillis: config.dbConnectTimeoutMs },
   define: { underscored: true },
 });
