@@ -33,6 +33,7 @@ import { eventsRouter } from './routes/events';
 import { eventPeopleRouter } from './routes/event-people';
 import { entriesRouter } from './routes/entries';
 import { paymentsWebhookRouter } from './routes/payments';
+import { showDayRouter } from './routes/show-day';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -53,7 +54,7 @@ function apiRouter() {
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
-  api.use(eventsRouter, eventPeopleRouter, entriesRouter);
+  api.use(eventsRouter, eventPeopleRouter, entriesRouter, showDayRouter);
   api.use(apiNotFound);
   return api;
 }

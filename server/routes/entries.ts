@@ -1,5 +1,7 @@
 import { Router } from 'express';
-import { CheckInSchema, EntryCreateSchema } from '@shared/schemas/event';
+import { EntryCreateSchema } from '@shared/schemas/event';
+import { GateCheckInSchema } from '@shared/schemas/show-day';
+import { gateCheckIn } from '../services/gate';
 import { IdParamSchema } from '@shared/schemas/params';
 import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
@@ -7,7 +9,7 @@ import { authorizeEntry, authorizeEvent } from '../policies/event';
 import { hasEventRole } from '../policies/actor';
 import { actorInEvent } from '../services/event-actor';
 import { findEvent } from '../services/events';
-import { acceptOffer, checkInEntry, findEntry, listEntriesOf, listEntriesOfEvent, registerEntry, withdrawEntry } from '../services/entries';
+import { acceptOffer, findEntry, listEntriesOf, listEntriesOfEvent, registerEntry, withdrawEntry } from '../services/entries';
 import { presentMyEntry, presentOrganiserEntry } from '../presenters/event';
 import { authorizedEvent } from './events';
 
@@ -35,10 +37,10 @@ entriesRouter.get('/events/:id/entries', requireUser, async (req, res) => {
 
 entriesRouter.post('/events/:id/check-in', requireUser, async (req, res) => {
   const { id } = parseParams(req, IdParamSchema);
-  const { number } = parseBody(req, CheckInSchema);
-  await authorizedEvent(req, id, 'checkIn');
-  const entry = await checkInEntry(id, number, currentUser(req));
-  res.json({ entry: { id: entry.id, number: entry.number, status: entry.status } });
+  const { number, takeCash } = parseBody(req, GateCheckInSchema);
+  const { event } = await authorizedEvent(req, id, 'checkIn');
+  const card = await gateCheckIn(event, number, takeCash, currentUser(req));
+  res.json({ entry: { id: card.entry!.id, number: card.entry!.number, status: card.entry!.status }, card });
 });
 
 entriesRouter.get('/entries', async (req, res) => {

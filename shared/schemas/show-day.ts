@@ -1,0 +1,147 @@
+import { z } from 'zod';
+import { ENTRY_STATUSES } from '../constants';
+import { IdSchema } from './params';
+import { EntryStatusSchema } from './event';
+
+/** The organiser's entries table: one page at a time, sorted and filtered on the server. */
+export const ENTRY_TABLE_SORTS = ['number', 'title', 'owner', 'class', 'status', 'created'] as const;
+export type EntryTableSort = (typeof ENTRY_TABLE_SORTS)[number];
+export const ENTRY_TABLE_PAGE_SIZES = [25, 50, 100] as const;
+export const ENTRY_SEARCH_MAX_LENGTH = 80;
+export const PAYMENT_NOTE_MAX_LENGTH = 300;
+
+const optionalId = z.preprocess((v) => (v === '' ? undefined : v), IdSchema.optional());
+
+export const EntryTableQuerySchema = z.object({
+  page: z.coerce.number({ error: 'Page must be a whole number.' }).int().min(1, { error: 'Page starts at 1.' }).default(1),
+  pageSize: z.coerce.number().int().refine((n) => (ENTRY_TABLE_PAGE_SIZES as readonly number[]).includes(n), { error: `Page size is one of ${ENTRY_TABLE_PAGE_SIZES.join(', ')}.` }).default(50),
+  sort: z.enum(ENTRY_TABLE_SORTS, { error: `Sort by one of ${ENTRY_TABLE_SORTS.join(', ')}.` }).default('number'),
+  dir: z.enum(['asc', 'desc'], { error: 'Direction is asc or desc.' }).default('asc'),
+  classId: optionalId,
+  status: z.preprocess((v) => (v === '' ? undefined : v), z.enum(ENTRY_STATUSES, { error: 'Unknown status.' }).optional()),
+  q: z.string().trim().max(ENTRY_SEARCH_MAX_LENGTH, { error: `Search is at most ${ENTRY_SEARCH_MAX_LENGTH} characters.` }).optional(),
+});
+export type EntryTableQuery = z.infer<typeof EntryTableQuerySchema>;
+/** The CSV export takes the same filters and sort, without paging. */
+export const EntryExportQuerySchema = EntryTableQuerySchema.omit({ page: true, pageSize: true });
+export type EntryExportQuery = z.infer<typeof EntryExportQuerySchema>;
+
+export const PAYMENT_STATES = ['free', 'unpaid', 'paid', 'refund_due'] as const;
+export type PaymentState = (typeof PAYMENT_STATES)[number];
+export const PAYMENT_STATE_LABELS: Record<PaymentState, string> = { free: 'Free', unpaid: 'Unpaid', paid: 'Paid', refund_due: 'Refund due' };
+
+/** Pure: what a person reads in the payment column. */
+export function paymentStateOf(e: { feeAmount: number; paidAt: string | Date | null; refundDue: number | null; status: string }): PaymentState {
+  if (e.refundDue && e.refundDue > 0) return 'refund_due';
+  if (e.paidAt) return 'paid';
+  return e.feeAmount === 0 ? 'free' : 'unpaid';
+}
+
+export const EntryTableRowSchema = z.object({
+  id: z.number(),
+  number: z.number().nullable(),
+  buildId: z.number(),
+  buildTitle: z.string(),
+  buildCode: z.string(),
+  ownerName: z.string(),
+  classId: z.number(),
+  className: z.string(),
+  status: EntryStatusSchema,
+  payment: z.enum(PAYMENT_STATES),
+  feeAmount: z.number(),
+  paidAmount: z.number().nullable(),
+  refundDue: z.number().nullable(),
+  currency: z.string(),
+  paymentRef: z.string().nullable(),
+  checkedInAt: z.string().nullable(),
+  waitingPosition: z.number().nullable(),
+  createdAt: z.string(),
+  /** Only for the show's organisers: needed to reach the entrant on the day. */
+  contact: z.object({ email: z.string(), phone: z.string().nullable() }),
+  /** The build's private fields, organisers only. */
+  privateFields: z.object({ vin: z.string().nullable(), plate: z.string().nullable(), address: z.string().nullable() }),
+});
+export type EntryTableRow = z.infer<typeof EntryTableRowSchema>;
+export const EntryTablePageSchema = z.object({ rows: z.array(EntryTableRowSchema), total: z.number(), page: z.number(), pageSize: z.number(), pageCount: z.number() });
+export type EntryTablePage = z.infer<typeof EntryTablePageSchema>;
+
+export const ChangeClassSchema = z.object({ classId: z.number({ error: 'Pick a class.' }).int().positive({ error: 'Pick a class.' }) });
+export type ChangeClassInput = z.infer<typeof ChangeClassSchema>;
+export const MarkPaidSchema = z.object({
+  note: z.string({ error: 'Say how it was paid (a note).' }).trim().min(1, { error: 'Say how it was paid (a note).' }).max(PAYMENT_NOTE_MAX_LENGTH, { error: `The note is at most ${PAYMENT_NOTE_MAX_LENGTH} characters.` }),
+});
+export type MarkPaidInput = z.infer<typeof MarkPaidSchema>;
+
+// ---- The gate ----
+
+/** What was scanned or typed: a card's QR (its /c/<code> URL or the bare code) or an entry number. */
+export const GateLookupQuerySchema = z
+  .object({
+    code: z.string().trim().max(300, { error: 'That code is too long to be a card.' }).optional(),
+    number: z.coerce.number({ error: 'Entry number is a whole number.' }).int({ error: 'Entry number is a whole number.' }).positive({ error: 'Entry number is a whole number.' }).max(99999).optional(),
+  })
+  .refine((v) => v.code !== undefined || v.number !== undefined, { error: 'Scan a card or type an entry number.', path: ['number'] });
+export type GateLookupQuery = z.infer<typeof GateLookupQuerySchema>;
+
+export const GateCheckInSchema = z.object({
+  number: z.number({ error: 'Entry number is required.' }).int().positive(),
+  takeCash: z.boolean().default(false),
+});
+export type GateCheckInInput = z.infer<typeof GateCheckInSchema>;
+export const GateUndoSchema = z.object({ entryId: z.number({ error: 'Which entry?' }).int().positive() });
+
+/** Undo a check-in within this long (seconds). */
+export const CHECK_IN_UNDO_SECONDS = 60;
+
+export const GATE_PROBLEMS = ['unknown_code', 'not_entered', 'other_show', 'unpaid', 'withdrawn', 'waiting_list', 'already_checked_in'] as const;
+export type GateProblem = (typeof GATE_PROBLEMS)[number];
+
+export const GateCardSchema = z.object({
+  /** Null when nothing of this show matched (unknown code, a build not entered, another show). */
+  entry: z
+    .object({
+      id: z.number(),
+      number: z.number().nullable(),
+      title: z.string(),
+      className: z.string(),
+      classId: z.number(),
+      status: EntryStatusSchema,
+      payment: z.enum(PAYMENT_STATES),
+      feeAmount: z.number(),
+      currency: z.string(),
+      checkedInAt: z.string().nullable(),
+      cover: z.object({ src: z.string(), width: z.number(), height: z.number() }).nullable(),
+    })
+    .nullable(),
+  problem: z.enum(GATE_PROBLEMS).nullable(),
+  /** The problem in words, ready to show. */
+  message: z.string().nullable(),
+  canCheckIn: z.boolean(),
+  canTakeCash: z.boolean(),
+});
+export type GateCard = z.infer<typeof GateCardSchema>;
+
+export const GateCountsSchema = z.object({
+  classes: z.array(z.object({ classId: z.number(), name: z.string(), arrived: z.number(), expected: z.number() })),
+  arrived: z.number(),
+  expected: z.number(),
+});
+export type GateCounts = z.infer<typeof GateCountsSchema>;
+
+/** Audit action names a person reads on the entry's history. */
+export const AUDIT_ACTION_LABELS: Record<string, string> = {
+  entry_created: 'Entered',
+  offer_accepted: 'Took the offered place',
+  place_offered: 'Place offered',
+  offer_lapsed: 'Offer lapsed',
+  withdrawn_by_owner: 'Withdrawn by the entrant',
+  withdrawn_by_organiser: 'Withdrawn by an organiser',
+  payment_confirmed: 'Paid',
+  payment_recorded: 'Payment recorded',
+  marked_paid: 'Marked paid by hand',
+  class_changed: 'Class changed',
+  moved_up: 'Moved up from the waiting list',
+  checked_in: 'Checked in',
+  check_in_undone: 'Check-in undone',
+};
+export const auditActionLabel = (action: string) => AUDIT_ACTION_LABELS[action] ?? action.replace(/_/g, ' ');
