@@ -14,9 +14,9 @@ describe('the entries table', () => {
     const { organiser, eventId, classIds } = await showWithClasses({ classes: [{ name: 'Hot rods', capacity: 3 }, { name: 'Customs' }] });
     const titles = ['Zephyr coupe', 'Amber roadster', 'Midnight wagon', 'Copper sedan'];
     const entered = [];
-    for (const t of titles) entered.push(await enter(eventId, classIds[0], t, { ownerPhone: '+49 555 0100', vin: 'VIN-SECRET-1' }));
-    await enter(eventId, classIds[1], 'Blue custom');
-    await confirmEntryPayment(entered[0].entry.id, 'ref-1');
+    for (const t of titles) entered.push(await enter(eventId, classIds[0]!, t, { ownerPhone: '+49 555 0100', vin: 'VIN-SECRET-1' }));
+    await enter(eventId, classIds[1]!, 'Blue custom');
+    await confirmEntryPayment(entered[0]!.entry.id, 'ref-1');
 
     const first = await organiser.client.get(`/api/events/${eventId}/entry-table?pageSize=25`);
     expect(first.status).toBe(200);
@@ -30,13 +30,13 @@ describe('the entries table', () => {
     ]);
     const zephyr = first.body.rows[0] as Row;
     expect(zephyr.payment).toBe('paid');
-    expect(zephyr.contact).toEqual({ email: entered[0].owner.email, phone: '+49 555 0100' });
+    expect(zephyr.contact).toEqual({ email: entered[0]!.owner.email, phone: '+49 555 0100' });
     expect(zephyr.privateFields.vin).toBe('VIN-SECRET-1');
     expect((first.body.rows[4] as Row).waitingPosition).toBe(1);
 
     const byTitle = await organiser.client.get(`/api/events/${eventId}/entry-table?sort=title&dir=desc&pageSize=25`);
     expect(byTitle.body.rows.map((r: Row) => r.buildTitle)).toEqual(['Zephyr coupe', 'Midnight wagon', 'Copper sedan', 'Blue custom', 'Amber roadster']);
-    const customs = await organiser.client.get(`/api/events/${eventId}/entry-table?classId=${classIds[1]}&pageSize=25`);
+    const customs = await organiser.client.get(`/api/events/${eventId}/entry-table?classId=${classIds[1]!}&pageSize=25`);
     expect(customs.body.rows.map((r: Row) => r.buildTitle)).toEqual(['Blue custom']);
     const unpaid = await organiser.client.get(`/api/events/${eventId}/entry-table?status=awaiting_payment&pageSize=25`);
     expect(unpaid.body.total).toBe(3);
@@ -44,7 +44,7 @@ describe('the entries table', () => {
     expect(searched.body.rows.map((r: Row) => r.buildTitle)).toEqual(['Amber roadster']);
     const byNumber = await organiser.client.get(`/api/events/${eventId}/entry-table?q=3&pageSize=25`);
     expect(byNumber.body.rows.map((r: Row) => r.number)).toEqual([3]);
-    const byEmail = await organiser.client.get(`/api/events/${eventId}/entry-table?q=${encodeURIComponent(entered[1].owner.email)}&pageSize=25`);
+    const byEmail = await organiser.client.get(`/api/events/${eventId}/entry-table?q=${encodeURIComponent(entered[1]!.owner.email)}&pageSize=25`);
     expect(byEmail.body.rows.map((r: Row) => r.buildTitle)).toEqual(['Amber roadster']);
     const percent = await organiser.client.get(`/api/events/${eventId}/entry-table?q=%25&pageSize=25`);
     expect(percent.body.total).toBe(0);
@@ -52,9 +52,9 @@ describe('the entries table', () => {
 
   it('pages through many entries in a stable order', async () => {
     const { organiser, eventId, classIds } = await showWithClasses({ settings: { entryFee: 0 } });
-    const seed = await enter(eventId, classIds[0], 'Template');
+    const seed = await enter(eventId, classIds[0]!, 'Template');
     const base = await Entry.findByPk(seed.entry.id);
-    const rows = Array.from({ length: 119 }, (_, i) => ({ eventId, buildId: base!.buildId, classId: classIds[i % 2], ownerId: base!.ownerId, number: i + 2, status: 'confirmed' as const, feeAmount: 0, currency: 'EUR' }));
+    const rows = Array.from({ length: 119 }, (_, i) => ({ eventId, buildId: base!.buildId, classId: classIds[i % 2]!, ownerId: base!.ownerId, number: i + 2, status: 'confirmed' as const, feeAmount: 0, currency: 'EUR' }));
     // One build per entry is the rule; for a paging test the rows need only distinct numbers, so the unique index is sidestepped with fresh builds.
     const { createBuild } = await import('../../support/build-factory');
     for (const r of rows) r.buildId = (await createBuild(base!.ownerId, { title: `Car ${String(r.number).padStart(3, '0')}`, published: true })).id;
@@ -69,7 +69,7 @@ describe('the entries table', () => {
 
   it('is for the show’s organisers only: judges, gate staff, entrants and other organisers are refused', async () => {
     const { eventId, classIds } = await showWithClasses();
-    const { owner } = await enter(eventId, classIds[0], 'Someone’s car');
+    const { owner } = await enter(eventId, classIds[0]!, 'Someone’s car');
     const judge = await memberOf(eventId, 'judge');
     const gate = await memberOf(eventId, 'gate');
     const other = await showWithClasses();
@@ -85,28 +85,28 @@ describe('the entries table', () => {
 describe('actions on an entry, each with an audit line', () => {
   it('changes class (refusing a full class or another show’s), with before → after', async () => {
     const { organiser, eventId, classIds } = await showWithClasses({ classes: [{ name: 'Hot rods' }, { name: 'Customs', capacity: 1 }, { name: 'Trucks' }] });
-    const { entry } = await enter(eventId, classIds[0], 'Moving car');
-    await enter(eventId, classIds[1], 'Custom one');
-    const full = await organiser.client.post(`/api/entries/${entry.id}/class`, { classId: classIds[1] });
+    const { entry } = await enter(eventId, classIds[0]!, 'Moving car');
+    await enter(eventId, classIds[1]!, 'Custom one');
+    const full = await organiser.client.post(`/api/entries/${entry.id}/class`, { classId: classIds[1]! });
     expect(full.status).toBe(409);
     expect(full.body.error.fields.classId).toMatch(/Customs has no free place/);
     const other = await showWithClasses();
-    const foreign = await organiser.client.post(`/api/entries/${entry.id}/class`, { classId: other.classIds[0] });
+    const foreign = await organiser.client.post(`/api/entries/${entry.id}/class`, { classId: other.classIds[0]! });
     expect(foreign.status).toBe(400);
     expect(foreign.body.error.fields.classId).toMatch(/no such class/);
     expect((await organiser.client.post(`/api/entries/${entry.id}/class`, {})).body.error.fields.classId).toBe('Pick a class.');
 
-    const moved = await organiser.client.post(`/api/entries/${entry.id}/class`, { classId: classIds[2] });
+    const moved = await organiser.client.post(`/api/entries/${entry.id}/class`, { classId: classIds[2]! });
     expect(moved.status).toBe(200);
-    expect(moved.body.entry).toMatchObject({ className: 'Trucks', classId: classIds[2] });
+    expect(moved.body.entry).toMatchObject({ className: 'Trucks', classId: classIds[2]! });
     expect(moved.body.audit[0]).toMatchObject({ action: 'class_changed', who: 'Org Anizer', before: { className: 'Hot rods' }, after: { className: 'Trucks' } });
     expect(await AuditLine.count({ where: { entryId: entry.id, action: 'class_changed' } })).toBe(1);
   });
 
   it('marks paid by hand with a note; refuses without a note, twice, on a free show or a waiting entry', async () => {
     const { organiser, eventId, classIds } = await showWithClasses({ classes: [{ name: 'Hot rods', capacity: 1 }] });
-    const { entry } = await enter(eventId, classIds[0], 'Cash car');
-    const waiting = await enter(eventId, classIds[0], 'Waiting car');
+    const { entry } = await enter(eventId, classIds[0]!, 'Cash car');
+    const waiting = await enter(eventId, classIds[0]!, 'Waiting car');
     const noNote = await organiser.client.post(`/api/entries/${entry.id}/mark-paid`, { note: '  ' });
     expect(noNote.status).toBe(400);
     expect(noNote.body.error.fields.note).toMatch(/note/);
@@ -120,14 +120,14 @@ describe('actions on an entry, each with an audit line', () => {
     expect(onList.body.error.message).toMatch(/waiting list/);
 
     const free = await showWithClasses({ settings: { entryFee: 0 } });
-    const freeEntry = await enter(free.eventId, free.classIds[0], 'Free car');
+    const freeEntry = await enter(free.eventId, free.classIds[0]!, 'Free car');
     expect((await free.organiser.client.post(`/api/entries/${freeEntry.entry.id}/mark-paid`, { note: 'cash' })).body.error.message).toMatch(/free/);
   });
 
   it('moves an entry up from the waiting list: the next number, awaiting payment', async () => {
     const { organiser, eventId, classIds } = await showWithClasses({ classes: [{ name: 'Hot rods', capacity: 1 }] });
-    const first = await enter(eventId, classIds[0], 'In');
-    const second = await enter(eventId, classIds[0], 'Waiting');
+    const first = await enter(eventId, classIds[0]!, 'In');
+    const second = await enter(eventId, classIds[0]!, 'Waiting');
     expect(second.entry.status).toBe('waiting_list');
     const up = await organiser.client.post(`/api/entries/${second.entry.id}/move-up`);
     expect(up.status).toBe(200);
@@ -139,12 +139,12 @@ describe('actions on an entry, each with an audit line', () => {
   it('withdraws by the show’s refund rule: in full before the date, the set percentage after', async () => {
     const now = Date.now();
     const { organiser, eventId, classIds } = await showWithClasses();
-    const early = await enter(eventId, classIds[0], 'Early');
+    const early = await enter(eventId, classIds[0]!, 'Early');
     await confirmEntryPayment(early.entry.id, 'ref-early');
     const res = await organiser.client.post(`/api/entries/${early.entry.id}/withdraw`);
     expect(res.body.entry).toMatchObject({ status: 'withdrawn', refundDue: 2500 });
 
-    const late = await enter(eventId, classIds[0], 'Late');
+    const late = await enter(eventId, classIds[0]!, 'Late');
     await confirmEntryPayment(late.entry.id, 'ref-late');
     await Event.update({ refundRule: { fullRefundUntil: new Date(now - DAY).toISOString(), afterwardsPercent: 50 } }, { where: { id: eventId } });
     expect((await organiser.client.post(`/api/entries/${late.entry.id}/withdraw`)).body.entry).toMatchObject({ refundDue: 1250 });
@@ -156,19 +156,19 @@ describe('actions on an entry, each with an audit line', () => {
 
   it('leaves every action to the show’s organisers: gate staff, judges, the entrant and another show’s organiser get 403 and nothing changes', async () => {
     const { eventId, classIds } = await showWithClasses({ classes: [{ name: 'A', capacity: 1 }, { name: 'B' }] });
-    const { owner, entry } = await enter(eventId, classIds[0], 'Guarded');
-    const waiting = await enter(eventId, classIds[0], 'Guarded waiting');
+    const { owner, entry } = await enter(eventId, classIds[0]!, 'Guarded');
+    const waiting = await enter(eventId, classIds[0]!, 'Guarded waiting');
     const gate = await memberOf(eventId, 'gate');
     const judge = await memberOf(eventId, 'judge');
     const other = await showWithClasses();
     for (const who of [gate.client, judge.client, owner.client, other.organiser.client]) {
-      expect((await who.post(`/api/entries/${entry.id}/class`, { classId: classIds[1] })).status).toBe(403);
+      expect((await who.post(`/api/entries/${entry.id}/class`, { classId: classIds[1]! })).status).toBe(403);
       expect((await who.post(`/api/entries/${entry.id}/mark-paid`, { note: 'cash' })).status).toBe(403);
       expect((await who.post(`/api/entries/${waiting.entry.id}/move-up`)).status).toBe(403);
       expect((await who.get(`/api/entries/${entry.id}/audit`)).status).toBe(403);
     }
     for (const who of [gate.client, judge.client, other.organiser.client]) expect((await who.post(`/api/entries/${entry.id}/withdraw`)).status).toBe(403);
-    expect(await Entry.findByPk(entry.id)).toMatchObject({ classId: classIds[0], status: 'awaiting_payment', paidAt: null });
+    expect(await Entry.findByPk(entry.id)).toMatchObject({ classId: classIds[0]!, status: 'awaiting_payment', paidAt: null });
     expect(await AuditLine.count({ where: { entryId: entry.id } })).toBe(1);
   });
 });
@@ -176,9 +176,9 @@ describe('actions on an entry, each with an audit line', () => {
 describe('CSV export', () => {
   it('writes UTF-8 with a header row, numbers as numbers and formula-looking text defused', async () => {
     const { organiser, eventId, classIds, slug } = await showWithClasses({ classes: [{ name: 'Hot rods' }] });
-    const a = await enter(eventId, classIds[0], '=HYPERLINK("http://x.test","click")', { ownerPhone: '+1 555 0199' });
-    await enter(eventId, classIds[0], 'Coupé "Brûlé", 1932');
-    await enter(eventId, classIds[0], '@SUM(A1)');
+    const a = await enter(eventId, classIds[0]!, '=HYPERLINK("http://x.test","click")', { ownerPhone: '+1 555 0199' });
+    await enter(eventId, classIds[0]!, 'Coupé "Brûlé", 1932');
+    await enter(eventId, classIds[0]!, '@SUM(A1)');
     await confirmEntryPayment(a.entry.id, 'ref-a');
     const res = await organiser.client.get(`/api/events/${eventId}/entries.csv`).buffer(true).parse((r, cb) => {
       const chunks: Buffer[] = [];
