@@ -80,6 +80,23 @@ export const router = createBrowserRouter([
       { path: '/enter/:slug', element: <RequireUser><EnterShowPage /></RequireUser>, errorElement: <RouteError /> },
       { path: '/entries', element: <RequireUser><MyEntriesPage /></RequireUser>, errorElement: <RouteError /> },
       { path: '/invitations/:token', element: <InvitationPage />, errorElement: <RouteError /> },
+      // Show day: the organiser's entries table and the gate, loaded only when opened.
+      {
+        path: '/shows/:id/entries',
+        lazy: async () => {
+          const { EntriesPage } = await import('@client/features/show-day/components/entries-page');
+          return { element: <RequireUser><EntriesPage /></RequireUser> };
+        },
+        errorElement: <RouteError />,
+      },
+      {
+        path: '/shows/:id/gate',
+        lazy: async () => {
+          const { GatePage } = await import('@client/features/show-day/components/gate-page');
+          return { element: <RequireUser><GatePage /></RequireUser> };
+        },
+        errorElement: <RouteError />,
+      },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

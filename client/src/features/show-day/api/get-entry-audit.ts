@@ -1,0 +1,7 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { AuditLine } from '@shared/schemas/event';
+import { api } from '@client/lib/api';
+
+export const getEntryAudit = (entryId: number) => api<{ audit: AuditLine[] }>(`/api/entries/${entryId}/audit`).then((r) => r.audit);
+export const entryAuditQueryOptions = (entryId: number) => queryOptions({ queryKey: ['entries', entryId, 'audit'], queryFn: () => getEntryAudit(entryId) });
+export const useEntryAudit = (entryId: number) => useQuery(entryAuditQueryOptions(entryId));

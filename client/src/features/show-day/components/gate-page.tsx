@@ -1,0 +1,143 @@
+import { useCallback, useEffect, useState } from 'react';
+import { useParams } from 'react-router-dom';
+import { formatMoney } from '@shared/calc/money';
+import { CHECK_IN_UNDO_SECONDS, PAYMENT_STATE_LABELS, type GateCard } from '@shared/schemas/show-day';
+import { useShow } from '../api/get-show';
+import { useCheckIn, useGateCounts, useLookUpCard, useUndoCheckIn } from '../api/gate';
+import { useQrScanner } from './use-qr-scanner';
+import { LoadingState, ErrorState } from '@client/components/ui/states';
+
+const big = 'min-h-12 w-full border-2 px-4 py-3 font-display text-xl uppercase tracking-wide disabled:opacity-50';
+
+/** Arrived / expected per class, refreshed every few seconds. */
+function Counts({ eventId }: { eventId: number }) {
+  const counts = useGateCounts(eventId);
+  if (!counts.data) return null;
+  return (
+    <section aria-label="Arrived" className="mt-6 border-2 border-ink bg-white p-3">
+      <p className="font-display text-2xl uppercase tabular-nums">Arrived {counts.data.arrived} / {counts.data.expected}</p>
+      <ul className="mt-2 space-y-1 text-lg tabular-nums">
+        {counts.data.classes.map((c) => (
+          <li key={c.classId} className="flex justify-between border-b border-rule py-1">
+            <span>{c.name}</span>
+            <span aria-label={`${c.name}: ${c.arrived} of ${c.expected} arrived`}>{c.arrived} / {c.expected}</span>
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}
+
+/** The car that came up: photo, number, title, class, payment and the problem in words, then one big button. */
+function CarCard({ eventId, card, onChange, justChecked }: { eventId: number; card: GateCard; onChange: (c: GateCard, checked: boolean) => void; justChecked: boolean }) {
+  const checkIn = useCheckIn(eventId);
+  const undo = useUndoCheckIn(eventId);
+  const [secondsLeft, setSecondsLeft] = useState(0);
+  const e = card.entry;
+  useEffect(() => {
+    if (!justChecked || !e?.checkedInAt) return;
+    const tick = () => setSecondsLeft(Math.max(0, CHECK_IN_UNDO_SECONDS - Math.floor((Date.now() - new Date(e.checkedInAt!).getTime()) / 1000)));
+    tick();
+    const t = setInterval(tick, 1000);
+    return () => clearInterval(t);
+  }, [justChecked, e?.checkedInAt]);
+
+  const error = checkIn.error ?? undo.error;
+  return (
+    <section aria-label="Scanned car" aria-live="polite" className="mt-4 border-2 border-ink bg-white">
+      {e?.cover ? <img src={e.cover.src} width={e.cover.width} height={e.cover.height} alt="" className="aspect-[3/2] w-full object-cover" /> : null}
+      <div className="p-3">
+        {e ? (
+          <>
+            <p className="font-display text-5xl tabular-nums">No. {e.number ?? '—'}</p>
+            <p className="text-2xl font-semibold">{e.title}</p>
+            <p className="text-xl">Class: {e.className}</p>
+            <p className="text-xl">Payment: {PAYMENT_STATE_LABELS[e.payment]}{e.payment === 'unpaid' ? ` (${formatMoney(e.feeAmount, e.currency)})` : ''}</p>
+          </>
+        ) : null}
+        {justChecked ? <p role="status" className="mt-3 border-l-8 border-ok bg-ok/10 p-3 text-2xl font-semibold">Checked in.</p> : null}
+        {card.message && !justChecked ? <p role="alert" className="mt-3 border-l-8 border-danger bg-danger/10 p-3 text-xl font-semibold">{card.message}</p> : null}
+        {error ? <p role="alert" className="mt-3 border-l-8 border-danger p-3 text-xl">{error.message}</p> : null}
+        {e && card.canCheckIn ? (
+          <button type="button" className={`${big} mt-3 border-ink bg-ink text-paper`} disabled={checkIn.isPending} onClick={() => checkIn.mutate({ number: e.number!, takeCash: false }, { onSuccess: (c) => onChange(c, true) })}>
+            Check in
+          </button>
+        ) : null}
+        {e && card.canTakeCash ? (
+          <button type="button" className={`${big} mt-3 border-ink bg-ink text-paper`} disabled={checkIn.isPending} onClick={() => checkIn.mutate({ number: e.number!, takeCash: true }, { onSuccess: (c) => onChange(c, true) })}>
+            Take {formatMoney(e.feeAmount, e.currency)} cash and check in
+          </button>
+        ) : null}
+        {e && justChecked && secondsLeft > 0 ? (
+          <button type="button" className={`${big} mt-3 border-ink bg-paper text-ink`} disabled={undo.isPending} onClick={() => undo.mutate(e.id, { onSuccess: (c) => onChange(c, false) })}>
+            Undo ({secondsLeft} s)
+          </button>
+        ) : null}
+      </div>
+    </section>
+  );
+}
+
+/** Gate check-in on a phone: scan the card's QR code or type the number. */
+export function GatePage() {
+  const eventId = Number(useParams().id);
+  const show = useShow(eventId);
+  const lookUp = useLookUpCard(eventId);
+  const [card, setCard] = useState<GateCard | null>(null);
+  const [justChecked, setJustChecked] = useState(false);
+  const [camera, setCamera] = useState(false);
+  const [typed, setTyped] = useState('');
+  const found = (c: GateCard) => {
+    setCard(c);
+    setJustChecked(false);
+  };
+  const onCode = useCallback((text: string) => lookUp.mutate({ code: text }, { onSuccess: found }), [lookUp]);
+  const { videoRef, error: cameraError } = useQrScanner(camera, onCode);
+
+  if (show.isPending) return <LoadingState />;
+  if (show.error) return <ErrorState error={show.error} />;
+  const open = show.data.abilities.checkIn;
+  return (
+    <div className="mx-auto max-w-md text-lg">
+      <h1 className="font-display text-3xl uppercase">Gate · {show.data.name}</h1>
+      {!open ? <p role="alert" className="mt-3 border-l-8 border-caution p-3">The gate opens on show day; an organiser opens it from the show's steps.</p> : null}
+      {open ? (
+        <>
+          <div className="mt-3 border-2 border-ink bg-ink">
+            {camera ? <video ref={videoRef} muted playsInline aria-label="Camera" className="aspect-square w-full object-cover" /> : null}
+            <button type="button" className={`${big} border-ink ${camera ? 'bg-paper text-ink' : 'bg-signal text-paper'}`} onClick={() => setCamera((c) => !c)}>
+              {camera ? 'Stop camera' : 'Scan a card'}
+            </button>
+          </div>
+          {cameraError ? <p role="alert" className="mt-2 text-danger">{cameraError}</p> : null}
+          <form
+            className="mt-3 flex gap-2"
+            onSubmit={(ev) => {
+              ev.preventDefault();
+              const n = Number(typed);
+              if (Number.isInteger(n) && n > 0) lookUp.mutate({ number: n }, { onSuccess: found });
+            }}
+          >
+            <input inputMode="numeric" pattern="[0-9]*" aria-label="Entry number" placeholder="Entry number" value={typed} onChange={(e) => setTyped(e.target.value.replace(/\D/g, ''))} className="min-h-12 flex-1 border-2 border-ink bg-white px-3 text-2xl tabular-nums" />
+            <button type="submit" className="min-h-12 min-w-24 border-2 border-ink bg-ink px-4 font-display text-xl uppercase text-paper">Find</button>
+          </form>
+          {lookUp.isPending ? <LoadingState label="Looking up…" /> : null}
+          {lookUp.error ? <p role="alert" className="mt-3 border-l-8 border-danger p-3 text-xl font-semibold">{lookUp.error.message}</p> : null}
+          {card && !lookUp.isPending && !lookUp.error ? (
+            <CarCard
+              key={`${card.entry?.id ?? 'none'}-${card.problem}`}
+              eventId={eventId}
+              card={card}
+              justChecked={justChecked}
+              onChange={(c, checked) => {
+                setCard(c);
+                setJustChecked(checked);
+              }}
+            />
+          ) : null}
+          <Counts eventId={eventId} />
+        </>
+      ) : null}
+    </div>
+  );
+}
