@@ -13,10 +13,12 @@ import { CHROMIUM } from './browser';
 
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 
-// Debian packages the tests need: the browser for journeys, poppler to print cards to pixels and read their QR codes.
+// Debian packages the tests need: the browser for journeys, poppler to print cards to pixels and read their QR codes, ffmpeg for the fake camera.
 const TOOLS = [
   { binary: CHROMIUM, pkg: 'chromium' },
   { binary: '/usr/bin/pdftoppm', pkg: 'poppler-utils' },
+  // The gate test turns a card into a fake camera's video clip.
+  { binary: '/usr/bin/ffmpeg', pkg: 'ffmpeg' },
 ];
 
 function ensureTools() {
