@@ -25,7 +25,7 @@ function cardAsCameraClip(pdf: Buffer): string {
   return clip;
 }
 
-describe('the gate on a phone', () => {
+describe('the gate on a phone', { timeout: 300_000 }, () => {
   it('checks a car in by scanning its card with the camera, then another by typing its number and taking cash', async () => {
     const { organiser, eventId, classIds } = await showWithClasses({ classes: [{ name: 'Hot rods' }, { name: 'Customs' }] });
     const paid = await enter(eventId, classIds[0]!, 'Scanned roadster');
