@@ -118,8 +118,8 @@ export function GatePage() {
               if (Number.isInteger(n) && n > 0) lookUp.mutate({ number: n }, { onSuccess: found });
             }}
           >
-            <input inputMode="numeric" pattern="[0-9]*" aria-label="Entry number" placeholder="Entry number" value={typed} onChange={(e) => setTyped(e.target.value.replace(/\D/g, ''))} className="min-h-12 flex-1 border-2 border-ink bg-white px-3 text-2xl tabular-nums" />
-            <button type="submit" className="min-h-12 min-w-24 border-2 border-ink bg-ink px-4 font-display text-xl uppercase text-paper">Find</button>
+            <input inputMode="numeric" pattern="[0-9]*" aria-label="Entry number" placeholder="Entry number" value={typed} onChange={(e) => setTyped(e.target.value.replace(/\D/g, ''))} className="min-h-12 min-w-0 flex-1 border-2 border-ink bg-white px-3 text-2xl tabular-nums" />
+            <button type="submit" className="min-h-12 min-w-24 shrink-0 border-2 border-ink bg-ink px-4 font-display text-xl uppercase text-paper">Find</button>
           </form>
           {lookUp.isPending ? <LoadingState label="Looking up…" /> : null}
           {lookUp.error ? <p role="alert" className="mt-3 border-l-8 border-danger p-3 text-xl font-semibold">{lookUp.error.message}</p> : null}
