@@ -10,7 +10,7 @@ import { Event } from '../models/event';
 import { EventClass } from '../models/event-class';
 import { Photo } from '../models/photo';
 import { ConflictError, NotFoundError } from '../errors';
-import { mediaUrl, photoVariantKey } from '../presenters/photo';
+import { mediaUrl, photoVariantKey } from '../storage/keys';
 import { writeAudit } from './audit';
 import { recordManualPayment } from './entry-actions';
 

@@ -1,39 +1,19 @@
-import { useState, type FormEvent } from 'react';
+import { Link } from 'react-router-dom';
 import type { EventDetail } from '@shared/schemas/event';
-import { Button } from '@client/components/ui/button';
-import { Notice } from '@client/components/ui/notice';
 import { Panel } from '@client/components/ui/panel';
-import { TextField } from '@client/components/ui/text-field';
-import { useCheckIn } from '../api/show-entries';
 import { showTime } from './show-dates';
 
-/** The gate: type the number on the card; the answer says at once if it is unpaid or already in. */
+/** Where gate staff start: the gate screen on show day, otherwise when it opens. */
 export function GatePanel({ show }: { show: EventDetail }) {
-  const checkIn = useCheckIn(show.id);
-  const [number, setNumber] = useState('');
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    const n = Number(number);
-    if (!Number.isInteger(n) || n < 1) return;
-    checkIn.mutate(n, { onSuccess: () => setNumber('') });
-  };
-  if (!show.abilities.checkIn) {
-    return (
-      <Panel title="Gate">
-        <p>Check-in opens on show day, when the organiser opens the gate. The show starts {showTime(show.startsAt, show.timeZone)} at {show.venueName}.</p>
-      </Panel>
-    );
-  }
   return (
-    <Panel title="Gate: check a car in">
-      <form onSubmit={submit} className="flex flex-wrap items-end gap-3">
-        <TextField label="Entry number" inputMode="numeric" autoFocus value={number} onChange={(e) => setNumber(e.target.value)} className="w-40" />
-        <Button type="submit" busy={checkIn.isPending}>
-          Check in
-        </Button>
-      </form>
-      {checkIn.isSuccess ? <Notice tone="ok">Number {checkIn.data.entry.number} is checked in.</Notice> : null}
-      {checkIn.isError ? <Notice tone="danger">{checkIn.error.message}</Notice> : null}
+    <Panel title="Gate">
+      {show.abilities.checkIn ? (
+        <Link to={`/shows/${show.id}/gate`} className="inline-flex min-h-12 items-center rounded bg-ink px-5 font-display text-lg text-paper">
+          Open the gate
+        </Link>
+      ) : (
+        <p>Check-in opens on show day, when the organiser opens the gate. The show starts {showTime(show.startsAt, show.timeZone)} at {show.venueName}.</p>
+      )}
     </Panel>
   );
 }

@@ -11,7 +11,7 @@ import { LifecyclePanel } from './lifecycle-panel';
 import { ClassesPanel } from './classes-panel';
 import { JudgingSheetPanel } from './judging-sheet-panel';
 import { PeoplePanel } from './people-panel';
-import { EntriesPanel } from './entries-panel';
+import { EntriesLinkPanel } from './entries-link-panel';
 import { GatePanel } from './gate-panel';
 import { ShowSettingsForm } from './show-settings-form';
 import { showTime } from './show-dates';
@@ -38,7 +38,7 @@ export function ShowPage() {
       </Panel>
       <LifecyclePanel show={show} />
       {show.myRoles.includes('gate') || a.checkIn ? <GatePanel show={show} /> : null}
-      {a.viewEntries ? <EntriesPanel show={show} /> : null}
+      {a.viewEntries ? <EntriesLinkPanel show={show} /> : null}
       <ClassesPanel show={show} />
       <JudgingSheetPanel key={show.criteria.map((c) => c.id).join()} show={show} />
       {a.manage ? <PeoplePanel show={show} /> : null}
