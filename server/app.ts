@@ -34,6 +34,7 @@ import { eventPeopleRouter } from './routes/event-people';
 import { entriesRouter } from './routes/entries';
 import { paymentsWebhookRouter } from './routes/payments';
 import { showDayRouter } from './routes/show-day';
+import { judgingRouter } from './routes/judging';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -54,7 +55,7 @@ function apiRouter() {
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
-  api.use(eventsRouter, eventPeopleRouter, entriesRouter, showDayRouter);
+  api.use(eventsRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter);
   api.use(apiNotFound);
   return api;
 }

@@ -1,6 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 import type { EventStatus } from '@shared/constants';
 import type { RefundRule } from '@shared/calc/refund';
+import { DEFAULT_RESULT_RULES, type ShowResultRules } from '@shared/schemas/judging';
 import type { EventClass } from './event-class';
 import type { Criterion } from './criterion';
 
@@ -24,6 +25,8 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
   declare description: string;
   declare lastEntryNumber: CreationOptional<number>;
   declare createdBy: number | null;
+  declare judgingClosedAt: CreationOptional<Date | null>;
+  declare resultRules: CreationOptional<ShowResultRules>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -51,6 +54,8 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
         description: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         lastEntryNumber: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdBy: { type: DataTypes.INTEGER, allowNull: true },
+        judgingClosedAt: { type: DataTypes.DATE, allowNull: true },
+        resultRules: { type: DataTypes.JSONB, allowNull: false, defaultValue: DEFAULT_RESULT_RULES },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

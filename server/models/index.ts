@@ -17,8 +17,11 @@ import { EventMembership } from './event-membership';
 import { EventInvitation } from './event-invitation';
 import { Entry } from './entry';
 import { AuditLine } from './audit-line';
+import { JudgeAssignment } from './judge-assignment';
+import { Score } from './score';
+import { SheetNote } from './sheet-note';
 
-for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine]) {
+for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote]) {
   model.initModel(sequelize);
 }
 
@@ -54,5 +57,5 @@ Entry.belongsTo(EventClass, { foreignKey: 'classId', as: 'eventClass' });
 Entry.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });
 AuditLine.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
 
-export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine };
+export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote };
 export { sequelize, User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode };

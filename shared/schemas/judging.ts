@@ -1,0 +1,104 @@
+import { z } from 'zod';
+
+export const SCORE_COMMENT_MAX = 1000;
+export const SHEET_NOTE_MAX = 2000;
+/** A phone sends one car's sheet at a time; this is room for a long sheet and a few replays. */
+export const SCORE_ITEMS_PER_REQUEST_MAX = 200;
+/** A phone clock this far ahead of the server is refused: its scores would otherwise win every later change. */
+export const DEVICE_CLOCK_AHEAD_MAX_MS = 24 * 3600_000;
+
+/** How a show turns sheets into places; stored on the show and read by `shared/calc/results.ts`. */
+export const ShowResultRulesSchema = z.object({
+  trimFromSheets: z.number().int().min(5, { error: 'Trimming needs at least 5 sheets.' }).max(50).nullable(),
+  placesPerClass: z.number().int().min(1).max(10),
+  bestOfShow: z.boolean(),
+  bestOfShowKeepsClassPlace: z.boolean(),
+  shareCommentsWithEntrants: z.boolean(),
+});
+export type ShowResultRules = z.infer<typeof ShowResultRulesSchema>;
+export const DEFAULT_RESULT_RULES: ShowResultRules = { trimFromSheets: null, placesPerClass: 3, bestOfShow: true, bestOfShowKeepsClassPlace: false, shareCommentsWithEntrants: true };
+
+/** The organiser's choice of a judge's classes: every class, or a list. */
+export const JudgeClassesSchema = z
+  .object({
+    allClasses: z.boolean({ error: 'Say whether the judge scores every class.' }),
+    classIds: z.array(z.number().int().positive()).max(100).default([]),
+  })
+  .refine((v) => v.allClasses || v.classIds.length > 0, { path: ['classIds'], error: 'Pick at least one class, or every class.' });
+export type JudgeClassesInput = z.infer<typeof JudgeClassesSchema>;
+
+const clientId = z.uuid({ error: 'Each score needs the id its device gave it (a UUID).' });
+const deviceTime = z.iso.datetime({ offset: true, error: 'Device time must be a date and time with its offset (ISO 8601).' });
+const id = (label: string) => z.number({ error: `${label} is required.` }).int().positive({ error: `${label} is required.` });
+
+export const ScoreItemSchema = z.object({
+  clientId,
+  deviceTime,
+  entryId: id('Car'),
+  criterionId: id('Criterion'),
+  points: z.number({ error: 'Points must be a whole number.' }).int({ error: 'Points must be a whole number.' }).min(0, { error: 'Points cannot be below 0.' }),
+  comment: z.string().trim().max(SCORE_COMMENT_MAX, { error: `A comment must be at most ${SCORE_COMMENT_MAX} characters.` }).default(''),
+});
+export type ScoreItem = z.infer<typeof ScoreItemSchema>;
+
+export const NoteItemSchema = z.object({
+  clientId,
+  deviceTime,
+  entryId: id('Car'),
+  comment: z.string().trim().max(SHEET_NOTE_MAX, { error: `A comment must be at most ${SHEET_NOTE_MAX} characters.` }),
+});
+export type NoteItem = z.infer<typeof NoteItemSchema>;
+
+/** What a judge's phone sends: scores and car comments, each stamped with device time and id. */
+export const ScoreSubmitSchema = z
+  .object({
+    scores: z.array(ScoreItemSchema).max(SCORE_ITEMS_PER_REQUEST_MAX).default([]),
+    notes: z.array(NoteItemSchema).max(SCORE_ITEMS_PER_REQUEST_MAX).default([]),
+  })
+  .refine((v) => v.scores.length + v.notes.length > 0, { path: ['scores'], error: 'Nothing to send.' });
+export type ScoreSubmitInput = z.infer<typeof ScoreSubmitSchema>;
+
+/** For each item sent: whether it became the stored value (false = an older or repeated one, ignored). */
+export const ScoreSubmitResultSchema = z.object({ applied: z.array(z.object({ clientId: z.string(), applied: z.boolean() })) });
+
+export const SHEET_STATES = ['scored', 'partly', 'not_yet'] as const;
+export type SheetState = (typeof SHEET_STATES)[number];
+export const SHEET_STATE_LABELS: Record<SheetState, string> = { scored: 'Scored', partly: 'Partly', not_yet: 'Not yet' };
+
+/** A sheet counts once every line has points; anything less is still being filled in. */
+export function sheetState(linesScored: number, lines: number): SheetState {
+  if (lines > 0 && linesScored >= lines) return 'scored';
+  return linesScored > 0 ? 'partly' : 'not_yet';
+}
+
+/** Entries that are judged: those holding a paid or free place (checked in or not); waiting, unpaid and withdrawn ones are not. */
+export const JUDGED_ENTRY_STATUSES = ['confirmed', 'checked_in'] as const;
+
+// What leaves the server for the judge's phone and the organiser's progress screen.
+export type JudgeFigure = { label: string; metric: string; imperial: string; provenance: string };
+export type JudgeCar = {
+  entryId: number;
+  number: number;
+  classId: number;
+  className: string;
+  title: string;
+  code: string;
+  cover: { url: string; width: number; height: number } | null;
+  figures: JudgeFigure[];
+};
+export type MyScore = { entryId: number; criterionId: number; points: number; comment: string; deviceTime: string; clientId: string };
+export type MyNote = { entryId: number; comment: string; deviceTime: string; clientId: string };
+export type JudgeView = {
+  event: { id: number; name: string; slug: string; status: string; judgingOpen: boolean; closedReason: string | null };
+  criteria: Array<{ id: number; name: string; maxPoints: number; weight: number; position: number }>;
+  cars: JudgeCar[];
+  scores: MyScore[];
+  notes: MyNote[];
+};
+export type JudgeSummary = { id: number; name: string; allClasses: boolean; classIds: number[] };
+export type JudgingProgress = {
+  judgingOpen: boolean;
+  lines: number;
+  byClass: Array<{ classId: number; name: string; cars: number; bySheets: Array<{ sheets: number; cars: number }> }>;
+  byJudge: Array<{ judgeId: number; name: string; allClasses: boolean; classIds: number[]; cars: number; scored: number; partly: number; notYet: number; leftNumbers: number[] }>;
+};
