@@ -17,8 +17,24 @@ import { InvitationPage } from '@client/features/shows/components/invitation-pag
 import { NotFoundPage } from './not-found-page';
 import { RouteError } from './route-error';
 import { LoadingState } from '@client/components/ui/states';
+import { JudgeLayout } from '@client/features/judging/components/judge-layout';
+import { JudgeHomePage } from '@client/features/judging/components/judge-home-page';
+import { JudgeCarsPage } from '@client/features/judging/components/judge-cars-page';
+import { ScoreSheetPage } from '@client/features/judging/components/score-sheet-page';
 
 export const router = createBrowserRouter([
+  // The judge's screens are in the main bundle and outside the app layout: they must open from the
+  // device's copy with no signal, so nothing on them waits for the session or a lazy chunk.
+  {
+    path: '/judge',
+    element: <JudgeLayout />,
+    errorElement: <RouteError />,
+    children: [
+      { index: true, element: <RequireUser><JudgeHomePage /></RequireUser>, errorElement: <RouteError /> },
+      { path: ':eventId', element: <JudgeCarsPage />, errorElement: <RouteError /> },
+      { path: ':eventId/cars/:entryId', element: <ScoreSheetPage />, errorElement: <RouteError /> },
+    ],
+  },
   {
     element: <AppLayout />,
     errorElement: <RouteError />,

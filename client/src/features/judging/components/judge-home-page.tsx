@@ -1,0 +1,24 @@
+import { Link } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import type { EventSummary } from '@shared/schemas/event';
+import { api } from '@client/lib/api';
+import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/states';
+
+/** The shows this person is judging now; one tap opens their cars. */
+export function JudgeHomePage() {
+  const { data, error, isPending, refetch } = useQuery({ queryKey: ['judging', 'shows'], queryFn: () => api<{ events: EventSummary[] }>('/api/judging') });
+  if (isPending) return <LoadingState />;
+  if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
+  if (!data.events.length) return <EmptyState title="Nothing to judge now">Shows you judge appear here while they are being judged.</EmptyState>;
+  return (
+    <ul className="space-y-2">
+      {data.events.map((e) => (
+        <li key={e.id}>
+          <Link to={`/judge/${e.id}`} className="flex min-h-16 items-center border-2 border-ink bg-white px-3 font-display text-2xl uppercase">
+            {e.name}
+          </Link>
+        </li>
+      ))}
+    </ul>
+  );
+}

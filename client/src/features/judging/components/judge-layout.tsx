@@ -1,0 +1,30 @@
+import { useEffect } from 'react';
+import { Link, Outlet } from 'react-router-dom';
+import { useOnline } from './use-online';
+
+/**
+ * The judge's frame: a slim bar and the page, nothing that needs the network, so the screens
+ * open from the device's copy with no signal at all.
+ */
+export function JudgeLayout() {
+  const online = useOnline();
+  useEffect(() => {
+    // Scoped to /judge: the rest of the app keeps the network's answers.
+    if ('serviceWorker' in navigator && import.meta.env.PROD) void navigator.serviceWorker.register('/judge-sw.js', { scope: '/judge' });
+  }, []);
+  return (
+    <div className="min-h-screen bg-paper text-ink">
+      <header className="flex items-center justify-between border-b-2 border-ink px-3 py-2">
+        <Link to="/judge" className="font-display text-xl font-semibold uppercase tracking-[0.2em]">
+          Placard<span className="text-signal">.</span> <span className="text-base tracking-wide">Judging</span>
+        </Link>
+        <span role="status" className={`font-display text-sm uppercase tracking-wide ${online ? 'text-ok' : 'text-danger'}`}>
+          {online ? 'Online' : 'No signal'}
+        </span>
+      </header>
+      <main id="main" className="mx-auto max-w-xl px-3 pb-24 pt-3">
+        <Outlet />
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,89 @@
+import { api, ApiError } from '@client/lib/api';
+import type { NoteItem, ScoreItem } from '@shared/schemas/judging';
+import { SCORE_ITEMS_PER_REQUEST_MAX } from '@shared/schemas/judging';
+import { lineKey, readLines, writeLines, type LocalLine } from './sheet-store';
+
+/**
+ * The outbox: lines in state "pending" are sent by this loop, oldest first, whenever there is a
+ * connection (on start, on the browser's `online` event, after each tap and every few seconds).
+ * The server keeps the newest by device time and ignores a replay, so sending a line twice is
+ * harmless: a line becomes "sent" only after the server answered, never before.
+ */
+type Listener = () => void;
+const listeners = new Set<Listener>();
+let version = 0;
+const changed = () => {
+  version++;
+  for (const l of listeners) l();
+};
+export const subscribe = (l: Listener) => {
+  listeners.add(l);
+  return () => listeners.delete(l);
+};
+export const outboxVersion = () => version;
+
+const newId = () => crypto.randomUUID();
+
+export async function recordScore(eventId: number, entryId: number, criterionId: number, points: number, comment: string) {
+  const item: ScoreItem = { clientId: newId(), deviceTime: new Date().toISOString(), entryId, criterionId, points, comment };
+  const key = lineKey(entryId, criterionId);
+  await writeLines(eventId, (lines) => ({ ...lines, [key]: { key, kind: 'score', eventId, item, state: 'pending' } }));
+  changed();
+  void flush(eventId);
+}
+
+export async function recordNote(eventId: number, entryId: number, comment: string) {
+  const item: NoteItem = { clientId: newId(), deviceTime: new Date().toISOString(), entryId, comment };
+  const key = lineKey(entryId, 'note');
+  await writeLines(eventId, (lines) => ({ ...lines, [key]: { key, kind: 'note', eventId, item, state: 'pending' } }));
+  changed();
+  void flush(eventId);
+}
+
+const sending = new Set<number>();
+
+/** Sends what is pending for one show; a lost connection leaves it pending, a refusal is kept with its reason. */
+export async function flush(eventId: number): Promise<void> {
+  if (sending.has(eventId)) return;
+  sending.add(eventId);
+  try {
+    for (;;) {
+      const pending = Object.values(await readLines(eventId))
+        .filter((l) => l.state === 'pending')
+        .sort((a, b) => a.item.deviceTime.localeCompare(b.item.deviceTime))
+        .slice(0, SCORE_ITEMS_PER_REQUEST_MAX);
+      if (!pending.length) return;
+      const scores = pending.filter((l): l is Extract<LocalLine, { kind: 'score' }> => l.kind === 'score').map((l) => l.item);
+      const notes = pending.filter((l): l is Extract<LocalLine, { kind: 'note' }> => l.kind === 'note').map((l) => l.item);
+      let outcome: { state: 'sent' | 'refused'; message?: string };
+      try {
+        await api(`/api/events/${eventId}/scores`, { method: 'POST', body: { scores, notes } });
+        outcome = { state: 'sent' };
+      } catch (err) {
+        if (!(err instanceof ApiError) || err.code === 'NETWORK' || err.status >= 500 || err.status === 429 || err.status === 401) return; // try again later
+        outcome = { state: 'refused', message: err.message };
+      }
+      const ids = new Set(pending.map((l) => l.item.clientId));
+      // Only the lines sent are marked: a tap made while the request was out stays pending.
+      await writeLines(eventId, (lines) => {
+        for (const [k, l] of Object.entries(lines)) if (ids.has(l.item.clientId)) lines[k] = { ...l, ...outcome } as LocalLine;
+        return lines;
+      });
+      changed();
+    }
+  } finally {
+    sending.delete(eventId);
+  }
+}
+
+/** Starts the send loop for a show; returns the function that stops it. */
+export function startSendLoop(eventId: number, everyMs = 5000): () => void {
+  const kick = () => void flush(eventId);
+  kick();
+  window.addEventListener('online', kick);
+  const timer = window.setInterval(kick, everyMs);
+  return () => {
+    window.removeEventListener('online', kick);
+    window.clearInterval(timer);
+  };
+}

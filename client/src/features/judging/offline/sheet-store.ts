@@ -1,0 +1,33 @@
+import { createStore, get, set, update } from 'idb-keyval';
+import type { JudgeView, NoteItem, ScoreItem } from '@shared/schemas/judging';
+
+/**
+ * Everything the judge writes lives here first, in IndexedDB, before any request: a reload or a
+ * dead battery between a tap and a signal loses nothing. Each line is one record keyed by
+ * car and criterion (or the car's comment); `state` says whether the server has it.
+ */
+export type LineState = 'pending' | 'sent' | 'refused';
+export type LocalLine =
+  | { key: string; kind: 'score'; eventId: number; item: ScoreItem; state: LineState; message?: string }
+  | { key: string; kind: 'note'; eventId: number; item: NoteItem; state: LineState; message?: string };
+/** A comment typed before the line has points waits here; it goes out with the points. */
+export type CommentDraft = { key: string; comment: string };
+
+const store = createStore('placard-judging', 'sheets');
+const linesKey = (eventId: number) => `lines:${eventId}`;
+const viewKey = (eventId: number) => `view:${eventId}`;
+
+export const lineKey = (entryId: number, criterionId: number | 'note') => `${entryId}:${criterionId}`;
+
+export async function readLines(eventId: number): Promise<Record<string, LocalLine>> {
+  return (await get<Record<string, LocalLine>>(linesKey(eventId), store)) ?? {};
+}
+
+/** Writes lines in one IndexedDB transaction (read, change, write), so two taps never overwrite each other. */
+export async function writeLines(eventId: number, change: (lines: Record<string, LocalLine>) => Record<string, LocalLine>): Promise<void> {
+  await update<Record<string, LocalLine>>(linesKey(eventId), (old) => change({ ...(old ?? {}) }), store);
+}
+
+/** The last copy of the judge's cars and sheet fetched from the server, for opening the screens with no signal. */
+export const saveView = (eventId: number, view: JudgeView) => set(viewKey(eventId), view, store);
+export const readView = (eventId: number) => get<JudgeView>(viewKey(eventId), store);
