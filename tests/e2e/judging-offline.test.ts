@@ -22,8 +22,8 @@ describe('judging on a phone with no signal', () => {
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL(`**${list}`);
     await expect.poll(() => page.getByText('My cars: 0 of 4 scored').count()).toBe(1);
-    // The service worker has the shell and its assets once it controls the page.
-    await expect.poll(() => page.evaluate(() => Boolean(navigator.serviceWorker.controller))).toBe(true);
+    // The service worker has kept the shell and its assets once it is active (it then answers the next load of /judge…).
+    await expect.poll(() => page.evaluate(async () => (await navigator.serviceWorker.getRegistration('/judge'))?.active?.state)).toBe('activated');
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'judge-cars-phone.png'), fullPage: true });
 
     await page.getByRole('link', { name: /First car/ }).click();
