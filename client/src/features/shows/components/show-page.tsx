@@ -15,6 +15,7 @@ import { EntriesLinkPanel } from './entries-link-panel';
 import { GatePanel } from './gate-panel';
 import { ShowSettingsForm } from './show-settings-form';
 import { showTime } from './show-dates';
+import { JudgingPanel } from '@client/features/judging/components/judging-panel';
 
 /** One show, as the person's roles in it allow: organisers run everything; judges read the sheet; the gate checks in. */
 export function ShowPage() {
@@ -36,7 +37,13 @@ export function ShowPage() {
         <p>{show.venueName}{show.venueAddress ? `, ${show.venueAddress}` : ''}</p>
         <p>Entries {showTime(show.registrationOpensAt, show.timeZone)} – {showTime(show.registrationClosesAt, show.timeZone)} · fee {show.entryFee === 0 ? 'free' : formatMoney(show.entryFee, show.currency)}</p>
       </Panel>
+      {a.judge ? (
+        <Link to={`/judge/${show.id}`} className="flex min-h-14 items-center justify-center border-2 border-ink bg-ink font-display text-xl uppercase text-paper">
+          Score your cars
+        </Link>
+      ) : null}
       <LifecyclePanel show={show} />
+      {a.manage && ['show_day', 'judging', 'results_published'].includes(show.status) ? <JudgingPanel show={show} /> : null}
       {show.myRoles.includes('gate') || a.checkIn ? <GatePanel show={show} /> : null}
       {a.viewEntries ? <EntriesLinkPanel show={show} /> : null}
       <ClassesPanel show={show} />
