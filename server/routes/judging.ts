@@ -5,7 +5,9 @@ import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeJudging, type JudgingAction } from '../policies/judging';
 import { actorInEvent } from '../services/event-actor';
-import { findEvent } from '../services/events';
+import { findEvent, loadEventDetail } from '../services/events';
+import { computeShowResults } from '../services/results';
+import { presentResultsReview } from '../presenters/results';
 import { assignJudge, listJudges } from '../services/judge-assignments';
 import { judgingClosedReason, setJudgingClosed, submitScores } from '../services/scores';
 import { listJudgingShows, loadJudgeView, loadProgress } from '../services/judging';
@@ -13,7 +15,7 @@ import { presentJudge, presentJudgeView, presentProgress } from '../presenters/j
 import { presentEventSummary } from '../presenters/event';
 
 export const judgingRouter = Router();
-judgingRouter.use(['/judging', '/events/:id/judges', '/events/:id/judging', '/events/:id/scores'], requireUser);
+judgingRouter.use(['/judging', '/events/:id/judges', '/events/:id/judging', '/events/:id/scores', '/events/:id/results'], requireUser);
 
 const JudgeParamsSchema = IdParamSchema.extend({ judgeId: IdSchema });
 
@@ -75,3 +77,14 @@ for (const [path, closed] of [['close', true], ['reopen', false]] as const) {
     res.json({ progress: presentProgress(await loadProgress(id), judgingClosedReason(event) === null) });
   });
 }
+
+/** The results as they stand, for the organiser's review before publishing: places, totals, how each tie was decided. */
+judgingRouter.get('/events/:id/results/review', async (req, res) => {
+  const { id } = parseParams(req, IdParamSchema);
+  await authorized(req, id, 'viewAllScores');
+  const detail = await loadEventDetail(id);
+  const { results, cars } = await computeShowResults(id);
+  const criteria = new Map((detail.criteria ?? []).map((c) => [c.id, c.name]));
+  const classNames = new Map((detail.classes ?? []).map((c) => [c.id, c.name]));
+  res.json({ review: presentResultsReview(results, cars, criteria, classNames) });
+});

@@ -102,3 +102,10 @@ export type JudgingProgress = {
   byClass: Array<{ classId: number; name: string; cars: number; bySheets: Array<{ sheets: number; cars: number }> }>;
   byJudge: Array<{ judgeId: number; name: string; allClasses: boolean; classIds: number[]; cars: number; scored: number; partly: number; notYet: number; leftNumbers: number[] }>;
 };
+
+export type ResultLine = { entryId: number; number: number; title: string; className: string; place: number; shared: boolean; total: number; totalShown: string; decidedBy: string; sheets: number };
+export type ResultsReview = {
+  classes: Array<{ classId: number; className: string; placings: ResultLine[]; unscored: number }>;
+  bestOfShow: ResultLine[];
+  ties: Array<{ scope: 'class' | 'best-of-show'; classId: number | null; place: number; numbers: number[] }>;
+};

@@ -238,3 +238,29 @@ describe('progress and closing judging', () => {
     expect(late.body.error.message).toMatch(/Results are published/);
   });
 });
+
+describe('results review', () => {
+  it('places cars from finished sheets only (weighted means), takes best of show out of its class by default, and is for organisers only', async () => {
+    const show = await showInJudging({ carsPerClass: 3 });
+    const [a, b] = [await judgeOf(show.eventId, 'Ada'), await judgeOf(show.eventId, 'Bo')];
+    for (const j of [a, b]) await show.organiser.client.put(`/api/events/${show.eventId}/judges/${j.user.id}/classes`, { allClasses: true });
+    const [c1, c2, c3] = show.entries.filter((e) => e.classId === show.classIds[0]);
+    const sheet = (entryId: number, points: number[]) => show.criteria.map((c, i) => scoreItem(entryId, c.id, points[i]!));
+    // Weights 2, 1.5, 1. Car 1: Ada 8,6,4 and Bo 6,6,4 → means 7,6,4 → 2×7 + 1.5×6 + 4 = 27.
+    await a.client.post(`/api/events/${show.eventId}/scores`, { scores: [...sheet(c1!.id, [8, 6, 4]), ...sheet(c2!.id, [8, 4, 4]), ...sheet(c3!.id, [10, 10, 5])] });
+    await b.client.post(`/api/events/${show.eventId}/scores`, { scores: [...sheet(c1!.id, [6, 6, 4]), ...sheet(c2!.id, [6, 8, 3])] });
+    // Bo's sheet for car 3 is half done: a draft, not counted.
+    await b.client.post(`/api/events/${show.eventId}/scores`, { scores: [scoreItem(c3!.id, show.criteria[0]!.id, 0)] });
+    // Car 2: means 7, 6, 3.5 → 14 + 9 + 3.5 = 26.5. Car 3: Ada only, 20 + 15 + 5 = 40.
+    const review = await show.organiser.client.get(`/api/events/${show.eventId}/results/review`);
+    expect(review.status).toBe(200);
+    const cls = review.body.review.classes.find((c: { classId: number }) => c.classId === show.classIds[0]);
+    // Car 3 is best of show and (by the default rule) leaves its class place.
+    expect(review.body.review.bestOfShow.map((r: { number: number; totalShown: string }) => [r.number, r.totalShown])).toEqual([[c3!.number, '40.00']]);
+    expect(cls.placings.map((r: { number: number; place: number; totalShown: string; sheets: number }) => [r.number, r.place, r.totalShown, r.sheets])).toEqual([
+      [c1!.number, 1, '27.00', 2],
+      [c2!.number, 2, '26.50', 2],
+    ]);
+    expect((await a.client.get(`/api/events/${show.eventId}/results/review`)).status).toBe(403);
+  });
+});

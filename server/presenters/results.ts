@@ -1,0 +1,32 @@
+import type { RankedEntry, ShowResults } from '@shared/calc/results';
+import type { ResultLine, ResultsReview } from '@shared/schemas/judging';
+
+type Cars = Map<number, { number: number; title: string; className: string }>;
+
+const decided = (r: RankedEntry, criteria: Map<number, string>) => {
+  switch (r.decidedBy.kind) {
+    case 'score':
+      return 'score';
+    case 'criterion':
+      return `tie broken on ${criteria.get(r.decidedBy.criterionId) ?? 'a criterion'}`;
+    case 'organiser':
+      return `placed by the organiser: ${r.decidedBy.reason}`;
+    case 'shared':
+      return 'shared place';
+  }
+};
+
+/** Totals stay unrounded in the computation; two decimals are for display only. */
+function line(r: RankedEntry, cars: Cars, criteria: Map<number, string>): ResultLine {
+  const car = cars.get(r.entryId);
+  return { entryId: r.entryId, number: r.number, title: car?.title ?? '', className: car?.className ?? '', place: r.place, shared: r.shared, total: r.total, totalShown: r.total.toFixed(2), decidedBy: decided(r, criteria), sheets: r.sheetsCounted };
+}
+
+export function presentResultsReview(results: ShowResults, cars: Cars, criteria: Map<number, string>, classNames: Map<number, string>): ResultsReview {
+  const numberOf = (id: number) => cars.get(id)?.number ?? 0;
+  return {
+    classes: results.classes.map((c) => ({ classId: c.classId, className: classNames.get(c.classId) ?? '', placings: c.placings.map((r) => line(r, cars, criteria)), unscored: c.unscored.length })),
+    bestOfShow: results.bestOfShow.map((r) => line(r, cars, criteria)),
+    ties: results.ties.map((t) => ({ scope: t.scope, classId: t.classId, place: t.place, numbers: t.entryIds.map(numberOf).sort((a, b) => a - b) })),
+  };
+}
