@@ -5,13 +5,14 @@ import type { Entry } from '../models/entry';
 import type { Event } from '../models/event';
 import type { Score } from '../models/score';
 import type { SheetNote } from '../models/sheet-note';
-import { computeKeyFigures, presentPublicBuild, presentPublicBuildTile } from './public-build';
+import { computeKeyFigures } from '@shared/build-sheet/key-figures';
+import { presentPublicBuild, presentPublicBuildTile } from './public-build';
 
 /** A car as the judge sees it: its public face only (no owner contact, no private fields). */
 export function presentJudgeCar(entry: Entry, build: Build): JudgeCar {
   const tile = presentPublicBuildTile(build);
   const source = tile.cover?.sources.find((s) => s.width >= 480) ?? tile.cover?.sources[0];
-  const figures = computeKeyFigures(presentPublicBuild(build, { name: '' })).map((f) => ({ label: f.label, metric: f.metric.text, imperial: f.imperial.text, provenance: f.provenance }));
+  const figures = computeKeyFigures(presentPublicBuild(build)).map((f) => ({ label: f.label, metric: f.metric.text, imperial: f.imperial.text, provenance: f.provenance }));
   return {
     entryId: entry.id,
     number: entry.number as number,

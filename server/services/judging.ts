@@ -44,7 +44,10 @@ export async function listJudgingShows(judgeId: number) {
 }
 
 /** Progress for the organiser: per class how many cars have how many finished sheets; per judge what is left. */
-export async function loadProgress(eventId: number) {
+type ClassProgress = { classId: number; name: string; cars: number; bySheets: Array<{ sheets: number; cars: number }> };
+type JudgeProgress = { judgeId: number; name: string; allClasses: boolean; classIds: number[]; cars: number; scored: number; partly: number; notYet: number; leftNumbers: number[] };
+
+export async function loadProgress(eventId: number): Promise<{ event: Event; lines: number; byClass: ClassProgress[]; byJudge: JudgeProgress[] }> {
   const event = await findEvent(eventId);
   const lines = await Criterion.count({ where: { eventId } });
   const classes = await EventClass.findAll({ where: { eventId }, order: [['position', 'ASC'], ['id', 'ASC']] });
