@@ -8,6 +8,8 @@ import { sequelize } from '../db/sequelize';
 export const MAIL_QUEUE = 'mail';
 /** Mail that failed every retry is moved here and kept, so an administrator can see and resend it. */
 export const MAIL_UNDELIVERED_QUEUE = 'mail-undelivered';
+/** Refunds of entry fees paid online, sent to the payment service after a withdrawal commits. */
+export const REFUND_QUEUE = 'entry-refund';
 
 export type JobQueueOptions = {
   connectionString: string;
@@ -66,6 +68,8 @@ export class JobQueue {
     await this.boss.createQueue(MAIL_UNDELIVERED_QUEUE, { name: MAIL_UNDELIVERED_QUEUE, retentionMinutes: 60 * 24 * 30 });
     await this.boss.createQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...mail });
     await this.boss.updateQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...mail }); // settings changed in config apply to the existing queue
+    // A refund retries for a day: the payment service's idempotency key makes a retry after a lost answer safe.
+    await this.boss.createQueue(REFUND_QUEUE, { name: REFUND_QUEUE, retryLimit: 20, retryDelay: 30, retryBackoff: true, expireInSeconds: 5 * 60 });
     return this.boss;
   }
 

@@ -20,6 +20,12 @@ export class Entry extends Model<InferAttributes<Entry>, InferCreationAttributes
   declare paidAt: CreationOptional<Date | null>;
   declare paidAmount: CreationOptional<number | null>;
   declare refundDue: CreationOptional<number | null>;
+  /** The payment service's checkout for this entry's fee, and how many were opened (each new one gets a new idempotency key). */
+  declare checkoutId: CreationOptional<string | null>;
+  declare checkoutAttempt: CreationOptional<number>;
+  /** The refund the payment service made after a withdrawal; a refund of a cash payment is the organiser's to hand back. */
+  declare refundRef: CreationOptional<string | null>;
+  declare refundedAt: CreationOptional<Date | null>;
   declare withdrawnAt: CreationOptional<Date | null>;
   declare waitlistedAt: CreationOptional<Date | null>;
   declare offerExpiresAt: CreationOptional<Date | null>;
@@ -48,6 +54,10 @@ export class Entry extends Model<InferAttributes<Entry>, InferCreationAttributes
         paidAt: { type: DataTypes.DATE, allowNull: true },
         paidAmount: { type: DataTypes.INTEGER, allowNull: true },
         refundDue: { type: DataTypes.INTEGER, allowNull: true },
+        checkoutId: { type: DataTypes.STRING(255), allowNull: true },
+        checkoutAttempt: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        refundRef: { type: DataTypes.STRING(255), allowNull: true },
+        refundedAt: { type: DataTypes.DATE, allowNull: true },
         withdrawnAt: { type: DataTypes.DATE, allowNull: true },
         waitlistedAt: { type: DataTypes.DATE, allowNull: true },
         offerExpiresAt: { type: DataTypes.DATE, allowNull: true },

@@ -49,11 +49,13 @@ export const eventAbilities = (actor: Actor | null | undefined, event: EventReco
 });
 
 /** An entry: its owner sees and withdraws it; the show's organisers see and withdraw every entry of their show. */
-export type EntryAction = 'view' | 'withdraw' | 'acceptOffer' | 'manage';
+export type EntryAction = 'view' | 'withdraw' | 'acceptOffer' | 'pay' | 'manage';
 export function canEntry(actor: Actor | null | undefined, action: EntryAction, entry: { ownerId: number; eventId: number }): boolean {
   if (!actor) return false;
   const owner = entry.ownerId === actor.id;
   if (action === 'acceptOffer') return owner && mayTakePartInShows(actor);
+  // The fee is the entrant's to pay; an organiser takes cash at the gate instead.
+  if (action === 'pay') return owner;
   // Changing class, marking paid, moving up: the show's organisers only, never the owner.
   if (action === 'manage') return hasEventRole(actor, entry.eventId, 'organiser');
   return owner || hasEventRole(actor, entry.eventId, 'organiser');

@@ -67,6 +67,7 @@ export function presentEntry(e: Entry, positions: Map<number, number>): EntryOut
     paymentRef: e.paymentRef,
     paidAt: iso(e.paidAt),
     refundDue: e.refundDue,
+    refundedAt: iso(e.refundedAt),
     offerExpiresAt: e.status === 'waiting_list' ? iso(e.offerExpiresAt) : null,
     waitingPosition: positions.get(e.id) ?? null,
     createdAt: e.createdAt.toISOString(),

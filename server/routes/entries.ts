@@ -12,6 +12,7 @@ import { findEvent } from '../services/events';
 import { acceptOffer, findEntry, listEntriesOf, listEntriesOfEvent, registerEntry, withdrawEntry } from '../services/entries';
 import { presentMyEntry, presentOrganiserEntry } from '../presenters/event';
 import { authorizedEvent } from './events';
+import { openEntryCheckout } from '../services/entry-payments';
 
 export const entriesRouter = Router();
 entriesRouter.use('/entries', requireUser);
@@ -66,4 +67,13 @@ entriesRouter.post('/entries/:id/accept-offer', async (req, res) => {
   await acceptOffer(id, currentUser(req));
   const mine = await listEntriesOf(currentUser(req));
   res.json({ entry: presentMyEntry(mine.entries.find((e) => e.id === id)!, mine.positions) });
+});
+
+/** The entrant pays the fee online: the answer is where the payment service takes the payment. */
+entriesRouter.post('/entries/:id/checkout', async (req, res) => {
+  const { id } = parseParams(req, IdParamSchema);
+  const entry = await findEntry(id);
+  const actor = await actorInEvent(currentUser(req), entry.eventId);
+  authorizeEntry(actor, 'pay', entry);
+  res.json(await openEntryCheckout(id));
 });

@@ -10,6 +10,7 @@ import { EventClass } from '../models/event-class';
 import { User } from '../models/user';
 import { AppError, ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../errors';
 import { writeAudit } from './audit';
+import { queueEntryRefund } from './entry-refunds';
 import { mailEntryReceived, mailPaymentConfirmed, mailWithdrawn } from './entry-mail';
 import { hasRoom, lapseExpiredOffers, offerFreedPlaces, settleOffers } from './waitlist';
 
@@ -111,6 +112,7 @@ export async function withdrawEntry(entryId: number, person: Person, byOrganiser
     await entry.update({ status: 'withdrawn', withdrawnAt: now, refundDue: refund, offerExpiresAt: null }, { transaction });
     await writeAudit({ eventId: event.id, entryId, actorId: person.id, action: byOrganiser ? 'withdrawn_by_organiser' : 'withdrawn_by_owner', before, after: { status: 'withdrawn', refundDue: refund } }, transaction);
     await mailWithdrawn(entry, event, byOrganiser, transaction);
+    if (refund) await queueEntryRefund(entry, refund, transaction);
     if (heldPlace) await offerFreedPlaces(event.id, transaction, now);
     return entry;
   });

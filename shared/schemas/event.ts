@@ -236,6 +236,8 @@ export const EntrySchema = z.object({
   paymentRef: z.string().nullable(),
   paidAt: z.string().nullable(),
   refundDue: z.number().nullable(),
+  /** When the payment service sent the refund back; null while it is due (or was cash, for the organiser to hand back). */
+  refundedAt: z.string().nullable(),
   offerExpiresAt: z.string().nullable(),
   waitingPosition: z.number().nullable(),
   createdAt: z.string(),

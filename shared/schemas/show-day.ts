@@ -143,5 +143,7 @@ export const AUDIT_ACTION_LABELS: Record<string, string> = {
   moved_up: 'Moved up from the waiting list',
   checked_in: 'Checked in',
   check_in_undone: 'Check-in undone',
+  checkout_opened: 'Went to pay online',
+  refund_sent: 'Refund sent by the payment service',
 };
 export const auditActionLabel = (action: string) => AUDIT_ACTION_LABELS[action] ?? action.replace(/_/g, ' ');

@@ -19,6 +19,7 @@ export async function prepareTestDatabase(): Promise<() => Promise<void>> {
   const { startMailWorker } = await import('@server/jobs/send-mail');
   const { stopJobQueue } = await import('@server/jobs/queue');
   await startMailWorker();
+  // No refund worker here: refunds go to a fake payment service, which only a test file that pays has (useFakePayments).
   return async () => {
     await stopJobQueue();
     await new Promise<void>((resolve) => catcher.close(() => resolve()));

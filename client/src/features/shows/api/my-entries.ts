@@ -5,7 +5,12 @@ import { api } from '@client/lib/api';
 export const myEntriesQueryKey = ['entries', 'mine'] as const;
 export const listMyEntries = () => api<{ entries: MyEntry[] }>('/api/entries');
 export const myEntriesQueryOptions = () => queryOptions({ queryKey: myEntriesQueryKey, queryFn: listMyEntries });
-export const useMyEntries = () => useQuery(myEntriesQueryOptions());
+/** While an entry just paid waits for the payment service's confirmation, ask again every two seconds. */
+export const useMyEntries = (awaitingPaidId: number | null = null) =>
+  useQuery({
+    ...myEntriesQueryOptions(),
+    refetchInterval: (q) => (awaitingPaidId && !q.state.data?.entries.find((e) => e.id === awaitingPaidId)?.paidAt ? 2000 : false),
+  });
 
 export function useRegisterEntry(eventId: number) {
   const qc = useQueryClient();
@@ -26,5 +31,13 @@ export function useAcceptOffer() {
   return useMutation({
     mutationFn: (entryId: number) => api<{ entry: MyEntry }>(`/api/entries/${entryId}/accept-offer`, { method: 'POST' }),
     onSuccess: () => qc.invalidateQueries({ queryKey: myEntriesQueryKey }),
+  });
+}
+
+/** Opens (or reopens) the payment service's checkout for an entry's fee; the browser then goes there. */
+export function usePayEntry() {
+  return useMutation({
+    mutationFn: (entryId: number) => api<{ url: string }>(`/api/entries/${entryId}/checkout`, { method: 'POST' }),
+    onSuccess: ({ url }) => window.location.assign(url),
   });
 }

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Link } from 'react-router-dom';
+import { Link, useSearchParams } from 'react-router-dom';
 import { ENTRY_STATUS_LABELS } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
 import type { MyEntry } from '@shared/schemas/event';
@@ -8,7 +8,7 @@ import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { Notice } from '@client/components/ui/notice';
 import { PageHeader } from '@client/components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/states';
-import { useAcceptOffer, useMyEntries, useWithdrawEntry } from '../api/my-entries';
+import { useAcceptOffer, useMyEntries, usePayEntry, useWithdrawEntry } from '../api/my-entries';
 import { showTime } from './show-dates';
 
 const over = (e: MyEntry) => e.event.status === 'results_published' || e.event.status === 'archived';
@@ -26,13 +26,17 @@ function nextStep(e: MyEntry): string {
     case 'waiting_list':
       return e.offerExpiresAt ? `A place is free for you: take it by ${showTime(e.offerExpiresAt, e.event.timeZone)}.` : `Number ${e.waitingPosition} on the waiting list. You get an e-mail if a place frees.`;
     case 'withdrawn':
-      return e.refundDue ? `Withdrawn. Refund due: ${formatMoney(e.refundDue, e.currency)}.` : 'Withdrawn.';
+      if (!e.refundDue) return 'Withdrawn.';
+      return e.refundedAt ? `Withdrawn. ${formatMoney(e.refundDue, e.currency)} refunded to your card.` : `Withdrawn. Refund due: ${formatMoney(e.refundDue, e.currency)}.`;
   }
 }
 
 /** Every entry of the signed-in owner across shows: status, number, class and what to do next. */
 export function MyEntriesPage() {
-  const { data, isPending, error, refetch } = useMyEntries();
+  const [params] = useSearchParams();
+  const justPaid = Number(params.get('paid')) || null;
+  const { data, isPending, error, refetch } = useMyEntries(justPaid);
+  const pay = usePayEntry();
   const withdraw = useWithdrawEntry();
   const accept = useAcceptOffer();
   const [asking, setAsking] = useState<MyEntry | null>(null);
@@ -43,6 +47,7 @@ export function MyEntriesPage() {
       <PageHeader title="Your entries">
         Your cars in shows. <Link to="/shows" className="underline">Find a show to enter</Link>.
       </PageHeader>
+      <PaymentReturnNotice entry={data.entries.find((e) => e.id === justPaid)} />
       {data.entries.length === 0 ? <EmptyState title="No entries yet">Enter a published build in a show that is taking entries.</EmptyState> : null}
       <ul className="flex flex-col gap-3">
         {data.entries.map((e) => (
@@ -57,6 +62,11 @@ export function MyEntriesPage() {
               <p className="mt-1">{nextStep(e)}</p>
             </div>
             <div className="flex flex-wrap gap-2">
+              {e.status === 'awaiting_payment' && e.feeAmount > 0 ? (
+                <Button type="button" busy={pay.isPending && pay.variables === e.id} onClick={() => pay.mutate(e.id)}>
+                  Pay {formatMoney(e.feeAmount, e.currency)}
+                </Button>
+              ) : null}
               {e.status === 'waiting_list' && e.offerExpiresAt ? (
                 <Button type="button" busy={accept.isPending} onClick={() => accept.mutate(e.id)}>
                   Take the place
@@ -76,6 +86,7 @@ export function MyEntriesPage() {
           </li>
         ))}
       </ul>
+      {pay.isError ? <Notice tone="danger">{pay.error.message}</Notice> : null}
       {accept.isError ? <Notice tone="danger">{accept.error.message}</Notice> : null}
       {withdraw.isError ? <Notice tone="danger">{withdraw.error.message}</Notice> : null}
       <ConfirmDialog
@@ -90,4 +101,11 @@ export function MyEntriesPage() {
       </ConfirmDialog>
     </div>
   );
+}
+
+/** Back from the payment service: the webhook confirms the entry a moment later, so say what is happening. */
+function PaymentReturnNotice({ entry }: { entry: MyEntry | undefined }) {
+  if (!entry) return null;
+  if (entry.paidAt) return <Notice tone="ok">Paid, thank you: number {entry.number} in {entry.event.name} is confirmed.</Notice>;
+  return <Notice tone="info">Payment received by the payment service; confirming your entry…</Notice>;
 }
