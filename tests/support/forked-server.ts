@@ -48,6 +48,8 @@ async function serve(): Promise<void> {
   // Tests that must see every request consult the database ask for it (0: no second of trust).
   if (process.env.PAGE_REVALIDATE_MS) (await import('@server/pages/page-cache')).publicPageCache.revalidateAfterMs = Number(process.env.PAGE_REVALIDATE_MS);
   const server = await listen(0, '127.0.0.1');
+  // The job queue's own pool lives through the same outages as the server's (as under npm start).
+  await (await import('@server/jobs/send-mail')).startMailWorker();
   const info: ForkedServerInfo = { port: (server.address() as AddressInfo).port, code: build.code, buildId: build.id, email, password };
   process.send!(info);
   const stop = async () => {
