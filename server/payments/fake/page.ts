@@ -14,7 +14,7 @@ const frame = (title: string, body: string) => `<!doctype html>
 <title>${esc(title)}</title>
 <style>
 body{margin:0;background:#f4efe4;color:#1b1b1b;font:16px/1.5 system-ui,sans-serif}
-main{max-width:28rem;margin:2rem auto;padding:1.5rem;border:2px solid #1b1b1b;background:#fff}
+main{max-width:28rem;margin:2rem auto;padding:1.5rem;box-sizing:border-box;width:calc(100% - 2rem);border:2px solid #1b1b1b;background:#fff}
 h1{font-size:1.1rem;letter-spacing:.15em;text-transform:uppercase;margin:0 0 1rem}
 .amount{font-size:2rem;font-weight:700;margin:.25rem 0 1rem}
 .note{border-left:4px solid #b7791f;padding:.5rem .75rem;background:#fbf6ea;font-size:.9rem}
