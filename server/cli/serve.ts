@@ -5,6 +5,7 @@ import { closeConnections, listen, logger } from '../index';
 import { startMailCatcher } from '../mail/catcher';
 import { startMailWorker } from '../jobs/send-mail';
 import { startRefundWorker } from '../jobs/refund-entry';
+import { startOfferSweep } from '../jobs/offer-sweep';
 import { pointPaymentsAtFake } from '../payments/client';
 import { startLocalPayments } from '../payments/fake';
 
@@ -21,6 +22,7 @@ const server = await listen();
 // The one-machine default: this process also works the job queue (mail now; more jobs join it).
 await startMailWorker();
 await startRefundWorker();
+const stopOfferSweep = startOfferSweep();
 const url = `http://${config.host}:${config.port}`;
 
 // No payment key: the local fake stands in, posting its webhooks to this server.
@@ -59,6 +61,7 @@ async function stop() {
   if (stopping) return;
   stopping = true;
   server.close();
+  stopOfferSweep();
   catcher?.close(() => undefined);
   await fakePayments?.close();
   await closeConnections();
