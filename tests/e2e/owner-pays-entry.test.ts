@@ -7,7 +7,7 @@ import { Entry } from '@server/models/entry';
 import { launchBrowser, SCREENSHOT_DIR } from '../support/browser';
 import { createBuild } from '../support/build-factory';
 import { showWithClasses } from '../support/event-factory';
-import { uniqueEmail } from '../support/factories';
+import { DEFAULT_PASSWORD, uniqueEmail } from '../support/factories';
 import { waitForMailAbout } from '../support/mailbox';
 import { useFakePayments } from '../support/payments';
 
@@ -24,7 +24,7 @@ afterAll(async () => browser?.close());
 
 describe('an owner entering a paid show', { timeout: 300_000 }, () => {
   it('confirms the e-mail, enters, pays the fee and sees the entry confirmed', async () => {
-    const { slug } = await showWithClasses({ settings: { name: 'Lantern Hill Drive-In', entryFee: 3000, currency: 'USD' }, classes: [{ name: 'Early iron' }] });
+    const { slug, eventId, organiser } = await showWithClasses({ settings: { name: 'Lantern Hill Drive-In', entryFee: 3000, currency: 'USD' }, classes: [{ name: 'Early iron' }] });
     const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
     const email = uniqueEmail('payer');
 
@@ -71,5 +71,18 @@ describe('an owner entering a paid show', { timeout: 300_000 }, () => {
     const entry = (await Entry.findOne({ where: { ownerId: user.id } }))!;
     expect(entry).toMatchObject({ status: 'confirmed', paidAmount: 3000 });
     await waitForMailAbout(email, /paid|confirmed/i);
+
+    // The organiser sees the paid entry in the show's entries table.
+    const desk = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await desk.goto(`${env.baseUrl}/sign-in`);
+    await desk.getByLabel('E-mail').fill(organiser.email);
+    await desk.getByLabel('Password').fill(DEFAULT_PASSWORD);
+    await desk.getByRole('button', { name: 'Sign in' }).click();
+    await desk.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+    await desk.goto(`${env.baseUrl}/shows/${eventId}/entries`);
+    const row = desk.getByRole('row', { name: /Sectioned sedan delivery/ });
+    await row.waitFor();
+    await expect.poll(() => row.innerText()).toMatch(/Rae Paysworth[\s\S]*Confirmed[\s\S]*Paid/);
+    await desk.screenshot({ path: path.join(SCREENSHOT_DIR, 'organiser-sees-paid-entry.png'), fullPage: true });
   });
 });

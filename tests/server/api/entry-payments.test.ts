@@ -1,6 +1,7 @@
 import { describe, expect, it, vi } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '@server/db/sequelize';
+import { paymentsClient } from '@server/payments/client';
 import { AuditLine } from '@server/models/audit-line';
 import { Entry } from '@server/models/entry';
 import { Event } from '@server/models/event';
@@ -58,6 +59,21 @@ describe('paying an entry fee online', () => {
     // The entry no longer waits for money: no second checkout.
     const late = await owner.client.post(`/api/entries/${entryId}/checkout`);
     expect(late.status).toBe(409);
+  });
+
+  it('opens a fresh checkout after the first one expired unpaid, and that one confirms the entry', async () => {
+    const { owner, entryId } = await paidShowEntry();
+    const first = await owner.client.post(`/api/entries/${entryId}/checkout`);
+    // The owner left the page; the payment service expires the session.
+    const sessionId = (await Entry.findByPk(entryId))!.checkoutId!;
+    await paymentsClient().checkout.sessions.expire(sessionId);
+    const second = await owner.client.post(`/api/entries/${entryId}/checkout`);
+    expect(second.status).toBe(200);
+    expect(second.body.url).not.toBe(first.body.url);
+    expect((await Entry.findByPk(entryId))!.checkoutAttempt).toBe(2);
+    expect((await pressPay(first.body.url)).status).toBe(409); // the expired page takes no money
+    await pressPay(second.body.url);
+    await vi.waitFor(async () => expect((await Entry.findByPk(entryId))!.status).toBe('confirmed'), { timeout: 15_000 });
   });
 
   it('is the entrant’s own: the organiser, another person and anonymous cannot open it; a free show has nothing to pay', async () => {
