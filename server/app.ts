@@ -35,6 +35,7 @@ import { entriesRouter } from './routes/entries';
 import { paymentsWebhookRouter } from './routes/payments';
 import { showDayRouter } from './routes/show-day';
 import { judgingRouter } from './routes/judging';
+import { EVENT_LOGO_PATH, eventLogoRouter } from './routes/event-logo';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -48,14 +49,14 @@ function apiRouter() {
     res.set('Cache-Control', 'no-store'); // answers depend on who asks
     next();
   });
-  api.use(jsonBodiesOnly([PHOTO_UPLOAD_PATH]));
+  api.use(jsonBodiesOnly([PHOTO_UPLOAD_PATH, EVENT_LOGO_PATH]));
   api.use(express.json({ limit: '1mb', verify: noteEmptyBody }), emptyBodyIsNoBody);
   api.use(sessionMiddleware);
   api.use(passport.session());
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
-  api.use(eventsRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter);
+  api.use(eventsRouter, eventLogoRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter);
   api.use(apiNotFound);
   return api;
 }

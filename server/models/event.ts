@@ -6,6 +6,8 @@ import type { EventClass } from './event-class';
 import type { Criterion } from './criterion';
 
 /** A show. Instants are stored in UTC; `timeZone` says how to show them. */
+export type EventLogo = { storageKey: string; variants: Array<{ width: number; height: number }> };
+
 export class Event extends Model<InferAttributes<Event>, InferCreationAttributes<Event>> {
   declare id: CreationOptional<number>;
   declare name: string;
@@ -27,6 +29,8 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
   declare createdBy: number | null;
   declare judgingClosedAt: CreationOptional<Date | null>;
   declare resultRules: CreationOptional<ShowResultRules>;
+  /** The show's logo, stored as build photos are (same keys and widths); null when it has none. */
+  declare logo: CreationOptional<EventLogo | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -56,6 +60,7 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
         createdBy: { type: DataTypes.INTEGER, allowNull: true },
         judgingClosedAt: { type: DataTypes.DATE, allowNull: true },
         resultRules: { type: DataTypes.JSONB, allowNull: false, defaultValue: DEFAULT_RESULT_RULES },
+        logo: { type: DataTypes.JSONB, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

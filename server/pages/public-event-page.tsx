@@ -8,6 +8,7 @@ const EVENT_CSS = `.meta{margin:12px 0 0;display:grid;grid-template-columns:max-
 .meta dd{margin:0}
 .status{display:inline-block;margin-top:8px;padding:2px 8px;border:1px solid var(--ink);font-size:.85rem;text-transform:uppercase;letter-spacing:.06em}
 ol.entries{list-style:none;margin:0;padding:0}
+img.logo{display:block;height:auto;max-height:96px;width:auto;max-width:min(240px,60vw);margin:0 0 12px}
 ol.entries li{display:flex;gap:12px;align-items:baseline;border-bottom:1px solid var(--rule);min-height:44px;padding:8px 0}
 ol.entries .n{font-family:Oswald,"Arial Narrow",sans-serif;font-weight:600;font-size:1.3rem;min-width:3ch;text-align:right;font-variant-numeric:tabular-nums}
 .cal a,.enter a{display:inline-block;min-height:44px;line-height:44px}
@@ -41,6 +42,12 @@ function Page({ e }: { e: PublicEvent }) {
           </a>
         </header>
         <main>
+          {e.logo ? (
+            <picture>
+              <source srcSet={e.logo.webp} type="image/webp" />
+              <img className="logo" src={e.logo.jpeg} alt={`${e.name} logo`} width={e.logo.width} height={e.logo.height} />
+            </picture>
+          ) : null}
           <h1>{e.name}</h1>
           <span className="status">{e.statusLabel}</span>
           <dl className="meta">

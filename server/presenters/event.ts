@@ -1,9 +1,10 @@
 import type { EventRole } from '@shared/constants';
-import type { AuditLine as AuditLineOut, Criterion as CriterionOut, Entry as EntryOut, EventClass as ClassOut, EventDetail, EventSummary, Invitation, Member, MyEntry, OrganiserEntry } from '@shared/schemas/event';
+import type { AuditLine as AuditLineOut, Criterion as CriterionOut, Entry as EntryOut, EventClass as ClassOut, EventDetail, EventLogoOut, EventSummary, Invitation, Member, MyEntry, OrganiserEntry } from '@shared/schemas/event';
 import { config } from '../config';
 import type { Actor } from '../policies/actor';
 import { eventAbilities } from '../policies/event';
-import type { Event } from '../models/event';
+import type { Event, EventLogo } from '../models/event';
+import { mediaUrl, photoVariantKey } from '../storage/keys';
 import type { EventClass } from '../models/event-class';
 import type { Criterion } from '../models/criterion';
 import type { Entry } from '../models/entry';
@@ -33,7 +34,16 @@ export function presentEventSummary(e: Event, myRoles: EventRole[] = []): EventS
     currency: e.currency,
     myRoles,
     publicUrl: eventPublicUrl(e.slug),
+    logo: presentEventLogo(e.logo),
   };
+}
+
+/** The widest stored logo that is at most 320 px (crisp at 160 CSS px on a phone), else the narrowest. */
+export function presentEventLogo(logo: EventLogo | null | undefined): EventLogoOut | null {
+  if (!logo || logo.variants.length === 0) return null;
+  const sorted = [...logo.variants].sort((a, b) => a.width - b.width);
+  const v = [...sorted].reverse().find((x) => x.width <= 320) ?? sorted[0]!;
+  return { webp: mediaUrl(photoVariantKey(logo.storageKey, v.width, 'webp')), jpeg: mediaUrl(photoVariantKey(logo.storageKey, v.width, 'jpg')), width: v.width, height: v.height };
 }
 
 /** Everything about a show for the people who run it (the event's own settings carry no one's private data). */

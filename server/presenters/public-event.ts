@@ -2,6 +2,7 @@ import { EVENT_STATUS_LABELS, type EventStatus } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
 import type { PublicEvent } from '@shared/schemas/public-event';
 import { config } from '../config';
+import { presentEventLogo } from './event';
 import type { Entry } from '../models/entry';
 import type { Event } from '../models/event';
 
@@ -16,6 +17,7 @@ export function presentPublicEvent(event: Event, entries: Entry[], now = new Dat
     calendarUrl: `${url}/calendar.ics`,
     status: event.status,
     statusLabel: EVENT_STATUS_LABELS[event.status as EventStatus],
+    logo: presentEventLogo(event.logo),
     takingEntries: event.status === 'registration_open' && event.registrationOpensAt <= now && now < event.registrationClosesAt,
     venueName: event.venueName,
     venueAddress: event.venueAddress,

@@ -27,7 +27,7 @@ export async function authorizedEvent(req: Request, id: number, action: EventAct
   return { event, actor };
 }
 
-async function respondWithEvent(req: Request, res: import('express').Response, id: number, status = 200) {
+export async function respondWithEvent(req: Request, res: import('express').Response, id: number, status = 200) {
   const event = await loadEventDetail(id);
   const actor = await actorInEvent(currentUser(req), id);
   res.status(status).json({ event: presentEvent(event, actor) });

@@ -38,7 +38,8 @@ async function findPhotoOf(buildId: number, photoId: number, transaction: Transa
   return photo;
 }
 
-async function processAll(files: PhotoFile[], uploaderId?: number): Promise<ProcessedImage[]> {
+/** Checks the budgets and re-encodes every file, one at a time; a refused file names itself. */
+export async function processAll(files: PhotoFile[], uploaderId?: number): Promise<ProcessedImage[]> {
   if (files.length === 0) throw new ValidationError({ photos: 'Choose at least one photo.' });
   if (files.length > PHOTO_MAX_FILES) throw tooManyError();
   if (files.some((f) => f.buffer.length > PHOTO_MAX_BYTES)) throw tooLargeError();
@@ -59,18 +60,18 @@ async function processAll(files: PhotoFile[], uploaderId?: number): Promise<Proc
   return processed;
 }
 
-const variantFiles = (storageKey: string, image: ProcessedImage) =>
+export const variantFiles = (storageKey: string, image: ProcessedImage) =>
   image.variants.flatMap((v) => [
     { key: photoVariantKey(storageKey, v.width, 'webp'), body: v.webp, type: 'image/webp' },
     { key: photoVariantKey(storageKey, v.width, 'jpg'), body: v.jpeg, type: 'image/jpeg' },
   ]);
 
-async function deleteKeys(keys: string[]) {
+export async function deleteKeys(keys: string[]) {
   await Promise.all(keys.map((key) => storage.delete(key)));
 }
 
 /** Writes every file or none: on any failure the ones already written are removed again. */
-async function putAll(files: { key: string; body: Buffer; type: string }[]): Promise<string[]> {
+export async function putAll(files: { key: string; body: Buffer; type: string }[]): Promise<string[]> {
   const results = await Promise.allSettled(files.map((f) => storage.put(f.key, f.body, f.type)));
   const written = files.filter((_, i) => results[i]!.status === 'fulfilled').map((f) => f.key);
   const failure = results.find((r): r is PromiseRejectedResult => r.status === 'rejected');

@@ -192,6 +192,10 @@ export const EventAbilitiesSchema = z.object({
 });
 export type EventAbilities = z.infer<typeof EventAbilitiesSchema>;
 
+/** A show's logo as pages show it: one size, WebP with a JPEG fallback. */
+export const EventLogoOutSchema = z.object({ webp: z.string(), jpeg: z.string(), width: z.number(), height: z.number() });
+export type EventLogoOut = z.infer<typeof EventLogoOutSchema>;
+
 export const EventSchema = EventFieldsSchema.extend({
   id: z.number(),
   status: EventStatusSchema,
@@ -200,6 +204,7 @@ export const EventSchema = EventFieldsSchema.extend({
   myRoles: z.array(z.enum(EVENT_ROLES)),
   abilities: EventAbilitiesSchema,
   publicUrl: z.string(),
+  logo: EventLogoOutSchema.nullable(),
 });
 export type EventDetail = z.infer<typeof EventSchema>;
 
@@ -218,6 +223,7 @@ export const EventSummarySchema = z.object({
   currency: z.string(),
   myRoles: z.array(z.enum(EVENT_ROLES)),
   publicUrl: z.string(),
+  logo: EventLogoOutSchema.nullable(),
 });
 export type EventSummary = z.infer<typeof EventSummarySchema>;
 

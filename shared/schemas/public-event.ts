@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { EVENT_STATUSES } from '../constants';
+import { EventLogoOutSchema } from './event';
 
 /** The public face of a show: nothing about any person (no e-mail, phone, plate, VIN, home address). */
 export const PublicEventSchema = z.object({
@@ -10,6 +11,7 @@ export const PublicEventSchema = z.object({
   calendarUrl: z.string(),
   status: z.enum(EVENT_STATUSES),
   statusLabel: z.string(),
+  logo: EventLogoOutSchema.nullable(),
   takingEntries: z.boolean(),
   venueName: z.string(),
   venueAddress: z.string(),

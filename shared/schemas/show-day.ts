@@ -145,5 +145,7 @@ export const AUDIT_ACTION_LABELS: Record<string, string> = {
   check_in_undone: 'Check-in undone',
   checkout_opened: 'Went to pay online',
   refund_sent: 'Refund sent by the payment service',
+  logo_changed: 'Logo changed',
+  logo_removed: 'Logo removed',
 };
 export const auditActionLabel = (action: string) => AUDIT_ACTION_LABELS[action] ?? action.replace(/_/g, ' ');

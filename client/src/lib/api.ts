@@ -24,10 +24,12 @@ type Options = { method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE'; body?: un
 
 async function send(path: string, { method = 'GET', body, signal }: Options): Promise<Response> {
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  // A FormData body (a small upload with no progress bar) sets its own multipart type and boundary.
+  const form = body instanceof FormData;
+  if (body !== undefined && !form) headers['Content-Type'] = 'application/json';
   if (method !== 'GET' && csrfToken) headers['X-CSRF-Token'] = csrfToken;
   try {
-    return await fetch(path, { method, headers, body: body === undefined ? undefined : JSON.stringify(body), credentials: 'same-origin', signal });
+    return await fetch(path, { method, headers, body: body === undefined ? undefined : form ? body : JSON.stringify(body), credentials: 'same-origin', signal });
   } catch (err) {
     if ((err as Error).name === 'AbortError') throw err;
     throw new ApiError(0, 'NETWORK', 'No connection to Placard. Check your signal and try again.');

@@ -14,6 +14,7 @@ import { PeoplePanel } from './people-panel';
 import { EntriesLinkPanel } from './entries-link-panel';
 import { GatePanel } from './gate-panel';
 import { ShowSettingsForm } from './show-settings-form';
+import { LogoPanel } from './logo-panel';
 import { showTime } from './show-dates';
 import { JudgingPanel } from '@client/features/judging/components/judging-panel';
 
@@ -49,6 +50,7 @@ export function ShowPage() {
       <ClassesPanel show={show} />
       <JudgingSheetPanel key={show.criteria.map((c) => c.id).join()} show={show} />
       {a.manage ? <PeoplePanel show={show} /> : null}
+      {a.manage ? <LogoPanel show={show} /> : null}
       {a.manage ? (
         <Panel title="Settings">
           {update.isSuccess ? <Notice tone="ok">Saved.</Notice> : null}
