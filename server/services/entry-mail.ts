@@ -5,6 +5,7 @@ import { entryReceivedEmail } from '@templates/email/entry-received';
 import { waitlistOfferEmail } from '@templates/email/waitlist-offer';
 import { entryWithdrawnEmail } from '@templates/email/entry-withdrawn';
 import { paymentConfirmedEmail } from '@templates/email/payment-confirmed';
+import { refundSentEmail } from '@templates/email/refund-sent';
 import { config } from '../config';
 import { queueMail } from '../mail/outbox';
 import { Build } from '../models/build';
@@ -47,4 +48,10 @@ export async function mailPaymentConfirmed(entry: Entry, event: Event, transacti
   const p = await parts(entry, transaction);
   const mail = paymentConfirmedEmail({ ...p, showName: event.name, number: entry.number, amount: formatMoney(entry.paidAmount ?? entry.feeAmount, entry.currency), link: myEntriesLink() });
   await queueMail({ to: p.to, ...mail }, { transaction, dedupeKey: `paid:${entry.id}:${entry.paymentRef}` });
+}
+
+export async function mailRefundSent(entry: Entry, event: Event, amountMinor: number, transaction: Transaction) {
+  const p = await parts(entry, transaction);
+  const mail = refundSentEmail({ ...p, showName: event.name, amount: formatMoney(amountMinor, entry.currency), link: myEntriesLink() });
+  await queueMail({ to: p.to, ...mail }, { transaction, dedupeKey: `refund:${entry.id}` });
 }

@@ -5,6 +5,8 @@ import { logger } from '../logger';
 import { Entry } from '../models/entry';
 import { refund } from '../payments/checkout';
 import { writeAudit } from './audit';
+import { mailRefundSent } from './entry-mail';
+import { Event } from '../models/event';
 
 /** Entry fees paid online carry `checkout:<id>` as their payment reference; cash at the gate is `manual:<uuid>`. */
 export const CHECKOUT_REF = 'checkout:';
@@ -30,6 +32,8 @@ export async function sendEntryRefund(job: RefundJob): Promise<void> {
   await sequelize.transaction(async (transaction) => {
     await Entry.update({ refundRef: made.id, refundedAt: new Date() }, { where: { id: entry.id }, transaction });
     await writeAudit({ eventId: entry.eventId, entryId: entry.id, actorId: null, action: 'refund_sent', before: { refundDue: entry.refundDue }, after: { refundRef: made.id, amount: made.amountMinor } }, transaction);
+    const event = await Event.findByPk(entry.eventId, { transaction });
+    if (event) await mailRefundSent(entry, event, made.amountMinor, transaction);
   });
   logger.info({ entryId: entry.id, refund: made.id, amount: made.amountMinor }, 'entry fee refunded');
 }

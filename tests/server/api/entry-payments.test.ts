@@ -101,6 +101,8 @@ describe('paying an entry fee online', () => {
     expect((await early.owner.client.post(`/api/entries/${early.entryId}/withdraw`)).status).toBe(200);
     await vi.waitFor(async () => expect((await Entry.findByPk(early.entryId))!.refundRef).toMatch(/^re_/), { timeout: 30_000 });
     expect(refundsOf(early.entryId).map((r) => r.amount)).toEqual([2500]);
+    const notice = await waitForMailAbout(early.owner.email, /Refund sent/);
+    expect(notice.text).toMatch(/€25\.00 of the entry fee for Louvred panel truck/);
     expect(await AuditLine.count({ where: { entryId: early.entryId, action: 'refund_sent' } })).toBe(1);
     const mine = await early.owner.client.get('/api/entries');
     expect(mine.body.entries.find((e: { id: number }) => e.id === early.entryId)).toMatchObject({ status: 'withdrawn', refundDue: 2500, refundedAt: expect.any(String) });
