@@ -4,6 +4,7 @@ import { DEMO_ACCOUNTS } from '../db/demo-accounts';
 import { closeConnections, listen, logger } from '../index';
 import { startMailCatcher } from '../mail/catcher';
 import { startMailWorker } from '../jobs/send-mail';
+import { startCardWorker } from '../jobs/card-jobs';
 import { pointPaymentsAtFake } from '../payments/client';
 import { startLocalPayments } from '../payments/fake';
 
@@ -19,6 +20,7 @@ const catcher = catcherWanted
 const server = await listen();
 // The one-machine default: this process also works the job queue (mail now; more jobs join it).
 await startMailWorker();
+await startCardWorker();
 const url = `http://${config.host}:${config.port}`;
 
 // No payment key: the local fake stands in, posting its webhooks to this server.

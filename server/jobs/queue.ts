@@ -8,6 +8,12 @@ import { sequelize } from '../db/sequelize';
 export const MAIL_QUEUE = 'mail';
 /** Mail that failed every retry is moved here and kept, so an administrator can see and resend it. */
 export const MAIL_UNDELIVERED_QUEUE = 'mail-undelivered';
+/**
+ * Card work (bulk prints of numbered cards, show reminders with the owner's card). Files go through
+ * the storage layer, which in tests is a folder per process: there each test process works its own
+ * queue, so a print is rendered where its test reads it back.
+ */
+export const CARD_QUEUE = config.env === 'test' ? `cards-${process.pid}` : 'cards';
 
 export type JobQueueOptions = {
   connectionString: string;
@@ -66,6 +72,9 @@ export class JobQueue {
     await this.boss.createQueue(MAIL_UNDELIVERED_QUEUE, { name: MAIL_UNDELIVERED_QUEUE, retentionMinutes: 60 * 24 * 30 });
     await this.boss.createQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...mail });
     await this.boss.updateQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...mail }); // settings changed in config apply to the existing queue
+    // A print of hundreds of cards takes a minute at most; a lost worker's job is tried again after this.
+    const cards = { retryLimit: 2, retryDelay: 5, expireInSeconds: 15 * 60 };
+    await this.boss.createQueue(CARD_QUEUE, { name: CARD_QUEUE, ...cards });
     return this.boss;
   }
 
