@@ -25,7 +25,7 @@ export type NumberedCardContent = {
   shortUrl: string;
 };
 
-const NUMBER_SCALES = [3.2, 2.8, 2.4, 2, 1.6, 1.25, 1];
+const NUMBER_SCALES = [4.6, 4, 3.4, 2.8, 2.2, 1.6, 1.25, 1];
 const QR_SCALES = [1.6, 1.4, 1.2, 1];
 
 /** The blocks' shared context: a card content with only what a numbered card prints. */
