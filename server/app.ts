@@ -36,6 +36,7 @@ import { paymentsWebhookRouter } from './routes/payments';
 import { showDayRouter } from './routes/show-day';
 import { judgingRouter } from './routes/judging';
 import { EVENT_LOGO_PATH, eventLogoRouter } from './routes/event-logo';
+import { cardPrintsRouter } from './routes/card-prints';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -56,7 +57,7 @@ function apiRouter() {
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
-  api.use(eventsRouter, eventLogoRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter);
+  api.use(eventsRouter, eventLogoRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter, cardPrintsRouter);
   api.use(apiNotFound);
   return api;
 }

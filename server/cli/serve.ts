@@ -6,6 +6,7 @@ import { startMailCatcher } from '../mail/catcher';
 import { startMailWorker } from '../jobs/send-mail';
 import { startRefundWorker } from '../jobs/refund-entry';
 import { startOfferSweep } from '../jobs/offer-sweep';
+import { startCardWorker } from '../jobs/card-jobs';
 import { pointPaymentsAtFake } from '../payments/client';
 import { startLocalPayments } from '../payments/fake';
 
@@ -23,6 +24,7 @@ const server = await listen();
 await startMailWorker();
 await startRefundWorker();
 const stopOfferSweep = startOfferSweep();
+await startCardWorker();
 const url = `http://${config.host}:${config.port}`;
 
 // No payment key: the local fake stands in, posting its webhooks to this server.

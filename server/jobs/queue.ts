@@ -10,6 +10,12 @@ export const MAIL_QUEUE = 'mail';
 export const MAIL_UNDELIVERED_QUEUE = 'mail-undelivered';
 /** Refunds of entry fees paid online, sent to the payment service after a withdrawal commits. */
 export const REFUND_QUEUE = 'entry-refund';
+/**
+ * Card work (bulk prints of numbered cards, show reminders with the owner's card). Files go through
+ * the storage layer, which in tests is a folder per process: there each test process works its own
+ * queue, so a print is rendered where its test reads it back.
+ */
+export const CARD_QUEUE = config.env === 'test' ? `cards-${process.pid}` : 'cards';
 
 export type JobQueueOptions = {
   connectionString: string;
@@ -70,6 +76,9 @@ export class JobQueue {
     await this.boss.updateQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...mail }); // settings changed in config apply to the existing queue
     // A refund retries for a day: the payment service's idempotency key makes a retry after a lost answer safe.
     await this.boss.createQueue(REFUND_QUEUE, { name: REFUND_QUEUE, retryLimit: 20, retryDelay: 30, retryBackoff: true, expireInSeconds: 5 * 60 });
+    // A print of hundreds of cards takes a minute at most; a lost worker's job is tried again after this.
+    const cards = { retryLimit: 2, retryDelay: 5, expireInSeconds: 15 * 60 };
+    await this.boss.createQueue(CARD_QUEUE, { name: CARD_QUEUE, ...cards });
     return this.boss;
   }
 

@@ -2,7 +2,7 @@ import type { EventStatus } from '@shared/constants';
 import { hasEventRole, type Actor } from './actor';
 import { authorize } from './authorize';
 
-export type EventAction = 'create' | 'view' | 'manage' | 'viewEntries' | 'checkIn' | 'judge' | 'register';
+export type EventAction = 'create' | 'view' | 'manage' | 'viewEntries' | 'printCards' | 'checkIn' | 'judge' | 'register';
 type EventRecord = { id: number; status: EventStatus };
 
 /** An unverified account can build and publish, but not register for a show or accept an invitation. */
@@ -25,6 +25,7 @@ export function can(actor: Actor | null | undefined, action: EventAction, event?
       return isOrganiser(actor, event) || hasEventRole(actor, event.id, 'judge') || hasEventRole(actor, event.id, 'gate');
     case 'manage':
     case 'viewEntries':
+    case 'printCards': // bulk numbered cards and their file: the show's organisers only
       return isOrganiser(actor, event);
     case 'checkIn':
       return (isOrganiser(actor, event) || hasEventRole(actor, event.id, 'gate')) && event.status === 'show_day';

@@ -5,7 +5,7 @@ import path from 'node:path';
 import { assertValidKey, type Storage } from './types';
 
 // The disk keeps no metadata beside the bytes, so the type follows from the key's extension.
-const TYPES: Record<string, string> = { '.webp': 'image/webp', '.jpg': 'image/jpeg', '.png': 'image/png', '.avif': 'image/avif' };
+const TYPES: Record<string, string> = { '.webp': 'image/webp', '.jpg': 'image/jpeg', '.png': 'image/png', '.avif': 'image/avif', '.pdf': 'application/pdf' };
 const typeOf = (key: string) => TYPES[path.extname(key)] ?? 'application/octet-stream';
 
 const missing = (err: unknown) => (err as NodeJS.ErrnoException)?.code === 'ENOENT';

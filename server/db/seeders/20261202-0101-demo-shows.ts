@@ -1,6 +1,7 @@
 import type { Migration } from '../migrator';
 import { DEMO_ACCOUNTS } from '../demo-accounts';
 import { DEMO_FINISHED_SHOW, DEMO_OPEN_SHOW, DEMO_SHOW_CLASSES, DEMO_SHOW_SHEET } from '../demo/shows';
+import { seedShowDay } from '../demo/show-day';
 import { User } from '../../models/user';
 import { Build } from '../../models/build';
 import { Event } from '../../models/event';
@@ -115,6 +116,7 @@ async function seedShows() {
     },
     { where: { id: done.id } },
   );
+  await seedShowDay(); // a third show on its show day: gate open, cars arriving, numbered cards printed
 }
 
 /** The co-organiser, three judges and the gate account, as the show's members. */

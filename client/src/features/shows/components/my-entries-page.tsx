@@ -9,6 +9,7 @@ import { Notice } from '@client/components/ui/notice';
 import { PageHeader } from '@client/components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/states';
 import { useAcceptOffer, useMyEntries, usePayEntry, useWithdrawEntry } from '../api/my-entries';
+import { entryCardUrl } from '../api/entry-card';
 import { showTime } from './show-dates';
 
 const over = (e: MyEntry) => e.event.status === 'results_published' || e.event.status === 'archived';
@@ -73,9 +74,19 @@ export function MyEntriesPage() {
                 </Button>
               ) : null}
               {(e.status === 'confirmed' || e.status === 'checked_in') && !over(e) ? (
-                <Link to={`/builds/${e.buildId}/card`} className="inline-flex min-h-11 items-center border-2 border-ink px-4 font-display uppercase tracking-wide hover:bg-ink hover:text-paper">
-                  Print the card
-                </Link>
+                <>
+                  <a
+                    href={entryCardUrl(e.id)}
+                    download
+                    aria-label={`Download the card for entry ${e.number}`}
+                    className="inline-flex min-h-11 items-center border-2 border-ink bg-ink px-4 font-display uppercase tracking-wide text-paper hover:bg-paper hover:text-ink"
+                  >
+                    Card for No. {e.number}
+                  </a>
+                  <Link to={`/builds/${e.buildId}/card`} className="inline-flex min-h-11 items-center border-2 border-ink px-4 font-display uppercase tracking-wide hover:bg-ink hover:text-paper">
+                    Change the design
+                  </Link>
+                </>
               ) : null}
               {e.status !== 'withdrawn' && e.status !== 'checked_in' && !over(e) ? (
                 <Button type="button" variant="secondary" onClick={() => setAsking(e)}>

@@ -1,0 +1,34 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { CardPrint } from '@shared/schemas/card-print';
+import { api } from '@client/lib/api';
+
+/** While a print is queued or running the page asks for its progress this often. */
+export const CARD_PRINT_POLL_MS = 500;
+
+const filterParam = (classId: number | null) => (classId ? `?classId=${classId}` : '');
+
+/** The newest print for the filter (every class, or one): a reload or a second organiser sees the same job. */
+export const getLatestCardPrint = (eventId: number, classId: number | null) =>
+  api<{ print: CardPrint | null }>(`/api/events/${eventId}/card-prints/latest${filterParam(classId)}`).then((r) => r.print);
+
+export const latestCardPrintQueryOptions = (eventId: number, classId: number | null) =>
+  queryOptions({
+    queryKey: ['shows', eventId, 'card-prints', classId ?? 'all'],
+    queryFn: () => getLatestCardPrint(eventId, classId),
+    // Poll only while the job works; a finished or failed print stays as it is.
+    refetchInterval: (q) => (q.state.data && (q.state.data.status === 'queued' || q.state.data.status === 'running') ? CARD_PRINT_POLL_MS : false),
+  });
+
+export const useLatestCardPrint = (eventId: number, classId: number | null) => useQuery(latestCardPrintQueryOptions(eventId, classId));
+
+export const startCardPrint = (eventId: number, classId: number | null) =>
+  api<{ print: CardPrint }>(`/api/events/${eventId}/card-prints`, { method: 'POST', body: { classId } }).then((r) => r.print);
+
+/** Starts a print (or gets the one already running) and shows it at once; polling takes over from there. */
+export function useStartCardPrint(eventId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (classId: number | null) => startCardPrint(eventId, classId),
+    onSuccess: (print, classId) => qc.setQueryData(latestCardPrintQueryOptions(eventId, classId).queryKey, print),
+  });
+}

@@ -1,0 +1,34 @@
+import { formatInZone } from '@shared/calc/time-zone';
+import { showReminderEmail } from '@templates/email/show-reminder';
+import { config } from '../config';
+import { logger } from '../logger';
+import { queueMail } from '../mail/outbox';
+import { Event } from '../models/event';
+import { presentPublicBuild } from '../presenters/public-build';
+import { entryCardBuild, entryCardFileName, entryCardShow, reminderEntries, renderEntryCard } from '../services/entry-card';
+import { reminderDedupeKey } from '../services/show-reminders';
+
+export type { ShowReminderJob } from '../services/show-reminders';
+
+/**
+ * The show reminder, one mail per confirmed entry with the owner's card attached (their own design,
+ * with the show, class and number). The card is drawn from the public face of the build only.
+ * A retried job sends nothing twice: each mail carries a dedupe key.
+ */
+export async function sendShowReminders(eventId: number): Promise<void> {
+  const event = await Event.findByPk(eventId);
+  if (!event) return;
+  const when = formatInZone(event.startsAt.toISOString(), event.timeZone, { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZoneName: 'short' });
+  for (const entry of await reminderEntries(eventId)) {
+    if (!entry.owner?.email) continue;
+    const build = await entryCardBuild(entry);
+    const show = await entryCardShow(entry);
+    const pdf = await renderEntryCard(build, presentPublicBuild(build), show);
+    const mail = showReminderEmail({ name: entry.owner.name, showName: event.name, when, venue: event.venueName, buildTitle: build.title, className: show.className ?? '', number: entry.number!, link: `${config.publicBaseUrl}/entries` });
+    const sent = await queueMail(
+      { to: entry.owner.email, ...mail, attachments: [{ filename: entryCardFileName(build.code, entry.number!), contentType: 'application/pdf', content: pdf }] },
+      { dedupeKey: reminderDedupeKey(eventId, entry.id) },
+    );
+    if (!sent) logger.info({ entryId: entry.id }, 'show reminder already sent for this entry');
+  }
+}

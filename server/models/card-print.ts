@@ -1,0 +1,45 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import type { CardPrintStatus } from '@shared/schemas/card-print';
+import type { EventClass } from './event-class';
+import type { User } from './user';
+
+/** One bulk print of a show's numbered cards (every confirmed entry, or one class): the job's progress and its file. */
+export class CardPrint extends Model<InferAttributes<CardPrint>, InferCreationAttributes<CardPrint>> {
+  declare id: CreationOptional<number>;
+  declare eventId: number;
+  declare classId: number | null;
+  declare status: CreationOptional<CardPrintStatus>;
+  declare done: CreationOptional<number>;
+  declare total: number;
+  declare rendered: CreationOptional<number>;
+  declare fileKey: CreationOptional<string | null>;
+  declare error: CreationOptional<string | null>;
+  declare startedBy: number;
+  declare finishedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  declare starter?: NonAttribute<User>;
+  declare eventClass?: NonAttribute<EventClass>;
+
+  static initModel(sequelize: Sequelize) {
+    CardPrint.init(
+      {
+        id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+        eventId: { type: DataTypes.INTEGER, allowNull: false },
+        classId: { type: DataTypes.INTEGER, allowNull: true },
+        status: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'queued' },
+        done: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        total: { type: DataTypes.INTEGER, allowNull: false },
+        rendered: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        fileKey: { type: DataTypes.STRING(200), allowNull: true },
+        error: { type: DataTypes.STRING(500), allowNull: true },
+        startedBy: { type: DataTypes.INTEGER, allowNull: false },
+        finishedAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'card_prints', underscored: true },
+    );
+  }
+}
