@@ -27,6 +27,8 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
   declare createdBy: number | null;
   declare judgingClosedAt: CreationOptional<Date | null>;
   declare resultRules: CreationOptional<ShowResultRules>;
+  declare peoplesChoiceOpenedAt: CreationOptional<Date | null>;
+  declare peoplesChoiceClosedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -56,6 +58,8 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
         createdBy: { type: DataTypes.INTEGER, allowNull: true },
         judgingClosedAt: { type: DataTypes.DATE, allowNull: true },
         resultRules: { type: DataTypes.JSONB, allowNull: false, defaultValue: DEFAULT_RESULT_RULES },
+        peoplesChoiceOpenedAt: { type: DataTypes.DATE, allowNull: true },
+        peoplesChoiceClosedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

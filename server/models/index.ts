@@ -20,8 +20,9 @@ import { AuditLine } from './audit-line';
 import { JudgeAssignment } from './judge-assignment';
 import { Score } from './score';
 import { SheetNote } from './sheet-note';
+import { Vote } from './vote';
 
-for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote]) {
+for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, Vote]) {
   model.initModel(sequelize);
 }
 
@@ -56,6 +57,7 @@ Entry.belongsTo(Build, { foreignKey: 'buildId', as: 'build' });
 Entry.belongsTo(EventClass, { foreignKey: 'classId', as: 'eventClass' });
 Entry.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });
 AuditLine.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+Vote.belongsTo(Entry, { foreignKey: 'entryId', as: 'entry' });
 
-export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote };
+export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, Vote };
 export { sequelize, User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode };
