@@ -68,7 +68,13 @@ async function sendWithVoteBox(req: Request, res: Response, page: CachedPage, vo
   }
   const box: VoteBoxState = voted === null ? { kind: 'open', url: vote.url, formToken: formTokenFor(voter) } : { kind: 'voted', thisCar: voted === vote.entryNumber, number: voted };
   const html = Buffer.from(page.identity.toString('utf8').replace(VOTE_BOX_MARK, renderVoteBox(box)), 'utf8');
-  res.set({ 'Cache-Control': 'private, no-store', Vary: varyLanguage ? 'Accept-Encoding, Accept-Language' : 'Accept-Encoding' });
+  res.set({
+    'Cache-Control': 'private, no-store',
+    Vary: varyLanguage ? 'Accept-Encoding, Accept-Language' : 'Accept-Encoding',
+    // Under the app-wide no-referrer a browser sends "Origin: null" with the form; same-origin lets the
+    // vote carry its real Origin for the check, and still tells other sites nothing.
+    'Referrer-Policy': 'same-origin',
+  });
   const encoding = pickEncoding(req.get('accept-encoding'));
   if (encoding !== 'identity') res.set('Content-Encoding', encoding);
   // Compressed per response at a quick level: a page is a few tens of kilobytes.

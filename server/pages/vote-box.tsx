@@ -1,4 +1,5 @@
 import { renderToStaticMarkup } from 'react-dom/server';
+import { OSWALD_URL } from './page-styles';
 
 /**
  * The public page is cached and shared by every visitor; the vote part is each visitor's own (their
@@ -65,6 +66,6 @@ export function renderVoteRefusal(reason: VoteRefusal, backUrl: string, votedNum
       </p>
     </main>,
   );
-  const html = `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><meta name="robots" content="noindex"><title>${r.title} · Placard</title><style>html{background:#F5F0E6;color:#1C1B19;font:16px/1.5 system-ui,sans-serif}main{max-width:560px;margin:12vh auto;padding:0 16px}h1{font:600 2rem/1.1 Oswald,"Arial Narrow",sans-serif;text-transform:uppercase}a{display:inline-block;min-height:44px;line-height:44px;color:inherit}</style></head><body>${body}</body></html>`;
+  const html = `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><meta name="robots" content="noindex"><title>${r.title} · Placard</title><style>@font-face{font-family:Oswald;font-weight:600;font-display:swap;src:url(${OSWALD_URL}) format("woff2")}html{background:#F5F0E6;color:#1C1B19;font:16px/1.5 system-ui,sans-serif}main{max-width:560px;margin:12vh auto;padding:0 16px}h1{font:600 2rem/1.1 Oswald,"Arial Narrow",sans-serif;text-transform:uppercase}a{display:inline-block;min-height:44px;line-height:44px;color:inherit}</style></head><body>${body}</body></html>`;
   return { status: r.status, html };
 }

@@ -40,7 +40,7 @@ export function PeoplesChoicePanel({ show }: { show: EventDetail }) {
     >
       <div className="space-y-5">
         {pc.open ? (
-          <Notice tone="ok">Voting is open{pc.openedAt ? ` since ${formatDateTime(pc.openedAt)}` : ''}: each entered car’s public page has a vote button. One vote per visitor.</Notice>
+          <Notice tone="ok">Voting is open{pc.openedAt ? `, since ${formatDateTime(pc.openedAt)}` : ''}: each entered car’s public page has a vote button. One vote per visitor.</Notice>
         ) : pc.mayOpen ? (
           <p className="text-graphite">Voting is closed{pc.closedAt ? ` (closed ${formatDateTime(pc.closedAt)})` : ''}. Open it and visitors vote on the public page of each car, one vote each.</p>
         ) : (
