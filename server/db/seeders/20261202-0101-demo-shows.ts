@@ -9,6 +9,7 @@ import { hashPassword } from '../../auth/passwords';
 import { config } from '../../config';
 import { wallTimeToInstant } from '@shared/calc/time-zone';
 import { startMailCatcher } from '../../mail/catcher';
+import { seedJudgingShow } from '../demo/judging';
 import { createEvent, takeLifecycleStep } from '../../services/events';
 import { addClass } from '../../services/event-classes';
 import { saveJudgingSheet } from '../../services/judging-sheet';
@@ -115,6 +116,7 @@ async function seedShows() {
     },
     { where: { id: done.id } },
   );
+  await seedJudgingShow(organiser);
 }
 
 /** The co-organiser, three judges and the gate account, as the show's members. */
