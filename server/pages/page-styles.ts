@@ -53,6 +53,7 @@ th{font-weight:600;color:var(--graphite);font-size:.875rem}
 .vbtn:focus-visible{outline:3px solid var(--ink);outline-offset:3px}
 .vnote{margin:8px 0 0;font-size:.875rem;color:var(--graphite)}
 .voted{margin:0;padding:10px 12px;border-left:4px solid #2E7D4F;background:#fff8}
+.vote-open{margin:20px 0 0;padding:10px 12px;border-left:4px solid var(--signal);background:#fff8;font-weight:600}
 footer{max-width:760px;margin:0 auto;padding:16px;border-top:1px solid var(--rule);font-size:.8rem;color:var(--graphite)}
 @media (min-width:800px){.cover{margin:16px 0 0}}
 .preview{margin:0;padding:10px 16px;background:#1C1B19;color:#F5F0E6;font-size:15px;text-align:center}`;

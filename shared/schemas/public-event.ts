@@ -11,6 +11,8 @@ export const PublicEventSchema = z.object({
   status: z.enum(EVENT_STATUSES),
   statusLabel: z.string(),
   takingEntries: z.boolean(),
+  /** People's choice voting is open: each car's page has the vote. */
+  peoplesChoiceOpen: z.boolean(),
   venueName: z.string(),
   venueAddress: z.string(),
   timeZone: z.string(),

@@ -7,7 +7,7 @@ import { Vote } from '@server/models/vote';
 import { publicPageCache } from '@server/pages/page-cache';
 import { peoplesChoiceWinners } from '@server/services/peoples-choice';
 import { apiClient } from '../../support/api-client';
-import { listenApp } from '../../support/raw-http';
+import { listenApp, rawGet } from '../../support/raw-http';
 import { signedIn, showWithClasses } from '../../support/event-factory';
 import { judgeOf, showInJudging, type ShowInJudging } from '../../support/judging-factory';
 import { formTokenIn, loopbackAddress, visitor } from '../../support/visitor';
@@ -114,11 +114,15 @@ describe('the voting window', () => {
     expect(before.headers['cache-control']).toBe('public, no-cache'); // on a show whose voting may open any moment
     expect((await phone.vote(car, 'anything')).status).toBe(403); // no cookie yet, so no valid form
 
+    const showPage = async () => (await rawGet(`${server.baseUrl}/e/${show.slug}`)).body.toString('utf8');
+    expect(await showPage()).not.toContain('People’s choice voting is open');
     expect((await show.organiser.client.post(`${base}/open`)).status).toBe(200);
+    expect(await showPage()).toContain('People’s choice voting is open');
     const open = await phone.view(car);
     const token = formTokenIn(open.text);
     expect(token).toBeDefined();
     expect((await show.organiser.client.post(`${base}/close`)).status).toBe(200);
+    expect(await showPage()).not.toContain('People’s choice voting is open');
     const closedPage = await phone.view(car);
     expect(closedPage.text).not.toContain('Vote for this car');
     const late = await phone.vote(car, token);
