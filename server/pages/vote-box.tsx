@@ -35,7 +35,7 @@ function VoteBox({ state }: { state: VoteBoxState }) {
 
 export const renderVoteBox = (state: VoteBoxState) => renderToStaticMarkup(<VoteBox state={state} />);
 
-export type VoteRefusal = 'twice' | 'closed' | 'not-entered' | 'stale-form' | 'too-many' | 'unreadable';
+export type VoteRefusal = 'twice' | 'closed' | 'not-entered' | 'stale-form' | 'too-many' | 'unreadable' | 'unavailable';
 
 const REFUSALS: Record<VoteRefusal, { status: number; title: string; text: (n: number | null) => string }> = {
   twice: {
@@ -52,6 +52,7 @@ const REFUSALS: Record<VoteRefusal, { status: number; title: string; text: (n: n
   },
   'too-many': { status: 429, title: 'Too many votes from this network', text: () => 'Many votes came from your network in a short time. Wait a while, then try again.' },
   unreadable: { status: 400, title: 'This vote could not be read', text: () => 'Open the car’s page again and press the vote button there.' },
+  unavailable: { status: 503, title: 'Votes cannot be counted right now', text: () => 'This vote was not counted. Go back to the car’s page and press the button again in a minute.' },
 };
 
 /** A whole page for a vote that was not counted: the reason in words, and the way back to the car. */

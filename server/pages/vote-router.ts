@@ -2,6 +2,7 @@ import express, { Router, type ErrorRequestHandler, type Response } from 'expres
 import { BuildCodeSchema } from '@shared/schemas/build';
 import { voteLimiter } from '../middlewares/rate-limits';
 import { castVote } from '../services/peoples-choice';
+import { isDatabaseUnavailable } from '../services/database-unavailable';
 import { existingVoter, formTokenMatches, fromOurOrigin, readVoterCookie } from './voter';
 import { renderVoteRefusal, type VoteRefusal } from './vote-box';
 
@@ -34,8 +35,15 @@ votePagesRouter.post(
 
 /** The limiter's 429 and the body parser's 4xx answer as pages too, since a person pressed a button. */
 const votePageErrors: ErrorRequestHandler = (err, req, res, next) => {
+  const back = `/c/${encodeURIComponent(String(req.params.code ?? ''))}`;
+  if (res.headersSent) return next(err);
+  if (isDatabaseUnavailable(err)) {
+    req.log?.warn({ err }, 'database unavailable: vote not counted');
+    res.set('Retry-After', '5');
+    return refuse(res, 'unavailable', back);
+  }
   const status = (err as { status?: unknown }).status;
-  if (typeof status !== 'number' || status < 400 || status >= 500 || res.headersSent) return next(err);
-  refuse(res, status === 429 ? 'too-many' : 'unreadable', `/c/${encodeURIComponent(String(req.params.code ?? ''))}`);
+  if (typeof status !== 'number' || status < 400 || status >= 500) return next(err);
+  refuse(res, status === 429 ? 'too-many' : 'unreadable', back);
 };
 votePagesRouter.use('/c/:code/vote', votePageErrors);
