@@ -33,7 +33,7 @@ votePagesRouter.post(
   },
 );
 
-/** The limiter's 429 and the body parser's 4xx answer as pages too, since a person pressed a button. */
+/** The limiter's 429, the body parser's 4xx and a database that is away answer as pages too, since a person pressed a button. */
 const votePageErrors: ErrorRequestHandler = (err, req, res, next) => {
   const back = `/c/${encodeURIComponent(String(req.params.code ?? ''))}`;
   if (res.headersSent) return next(err);
