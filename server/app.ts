@@ -37,6 +37,8 @@ import { showDayRouter } from './routes/show-day';
 import { judgingRouter } from './routes/judging';
 import { EVENT_LOGO_PATH, eventLogoRouter } from './routes/event-logo';
 import { cardPrintsRouter } from './routes/card-prints';
+import { peoplesChoiceRouter } from './routes/peoples-choice';
+import { votePagesRouter } from './pages/vote-router';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -57,7 +59,7 @@ function apiRouter() {
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
-  api.use(eventsRouter, eventLogoRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter, cardPrintsRouter);
+  api.use(eventsRouter, eventLogoRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter, cardPrintsRouter, peoplesChoiceRouter);
   api.use(apiNotFound);
   return api;
 }
@@ -94,6 +96,7 @@ export function createApp(): Express {
   app.use(pinoHttp({ logger, serializers: httpLogSerializers, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
   app.use('/api', apiRouter());
   app.use(mediaRouter); // uploaded photos under /media
+  app.use(votePagesRouter); // people's choice votes from the public build page (form POSTs, no session)
   app.use(pagesRouter); // public pages such as /c/<code>, complete HTML without the app bundle
   app.use(eventPagesRouter); // public show pages /e/<slug> and their calendar files
   app.use(clientRouter());

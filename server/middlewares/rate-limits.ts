@@ -139,3 +139,16 @@ export const apiLimiter = limiter('api', {
   key: ip,
   message: 'Too many requests. Slow down a little and try again.',
 });
+
+/**
+ * People's choice vote attempts per address, refused ones included. Each visitor votes once per show,
+ * so this only slows one machine minting new cookies; a show's Wi-Fi or a carrier's shared address can
+ * carry many honest visitors, hence a generous default (common practice, no published figure). Beyond
+ * it, the organiser voids an address's votes by hand.
+ */
+export const voteLimiter = limiter('vote', {
+  windowMs: config.voteRateWindowMs,
+  limit: config.voteRateLimit,
+  key: ip,
+  message: 'Too many votes from this network. Wait a while and try again.',
+});

@@ -31,6 +31,8 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
   declare resultRules: CreationOptional<ShowResultRules>;
   /** The show's logo, stored as build photos are (same keys and widths); null when it has none. */
   declare logo: CreationOptional<EventLogo | null>;
+  declare peoplesChoiceOpenedAt: CreationOptional<Date | null>;
+  declare peoplesChoiceClosedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -61,6 +63,8 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
         judgingClosedAt: { type: DataTypes.DATE, allowNull: true },
         resultRules: { type: DataTypes.JSONB, allowNull: false, defaultValue: DEFAULT_RESULT_RULES },
         logo: { type: DataTypes.JSONB, allowNull: true },
+        peoplesChoiceOpenedAt: { type: DataTypes.DATE, allowNull: true },
+        peoplesChoiceClosedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -22,7 +22,9 @@ import { Score } from './score';
 import { SheetNote } from './sheet-note';
 import { CardPrint } from './card-print';
 
-for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint]) {
+import { Vote } from './vote';
+
+for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote]) {
   model.initModel(sequelize);
 }
 
@@ -60,5 +62,7 @@ AuditLine.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
 CardPrint.belongsTo(User, { foreignKey: 'startedBy', as: 'starter' });
 CardPrint.belongsTo(EventClass, { foreignKey: 'classId', as: 'eventClass' });
 
-export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint };
+Vote.belongsTo(Entry, { foreignKey: 'entryId', as: 'entry' });
+
+export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote };
 export { sequelize, User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode };

@@ -1,8 +1,21 @@
 import { createHash } from 'node:crypto';
 import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
 
-/** A rendered page in the three encodings we send, with the version of the build it shows. */
-export type CachedPage = { version: string; etag: string; identity: Buffer; gzip: Buffer; br: Buffer; checkedAt: number };
+/**
+ * A rendered page in the three encodings we send, with the version of the build it shows. `vote` is
+ * set while the car's show takes people's choice votes: each response then adds the visitor's own box.
+ * `mustRevalidate` marks a car on a show whose voting could open or close at any moment.
+ */
+export type CachedPage = {
+  version: string;
+  etag: string;
+  identity: Buffer;
+  gzip: Buffer;
+  br: Buffer;
+  checkedAt: number;
+  vote?: { eventId: number; url: string; entryNumber: number };
+  mustRevalidate?: boolean;
+};
 
 export function compressPage(html: string, version: string): Omit<CachedPage, 'checkedAt'> {
   const identity = Buffer.from(html, 'utf8');

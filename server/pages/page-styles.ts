@@ -47,6 +47,13 @@ th{font-weight:600;color:var(--graphite);font-size:.875rem}
 .gal figcaption{font-size:.875rem;color:var(--graphite);padding:4px 0}
 .gal figure{margin:0}
 .show{border:2px solid var(--ink);padding:12px;margin-top:20px}
+.vote{margin-top:12px;padding-top:12px;border-top:1px solid var(--rule)}
+.vote form{margin:0}
+.vbtn{display:block;width:100%;min-height:64px;padding:12px 16px;border:0;background:var(--signal);color:#fff;font:600 1.5rem/1.1 Oswald,"Arial Narrow",sans-serif;text-transform:uppercase;letter-spacing:.04em;cursor:pointer}
+.vbtn:focus-visible{outline:3px solid var(--ink);outline-offset:3px}
+.vnote{margin:8px 0 0;font-size:.875rem;color:var(--graphite)}
+.voted{margin:0;padding:10px 12px;border-left:4px solid #2E7D4F;background:#fff8}
+.vote-open{margin:20px 0 0;padding:10px 12px;border-left:4px solid var(--signal);background:#fff8;font-weight:600}
 footer{max-width:760px;margin:0 auto;padding:16px;border-top:1px solid var(--rule);font-size:.8rem;color:var(--graphite)}
 @media (min-width:800px){.cover{margin:16px 0 0}}
 .preview{margin:0;padding:10px 16px;background:#1C1B19;color:#F5F0E6;font-size:15px;text-align:center}`;

@@ -9,8 +9,11 @@ import { engineLine, sectionViews, type SectionView } from '@shared/build-sheet/
 import { DynoChart } from './dyno-chart';
 import { PAGE_CSS } from './page-styles';
 
-/** What a show adds to the page once events exist: the entry, and the people's choice vote while it is open. */
-export type ShowEntrySlot = { showName: string; showUrl?: string; className?: string; entryNumber?: string; voteUrl?: string } | null;
+/**
+ * What a show adds to the page: the entry, and while the show's people's choice window is open, the
+ * place of the visitor's own vote box (filled per response, see `vote-box.tsx`).
+ */
+export type ShowEntrySlot = { showName: string; showUrl?: string; className?: string; entryNumber?: string; votingMayOpen?: boolean; vote?: { eventId: number; url: string } } | null;
 
 const absolute = (url: string) => (url.startsWith('http') ? url : `${config.publicBaseUrl}${url}`);
 const cover = (b: PublicBuild) => b.photos.find((p) => p.isCover) ?? b.photos[0] ?? null;
@@ -176,11 +179,7 @@ function ShowEntry({ slot }: { slot: ShowEntrySlot }) {
       <p className="d">{slot.showUrl ? <a href={slot.showUrl}>{slot.showName}</a> : slot.showName}</p>
       {slot.className ? <p>Class: {slot.className}</p> : null}
       {slot.entryNumber ? <p className="d">Entry {slot.entryNumber}</p> : null}
-      {slot.voteUrl ? (
-        <form method="post" action={slot.voteUrl}>
-          <button type="submit">Vote for this car: people&apos;s choice</button>
-        </form>
-      ) : null}
+      {slot.vote ? <div data-vote-box="" /> : null}
     </section>
   );
 }

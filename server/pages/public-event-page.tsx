@@ -73,6 +73,11 @@ function Page({ e }: { e: PublicEvent }) {
               ))}
             </section>
           ) : null}
+          {e.peoplesChoiceOpen ? (
+            <p className="vote-open" role="note">
+              People’s choice voting is open: open a car’s page below and press its vote button. One vote per visitor.
+            </p>
+          ) : null}
           <section aria-labelledby="how">
             <h2 id="how">How to enter</h2>
             {e.takingEntries ? (

@@ -1,6 +1,7 @@
 import { Router, type Request, type Response } from 'express';
 import { createRequire } from 'node:module';
 import { readFileSync } from 'node:fs';
+import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
 import type { UnitSystem } from '@shared/calc';
 import { loadPublicBuild, publicVersion } from '../services/public-builds';
 import { presentPublicBuild } from '../presenters/public-build';
@@ -9,6 +10,9 @@ import { NOT_FOUND_HTML, renderPublicBuildPage } from './public-build-page';
 import { compressPage, matchesEtag, pickEncoding, publicPageCache, type CachedPage } from './page-cache';
 import { OSWALD_URL } from './page-styles';
 import { isDatabaseUnavailable } from '../services/database-unavailable';
+import { votedNumber } from '../services/peoples-choice';
+import { formTokenFor, readVoterCookie, voterOf } from './voter';
+import { VOTE_BOX_MARK, renderVoteBox, type VoteBoxState } from './vote-box';
 
 /** Server-rendered public pages (/c/<code>): complete HTML, no app bundle, no session. */
 export const pagesRouter = Router();
@@ -33,9 +37,11 @@ function notFound(res: Response) {
 }
 
 function send(req: Request, res: Response, page: CachedPage, varyLanguage: boolean) {
+  if (page.vote) return sendWithVoteBox(req, res, page, page.vote, varyLanguage);
   res.set({
     ETag: page.etag,
-    'Cache-Control': 'public, max-age=30, stale-while-revalidate=300',
+    // On show day and in judging the vote button may appear or go at any moment: browsers check first (a cheap 304).
+    'Cache-Control': page.mustRevalidate ? 'public, no-cache' : 'public, max-age=30, stale-while-revalidate=300',
     Vary: varyLanguage ? 'Accept-Encoding, Accept-Language' : 'Accept-Encoding',
   });
   if (matchesEtag(req.get('if-none-match'), page.etag)) {
@@ -47,7 +53,35 @@ function send(req: Request, res: Response, page: CachedPage, varyLanguage: boole
   res.type('html').end(encoding === 'br' ? page.br : encoding === 'gzip' ? page.gzip : page.identity);
 }
 
-pagesRouter.get('/c/:code', async (req, res) => {
+/**
+ * While voting is open the shared cached page gets the visitor's own vote box (their form token, or
+ * their thanks) on the way out, and the answer is private and never stored: no one's state is cached.
+ */
+async function sendWithVoteBox(req: Request, res: Response, page: CachedPage, vote: NonNullable<CachedPage['vote']>, varyLanguage: boolean) {
+  const voter = voterOf(req, res);
+  let voted: number | null = null;
+  try {
+    voted = await votedNumber(vote.eventId, voter);
+  } catch (err) {
+    // The database is away: the page still shows, with the button (the vote itself will wait for it).
+    if (!isDatabaseUnavailable(err)) throw err;
+  }
+  const box: VoteBoxState = voted === null ? { kind: 'open', url: vote.url, formToken: formTokenFor(voter) } : { kind: 'voted', thisCar: voted === vote.entryNumber, number: voted };
+  const html = Buffer.from(page.identity.toString('utf8').replace(VOTE_BOX_MARK, renderVoteBox(box)), 'utf8');
+  res.set({
+    'Cache-Control': 'private, no-store',
+    Vary: varyLanguage ? 'Accept-Encoding, Accept-Language' : 'Accept-Encoding',
+    // Under the app-wide no-referrer a browser sends "Origin: null" with the form; same-origin lets the
+    // vote carry its real Origin for the check, and still tells other sites nothing.
+    'Referrer-Policy': 'same-origin',
+  });
+  const encoding = pickEncoding(req.get('accept-encoding'));
+  if (encoding !== 'identity') res.set('Content-Encoding', encoding);
+  // Compressed per response at a quick level: a page is a few tens of kilobytes.
+  res.type('html').end(encoding === 'br' ? brotliCompressSync(html, { params: { [zlib.BROTLI_PARAM_QUALITY]: 5 } }) : encoding === 'gzip' ? gzipSync(html, { level: 6 }) : html);
+}
+
+pagesRouter.get('/c/:code', readVoterCookie, async (req, res) => {
   const code = String(req.params.code).toUpperCase();
   const { units, chosen } = unitsFor(req);
   const key = `${code}|${units}`;
@@ -76,7 +110,12 @@ pagesRouter.get('/c/:code', async (req, res) => {
     const build = await loadPublicBuild(code);
     if (!build) return null;
     const show = await showSlotOfBuild(code);
-    const fresh = { ...compressPage(renderPublicBuildPage(presentPublicBuild(build), units, show), version), checkedAt: Date.now() };
+    const fresh: CachedPage = {
+      ...compressPage(renderPublicBuildPage(presentPublicBuild(build), units, show), version),
+      checkedAt: Date.now(),
+      ...(show?.vote ? { vote: { ...show.vote, entryNumber: Number(show.entryNumber) } } : {}),
+      mustRevalidate: show?.votingMayOpen ?? false,
+    };
     publicPageCache.set(key, fresh);
     return fresh;
   });

@@ -1,3 +1,4 @@
+import { votingOpen } from '@shared/schemas/peoples-choice';
 import { EVENT_STATUS_LABELS, type EventStatus } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
 import type { PublicEvent } from '@shared/schemas/public-event';
@@ -19,6 +20,7 @@ export function presentPublicEvent(event: Event, entries: Entry[], now = new Dat
     statusLabel: EVENT_STATUS_LABELS[event.status as EventStatus],
     logo: presentEventLogo(event.logo),
     takingEntries: event.status === 'registration_open' && event.registrationOpensAt <= now && now < event.registrationClosesAt,
+    peoplesChoiceOpen: votingOpen(event),
     venueName: event.venueName,
     venueAddress: event.venueAddress,
     timeZone: event.timeZone,

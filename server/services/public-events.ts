@@ -1,4 +1,5 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
+import { VOTING_STATUSES, votingOpen } from '@shared/schemas/peoples-choice';
 import { EventSlugSchema } from '@shared/schemas/event';
 import { Build } from '../models/build';
 import { Entry } from '../models/entry';
@@ -21,17 +22,42 @@ export async function loadPublicEvent(slug: string) {
   return { event, entries: await listPublicEntries(event.id) };
 }
 
-/** The show a build is entered in right now (confirmed or checked in), for its public page. */
-export async function showSlotOfBuild(code: string) {
-  const entry = await Entry.findOne({
+/**
+ * The entry that puts a build on a show right now (confirmed or checked in, the earliest show first):
+ * the one its public page names, and the one a people's choice vote on that page goes to.
+ */
+export function entryOnShowNow(code: string, transaction?: Transaction): Promise<Entry | null> {
+  return Entry.findOne({
     where: { status: { [Op.in]: ['confirmed', 'checked_in'] }, number: { [Op.ne]: null } },
     include: [
       { model: Build, as: 'build', attributes: ['id'], where: { code, published: true } },
-      { model: Event, as: 'event', attributes: ['name', 'slug', 'startsAt'], where: { status: { [Op.in]: [...ON_STATUSES] } } },
+      {
+        model: Event,
+        as: 'event',
+        attributes: ['id', 'name', 'slug', 'startsAt', 'status', 'peoplesChoiceOpenedAt', 'peoplesChoiceClosedAt'],
+        where: { status: { [Op.in]: [...ON_STATUSES] } },
+      },
       { model: EventClass, as: 'eventClass', attributes: ['name'] },
     ],
     order: [[{ model: Event, as: 'event' }, 'startsAt', 'ASC']],
+    transaction,
   });
+}
+
+export type ShowSlot = { showName: string; showUrl: string; className?: string; entryNumber: string; votingMayOpen: boolean; vote?: { eventId: number; url: string } };
+
+/** The show a build is entered in right now, for its public page, with the vote while the show's window is open. */
+export async function showSlotOfBuild(code: string): Promise<ShowSlot | null> {
+  const entry = await entryOnShowNow(code);
   if (!entry?.event) return null;
-  return { showName: entry.event.name, showUrl: `/e/${entry.event.slug}`, className: entry.eventClass?.name, entryNumber: String(entry.number) };
+  const e = entry.event;
+  return {
+    showName: e.name,
+    showUrl: `/e/${e.slug}`,
+    className: entry.eventClass?.name,
+    entryNumber: String(entry.number),
+    // Voting could open at any moment on show day and in judging: browsers must revalidate the page.
+    votingMayOpen: VOTING_STATUSES.includes(e.status),
+    vote: votingOpen(e) ? { eventId: e.id, url: `/c/${code}/vote` } : undefined,
+  };
 }

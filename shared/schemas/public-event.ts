@@ -13,6 +13,8 @@ export const PublicEventSchema = z.object({
   statusLabel: z.string(),
   logo: EventLogoOutSchema.nullable(),
   takingEntries: z.boolean(),
+  /** People's choice voting is open: each car's page has the vote. */
+  peoplesChoiceOpen: z.boolean(),
   venueName: z.string(),
   venueAddress: z.string(),
   timeZone: z.string(),

@@ -10,6 +10,7 @@ import { hashPassword } from '../../auth/passwords';
 import { config } from '../../config';
 import { wallTimeToInstant } from '@shared/calc/time-zone';
 import { startMailCatcher } from '../../mail/catcher';
+import { seedJudgingShow } from '../demo/judging';
 import { createEvent, takeLifecycleStep } from '../../services/events';
 import { addClass } from '../../services/event-classes';
 import { saveJudgingSheet } from '../../services/judging-sheet';
@@ -117,6 +118,7 @@ async function seedShows() {
     { where: { id: done.id } },
   );
   await seedShowDay(); // a third show on its show day: gate open, cars arriving, numbered cards printed
+  await seedJudgingShow(organiser);
 }
 
 /** The co-organiser, three judges and the gate account, as the show's members. */

@@ -1,0 +1,66 @@
+import { createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
+import cookieParser from 'cookie-parser';
+import type { Request, Response } from 'express';
+import { config } from '../config';
+
+/**
+ * A visitor's people's choice identity, without an account: a random token in a cookie signed with
+ * the session secret (cookie-parser's HMAC-SHA256 signature), so a forged or altered cookie reads as none.
+ * The server stores only keyed hashes of it (`votingHash`), never the token.
+ */
+export const VOTER_COOKIE = 'placard.voter';
+const TOKEN = /^[A-Za-z0-9_-]{43}$/;
+// Long enough to outlast a show weekend; the token is useless outside the votes it hashes into.
+const COOKIE_DAYS = 60;
+
+export const readVoterCookie = cookieParser(config.sessionSecret);
+
+export function existingVoter(req: Request): string | null {
+  const value: unknown = (req.signedCookies as Record<string, unknown> | undefined)?.[VOTER_COOKIE];
+  return typeof value === 'string' && TOKEN.test(value) ? value : null;
+}
+
+/** The visitor's token, making one (and setting its cookie) on their first page view while voting is open. */
+export function voterOf(req: Request, res: Response): string {
+  const existing = existingVoter(req);
+  if (existing) return existing;
+  const token = randomBytes(32).toString('base64url');
+  res.cookie(VOTER_COOKIE, token, { signed: true, httpOnly: true, sameSite: 'lax', secure: config.secureCookies, path: '/c', maxAge: COOKIE_DAYS * 86400_000 });
+  return token;
+}
+
+/**
+ * The CSRF token the vote form carries: a signed form token tied to the visitor's cookie token. A page
+ * of another site can neither read it nor make one, and it is worthless with any other cookie.
+ */
+export const formTokenFor = (voter: string) => createHmac('sha256', config.sessionSecret).update(`placard-vote-form\0${voter}`).digest('base64url');
+
+export function formTokenMatches(voter: string, given: unknown): boolean {
+  if (typeof given !== 'string') return false;
+  const want = Buffer.from(formTokenFor(voter));
+  const got = Buffer.from(given);
+  return got.length === want.length && timingSafeEqual(got, want);
+}
+
+const originOf = (url: string) => {
+  try {
+    return new URL(url).origin;
+  } catch {
+    return null;
+  }
+};
+
+/**
+ * The browser's word on where the form was sent from: an Origin header, when present, must be ours
+ * (the public base URL, or the host the request was sent to); a Sec-Fetch-Site other than same-origin
+ * is refused too. Neither header is required (older browsers), because the form token is.
+ */
+export function fromOurOrigin(req: Request): boolean {
+  const origin = req.get('origin');
+  if (origin !== undefined) {
+    const ours = [originOf(config.publicBaseUrl), originOf(`${req.protocol}://${req.get('host') ?? ''}`)];
+    if (origin === 'null' || !ours.includes(origin)) return false;
+  }
+  const site = req.get('sec-fetch-site');
+  return site === undefined || site === 'same-origin' || site === 'none';
+}
