@@ -40,8 +40,13 @@ describe('bulk numbered cards', { timeout: 300_000 }, () => {
     const oneClass = await s.organiser.client.post(`/api/events/${s.eventId}/card-prints`, { classId: s.classIds[1] });
     expect(oneClass.status).toBe(202);
     expect(oneClass.body.print).toMatchObject({ classId: s.classIds[1], className: 'Customs', total: 1 });
-    // A reload finds the same print.
+    // A reload finds the same print, and so does a second organiser, whose start joins it.
     expect((await s.organiser.client.get(`/api/events/${s.eventId}/card-prints/latest`)).body.print.id).toBe(first.body.print.id);
+    const coOrganiser = await memberOf(s.eventId, 'organiser', 'Cora Coorganiser');
+    expect((await coOrganiser.client.get(`/api/events/${s.eventId}/card-prints/latest`)).body.print).toMatchObject({ id: first.body.print.id, startedBy: 'Org Anizer' });
+    const joined = await coOrganiser.client.post(`/api/events/${s.eventId}/card-prints`, { classId: null });
+    expect(joined.status).toBe(200);
+    expect(joined.body.print.id).toBe(first.body.print.id);
 
     for (const who of [judge.client, gate.client, s.owner.client]) {
       expect((await who.get(`/api/events/${s.eventId}/card-prints/${first.body.print.id}`)).status).toBe(403);
