@@ -6,6 +6,7 @@ import { Entry } from '@server/models/entry';
 import { decodeMail } from '@server/mail/mail-job';
 import { MAIL_QUEUE } from '@server/jobs/queue';
 import { showWithClasses, signedIn } from '../../support/event-factory';
+import { apiClient } from '../../support/api-client';
 import { enter, memberOf } from '../../support/show-day-factory';
 import { readQr, rasterize, pdfText } from '../../support/pdf';
 import { waitForMailAbout } from '../../support/mailbox';
@@ -29,6 +30,9 @@ describe('bulk numbered cards', { timeout: 300_000 }, () => {
       expect((await who.post(`/api/events/${s.eventId}/card-prints`, {})).status).toBe(403);
       expect((await who.get(`/api/events/${s.eventId}/card-prints/latest`)).status).toBe(403);
     }
+    const anonymous = await apiClient();
+    expect((await anonymous.post(`/api/events/${s.eventId}/card-prints`, {})).status).toBe(401);
+    expect((await anonymous.get(`/api/events/${s.eventId}/card-prints/latest`)).status).toBe(401);
     // No worker runs in this process yet, so the first print is still waiting when the second start comes.
     const first = await s.organiser.client.post(`/api/events/${s.eventId}/card-prints`, {});
     expect(first.status).toBe(202);
