@@ -1,6 +1,8 @@
+import { QueryTypes } from 'sequelize';
 import { formatInZone } from '@shared/calc/time-zone';
 import { showReminderEmail } from '@templates/email/show-reminder';
 import { config } from '../config';
+import { sequelize } from '../db/sequelize';
 import { logger } from '../logger';
 import { queueMail } from '../mail/outbox';
 import { Event } from '../models/event';
@@ -21,6 +23,9 @@ export async function sendShowReminders(eventId: number): Promise<void> {
   const when = formatInZone(event.startsAt.toISOString(), event.timeZone, { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZoneName: 'short' });
   for (const entry of await reminderEntries(eventId)) {
     if (!entry.owner?.email) continue;
+    // Already reminded (a second press, a retried job): skip before spending a card render on it.
+    const sentBefore = await sequelize.query('SELECT 1 FROM mail_dedupe_keys WHERE key = $1', { bind: [reminderDedupeKey(eventId, entry.id)], type: QueryTypes.SELECT });
+    if (sentBefore.length) continue;
     const build = await entryCardBuild(entry);
     const show = await entryCardShow(entry);
     const pdf = await renderEntryCard(build, presentPublicBuild(build), show);

@@ -19,7 +19,7 @@ import { numberedCardsOf, readStoredFile, renderNumberedCards, type NumberedCard
 export type CardPrintJob = { kind: 'print'; printId: number };
 
 /** Cards missing from the cache are drawn this many to a document (much quicker than one by one), then split into pages. */
-export const RENDER_BATCH = 10;
+export const RENDER_BATCH = 20;
 
 const withPeople = [
   { model: User, as: 'starter', attributes: ['id', 'name'] },

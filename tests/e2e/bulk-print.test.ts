@@ -23,7 +23,7 @@ async function signIn(page: Page, email: string) {
 const pdfToPngs = (file: string, name: string, last = 2) => execFileSync(PDFTOPPM, ['-r', '60', '-png', '-f', '1', '-l', String(last), file, path.join(SCREENSHOT_DIR, name)]);
 
 // Enough cards that the job outlasts a few polls of the page, so the bar is seen between empty and full.
-const CARDS = 60;
+const CARDS = 100;
 const TITLES = ['Flathead roadster', 'Chopped mercury-style coupe', 'Gasser wagon', 'Fenderless tudor', 'Shortbed pickup'];
 
 describe('numbered cards in bulk, from the organiser’s entries page', { timeout: 600_000 }, () => {

@@ -68,5 +68,5 @@ export async function pagesOf(pdf: Buffer): Promise<{ count: number; texts: stri
 }
 
 /** The entry number printed under the "ENTRY" label (letter-spaced, so the reader may split its letters). */
-export const ENTRY_NUMBER = /E\s?N\s?T\s?R\s?Y\s+(\d{1,4})\b/;
+export const ENTRY_NUMBER = /E\s?N\s?T\s?R\s?Y\s+(\d{1,4})(?!\d)/;
 export const numberOnPage = (text: string) => Number(text.match(ENTRY_NUMBER)?.[1] ?? NaN);

@@ -6,6 +6,7 @@ import { Entry } from '@server/models/entry';
 import { decodeMail } from '@server/mail/mail-job';
 import { MAIL_QUEUE } from '@server/jobs/queue';
 import { showWithClasses, signedIn } from '../../support/event-factory';
+import { apiClient } from '../../support/api-client';
 import { enter, memberOf } from '../../support/show-day-factory';
 import { readQr, rasterize, pdfText } from '../../support/pdf';
 import { waitForMailAbout } from '../../support/mailbox';
@@ -29,6 +30,9 @@ describe('bulk numbered cards', { timeout: 300_000 }, () => {
       expect((await who.post(`/api/events/${s.eventId}/card-prints`, {})).status).toBe(403);
       expect((await who.get(`/api/events/${s.eventId}/card-prints/latest`)).status).toBe(403);
     }
+    const anonymous = await apiClient();
+    expect((await anonymous.post(`/api/events/${s.eventId}/card-prints`, {})).status).toBe(401);
+    expect((await anonymous.get(`/api/events/${s.eventId}/card-prints/latest`)).status).toBe(401);
     // No worker runs in this process yet, so the first print is still waiting when the second start comes.
     const first = await s.organiser.client.post(`/api/events/${s.eventId}/card-prints`, {});
     expect(first.status).toBe(202);
@@ -40,8 +44,13 @@ describe('bulk numbered cards', { timeout: 300_000 }, () => {
     const oneClass = await s.organiser.client.post(`/api/events/${s.eventId}/card-prints`, { classId: s.classIds[1] });
     expect(oneClass.status).toBe(202);
     expect(oneClass.body.print).toMatchObject({ classId: s.classIds[1], className: 'Customs', total: 1 });
-    // A reload finds the same print.
+    // A reload finds the same print, and so does a second organiser, whose start joins it.
     expect((await s.organiser.client.get(`/api/events/${s.eventId}/card-prints/latest`)).body.print.id).toBe(first.body.print.id);
+    const coOrganiser = await memberOf(s.eventId, 'organiser', 'Cora Coorganiser');
+    expect((await coOrganiser.client.get(`/api/events/${s.eventId}/card-prints/latest`)).body.print).toMatchObject({ id: first.body.print.id, startedBy: 'Org Anizer' });
+    const joined = await coOrganiser.client.post(`/api/events/${s.eventId}/card-prints`, { classId: null });
+    expect(joined.status).toBe(200);
+    expect(joined.body.print.id).toBe(first.body.print.id);
 
     for (const who of [judge.client, gate.client, s.owner.client]) {
       expect((await who.get(`/api/events/${s.eventId}/card-prints/${first.body.print.id}`)).status).toBe(403);

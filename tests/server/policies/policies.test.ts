@@ -53,4 +53,15 @@ describe('mail and event policies', () => {
     expect(hasEventRole(judge, 8, 'judge')).toBe(false);
     expect(hasEventRole(null, 7, 'judge')).toBe(false);
   });
+
+  it('lets only the show’s organisers print its numbered cards in bulk', () => {
+    const show = { id: 7, status: 'show_day' as const };
+    const as = (role: 'organiser' | 'judge' | 'gate', eventId = 7): Actor => ({ ...owner, memberships: [{ eventId, role }] });
+    expect(canEvent(as('organiser'), 'printCards', show)).toBe(true);
+    expect(canEvent(as('judge'), 'printCards', show)).toBe(false);
+    expect(canEvent(as('gate'), 'printCards', show)).toBe(false);
+    expect(canEvent(as('organiser', 8), 'printCards', show)).toBe(false);
+    expect(canEvent(admin, 'printCards', show)).toBe(false);
+    expect(canEvent(owner, 'printCards', show)).toBe(false);
+  });
 });

@@ -32,7 +32,7 @@ function Finished({ print }: { print: CardPrint }) {
         Download the PDF ({countOf(print.total, 'card')})
       </a>
       <p className="text-sm text-graphite">
-        Made {formatDateTime(print.finishedAt ?? print.startedAt)} for {print.startedBy}. {countOf(print.rendered, 'card')} drawn
+        Started by {print.startedBy}, ready {formatDateTime(print.finishedAt ?? print.startedAt)}. {countOf(print.rendered, 'card')} drawn
         {fromCache ? `, ${fromCache} unchanged since an earlier print` : ''}.
       </p>
     </div>
