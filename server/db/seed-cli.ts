@@ -8,4 +8,7 @@ const { sequelize } = await import('./sequelize');
 await migrate();
 const applied = await seedDemo();
 console.log(applied.length ? `Seeded: ${applied.join(', ')}` : 'The demo scenario is already loaded.');
+// The seeders queue mail and card jobs (for the server's workers): close the queue too, or the process never ends.
+const { stopJobQueue } = await import('../jobs/queue');
+await stopJobQueue();
 await sequelize.close();
