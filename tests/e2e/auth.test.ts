@@ -32,7 +32,7 @@ describe('a newcomer in the browser', () => {
     await page.getByLabel('E-mail').fill(email);
     await page.getByLabel('Password').fill(password);
     await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(`${env.baseUrl}/account`);
+    await page.waitForURL(`${env.baseUrl}/builds`);
     const banner = page.getByRole('region', { name: 'Confirm your e-mail address' });
     await banner.waitFor();
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'verify-banner-phone.png'), fullPage: true });
@@ -43,7 +43,7 @@ describe('a newcomer in the browser', () => {
     await desk.getByLabel('E-mail').fill(admin.email);
     await desk.getByLabel('Password').fill(admin.password);
     await desk.getByRole('button', { name: 'Sign in' }).click();
-    await desk.waitForURL(`${env.baseUrl}/account`);
+    await desk.waitForURL(`${env.baseUrl}/builds`);
     await desk.getByRole('link', { name: 'Caught mail' }).click();
     await desk.getByRole('link', { name: new RegExp(`Confirm your e-mail address for Placard.*${email}`) }).click();
     const link = desk.getByRole('link', { name: /verify-email\?token=/ });
@@ -68,9 +68,9 @@ describe('a newcomer in the browser', () => {
 
     await page.getByLabel('Password').fill(password);
     await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(`${env.baseUrl}/account`);
+    await page.waitForURL(`${env.baseUrl}/builds`);
     await page.getByText('Signed in as Kit Ellery.').waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'account-phone.png'), fullPage: true });
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'signed-in-lands-on-my-builds-phone.png'), fullPage: true });
     expect(await banner.count()).toBe(0);
     await page.close();
   });

@@ -23,7 +23,7 @@ describe('a forgotten password, in demo mode', () => {
     await desk.getByLabel('E-mail').fill(admin.email);
     await desk.getByLabel('Password').fill(admin.password);
     await desk.getByRole('button', { name: 'Sign in' }).click();
-    await desk.waitForURL(`${env.baseUrl}/account`);
+    await desk.waitForURL(`${env.baseUrl}/builds`);
     await desk.getByRole('link', { name: 'Caught mail' }).click();
     await desk.getByRole('link', { name: new RegExp(`Reset your Placard password.*${forgetful.email}`) }).click();
     const link = desk.getByRole('link', { name: /reset-password\?token=/ });
@@ -43,7 +43,7 @@ describe('a forgotten password, in demo mode', () => {
     await phone.getByLabel('E-mail').fill(forgetful.email);
     await phone.getByLabel('Password').fill('a new and longer password');
     await phone.getByRole('button', { name: 'Sign in' }).click();
-    await phone.waitForURL(`${env.baseUrl}/account`);
+    await phone.waitForURL(`${env.baseUrl}/builds`);
     await phone.getByText('Signed in as Forgetful Owner.').waitFor();
   });
 });

@@ -8,7 +8,7 @@ const BASE = 'https://placard.invalid';
  * as a browser would and kept only when it stays on our origin.
  */
 export function safeNext(next: string | null): string {
-  const fallback = '/account';
+  const fallback = '/builds';
   if (!next || !next.startsWith('/') || [...next].some(unsafeChar)) return fallback;
   let url: URL;
   try {
