@@ -2,7 +2,9 @@
 import { config } from '../config';
 import { DEMO_ACCOUNTS } from '../db/demo-accounts';
 import { closeConnections, listen, logger } from '../index';
-import { startMailCatcher } from '../mail/catcher';
+import { startDemoMailCatcher } from '../mail/demo-catcher';
+import { createMailSender } from '../mail/mailer';
+import { jobQueue } from '../jobs/queue';
 import { startMailWorker } from '../jobs/send-mail';
 import { startRefundWorker } from '../jobs/refund-entry';
 import { startOfferSweep } from '../jobs/offer-sweep';
@@ -11,17 +13,14 @@ import { pointPaymentsAtFake } from '../payments/client';
 import { startLocalPayments } from '../payments/fake';
 
 const catcherWanted = config.demoMode && config.smtpUrl === `smtp://127.0.0.1:${config.mailCatcherPort}`;
-const catcher = catcherWanted
-  ? await startMailCatcher(config.mailCatcherPort).catch((err: NodeJS.ErrnoException) => {
-      if (err.code !== 'EADDRINUSE') throw err;
-      logger.warn(`Port ${config.mailCatcherPort} is taken: assuming another Placard mail catcher is running there.`);
-      return undefined;
-    })
-  : undefined;
+const demoCatcher = catcherWanted ? await startDemoMailCatcher(config.mailCatcherPort) : undefined;
+const catcherMoved = demoCatcher && demoCatcher.port !== demoCatcher.wantedPort;
+if (catcherMoved) logger.warn(`Port ${demoCatcher.wantedPort} (MAIL_CATCHER_PORT) is taken by another program: this Placard's mail catcher listens on ${demoCatcher.port} instead, and its mail goes there.`);
+const catcher = demoCatcher?.server;
 
 const server = await listen();
 // The one-machine default: this process also works the job queue (mail now; more jobs join it).
-await startMailWorker();
+await startMailWorker(jobQueue(), createMailSender(demoCatcher?.smtpUrl ?? config.smtpUrl));
 await startRefundWorker();
 const stopOfferSweep = startOfferSweep();
 await startCardWorker();
@@ -52,6 +51,7 @@ const lines = [
         ...DEMO_ACCOUNTS.map((a) => `    ${a.role.padEnd(12)} ${a.email.padEnd(26)} ${a.password}`),
         '',
         `  Mail is caught, not sent: the site admin reads it at ${url}/admin/mail`,
+        ...(catcherMoved ? [`  (port ${demoCatcher.wantedPort} was taken, so the mail catcher listens on ${demoCatcher.port})`] : []),
       ]
     : []),
   '',

@@ -5,7 +5,8 @@ import type { CaughtMailListResponse } from '@shared/schemas/mail';
 import { parseBody, parseParams, parseQuery } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeUser } from '../policies/user';
-import { authorizeMail } from '../policies/mail';
+import { authorizeMail, authorizeUndeliveredMail } from '../policies/mail';
+import { listUndeliveredMail } from '../services/undelivered-mail';
 import { listUsers, updateRoles } from '../services/users';
 import { getCaughtMail, listCaughtMail } from '../services/caught-mail';
 import { presentAdminUser, presentAdminUserDetail } from '../presenters/user';
@@ -62,6 +63,11 @@ adminRouter.get('/admin/mail', async (req, res) => {
   authorizeMail(currentUser(req), 'read', { demoMode: config.demoMode });
   const body: CaughtMailListResponse = { mail: (await listCaughtMail()).map(presentCaughtMailSummary) };
   res.json(body);
+});
+
+adminRouter.get('/admin/undelivered-mail', async (req, res) => {
+  authorizeUndeliveredMail(currentUser(req));
+  res.json({ mail: await listUndeliveredMail() });
 });
 
 adminRouter.get('/admin/mail/:id', async (req, res) => {

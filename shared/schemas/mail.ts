@@ -12,3 +12,15 @@ export type CaughtMailSummary = z.infer<typeof CaughtMailSummarySchema>;
 export type CaughtMail = z.infer<typeof CaughtMailSchema>;
 export const CaughtMailListResponseSchema = z.object({ mail: z.array(CaughtMailSummarySchema) });
 export type CaughtMailListResponse = z.infer<typeof CaughtMailListResponseSchema>;
+
+/** Mail the queue could not hand to the mail server: still being retried, or given up after every retry. */
+export const UndeliveredMailSchema = z.object({
+  id: z.string(),
+  to: z.string(),
+  subject: z.string(),
+  status: z.enum(['retrying', 'gave_up']),
+  attempts: z.number().int(),
+  lastError: z.string().nullable(),
+  queuedAt: z.string(),
+});
+export type UndeliveredMail = z.infer<typeof UndeliveredMailSchema>;

@@ -10,7 +10,9 @@ import { startMailWorker } from '@server/jobs/send-mail';
 import { createMailSender } from '@server/mail/mailer';
 import { enqueueMail, queueMail } from '@server/mail/outbox';
 import { countMail, waitForMail } from '../../support/mailbox';
-import { uniqueEmail } from '../../support/factories';
+import { createUser, uniqueEmail } from '../../support/factories';
+import { apiClient } from '../../support/api-client';
+import { listUndeliveredMail } from '@server/services/undelivered-mail';
 import { SmtpTrap } from '../../support/smtp-trap';
 
 type JobRow = { state: string; retry_count: number; to: string };
@@ -136,5 +138,60 @@ describe('a mail server that is down', () => {
     await enqueueMail(queue, { to, subject: 'Still here', text: 'the queue reconnected' });
     await vi.waitFor(() => expect(trap.to(to)).toHaveLength(1), { timeout: 15_000, interval: 200 });
     logged.mockRestore();
+  });
+});
+
+describe('mail that cannot be sent', () => {
+  const schema = `pgboss_t${randomBytes(4).toString('hex')}`;
+  const trap = new SmtpTrap();
+  const queue = new JobQueue({
+    connectionString: config.databaseUrl,
+    schema,
+    applicationName: `placard-test-${schema}`,
+    supervise: false,
+    pollSeconds: 0.5,
+    mailRetryDelaySeconds: 1,
+    mailRetryLimit: 1,
+  });
+
+  beforeAll(async () => {
+    await trap.start(); // to learn a free port; it stays down
+    await trap.stop();
+  });
+  afterAll(async () => {
+    await queue.stop();
+    await sequelize.query(`DROP SCHEMA IF EXISTS ${schema} CASCADE`);
+  });
+
+  it('is listed for the site admin while it is retried and after the queue gives up, with the mail server’s error', async () => {
+    const to = uniqueEmail('never');
+    await enqueueMail(queue, { to, subject: 'Reset your Placard password', text: 'a link' });
+    await startMailWorker(queue, createMailSender(trap.url));
+    await vi.waitFor(async () => expect((await listUndeliveredMail(schema)).find((m) => m.to === to)?.status).toBe('retrying'), { timeout: 20_000, interval: 200 });
+    const gaveUp = await vi.waitFor(
+      async () => {
+        const found = (await listUndeliveredMail(schema)).find((m) => m.to === to && m.status === 'gave_up');
+        expect(found).toBeDefined();
+        return found!;
+      },
+      { timeout: 30_000, interval: 200 },
+    );
+    expect(gaveUp.subject).toBe('Reset your Placard password');
+    expect(gaveUp.lastError).toMatch(/ECONNREFUSED/);
+    expect((await listUndeliveredMail(schema)).filter((m) => m.to === to)).toHaveLength(1); // listed once, not again as its dead letter
+    expect(trap.received).toHaveLength(0);
+  });
+
+  it('answers the admin only', async () => {
+    const admin = await createUser({ isSiteAdmin: true });
+    const owner = await createUser();
+    const adminClient = await apiClient();
+    await adminClient.signIn(admin.email, admin.password);
+    const ownerClient = await apiClient();
+    await ownerClient.signIn(owner.email, owner.password);
+    const seen = await adminClient.get('/api/admin/undelivered-mail');
+    expect(seen.status).toBe(200);
+    expect(Array.isArray(seen.body.mail)).toBe(true);
+    expect((await ownerClient.get('/api/admin/undelivered-mail')).status).toBe(403);
   });
 });

@@ -5,6 +5,7 @@ import { useMailMessage } from '../api/get-mail';
 import { PageHeader } from '@client/components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/states';
 import { Panel } from '@client/components/ui/panel';
+import { UndeliveredMailList } from './undelivered-mail';
 
 /** Links in caught mail become clickable so a newcomer can follow a reset link. */
 function Linkified({ text }: { text: string }) {
@@ -29,6 +30,7 @@ export function MailListPage() {
   return (
     <div>
       <PageHeader title="Caught mail">Demo mode: every e-mail Placard sends is caught here instead of being delivered.</PageHeader>
+      <UndeliveredMailList />
       {isPending ? <LoadingState label="Loading mail…" /> : null}
       {error ? <ErrorState error={error} onRetry={() => void refetch()} /> : null}
       {data && data.mail.length === 0 ? <EmptyState title="No mail yet">Ask for a password reset and the e-mail shows up here.</EmptyState> : null}
