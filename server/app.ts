@@ -35,6 +35,7 @@ import { entriesRouter } from './routes/entries';
 import { paymentsWebhookRouter } from './routes/payments';
 import { showDayRouter } from './routes/show-day';
 import { judgingRouter } from './routes/judging';
+import { resultsRouter } from './routes/results';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -55,7 +56,7 @@ function apiRouter() {
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
-  api.use(eventsRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter);
+  api.use(eventsRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter, resultsRouter);
   api.use(apiNotFound);
   return api;
 }

@@ -20,8 +20,10 @@ import { AuditLine } from './audit-line';
 import { JudgeAssignment } from './judge-assignment';
 import { Score } from './score';
 import { SheetNote } from './sheet-note';
+import { ManualTieBreak } from './manual-tie-break';
+import { PublishedResults } from './published-results';
 
-for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote]) {
+for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, ManualTieBreak, PublishedResults]) {
   model.initModel(sequelize);
 }
 
@@ -57,5 +59,5 @@ Entry.belongsTo(EventClass, { foreignKey: 'classId', as: 'eventClass' });
 Entry.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });
 AuditLine.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
 
-export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote };
+export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, ManualTieBreak, PublishedResults };
 export { sequelize, User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode };

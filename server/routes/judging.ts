@@ -6,8 +6,9 @@ import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeJudging, type JudgingAction } from '../policies/judging';
 import { actorInEvent } from '../services/event-actor';
 import { findEvent, loadEventDetail } from '../services/events';
-import { computeShowResults } from '../services/results';
-import { presentResultsReview } from '../presenters/results';
+import { computeShowResults, rulesOf } from '../services/results';
+import { listTieBreaks } from '../services/tie-breaks';
+import { presentResultsReview, presentTieBreak } from '../presenters/results';
 import { assignJudge, listJudges } from '../services/judge-assignments';
 import { judgingClosedReason, setJudgingClosed, submitScores } from '../services/scores';
 import { listJudgingShows, loadJudgeView, loadProgress } from '../services/judging';
@@ -81,10 +82,16 @@ for (const [path, closed] of [['close', true], ['reopen', false]] as const) {
 /** The results as they stand, for the organiser's review before publishing: places, totals, how each tie was decided. */
 judgingRouter.get('/events/:id/results/review', async (req, res) => {
   const { id } = parseParams(req, IdParamSchema);
-  await authorized(req, id, 'viewAllScores');
+  const event = await authorized(req, id, 'viewAllScores');
   const detail = await loadEventDetail(id);
   const { results, cars } = await computeShowResults(id);
   const criteria = new Map((detail.criteria ?? []).map((c) => [c.id, c.name]));
   const classNames = new Map((detail.classes ?? []).map((c) => [c.id, c.name]));
-  res.json({ review: presentResultsReview(results, cars, criteria, classNames) });
+  const tieBreaks = await listTieBreaks(id);
+  res.set('Cache-Control', 'private, no-store').json({
+    review: presentResultsReview(results, cars, criteria, classNames),
+    tieBreaks: tieBreaks.map((t) => presentTieBreak(t.row, t.by, cars)),
+    rules: rulesOf(event),
+    published: event.status === 'results_published' || event.status === 'archived',
+  });
 });

@@ -143,5 +143,9 @@ export const AUDIT_ACTION_LABELS: Record<string, string> = {
   moved_up: 'Moved up from the waiting list',
   checked_in: 'Checked in',
   check_in_undone: 'Check-in undone',
+  result_rules_changed: 'Result rules changed',
+  tie_ordered_by_hand: 'Tie ordered by hand',
+  tie_order_removed: 'Hand order of a tie removed',
+  results_published: 'Results published',
 };
 export const auditActionLabel = (action: string) => AUDIT_ACTION_LABELS[action] ?? action.replace(/_/g, ' ');
