@@ -1,6 +1,5 @@
 import { expect } from 'vitest';
 import { EventMembership } from '@server/models/event-membership';
-import { createBuild } from './build-factory';
 import { ownerWithBuild, showWithClasses, signedIn, type Owner } from './event-factory';
 import { SHEET, scoreItem } from './judging-factory';
 
@@ -24,7 +23,7 @@ export async function judgedShow(cars: { hotRods: string[]; customs: string[] },
   }
   for (const action of ['close_registration', 'open_gate', 'start_judging']) expect((await organiser.client.post(`/api/events/${eventId}/lifecycle`, { action })).status).toBe(200);
   const criteria = (await organiser.client.get(`/api/events/${eventId}`)).body.event.criteria as Array<{ id: number; name: string }>;
-  const judges = [];
+  const judges: Array<Awaited<ReturnType<typeof signedIn>>> = [];
   for (const name of ['Ada Marsh', 'Bo Lindqvist']) {
     const judge = await signedIn({ name });
     await EventMembership.create({ eventId, userId: judge.user.id, role: 'judge' });
@@ -40,5 +39,3 @@ export async function judgedShow(cars: { hotRods: string[]; customs: string[] },
   };
   return { ...show, entries, criteria, judges, car, score, publish: () => organiser.client.post(`/api/events/${eventId}/lifecycle`, { action: 'publish_results' }) };
 }
-
-export { createBuild };
