@@ -10,6 +10,7 @@ import { PageHeader } from '@client/components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/states';
 import { useAcceptOffer, useMyEntries, useWithdrawEntry } from '../api/my-entries';
 import { showTime } from './show-dates';
+import { OwnScores } from '@client/features/results/components/own-scores';
 
 const over = (e: MyEntry) => e.event.status === 'results_published' || e.event.status === 'archived';
 
@@ -73,6 +74,7 @@ export function MyEntriesPage() {
                 </Button>
               ) : null}
             </div>
+            {e.event.status === 'results_published' || e.event.status === 'archived' ? (e.status === 'confirmed' || e.status === 'checked_in' ? <OwnScores entryId={e.id} /> : null) : null}
           </li>
         ))}
       </ul>
