@@ -142,6 +142,13 @@ describe('hand tie-breaks', () => {
     expect(notATie.body.error.fields.entryIds).toMatch(/not one of the ties/);
     expect((await show.judges[0]!.client.post(url, { entryIds: [flathead.id, deuce.id], reason: 'Better stance' })).status).toBe(403);
 
+    // An order made and taken back leaves the tie shared again, with an audit line for each.
+    const first = await show.organiser.client.post(url, { entryIds: [deuce.id, flathead.id], reason: 'Better stance' });
+    expect(first.status).toBe(201);
+    expect((await show.judges[0]!.client.delete(`${url}/${first.body.tieBreak.id}`)).status).toBe(403);
+    expect((await show.organiser.client.delete(`${url}/${first.body.tieBreak.id}`)).status).toBe(204);
+    expect((await show.organiser.client.get(reviewUrl)).body.review.ties).toHaveLength(1);
+
     const made = await show.organiser.client.post(url, { entryIds: [flathead.id, deuce.id], reason: 'Cleaner underside on a second look' });
     expect(made.status).toBe(201);
     const after = (await show.organiser.client.get(reviewUrl)).body;
@@ -157,6 +164,7 @@ describe('hand tie-breaks', () => {
     const line = audit.find((a: { action: string }) => a.action === 'tie_ordered_by_hand');
     expect(line).toBeDefined();
     expect(JSON.stringify(line)).toContain('Cleaner underside on a second look');
+    expect(audit.find((a: { action: string }) => a.action === 'tie_order_removed')).toBeDefined();
 
     expect((await show.publish()).status).toBe(200);
     const pub = (await (await apiClient()).get(`/api/public/events/${show.slug}`)).body.event.results.classes[0];
