@@ -1,17 +1,17 @@
 import { Document, Page, Text, View } from '@react-pdf/renderer';
 import type { PrintPaper } from '@shared/schemas/results';
 import type { PrintLine, ResultsSheetContent } from './content';
-import { pageSize, s } from './style';
+import { caps, pageSize, s } from './style';
 
 function Table({ lines }: { lines: PrintLine[] }) {
   return (
     <View>
       <View style={s.head} fixed={false}>
-        <Text style={[s.headText, s.cPlace]}>Place</Text>
-        <Text style={[s.headText, s.cNumber]}>No.</Text>
-        <Text style={[s.headText, s.cTitle]}>Car</Text>
-        <Text style={[s.headText, s.cTotal]}>Total</Text>
-        <Text style={[s.headText, s.cNote]}>Decided by</Text>
+        <Text style={[s.headText, s.cPlace]}>PLACE</Text>
+        <Text style={[s.headText, s.cNumber]}>NO.</Text>
+        <Text style={[s.headText, s.cTitle]}>CAR</Text>
+        <Text style={[s.headText, s.cTotal]}>TOTAL</Text>
+        <Text style={[s.headText, s.cNote]}>DECIDED BY</Text>
       </View>
       {lines.map((l) => (
         <View key={`${l.place}-${l.number}`} style={s.row} wrap={false}>
@@ -33,21 +33,21 @@ export function ResultsSheetDocument({ content, paper }: { content: ResultsSheet
     <Document title={`Results: ${c.show.name}`} author="Placard" creator="Placard">
       <Page size={pageSize(paper)} style={s.page}>
         <Text style={s.brand}>PLACARD · RESULTS</Text>
-        <Text style={s.showName}>{c.show.name}</Text>
+        <Text style={s.showName}>{caps(c.show.name)}</Text>
         <Text style={s.meta}>
           {c.show.when} · {c.show.venue}
         </Text>
         <View style={s.rule} />
         {c.bestOfShow.length ? (
           <View wrap={false}>
-            <Text style={s.h2}>Best of show</Text>
+            <Text style={s.h2}>BEST OF SHOW</Text>
             <Table lines={c.bestOfShow} />
           </View>
         ) : null}
         {c.classes.map((cls) => (
           <View key={cls.name}>
             <Text style={s.h2} minPresenceAhead={60}>
-              {cls.name}
+              {caps(cls.name)}
             </Text>
             {cls.placings.length ? <Table lines={cls.placings} /> : <Text style={s.muted}>{cls.none}</Text>}
           </View>
