@@ -25,6 +25,8 @@ export function ResultsPanel({ show }: { show: EventDetail }) {
   const { review: r, tieBreaks, rules, published } = review.data;
   const classNames = new Map(r.classes.map((c) => [c.classId, c.className]));
   const judging = show.status === 'judging';
+  // Places exist once judges score; before that the panel holds the rules only.
+  const scoring = judging || published;
   return (
     <Panel
       title="Results"
@@ -43,7 +45,7 @@ export function ResultsPanel({ show }: { show: EventDetail }) {
             {r.ties.length === 1 ? 'One tie is' : `${r.ties.length} ties are`} left shared by the rules. Publish them shared, or put the cars in order below with a reason.
           </Notice>
         ) : null}
-        <ReviewTables review={r} />
+        {scoring ? <ReviewTables review={r} /> : <p className="text-graphite">Places appear here once judging starts.</p>}
         {!published && judging
           ? r.ties.map((t) => {
               const label = t.scope === 'best-of-show' ? 'Best of show' : (classNames.get(t.classId ?? 0) ?? 'A class');
