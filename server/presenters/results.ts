@@ -1,6 +1,6 @@
 import type { RankedEntry, ShowResults } from '@shared/calc/results';
 import type { ResultLine, ResultsReview } from '@shared/schemas/judging';
-import { decidedByWords, type Award, type AwardView, type ManualTieBreakView } from '@shared/schemas/results';
+import { decidedByWords, totalShown, type Award, type AwardView, type ManualTieBreakView, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
 import type { ManualTieBreak } from '../models/manual-tie-break';
 
 type Cars = Map<number, { number: number; title: string; className: string }>;
@@ -31,3 +31,14 @@ export const presentTieBreak = (t: ManualTieBreak, by: string, cars: Cars): Manu
   by,
   at: t.createdAt.toISOString(),
 });
+
+/** Once published, the organiser reviews what was published (the snapshot), not a recomputation. */
+export function presentPublishedReview(r: ResultsSnapshot): ResultsReview {
+  const sheets = new Map(r.entries.map((e) => [e.entryId, e.sheetsCounted]));
+  const line = (l: SnapshotLine): ResultLine => ({ entryId: l.entryId, number: l.number, title: l.title, className: l.className, place: l.place, shared: l.shared, total: l.total, totalShown: totalShown(l.total), decidedBy: l.decidedBy, sheets: sheets.get(l.entryId) ?? 0 });
+  return {
+    classes: r.classes.map((c) => ({ classId: c.classId, className: c.className, placings: c.placings.map(line), unscored: r.entries.filter((e) => e.classId === c.classId && e.total === null).length })),
+    bestOfShow: r.bestOfShow.map(line),
+    ties: [],
+  };
+}

@@ -8,7 +8,8 @@ import { actorInEvent } from '../services/event-actor';
 import { findEvent, loadEventDetail } from '../services/events';
 import { computeShowResults, rulesOf } from '../services/results';
 import { listTieBreaks } from '../services/tie-breaks';
-import { presentResultsReview, presentTieBreak } from '../presenters/results';
+import { presentPublishedReview, presentResultsReview, presentTieBreak } from '../presenters/results';
+import { loadPublishedResults } from '../services/published-results';
 import { assignJudge, listJudges } from '../services/judge-assignments';
 import { judgingClosedReason, setJudgingClosed, submitScores } from '../services/scores';
 import { listJudgingShows, loadJudgeView, loadProgress } from '../services/judging';
@@ -79,7 +80,7 @@ for (const [path, closed] of [['close', true], ['reopen', false]] as const) {
   });
 }
 
-/** The results as they stand, for the organiser's review before publishing: places, totals, how each tie was decided. */
+/** The results as they stand, for the organiser's review before publishing (places, totals, how each tie was decided); once published, what was published. */
 judgingRouter.get('/events/:id/results/review', async (req, res) => {
   const { id } = parseParams(req, IdParamSchema);
   const event = await authorized(req, id, 'viewAllScores');
@@ -88,10 +89,11 @@ judgingRouter.get('/events/:id/results/review', async (req, res) => {
   const criteria = new Map((detail.criteria ?? []).map((c) => [c.id, c.name]));
   const classNames = new Map((detail.classes ?? []).map((c) => [c.id, c.name]));
   const tieBreaks = await listTieBreaks(id);
+  const published = await loadPublishedResults(id);
   res.set('Cache-Control', 'private, no-store').json({
-    review: presentResultsReview(results, cars, criteria, classNames),
+    review: published ? presentPublishedReview(published) : presentResultsReview(results, cars, criteria, classNames),
     tieBreaks: tieBreaks.map((t) => presentTieBreak(t.row, t.by, cars)),
-    rules: rulesOf(event),
-    published: event.status === 'results_published' || event.status === 'archived',
+    rules: published ? published.rules : rulesOf(event),
+    published: published !== null,
   });
 });

@@ -173,6 +173,12 @@ describe('hand tie-breaks', () => {
       ['Deuce', 2, false],
       ['Ratrod', 3, false],
     ]);
+    // The organiser's review now shows what was published, with how each place was decided.
+    const published = (await show.organiser.client.get(reviewUrl)).body;
+    expect(published.published).toBe(true);
+    expect(published.review.classes.find((c: { classId: number }) => c.classId === deuce.classId).placings.map((l: { title: string; place: number; decidedBy: string }) => [l.title, l.place, l.decidedBy])).toEqual(
+      hotRods.placings.map((l: { title: string; place: number; decidedBy: string }) => [l.title, l.place, l.decidedBy]),
+    );
   });
 });
 
