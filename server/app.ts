@@ -39,6 +39,7 @@ import { EVENT_LOGO_PATH, eventLogoRouter } from './routes/event-logo';
 import { cardPrintsRouter } from './routes/card-prints';
 import { peoplesChoiceRouter } from './routes/peoples-choice';
 import { votePagesRouter } from './pages/vote-router';
+import { resultsRouter } from './routes/results';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -59,7 +60,7 @@ function apiRouter() {
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
-  api.use(eventsRouter, eventLogoRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter, cardPrintsRouter, peoplesChoiceRouter);
+  api.use(eventsRouter, eventLogoRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter, cardPrintsRouter, peoplesChoiceRouter, resultsRouter);
   api.use(apiNotFound);
   return api;
 }

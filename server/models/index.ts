@@ -21,10 +21,11 @@ import { JudgeAssignment } from './judge-assignment';
 import { Score } from './score';
 import { SheetNote } from './sheet-note';
 import { CardPrint } from './card-print';
-
 import { Vote } from './vote';
+import { ManualTieBreak } from './manual-tie-break';
+import { PublishedResults } from './published-results';
 
-for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote]) {
+for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote, ManualTieBreak, PublishedResults]) {
   model.initModel(sequelize);
 }
 
@@ -64,5 +65,5 @@ CardPrint.belongsTo(EventClass, { foreignKey: 'classId', as: 'eventClass' });
 
 Vote.belongsTo(Entry, { foreignKey: 'entryId', as: 'entry' });
 
-export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote };
+export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote, ManualTieBreak, PublishedResults };
 export { sequelize, User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode };

@@ -14,7 +14,7 @@ const CACHE = 'public, max-age=30, stale-while-revalidate=300';
 eventPagesRouter.get('/e/:slug', async (req, res) => {
   const found = await loadPublicEvent(String(req.params.slug));
   if (!found) return void res.status(404).type('html').set('Cache-Control', 'no-cache').send(EVENT_NOT_FOUND_HTML);
-  res.set('Cache-Control', CACHE).type('html').send(renderPublicEventPage(presentPublicEvent(found.event, found.entries)));
+  res.set('Cache-Control', CACHE).type('html').send(renderPublicEventPage(presentPublicEvent(found.event, found.entries, found.results)));
 });
 
 eventPagesRouter.get('/e/:slug/calendar.ics', async (req, res) => {

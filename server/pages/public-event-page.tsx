@@ -1,6 +1,7 @@
 import { renderToStaticMarkup } from 'react-dom/server';
 import { formatInZone } from '@shared/calc/time-zone';
 import type { PublicEvent } from '@shared/schemas/public-event';
+import { placeWords, type PublicResultLine, type PublicResults } from '@shared/schemas/results';
 import { PAGE_CSS } from './page-styles';
 
 const EVENT_CSS = `.meta{margin:12px 0 0;display:grid;grid-template-columns:max-content 1fr;gap:4px 16px}
@@ -10,13 +11,60 @@ const EVENT_CSS = `.meta{margin:12px 0 0;display:grid;grid-template-columns:max-
 ol.entries{list-style:none;margin:0;padding:0}
 img.logo{display:block;height:auto;max-height:96px;width:auto;max-width:min(240px,60vw);margin:0 0 12px}
 ol.entries li{display:flex;gap:12px;align-items:baseline;border-bottom:1px solid var(--rule);min-height:44px;padding:8px 0}
-ol.entries .n{font-family:Oswald,"Arial Narrow",sans-serif;font-weight:600;font-size:1.3rem;min-width:3ch;text-align:right;font-variant-numeric:tabular-nums}
+ol.entries .n,ol.results .n{font-family:Oswald,"Arial Narrow",sans-serif;font-weight:600;font-size:1.3rem;min-width:3ch;text-align:right;font-variant-numeric:tabular-nums}
 .cal a,.enter a{display:inline-block;min-height:44px;line-height:44px}
-.muted{color:var(--graphite)}`;
+.muted{color:var(--graphite)}
+ol.results{list-style:none;margin:0;padding:0}
+ol.results li{display:grid;grid-template-columns:4.5rem 3ch 1fr auto;gap:12px;align-items:baseline;border-bottom:1px solid var(--rule);min-height:44px;padding:8px 0}
+ol.results .p{font-family:Oswald,"Arial Narrow",sans-serif;font-weight:600;text-transform:uppercase}
+ol.results .t{font-variant-numeric:tabular-nums;text-align:right}
+.best{border:2px solid var(--ink);padding:8px 12px;margin:8px 0 16px}
+.best .p{color:var(--signal)}`;
 
 /** Dates in the show's own time zone, with the zone named so a visitor from elsewhere is not misled. */
 function when(e: PublicEvent, iso: string) {
   return formatInZone(iso, e.timeZone, { weekday: 'short', day: 'numeric', month: 'long', year: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+}
+
+function ResultLines({ lines, showClass }: { lines: PublicResultLine[]; showClass?: boolean }) {
+  return (
+    <ol className="results">
+      {lines.map((x) => (
+        <li key={`${x.place}-${x.number}`}>
+          <span className="p">{placeWords(x.place, x.shared)}</span>
+          <span className="n">{x.number}</span>
+          <span>
+            <a href={x.url}>{x.title}</a>
+            {showClass ? <span className="muted"> · {x.className}</span> : null}
+          </span>
+          <span className="t" aria-label={`total ${x.total}`}>
+            {x.total}
+          </span>
+        </li>
+      ))}
+    </ol>
+  );
+}
+
+function Results({ r }: { r: PublicResults }) {
+  return (
+    <section aria-labelledby="results">
+      <h2 id="results">Results</h2>
+      {r.bestOfShow.length ? (
+        <section className="best" aria-label="Best of show">
+          <h3 className="d">Best of show</h3>
+          <ResultLines lines={r.bestOfShow} showClass />
+        </section>
+      ) : null}
+      {r.classes.map((c) => (
+        <section key={c.name} aria-label={`Results: ${c.name}`}>
+          <h3 className="d">{c.name}</h3>
+          {c.placings.length ? <ResultLines lines={c.placings} /> : <p className="muted">No car of this class was placed.</p>}
+        </section>
+      ))}
+      <p className="muted">Totals are the judges’ weighted scores, rounded to two decimals. A shared place means the scores could not separate the cars.</p>
+    </section>
+  );
 }
 
 function Page({ e }: { e: PublicEvent }) {
@@ -78,6 +126,7 @@ function Page({ e }: { e: PublicEvent }) {
               People’s choice voting is open: open a car’s page below and press its vote button. One vote per visitor.
             </p>
           ) : null}
+          {e.results ? <Results r={e.results} /> : null}
           <section aria-labelledby="how">
             <h2 id="how">How to enter</h2>
             {e.takingEntries ? (

@@ -2,13 +2,14 @@ import { votingOpen } from '@shared/schemas/peoples-choice';
 import { EVENT_STATUS_LABELS, type EventStatus } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
 import type { PublicEvent } from '@shared/schemas/public-event';
+import { PublicResultsSchema, totalShown, type PublicResults, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
 import { config } from '../config';
 import { presentEventLogo } from './event';
 import type { Entry } from '../models/entry';
 import type { Event } from '../models/event';
 
 /** The allow-list of a show's public face: every field named; entries by number and title only. */
-export function presentPublicEvent(event: Event, entries: Entry[], now = new Date()): PublicEvent {
+export function presentPublicEvent(event: Event, entries: Entry[], results: ResultsSnapshot | null = null, now = new Date()): PublicEvent {
   const url = `${config.publicBaseUrl}/e/${event.slug}`;
   return {
     id: event.id,
@@ -40,5 +41,17 @@ export function presentPublicEvent(event: Event, entries: Entry[], now = new Dat
         .filter((e) => e.classId === c.id && e.number !== null && e.build)
         .map((e) => ({ number: e.number!, title: e.build!.title, url: `${config.publicBaseUrl}/c/${e.build!.code}` })),
     })),
+    results: results ? presentPublicResults(results) : null,
   };
+}
+
+const publicLine = (l: SnapshotLine) => ({ place: l.place, shared: l.shared, number: l.number, title: l.title, url: `${config.publicBaseUrl}/c/${l.code}`, className: l.className, total: totalShown(l.total) });
+
+/** The stored results through the public schema: places, numbers, titles, links and rounded totals; nothing else of the snapshot. */
+export function presentPublicResults(r: ResultsSnapshot): PublicResults {
+  return PublicResultsSchema.parse({
+    publishedAt: r.publishedAt,
+    classes: r.classes.map((c) => ({ name: c.className, placings: c.placings.map(publicLine) })),
+    bestOfShow: r.bestOfShow.map(publicLine),
+  });
 }

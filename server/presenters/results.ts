@@ -1,20 +1,11 @@
 import type { RankedEntry, ShowResults } from '@shared/calc/results';
 import type { ResultLine, ResultsReview } from '@shared/schemas/judging';
+import { decidedByWords, totalShown, type Award, type AwardView, type ManualTieBreakView, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
+import type { ManualTieBreak } from '../models/manual-tie-break';
 
 type Cars = Map<number, { number: number; title: string; className: string }>;
 
-const decided = (r: RankedEntry, criteria: Map<number, string>) => {
-  switch (r.decidedBy.kind) {
-    case 'score':
-      return 'score';
-    case 'criterion':
-      return `tie broken on ${criteria.get(r.decidedBy.criterionId) ?? 'a criterion'}`;
-    case 'organiser':
-      return `placed by the organiser: ${r.decidedBy.reason}`;
-    case 'shared':
-      return 'shared place';
-  }
-};
+const decided = (r: RankedEntry, criteria: Map<number, string>) => decidedByWords(r.decidedBy, (id) => criteria.get(id));
 
 /** Totals stay unrounded in the computation; two decimals are for display only. */
 function line(r: RankedEntry, cars: Cars, criteria: Map<number, string>): ResultLine {
@@ -27,6 +18,27 @@ export function presentResultsReview(results: ShowResults, cars: Cars, criteria:
   return {
     classes: results.classes.map((c) => ({ classId: c.classId, className: classNames.get(c.classId) ?? '', placings: c.placings.map((r) => line(r, cars, criteria)), unscored: c.unscored.length })),
     bestOfShow: results.bestOfShow.map((r) => line(r, cars, criteria)),
-    ties: results.ties.map((t) => ({ scope: t.scope, classId: t.classId, place: t.place, numbers: t.entryIds.map(numberOf).sort((a, b) => a - b) })),
+    ties: results.ties.map((t) => ({ scope: t.scope, classId: t.classId, place: t.place, numbers: t.entryIds.map(numberOf).sort((a, b) => a - b), cars: t.entryIds.map((entryId) => ({ entryId, number: numberOf(entryId), title: cars.get(entryId)?.title ?? '' })).sort((a, b) => a.number - b.number) })),
+  };
+}
+
+export const presentAward = (a: Award): AwardView => ({ key: a.key, name: a.name, winners: a.winners.map((w) => ({ number: w.number, title: w.title, shared: w.shared })) });
+
+export const presentTieBreak = (t: ManualTieBreak, by: string, cars: Cars): ManualTieBreakView => ({
+  id: t.id,
+  numbers: t.entryIds.map((id) => cars.get(id)?.number ?? 0),
+  reason: t.reason,
+  by,
+  at: t.createdAt.toISOString(),
+});
+
+/** Once published, the organiser reviews what was published (the snapshot), not a recomputation. */
+export function presentPublishedReview(r: ResultsSnapshot): ResultsReview {
+  const sheets = new Map(r.entries.map((e) => [e.entryId, e.sheetsCounted]));
+  const line = (l: SnapshotLine): ResultLine => ({ entryId: l.entryId, number: l.number, title: l.title, className: l.className, place: l.place, shared: l.shared, total: l.total, totalShown: totalShown(l.total), decidedBy: l.decidedBy, sheets: sheets.get(l.entryId) ?? 0 });
+  return {
+    classes: r.classes.map((c) => ({ classId: c.classId, className: c.className, placings: c.placings.map(line), unscored: r.entries.filter((e) => e.classId === c.classId && e.total === null).length })),
+    bestOfShow: r.bestOfShow.map(line),
+    ties: [],
   };
 }

@@ -6,8 +6,10 @@ import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeJudging, type JudgingAction } from '../policies/judging';
 import { actorInEvent } from '../services/event-actor';
 import { findEvent, loadEventDetail } from '../services/events';
-import { computeShowResults } from '../services/results';
-import { presentResultsReview } from '../presenters/results';
+import { computeShowResults, rulesOf } from '../services/results';
+import { listTieBreaks } from '../services/tie-breaks';
+import { presentPublishedReview, presentResultsReview, presentTieBreak } from '../presenters/results';
+import { loadPublishedResults } from '../services/published-results';
 import { assignJudge, listJudges } from '../services/judge-assignments';
 import { judgingClosedReason, setJudgingClosed, submitScores } from '../services/scores';
 import { listJudgingShows, loadJudgeView, loadProgress } from '../services/judging';
@@ -78,13 +80,20 @@ for (const [path, closed] of [['close', true], ['reopen', false]] as const) {
   });
 }
 
-/** The results as they stand, for the organiser's review before publishing: places, totals, how each tie was decided. */
+/** The results as they stand, for the organiser's review before publishing (places, totals, how each tie was decided); once published, what was published. */
 judgingRouter.get('/events/:id/results/review', async (req, res) => {
   const { id } = parseParams(req, IdParamSchema);
-  await authorized(req, id, 'viewAllScores');
+  const event = await authorized(req, id, 'viewAllScores');
   const detail = await loadEventDetail(id);
   const { results, cars } = await computeShowResults(id);
   const criteria = new Map((detail.criteria ?? []).map((c) => [c.id, c.name]));
   const classNames = new Map((detail.classes ?? []).map((c) => [c.id, c.name]));
-  res.json({ review: presentResultsReview(results, cars, criteria, classNames) });
+  const tieBreaks = await listTieBreaks(id);
+  const published = await loadPublishedResults(id);
+  res.set('Cache-Control', 'private, no-store').json({
+    review: published ? presentPublishedReview(published) : presentResultsReview(results, cars, criteria, classNames),
+    tieBreaks: tieBreaks.map((t) => presentTieBreak(t.row, t.by, cars)),
+    rules: published ? published.rules : rulesOf(event),
+    published: published !== null,
+  });
 });

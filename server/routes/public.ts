@@ -29,7 +29,7 @@ publicApiRouter.get('/public/builds', async (req, res) => {
 publicApiRouter.get('/public/events/:slug', async (req, res) => {
   const found = await loadPublicEvent(String(req.params.slug));
   if (!found) throw new NotFoundError('No public show at that address.');
-  res.set('Cache-Control', 'public, max-age=30').json({ event: presentPublicEvent(found.event, found.entries) });
+  res.set('Cache-Control', 'public, max-age=30').json({ event: presentPublicEvent(found.event, found.entries, found.results) });
 });
 
 /** Shows taking entries now, soonest first: the home page and the entrant's "find a show". */

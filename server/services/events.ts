@@ -10,6 +10,7 @@ import { EventMembership } from '../models/event-membership';
 import { ConflictError, NotFoundError, ValidationError } from '../errors';
 import { writeAudit } from './audit';
 import { offerFreedPlaces } from './waitlist';
+import { publishResults } from './results-publishing';
 
 type Person = { id: number };
 
@@ -88,6 +89,8 @@ export async function takeLifecycleStep(eventId: number, person: Person, action:
     const from = event.status;
     await event.update({ status: step.to }, { transaction });
     await writeAudit({ eventId, actorId: person.id, action, before: { status: from }, after: { status: step.to } }, transaction);
+    // The results are stored and mailed in this transaction: published exactly when the step is taken.
+    if (action === 'publish_results') await publishResults(eventId, person, transaction);
   });
 }
 

@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { JUDGED_ENTRY_STATUSES, sheetState, type SheetState } from '@shared/schemas/judging';
 import { Criterion } from '../models/criterion';
 import { Entry } from '../models/entry';
@@ -12,8 +12,9 @@ import { EventMembership } from '../models/event-membership';
 import { Event } from '../models/event';
 
 /** Every judged car of the show, in number order, with its class. */
-export async function judgedEntries(eventId: number) {
+export async function judgedEntries(eventId: number, transaction?: Transaction) {
   return Entry.findAll({
+    transaction,
     where: { eventId, status: { [Op.in]: [...JUDGED_ENTRY_STATUSES] }, number: { [Op.ne]: null } },
     include: [{ model: EventClass, as: 'eventClass', attributes: ['id', 'name', 'position'] }],
     order: [['number', 'ASC']],

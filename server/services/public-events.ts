@@ -7,19 +7,21 @@ import { Event } from '../models/event';
 import { EventClass } from '../models/event-class';
 import { findEventBySlug } from './events';
 import { listPublicEntries } from './entries';
+import { loadPublishedResults } from './published-results';
 
 /** Shows are public once they leave draft. */
 const PUBLIC_STATUSES = ['registration_open', 'registration_closed', 'show_day', 'judging', 'results_published', 'archived'] as const;
 /** While a show is on, a car's public page names the show it is entered in. */
 const ON_STATUSES = ['registration_open', 'registration_closed', 'show_day', 'judging'] as const;
 
-/** The show and its public entry list, or null for a draft or unknown address. */
+/** The show, its public entry list and its published results, or null for a draft or unknown address. */
 export async function loadPublicEvent(slug: string) {
   const parsed = EventSlugSchema.safeParse(slug);
   if (!parsed.success) return null;
   const event = await findEventBySlug(parsed.data);
   if (!event || !(PUBLIC_STATUSES as readonly string[]).includes(event.status)) return null;
-  return { event, entries: await listPublicEntries(event.id) };
+  const results = event.status === 'results_published' || event.status === 'archived' ? await loadPublishedResults(event.id) : null;
+  return { event, entries: await listPublicEntries(event.id), results };
 }
 
 /**

@@ -14,9 +14,11 @@ export const ShowResultRulesSchema = z.object({
   bestOfShow: z.boolean(),
   bestOfShowKeepsClassPlace: z.boolean(),
   shareCommentsWithEntrants: z.boolean(),
+  /** The paper the results sheet and certificates print on unless a download asks for the other. */
+  printPaper: z.enum(['letter', 'a4']).default('letter'),
 });
 export type ShowResultRules = z.infer<typeof ShowResultRulesSchema>;
-export const DEFAULT_RESULT_RULES: ShowResultRules = { trimFromSheets: null, placesPerClass: 3, bestOfShow: true, bestOfShowKeepsClassPlace: false, shareCommentsWithEntrants: true };
+export const DEFAULT_RESULT_RULES: ShowResultRules = { trimFromSheets: null, placesPerClass: 3, bestOfShow: true, bestOfShowKeepsClassPlace: false, shareCommentsWithEntrants: true, printPaper: 'letter' };
 
 /** The organiser's choice of a judge's classes: every class, or a list. */
 export const JudgeClassesSchema = z
@@ -107,5 +109,5 @@ export type ResultLine = { entryId: number; number: number; title: string; class
 export type ResultsReview = {
   classes: Array<{ classId: number; className: string; placings: ResultLine[]; unscored: number }>;
   bestOfShow: ResultLine[];
-  ties: Array<{ scope: 'class' | 'best-of-show'; classId: number | null; place: number; numbers: number[] }>;
+  ties: Array<{ scope: 'class' | 'best-of-show'; classId: number | null; place: number; numbers: number[]; cars: Array<{ entryId: number; number: number; title: string }> }>;
 };

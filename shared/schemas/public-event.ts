@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { EVENT_STATUSES } from '../constants';
 import { EventLogoOutSchema } from './event';
+import { PublicResultsSchema } from './results';
 
 /** The public face of a show: nothing about any person (no e-mail, phone, plate, VIN, home address). */
 export const PublicEventSchema = z.object({
@@ -34,5 +35,7 @@ export const PublicEventSchema = z.object({
       entries: z.array(z.object({ number: z.number(), title: z.string(), url: z.string() })),
     }),
   ),
+  /** Published results (places, numbers, titles, rounded totals), or null before they are out. */
+  results: PublicResultsSchema.nullable(),
 });
 export type PublicEvent = z.infer<typeof PublicEventSchema>;

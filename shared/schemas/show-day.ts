@@ -147,5 +147,9 @@ export const AUDIT_ACTION_LABELS: Record<string, string> = {
   refund_sent: 'Refund sent by the payment service',
   logo_changed: 'Logo changed',
   logo_removed: 'Logo removed',
+  result_rules_changed: 'Result rules changed',
+  tie_ordered_by_hand: 'Tie ordered by hand',
+  tie_order_removed: 'Hand order of a tie removed',
+  results_published: 'Results published',
 };
 export const auditActionLabel = (action: string) => AUDIT_ACTION_LABELS[action] ?? action.replace(/_/g, ' ');

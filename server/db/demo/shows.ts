@@ -38,5 +38,5 @@ export const DEMO_FINISHED_SHOW = {
   capacity: null,
   entryFee: 1500,
   currency: 'GBP',
-  description: 'A spring show on the flat ground of the old quarry. Finished: the results are being added.',
+  description: 'A spring show on the flat ground of the old quarry. Finished: the results, the best of show and the class places are out.',
 };

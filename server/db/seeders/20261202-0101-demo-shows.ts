@@ -11,6 +11,7 @@ import { config } from '../../config';
 import { wallTimeToInstant } from '@shared/calc/time-zone';
 import { startMailCatcher } from '../../mail/catcher';
 import { seedJudgingShow } from '../demo/judging';
+import { seedFinishedShowJudging } from '../demo/results';
 import { createEvent, takeLifecycleStep } from '../../services/events';
 import { addClass } from '../../services/event-classes';
 import { saveJudgingSheet } from '../../services/judging-sheet';
@@ -106,6 +107,7 @@ async function seedShows() {
   await takeLifecycleStep(done.id, organiser, 'open_gate');
   for (const e of entered) await checkInEntry(done.id, e.number!, gate);
   await takeLifecycleStep(done.id, organiser, 'start_judging');
+  await seedFinishedShowJudging(done.id, organiser);
   await takeLifecycleStep(done.id, organiser, 'publish_results');
   // Move it into the past, keeping the order of its dates.
   await Event.update(

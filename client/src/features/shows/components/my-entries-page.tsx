@@ -11,6 +11,7 @@ import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/stat
 import { useAcceptOffer, useMyEntries, usePayEntry, useWithdrawEntry } from '../api/my-entries';
 import { entryCardUrl } from '../api/entry-card';
 import { showTime } from './show-dates';
+import { OwnScores } from '@client/features/results/components/own-scores';
 
 const over = (e: MyEntry) => e.event.status === 'results_published' || e.event.status === 'archived';
 
@@ -94,6 +95,7 @@ export function MyEntriesPage() {
                 </Button>
               ) : null}
             </div>
+            {e.event.status === 'results_published' || e.event.status === 'archived' ? (e.status === 'confirmed' || e.status === 'checked_in' ? <OwnScores entryId={e.id} /> : null) : null}
           </li>
         ))}
       </ul>

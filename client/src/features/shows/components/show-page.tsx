@@ -18,6 +18,7 @@ import { LogoPanel } from './logo-panel';
 import { showTime } from './show-dates';
 import { JudgingPanel } from '@client/features/judging/components/judging-panel';
 import { PeoplesChoicePanel } from './peoples-choice-panel';
+import { ResultsPanel } from '@client/features/results/components/results-panel';
 
 /** One show, as the person's roles in it allow: organisers run everything; judges read the sheet; the gate checks in. */
 export function ShowPage() {
@@ -47,6 +48,7 @@ export function ShowPage() {
       <LifecyclePanel show={show} />
       {a.manage && ['show_day', 'judging', 'results_published'].includes(show.status) ? <JudgingPanel show={show} /> : null}
       {a.manage && ['show_day', 'judging', 'results_published', 'archived'].includes(show.status) ? <PeoplesChoicePanel show={show} /> : null}
+      {a.manage && show.status !== 'draft' ? <ResultsPanel show={show} /> : null}
       {show.myRoles.includes('gate') || a.checkIn ? <GatePanel show={show} /> : null}
       {a.viewEntries ? <EntriesLinkPanel show={show} /> : null}
       <ClassesPanel show={show} />

@@ -1,0 +1,7 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { OwnResults } from '@shared/schemas/results';
+import { api } from '@client/lib/api';
+
+export const getOwnResults = (entryId: number) => api<{ results: OwnResults }>(`/api/entries/${entryId}/results`);
+export const ownResultsQueryOptions = (entryId: number) => queryOptions({ queryKey: ['entries', entryId, 'results'], queryFn: () => getOwnResults(entryId) });
+export const useOwnResults = (entryId: number) => useQuery(ownResultsQueryOptions(entryId));

@@ -1,0 +1,136 @@
+import { z } from 'zod';
+import { ShowResultRulesSchema } from './judging';
+
+export const PRINT_PAPERS = ['letter', 'a4'] as const;
+export type PrintPaper = (typeof PRINT_PAPERS)[number];
+export const PRINT_PAPER_LABELS: Record<PrintPaper, string> = { letter: 'US Letter', a4: 'A4' };
+export const TIE_BREAK_REASON_MAX = 500;
+
+/** The organiser's result rules, as the settings form sends them (the whole set). */
+export const ResultRulesUpdateSchema = ShowResultRulesSchema.extend({ printPaper: z.enum(PRINT_PAPERS, { error: 'Paper is US Letter or A4.' }) });
+export type ResultRulesUpdateInput = z.infer<typeof ResultRulesUpdateSchema>;
+
+/** Cars the rules left tied, in the organiser's order (best first), with the reason they give. */
+export const TieBreakCreateSchema = z.object({
+  entryIds: z
+    .array(z.number().int().positive(), { error: 'List the tied cars in their new order.' })
+    .min(2, { error: 'Order at least two tied cars.' })
+    .max(50)
+    .refine((ids) => new Set(ids).size === ids.length, { error: 'Each car appears once.' }),
+  reason: z
+    .string({ error: 'Say why the cars are in this order.' })
+    .trim()
+    .min(3, { error: 'Say why the cars are in this order.' })
+    .max(TIE_BREAK_REASON_MAX, { error: `A reason must be at most ${TIE_BREAK_REASON_MAX} characters.` }),
+});
+export type TieBreakCreateInput = z.infer<typeof TieBreakCreateSchema>;
+
+export const PaperQuerySchema = z.object({ paper: z.enum(PRINT_PAPERS, { error: 'Paper is letter or a4.' }).optional() });
+export const CertificateQuerySchema = PaperQuerySchema.extend({ award: z.string().max(80).regex(/^[a-z0-9:-]+$/, { error: 'Unknown award.' }).optional() });
+
+// What is stored when results are published: everything the public page, PDFs, e-mails and owners read.
+const SnapshotLineSchema = z.object({
+  entryId: z.number(),
+  number: z.number(),
+  title: z.string(),
+  code: z.string(),
+  classId: z.number(),
+  className: z.string(),
+  place: z.number(),
+  shared: z.boolean(),
+  total: z.number(),
+  decidedBy: z.string(),
+});
+export type SnapshotLine = z.infer<typeof SnapshotLineSchema>;
+
+/** One award of a show and the car(s) that won it: a shared place or a shared award has several winners. */
+export type Award = {
+  /** Stable key for a download: `class:<classId>:<place>`, `best-of-show`. */
+  key: string;
+  name: string;
+  kind: 'class-place' | 'best-of-show';
+  place: number | null;
+  className: string | null;
+  winners: SnapshotLine[];
+};
+
+
+export const ResultsSnapshotSchema = z.object({
+  publishedAt: z.string(),
+  rules: ShowResultRulesSchema,
+  criteria: z.array(z.object({ id: z.number(), name: z.string(), maxPoints: z.number(), weight: z.number() })),
+  classes: z.array(z.object({ classId: z.number(), className: z.string(), placings: z.array(SnapshotLineSchema) })),
+  bestOfShow: z.array(SnapshotLineSchema),
+  /** Every judged car, placed or not: what its owner is told. */
+  entries: z.array(
+    z.object({
+      entryId: z.number(),
+      number: z.number(),
+      classId: z.number(),
+      place: z.number().nullable(),
+      shared: z.boolean(),
+      total: z.number().nullable(),
+      sheetsCounted: z.number(),
+      criterionMeans: z.record(z.string(), z.number()),
+    }),
+  ),
+});
+export type ResultsSnapshot = z.infer<typeof ResultsSnapshotSchema>;
+
+/** Totals stay unrounded in the computation; every screen, page, PDF and e-mail rounds them the same way. */
+export const totalShown = (total: number) => total.toFixed(2);
+
+// The public face of published results: per class places with number, title, link and rounded total; best of show.
+const PublicResultLineSchema = z.object({ place: z.number(), shared: z.boolean(), number: z.number(), title: z.string(), url: z.string(), className: z.string(), total: z.string() });
+export type PublicResultLine = z.infer<typeof PublicResultLineSchema>;
+export const PublicResultsSchema = z.object({
+  publishedAt: z.string(),
+  classes: z.array(z.object({ name: z.string(), placings: z.array(PublicResultLineSchema) })),
+  bestOfShow: z.array(PublicResultLineSchema),
+});
+export type PublicResults = z.infer<typeof PublicResultsSchema>;
+
+/** A car's own results, for its owner once published: place, total, each criterion, and the comments if the show shares them. */
+export type OwnResults = {
+  entryId: number;
+  number: number;
+  showName: string;
+  className: string;
+  place: number | null;
+  shared: boolean;
+  placesAwarded: number;
+  bestOfShow: boolean;
+  total: string | null;
+  sheetsCounted: number;
+  criteria: Array<{ name: string; maxPoints: number; weight: number; mean: string; judges: number[] }>;
+  comments: Array<{ criterion: string | null; text: string }> | null;
+};
+
+export type ManualTieBreakView = { id: number; numbers: number[]; reason: string; by: string; at: string };
+
+/** 1st, 2nd, 3rd, 4th … 11th, 12th, 13th, 21st: English ordinals for places. */
+export function ordinal(n: number): string {
+  const tens = n % 100;
+  const suffix = tens >= 11 && tens <= 13 ? 'th' : ({ 1: 'st', 2: 'nd', 3: 'rd' } as Record<number, string>)[n % 10] ?? 'th';
+  return `${n}${suffix}`;
+}
+
+/** A place in words, "2nd" or "2nd (shared)". */
+export const placeWords = (place: number, shared: boolean) => `${ordinal(place)}${shared ? ' (shared)' : ''}`;
+
+/** How a place was decided against the car next to it, in words for the organiser and the printed sheet. */
+export function decidedByWords(decidedBy: { kind: 'score' } | { kind: 'criterion'; criterionId: number } | { kind: 'organiser'; reason: string } | { kind: 'shared' }, criterionName: (id: number) => string | undefined): string {
+  switch (decidedBy.kind) {
+    case 'score':
+      return 'score';
+    case 'criterion':
+      return `tie broken on ${criterionName(decidedBy.criterionId) ?? 'a criterion'}`;
+    case 'organiser':
+      return `placed by the organiser: ${decidedBy.reason}`;
+    case 'shared':
+      return 'shared place';
+  }
+}
+
+/** An award as the organiser's screen lists it, to print its certificate. */
+export type AwardView = { key: string; name: string; winners: Array<{ number: number; title: string; shared: boolean }> };
