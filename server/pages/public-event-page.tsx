@@ -56,13 +56,19 @@ function Results({ r }: { r: PublicResults }) {
           <ResultLines lines={r.bestOfShow} showClass />
         </section>
       ) : null}
+      {r.peoplesChoice.length ? (
+        <section aria-label="People’s choice">
+          <h3 className="d">People’s choice</h3>
+          <ResultLines lines={r.peoplesChoice} showClass />
+        </section>
+      ) : null}
       {r.classes.map((c) => (
         <section key={c.name} aria-label={`Results: ${c.name}`}>
           <h3 className="d">{c.name}</h3>
           {c.placings.length ? <ResultLines lines={c.placings} /> : <p className="muted">No car of this class was placed.</p>}
         </section>
       ))}
-      <p className="muted">Totals are the judges’ weighted scores, rounded to two decimals. A shared place means the scores could not separate the cars.</p>
+      <p className="muted">Totals are the judges’ weighted scores, rounded to two decimals. A shared place means the scores could not separate the cars. People’s choice goes to the most visitors’ votes.</p>
     </section>
   );
 }

@@ -53,5 +53,6 @@ export function presentPublicResults(r: ResultsSnapshot): PublicResults {
     publishedAt: r.publishedAt,
     classes: r.classes.map((c) => ({ name: c.className, placings: c.placings.map(publicLine) })),
     bestOfShow: r.bestOfShow.map(publicLine),
+    peoplesChoice: (r.peoplesChoice?.winners ?? []).map((l) => ({ ...publicLine(l), total: l.decidedBy })),
   });
 }

@@ -13,5 +13,6 @@ export function awardsOf(snapshot: ResultsSnapshot): Award[] {
       awards.push({ key: `class:${c.classId}:${place}`, name: `${ordinal(place)} place, ${c.className}`, kind: 'class-place', place, className: c.className, winners: c.placings.filter((p) => p.place === place) });
     }
   }
+  if (snapshot.peoplesChoice) awards.push({ key: 'peoples-choice', name: "People's choice", kind: 'peoples-choice', place: null, className: null, winners: snapshot.peoplesChoice.winners });
   return awards;
 }

@@ -120,5 +120,10 @@ export async function voidVotesOfAddress(eventId: number, addressHash: string, p
 
 /** The people's choice award: the entry ids with the most counted votes, ties shared; none without votes. */
 export async function peoplesChoiceWinners(eventId: number, transaction?: Transaction): Promise<number[]> {
-  return peoplesChoice(await loadTally(eventId, transaction)).entryIds;
+  return (await peoplesChoiceResult(eventId, transaction)).entryIds;
+}
+
+/** The winners and their vote count, as results publishing stores them. */
+export async function peoplesChoiceResult(eventId: number, transaction?: Transaction): Promise<{ entryIds: number[]; votes: number }> {
+  return peoplesChoice(await loadTally(eventId, transaction));
 }

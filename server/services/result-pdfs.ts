@@ -54,12 +54,13 @@ export async function renderCertificates(event: ShowFacts, snapshot: ResultsSnap
   const certificates: CertificateContent[] = awards.flatMap((a) =>
     a.winners.map((w) => ({
       show,
-      award: a.kind === 'best-of-show' ? 'Best of show' : `${placeWords(w.place, false)} place`,
+      award: a.kind === 'best-of-show' ? 'Best of show' : a.kind === 'peoples-choice' ? 'People’s choice' : `${placeWords(w.place, false)} place`,
       className: a.className,
       shared: w.shared,
       number: w.number,
       title: w.title,
-      total: totalShown(w.total),
+      total: a.kind === 'peoples-choice' ? w.decidedBy : totalShown(w.total),
+      totalLabel: a.kind === 'peoples-choice' ? 'VISITORS’ VOTES' : 'JUDGED TOTAL',
     })),
   );
   return pdf(createElement(CertificatesDocument, { certificates, paper, title: `Awards: ${event.name}` }));

@@ -4,6 +4,7 @@ import { decidedByWords, ResultsSnapshotSchema, type ResultsSnapshot, type Snaps
 import { PublishedResults } from '../models/published-results';
 import { computeShowResults, type ResultCar } from './results';
 import { mailResultsToEntrants } from './results-mail';
+import { peoplesChoiceResult } from './peoples-choice';
 
 /** The results as they will be published: places, totals and each car's per-criterion means, with titles as they are now. */
 export async function buildSnapshot(eventId: number, transaction?: Transaction): Promise<ResultsSnapshot> {
@@ -27,6 +28,7 @@ export async function buildSnapshot(eventId: number, transaction?: Transaction):
       return { classId, className: entries.find((e) => e.classId === classId)?.eventClass?.name ?? '', placings: (c?.placings ?? []).map(line) };
     }),
     bestOfShow: results.bestOfShow.map(line),
+    peoplesChoice: await peoplesChoiceOf(eventId, cars, transaction),
     entries: entries.map((e) => {
       const r = classPlace.get(e.id) ?? ranked.get(e.id);
       const inClass = classPlace.get(e.id);
@@ -42,6 +44,16 @@ export async function buildSnapshot(eventId: number, transaction?: Transaction):
       };
     }),
   });
+}
+
+/** The visitors' award, most votes wins and ties share it; the line's total is the number of votes. */
+async function peoplesChoiceOf(eventId: number, cars: Map<number, ResultCar>, transaction?: Transaction): Promise<ResultsSnapshot['peoplesChoice']> {
+  const { entryIds, votes } = await peoplesChoiceResult(eventId, transaction);
+  const winners = entryIds.flatMap((id) => {
+    const car = cars.get(id);
+    return car ? [{ entryId: id, number: car.number, title: car.title, code: car.code, classId: car.classId, className: car.className, place: 1, shared: entryIds.length > 1, total: votes, decidedBy: `${votes} ${votes === 1 ? 'vote' : 'votes'}` }] : [];
+  });
+  return winners.length ? { votes, winners } : null;
 }
 
 /**

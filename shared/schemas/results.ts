@@ -45,10 +45,10 @@ export type SnapshotLine = z.infer<typeof SnapshotLineSchema>;
 
 /** One award of a show and the car(s) that won it: a shared place or a shared award has several winners. */
 export type Award = {
-  /** Stable key for a download: `class:<classId>:<place>`, `best-of-show`. */
+  /** Stable key for a download: `class:<classId>:<place>`, `best-of-show`, `peoples-choice`. */
   key: string;
   name: string;
-  kind: 'class-place' | 'best-of-show';
+  kind: 'class-place' | 'best-of-show' | 'peoples-choice';
   place: number | null;
   className: string | null;
   winners: SnapshotLine[];
@@ -61,6 +61,11 @@ export const ResultsSnapshotSchema = z.object({
   criteria: z.array(z.object({ id: z.number(), name: z.string(), maxPoints: z.number(), weight: z.number() })),
   classes: z.array(z.object({ classId: z.number(), className: z.string(), placings: z.array(SnapshotLineSchema) })),
   bestOfShow: z.array(SnapshotLineSchema),
+  /** The visitors' vote: the car(s) with the most votes, ties shared; null when nobody voted (or before voting existed). */
+  peoplesChoice: z
+    .object({ votes: z.number(), winners: z.array(SnapshotLineSchema) })
+    .nullable()
+    .default(null),
   /** Every judged car, placed or not: what its owner is told. */
   entries: z.array(
     z.object({
@@ -87,6 +92,8 @@ export const PublicResultsSchema = z.object({
   publishedAt: z.string(),
   classes: z.array(z.object({ name: z.string(), placings: z.array(PublicResultLineSchema) })),
   bestOfShow: z.array(PublicResultLineSchema),
+  /** The visitors' award; each line's `total` reads "41 votes". */
+  peoplesChoice: z.array(PublicResultLineSchema),
 });
 export type PublicResults = z.infer<typeof PublicResultsSchema>;
 

@@ -45,7 +45,7 @@ function Certificate({ cert, paper }: { cert: CertificateContent; paper: PrintPa
             <View style={c.bar} />
             <Text style={c.award}>{caps(cert.award)}</Text>
             {cert.className ? <Text style={c.cls}>{caps(cert.className)}</Text> : null}
-            {cert.shared ? <Text style={c.shared}>A shared place: the judges’ scores could not separate the cars.</Text> : null}
+            {cert.shared ? <Text style={c.shared}>{cert.totalLabel === 'JUDGED TOTAL' ? 'A shared place: the judges’ scores could not separate the cars.' : 'Shared: the visitors gave these cars the same number of votes.'}</Text> : null}
             <Text style={c.to}>AWARDED TO</Text>
             <Text style={c.title}>{cert.title}</Text>
             <Text style={c.number}>Number {cert.number}</Text>
@@ -53,7 +53,7 @@ function Certificate({ cert, paper }: { cert: CertificateContent; paper: PrintPa
           <View style={c.bottom}>
             <Text style={c.sign}>For the organisers</Text>
             <View style={c.total}>
-              <Text style={c.totalLabel}>JUDGED TOTAL</Text>
+              <Text style={c.totalLabel}>{cert.totalLabel}</Text>
               <Text style={c.totalFigure}>{cert.total}</Text>
             </View>
           </View>

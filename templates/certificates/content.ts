@@ -20,4 +20,6 @@ export type CertificateContent = {
   number: number;
   title: string;
   total: string;
+  /** What the figure is: the judged total, or the visitors' votes. */
+  totalLabel: string;
 };

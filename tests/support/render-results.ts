@@ -33,6 +33,7 @@ const snapshot: ResultsSnapshot = {
   criteria: [],
   classes,
   bestOfShow: [line('Trucks and wagons', 3, 1, '1957 Wagon', 131.5)],
+  peoplesChoice: { votes: 23, winners: [{ ...line('Post-war to 1972', 2, 1, '1978 Lowrider Sedan', 23), decidedBy: '23 votes' }] },
   entries: [],
 };
 const event = { name: 'Quarry Road Spring Show', venueName: 'Old quarry car park', startsAt: new Date('2026-10-18T09:00:00Z'), timeZone: 'Europe/London' };

@@ -14,6 +14,7 @@ const snapshot: ResultsSnapshot = {
   criteria: [],
   classes: [{ classId: 1, className, placings: [line(1, 1, longest, true), line(2, 1, 'Short', true)] }],
   bestOfShow: [line(3, 1, longest)],
+  peoplesChoice: { votes: 41, winners: [{ ...line(4, 1, longest, true), total: 41, decidedBy: '41 votes' }, { ...line(5, 1, 'Short', true), total: 41, decidedBy: '41 votes' }] },
   entries: [],
 };
 const event = { name: 'An invented show with a rather long name for its certificates', venueName: 'The far end of the old quarry car park', startsAt: new Date('2026-10-18T09:00:00Z'), timeZone: 'Europe/London' };
