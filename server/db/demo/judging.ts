@@ -17,10 +17,10 @@ import { DEMO_SHOW_CLASSES, DEMO_SHOW_SHEET } from './shows';
 
 /** The demo's third invented show: on today, being judged, people's choice voting open. */
 export const DEMO_JUDGING_SHOW = {
-  name: 'Cinder Flats Twilight Show',
-  slug: 'cinder-flats-twilight-show',
-  venueName: 'Cinder Flats old rail yard',
-  venueAddress: 'Depot Street, Cinder Flats',
+  name: 'Harrow Creek Twilight Show',
+  slug: 'harrow-creek-twilight-show',
+  venueName: 'Harrow Creek old rail yard',
+  venueAddress: 'Depot Street, Harrow Creek',
   timeZone: 'America/Denver',
   capacity: null,
   entryFee: 0,
