@@ -1,5 +1,6 @@
 // Starts the mail catcher (demo mode) and the one Express server, then prints where to go.
 import { config } from '../config';
+import { keepRunningThroughDatabaseLoss } from '../process-guard';
 import { DEMO_ACCOUNTS } from '../db/demo-accounts';
 import { closeConnections, listen, logger } from '../index';
 import { startDemoMailCatcher } from '../mail/demo-catcher';
@@ -11,6 +12,8 @@ import { startOfferSweep } from '../jobs/offer-sweep';
 import { startCardWorker } from '../jobs/card-jobs';
 import { pointPaymentsAtFake } from '../payments/client';
 import { startLocalPayments } from '../payments/fake';
+
+keepRunningThroughDatabaseLoss();
 
 const catcherWanted = config.demoMode && config.smtpUrl === `smtp://127.0.0.1:${config.mailCatcherPort}`;
 const demoCatcher = catcherWanted ? await startDemoMailCatcher(config.mailCatcherPort) : undefined;

@@ -37,6 +37,8 @@ export async function forkServer(env: Record<string, string>): Promise<ForkedSer
 }
 
 async function serve(): Promise<void> {
+  // As under npm start (cli/serve.ts).
+  (await import('@server/process-guard')).keepRunningThroughDatabaseLoss();
   await import('@server/models/index');
   const { migrate } = await import('@server/db/migrator');
   await migrate();

@@ -70,6 +70,15 @@ afterAll(async () => {
 
 /** What a visitor, an owner and a load balancer see while the database is away, then after it returns. */
 async function outageAndRecovery(takeDown: () => void, bringBack: () => unknown) {
+  try {
+    await outageThenRecovery(takeDown, bringBack);
+  } catch (err) {
+    // What the server said (and, if it died, why) is the first thing to read when this fails.
+    throw new Error(`${(err as Error).message}\n--- server output (last 4000 characters) ---\n${server.output().slice(-4000)}`, { cause: err });
+  }
+}
+
+async function outageThenRecovery(takeDown: () => void, bringBack: () => unknown) {
   await signIn();
   const page = await call('GET', `/c/${server.code}`);
   expect(page.status).toBe(200);
@@ -79,7 +88,9 @@ async function outageAndRecovery(takeDown: () => void, bringBack: () => unknown)
   takeDown();
 
   // The load balancer is told, the process stays up.
-  await vi.waitFor(async () => expect((await call('GET', '/api/health')).status).toBe(503));
+  // How soon the server notices depends on when its pooled connections see the backends die: patient here,
+  // strict below (each request, once it is known down, answers within a second).
+  await vi.waitFor(async () => expect((await call('GET', '/api/health')).status).toBe(503), { timeout: 15_000, interval: 100 });
   expect(alive()).toBe(true);
   // Each API request fails fast, in the one error shape, as 503 (never a 500, never a hang).
   for (const [method, url, body] of [
