@@ -59,18 +59,15 @@ describe('queueMail() through the job queue (the run-wide worker and catcher)', 
   });
 });
 
-describe('a mail server that is down', () => {
+/** A job queue in a schema of its own, quick to retry, and a mail server (trap) that this describe starts and stops. */
+function queueOfItsOwn(mailRetryLimit: number) {
   const schema = `pgboss_t${randomBytes(4).toString('hex')}`;
-  const trap = new SmtpTrap();
-  const queue = new JobQueue({
-    connectionString: config.databaseUrl,
-    schema,
-    applicationName: `placard-test-${schema}`,
-    supervise: false,
-    pollSeconds: 0.5,
-    mailRetryDelaySeconds: 1,
-    mailRetryLimit: 10,
-  });
+  const queue = new JobQueue({ connectionString: config.databaseUrl, schema, applicationName: `placard-test-${schema}`, supervise: false, pollSeconds: 0.5, mailRetryDelaySeconds: 1, mailRetryLimit });
+  return { schema, trap: new SmtpTrap(), queue };
+}
+
+describe('a mail server that is down', () => {
+  const { schema, trap, queue } = queueOfItsOwn(10);
 
   beforeAll(async () => {
     await trap.start(); // to learn a free port; it goes down before anything is sent
@@ -142,17 +139,7 @@ describe('a mail server that is down', () => {
 });
 
 describe('mail that cannot be sent', () => {
-  const schema = `pgboss_t${randomBytes(4).toString('hex')}`;
-  const trap = new SmtpTrap();
-  const queue = new JobQueue({
-    connectionString: config.databaseUrl,
-    schema,
-    applicationName: `placard-test-${schema}`,
-    supervise: false,
-    pollSeconds: 0.5,
-    mailRetryDelaySeconds: 1,
-    mailRetryLimit: 1,
-  });
+  const { schema, trap, queue } = queueOfItsOwn(1);
 
   beforeAll(async () => {
     await trap.start(); // to learn a free port; it stays down
