@@ -1,13 +1,20 @@
-// npm run bench:uploads — what heavy photo uploads do to a visitor reading a public page.
-// A child process runs the server (tests/support/forked-server.ts) on its own database; this process
+// npm run bench -- upload: what heavy photo uploads do to a visitor reading a public page.
+// A child process runs the server (tests/support/forked-server.ts) on its own database, another runs
+// the uploaders (tests/support/upload-client.ts), so building their bodies never slows this process, which
 // measures the visitor's latency on /c/<code> with autocannon, first on an idle server, then while
 // signed-in uploaders keep sending photos: the attack from the hardening review (12 images just under
 // the per-image pixel limit in one request) and an ordinary busy moment (several owners each sending
 // one 24-megapixel photo per request, as the editor does). Loopback only; figures go in README.md.
+import { fork } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 import sharp from 'sharp';
 import { ensureDatabase } from '@server/db/cluster';
 import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES } from '@shared/schemas/build';
 import { forkServer, type ForkedServer } from '../support/forked-server';
+import type { UploadOrder, UploadTally } from '../support/upload-client';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
 const VISITORS = Number(process.env.BENCH_CONNECTIONS ?? 10);
@@ -38,24 +45,15 @@ async function photo(width: number, height: number): Promise<Buffer> {
   throw new Error(`cannot make a ${width} × ${height} JPEG under ${PHOTO_MAX_BYTES} bytes`);
 }
 
-type Tally = Map<number, number>;
-
-/** Keeps `parallel` uploaders busy until `until` resolves; counts the answers by status. */
-async function uploadLoop(server: ForkedServer, session: Session, files: Buffer[], parallel: number, until: Promise<unknown>): Promise<Tally> {
-  let done = false;
-  void until.then(() => (done = true));
-  const tally: Tally = new Map();
-  const one = async () => {
-    while (!done) {
-      const form = new FormData();
-      files.forEach((f, i) => form.append('photos', new Blob([new Uint8Array(f)], { type: 'image/jpeg' }), `p${i}.jpg`));
-      const res = await fetch(`${server.base}/api/builds/${server.buildId}/photos`, { method: 'POST', headers: { cookie: session.cookie, 'x-csrf-token': session.csrf }, body: form }).catch(() => null);
-      await res?.arrayBuffer();
-      tally.set(res?.status ?? 0, (tally.get(res?.status ?? 0) ?? 0) + 1);
-    }
-  };
-  await Promise.all(Array.from({ length: parallel }, one));
-  return tally;
+/** Runs the uploaders in a child process (tests/support/upload-client.ts) for as long as the visitor is timed. */
+function uploadFor(server: ForkedServer, session: Session, files: string[], parallel: number): Promise<UploadTally> {
+  const child = fork(fileURLToPath(new URL('../support/upload-client.ts', import.meta.url)), [], { execArgv: ['--import', 'tsx'], stdio: ['ignore', 'inherit', 'inherit', 'ipc'] });
+  const order: UploadOrder = { url: `${server.base}/api/builds/${server.buildId}/photos`, ...session, files, parallel, seconds: SECONDS };
+  child.send(order);
+  return new Promise((resolve, reject) => {
+    child.once('message', (tally) => resolve(tally as UploadTally));
+    child.once('exit', (code) => reject(new Error(`the uploaders stopped with ${code}`)));
+  });
 }
 
 async function main() {
@@ -67,13 +65,15 @@ async function main() {
     const page = `${server.base}/c/${server.code}?units=metric`;
     const visit = () => autocannon({ url: page, connections: VISITORS, duration: SECONDS, headers: { 'accept-encoding': 'br' } });
     console.log('Making test photos…');
-    const nearLimit = await photo(9_999, 9_999); // just under the 100-megapixel limit per image
-    const ordinary = await photo(6_000, 4_000); // a 24-megapixel camera frame
+    const folder = mkdtempSync(path.join(tmpdir(), 'placard-bench-'));
+    const save = (name: string, bytes: Buffer) => (writeFileSync(path.join(folder, name), bytes), path.join(folder, name));
+    const nearLimit = save('near-limit.jpg', await photo(9_999, 9_999)); // just under the 100-megapixel limit per image
+    const ordinary = save('ordinary.jpg', await photo(6_000, 4_000)); // a 24-megapixel camera frame
     await visit(); // warm-up (JIT, page cache, connection pools)
 
-    const line = (name: string, r: Awaited<ReturnType<typeof visit>>, tally?: Tally) =>
+    const line = (name: string, r: Awaited<ReturnType<typeof visit>>, tally?: UploadTally) =>
       `${name.padEnd(44)} p50 ${String(r.latency.p50).padStart(5)} ms   p99 ${String(r.latency.p99).padStart(5)} ms   max ${String(r.latency.max).padStart(5)} ms   ${Math.round(r.requests.average)} req/s` +
-      (tally ? `   uploads: ${[...tally].map(([s, n]) => `${n}× ${s || 'failed'}`).join(', ')}` : '');
+      (tally ? `   uploads: ${tally.map(([s, n]) => `${n}× ${s || 'failed'}`).join(', ')}` : '');
 
     console.log(`\nVisitor latency on /c/<code>: ${VISITORS} connections, ${SECONDS} s each, loopback`);
     console.log(line('idle server', await visit()));
@@ -83,9 +83,8 @@ async function main() {
       [`attack: ${PHOTO_MAX_FILES} × 100 MP in one request, 2 at once`, Array(PHOTO_MAX_FILES).fill(nearLimit), 2],
       ['busy: 4 owners, one 24 MP photo per request', [ordinary], 4],
     ] as const) {
-      const run = visit();
-      const tally = await uploadLoop(server, session, [...files], parallel, run);
-      console.log(line(name, await run, tally));
+      const [visited, tally] = await Promise.all([visit(), uploadFor(server, session, [...files], parallel)]);
+      console.log(line(name, visited, tally));
     }
   } finally {
     await server.stop();
