@@ -44,7 +44,7 @@ export default defineConfig(({ mode }) => {
     server: {
       host: '127.0.0.1',
       port: 5173,
-      proxy: { '/api': apiTarget, '/c/': apiTarget, '/e/': apiTarget, '/media': apiTarget },
+      proxy: { '^/$': apiTarget, '^/c(\\?.*)?$': apiTarget, '/api': apiTarget, '/c/': apiTarget, '/e/': apiTarget, '/media': apiTarget },
     },
   };
 });

@@ -1,3 +1,4 @@
+import expressStaticGzip from 'express-static-gzip';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
@@ -27,6 +28,7 @@ import { cardsRouter } from './routes/cards';
 import { buildPreviewRouter } from './routes/build-preview';
 import { publicApiRouter } from './routes/public';
 import { mediaRouter } from './routes/media';
+import { sitePagesRouter } from './pages/site-router';
 import { pagesRouter } from './pages/router';
 import { eventPagesRouter } from './pages/event-router';
 import { eventsRouter } from './routes/events';
@@ -68,7 +70,15 @@ function apiRouter() {
 /** The built client: hashed assets cached for a year, and index.html for every client route. */
 function clientRouter() {
   const client = express.Router();
-  client.use('/assets', express.static(path.join(CLIENT_DIST, 'assets'), { immutable: true, maxAge: '365d', fallthrough: false }));
+  // Hashed file names never change: cached for a year; sent as the .br or .gz written at build time.
+  client.use(
+    '/assets',
+    expressStaticGzip(path.join(CLIENT_DIST, 'assets'), {
+      enableBrotli: true,
+      orderPreference: ['br', 'gz'],
+      serveStatic: { immutable: true, maxAge: '365d', fallthrough: false },
+    }),
+  );
   client.use(express.static(CLIENT_DIST, { index: false, maxAge: '1h' }));
   client.get('/{*splat}', (_req, res) => {
     const index = path.join(CLIENT_DIST, 'index.html');
@@ -98,6 +108,7 @@ export function createApp(): Express {
   app.use('/api', apiRouter());
   app.use(mediaRouter); // uploaded photos under /media
   app.use(votePagesRouter); // people's choice votes from the public build page (form POSTs, no session)
+  app.use(sitePagesRouter); // the home page and the list of published builds, server HTML
   app.use(pagesRouter); // public pages such as /c/<code>, complete HTML without the app bundle
   app.use(eventPagesRouter); // public show pages /e/<slug> and their calendar files
   app.use(clientRouter());

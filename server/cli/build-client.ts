@@ -3,10 +3,11 @@ import { createHash } from 'node:crypto';
 import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { precompressFolder } from './precompress';
 
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const BUILT = path.join(ROOT, 'dist/client/index.html');
-const SOURCES = ['client', 'shared', 'vite.config.ts'];
+const SOURCES = ['client', 'shared', 'vite.config.ts', 'server/cli/precompress.ts'];
 // npm install rewrites the lock file even when nothing changed, so dependencies are compared by content.
 const LOCK = path.join(ROOT, 'package-lock.json');
 const LOCK_STAMP = path.join(ROOT, 'dist/client/.lock-sha256');
@@ -28,5 +29,6 @@ export function buildClientIfStale(): void {
   console.log('Building the client…');
   const r = spawnSync(process.execPath, [path.join(ROOT, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn'], { cwd: ROOT, stdio: 'inherit' });
   if (r.status !== 0) throw new Error('The client build failed.');
+  precompressFolder(path.join(ROOT, 'dist/client'));
   writeFileSync(LOCK_STAMP, lockHash());
 }

@@ -1,5 +1,5 @@
 import { Op, QueryTypes, literal } from 'sequelize';
-import { BuildCodeSchema } from '@shared/schemas/build';
+import { BuildCodeSchema, PUBLIC_BUILDS_PER_PAGE, type PublicBuildSearch } from '@shared/schemas/build';
 import { sequelize } from '../db/sequelize';
 import { Build } from '../models/build';
 import { Photo } from '../models/photo';
@@ -40,11 +40,30 @@ export async function loadPublicBuild(code: string): Promise<Build | null> {
   return build && canViewPublic(build, build.owner) ? build : null;
 }
 
-/** The most recently changed published builds of accounts that are not disabled, for the home page. */
+// Published builds of accounts that are not disabled: what anyone may see.
+const PUBLIC_WHERE = { published: true, ownerId: { [Op.notIn]: literal('(SELECT id FROM users WHERE disabled_at IS NOT NULL)') } };
+
+/** The most recently changed published builds, for the home page. */
 export const listRecentPublicBuilds = (limit: number) =>
-  Build.findAll({
-    where: { published: true, ownerId: { [Op.notIn]: literal('(SELECT id FROM users WHERE disabled_at IS NOT NULL)') } },
+  Build.findAll({ where: PUBLIC_WHERE, include: [{ model: Photo, as: 'photos' }], order: [['updatedAt', 'DESC'], ['id', 'DESC']], limit });
+
+// The search is a substring of the title: % and _ typed by a person are plain characters.
+const likePattern = (q: string) => `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+
+/** One page of published builds whose title holds `q` (any case) and of the chosen style, newest change first, with the total. */
+export async function searchPublicBuilds(search: PublicBuildSearch): Promise<{ builds: Build[]; total: number; pages: number }> {
+  const where = {
+    ...PUBLIC_WHERE,
+    ...(search.q ? { title: { [Op.iLike]: likePattern(search.q) } } : {}),
+    ...(search.style ? { style: search.style } : {}),
+  };
+  const total = await Build.count({ where });
+  const builds = await Build.findAll({
+    where,
     include: [{ model: Photo, as: 'photos' }],
     order: [['updatedAt', 'DESC'], ['id', 'DESC']],
-    limit,
+    limit: PUBLIC_BUILDS_PER_PAGE,
+    offset: (search.page - 1) * PUBLIC_BUILDS_PER_PAGE,
   });
+  return { builds, total, pages: Math.max(1, Math.ceil(total / PUBLIC_BUILDS_PER_PAGE)) };
+}

@@ -210,3 +210,13 @@ export type PublicBuildTileListResponse = { builds: PublicBuildTile[] };
 export const PublicBuildListQuerySchema = z.object({
   limit: z.coerce.number({ error: 'Limit must be a number.' }).int({ error: 'Limit must be a whole number.' }).min(1, { error: 'Limit is at least 1.' }).max(24, { error: 'Limit is at most 24.' }).default(8),
 });
+
+/** The public list of builds (`/c`): search by title, narrow by style, one page at a time. */
+export const PUBLIC_BUILDS_PER_PAGE = 24;
+export const PublicBuildSearchSchema = z.object({
+  q: shortText('Search', 80).default(''),
+  // An empty choice from the form's "any style" means no narrowing.
+  style: z.preprocess((v) => (v === '' ? undefined : v), z.enum(BUILD_STYLES, { error: 'Choose a style from the list.' }).optional()),
+  page: z.coerce.number({ error: 'Page must be a number.' }).int({ error: 'Page must be a whole number.' }).min(1, { error: 'Page is at least 1.' }).max(10_000, { error: 'Page is at most 10000.' }).default(1),
+});
+export type PublicBuildSearch = z.infer<typeof PublicBuildSearchSchema>;

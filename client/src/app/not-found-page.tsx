@@ -6,7 +6,7 @@ export function NotFoundPage() {
       <p className="font-display text-7xl text-signal">404</p>
       <h1 className="mt-2 font-display text-3xl uppercase">Nothing parked here</h1>
       <p className="mt-2 text-graphite">The page you asked for does not exist, or it moved.</p>
-      <Link to="/" className="mt-6 inline-block underline underline-offset-4">Back to the home page</Link>
+      <Link to="/" reloadDocument className="mt-6 inline-block underline underline-offset-4">Back to the home page</Link>
     </div>
   );
 }

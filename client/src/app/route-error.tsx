@@ -13,7 +13,7 @@ export function RouteError() {
         <button type="button" className="underline underline-offset-4" onClick={() => window.location.reload()}>
           Reload
         </button>
-        <Link to="/" className="underline underline-offset-4">Home</Link>
+        <Link to="/" reloadDocument className="underline underline-offset-4">Home</Link>
       </div>
     </div>
   );

@@ -1,7 +1,7 @@
 import { createBrowserRouter } from 'react-router-dom';
 import { AppLayout } from '@client/components/layouts/app-layout';
 import { RequireUser } from '@client/components/layouts/require-user';
-import { HomePage } from '@client/features/home/components/home-page';
+import { ServerPage } from './server-page';
 import { SignInPage } from '@client/features/session/components/sign-in-page';
 import { SignUpPage } from '@client/features/session/components/sign-up-page';
 import { ResetPasswordPage } from '@client/features/account/components/reset-password-page';
@@ -41,7 +41,8 @@ export const router = createBrowserRouter([
     // Shown while a lazy screen's code arrives on a first visit straight to its address.
     hydrateFallbackElement: <LoadingState />,
     children: [
-      { path: '/', element: <HomePage />, errorElement: <RouteError /> },
+      { path: '/', element: <ServerPage />, errorElement: <RouteError /> },
+      { path: '/c', element: <ServerPage />, errorElement: <RouteError /> },
       { path: '/sign-in', element: <SignInPage />, errorElement: <RouteError /> },
       { path: '/sign-up', element: <SignUpPage />, errorElement: <RouteError /> },
       { path: '/reset-password', element: <ResetPasswordPage />, errorElement: <RouteError /> },

@@ -1,4 +1,4 @@
-import { Link, NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { Link, NavLink, Outlet } from 'react-router-dom';
 import { useSession } from '@client/features/session/api/get-session';
 import { useSignOut } from '@client/features/session/api/sign-out';
 import { VerifyEmailBanner } from '@client/features/account/components/verify-email-banner';
@@ -10,7 +10,6 @@ const navClass = ({ isActive }: { isActive: boolean }) =>
 export function AppLayout() {
   const { data: session } = useSession();
   const signOut = useSignOut();
-  const navigate = useNavigate();
   const user = session?.user;
 
   return (
@@ -20,12 +19,15 @@ export function AppLayout() {
       </a>
       <header className="border-b-2 border-ink">
         <div className="mx-auto flex max-w-5xl flex-wrap items-center justify-between gap-x-6 gap-y-1 px-4 py-2">
-          <Link to="/" className="font-display text-2xl font-semibold uppercase tracking-[0.2em]">
+          <Link to="/" reloadDocument className="font-display text-2xl font-semibold uppercase tracking-[0.2em]">
             Placard<span className="text-signal">.</span>
           </Link>
           <nav aria-label="Main" className="flex flex-wrap items-center gap-x-3">
-            <NavLink to="/" end className={navClass}>
+            <NavLink to="/" end reloadDocument className={navClass}>
               Home
+            </NavLink>
+            <NavLink to="/c" reloadDocument className={navClass}>
+              Builds
             </NavLink>
             {user ? (
               <>
@@ -55,7 +57,7 @@ export function AppLayout() {
                   type="button"
                   className="inline-flex min-h-11 items-center px-2 font-display uppercase tracking-wide hover:text-signal"
                   disabled={signOut.isPending}
-                  onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate('/') })}
+                  onClick={() => signOut.mutate(undefined, { onSuccess: () => window.location.assign('/') })}
                 >
                   Sign out
                 </button>

@@ -1,0 +1,28 @@
+import { Router } from 'express';
+import { PublicBuildSearchSchema } from '@shared/schemas/build';
+import { listRecentPublicBuilds, searchPublicBuilds } from '../services/public-builds';
+import { listOpenEvents } from '../services/events';
+import { presentPublicBuildTile } from '../presenters/public-build';
+import { presentEventSummary } from '../presenters/event';
+import { renderBadSearchPage, renderBuildListPage, renderHomePage } from './site-pages';
+import { sendHtml } from './send-html';
+
+/** The home page (/) and every published build (/c): server HTML for anyone, no session, briefly cached. */
+export const sitePagesRouter = Router();
+const CACHE = 'public, max-age=60, stale-while-revalidate=600';
+const RECENT_ON_HOME = 8;
+
+sitePagesRouter.get('/', async (req, res) => {
+  const [recent, shows] = await Promise.all([listRecentPublicBuilds(RECENT_ON_HOME), listOpenEvents()]);
+  sendHtml(req, res, renderHomePage(recent.map(presentPublicBuildTile), shows.map((e) => presentEventSummary(e))), CACHE);
+});
+
+sitePagesRouter.get('/c', async (req, res) => {
+  const parsed = PublicBuildSearchSchema.safeParse(req.query);
+  if (!parsed.success) {
+    res.status(400);
+    return sendHtml(req, res, renderBadSearchPage(parsed.error.issues.map((i) => i.message)), 'no-cache');
+  }
+  const found = await searchPublicBuilds(parsed.data);
+  sendHtml(req, res, renderBuildListPage({ search: parsed.data, builds: found.builds.map(presentPublicBuildTile), total: found.total, pages: found.pages }), CACHE);
+});
