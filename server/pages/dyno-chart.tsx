@@ -1,4 +1,4 @@
-import { convert, formatNumber, type UnitSystem } from '@shared/calc';
+import { convert, formatNumber, preferredUnit, type UnitSystem } from '@shared/calc';
 import type { PublicBuild } from '@shared/schemas/build';
 
 type Run = PublicBuild['dynoRuns'][number];
@@ -10,8 +10,8 @@ const COLOURS = ['#D9481C', '#55524C'];
 
 /** A run's curve in the visitor's units. */
 function inUnits(run: Run, units: UnitSystem) {
-  const pTo = units === 'imperial' ? 'hp' : 'kW';
-  const tTo = units === 'imperial' ? 'lbft' : 'Nm';
+  const pTo = preferredUnit('power', units);
+  const tTo = preferredUnit('torque', units);
   return run.curve.map((p) => ({ rpm: p.rpm, power: convert('power', p.power, run.powerUnit, pTo), torque: convert('torque', p.torque, run.torqueUnit, tTo) }));
 }
 
@@ -43,9 +43,9 @@ export function DynoChart({ runs, units }: { runs: Run[]; units: UnitSystem }) {
   for (let r = rpmMin; r <= rpmMax; r += rpmStep) rpmTicks.push(r);
   const yTicks: number[] = [];
   for (let v = 0; v <= top + 1e-9; v += step) yTicks.push(v);
-  const pu = units === 'imperial' ? 'hp' : 'kW';
-  const tu = units === 'imperial' ? 'lb·ft' : 'N·m';
-  const label = drawn.map((r) => `${r.date}: ${formatNumber(convert('power', r.peakPower, r.powerUnit, units === 'imperial' ? 'hp' : 'kW'))} ${pu} peak`).join('; ');
+  const pu = preferredUnit('power', units);
+  const tu = preferredUnit('torque', units) === 'lbft' ? 'lb·ft' : 'N·m';
+  const label = drawn.map((r) => `${r.date}: ${formatNumber(convert('power', r.peakPower, r.powerUnit, pu))} ${pu} peak`).join('; ');
 
   return (
     <svg viewBox={`0 0 ${W} ${H}`} width={W} height={H} role="img" aria-labelledby="dyno-title" xmlns="http://www.w3.org/2000/svg" fontFamily="system-ui,sans-serif" fontSize="17">

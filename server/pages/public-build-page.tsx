@@ -1,11 +1,11 @@
 import { renderToStaticMarkup } from 'react-dom/server';
-import { ENGINEERING_CAUTION, convert, cornerWeights, formatNumber, formatPercent, formatQuantity, type Unit, type UnitSystem } from '@shared/calc';
+import { convert, cornerWeights, formatNumber, formatPercent, formatQuantity, preferredUnit, type Unit, type UnitSystem } from '@shared/calc';
 import { BUILD_STYLE_LABELS, type Photo, type PublicBuild } from '@shared/schemas/build';
 import type { KeyFigure } from '@shared/schemas/card';
 import { config } from '../config';
 import { computeKeyFigures } from '@shared/build-sheet/key-figures';
 import { headlineOf } from '@shared/build-sheet/headline';
-import { engineLine, sectionViews, type SectionView } from '@shared/build-sheet/spec-lines';
+import { DISPLACEMENT_ROW, engineLine, sectionViews, type SectionView } from '@shared/build-sheet/spec-lines';
 import { DynoChart } from './dyno-chart';
 import { PAGE_CSS } from './page-styles';
 
@@ -15,15 +15,25 @@ import { PAGE_CSS } from './page-styles';
  */
 export type ShowEntrySlot = { showName: string; showUrl?: string; className?: string; entryNumber?: string; votingMayOpen?: boolean; vote?: { eventId: number; url: string } } | null;
 
+/** The units a visitor may pick; the choice is remembered for every build they open (see router.ts). */
+const UNIT_CHOICES: Array<[UnitSystem, string, string]> = [
+  ['metric', 'Metric', 'Millimetres, kilograms, kW, N·m, km/h'],
+  ['uk', 'UK', 'Metric, with power in hp, torque in lb·ft and speed in mph'],
+  ['imperial', 'US', 'Inches, pounds, hp, lb·ft, mph'],
+];
+
 const absolute = (url: string) => (url.startsWith('http') ? url : `${config.publicBaseUrl}${url}`);
 const cover = (b: PublicBuild) => b.photos.find((p) => p.isCover) ?? b.photos[0] ?? null;
 const styleLabel = (s: string | null) => (s && s in BUILD_STYLE_LABELS ? BUILD_STYLE_LABELS[s as keyof typeof BUILD_STYLE_LABELS] : null);
 const mark = (f: { provenance: KeyFigure['provenance'] }) => (f.provenance === 'estimated' ? 'est.' : f.provenance === 'target' ? 'target' : null);
 
+/** A photo in the sizes the browser picks from; a tap opens the largest copy (a plain link: no script needed). */
 function Picture({ photo, sizes, lazy, alt }: { photo: Photo; sizes: string; lazy: boolean; alt: string }) {
   const src = photo.sources.find((s) => s.width >= 960) ?? photo.sources[photo.sources.length - 1];
-  if (!src) return null;
+  const largest = photo.sources[photo.sources.length - 1];
+  if (!src || !largest) return null;
   return (
+    <a className="big" href={largest.jpeg} aria-label={`${alt}: open the large photo`}>
     <picture>
       <source type="image/webp" srcSet={photo.sources.map((s) => `${s.webp} ${s.width}w`).join(', ')} sizes={sizes} />
       <img
@@ -37,6 +47,7 @@ function Picture({ photo, sizes, lazy, alt }: { photo: Photo; sizes: string; laz
         {...(lazy ? { loading: 'lazy' as const } : { fetchPriority: 'high' as const })}
       />
     </picture>
+    </a>
   );
 }
 
@@ -95,43 +106,39 @@ const Row = ({ label, value }: { label: string; value: string }) => (
   </>
 );
 
+/** The chart first, then each run as two wide figures over one line of how it was measured: reads on a phone. */
 function Dyno({ build, units }: { build: PublicBuild; units: UnitSystem }) {
   if (build.dynoRuns.length === 0) return null;
-  const pu = units === 'imperial' ? 'hp' : 'kW';
-  const tu = units === 'imperial' ? 'lbft' : 'Nm';
-  const figure = (kind: 'power' | 'torque', v: number, from: string) => computeUnit(kind, v, from, kind === 'power' ? pu : tu);
+  const figure = (kind: 'power' | 'torque', v: number, from: string) => computeUnit(kind, v, from, preferredUnit(kind, units));
   return (
     <section id="dyno" className="dyno" aria-labelledby="h-dyno">
       <h2 id="h-dyno">Dyno</h2>
       <DynoChart runs={build.dynoRuns} units={units} />
-      <table>
-        <thead>
-          <tr>
-            <th>Date</th>
-            <th>Peak power</th>
-            <th>Peak torque</th>
-            <th>Measured</th>
-          </tr>
-        </thead>
-        <tbody>
-          {build.dynoRuns.map((r, i) => (
-            <tr key={i}>
-              <td>{r.date}</td>
-              <td>
-                {figure('power', r.peakPower, r.powerUnit)} at {formatNumber(r.peakPowerRpm)} rpm
-              </td>
-              <td>
-                {figure('torque', r.peakTorque, r.torqueUnit)} at {formatNumber(r.peakTorqueRpm)} rpm
-              </td>
-              <td>
-                {r.measuredAt === 'wheel' ? 'at the wheels' : 'at the flywheel'}, {r.standard}
-                {r.facility ? `, ${r.facility}` : ''}
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
       <p>Power solid, torque dashed; the latest run in the accent colour.</p>
+      <ol className="runs">
+        {build.dynoRuns.map((r, i) => (
+          <li key={i}>
+            <p className="how">
+              <strong>{r.date}</strong> · {r.measuredAt === 'wheel' ? 'at the wheels' : 'at the flywheel'}, {r.standard}
+              {r.facility ? `, ${r.facility}` : ''}
+            </p>
+            <dl>
+              <div>
+                <dt>Peak power</dt>
+                <dd>
+                  {figure('power', r.peakPower, r.powerUnit)} <small>at {formatNumber(r.peakPowerRpm)} rpm</small>
+                </dd>
+              </div>
+              <div>
+                <dt>Peak torque</dt>
+                <dd>
+                  {figure('torque', r.peakTorque, r.torqueUnit)} <small>at {formatNumber(r.peakTorqueRpm)} rpm</small>
+                </dd>
+              </div>
+            </dl>
+          </li>
+        ))}
+      </ol>
     </section>
   );
 }
@@ -143,7 +150,7 @@ function computeUnit(kind: 'power' | 'torque', value: number, from: string, to: 
 function WeighIns({ build, units }: { build: PublicBuild; units: UnitSystem }) {
   const w = build.weighIns[0];
   if (!w) return null;
-  const to = units === 'imperial' ? 'lb' : 'kg';
+  const to = preferredUnit('mass', units);
   const cw = cornerWeights(w);
   const mass = (v: number) => formatQuantity({ value: convert('mass', v, w.unit, to), unit: to });
   return (
@@ -188,14 +195,21 @@ function Page({ build, units, show, preview }: { build: PublicBuild; units: Unit
   const { heading, kicker } = headlineOf(build);
   const photo = cover(build);
   const figures = computeKeyFigures(build);
-  const views = sectionViews(build.sections, units);
-  const engine = engineLine(build.sections.engine, units);
+  // Each thing once per page: the displacement as a figure (not again in the engine line or the
+  // Engine section), and the engineering caution under the first section that needs it.
+  const sizeShown = figures.some((f) => f.key === 'displacement');
+  const engine = engineLine(build.sections.engine, units, { withDisplacement: !sizeShown });
+  const firstCaution = sectionViews(build.sections, units).findIndex((v) => v.caution);
+  const views = sectionViews(build.sections, units).map((v, i) => ({
+    ...v,
+    rows: v.kind === 'engine' && sizeShown ? v.rows.filter((r) => r.label !== DISPLACEMENT_ROW) : v.rows,
+    caution: i === firstCaution ? v.caution : null,
+  }));
   const byline = [styleLabel(build.style), build.ownerName ? `owned by ${build.ownerName}` : null].filter(Boolean).join(' · ');
   const description = [engine, figures.map((f) => `${f.label} ${f[units].text}${mark(f) ? ` ${mark(f)}` : ''}`).join(', ')].filter(Boolean).join('. ') || `${heading} on Placard.`;
   const og = photo?.sources.find((s) => s.width >= 960) ?? photo?.sources[photo.sources.length - 1];
   const title = kicker ? `${heading}: ${kicker}` : heading;
   const gallery = build.photos.filter((p) => p !== photo);
-  const other: UnitSystem = units === 'metric' ? 'imperial' : 'metric';
   return (
     <html lang="en">
       <head>
@@ -226,12 +240,11 @@ function Page({ build, units, show, preview }: { build: PublicBuild; units: Unit
             PLACARD
           </a>
           <nav className="units" aria-label="Units">
-            <a href={`?units=metric`} {...(units === 'metric' ? { 'aria-current': 'true' as const } : {})}>
-              Metric
-            </a>
-            <a href={`?units=imperial`} {...(units === 'imperial' ? { 'aria-current': 'true' as const } : {})}>
-              Imperial
-            </a>
+            {UNIT_CHOICES.map(([system, name, title]) => (
+              <a key={system} href={`?units=${system}`} title={title} {...(units === system ? { 'aria-current': 'true' as const } : {})}>
+                {name}
+              </a>
+            ))}
           </nav>
         </header>
         {preview ? (
@@ -296,12 +309,9 @@ function Page({ build, units, show, preview }: { build: PublicBuild; units: Unit
           ) : null}
         </main>
         <footer>
+          <p>Figures marked est. are estimates and those marked target are goals; the rest were measured.</p>
           <p>
-            Figures marked est. are estimates and those marked target are goals; the rest were measured. {views.some((v) => v.caution) ? ENGINEERING_CAUTION : ''}
-          </p>
-          <p>
-            Build sheet {build.code} on Placard · updated {build.updatedAt.slice(0, 10)} ·{' '}
-            <a href={`?units=${other}`}>show in {other} units</a>
+            Build sheet {build.code} on Placard · updated {build.updatedAt.slice(0, 10)}
           </p>
         </footer>
       </body>

@@ -4,7 +4,7 @@ import type { PublicEvent } from '@shared/schemas/public-event';
 import { placeWords, type PublicResultLine, type PublicResults } from '@shared/schemas/results';
 import { PAGE_CSS } from './page-styles';
 
-const EVENT_CSS = `.meta{margin:12px 0 0;display:grid;grid-template-columns:max-content 1fr;gap:4px 16px}
+export const EVENT_CSS = `.meta{margin:12px 0 0;display:grid;grid-template-columns:max-content 1fr;gap:4px 16px}
 .meta dt{font-size:.75rem;letter-spacing:.08em;text-transform:uppercase;color:var(--graphite);padding-top:3px}
 .meta dd{margin:0}
 .status{display:inline-block;margin-top:8px;padding:2px 8px;border:1px solid var(--ink);font-size:.85rem;text-transform:uppercase;letter-spacing:.06em}
@@ -19,7 +19,7 @@ ol.results li{display:grid;grid-template-columns:4.5rem 3ch 1fr auto;gap:12px;al
 ol.results .p{font-family:Oswald,"Arial Narrow",sans-serif;font-weight:600;text-transform:uppercase}
 ol.results .t{font-variant-numeric:tabular-nums;text-align:right}
 .best{border:2px solid var(--ink);padding:8px 12px;margin:8px 0 16px}
-.best .p{color:var(--signal)}`;
+.best .p{color:var(--signal-ink)}`;
 
 /** Dates in the show's own time zone, with the zone named so a visitor from elsewhere is not misled. */
 function when(e: PublicEvent, iso: string) {

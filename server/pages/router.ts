@@ -9,6 +9,7 @@ import { showSlotOfBuild } from '../services/public-events';
 import { NOT_FOUND_HTML, renderPublicBuildPage } from './public-build-page';
 import { compressPage, matchesEtag, pickEncoding, publicPageCache, type CachedPage } from './page-cache';
 import { OSWALD_URL } from './page-styles';
+import { config } from '../config';
 import { isDatabaseUnavailable } from '../services/database-unavailable';
 import { votedNumber } from '../services/peoples-choice';
 import { formTokenFor, readVoterCookie, voterOf } from './voter';
@@ -24,13 +25,29 @@ pagesRouter.get(OSWALD_URL, (_req, res) => {
   res.type('font/woff2').set('Cache-Control', 'public, max-age=31536000, immutable').send(OSWALD);
 });
 
-/** Imperial for US English, metric otherwise, unless the visitor picked with ?units=. */
-function unitsFor(req: Request): { units: UnitSystem; chosen: boolean } {
+const UNITS_COOKIE = 'placard-units';
+const isUnitSystem = (v: unknown): v is UnitSystem => v === 'metric' || v === 'imperial' || v === 'uk';
+
+/**
+ * The units of the page: the visitor's pick (?units=, then remembered in a cookie for every build
+ * they open), else their earlier pick (the cookie), else their language: US customary for US English
+ * (and the two other countries that keep it), British usage for British English, metric otherwise.
+ */
+function unitsFor(req: Request, res: Response): { units: UnitSystem; chosen: boolean } {
   const q = req.query.units;
-  if (q === 'metric' || q === 'imperial') return { units: q, chosen: true };
+  if (isUnitSystem(q)) {
+    if (req.cookies?.[UNITS_COOKIE] !== q) res.cookie(UNITS_COOKIE, q, { httpOnly: true, sameSite: 'lax', secure: config.secureCookies, path: '/c', maxAge: 365 * 86400_000 });
+    return { units: q, chosen: true };
+  }
+  const remembered = req.cookies?.[UNITS_COOKIE];
+  if (isUnitSystem(remembered)) return { units: remembered, chosen: false };
   const first = (req.get('accept-language') ?? '').split(',')[0]?.trim().toLowerCase() ?? '';
+  if (first === 'en-gb') return { units: 'uk', chosen: false };
   return { units: first === 'en-us' || first.endsWith('-lr') || first.endsWith('-mm') ? 'imperial' : 'metric', chosen: false };
 }
+
+/** A page whose units come from the address varies by encoding only; otherwise by what decided them too. */
+const varyOf = (decidedByHeaders: boolean) => (decidedByHeaders ? 'Accept-Encoding, Accept-Language, Cookie' : 'Accept-Encoding');
 
 function notFound(res: Response) {
   res.status(404).type('html').set('Cache-Control', 'no-cache').send(NOT_FOUND_HTML);
@@ -41,8 +58,9 @@ function send(req: Request, res: Response, page: CachedPage, varyLanguage: boole
   res.set({
     ETag: page.etag,
     // On show day and in judging the vote button may appear or go at any moment: browsers check first (a cheap 304).
-    'Cache-Control': page.mustRevalidate ? 'public, no-cache' : 'public, max-age=30, stale-while-revalidate=300',
-    Vary: varyLanguage ? 'Accept-Encoding, Accept-Language' : 'Accept-Encoding',
+    // An answer that sets the units cookie is for this browser only.
+    'Cache-Control': `${res.getHeader('set-cookie') ? 'private' : 'public'}, ${page.mustRevalidate ? 'no-cache' : 'max-age=30, stale-while-revalidate=300'}`,
+    Vary: varyOf(varyLanguage),
   });
   if (matchesEtag(req.get('if-none-match'), page.etag)) {
     res.status(304).end();
@@ -70,7 +88,7 @@ async function sendWithVoteBox(req: Request, res: Response, page: CachedPage, vo
   const html = Buffer.from(page.identity.toString('utf8').replace(VOTE_BOX_MARK, renderVoteBox(box)), 'utf8');
   res.set({
     'Cache-Control': 'private, no-store',
-    Vary: varyLanguage ? 'Accept-Encoding, Accept-Language' : 'Accept-Encoding',
+    Vary: varyOf(varyLanguage),
     // Under the app-wide no-referrer a browser sends "Origin: null" with the form; same-origin lets the
     // vote carry its real Origin for the check, and still tells other sites nothing.
     'Referrer-Policy': 'same-origin',
@@ -83,7 +101,7 @@ async function sendWithVoteBox(req: Request, res: Response, page: CachedPage, vo
 
 pagesRouter.get('/c/:code', readVoterCookie, async (req, res) => {
   const code = String(req.params.code).toUpperCase();
-  const { units, chosen } = unitsFor(req);
+  const { units, chosen } = unitsFor(req, res);
   const key = `${code}|${units}`;
   const cached = publicPageCache.get(key);
   const now = Date.now();

@@ -9,7 +9,7 @@ import { PAGE_CSS } from './page-styles';
 // The home page and the list of builds: server HTML like the build page, readable with no script.
 // The app (sign-in, My builds, shows) is a link away; these pages know nothing of the session, so
 // one cached copy serves everyone.
-const SITE_CSS = `main.wide,.bar.wide,footer.wide{max-width:1100px;margin:0 auto}
+export const SITE_CSS = `main.wide,.bar.wide,footer.wide{max-width:1100px;margin:0 auto}
 .bar.wide{flex-wrap:wrap;row-gap:0}
 .bar nav{display:flex;flex-wrap:wrap;gap:0 2px;margin-right:-8px}
 .bar nav a{display:inline-block;min-height:44px;line-height:44px;padding:0 8px;text-decoration:none}

@@ -18,7 +18,7 @@ function both(kind: QuantityKind, value: number, unit: Unit, decimals?: Partial<
     const d = decimals?.[system];
     return { value: v, unit: to as string, text: formatQuantity({ value: v, unit: to }, d === undefined ? {} : { decimals: d }) };
   };
-  return { metric: side('metric'), imperial: side('imperial') };
+  return { metric: side('metric'), imperial: side('imperial'), uk: side('uk') };
 }
 
 type Candidate = { figure: FigureInput; note?: string };
@@ -108,9 +108,11 @@ export function computeKeyFigures(b: PublicBuild): KeyFigure[] {
         ...(power.note?.startsWith('at the wheels') ? { note: 'with power at the wheels' } : {}),
         metric: { value: r.wPerKg, unit: 'kW/t', text: `${formatNumber(r.wPerKg)}\u00a0kW/t` },
         imperial: { value: r.lbPerHp, unit: 'lb/hp', text: `${formatNumber(r.lbPerHp, { decimals: 1 })}\u00a0lb/hp` },
+        // hp per tonne, as British print gives it: 1 hp = 745.699872 W (NIST SP 811, appendix B.9).
+        uk: { value: r.wPerKg / 0.745699872, unit: 'hp/t', text: `${formatNumber(r.wPerKg / 0.745699872, { decimals: 0 })}\u00a0hp/t` },
       });
     }
   }
-  out.push(keyFigure(b, 'displacement', 'volume', displacementCandidate(b.sections), { units: { metric: 'L', imperial: 'in3' }, decimals: { metric: 1, imperial: 0 } }));
+  out.push(keyFigure(b, 'displacement', 'volume', displacementCandidate(b.sections), { units: { metric: 'L', imperial: 'in3', uk: 'L' }, decimals: { metric: 1, imperial: 0, uk: 1 } }));
   return out.filter((f): f is KeyFigure => f !== null);
 }

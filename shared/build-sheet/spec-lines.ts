@@ -89,9 +89,11 @@ function aspirationText(e: EngineSection, units: UnitSystem): string {
 }
 
 /** "5.4 L V8, supercharged (twin-screw), aluminium block": the engine in one line. */
-export function engineLine(e: EngineSection | undefined, units: UnitSystem): string {
+/** The engine in one line ("5.4 L V8, supercharged, aluminium block, E85"); without the displacement where a page shows it as a figure already. */
+export function engineLine(e: EngineSection | undefined, units: UnitSystem, opts: { withDisplacement?: boolean } = {}): string {
   if (!e) return '';
-  return join([join([volume(e.displacement, units), cylindersText(e)], ' '), aspirationText(e, units), e.blockMaterial ? `${e.blockMaterial} block` : '', e.fuel]);
+  const size = opts.withDisplacement === false ? '' : volume(e.displacement, units);
+  return join([join([size, cylindersText(e)], ' '), aspirationText(e, units), e.blockMaterial ? `${e.blockMaterial} block` : '', e.fuel]);
 }
 
 function madeByText(m: { kind: string; name?: string } | undefined): string | null {
@@ -103,10 +105,13 @@ function madeByText(m: { kind: string; name?: string } | undefined): string | nu
   return null;
 }
 
+/** The label of the engine's displacement row, so a page that shows it as a key figure can leave the row out. */
+export const DISPLACEMENT_ROW = 'Displacement';
+
 function engineRows(e: EngineSection, u: UnitSystem): SpecRow[] {
   return [
     ...row('Layout', cap(cylindersText(e))),
-    ...row('Displacement', volume(e.displacement, u)),
+    ...row(DISPLACEMENT_ROW, volume(e.displacement, u)),
     ...row('Bore × stroke', e.bore && e.stroke ? `${length(e.bore, u)} × ${length(e.stroke, u)}` : ''),
     ...row('Block', e.blockMaterial),
     ...row('Heads', e.headMaterial),

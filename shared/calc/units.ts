@@ -51,7 +51,11 @@ export interface Quantity<K extends QuantityKind> {
   unit: UnitOf<K>;
 }
 
-export type UnitSystem = 'metric' | 'imperial';
+/**
+ * Metric, imperial, or as the trade in Britain writes it: metric for size, weight and pressure, but
+ * power in hp, torque in lb·ft and speed in mph (common practice in British motoring print; from memory).
+ */
+export type UnitSystem = 'metric' | 'imperial' | 'uk';
 
 export const PREFERRED_UNITS: { [S in UnitSystem]: { [K in QuantityKind]: UnitOf<K> } } = {
   metric: {
@@ -79,6 +83,19 @@ export const PREFERRED_UNITS: { [S in UnitSystem]: { [K in QuantityKind]: UnitOf
     springRate: 'lb/in',
     density: 'lb/in3',
     massPerLength: 'lb/ft',
+  },
+  uk: {
+    length: 'mm',
+    mass: 'kg',
+    force: 'N',
+    torque: 'lbft',
+    power: 'hp',
+    pressure: 'bar',
+    volume: 'L',
+    speed: 'mph',
+    springRate: 'N/mm',
+    density: 'kg/m3',
+    massPerLength: 'kg/m',
   },
 };
 

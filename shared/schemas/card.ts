@@ -134,6 +134,7 @@ export type KeyFigure = {
   note?: string;
   metric: { value: number; unit: string; text: string };
   imperial: { value: number; unit: string; text: string };
+  uk: { value: number; unit: string; text: string };
 };
 
 /** The JSON twin of the public page: the public build plus the computed headline figures. */

@@ -52,12 +52,50 @@ describe('GET /c/:code, the public build page', () => {
     expect(imperial).toMatch(/3,415\u00a0lb/);
     expect(metric).toMatch(/1,549\u00a0kg/);
     expect(metric).toContain('href="?units=imperial"');
-    expect(imperial).toMatch(/href="\?units=imperial" aria-current="true"/);
-    // Without a choice, US English reads imperial and everyone else metric.
+    expect(imperial).toMatch(/href="\?units=imperial" [^>]*aria-current="true"/);
+    // Without a choice, US English reads US customary, British English as the trade there writes
+    // it (kilograms, but hp and lb·ft), and everyone else metric.
     expect((await page(build.code).set('Accept-Language', 'en-US,en;q=0.8').expect(200)).text).toMatch(/3,415\u00a0lb/);
     const uk = await page(build.code).set('Accept-Language', 'en-GB').expect(200);
     expect(uk.text).toMatch(/1,549\u00a0kg/);
-    expect(uk.headers.vary).toContain('Accept-Language');
+    expect(uk.text).toMatch(/650\u00a0hp est\. at 6,400 rpm/);
+    expect(uk.text).toMatch(/href="\?units=uk" [^>]*aria-current="true"/);
+    expect((await page(build.code).set('Accept-Language', 'de-DE').expect(200)).text).toMatch(/485\u00a0kW est\./);
+    expect(uk.headers.vary).toBe('Accept-Encoding, Accept-Language, Cookie');
+  });
+
+  it('remembers the visitor’s pick of units for every build they open, and says what decided the page', async () => {
+    const { user } = await createUser();
+    const first = await createFullBuild(user.id);
+    const second = await createFullBuild(user.id);
+    const agent = request.agent(testApp());
+    const picked = await agent.get(`/c/${first.code}?units=imperial`).set('Accept-Language', 'de-DE').expect(200);
+    expect(picked.headers['set-cookie']?.[0]).toMatch(/^placard-units=imperial;.*Path=\/c;.*HttpOnly/);
+    // An answer that sets a cookie is never stored by a shared cache; one decided by its address varies only by encoding.
+    expect(picked.headers['cache-control']).toMatch(/^private,/);
+    expect(picked.headers.vary).toBe('Accept-Encoding');
+
+    const next = await agent.get(`/c/${second.code}`).set('Accept-Language', 'de-DE').expect(200);
+    expect(next.text).toMatch(/3,415\u00a0lb/);
+    expect(next.text).toMatch(/href="\?units=imperial" [^>]*aria-current="true"/);
+    expect(next.headers['set-cookie']).toBeUndefined();
+    expect(next.headers['cache-control']).toMatch(/^public,/);
+    expect(next.headers.vary).toBe('Accept-Encoding, Accept-Language, Cookie');
+
+    // A cookie that is not one of the choices is ignored.
+    const odd = await request(testApp()).get(`/c/${second.code}`).set('Cookie', 'placard-units=furlongs').set('Accept-Language', 'de-DE').expect(200);
+    expect(odd.text).toMatch(/1,549\u00a0kg/);
+  });
+
+  it('says each thing once: the displacement, the engine line and the engineering caution', async () => {
+    const { user } = await createUser();
+    const build = await createFullBuild(user.id);
+    const html = (await page(build.code, '?units=metric').expect(200)).text.replace(/<head>[\s\S]*<\/head>/, '');
+    const count = (re: RegExp) => html.match(re)?.length ?? 0;
+    expect(count(/Estimates for presentation, not engineering approval/g)).toBe(1);
+    expect(count(/<dt>Displacement<\/dt>/g)).toBe(1);
+    expect(count(/5\.4\u00a0L/g)).toBe(1);
+    expect(count(/class="eng"/g)).toBe(1);
   });
 
   it('has Open Graph and Twitter card tags with the cover, and sized, lazy, srcset images', async () => {

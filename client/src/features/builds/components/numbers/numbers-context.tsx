@@ -13,7 +13,7 @@ type NumbersState = Numbers & { system: UnitSystem; setSystem: (s: UnitSystem) =
 
 const NumbersContext = createContext<NumbersState | null>(null);
 
-const DEFAULT_CRUISE: Record<UnitSystem, number> = { metric: 100, imperial: 65 };
+const DEFAULT_CRUISE: Record<UnitSystem, number> = { metric: 100, imperial: 65, uk: 65 };
 
 /** Works the numbers out from the forms' live values; only what reads them re-renders as the owner types. */
 export function NumbersProvider({ children }: { children: ReactNode }) {
