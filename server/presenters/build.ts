@@ -1,6 +1,6 @@
 import type { BuildSummary, DynoRun as DynoRunBody, FigureChange as FigureChangeBody, OwnerBuild, WeighIn as WeighInBody } from '@shared/schemas/build';
 import type { SectionKind, Sections } from '@shared/schemas/build-sections';
-import type { FigureInput } from '@shared/schemas/figure';
+import { shownFigures } from '@shared/build-sheet/key-figures';
 import type { Build } from '../models/build';
 import type { DynoRun } from '../models/dyno-run';
 import type { WeighIn } from '../models/weigh-in';
@@ -54,18 +54,18 @@ export function presentOwnerBuild(build: Build, actor: Actor): OwnerBuild {
   };
 }
 
-/** The headline figures: flywheel power when given (what builders quote), else wheel power; weight; displacement. */
+/** The headline figures of a row in My builds, chosen by the one rule the public page and cards use. */
 export function keyFigures(build: Build): BuildSummary['keyFigures'] {
-  const engine = sectionsOf(build).engine;
-  const power: (FigureInput & { at: 'wheel' | 'flywheel' }) | undefined = engine?.flywheelPower
-    ? { ...engine.flywheelPower, at: 'flywheel' }
-    : engine?.wheelPower
-      ? { ...engine.wheelPower, at: 'wheel' }
-      : undefined;
+  const { power, weight, displacement } = shownFigures({
+    sections: sectionsOf(build),
+    weight: build.weight,
+    dynoRuns: (build.dynoRuns ?? []).map((r) => r.data),
+    weighIns: (build.weighIns ?? []).map((w) => w.data),
+  });
   return {
-    ...(power ? { power } : {}),
-    ...(build.weight ? { weight: build.weight } : {}),
-    ...(engine?.displacement ? { displacement: engine.displacement } : {}),
+    ...(power ? { power: { ...power.figure, at: power.at ?? 'flywheel' } } : {}),
+    ...(weight ? { weight: weight.figure } : {}),
+    ...(displacement ? { displacement: displacement.figure } : {}),
   };
 }
 

@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import type { DynoRunCreateInput, WeighInCreateInput } from '@shared/schemas/build';
 import type { EngineSection } from '@shared/schemas/build-sections';
-import { cornerWeights } from '@shared/calc';
+import { weighedTotal } from '@shared/build-sheet/key-figures';
 import { BuildSection } from '../models/build-section';
 import { DynoRun } from '../models/dyno-run';
 import { WeighIn } from '../models/weigh-in';
@@ -88,6 +88,6 @@ export async function applyWeighIn(build: Build, id: number, outer?: Transaction
     // The locked row carries the weight as it is now, so the figure history records the right "before".
     const locked = await lockBuild(build.id, transaction);
     const w = (await findRecord(WeighIn, build, id, transaction)).data;
-    await updateOverview(locked, { weight: { value: cornerWeights(w).total, unit: w.unit, provenance: 'measured', measuredOn: w.date } }, transaction);
+    await updateOverview(locked, { weight: { value: weighedTotal(w), unit: w.unit, provenance: 'measured', measuredOn: w.date } }, transaction);
   });
 }

@@ -65,8 +65,9 @@ export async function loadFullBuildOrThrow(id: number, transaction?: Transaction
 export const listBuildsOf = (owner: User) =>
   Build.findAll({
     where: { ownerId: owner.id },
-    include: [{ model: BuildSection, as: 'sections' }, { model: Photo, as: 'photos' }],
-    order: [['updatedAt', 'DESC'], ['id', 'DESC']],
+    // Dyno runs and weigh-ins too: a measured figure beats the owner's estimate on every screen.
+    include: [{ model: BuildSection, as: 'sections' }, { model: Photo, as: 'photos' }, { model: DynoRun, as: 'dynoRuns' }, { model: WeighIn, as: 'weighIns' }],
+    order: [['updatedAt', 'DESC'], ['id', 'DESC'], [{ model: DynoRun, as: 'dynoRuns' }, 'id', 'DESC'], [{ model: WeighIn, as: 'weighIns' }, 'id', 'DESC']],
   });
 
 export async function createBuild(owner: User, input: BuildCreateInput): Promise<Build> {
