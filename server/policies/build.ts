@@ -31,6 +31,7 @@ export function authorizeBuild(actor: Actor | null | undefined, action: BuildAct
 }
 
 export const buildAbilities = (actor: Actor | null | undefined, build: BuildRecord) => ({
+  viewPrivate: can(actor, 'viewPrivate', build),
   edit: can(actor, 'edit', build),
   delete: can(actor, 'delete', build),
   publish: can(actor, 'publish', build),

@@ -1,12 +1,12 @@
 import type { BuildSummary, DynoRun as DynoRunBody, FigureChange as FigureChangeBody, OwnerBuild, WeighIn as WeighInBody } from '@shared/schemas/build';
 import type { SectionKind, Sections } from '@shared/schemas/build-sections';
-import type { FigureInput } from '@shared/schemas/figure';
+import { shownFigures } from '@shared/build-sheet/key-figures';
 import type { Build } from '../models/build';
 import type { DynoRun } from '../models/dyno-run';
 import type { WeighIn } from '../models/weigh-in';
 import type { FigureChange } from '../models/figure-change';
 import type { Actor } from '../policies/actor';
-import { buildAbilities } from '../policies/build';
+import { buildAbilities, can } from '../policies/build';
 import { config } from '../config';
 import { presentPhoto } from './photo';
 
@@ -20,8 +20,14 @@ export const presentDynoRun = (run: DynoRun): DynoRunBody => ({ ...run.data, id:
 export const presentWeighIn = (w: WeighIn): WeighInBody => ({ ...w.data, id: w.id, createdAt: w.createdAt.toISOString() });
 export const presentFigureChange = (c: FigureChange): FigureChangeBody => ({ id: c.id, path: c.path, before: c.before, after: c.after, changedAt: c.createdAt.toISOString() });
 
-/** The owner's whole build for the editor, private fields included (the owner's own data). */
+/**
+ * The whole build for the editor. The private fields (VIN, plate, phone, address) go only to
+ * someone the policy lets see them: the owner now, a show's organisers later.
+ */
 export function presentOwnerBuild(build: Build, actor: Actor): OwnerBuild {
+  const privateFields = can(actor, 'viewPrivate', build)
+    ? { private: { vin: build.vin ?? '', plate: build.plate ?? '', ownerPhone: build.ownerPhone ?? '', ownerAddress: build.ownerAddress ?? '' } }
+    : {};
   return {
     id: build.id,
     code: build.code,
@@ -34,7 +40,7 @@ export function presentOwnerBuild(build: Build, actor: Actor): OwnerBuild {
       story: build.story,
       weight: build.weight as OwnerBuild['overview']['weight'],
     },
-    private: { vin: build.vin ?? '', plate: build.plate ?? '', ownerPhone: build.ownerPhone ?? '', ownerAddress: build.ownerAddress ?? '' },
+    ...privateFields,
     sections: sectionsOf(build),
     sectionsUpdatedAt: Object.fromEntries((build.sections ?? []).map((s) => [s.kind, s.updatedAt.toISOString()])) as Partial<Record<SectionKind, string>>,
     credits: build.credits,
@@ -48,18 +54,18 @@ export function presentOwnerBuild(build: Build, actor: Actor): OwnerBuild {
   };
 }
 
-/** The headline figures: flywheel power when given (what builders quote), else wheel power; weight; displacement. */
+/** The headline figures of a row in My builds, chosen by the one rule the public page and cards use. */
 export function keyFigures(build: Build): BuildSummary['keyFigures'] {
-  const engine = sectionsOf(build).engine;
-  const power: (FigureInput & { at: 'wheel' | 'flywheel' }) | undefined = engine?.flywheelPower
-    ? { ...engine.flywheelPower, at: 'flywheel' }
-    : engine?.wheelPower
-      ? { ...engine.wheelPower, at: 'wheel' }
-      : undefined;
+  const { power, weight, displacement } = shownFigures({
+    sections: sectionsOf(build),
+    weight: build.weight,
+    dynoRuns: (build.dynoRuns ?? []).map((r) => r.data),
+    weighIns: (build.weighIns ?? []).map((w) => w.data),
+  });
   return {
-    ...(power ? { power } : {}),
-    ...(build.weight ? { weight: build.weight } : {}),
-    ...(engine?.displacement ? { displacement: engine.displacement } : {}),
+    ...(power ? { power: { ...power.figure, at: power.at ?? 'flywheel' } } : {}),
+    ...(weight ? { weight: weight.figure } : {}),
+    ...(displacement ? { displacement: displacement.figure } : {}),
   };
 }
 

@@ -1,15 +1,17 @@
 import type { PublicBuild, PublicBuildTile } from '@shared/schemas/build';
 import type { PublicBuildResponse } from '@shared/schemas/card';
+import { publicSections, publicWeight } from '@shared/schemas/public-build-sections';
 import { computeKeyFigures } from '@shared/build-sheet/key-figures';
 import { engineLine } from '@shared/build-sheet/spec-lines';
 import type { Build } from '../models/build';
 import { presentPhoto } from './photo';
-import { publicBuildUrl, sectionsOf } from './build';
+import { publicBuildUrl } from './build';
 
 /**
  * The public allow-list of a build: every field is named here, so a column added to the model
  * later stays private until someone adds it on purpose. The owner appears by display name only
- * (`loadFullBuild` reads no other field of the owner).
+ * (`loadFullBuild` reads no other field of the owner). The stored JSON (sections, weight) goes
+ * through the public schemas, which keep only the keys they name.
  */
 export function presentPublicBuild(build: Build): PublicBuild {
   return {
@@ -21,8 +23,8 @@ export function presentPublicBuild(build: Build): PublicBuild {
     style: build.style,
     story: build.story,
     ownerName: build.owner?.name ?? '',
-    weight: build.weight,
-    sections: sectionsOf(build),
+    weight: publicWeight(build.weight),
+    sections: publicSections(build.sections ?? []),
     credits: (build.credits ?? []).map((c) => ({ role: c.role, name: c.name })),
     photos: (build.photos ?? []).map(presentPhoto),
     dynoRuns: (build.dynoRuns ?? []).map(({ data: d }) => ({

@@ -2,6 +2,7 @@ import { Op, type Transaction } from 'sequelize';
 import type { BuildCreateInput, BuildPrivate, BuildUpdateInput, Credit } from '@shared/schemas/build';
 import { SECTION_SCHEMAS, type SectionKind } from '@shared/schemas/build-sections';
 import { sequelize } from '../db/sequelize';
+import { withTransaction } from '../db/transaction';
 import { Build } from '../models/build';
 import { BuildSection } from '../models/build-section';
 import { Photo } from '../models/photo';
@@ -37,6 +38,13 @@ export async function findBuild(id: number, transaction?: Transaction): Promise<
   return build;
 }
 
+/** The build row locked for this transaction: its changes (records, sections, photos) run one at a time. */
+export async function lockBuild(id: number, transaction: Transaction): Promise<Build> {
+  const build = await Build.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+  if (!build) throw new NotFoundError('No such build.');
+  return build;
+}
+
 /** The build with its owner's name, sections, photos, dyno runs, weigh-ins and figure history. */
 export async function loadFullBuild(where: { id: number } | { code: string }, transaction?: Transaction): Promise<Build | null> {
   const build = await Build.findOne({ where, include: FULL_BUILD_INCLUDE, transaction });
@@ -57,8 +65,9 @@ export async function loadFullBuildOrThrow(id: number, transaction?: Transaction
 export const listBuildsOf = (owner: User) =>
   Build.findAll({
     where: { ownerId: owner.id },
-    include: [{ model: BuildSection, as: 'sections' }, { model: Photo, as: 'photos' }],
-    order: [['updatedAt', 'DESC'], ['id', 'DESC']],
+    // Dyno runs and weigh-ins too: a measured figure beats the owner's estimate on every screen.
+    include: [{ model: BuildSection, as: 'sections' }, { model: Photo, as: 'photos' }, { model: DynoRun, as: 'dynoRuns' }, { model: WeighIn, as: 'weighIns' }],
+    order: [['updatedAt', 'DESC'], ['id', 'DESC'], [{ model: DynoRun, as: 'dynoRuns' }, 'id', 'DESC'], [{ model: WeighIn, as: 'weighIns' }, 'id', 'DESC']],
   });
 
 export async function createBuild(owner: User, input: BuildCreateInput): Promise<Build> {
@@ -83,8 +92,8 @@ export async function createBuild(owner: User, input: BuildCreateInput): Promise
   });
 }
 
-export async function updateOverview(build: Build, input: BuildUpdateInput): Promise<void> {
-  await sequelize.transaction(async (transaction) => {
+export async function updateOverview(build: Build, input: BuildUpdateInput, outer?: Transaction): Promise<void> {
+  await withTransaction(outer, async (transaction) => {
     if (input.weight) await checkEvidencePhotos(build.id, '', { weight: input.weight }, transaction);
     if (input.weight !== undefined) await recordFigureChanges(build.id, 'overview', { weight: build.weight }, { weight: input.weight }, transaction);
     await build.update(
@@ -114,9 +123,9 @@ async function checkEvidencePhotos(buildId: number, prefix: string, data: unknow
 }
 
 /** Saves one section whole (replacing its previous content), keeping the history of its figures. */
-export async function saveSection(build: Build, kind: SectionKind, data: unknown): Promise<void> {
+export async function saveSection(build: Build, kind: SectionKind, data: unknown, outer?: Transaction): Promise<void> {
   const parsed = SECTION_SCHEMAS[kind].parse(data) as Record<string, unknown>;
-  await sequelize.transaction(async (transaction) => {
+  await withTransaction(outer, async (transaction) => {
     await checkEvidencePhotos(build.id, '', parsed, transaction);
     const existing = await BuildSection.findOne({ where: { buildId: build.id, kind }, lock: transaction.LOCK.UPDATE, transaction });
     await recordFigureChanges(build.id, kind, existing?.data ?? {}, parsed, transaction);
@@ -126,16 +135,16 @@ export async function saveSection(build: Build, kind: SectionKind, data: unknown
   });
 }
 
-export async function savePrivate(build: Build, input: BuildPrivate): Promise<void> {
-  await build.update({ vin: input.vin || null, plate: input.plate || null, ownerPhone: input.ownerPhone || null, ownerAddress: input.ownerAddress || null });
+export async function savePrivate(build: Build, input: BuildPrivate, transaction?: Transaction): Promise<void> {
+  await build.update({ vin: input.vin || null, plate: input.plate || null, ownerPhone: input.ownerPhone || null, ownerAddress: input.ownerAddress || null }, { transaction });
 }
 
-export async function saveCredits(build: Build, credits: Credit[]): Promise<void> {
-  await build.update({ credits });
+export async function saveCredits(build: Build, credits: Credit[], transaction?: Transaction): Promise<void> {
+  await build.update({ credits }, { transaction });
 }
 
-export async function setPublished(build: Build, published: boolean): Promise<void> {
-  await build.update({ published });
+export async function setPublished(build: Build, published: boolean, transaction?: Transaction): Promise<void> {
+  await build.update({ published }, { transaction });
 }
 
 /** Deletes the build and everything under it; its code is retired so an old card never opens another car. */

@@ -1,7 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
 import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES } from '@shared/schemas/build';
 import { sequelize } from '../db/sequelize';
-import { Build } from '../models/build';
 import { Photo } from '../models/photo';
 import { newPhotoStorageKey, PHOTO_STORAGE_KEY, photoVariantKey } from '../storage/keys';
 import { storage } from '../storage/index';
@@ -9,7 +8,7 @@ import { logger } from '../logger';
 import { AppError, NotFoundError, ValidationError } from '../errors';
 import { imagePixels, processImage, ImageRejectedError, type ProcessedImage } from './image-processing';
 import { chargePersonPixels, checkRequestPixels, imageSlots } from './image-budget';
-import { touchBuild } from './builds';
+import { lockBuild, touchBuild } from './builds';
 
 export type PhotoFile = { buffer: Buffer; originalName: string };
 
@@ -26,12 +25,6 @@ export const listPhotos = (buildId: number, transaction?: Transaction) =>
   Photo.findAll({ where: { buildId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
 
 /** Locks the build row: uploads, reorders, cover changes and deletes of one build run one at a time. */
-async function lockBuild(buildId: number, transaction: Transaction): Promise<Build> {
-  const build = await Build.findByPk(buildId, { transaction, lock: transaction.LOCK.UPDATE });
-  if (!build) throw new NotFoundError('No such build.');
-  return build;
-}
-
 async function findPhotoOf(buildId: number, photoId: number, transaction: Transaction): Promise<Photo> {
   const photo = await Photo.findOne({ where: { id: photoId, buildId }, transaction });
   if (!photo) throw new NotFoundError('No such photo in this build.');

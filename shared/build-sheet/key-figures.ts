@@ -1,7 +1,7 @@
 // Which figure a build shows, and how firm it is: the one rule every screen and card reads
 // (My builds, the editor, the public page, its JSON twin and the cards), so none can disagree.
-import { convert, cornerWeights, displacement, formatNumber, formatQuantity, parseUnit, powerToWeight, preferredUnit, type QuantityKind, type Unit, type UnitSystem } from '../calc';
-import type { PublicBuild } from '../schemas/build';
+import { CalcInputError, convert, cornerWeights, displacement, formatNumber, formatQuantity, parseUnit, powerToWeight, preferredUnit, type QuantityKind, type Unit, type UnitSystem } from '../calc';
+import type { DynoRunCreateInput, PublicBuild, WeighInCreateInput } from '../schemas/build';
 import type { Sections } from '../schemas/build-sections';
 import type { FigureInput } from '../schemas/figure';
 import { CARD_FIGURE_LABELS, type CardFigureKey, type KeyFigure } from '../schemas/card';
@@ -21,34 +21,51 @@ function both(kind: QuantityKind, value: number, unit: Unit, decimals?: Partial<
   return { metric: side('metric'), imperial: side('imperial'), uk: side('uk') };
 }
 
-type Candidate = { figure: FigureInput; note?: string };
+/** A figure the build shows: the firmest candidate, with what it is ("at the wheels", "weighed"). */
+export type ShownFigure = { figure: FigureInput; note?: string; at?: 'wheel' | 'flywheel' };
+type Candidate = ShownFigure;
+
+/** What the rule reads: the same few parts of the public build, the owner's build or the editor's drafts. */
+export type FigureSource = {
+  sections: Sections;
+  weight?: FigureInput | null | undefined;
+  dynoRuns: ReadonlyArray<Pick<DynoRunCreateInput, 'date' | 'measuredAt' | 'powerUnit' | 'torqueUnit' | 'peakPower' | 'peakTorque'>>;
+  weighIns: ReadonlyArray<Pick<WeighInCreateInput, 'date' | 'unit' | 'leftFront' | 'rightFront' | 'leftRear' | 'rightRear' | 'withDriver'>>;
+};
+
 /** Measured beats estimated beats target; among equals the first listed wins. */
 const firmest = (cands: Array<Candidate | null | undefined>) =>
   cands.filter((c): c is Candidate => Boolean(c)).sort((a, b) => RANK[a.figure.provenance] - RANK[b.figure.provenance])[0];
 
-function powerCandidate(b: PublicBuild): Candidate | undefined {
+/** The newest record by date; among records of one day, the one listed first (the server lists newest first). */
+const newest = <T extends { date: string }>(list: ReadonlyArray<T>): T | undefined => list.reduce<T | undefined>((best, r) => (!best || r.date > best.date ? r : best), undefined);
+
+/** A weigh-in's total, to a tenth: the figure a weigh-in gives the build, applied or not. */
+export const weighedTotal = (w: FigureSource['weighIns'][number]) => Math.round(cornerWeights(w).total * 10) / 10;
+
+function powerCandidate(b: FigureSource): Candidate | undefined {
   const e = b.sections.engine;
-  const dyno = b.dynoRuns[0];
+  const dyno = newest(b.dynoRuns);
   return firmest([
-    e?.flywheelPower ? { figure: e.flywheelPower } : null,
-    e?.wheelPower ? { figure: e.wheelPower, note: 'at the wheels' } : null,
-    dyno ? { figure: { value: dyno.peakPower, unit: dyno.powerUnit, provenance: 'measured', measuredOn: dyno.date }, note: dyno.measuredAt === 'wheel' ? 'at the wheels, on the dyno' : 'on the dyno' } : null,
+    e?.flywheelPower ? { figure: e.flywheelPower, at: 'flywheel' } : null,
+    e?.wheelPower ? { figure: e.wheelPower, note: 'at the wheels', at: 'wheel' } : null,
+    dyno ? { figure: { value: dyno.peakPower, unit: dyno.powerUnit, provenance: 'measured', measuredOn: dyno.date }, note: dyno.measuredAt === 'wheel' ? 'at the wheels, on the dyno' : 'on the dyno', at: dyno.measuredAt } : null,
   ]);
 }
 
-function torqueCandidate(b: PublicBuild): Candidate | undefined {
+function torqueCandidate(b: FigureSource): Candidate | undefined {
   const e = b.sections.engine;
-  const dyno = b.dynoRuns[0];
+  const dyno = newest(b.dynoRuns);
   return firmest([
-    e?.flywheelTorque ? { figure: e.flywheelTorque } : null,
-    e?.wheelTorque ? { figure: e.wheelTorque, note: 'at the wheels' } : null,
-    dyno ? { figure: { value: dyno.peakTorque, unit: dyno.torqueUnit, provenance: 'measured', measuredOn: dyno.date }, note: dyno.measuredAt === 'wheel' ? 'at the wheels, on the dyno' : 'on the dyno' } : null,
+    e?.flywheelTorque ? { figure: e.flywheelTorque, at: 'flywheel' } : null,
+    e?.wheelTorque ? { figure: e.wheelTorque, note: 'at the wheels', at: 'wheel' } : null,
+    dyno ? { figure: { value: dyno.peakTorque, unit: dyno.torqueUnit, provenance: 'measured', measuredOn: dyno.date }, note: dyno.measuredAt === 'wheel' ? 'at the wheels, on the dyno' : 'on the dyno', at: dyno.measuredAt } : null,
   ]);
 }
 
-function weightCandidate(b: PublicBuild): Candidate | undefined {
-  const w = b.weighIns[0];
-  const weighed = w ? { figure: { value: cornerWeights(w).total, unit: w.unit, provenance: 'measured' as const, measuredOn: w.date }, note: w.withDriver ? 'weighed with driver' : 'weighed' } : null;
+function weightCandidate(b: FigureSource): Candidate | undefined {
+  const w = newest(b.weighIns);
+  const weighed = w ? { figure: { value: weighedTotal(w), unit: w.unit, provenance: 'measured' as const, measuredOn: w.date }, note: w.withDriver ? 'weighed with driver' : 'weighed' } : null;
   return firmest([b.weight ? { figure: b.weight } : null, weighed]);
 }
 
@@ -58,10 +75,26 @@ function displacementCandidate(s: Sections): Candidate | undefined {
   if (e?.bore && e.stroke && e.cylinders) {
     const bore = convert('length', e.bore.value, parseUnit('length', e.bore.unit) ?? 'mm', 'mm');
     const stroke = convert('length', e.stroke.value, parseUnit('length', e.stroke.unit) ?? 'mm', 'mm');
-    const d = displacement({ bore, stroke, unit: 'mm', cylinders: e.cylinders });
+    let d: ReturnType<typeof displacement>;
+    try {
+      d = displacement({ bore, stroke, unit: 'mm', cylinders: e.cylinders });
+    } catch (err) {
+      // A half-typed draft in the editor (a zero bore) has no displacement yet, not a crash.
+      if (err instanceof CalcInputError) return undefined;
+      throw err;
+    }
     return { figure: { value: d.cm3, unit: 'cm3', provenance: weakest(e.bore.provenance, e.stroke.provenance) }, note: 'from bore and stroke' };
   }
   return undefined;
+}
+
+/**
+ * Which power, torque, weight and displacement a build shows, in the units they were given: the
+ * one rule behind My builds, the editor's numbers, the public page, its JSON and the cards.
+ */
+export function shownFigures(b: FigureSource): { power?: ShownFigure; torque?: ShownFigure; weight?: ShownFigure; displacement?: ShownFigure } {
+  const found = { power: powerCandidate(b), torque: torqueCandidate(b), weight: weightCandidate(b), displacement: displacementCandidate(b.sections) };
+  return Object.fromEntries(Object.entries(found).filter(([, f]) => f)) as ReturnType<typeof shownFigures>;
 }
 
 /** The largest JPEG of the build's photo that backs a measured figure, if it is one of the build's photos. */
@@ -89,11 +122,10 @@ function keyFigure(b: PublicBuild, key: CardFigureKey, kind: QuantityKind, c: Ca
 
 /** The headline figures of a build in both unit systems, in card order. */
 export function computeKeyFigures(b: PublicBuild): KeyFigure[] {
-  const power = powerCandidate(b);
-  const weight = weightCandidate(b);
+  const { power, torque, weight, displacement: volume } = shownFigures(b);
   const out: Array<KeyFigure | null> = [
     keyFigure(b, 'power', 'power', power),
-    keyFigure(b, 'torque', 'torque', torqueCandidate(b)),
+    keyFigure(b, 'torque', 'torque', torque),
     keyFigure(b, 'weight', 'mass', weight),
   ];
   if (power && weight) {
@@ -105,7 +137,7 @@ export function computeKeyFigures(b: PublicBuild): KeyFigure[] {
         key: 'powerToWeight',
         label: CARD_FIGURE_LABELS.powerToWeight,
         provenance: weakest(power.figure.provenance, weight.figure.provenance),
-        ...(power.note?.startsWith('at the wheels') ? { note: 'with power at the wheels' } : {}),
+        ...(power.at === 'wheel' ? { note: 'with power at the wheels' } : {}),
         metric: { value: r.wPerKg, unit: 'kW/t', text: `${formatNumber(r.wPerKg)}\u00a0kW/t` },
         imperial: { value: r.lbPerHp, unit: 'lb/hp', text: `${formatNumber(r.lbPerHp, { decimals: 1 })}\u00a0lb/hp` },
         // hp per tonne, as British print gives it: 1 hp = 745.699872 W (NIST SP 811, appendix B.9).
@@ -113,6 +145,6 @@ export function computeKeyFigures(b: PublicBuild): KeyFigure[] {
       });
     }
   }
-  out.push(keyFigure(b, 'displacement', 'volume', displacementCandidate(b.sections), { units: { metric: 'L', imperial: 'in3', uk: 'L' }, decimals: { metric: 1, imperial: 0, uk: 1 } }));
+  out.push(keyFigure(b, 'displacement', 'volume', volume, { units: { metric: 'L', imperial: 'in3', uk: 'L' }, decimals: { metric: 1, imperial: 0, uk: 1 } }));
   return out.filter((f): f is KeyFigure => f !== null);
 }

@@ -159,7 +159,8 @@ export type OwnerBuild = {
   code: string;
   published: boolean;
   overview: BuildOverview;
-  private: BuildPrivate;
+  /** Present only for someone the build policy lets see private fields (`abilities.viewPrivate`). */
+  private?: BuildPrivate;
   sections: Sections;
   sectionsUpdatedAt: Partial<Record<SectionKind, string>>;
   credits: Credit[];
@@ -169,7 +170,7 @@ export type OwnerBuild = {
   history: FigureChange[];
   publicUrl: string;
   updatedAt: string;
-  abilities: { edit: boolean; delete: boolean; publish: boolean };
+  abilities: { viewPrivate: boolean; edit: boolean; delete: boolean; publish: boolean };
 };
 
 /** A row in "My builds". */

@@ -15,10 +15,11 @@ import type { PublicBuild } from '@shared/schemas/build';
 import type { SectionKind } from '@shared/schemas/build-sections';
 import { createUser } from './factories';
 
-export type DemoCardBuild = { name: string; build: PublicBuild; cover: CoverImage | null };
+export type DemoCardBuild = { id: number; name: string; build: PublicBuild; cover: CoverImage | null };
 
-export async function createDemoCardBuilds(): Promise<DemoCardBuild[]> {
-  const { user } = await createUser({ name: 'Demo Owner' });
+/** `owner`: whose builds they become (a new test owner when left out). */
+export async function createDemoCardBuilds(owner?: Awaited<ReturnType<typeof createUser>>['user']): Promise<DemoCardBuild[]> {
+  const user = owner ?? (await createUser({ name: 'Demo Owner' })).user;
   const out: DemoCardBuild[] = [];
   for (const demo of DEMO_BUILDS) {
     const build = await createBuild(user, { title: demo.title, modelYear: demo.modelYear, bodyOrigin: demo.bodyOrigin, style: demo.style });
@@ -34,7 +35,7 @@ export async function createDemoCardBuilds(): Promise<DemoCardBuild[]> {
     if (newest) await applyDynoRun(build, newest.id);
     for (const w of demo.weighIns ?? []) await applyWeighIn(build, (await addWeighIn(build, w)).id);
     const publicBuild = presentPublicBuild(await loadFullBuildOrThrow(build.id));
-    out.push({ name: demo.title, build: publicBuild, cover: await loadCoverImage(publicBuild, DEFAULT_CARD_SETTINGS) });
+    out.push({ id: build.id, name: demo.title, build: publicBuild, cover: await loadCoverImage(publicBuild, DEFAULT_CARD_SETTINGS) });
   }
   return out;
 }

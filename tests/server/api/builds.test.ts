@@ -33,7 +33,7 @@ describe('builds: create, read, list', () => {
     expect(build.code).not.toMatch(/[01OIL]/);
     expect(build.published).toBe(false);
     expect(build.publicUrl).toBe(`http://127.0.0.1:3999/c/${build.code}`);
-    expect(build.abilities).toEqual({ edit: true, delete: true, publish: true });
+    expect(build.abilities).toEqual({ viewPrivate: true, edit: true, delete: true, publish: true });
 
     const list = await client.get('/api/builds');
     expect(list.body.builds.map((b: { id: number }) => b.id)).toEqual([build.id]);

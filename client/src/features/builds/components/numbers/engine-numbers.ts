@@ -1,4 +1,5 @@
 import { boreStrokeRatio, displacement, DRIVETRAIN_LOSS, DRIVETRAIN_LOSS_NOTE, flywheelPowerFromWheel, impliedDrivetrainLoss, powerToWeight, formatQuantity, wheelPowerFromFlywheel, formatPercent, type UnitSystem } from '@shared/calc';
+import { shownFigures } from '@shared/build-sheet/key-figures';
 import { attempt, firmness, fmt, num, read, show } from './read';
 import { other, type NumberGroup, type NumberRow, type NumbersInput } from './types';
 
@@ -27,7 +28,7 @@ export function engineNumbers({ sections, system }: NumbersInput): NumberGroup {
   return { id: 'engine', title: 'Engine', section: 'engine', rows, ...(hint ? { hint } : {}) };
 }
 
-export function powerNumbers({ sections, weight, system }: NumbersInput): NumberGroup {
+export function powerNumbers({ sections, weight, weighIns, dynoRuns, system }: NumbersInput): NumberGroup {
   const e = sections.engine ?? {};
   const fly = read('power', e.flywheelPower, 'hp');
   const wheel = read('power', e.wheelPower, 'hp');
@@ -45,14 +46,16 @@ export function powerNumbers({ sections, weight, system }: NumbersInput): Number
     if (loss.ok && Number.isFinite(loss.value)) rows.push({ label: 'Drivetrain loss the two figures imply', value: formatPercent(loss.value * 100), ...firmness(e.flywheelPower, e.wheelPower) });
   }
   if (rows.some((r) => r.estimate)) notes.push(DRIVETRAIN_LOSS_NOTE + ' (common practice)');
-  const power = fly ?? wheel;
-  const kg = read('mass', weight, 'kg');
+  // Power to weight from the figures the build shows everywhere (the shared rule: measured first, dyno and weigh-ins included).
+  const shown = shownFigures({ sections, weight, dynoRuns, weighIns });
+  const power = read('power', shown.power?.figure, 'hp');
+  const kg = read('mass', shown.weight?.figure, 'kg');
   let hint: string | undefined;
   if (power !== undefined && kg !== undefined) {
     const pw = attempt(() => powerToWeight({ value: power, unit: 'hp' }, { value: kg, unit: 'kg' }));
     if (pw.ok) {
-      const at = fly !== undefined ? 'flywheel' : 'wheels';
-      const firm = firmness(fly !== undefined ? e.flywheelPower : e.wheelPower, weight);
+      const at = shown.power?.at === 'wheel' ? 'wheels' : 'flywheel';
+      const firm = firmness(shown.power?.figure, shown.weight?.figure);
       const hpPerTonne = `${fmt(pw.value.hpPerTonne)} hp per tonne`;
       const wPerKg = `${fmt(pw.value.wPerKg, 1)} W/kg`;
       rows.push({ label: `Power to weight (${at})`, value: system === 'metric' ? wPerKg : hpPerTonne, other: system === 'metric' ? hpPerTonne : wPerKg, ...firm });

@@ -28,7 +28,7 @@ export function NumbersProvider({ children }: { children: ReactNode }) {
     const sections = {} as Record<string, unknown>;
     for (const kind of SECTION_KINDS) sections[kind] = cleanValues(drafts.get(kind) ?? build.sections[kind] ?? {});
     const overview = (drafts.get('overview') ? cleanValues(drafts.get('overview')) : build.overview) as { weight?: FigureInput | null };
-    return computeNumbers({ sections: sections as Sections, weight: overview.weight ?? null, weighIns: build.weighIns, system, cruise });
+    return computeNumbers({ sections: sections as Sections, weight: overview.weight ?? null, weighIns: build.weighIns, dynoRuns: build.dynoRuns, system, cruise });
   }, [version, drafts, build, system, cruise]);
 
   const value = useMemo(

@@ -1,6 +1,6 @@
 import type { UnitSystem } from '@shared/calc';
 import type { Sections } from '@shared/schemas/build-sections';
-import type { WeighIn } from '@shared/schemas/build';
+import type { DynoRun, WeighIn } from '@shared/schemas/build';
 import type { FigureInput } from '@shared/schemas/figure';
 
 /**
@@ -28,6 +28,7 @@ export type NumbersInput = {
   sections: Sections;
   weight?: FigureInput | null;
   weighIns: WeighIn[];
+  dynoRuns: DynoRun[];
   system: UnitSystem;
   /** Cruising speed for the rpm-at-cruise line, in the chosen system's unit (km/h or mph). */
   cruise: number;

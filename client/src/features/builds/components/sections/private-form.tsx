@@ -6,7 +6,8 @@ import { useEditorForm } from '../editor/use-editor-form';
 import { SectionForm } from '../editor/section-form';
 import { errorAt } from '../editor/fields';
 
-const fromBuild = (b: OwnerBuild): Required<BuildPrivate> => ({ vin: b.private.vin ?? '', plate: b.private.plate ?? '', ownerPhone: b.private.ownerPhone ?? '', ownerAddress: b.private.ownerAddress ?? '' });
+// Absent when the policy keeps them from this viewer: the boxes start empty.
+const fromBuild = (b: OwnerBuild): Required<BuildPrivate> => ({ vin: b.private?.vin ?? '', plate: b.private?.plate ?? '', ownerPhone: b.private?.ownerPhone ?? '', ownerAddress: b.private?.ownerAddress ?? '' });
 
 /** Sent as typed: the schema trims, and an emptied box clears the saved value. */
 const asSent = <V,>(v: V) => v;
