@@ -25,13 +25,23 @@ export class MapStore<V> {
 
 export type FormKey = 'overview' | 'engine' | 'drivetrain' | 'chassis' | 'brakes' | 'wheels' | 'body' | 'extra' | 'credits' | 'private';
 
+/** A panel whose edits are not stored yet: waiting for the typing to stop, on the way, or refused. */
+export type PendingState = 'pending' | 'saving' | 'failed';
+
+/** Saves a panel's edits now; resolves to null once they are stored, or to why they are not. */
+export type SaveNow = () => Promise<string | null>;
+
 export type Editor = {
   build: OwnerBuild;
   /** The forms' current values (unsaved included), for the live numbers. */
   drafts: MapStore<unknown>;
-  /** Which forms hold unsaved changes. */
-  dirty: MapStore<true>;
+  /** Which forms hold edits not stored yet, and where those stand. */
+  dirty: MapStore<PendingState>;
+  /** Each form's "save now", for leaving the editor. */
+  savers: Map<FormKey, SaveNow>;
 };
+
+export const createEditorStores = () => ({ drafts: new MapStore<unknown>(), dirty: new MapStore<PendingState>(), savers: new Map<FormKey, SaveNow>() });
 
 export const EditorContext = createContext<Editor | null>(null);
 

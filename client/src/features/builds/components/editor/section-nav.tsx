@@ -41,7 +41,7 @@ export function SectionNav() {
           {EDITOR_SECTIONS.map(([id, label]) => (
             <option key={id} value={id}>
               {label}
-              {mark(id) ? ' (unsaved)' : ''}
+              {mark(id) ? ' (not saved yet)' : ''}
             </option>
           ))}
         </select>
@@ -59,7 +59,7 @@ export function SectionNav() {
                 className="flex min-h-11 items-center px-3 text-sm hover:text-signal"
               >
                 {label}
-                {mark(id) ? <span className="ml-1 text-caution" aria-label="unsaved changes">●</span> : null}
+                {mark(id) ? <span className="ml-1 text-caution" aria-label="not saved yet">●</span> : null}
               </a>
             </li>
           ))}
