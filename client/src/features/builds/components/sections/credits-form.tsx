@@ -34,7 +34,7 @@ export function CreditsForm({ build }: { build: OwnerBuild }) {
           <li key={field.id} className={ROW}>
             <TextField label="Role" list="credit-roles" placeholder="e.g. paint" {...register(`credits.${i}.role`)} error={errorAt(errors, `credits.${i}.role`)} />
             <GrowingTextField label="Name" placeholder="Shop or person" {...register(`credits.${i}.name`)} error={errorAt(errors, `credits.${i}.name`)} />
-            <Button type="button" variant="quiet" className="justify-self-start" aria-label={`Remove credit ${i + 1}`} onClick={() => remove(i)}>
+            <Button type="button" variant="quiet" className="justify-self-start sm:mt-6" aria-label={`Remove credit ${i + 1}`} onClick={() => remove(i)}>
               Remove
             </Button>
           </li>

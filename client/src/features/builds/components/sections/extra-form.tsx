@@ -29,7 +29,7 @@ export function ExtraForm({ build }: { build: OwnerBuild }) {
           <li key={field.id} className={ROW}>
             <TextField label="Label" placeholder="e.g. Wiring" {...register(`lines.${i}.label`)} error={errorAt(errors, `lines.${i}.label`)} />
             <GrowingTextField label="Value" {...register(`lines.${i}.value`)} error={errorAt(errors, `lines.${i}.value`)} />
-            <Button type="button" variant="quiet" className="justify-self-start" aria-label={`Remove line ${i + 1}`} onClick={() => remove(i)}>
+            <Button type="button" variant="quiet" className="justify-self-start sm:mt-6" aria-label={`Remove line ${i + 1}`} onClick={() => remove(i)}>
               Remove
             </Button>
           </li>
