@@ -100,8 +100,8 @@ describe('the build editor in the browser', () => {
     const srcset = await img.first().getAttribute('srcset');
     expect(srcset).toMatch(/480w/);
     expect(srcset).toMatch(/960w/);
+    // The caption saves itself after a pause in the typing.
     await photos.getByLabel('Caption').fill('Three-quarter view in the shop');
-    await photos.getByRole('button', { name: 'Save', exact: true }).click();
     await expect.poll(() => photos.getByText('Caption saved').count()).toBe(1);
     // A second photo: reorder with the buttons (the keyboard and phone way), then choose the cover.
     await photos.locator('input[type=file]').setInputFiles(photoPath);

@@ -31,17 +31,20 @@ export type PendingState = 'pending' | 'saving' | 'failed';
 /** Saves a panel's edits now; resolves to null once they are stored, or to why they are not. */
 export type SaveNow = () => Promise<string | null>;
 
+/** Something that saves itself: a section's form, a photo's caption. `section` is where it sits. */
+export type Saver = { label: string; section: string; save: SaveNow };
+
 export type Editor = {
   build: OwnerBuild;
   /** The forms' current values (unsaved included), for the live numbers. */
   drafts: MapStore<unknown>;
-  /** Which forms hold edits not stored yet, and where those stand. */
+  /** Which forms (by FormKey) and captions (`photos:<id>`) hold edits not stored yet, and where those stand. */
   dirty: MapStore<PendingState>;
-  /** Each form's "save now", for leaving the editor. */
-  savers: Map<FormKey, SaveNow>;
+  /** Everything that saves itself, by the same keys, for leaving the editor. */
+  savers: Map<string, Saver>;
 };
 
-export const createEditorStores = () => ({ drafts: new MapStore<unknown>(), dirty: new MapStore<PendingState>(), savers: new Map<FormKey, SaveNow>() });
+export const createEditorStores = () => ({ drafts: new MapStore<unknown>(), dirty: new MapStore<PendingState>(), savers: new Map<string, Saver>() });
 
 export const EditorContext = createContext<Editor | null>(null);
 

@@ -29,7 +29,8 @@ function goTo(id: string) {
 export function SectionNav() {
   const { dirty } = useEditor();
   useStoreVersion(dirty);
-  const mark = (id: string) => (dirty.get(id) ? ' ●' : '');
+  // A photo's caption counts for the photos section.
+  const mark = (id: string) => (dirty.entries().some(([key]) => key === id || key.startsWith(`${id}:`)) ? ' ●' : '');
   return (
     <>
       <div className="sticky top-0 z-10 -mx-4 border-b border-rule bg-paper px-4 py-2 lg:hidden">

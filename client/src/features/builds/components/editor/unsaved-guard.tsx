@@ -1,13 +1,13 @@
 import { useEffect, useRef, useState } from 'react';
 import { useBlocker } from 'react-router-dom';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
-import { FORM_LABELS, useEditor, useStoreVersion, type FormKey, type SaveNow } from './editor-stores';
+import { useEditor, useStoreVersion, type Saver } from './editor-stores';
 
-type Refusal = { key: FormKey; why: string };
+type Refusal = { key: string; label: string; section: string; why: string };
 
 /** Saves every panel now; resolves to the panels that would not save, and why. */
-async function saveAll(savers: Map<FormKey, SaveNow>): Promise<Refusal[]> {
-  const results = await Promise.all([...savers.entries()].map(async ([key, save]) => ({ key, why: await save() })));
+async function saveAll(savers: Map<string, Saver>): Promise<Refusal[]> {
+  const results = await Promise.all([...savers.entries()].map(async ([key, { label, section, save }]) => ({ key, label, section, why: await save() })));
   return results.filter((r): r is Refusal => r.why !== null);
 }
 
@@ -62,7 +62,7 @@ export function UnsavedGuard() {
   }, [unstored, savers]);
 
   const stay = () => {
-    const first = refusals[0]?.key;
+    const first = refusals[0]?.section;
     setRefusals([]);
     blocker.reset?.();
     if (first) document.getElementById(`section-${first}`)?.scrollIntoView({ block: 'start' });
@@ -79,7 +79,7 @@ export function UnsavedGuard() {
         <ul className="mt-2 ml-5 list-disc">
           {refusals.map((r) => (
             <li key={r.key}>
-              <span className="font-semibold text-ink">{FORM_LABELS[r.key]}</span>: {r.why}
+              <span className="font-semibold text-ink">{r.label}</span>: {r.why}
             </li>
           ))}
         </ul>
@@ -88,7 +88,7 @@ export function UnsavedGuard() {
   }
   return (
     <ConfirmDialog open={blocked} title="Saving before you leave…" confirmLabel="Leave without saving" cancelLabel="Stay" onCancel={stay} onConfirm={leave}>
-      Saving: {dirty.entries().map(([k]) => FORM_LABELS[k as FormKey] ?? k).join(', ') || 'done'}.
+      Saving: {dirty.entries().map(([k]) => savers.get(k)?.label ?? k).join(', ') || 'done'}.
     </ConfirmDialog>
   );
 }

@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { FieldErrors, FieldValues, UseFormReturn } from 'react-hook-form';
-import { useEditor, type FormKey, type PendingState } from './editor-stores';
+import { FORM_LABELS, useEditor, type FormKey, type PendingState } from './editor-stores';
 
 /** How long typing must pause before a panel saves itself. */
 export const AUTOSAVE_DELAY_MS = 800;
@@ -119,7 +119,7 @@ export function useAutosave<T extends FieldValues>({ form, formKey, keyOf, saved
   }, [savedKey, currentKey, report]);
 
   useEffect(() => {
-    savers.set(formKey, saveNow);
+    savers.set(formKey, { label: FORM_LABELS[formKey], section: formKey, save: saveNow });
     return () => {
       savers.delete(formKey);
     };
