@@ -71,6 +71,12 @@ describe('leaving the build editor never drops an edit', () => {
       await expect.poll(() => engine.getByLabel('Bore', { exact: true }).inputValue()).toBe('2000');
       expect((await storedEngine(page, build.id)).bore).toMatchObject({ value: 101.6 });
 
+      // The summary at the top of the panel lists every error of the panel, not just the first.
+      await engine.getByLabel('Stroke', { exact: true }).fill('900');
+      const summary = engine.getByRole('alert').filter({ hasText: 'Not saved yet.' });
+      await expect.poll(() => summary.locator('li').allTextContents()).toEqual(['Bore must be between 20 and 200 mm.', 'Stroke must be between 20 and 200 mm.']);
+      await engine.getByLabel('Stroke', { exact: true }).fill('');
+
       // Fixed, it saves by itself; text typed and left at once is kept as well.
       await engine.getByLabel('Bore', { exact: true }).fill('102');
       await expect.poll(() => engine.getByRole('status').textContent()).toBe('Saved');

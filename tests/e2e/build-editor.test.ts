@@ -183,6 +183,8 @@ describe('the build editor in the browser', () => {
     await deskEngine.getByLabel('Displacement (as stated)', { exact: true }).fill('5.7');
     await expect.poll(() => deskEngine.getByText(/Bore × stroke × 8 cylinders gives/).count()).toBe(1);
     await expect.poll(() => panel.textContent()).toMatch(/Spec check · 1 to look at/);
+    // The message names the section and the field, not just the section.
+    await expect.poll(() => panel.getByTestId('spec-check-message').allTextContents()).toEqual([expect.stringMatching(/^Engine · displacement: /)]);
     await deskEngine.getByLabel('Displacement (as stated)', { exact: true }).scrollIntoViewIfNeeded();
     await deskPage.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-desktop-spec-check.png') });
 
