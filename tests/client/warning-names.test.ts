@@ -13,7 +13,7 @@ describe('spec-check messages in the editor', () => {
   });
 
   it('list every undated measured figure by name, with the explanation once', () => {
-    const measured = (value: number, unit: 'hp' | 'lbft') => ({ value, unit, provenance: 'measured' as const });
+    const measured = <U extends string>(value: number, unit: U) => ({ value, unit, provenance: 'measured' as const });
     const sections: Sections = { engine: { flywheelPower: measured(410, 'hp'), flywheelTorque: measured(430, 'lbft') } };
     const groups = groupWarnings(specWarnings(sections, { weight: { value: 1300, unit: 'kg', provenance: 'measured' } }));
     const undated = groups.filter((g) => g.items.some((i) => i.message === 'This measured figure has no date.'));
