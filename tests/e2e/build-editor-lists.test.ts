@@ -67,6 +67,13 @@ describe('credits and extra lines in the build editor', () => {
         expect(credits.right).toBeLessThanOrEqual(numbers.left);
         expect(lines.right).toBeLessThanOrEqual(numbers.left);
       }
+      // Every box shows its whole text: nothing runs past a one-line box's edge or out of a text area's sight.
+      for (const sectionId of ['credits', 'extra']) {
+        const boxes = await page.locator(`#section-${sectionId}`).locator('input:not([type=hidden]), textarea').evaluateAll((els) =>
+          els.map((el) => ({ text: (el as HTMLInputElement).value, wide: el.scrollWidth <= el.clientWidth + 1, tall: el.scrollHeight <= el.clientHeight + 1 })),
+        );
+        expect(boxes.filter((b) => !b.wide || !b.tall).map((b) => b.text), `at ${width} px in ${sectionId}`).toEqual([]);
+      }
       // The long value is shown whole: its box grew to hold the text, nothing scrolls out of sight.
       const value = extra.getByLabel('Value').last();
       const fit = await value.evaluate((el) => ({ scroll: el.scrollHeight, client: el.clientHeight, width: el.clientWidth }));

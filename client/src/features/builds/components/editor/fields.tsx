@@ -16,7 +16,7 @@ import { useEditor, type FormKey } from './editor-stores';
  * The columns may shrink below their boxes' natural width (minmax(0, …)), so Remove stays inside
  * the panel however narrow the middle column is.
  */
-export const LIST_ROW = 'grid min-w-0 gap-2 border-b border-rule pb-3 sm:grid-cols-[minmax(0,1fr)_minmax(0,2fr)_auto] sm:items-start';
+export const LIST_ROW = 'grid min-w-0 gap-2 border-b border-rule pb-3 sm:grid-cols-[minmax(0,2fr)_minmax(0,3fr)_auto] sm:items-start';
 
 /** A dotted path's error message in react-hook-form's nested errors. */
 export function errorAt(errors: FieldErrors, path: string): string | undefined {

@@ -2,7 +2,6 @@ import { useFieldArray } from 'react-hook-form';
 import { ExtraSectionSchema, type ExtraSection } from '@shared/schemas/build-sections';
 import type { OwnerBuild } from '@shared/schemas/build';
 import { Button } from '@client/components/ui/button';
-import { TextField } from '@client/components/ui/text-field';
 import { GrowingTextField } from '@client/components/ui/growing-text-field';
 import { useSaveSection } from '../../api/save-section';
 import { useEditorForm } from '../editor/use-editor-form';
@@ -27,7 +26,7 @@ export function ExtraForm({ build }: { build: OwnerBuild }) {
       <ol className="flex flex-col gap-3">
         {fields.map((field, i) => (
           <li key={field.id} className={ROW}>
-            <TextField label="Label" placeholder="e.g. Wiring" {...register(`lines.${i}.label`)} error={errorAt(errors, `lines.${i}.label`)} />
+            <GrowingTextField label="Label" placeholder="e.g. Wiring" {...register(`lines.${i}.label`)} error={errorAt(errors, `lines.${i}.label`)} />
             <GrowingTextField label="Value" {...register(`lines.${i}.value`)} error={errorAt(errors, `lines.${i}.value`)} />
             <Button type="button" variant="quiet" className="justify-self-start sm:mt-6" aria-label={`Remove line ${i + 1}`} onClick={() => remove(i)}>
               Remove
