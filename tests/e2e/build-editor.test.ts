@@ -69,8 +69,7 @@ describe('the build editor in the browser', () => {
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-engine-phone.png') });
     await engineNumbers.getByRole('button', { name: 'metric' }).click();
     await expect.poll(() => engineNumbers.textContent()).toMatch(/4,942\scm³/);
-    await expect.poll(() => engine.getByRole('status').filter({ hasText: 'Unsaved changes' }).count()).toBeGreaterThan(0);
-    await engine.getByRole('button', { name: 'Save engine' }).click();
+    // No Save button: the panel saves itself once the typing stops.
     await expect.poll(() => engine.getByRole('status').filter({ hasText: /^Saved$/ }).count()).toBeGreaterThan(0);
 
     // Wheels: staggered tyre sizes; the numbers work out their diameters.
@@ -83,16 +82,14 @@ describe('the build editor in the browser', () => {
     const wheelNumbers = page.getByTestId('section-numbers-wheels');
     await expect.poll(() => wheelNumbers.textContent()).toContain('Rear tyre diameter');
     await expect.poll(() => wheelNumbers.textContent()).toContain('Rear backspacing');
-    await wheels.getByRole('button', { name: 'Save wheels and tyres' }).click();
     await expect.poll(() => wheels.getByRole('status').filter({ hasText: /^Saved$/ }).count()).toBeGreaterThan(0);
     await wheels.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-wheels-phone.png') });
 
-    // A tyre code that does not read gets the server's (and the schema's) message on the field.
+    // A tyre code that does not read is not sent: the schema's message is on the field and in the status.
     await wheels.getByLabel('Tyre size').nth(0).fill('245/40X18');
-    await wheels.getByRole('button', { name: 'Save wheels and tyres' }).click();
     await expect.poll(() => wheels.getByText(/does not read as a size code/).count()).toBeGreaterThan(0);
+    await expect.poll(() => wheels.getByRole('status').textContent()).toMatch(/^● Not saved: .*does not read as a size code/);
     await wheels.getByLabel('Tyre size').nth(0).fill('245/40R18');
-    await wheels.getByRole('button', { name: 'Save wheels and tyres' }).click();
     await expect.poll(() => wheels.getByRole('status').filter({ hasText: /^Saved$/ }).count()).toBeGreaterThan(0);
 
     // Photo: uploaded with progress, stored resized; the <img> offers the widths.
@@ -103,8 +100,8 @@ describe('the build editor in the browser', () => {
     const srcset = await img.first().getAttribute('srcset');
     expect(srcset).toMatch(/480w/);
     expect(srcset).toMatch(/960w/);
+    // The caption saves itself after a pause in the typing.
     await photos.getByLabel('Caption').fill('Three-quarter view in the shop');
-    await photos.getByRole('button', { name: 'Save', exact: true }).click();
     await expect.poll(() => photos.getByText('Caption saved').count()).toBe(1);
     // A second photo: reorder with the buttons (the keyboard and phone way), then choose the cover.
     await photos.locator('input[type=file]').setInputFiles(photoPath);
@@ -140,7 +137,6 @@ describe('the build editor in the browser', () => {
     const overview = page.getByRole('form', { name: 'Overview' });
     await overview.getByLabel('Weight unit').selectOption('kg');
     await overview.getByLabel('Weight', { exact: true }).fill('1250');
-    await overview.getByRole('button', { name: 'Save overview' }).click();
     await expect.poll(() => overview.getByRole('status').filter({ hasText: /^Saved$/ }).count()).toBeGreaterThan(0);
     await page.getByRole('button', { name: 'Add a weigh-in' }).click();
     const weigh = page.getByRole('form', { name: 'Add a weigh-in' });
@@ -156,13 +152,8 @@ describe('the build editor in the browser', () => {
     await expect.poll(() => overview.getByLabel('Weight', { exact: true }).inputValue()).toBe('1287');
     await page.locator('#section-weighIns').screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-weigh-ins-phone.png') });
 
-    // Unsaved changes are guarded when leaving in the app.
+    // Text saves itself too (leaving at once is covered by build-editor-autosave.test.ts).
     await page.getByRole('form', { name: 'Body and interior' }).getByLabel('Paint').fill('Deep oxblood, hand-rubbed');
-    await page.getByRole('link', { name: '← My builds' }).click();
-    await expect.poll(() => page.getByRole('dialog').getByText('Leave with unsaved changes?').count()).toBe(1);
-    await page.getByRole('button', { name: 'Stay and save' }).click();
-    expect(page.url()).toBe(buildUrl);
-    await page.getByRole('button', { name: 'Save body and interior' }).click();
     await expect.poll(() => page.getByRole('form', { name: 'Body and interior' }).getByRole('status').filter({ hasText: /^Saved$/ }).count()).toBeGreaterThan(0);
 
     await shot(page, 'build-editor-phone.png');
@@ -192,6 +183,8 @@ describe('the build editor in the browser', () => {
     await deskEngine.getByLabel('Displacement (as stated)', { exact: true }).fill('5.7');
     await expect.poll(() => deskEngine.getByText(/Bore × stroke × 8 cylinders gives/).count()).toBe(1);
     await expect.poll(() => panel.textContent()).toMatch(/Spec check · 1 to look at/);
+    // The message names the section and the field, not just the section.
+    await expect.poll(() => panel.getByTestId('spec-check-message').allTextContents()).toEqual([expect.stringMatching(/^Engine · displacement: /)]);
     await deskEngine.getByLabel('Displacement (as stated)', { exact: true }).scrollIntoViewIfNeeded();
     await deskPage.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-desktop-spec-check.png') });
 

@@ -20,16 +20,26 @@ export const setCsrfToken = (token: string | undefined) => {
 /** For requests that cannot go through api(), such as an upload with progress (XMLHttpRequest). */
 export const getCsrfToken = () => csrfToken;
 
-type Options = { method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE'; body?: unknown; signal?: AbortSignal };
+type Options = {
+  method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+  body?: unknown;
+  signal?: AbortSignal;
+  /** Lets the request finish after the page closes (an editor panel saved on the way out). Browsers allow 64 KB of such bodies in flight. */
+  keepalive?: boolean;
+};
 
-async function send(path: string, { method = 'GET', body, signal }: Options): Promise<Response> {
+const KEEPALIVE_MAX_BYTES = 60_000;
+
+async function send(path: string, { method = 'GET', body, signal, keepalive }: Options): Promise<Response> {
   const headers: Record<string, string> = { Accept: 'application/json' };
   // A FormData body (a small upload with no progress bar) sets its own multipart type and boundary.
   const form = body instanceof FormData;
   if (body !== undefined && !form) headers['Content-Type'] = 'application/json';
   if (method !== 'GET' && csrfToken) headers['X-CSRF-Token'] = csrfToken;
+  const sent = body === undefined ? undefined : form ? body : JSON.stringify(body);
+  const small = typeof sent === 'string' && sent.length < KEEPALIVE_MAX_BYTES;
   try {
-    return await fetch(path, { method, headers, body: body === undefined ? undefined : form ? body : JSON.stringify(body), credentials: 'same-origin', signal });
+    return await fetch(path, { method, headers, body: sent, credentials: 'same-origin', signal, keepalive: Boolean(keepalive && small) });
   } catch (err) {
     if ((err as Error).name === 'AbortError') throw err;
     throw new ApiError(0, 'NETWORK', 'No connection to Placard. Check your signal and try again.');

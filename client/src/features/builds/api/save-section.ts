@@ -5,7 +5,7 @@ import { useBuildMutation } from './build-mutation';
 
 /** Replaces one spec section with the whole object sent. */
 export const saveSection = <K extends SectionKind>(id: number, kind: K, section: NonNullable<Sections[K]>) =>
-  api<{ build: OwnerBuild }>(`/api/builds/${id}/sections/${kind}`, { method: 'PUT', body: section });
+  api<{ build: OwnerBuild }>(`/api/builds/${id}/sections/${kind}`, { method: 'PUT', body: section, keepalive: true });
 
 export const useSaveSection = <K extends SectionKind>(id: number, kind: K) =>
   useBuildMutation(id, (section: NonNullable<Sections[K]>) => saveSection(id, kind, section));

@@ -5,7 +5,7 @@ import { ErrorState, LoadingState } from '@client/components/ui/states';
 import { Notice } from '@client/components/ui/notice';
 import type { OwnerBuild } from '@shared/schemas/build';
 import { useBuild } from '../api/get-build';
-import { EditorContext, MapStore, type Editor } from './editor/editor-stores';
+import { EditorContext, createEditorStores, type Editor } from './editor/editor-stores';
 import { EditorHeader } from './editor/editor-header';
 import { SectionNav } from './editor/section-nav';
 import { UnsavedGuard } from './editor/unsaved-guard';
@@ -27,7 +27,7 @@ import { WeighInsPanel } from './records/weigh-ins-panel';
 import { HistoryPanel } from './records/history-list';
 
 function Editor({ build }: { build: OwnerBuild }) {
-  const [stores] = useState(() => ({ drafts: new MapStore<unknown>(), dirty: new MapStore<true>() }));
+  const [stores] = useState(createEditorStores);
   const editor: Editor = { build, ...stores };
   return (
     <EditorContext.Provider value={editor}>
@@ -63,7 +63,6 @@ function Editor({ build }: { build: OwnerBuild }) {
   );
 }
 
-/** /builds/:id — the build editor: one form per section, each saved on its own, and the live numbers. */
 function NoSuchBuild({ children }: { children: string }) {
   return (
     <div className="flex flex-col items-start gap-3">
@@ -75,6 +74,7 @@ function NoSuchBuild({ children }: { children: string }) {
   );
 }
 
+/** /builds/:id — the build editor: one form per section, each saved by itself as the owner types, and the live numbers. */
 export function BuildEditorPage() {
   const id = Number(useParams().id);
   const { data, isPending, error, refetch } = useBuild(id);

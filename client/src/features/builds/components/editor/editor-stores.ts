@@ -25,13 +25,26 @@ export class MapStore<V> {
 
 export type FormKey = 'overview' | 'engine' | 'drivetrain' | 'chassis' | 'brakes' | 'wheels' | 'body' | 'extra' | 'credits' | 'private';
 
+/** A panel whose edits are not stored yet: waiting for the typing to stop, on the way, or refused. */
+export type PendingState = 'pending' | 'saving' | 'failed';
+
+/** Saves a panel's edits now; resolves to null once they are stored, or to why they are not. */
+export type SaveNow = () => Promise<string | null>;
+
+/** Something that saves itself: a section's form, a photo's caption. `section` is where it sits. */
+export type Saver = { label: string; section: string; save: SaveNow };
+
 export type Editor = {
   build: OwnerBuild;
   /** The forms' current values (unsaved included), for the live numbers. */
   drafts: MapStore<unknown>;
-  /** Which forms hold unsaved changes. */
-  dirty: MapStore<true>;
+  /** Which forms (by FormKey) and captions (`photos:<id>`) hold edits not stored yet, and where those stand. */
+  dirty: MapStore<PendingState>;
+  /** Everything that saves itself, by the same keys, for leaving the editor. */
+  savers: Map<string, Saver>;
 };
+
+export const createEditorStores = () => ({ drafts: new MapStore<unknown>(), dirty: new MapStore<PendingState>(), savers: new Map<string, Saver>() });
 
 export const EditorContext = createContext<Editor | null>(null);
 

@@ -6,9 +6,17 @@ import { FigureInput } from '@client/components/ui/figure-input';
 import { SelectField } from '@client/components/ui/select-field';
 import { TextField } from '@client/components/ui/text-field';
 import { TextAreaField } from '@client/components/ui/text-area-field';
+import { GrowingTextField } from '@client/components/ui/growing-text-field';
 import { useFieldWarning, useNumbers } from '../numbers/numbers-context';
 import { asNumber } from './form-values';
 import { useEditor, type FormKey } from './editor-stores';
+
+/**
+ * A row of a list (a credit, an extra line): on wide screens label, value and Remove side by side.
+ * The columns may shrink below their boxes' natural width (minmax(0, …)), so Remove stays inside
+ * the panel however narrow the middle column is.
+ */
+export const LIST_ROW = 'grid min-w-0 gap-2 border-b border-rule pb-3 sm:grid-cols-[minmax(0,2fr)_minmax(0,3fr)_auto] sm:items-start';
 
 /** A dotted path's error message in react-hook-form's nested errors. */
 export function errorAt(errors: FieldErrors, path: string): string | undefined {
@@ -74,7 +82,8 @@ export function TextInput<T extends FieldValues>({ register, errors, name, label
   const warning = useFieldWarning(form ?? 'engine', form ? name : '\u0000');
   return (
     <div className="flex flex-col gap-1">
-      <TextField label={label} autoComplete="off" {...register(name)} error={errorAt(errors, name)} {...(hint ? { hint } : {})} />
+      {/* Wraps instead of cutting off a long answer (a paint description, a tyre in the owner's words). */}
+      <GrowingTextField label={label} autoComplete="off" {...register(name)} error={errorAt(errors, name)} {...(hint ? { hint } : {})} />
       {/* The field's own error already says what is wrong; the spec check would only repeat it. */}
       {warning && !errorAt(errors, name) ? <Warning message={warning.message} why={warning.why} /> : null}
     </div>
@@ -94,7 +103,7 @@ export function MadeByFields<T extends FieldValues>({ register, errors, control 
     <div className="grid gap-4 border-t border-rule pt-3 sm:grid-cols-2">
       <SelectField label="Made by" options={MADE_BY_KINDS.map((k) => ({ value: k, label: MADE_BY_LABELS[k] }))} placeholder="Not said" {...register('madeBy.kind' as Path<T>)} error={errorAt(errors, 'madeBy.kind')} />
       {kind === 'shop' || kind === 'donor' ? (
-        <TextField label={kind === 'shop' ? 'Shop or person' : 'Donor vehicle'} autoComplete="off" {...register('madeBy.name' as Path<T>)} error={errorAt(errors, 'madeBy.name')} />
+        <GrowingTextField label={kind === 'shop' ? 'Shop or person' : 'Donor vehicle'} autoComplete="off" {...register('madeBy.name' as Path<T>)} error={errorAt(errors, 'madeBy.name')} />
       ) : (
         <div className="hidden sm:block" />
       )}

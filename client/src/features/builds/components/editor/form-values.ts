@@ -12,7 +12,7 @@ const isPlainObject = (v: unknown): v is Record<string, unknown> => typeof v ===
  * the owner sees (dropping a row would shift every index after it).
  */
 export function cleanValues(value: unknown, inRow = false): unknown {
-  if (Array.isArray(value)) return value.map((item) => cleanValues(item, true));
+  if (Array.isArray(value)) return withoutTrailingBlankRows(value.map((item) => cleanValues(item, true)));
   if (!isPlainObject(value)) return value;
   const out: Record<string, unknown> = {};
   for (const [key, child] of Object.entries(value)) {
@@ -25,6 +25,18 @@ export function cleanValues(value: unknown, inRow = false): unknown {
   // "Made by" with no choice made says nothing.
   if ('madeBy' in out && isPlainObject(out.madeBy) && !out.madeBy.kind) delete out.madeBy;
   return out;
+}
+
+const isBlankRow = (row: unknown) => isPlainObject(row) && Object.values(row).every((v) => v === '' || v === undefined || v === null);
+
+/**
+ * A row just added and not filled in yet is not sent (nor checked): the panel does not complain
+ * while the owner is still to type. Only rows at the end go, so no row before them changes index.
+ */
+export function withoutTrailingBlankRows<R>(rows: R[]): R[] {
+  let end = rows.length;
+  while (end > 0 && isBlankRow(rows[end - 1])) end--;
+  return end === rows.length ? rows : rows.slice(0, end);
 }
 
 /** zodResolver over cleaned values: the shared schema checks exactly what will be sent. */

@@ -29,7 +29,8 @@ function goTo(id: string) {
 export function SectionNav() {
   const { dirty } = useEditor();
   useStoreVersion(dirty);
-  const mark = (id: string) => (dirty.get(id) ? ' ●' : '');
+  // A photo's caption counts for the photos section.
+  const mark = (id: string) => (dirty.entries().some(([key]) => key === id || key.startsWith(`${id}:`)) ? ' ●' : '');
   return (
     <>
       <div className="sticky top-0 z-10 -mx-4 border-b border-rule bg-paper px-4 py-2 lg:hidden">
@@ -41,7 +42,7 @@ export function SectionNav() {
           {EDITOR_SECTIONS.map(([id, label]) => (
             <option key={id} value={id}>
               {label}
-              {mark(id) ? ' (unsaved)' : ''}
+              {mark(id) ? ' (not saved yet)' : ''}
             </option>
           ))}
         </select>
@@ -59,7 +60,7 @@ export function SectionNav() {
                 className="flex min-h-11 items-center px-3 text-sm hover:text-signal"
               >
                 {label}
-                {mark(id) ? <span className="ml-1 text-caution" aria-label="unsaved changes">●</span> : null}
+                {mark(id) ? <span className="ml-1 text-caution" aria-label="not saved yet">●</span> : null}
               </a>
             </li>
           ))}

@@ -1,8 +1,8 @@
 import { useId, useState } from 'react';
 import type { UnitSystem } from '@shared/calc';
-import { FORM_LABELS } from '../editor/editor-stores';
 import { useNumbers } from './numbers-context';
 import { NumberGroupView } from './number-group-view';
+import { groupWarnings } from './warning-names';
 import type { NumberGroup } from './types';
 
 export function UnitToggle() {
@@ -50,6 +50,7 @@ function CruiseInput() {
   );
 }
 
+/** The spec check's messages, each naming its section and field; an explanation shared by several is said once, under them. */
 export function SpecWarnings() {
   const { warnings } = useNumbers();
   if (!warnings.length) return <p className="text-sm text-ok">Spec check: the figures agree with each other.</p>;
@@ -57,11 +58,17 @@ export function SpecWarnings() {
     <div>
       <h3 className="font-display text-sm uppercase tracking-wide text-caution">Spec check · {warnings.length} to look at</h3>
       <ul className="mt-1 flex flex-col gap-2">
-        {warnings.map((w) => (
-          <li key={`${w.code}-${w.form}-${w.path}`} className="border-l-4 border-caution pl-2 text-sm">
-            <span className="font-semibold">{FORM_LABELS[w.form]}: </span>
-            {w.message}
-            <span className="block text-xs text-graphite">{w.why}</span>
+        {groupWarnings(warnings).map((g) => (
+          <li key={g.why} className="border-l-4 border-caution pl-2 text-sm">
+            <ul>
+              {g.items.map((item) => (
+                <li key={item.key} data-testid="spec-check-message">
+                  <span className="font-semibold">{item.field}: </span>
+                  {item.message}
+                </li>
+              ))}
+            </ul>
+            <span className="block text-xs text-graphite">{g.why}</span>
           </li>
         ))}
       </ul>

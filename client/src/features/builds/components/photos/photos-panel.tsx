@@ -63,7 +63,7 @@ export function PhotosPanel({ build }: { build: OwnerBuild }) {
         {photos.length ? (
           <>
             <p className="text-sm text-graphite">Drag a photo to reorder, or use Earlier / Later. The cover leads the public page, the card and your list of builds.</p>
-            <ol className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+            <ol className="grid gap-3 sm:grid-cols-2">
               {photos.map((photo, i) => (
                 <PhotoItem
                   key={photo.id}

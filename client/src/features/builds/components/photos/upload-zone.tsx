@@ -1,5 +1,6 @@
 import { useId, useRef, useState, type DragEvent } from 'react';
 import { formatNumber } from '@shared/calc';
+import { ApiError } from '@client/lib/api';
 import { useUploadPhoto } from '../../api/upload-photos';
 
 const TYPES = ['image/jpeg', 'image/png', 'image/webp', 'image/avif'];
@@ -14,9 +15,15 @@ type Upload = { key: string; name: string; progress: number; state: 'uploading' 
 /** Client-side pre-check (the server checks the bytes again): type and size, with a clear reason. */
 function precheck(file: File, maxBytes: number): string | null {
   if (/heic|heif/i.test(file.type) || /\.hei[cf]$/i.test(file.name)) return `${file.name} is a HEIC photo, which Placard cannot read yet: export it as JPEG.`;
-  if (!TYPES.includes(file.type)) return `${file.name}: not a JPEG, PNG, WebP or AVIF image.`;
+  if (!TYPES.includes(file.type)) return `${file.name} is not a JPEG, PNG, WebP or AVIF image.`;
   if (file.size > maxBytes) return `${file.name} is ${mb(file.size)}; the limit is ${mb(maxBytes)} a photo.`;
   return null;
+}
+
+/** Why the server refused a file: its own words name the file and the reason (type, size, pixels). */
+function refusalOf(file: File, err: Error): string {
+  const why = err instanceof ApiError ? err.fields.photos : undefined;
+  return why ?? `${file.name}: ${err.message}`;
 }
 
 export function UploadZone({ buildId, maxBytes, maxFiles }: { buildId: number; maxBytes: number; maxFiles: number }) {
@@ -37,15 +44,20 @@ export function UploadZone({ buildId, maxBytes, maxFiles }: { buildId: number; m
     });
     if (extra > 0) next.push({ key: `${stamp}-more`, name: `${extra} more`, progress: 0, state: 'refused', message: `At most ${maxFiles} photos at a time: ${extra} left out. Add them next.` });
     setUploads((list) => [...list.filter((u) => u.state !== 'done'), ...next]);
-    picked.forEach((file, i) => {
+    // In the order chosen, one after another: the first chosen arrives first, so it becomes the cover
+    // when the build has none yet (the server makes the first photo of a build its cover), and the
+    // photos keep the order they were chosen in.
+    void picked.reduce(async (before, file, i) => {
+      await before;
       const item = next[i]!;
       if (item.state !== 'uploading') return;
       // mutateAsync, not mutate: mutate's own callbacks fire for the latest call only.
-      upload.mutateAsync({ file, onProgress: (p) => patch(item.key, { progress: p }) }).then(
-        () => patch(item.key, { state: 'done', progress: 1 }),
-        (err: Error) => patch(item.key, { state: 'error', message: `${file.name}: ${err.message}` }),
+      await upload.mutateAsync({ file, onProgress: (p) => patch(item.key, { progress: p }) }).then(
+        // A photo stored clears the refusals of earlier choices: they have been read, and the next try worked.
+        () => setUploads((list) => list.filter((u) => u.key.startsWith(`${stamp}-`) || u.state === 'uploading').map((u) => (u.key === item.key ? { ...u, state: 'done', progress: 1 } : u))),
+        (err: Error) => patch(item.key, { state: 'error', message: refusalOf(file, err) }),
       );
-    });
+    }, Promise.resolve());
   };
 
   const onDrop = (e: DragEvent) => {

@@ -14,10 +14,10 @@ const FIELDS = Object.keys(BodySectionSchema.shape);
 
 export function BodyForm({ build }: { build: OwnerBuild }) {
   const mutation = useSaveSection(build.id, 'body');
-  const { form, onSubmit, formError, status, saving } = useEditorForm<BodySection, BodySection>({ formKey: 'body', schema: BodySectionSchema, fromBuild, mutation, fields: FIELDS });
+  const { form, panel } = useEditorForm<BodySection, BodySection>({ formKey: 'body', schema: BodySectionSchema, fromBuild, mutation, fields: FIELDS });
   const { register, control, formState: { errors } } = form;
   return (
-    <SectionForm id="body" title="Body and interior" status={status} formError={formError} saving={saving} onSubmit={onSubmit}>
+    <SectionForm id="body" title="Body and interior" {...panel}>
       <div className="grid gap-4 sm:grid-cols-2">
         <TextAreaField label="Paint" rows={2} {...register('paint')} error={errorAt(errors, 'paint')} />
         <TextAreaField label="Body modifications" rows={2} hint="Chop, channel, section, shaved handles…" {...register('bodyMods')} error={errorAt(errors, 'bodyMods')} />

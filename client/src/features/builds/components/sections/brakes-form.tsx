@@ -14,11 +14,11 @@ const TYPE_LABELS = { disc: 'Disc', drum: 'Drum', none: 'None' };
 
 export function BrakesForm({ build }: { build: OwnerBuild }) {
   const mutation = useSaveSection(build.id, 'brakes');
-  const { form, onSubmit, formError, status, saving } = useEditorForm<BrakesSection, BrakesSection>({ formKey: 'brakes', schema: BrakesSectionSchema, fromBuild, mutation, fields: FIELDS });
+  const { form, panel } = useEditorForm<BrakesSection, BrakesSection>({ formKey: 'brakes', schema: BrakesSectionSchema, fromBuild, mutation, fields: FIELDS });
   const { register, control, formState: { errors } } = form;
   const f = { register, errors, form: 'brakes' as const };
   return (
-    <SectionForm id="brakes" title="Brakes" caution status={status} formError={formError} saving={saving} onSubmit={onSubmit}>
+    <SectionForm id="brakes" title="Brakes" caution {...panel}>
       {(['front', 'rear'] as const).map((end) => (
         <FieldGroup key={end} title={end === 'front' ? 'Front brakes' : 'Rear brakes'}>
           <Choice {...f} name={`${end}.type`} label="Type" options={BRAKE_TYPES} labels={TYPE_LABELS} />

@@ -20,11 +20,11 @@ const FRAME_LABELS = { factory: 'Factory', modified: 'Modified factory', custom:
 
 export function ChassisForm({ build }: { build: OwnerBuild }) {
   const mutation = useSaveSection(build.id, 'chassis');
-  const { form, onSubmit, formError, status, saving } = useEditorForm<ChassisSection, ChassisSection>({ formKey: 'chassis', schema: ChassisSectionSchema, fromBuild, mutation, fields: FIELDS });
+  const { form, panel } = useEditorForm<ChassisSection, ChassisSection>({ formKey: 'chassis', schema: ChassisSectionSchema, fromBuild, mutation, fields: FIELDS });
   const { register, control, formState: { errors } } = form;
   const f = { register, errors, form: 'chassis' as const };
   return (
-    <SectionForm id="chassis" title="Chassis and suspension" caution status={status} formError={formError} saving={saving} onSubmit={onSubmit} below={<SectionNumbers section="chassis" />}>
+    <SectionForm id="chassis" title="Chassis and suspension" caution {...panel} below={<SectionNumbers section="chassis" />}>
       <div className="grid gap-4 sm:grid-cols-2">
         <Choice {...f} name="frame" label="Frame" options={FRAME_KINDS} labels={FRAME_LABELS} />
         <TextInput {...f} name="frameDescription" label="Frame description" />

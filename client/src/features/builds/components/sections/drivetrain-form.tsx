@@ -19,11 +19,11 @@ const LSD_LABELS = { open: 'Open', 'clutch-type': 'Clutch-type limited slip', 'g
 
 export function DrivetrainForm({ build }: { build: OwnerBuild }) {
   const mutation = useSaveSection(build.id, 'drivetrain');
-  const { form, onSubmit, formError, status, saving } = useEditorForm<DrivetrainSection, DrivetrainSection>({ formKey: 'drivetrain', schema: DrivetrainSectionSchema, fromBuild, mutation, fields: FIELDS });
+  const { form, panel } = useEditorForm<DrivetrainSection, DrivetrainSection>({ formKey: 'drivetrain', schema: DrivetrainSectionSchema, fromBuild, mutation, fields: FIELDS });
   const { register, control, formState: { errors } } = form;
   const f = { register, errors, form: 'drivetrain' as const };
   return (
-    <SectionForm id="drivetrain" title="Drivetrain" status={status} formError={formError} saving={saving} onSubmit={onSubmit} below={<SectionNumbers section="drivetrain" />}>
+    <SectionForm id="drivetrain" title="Drivetrain" {...panel} below={<SectionNumbers section="drivetrain" />}>
       <div className="grid gap-4 sm:grid-cols-2">
         <Choice {...f} name="transmissionType" label="Transmission type" options={TRANSMISSION_TYPES} labels={TRANSMISSION_LABELS} />
         <TextInput {...f} name="transmission" label="Transmission" hint="e.g. five-speed manual, overdrive fifth" />

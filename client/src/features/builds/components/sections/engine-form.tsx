@@ -16,12 +16,12 @@ const ASPIRATION_LABELS = { natural: 'Natural', supercharged: 'Supercharged', tu
 
 export function EngineForm({ build }: { build: OwnerBuild }) {
   const mutation = useSaveSection(build.id, 'engine');
-  const { form, onSubmit, formError, status, saving } = useEditorForm<EngineSection, EngineSection>({ formKey: 'engine', schema: EngineSectionSchema, fromBuild, mutation, fields: FIELDS });
+  const { form, panel } = useEditorForm<EngineSection, EngineSection>({ formKey: 'engine', schema: EngineSectionSchema, fromBuild, mutation, fields: FIELDS });
   const { register, control, formState: { errors } } = form;
   const aspiration = useWatch({ control, name: 'aspiration' });
   const f = { register, errors, form: 'engine' as const };
   return (
-    <SectionForm id="engine" title="Engine" status={status} formError={formError} saving={saving} onSubmit={onSubmit} below={<SectionNumbers section="engine" />}>
+    <SectionForm id="engine" title="Engine" {...panel} below={<SectionNumbers section="engine" />}>
       <div className="grid gap-4 sm:grid-cols-2">
         <Choice {...f} name="layout" label="Layout" options={ENGINE_LAYOUTS} labels={LAYOUT_LABELS} />
         <NumberField {...f} name="cylinders" label="Cylinders" />

@@ -29,11 +29,11 @@ const clean = (v: OverviewValues) => {
 
 export function OverviewForm({ build }: { build: OwnerBuild }) {
   const mutation = useUpdateBuild(build.id);
-  const { form, onSubmit, formError, status, saving } = useEditorForm<OverviewValues, BuildUpdateInput>({ formKey: 'overview', schema: BuildOverviewSchema, fromBuild, clean, mutation, fields: FIELDS });
+  const { form, panel } = useEditorForm<OverviewValues, BuildUpdateInput>({ formKey: 'overview', schema: BuildOverviewSchema, fromBuild, clean, mutation, fields: FIELDS });
   const { register, control, formState: { errors } } = form;
   const f = { register, errors, form: 'overview' as const };
   return (
-    <SectionForm id="overview" title="Overview" status={status} formError={formError} saving={saving} onSubmit={onSubmit} below={<SectionNumbers section="overview" />}>
+    <SectionForm id="overview" title="Overview" {...panel} below={<SectionNumbers section="overview" />}>
       <div className="grid gap-4 sm:grid-cols-2">
         <TextField label="Title" className="sm:col-span-2" {...register('title')} error={errorAt(errors, 'title')} />
         <NumberField {...f} name="modelYear" label="Model year" />

@@ -14,10 +14,10 @@ const asSent = <V,>(v: V) => v;
 
 export function PrivateForm({ build }: { build: OwnerBuild }) {
   const mutation = useSavePrivate(build.id);
-  const { form, onSubmit, formError, status, saving } = useEditorForm<Required<BuildPrivate>, BuildPrivate>({ formKey: 'private', schema: BuildPrivateSchema, fromBuild, clean: asSent, mutation, fields: Object.keys(BuildPrivateSchema.shape) });
+  const { form, panel } = useEditorForm<Required<BuildPrivate>, BuildPrivate>({ formKey: 'private', schema: BuildPrivateSchema, fromBuild, clean: asSent, mutation, fields: Object.keys(BuildPrivateSchema.shape) });
   const { register, formState: { errors } } = form;
   return (
-    <SectionForm id="private" title="Private details" status={status} formError={formError} saving={saving} onSubmit={onSubmit}>
+    <SectionForm id="private" title="Private details" {...panel}>
       <p className="border-l-4 border-ink bg-white/70 px-3 py-2 text-sm">
         <span className="font-semibold">Private — never on the public page or card.</span> Only you see these (and, once you enter a show, its organisers).
       </p>

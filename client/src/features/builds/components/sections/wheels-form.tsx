@@ -17,11 +17,11 @@ const FIELDS = Object.keys(WheelsSectionSchema.shape);
 
 export function WheelsForm({ build }: { build: OwnerBuild }) {
   const mutation = useSaveSection(build.id, 'wheels');
-  const { form, onSubmit, formError, status, saving } = useEditorForm<WheelsSection, WheelsSection>({ formKey: 'wheels', schema: WheelsSectionSchema, fromBuild, mutation, fields: FIELDS });
+  const { form, panel } = useEditorForm<WheelsSection, WheelsSection>({ formKey: 'wheels', schema: WheelsSectionSchema, fromBuild, mutation, fields: FIELDS });
   const { register, control, formState: { errors } } = form;
   const f = { register, errors, form: 'wheels' as const };
   return (
-    <SectionForm id="wheels" title="Wheels and tyres" status={status} formError={formError} saving={saving} onSubmit={onSubmit} below={<SectionNumbers section="wheels" />}>
+    <SectionForm id="wheels" title="Wheels and tyres" {...panel} below={<SectionNumbers section="wheels" />}>
       <p className="text-sm text-graphite">Staggered sizes front and rear are normal. Rim sizes are in inches, as the trade quotes them.</p>
       {(['front', 'rear'] as const).map((end) => (
         <FieldGroup key={end} title={end === 'front' ? 'Front wheels' : 'Rear wheels'}>

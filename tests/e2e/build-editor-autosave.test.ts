@@ -1,0 +1,94 @@
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import path from 'node:path';
+import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { createUser } from '../support/factories';
+import { createBuild } from '../support/build-factory';
+
+const env = useBrowserAndServer();
+
+async function signIn(page: Page, email: string, password: string, next: string) {
+  await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL(`${env.baseUrl}${next}`);
+}
+
+/** The engine section as the API stores it (the browser's own session). */
+async function storedEngine(page: Page, buildId: number) {
+  const res = await page.request.get(`${env.baseUrl}/api/builds/${buildId}`);
+  expect(res.status()).toBe(200);
+  const body = (await res.json()) as { build: { sections: { engine?: { bore?: { value: number; unit: string }; exhaust?: string } } } };
+  return body.build.sections.engine ?? {};
+}
+
+const VIEWPORTS = [
+  { name: 'phone', viewport: { width: 390, height: 844 } },
+  { name: 'desktop', viewport: { width: 1366, height: 900 } },
+] as const;
+
+describe('leaving the build editor never drops an edit', () => {
+  for (const { name, viewport } of VIEWPORTS) {
+    it(`saves a figure changed just before "← My builds", and says so when a value will not save (${name})`, async () => {
+      const { user, email, password } = await createUser({ name: 'Ivo Marrant' });
+      const build = await createBuild(user.id, { title: 'The Slate Roadster' });
+      const editorPath = `/builds/${build.id}`;
+      const context = await env.browser.newContext({ viewport, locale: 'en-GB' });
+      const page = await context.newPage();
+      const pageErrors: string[] = [];
+      page.on('pageerror', (err) => pageErrors.push(err.message));
+      await signIn(page, email, password, editorPath);
+
+      // Change a figure and leave at once: no pause for the autosave, no Save button.
+      const engine = page.getByRole('form', { name: 'Engine' });
+      await engine.getByLabel('Bore unit').selectOption('mm');
+      await engine.getByLabel('Bore', { exact: true }).fill('101.6');
+      await page.getByRole('link', { name: '← My builds' }).click();
+      await page.waitForURL(`${env.baseUrl}/builds`);
+      expect((await storedEngine(page, build.id)).bore).toMatchObject({ value: 101.6, unit: 'mm' });
+
+      // Back in the editor after a reload, the figure is there.
+      await page.goto(`${env.baseUrl}${editorPath}`);
+      await page.reload();
+      await expect.poll(() => page.getByRole('form', { name: 'Engine' }).getByLabel('Bore', { exact: true }).inputValue()).toBe('101.6');
+      await expect.poll(() => engine.getByRole('status').textContent()).toBe('Saved');
+
+      // A bore out of range is not sent: the panel says why, on the field and in its status.
+      await engine.getByLabel('Bore', { exact: true }).fill('2000');
+      await expect.poll(() => engine.getByRole('status').textContent()).toMatch(/^● Not saved: Bore must be between 20 and 200 mm\.$/);
+      await expect.poll(() => engine.getByRole('alert').filter({ hasText: 'Bore must be between 20 and 200 mm.' }).count()).toBeGreaterThan(0);
+      await engine.scrollIntoViewIfNeeded();
+      await page.screenshot({ path: path.join(SCREENSHOT_DIR, `build-editor-not-saved-${name}.png`) });
+
+      // Leaving with it names the panel and why, and staying keeps the edit in the box.
+      await page.getByRole('link', { name: '← My builds' }).click();
+      const dialog = page.getByRole('dialog');
+      await expect.poll(() => dialog.textContent()).toContain('Engine: Bore must be between 20 and 200 mm.');
+      await page.screenshot({ path: path.join(SCREENSHOT_DIR, `build-editor-leave-not-saved-${name}.png`) });
+      await dialog.getByRole('button', { name: 'Stay and fix' }).click();
+      expect(new URL(page.url()).pathname).toBe(editorPath);
+      await expect.poll(() => engine.getByLabel('Bore', { exact: true }).inputValue()).toBe('2000');
+      expect((await storedEngine(page, build.id)).bore).toMatchObject({ value: 101.6 });
+
+      // The summary at the top of the panel lists every error of the panel, not just the first.
+      await engine.getByLabel('Stroke', { exact: true }).fill('900');
+      const summary = engine.getByRole('alert').filter({ hasText: 'Not saved yet.' });
+      await expect.poll(() => summary.locator('li').allTextContents()).toEqual(['Bore must be between 20 and 200 mm.', 'Stroke must be between 20 and 200 mm.']);
+      await engine.getByLabel('Stroke', { exact: true }).fill('');
+
+      // Fixed, it saves by itself; text typed and left at once is kept as well.
+      await engine.getByLabel('Bore', { exact: true }).fill('102');
+      await expect.poll(() => engine.getByRole('status').textContent()).toBe('Saved');
+      await engine.getByLabel('Exhaust').fill('Twin 2.5 in pipes, hand-bent, through bullet mufflers that run the length of the frame rails');
+      await page.getByRole('link', { name: '← My builds' }).click();
+      await page.waitForURL(`${env.baseUrl}/builds`);
+      const stored = await storedEngine(page, build.id);
+      expect(stored.bore).toMatchObject({ value: 102, unit: 'mm' });
+      expect(stored.exhaust).toBe('Twin 2.5 in pipes, hand-bent, through bullet mufflers that run the length of the frame rails');
+
+      expect(pageErrors).toEqual([]);
+      await context.close();
+    }, 120_000);
+  }
+});
