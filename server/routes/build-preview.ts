@@ -10,7 +10,7 @@ import { renderPublicBuildPage } from '../pages/public-build-page';
 
 export const buildPreviewRouter = Router();
 
-const PreviewQuerySchema = z.object({ units: z.enum(['metric', 'imperial'], { error: 'Units must be metric or imperial.' }).default('metric') });
+const PreviewQuerySchema = z.object({ units: z.enum(['metric', 'uk', 'imperial'], { error: 'Units must be metric, uk or imperial.' }).default('metric') });
 
 /** The owner's look at the public page, draft or not: the same public allow-list, never cached. */
 buildPreviewRouter.get('/builds/:id/preview', requireUser, async (req, res) => {

@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import { formatQuantity, isUnitOf, UNITS, type QuantityKind, type Unit } from '@shared/calc';
+import { convert, formatQuantity, isUnitOf, preferredUnit, UNITS, type QuantityKind, type Unit, type UnitSystem } from '@shared/calc';
 import { BUILD_STYLE_LABELS, type BuildSummary } from '@shared/schemas/build';
 import type { FigureInput } from '@shared/schemas/figure';
 import { ProvenanceMark } from '@client/components/ui/provenance-mark';
@@ -7,13 +7,20 @@ import { PhotoImage } from './photos/photo-image';
 
 const kindOf = (unit: string) => (Object.keys(UNITS) as QuantityKind[]).find((k) => isUnitOf(k, unit));
 
-function Figure({ label, figure }: { label: string; figure: FigureInput | undefined }) {
-  if (!figure || !kindOf(figure.unit)) return null;
+// Displacement reads in litres or cubic inches, as the trade gives it.
+const DISPLACEMENT_UNIT: Record<UnitSystem, Unit> = { metric: 'L', imperial: 'in3', uk: 'L' };
+
+/** A figure in the owner's chosen units, whatever unit it was typed in, so the builds compare at a glance. */
+function Figure({ label, figure, system }: { label: string; figure: FigureInput | undefined; system: UnitSystem }) {
+  const kind = figure ? kindOf(figure.unit) : undefined;
+  if (!figure || !kind) return null;
+  const to = kind === 'volume' ? DISPLACEMENT_UNIT[system] : preferredUnit(kind, system);
+  const value = convert(kind, figure.value, figure.unit as never, to as never);
   return (
     <div className="flex flex-col">
       <dt className="text-xs uppercase tracking-wide text-graphite">{label}</dt>
       <dd className="font-display text-lg tabular-nums">
-        {formatQuantity({ value: figure.value, unit: figure.unit as Unit })}
+        {formatQuantity({ value, unit: to }, to === 'L' ? { decimals: 1 } : {})}
         <ProvenanceMark provenance={figure.provenance} />
       </dd>
     </div>
@@ -21,7 +28,7 @@ function Figure({ label, figure }: { label: string; figure: FigureInput | undefi
 }
 
 /** One build in "My builds": cover, title, year and style, key figures with their provenance, draft or published. */
-export function BuildSummaryCard({ build }: { build: BuildSummary }) {
+export function BuildSummaryCard({ build, system }: { build: BuildSummary; system: UnitSystem }) {
   const { power, weight, displacement } = build.keyFigures;
   const meta = [build.modelYear, build.style ? (BUILD_STYLE_LABELS[build.style as keyof typeof BUILD_STYLE_LABELS] ?? build.style) : null].filter(Boolean).join(' · ');
   return (
@@ -41,9 +48,9 @@ export function BuildSummaryCard({ build }: { build: BuildSummary }) {
           </div>
           {meta ? <p className="text-sm text-graphite">{meta}</p> : null}
           <dl className="mt-auto grid grid-cols-3 gap-2 text-ink">
-            <Figure label={power ? `Power (${power.at === 'wheel' ? 'wheels' : 'flywheel'})` : 'Power'} figure={power} />
-            <Figure label="Displacement" figure={displacement} />
-            <Figure label="Weight" figure={weight} />
+            <Figure label={power ? `Power (${power.at === 'wheel' ? 'wheels' : 'flywheel'})` : 'Power'} figure={power} system={system} />
+            <Figure label="Displacement" figure={displacement} system={system} />
+            <Figure label="Weight" figure={weight} system={system} />
           </dl>
         </div>
       </Link>

@@ -6,11 +6,14 @@ import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/stat
 import { useBuilds } from '../api/list-builds';
 import { BuildSummaryCard } from './build-summary-card';
 import { CreateBuildForm } from './create-build-form';
+import { UnitSystemSwitch } from './unit-system-switch';
+import { useUnitSystem } from './editor/unit-system';
 
 /** /builds — the owner's builds, and where a new build sheet starts. */
 export function MyBuildsPage() {
   const { data, isPending, error, refetch } = useBuilds();
   const [creating, setCreating] = useState(false);
+  const [system, setSystem] = useUnitSystem();
   const builds = data?.builds ?? [];
   return (
     <div>
@@ -33,14 +36,13 @@ export function MyBuildsPage() {
       ) : null}
       {builds.length ? (
         <>
-          {!creating ? (
-            <Button className="mb-4" onClick={() => setCreating(true)}>
-              New build
-            </Button>
-          ) : null}
+          <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
+            {!creating ? <Button onClick={() => setCreating(true)}>New build</Button> : <span />}
+            <UnitSystemSwitch system={system} onChange={setSystem} />
+          </div>
           <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
             {builds.map((b) => (
-              <BuildSummaryCard key={b.id} build={b} />
+              <BuildSummaryCard key={b.id} build={b} system={system} />
             ))}
           </ul>
         </>

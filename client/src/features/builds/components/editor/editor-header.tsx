@@ -7,11 +7,13 @@ import { Notice } from '@client/components/ui/notice';
 import { useSetPublished } from '../../api/set-published';
 import { useDeleteBuild } from '../../api/delete-build';
 import { useEditor } from './editor-stores';
+import { useUnitSystem } from './unit-system';
 
 const linkClass = 'inline-flex min-h-11 items-center border-2 border-ink px-4 font-display uppercase tracking-wide hover:bg-ink hover:text-paper';
 
 export function EditorHeader({ build }: { build: OwnerBuild }) {
   const { dirty } = useEditor();
+  const [system] = useUnitSystem();
   const navigate = useNavigate();
   const publish = useSetPublished(build.id);
   const remove = useDeleteBuild(build.id);
@@ -42,7 +44,7 @@ export function EditorHeader({ build }: { build: OwnerBuild }) {
             </Button>
           ) : null}
           {/* A draft's public address answers "not found" until it is published: the owner previews it through their own session. */}
-          <a href={build.published ? build.publicUrl : `/api/builds/${build.id}/preview`} target="_blank" rel="noopener" className={linkClass}>
+          <a href={`${build.published ? build.publicUrl : `/api/builds/${build.id}/preview`}?units=${system}`} target="_blank" rel="noopener" className={linkClass}>
             {build.published ? 'Open public page ↗' : 'Preview public page ↗'}
           </a>
           <Link to={`/builds/${build.id}/card`} className={linkClass}>

@@ -1,21 +1,13 @@
 import { useId, useState } from 'react';
-import type { UnitSystem } from '@shared/calc';
 import { useNumbers } from './numbers-context';
+import { UnitSystemSwitch } from '../unit-system-switch';
 import { NumberGroupView } from './number-group-view';
 import { groupWarnings } from './warning-names';
 import type { NumberGroup } from './types';
 
 export function UnitToggle() {
   const { system, setSystem } = useNumbers();
-  return (
-    <div role="group" aria-label="Units" className="flex border border-ink">
-      {(['metric', 'imperial'] as UnitSystem[]).map((s) => (
-        <button key={s} type="button" aria-pressed={system === s} onClick={() => setSystem(s)} className={`min-h-11 px-3 font-display text-sm uppercase ${system === s ? 'bg-ink text-paper' : 'hover:text-signal'}`}>
-          {s}
-        </button>
-      ))}
-    </div>
-  );
+  return <UnitSystemSwitch system={system} onChange={setSystem} />;
 }
 
 function CruiseInput() {
