@@ -1,5 +1,5 @@
 import { useState, type DragEvent } from 'react';
-import type { Photo } from '@shared/schemas/build';
+import { PHOTO_CAPTION_MAX, type Photo } from '@shared/schemas/build';
 import { Button } from '@client/components/ui/button';
 import { PhotoImage } from './photo-image';
 
@@ -44,7 +44,7 @@ export function PhotoItem({ photo, index, count, busy, onCaption, onCover, onMov
           <input
             id={`caption-${photo.id}`}
             value={caption}
-            maxLength={300}
+            maxLength={PHOTO_CAPTION_MAX}
             onChange={(e) => {
               setCaption(e.target.value);
               setState('idle');
