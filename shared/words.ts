@@ -1,4 +1,5 @@
 // Words and dates a person reads, in one place, so every screen says them the same way.
+import { formatNumber } from './calc/format';
 
 /** "1 account", "2 accounts", "1,204 builds". `many` for the irregular plurals ("entries"). */
 export function countOf(count: number, one: string, many = `${one}s`): string {
@@ -22,4 +23,10 @@ export function formatDateTime(value: string | Date): string {
   const d = typeof value === 'string' ? new Date(value) : value;
   if (Number.isNaN(d.getTime())) return '—';
   return `${formatDate(d)} ${pad(d.getHours())}:${pad(d.getMinutes())}`;
+}
+
+/** A file size as upload limits are set (1 MB = 1024 × 1024 bytes): "15 MB", "15.5 MB"; whole ones without a decimal. */
+export function megabytes(bytes: number): string {
+  const value = bytes / (1024 * 1024);
+  return `${formatNumber(value, { decimals: Number.isInteger(value) ? 0 : 1 })} MB`;
 }

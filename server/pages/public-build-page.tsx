@@ -4,6 +4,7 @@ import { BUILD_STYLE_LABELS, type Photo, type PublicBuild } from '@shared/schema
 import type { KeyFigure } from '@shared/schemas/card';
 import { config } from '../config';
 import { computeKeyFigures } from '@shared/build-sheet/key-figures';
+import { FUEL_LEVEL_LABELS, PROVENANCE_MARKS, inText } from '@shared/build-sheet/choice-labels';
 import { headlineOf } from '@shared/build-sheet/headline';
 import { DISPLACEMENT_ROW, engineLine, sectionViews, type SectionView } from '@shared/build-sheet/spec-lines';
 import { DynoChart } from './dyno-chart';
@@ -25,7 +26,7 @@ const UNIT_CHOICES: Array<[UnitSystem, string, string]> = [
 const absolute = (url: string) => (url.startsWith('http') ? url : `${config.publicBaseUrl}${url}`);
 const cover = (b: PublicBuild) => b.photos.find((p) => p.isCover) ?? b.photos[0] ?? null;
 const styleLabel = (s: string | null) => (s && s in BUILD_STYLE_LABELS ? BUILD_STYLE_LABELS[s as keyof typeof BUILD_STYLE_LABELS] : null);
-const mark = (f: { provenance: KeyFigure['provenance'] }) => (f.provenance === 'estimated' ? 'est.' : f.provenance === 'target' ? 'target' : null);
+const mark = (f: { provenance: KeyFigure['provenance'] }) => PROVENANCE_MARKS[f.provenance] || null;
 
 /** A photo in the sizes the browser picks from; a tap opens the largest copy (a plain link: no script needed). */
 function Picture({ photo, sizes, lazy, alt }: { photo: Photo; sizes: string; lazy: boolean; alt: string }) {
@@ -173,7 +174,7 @@ function WeighIns({ build, units }: { build: PublicBuild; units: UnitSystem }) {
         </tbody>
       </table>
       <p className="made">
-        Total {mass(cw.total)} · front {formatPercent(cw.frontPercent)} · left {formatPercent(cw.leftPercent)} · cross {formatPercent(cw.crossPercent)}. Weighed {w.date}, {w.withDriver ? 'with driver' : 'without driver'}, fuel {w.fuelLevel.replace('-', ' ')}.
+        Total {mass(cw.total)} · front {formatPercent(cw.frontPercent)} · left {formatPercent(cw.leftPercent)} · cross {formatPercent(cw.crossPercent)}. Weighed {w.date}, {w.withDriver ? 'with driver' : 'without driver'}, fuel {inText(FUEL_LEVEL_LABELS[w.fuelLevel])}.
       </p>
     </section>
   );
@@ -309,7 +310,9 @@ function Page({ build, units, show, preview }: { build: PublicBuild; units: Unit
           ) : null}
         </main>
         <footer>
-          <p>Figures marked est. are estimates and those marked target are goals; the rest were measured.</p>
+          <p>
+            Figures marked {PROVENANCE_MARKS.estimated} are estimates and those marked {PROVENANCE_MARKS.target} are goals; the rest were measured.
+          </p>
           <p>
             Build sheet {build.code} on Placard · updated {build.updatedAt.slice(0, 10)}
           </p>

@@ -11,6 +11,7 @@ import type { Build } from '../models/build';
 import { storage } from '../storage/index';
 import { keyOfMediaUrl } from '../storage/keys';
 import { computeKeyFigures } from '@shared/build-sheet/key-figures';
+import { PROVENANCE_MARKS } from '@shared/build-sheet/choice-labels';
 import { headlineOf } from '@shared/build-sheet/headline';
 import { engineLine, sectionViews } from '@shared/build-sheet/spec-lines';
 
@@ -74,7 +75,7 @@ export function cardContent(build: PublicBuild, settings: CardSettings, opts: { 
     .map((f) => {
       const [value = '', unit = ''] = f[units].text.split('\u00a0');
       const note = [f.note, f.measuredOn ? `measured ${f.measuredOn}` : ''].filter(Boolean).join(', ');
-      return { label: f.label, value, unit, mark: f.provenance === 'estimated' ? 'est.' : f.provenance === 'target' ? 'target' : '', note };
+      return { label: f.label, value, unit, mark: PROVENANCE_MARKS[f.provenance], note };
     });
   const views = sectionViews(build.sections, units, settings.sections);
   return {

@@ -1,5 +1,5 @@
 import { Op, type Transaction } from 'sequelize';
-import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES } from '@shared/schemas/build';
+import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES, photoTooLargeMessage } from '@shared/schemas/build';
 import { sequelize } from '../db/sequelize';
 import { Photo } from '../models/photo';
 import { newPhotoStorageKey, PHOTO_STORAGE_KEY, photoVariantKey } from '../storage/keys';
@@ -13,9 +13,7 @@ import { lockBuild, touchBuild } from './builds';
 export type PhotoFile = { buffer: Buffer; originalName: string };
 
 
-export const maxPhotoMegabytes = () => Math.round((PHOTO_MAX_BYTES / (1024 * 1024)) * 10) / 10;
-export const tooLargeError = () =>
-  new AppError(413, 'PAYLOAD_TOO_LARGE', `Each photo must be at most ${maxPhotoMegabytes()} MB.`, { photos: `Each photo must be at most ${maxPhotoMegabytes()} MB.` });
+export const tooLargeError = () => new AppError(413, 'PAYLOAD_TOO_LARGE', photoTooLargeMessage(), { photos: photoTooLargeMessage() });
 export const tooManyError = () => new ValidationError({ photos: `Send at most ${PHOTO_MAX_FILES} photos at a time.` });
 
 const refused = (message: string) => new ValidationError({ photos: message }, 'A photo was refused, so nothing was saved.');

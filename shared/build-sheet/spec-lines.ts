@@ -2,6 +2,7 @@
 // summaries a card prints. Both read only the public presenter's output (PublicBuild), never a model.
 import { ENGINEERING_CAUTION, convert, formatNumber, formatQuantity, parseUnit, preferredUnit, type QuantityKind, type Unit, type UnitOf, type UnitSystem } from '../calc';
 import type { FigureInput } from '../schemas/figure';
+import { BRAKE_TYPE_LABELS, FRAME_LABELS, LIMITED_SLIP_LABELS, MADE_BY_LABELS, PROVENANCE_MARKS, SPRING_LABELS, SUSPENSION_LABELS, TRANSMISSION_LABELS, inText } from './choice-labels';
 import {
   SECTION_KINDS,
   SECTION_LABELS,
@@ -28,7 +29,7 @@ export type SectionView = {
 };
 
 /** "est." and "target" in words beside a figure; measured figures are plain. */
-export const provenanceMark = (p: FigureInput['provenance']) => (p === 'estimated' ? 'est.' : p === 'target' ? 'target' : '');
+export const provenanceMark = (p: FigureInput['provenance']) => PROVENANCE_MARKS[p];
 
 const withMark = (text: string, f: FigureInput) => {
   const mark = provenanceMark(f.provenance);
@@ -55,9 +56,6 @@ const rpm = (n: number | undefined) => (n ? `${formatNumber(n)} rpm` : '');
 const at = (figure: string, r: number | undefined) => (figure && r ? `${figure} at ${rpm(r)}` : figure);
 const join = (parts: Array<string | undefined | null | false>, sep = ', ') => parts.filter((p): p is string => Boolean(p && p.trim())).join(sep);
 const cap = (s: string) => (s ? s[0]!.toUpperCase() + s.slice(1) : s);
-// Enum ids in words; the trade writes some with a hyphen (double-wishbone, coil-over, four-link).
-const SPACED = new Set(['beam-axle', 'solid-axle', 'ladder-bar', 'independent-rear', 'transverse-leaf', 'direct-drive']);
-const words = (id: string) => (id === 'triangulated-four-link' ? 'triangulated four-link' : SPACED.has(id) ? id.replace(/-/g, ' ') : id);
 const row = (label: string, value: string | undefined): SpecRow[] => (value && value.trim() ? [{ label, value: value.trim() }] : []);
 
 export function cylindersText(e: EngineSection): string {
@@ -98,10 +96,10 @@ export function engineLine(e: EngineSection | undefined, units: UnitSystem, opts
 
 function madeByText(m: { kind: string; name?: string } | undefined): string | null {
   if (!m) return null;
-  if (m.kind === 'owner') return m.name ? `Owner-built (${m.name})` : 'Owner-built';
+  if (m.kind === 'owner') return m.name ? `${MADE_BY_LABELS.owner} (${m.name})` : MADE_BY_LABELS.owner;
   if (m.kind === 'shop') return m.name ?? 'A shop';
-  if (m.kind === 'donor') return m.name ? `From a donor: ${m.name}` : 'From a donor vehicle';
-  if (m.kind === 'new') return m.name ? `Bought new: ${m.name}` : 'Bought new';
+  if (m.kind === 'donor') return m.name ? `From a donor: ${m.name}` : MADE_BY_LABELS.donor;
+  if (m.kind === 'new') return m.name ? `${MADE_BY_LABELS.new}: ${m.name}` : MADE_BY_LABELS.new;
   return null;
 }
 
@@ -132,7 +130,7 @@ function engineRows(e: EngineSection, u: UnitSystem): SpecRow[] {
 
 function transmissionText(d: DrivetrainSection): string {
   const n = d.gears?.length;
-  const type = d.transmissionType ? words(d.transmissionType) : '';
+  const type = d.transmissionType ? inText(TRANSMISSION_LABELS[d.transmissionType]) : '';
   const kind = join([n && d.transmissionType !== 'cvt' ? `${n}-speed` : '', type], ' ');
   return join([kind, d.transmission], ' — ');
 }
@@ -145,7 +143,7 @@ function drivetrainRows(d: DrivetrainSection, u: UnitSystem): SpecRow[] {
     ...row('Driveshaft', d.driveshaft),
     ...row('Rear axle', d.axle),
     ...row('Final drive', d.finalDrive ? `${formatNumber(d.finalDrive, { decimals: 2 })}:1` : ''),
-    ...row('Differential', d.limitedSlip ? cap(d.limitedSlip === 'open' ? 'open' : `${words(d.limitedSlip)}${['clutch-type', 'gear-type', 'electronic'].includes(d.limitedSlip) ? ' limited slip' : ''}`) : ''),
+    ...row('Differential', d.limitedSlip ? LIMITED_SLIP_LABELS[d.limitedSlip] : ''),
     ...row('Axle splines', d.axleSplines ? String(d.axleSplines) : ''),
     ...row('Top speed', showFigure('speed', d.topSpeed, u, { decimals: 0 })),
   ];
@@ -154,12 +152,14 @@ function drivetrainRows(d: DrivetrainSection, u: UnitSystem): SpecRow[] {
 type SuspensionEnd = NonNullable<ChassisSection['front']>;
 function suspensionText(s: SuspensionEnd | undefined, u: UnitSystem): string {
   if (!s) return '';
-  return join([s.type ? words(s.type) : '', s.springType ? words(s.springType) : '', s.springRate ? `${showFigure('springRate', s.springRate, u)} springs` : '', s.dampers, s.antiRollBar ? `anti-roll bar: ${s.antiRollBar}` : '', s.description]);
+  return join([s.type ? inText(SUSPENSION_LABELS[s.type]) : '', s.springType ? inText(SPRING_LABELS[s.springType]) : '', s.springRate ? `${showFigure('springRate', s.springRate, u)} springs` : '', s.dampers, s.antiRollBar ? `anti-roll bar: ${s.antiRollBar}` : '', s.description]);
 }
+
+const frameText = (c: ChassisSection) => (c.frame ? `${inText(FRAME_LABELS[c.frame])} frame` : '');
 
 function chassisRows(c: ChassisSection, u: UnitSystem): SpecRow[] {
   return [
-    ...row('Frame', cap(join([c.frame ? `${c.frame} frame` : '', c.frameDescription], ' — '))),
+    ...row('Frame', cap(join([frameText(c), c.frameDescription], ' — '))),
     ...row('Wheelbase', length(c.wheelbase, u, true)),
     ...row('Track', c.trackFront || c.trackRear ? join([c.trackFront ? `front ${length(c.trackFront, u, true)}` : '', c.trackRear ? `rear ${length(c.trackRear, u, true)}` : '']) : ''),
     ...row('Front suspension', cap(suspensionText(c.front, u))),
@@ -182,7 +182,7 @@ function brakeText(b: BrakeEnd | undefined, u: UnitSystem): string {
   if (!b) return '';
   if (b.type === 'none') return 'none';
   return join([
-    join([b.caliperPistons ? `${b.caliperPistons}-piston` : '', b.type ?? ''], ' '),
+    join([b.caliperPistons ? `${b.caliperPistons}-piston` : '', b.type ? inText(BRAKE_TYPE_LABELS[b.type]) : ''], ' '),
     b.rotorDiameter ? (b.rotorThickness ? `${length(b.rotorDiameter, u)} × ${length(b.rotorThickness, u)}` : length(b.rotorDiameter, u)) : '',
     b.caliper,
     b.pad,
@@ -219,8 +219,9 @@ function summaryOf(kind: SectionKind, s: Sections, rows: SpecRow[], u: UnitSyste
     }
     case 'chassis': {
       const c = s.chassis!;
-      const end = (label: string, e: SuspensionEnd | undefined) => (e && (e.type || e.springType) ? `${label} ${join([e.type ? words(e.type) : '', e.springType ? words(e.springType) : ''], ' ')}` : '');
-      return join([c.frame ? `${c.frame} frame` : c.frameDescription, end('front', c.front), end('rear', c.rear), c.wheelbase ? `wheelbase ${length(c.wheelbase, u, true)}` : ''], ' · ');
+      const end = (label: string, e: SuspensionEnd | undefined) =>
+        e && (e.type || e.springType) ? `${label} ${join([e.type ? inText(SUSPENSION_LABELS[e.type]) : '', e.springType ? inText(SPRING_LABELS[e.springType]) : ''], ' ')}` : '';
+      return join([frameText(c) || c.frameDescription, end('front', c.front), end('rear', c.rear), c.wheelbase ? `wheelbase ${length(c.wheelbase, u, true)}` : ''], ' · ');
     }
     case 'brakes': {
       const b = s.brakes!;

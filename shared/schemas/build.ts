@@ -4,6 +4,7 @@ import type { Sections, SectionKind } from './build-sections';
 import { parseDynoCsv } from './dyno-csv';
 import { text } from './text';
 import { calendarDate } from './dates';
+import { megabytes } from '../words';
 
 export const BUILD_STYLES = ['hot-rod', 'street-rod', 'custom', 'restomod', 'pro-touring', 'muscle', 'gasser', 'rat-rod', 'lowrider', 'truck', 'drag', 'other'] as const;
 export const BUILD_STYLE_LABELS: Record<(typeof BUILD_STYLES)[number], string> = {
@@ -67,6 +68,8 @@ export const PublishSchema = z.object({ published: z.boolean({ error: 'Published
 export const PHOTO_WIDTHS = [480, 960, 1600] as const;
 export const PHOTO_MAX_BYTES = 15 * 1024 * 1024;
 export const PHOTO_MAX_FILES = 12;
+export const PHOTO_CAPTION_MAX = 300;
+export const photoTooLargeMessage = () => `Each photo must be at most ${megabytes(PHOTO_MAX_BYTES)}.`;
 export const PhotoSchema = z.object({
   id: z.number().int(),
   caption: z.string(),
@@ -78,7 +81,7 @@ export const PhotoSchema = z.object({
   sources: z.array(z.object({ width: z.number().int(), height: z.number().int(), webp: z.string(), jpeg: z.string() })),
 });
 export type Photo = z.infer<typeof PhotoSchema>;
-export const PhotoUpdateSchema = z.object({ caption: shortText('Caption', 300).optional(), isCover: z.literal(true, { error: 'Set isCover to true to make this the cover.' }).optional() });
+export const PhotoUpdateSchema = z.object({ caption: shortText('Caption', PHOTO_CAPTION_MAX).optional(), isCover: z.literal(true, { error: 'Set isCover to true to make this the cover.' }).optional() });
 export const PhotoOrderSchema = z.object({ photoIds: z.array(z.number().int().positive()).min(1, { error: 'Send the photo ids in their new order.' }) });
 
 // Dyno runs

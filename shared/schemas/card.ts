@@ -60,6 +60,9 @@ export const CARD_LEGIBILITY: Record<'small' | 'large', Legibility> = {
 export const paperClass = (paper: Paper): keyof typeof CARD_LEGIBILITY => (paper === 'tabloid' || paper === 'a3' ? 'large' : 'small');
 /** Entry numbers run 1 to 9999. */
 export const CARD_ENTRY_NUMBER_MAX = 9999;
+/** The show block's longest show name and class name, in characters: what the designer's boxes take and the API accepts. */
+export const CARD_SHOW_NAME_MAX = 80;
+export const CARD_CLASS_NAME_MAX = 60;
 
 export const CardSettingsSchema = z.object({
   design: z.enum(CARD_DESIGNS, { error: `Design must be one of ${CARD_DESIGNS.join(', ')}.` }).default('poster'),
@@ -82,8 +85,8 @@ export const DEFAULT_CARD_SETTINGS: CardSettings = CardSettingsSchema.parse({});
 
 /** The show block printed large on a card; filled from the entry once events exist, or typed by the owner. */
 export const CardShowSchema = z.object({
-  showName: shortText('Show name', 80).optional(),
-  className: shortText('Class', 60).optional(),
+  showName: shortText('Show name', CARD_SHOW_NAME_MAX).optional(),
+  className: shortText('Class', CARD_CLASS_NAME_MAX).optional(),
   entryNumber: z
     .string()
     .trim()

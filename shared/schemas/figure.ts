@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { UNITS, convert, type QuantityKind, type UnitOf } from '../calc/units';
+import { UNITS, convert, type QuantityKind, type Unit, type UnitOf } from '../calc/units';
+import { formatQuantity } from '../calc/format';
 
 export const PROVENANCES = ['measured', 'estimated', 'target'] as const;
 export const ProvenanceSchema = z.enum(PROVENANCES, { error: 'Say whether the figure is measured, estimated or a target.' });
@@ -27,12 +28,23 @@ export function figureSchema<K extends QuantityKind>(kind: K, range: Range<K>) {
     .superRefine((f, ctx) => {
       const inRangeUnit = convert(kind, f.value, f.unit, range.unit);
       if (inRangeUnit < range.min || inRangeUnit > range.max) {
-        ctx.addIssue({ code: 'custom', path: ['value'], message: `${range.label} must be between ${range.min} and ${range.max} ${range.unit}.` });
+        ctx.addIssue({ code: 'custom', path: ['value'], message: figureRangeMessage(kind, range, f.unit) });
       }
       if (f.measuredOn && f.provenance !== 'measured') {
         ctx.addIssue({ code: 'custom', path: ['measuredOn'], message: 'Only a measured figure has a measurement date.' });
       }
     });
+}
+
+/**
+ * "Bore must be between 20 and 200 mm.", said again in the unit the owner typed when it is another
+ * ("… (0.79 in to 7.87 in)."), so inches need no sums. The one wording the form and the API both show.
+ */
+export function figureRangeMessage<K extends QuantityKind>(kind: K, range: Range<K>, typedUnit?: string): string {
+  const base = `${range.label} must be between ${range.min} and ${range.max} ${range.unit}`;
+  if (!typedUnit || typedUnit === range.unit || !(typedUnit in UNITS[kind])) return `${base}.`;
+  const inTyped = (v: number) => formatQuantity({ value: convert(kind, v, range.unit, typedUnit as UnitOf<K>), unit: typedUnit as Unit });
+  return `${base} (${inTyped(range.min)} to ${inTyped(range.max)}).`;
 }
 
 export type FigureInput = {

@@ -1,6 +1,7 @@
 import { useId, useState } from 'react';
-import { CalcInputError, convert, formatQuantity, toSystem, UNIT_LABELS, type QuantityKind, type Unit, type UnitOf, type UnitSystem, PREFERRED_UNITS } from '@shared/calc';
+import { CalcInputError, formatQuantity, toSystem, UNIT_LABELS, type QuantityKind, type Unit, type UnitOf, type UnitSystem, PREFERRED_UNITS } from '@shared/calc';
 import { PROVENANCES, type FigureInput as Figure } from '@shared/schemas/figure';
+import { PROVENANCE_LABELS } from '@shared/build-sheet/choice-labels';
 
 /** The units offered for each kind, both systems; a saved figure in another unit is still shown. */
 export const FIGURE_UNITS: Partial<{ [K in QuantityKind]: UnitOf<K>[] }> = {
@@ -16,8 +17,6 @@ export const FIGURE_UNITS: Partial<{ [K in QuantityKind]: UnitOf<K>[] }> = {
 
 const IMPERIAL = new Set<string>(['in', 'ft', 'mi', 'lb', 'lbf', 'lbft', 'hp', 'psi', 'in3', 'mph', 'lb/in', 'lb/in3', 'lb/ft']);
 export const systemOfUnit = (unit: string): UnitSystem => (IMPERIAL.has(unit) ? 'imperial' : 'metric');
-
-const PROVENANCE_LABELS = { measured: 'Measured', estimated: 'Estimated', target: 'Target' } as const;
 
 type NestedError = { message?: string; value?: { message?: string }; unit?: { message?: string }; provenance?: { message?: string }; measuredOn?: { message?: string } };
 
@@ -56,20 +55,6 @@ function otherSystem(kind: QuantityKind, figure: Figure | undefined): string {
   }
 }
 
-const RANGE_MESSAGE = /between (-?[\d.]+) and (-?[\d.]+) (\S+)\.$/;
-
-/** "Bore must be between 20 and 200 mm." said again in the unit the owner typed, so inches need no sums. */
-function rangeInOwnersUnit(kind: QuantityKind, message: string, unit: string): string {
-  const m = RANGE_MESSAGE.exec(message);
-  if (!m || m[3] === unit) return message;
-  try {
-    const [lo, hi] = [Number(m[1]), Number(m[2])].map((v) => convert(kind, v, m[3] as UnitOf<typeof kind>, unit as UnitOf<typeof kind>));
-    return `${message.slice(0, -1)} (${formatQuantity({ value: lo!, unit: unit as Unit })} to ${formatQuantity({ value: hi!, unit: unit as Unit })}).`;
-  } catch {
-    return message;
-  }
-}
-
 /**
  * A build-sheet figure: number, unit (both systems), provenance and, when measured, the date.
  * Controlled: the value is the whole figure, or undefined while the number box is empty.
@@ -97,7 +82,7 @@ export function FigureInput({ label, kind, value, onChange, onBlur, system, erro
     onChange({ value: number, unit: next.unit ?? unit, provenance: nextProvenance, ...(measuredOn ? { measuredOn } : {}), ...(evidencePhotoId ? { evidencePhotoId } : {}) });
   };
 
-  const messages = [error?.message, error?.value?.message, error?.unit?.message, error?.provenance?.message, error?.measuredOn?.message].filter((m): m is string => Boolean(m)).map((m) => rangeInOwnersUnit(kind, m, unit));
+  const messages = [error?.message, error?.value?.message, error?.unit?.message, error?.provenance?.message, error?.measuredOn?.message].filter((m): m is string => Boolean(m));
   const other = otherSystem(kind, value);
   const boxClass = 'min-h-11 border bg-white px-2 text-base outline-none focus:border-ink focus:ring-1 focus:ring-ink';
 

@@ -2,10 +2,13 @@ import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { CardPreview } from './card-preview';
 import {
+  CARD_CLASS_NAME_MAX,
   CARD_DESIGNS,
   CARD_DESIGN_LABELS,
+  CARD_ENTRY_NUMBER_MAX,
   CARD_FIGURES,
   CARD_FIGURE_LABELS,
+  CARD_SHOW_NAME_MAX,
   ORIENTATIONS,
   PAPERS,
   PAPER_SIZES_PT,
@@ -127,9 +130,9 @@ function Designer({ buildId, data }: { buildId: number; data: CardSettingsRespon
           <Panel title="For a show (optional)">
             <p className="mb-3 text-sm text-graphite">Printed large on the card. Not saved: each show has its own.</p>
             <div className="space-y-3">
-              <ShowField label="Show name" value={show.showName ?? ''} max={80} onChange={(v) => setShow((s) => ({ ...s, showName: v }))} />
-              <ShowField label="Class" value={show.className ?? ''} max={60} onChange={(v) => setShow((s) => ({ ...s, className: v }))} />
-              <ShowField label="Entry number (1 to 9999)" value={show.entryNumber ?? ''} max={4} inputMode="numeric" onChange={(v) => setShow((s) => ({ ...s, entryNumber: v.replace(/\D/g, '') }))} />
+              <ShowField label="Show name" value={show.showName ?? ''} max={CARD_SHOW_NAME_MAX} onChange={(v) => setShow((s) => ({ ...s, showName: v }))} />
+              <ShowField label="Class" value={show.className ?? ''} max={CARD_CLASS_NAME_MAX} onChange={(v) => setShow((s) => ({ ...s, className: v }))} />
+              <ShowField label={`Entry number (1 to ${CARD_ENTRY_NUMBER_MAX})`} value={show.entryNumber ?? ''} max={String(CARD_ENTRY_NUMBER_MAX).length} inputMode="numeric" onChange={(v) => setShow((s) => ({ ...s, entryNumber: v.replace(/\D/g, '') }))} />
             </div>
           </Panel>
         </div>

@@ -1,6 +1,7 @@
 import { Controller, useWatch, type Control, type FieldValues, type Path, type UseFormRegister, type FieldErrors } from 'react-hook-form';
 import type { QuantityKind } from '@shared/calc';
 import { MADE_BY_KINDS } from '@shared/schemas/build-sections';
+import { MADE_BY_LABELS } from '@shared/build-sheet/choice-labels';
 import type { FigureInput as Figure } from '@shared/schemas/figure';
 import { FigureInput } from '@client/components/ui/figure-input';
 import { SelectField } from '@client/components/ui/select-field';
@@ -93,8 +94,6 @@ export function TextInput<T extends FieldValues>({ register, errors, name, label
 export function Choice<T extends FieldValues>({ register, errors, name, label, options, labels, placeholder = 'Not said' }: Registered<T> & { options: readonly string[]; labels?: Record<string, string>; placeholder?: string }) {
   return <SelectField label={label} options={options.map((value) => ({ value, label: labels?.[value] ?? value }))} placeholder={placeholder} {...register(name)} error={errorAt(errors, name)} />;
 }
-
-const MADE_BY_LABELS: Record<(typeof MADE_BY_KINDS)[number], string> = { owner: 'Owner-built', shop: 'A shop or person', donor: 'From a donor vehicle', new: 'Bought new' };
 
 /** "Made by" and "why this choice", on every spec section. */
 export function MadeByFields<T extends FieldValues>({ register, errors, control }: { register: UseFormRegister<T>; errors: FieldErrors<T>; control: Control<T> }) {

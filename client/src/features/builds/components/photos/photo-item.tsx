@@ -1,5 +1,5 @@
 import type { DragEvent } from 'react';
-import type { Photo } from '@shared/schemas/build';
+import { PHOTO_CAPTION_MAX, type Photo } from '@shared/schemas/build';
 import { Button } from '@client/components/ui/button';
 import { GrowingTextField } from '@client/components/ui/growing-text-field';
 import { useAutosavedText } from '../editor/use-autosaved-text';
@@ -34,7 +34,7 @@ export function PhotoItem({ photo, index, count, busy, onCaption, onCover, onMov
       <GrowingTextField
         label="Caption"
         value={caption.text}
-        maxLength={300}
+        maxLength={PHOTO_CAPTION_MAX}
         onChange={(e) => caption.change(e.target.value)}
         onBlur={() => void caption.saveNow()}
         onKeyDown={(e) => {

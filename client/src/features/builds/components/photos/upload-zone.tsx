@@ -1,14 +1,9 @@
 import { useId, useRef, useState, type DragEvent } from 'react';
-import { formatNumber } from '@shared/calc';
 import { ApiError } from '@client/lib/api';
+import { megabytes } from '@shared/words';
 import { useUploadPhoto } from '../../api/upload-photos';
 
 const TYPES = ['image/jpeg', 'image/png', 'image/webp', 'image/avif'];
-// Whole megabytes print without a decimal ("15 MB", not "15.0 MB").
-const mb = (bytes: number) => {
-  const value = bytes / (1024 * 1024);
-  return `${formatNumber(value, { decimals: Number.isInteger(value) ? 0 : 1 })} MB`;
-};
 
 type Upload = { key: string; name: string; progress: number; state: 'uploading' | 'done' | 'error' | 'refused'; message?: string };
 
@@ -16,7 +11,7 @@ type Upload = { key: string; name: string; progress: number; state: 'uploading' 
 function precheck(file: File, maxBytes: number): string | null {
   if (/heic|heif/i.test(file.type) || /\.hei[cf]$/i.test(file.name)) return `${file.name} is a HEIC photo, which Placard cannot read yet: export it as JPEG.`;
   if (!TYPES.includes(file.type)) return `${file.name} is not a JPEG, PNG, WebP or AVIF image.`;
-  if (file.size > maxBytes) return `${file.name} is ${mb(file.size)}; the limit is ${mb(maxBytes)} a photo.`;
+  if (file.size > maxBytes) return `${file.name} is ${megabytes(file.size)}; the limit is ${megabytes(maxBytes)} a photo.`;
   return null;
 }
 
@@ -99,7 +94,7 @@ export function UploadZone({ buildId, maxBytes, maxFiles }: { buildId: number; m
           }}
         />
         <p className="text-xs text-graphite">
-          JPEG, PNG, WebP or AVIF, up to {mb(maxBytes)} each, {maxFiles} at a time. Location data is stripped; each photo is stored in sizes for phones and print.
+          JPEG, PNG, WebP or AVIF, up to {megabytes(maxBytes)} each, {maxFiles} at a time. Location data is stripped; each photo is stored in sizes for phones and print.
         </p>
       </div>
       {uploads.length ? (

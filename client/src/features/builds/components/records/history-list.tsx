@@ -2,12 +2,13 @@ import { formatQuantity, isUnitOf, UNITS, type QuantityKind, type Unit } from '@
 import type { FigureChange, OwnerBuild } from '@shared/schemas/build';
 import { SECTION_LABELS, type SectionKind } from '@shared/schemas/build-sections';
 import type { FigureInput } from '@shared/schemas/figure';
+import { PROVENANCE_LABELS, inText } from '@shared/build-sheet/choice-labels';
 
 const kindOf = (unit: string) => (Object.keys(UNITS) as QuantityKind[]).find((k) => isUnitOf(k, unit));
 
 function figureText(f: FigureInput): string {
   const quantity = kindOf(f.unit) ? formatQuantity({ value: f.value, unit: f.unit as Unit }) : `${f.value} ${f.unit}`;
-  return `${f.provenance} ${quantity}`;
+  return `${inText(PROVENANCE_LABELS[f.provenance])} ${quantity}`;
 }
 
 /** "estimated 1,250 kg → measured 1,287 kg on 2026-05-30" */

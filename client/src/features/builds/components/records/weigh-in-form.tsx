@@ -3,6 +3,7 @@ import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { FUEL_LEVELS, WeighInCreateSchema, type OwnerBuild, type WeighInCreateInput } from '@shared/schemas/build';
 import { cornerWeights, formatNumber, formatPercent } from '@shared/calc';
+import { FUEL_LEVEL_LABELS } from '@shared/build-sheet/choice-labels';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
 import { SelectField } from '@client/components/ui/select-field';
@@ -12,7 +13,6 @@ import { asNumber, placeServerErrors } from '../editor/form-values';
 import { errorAt } from '../editor/fields';
 import { attempt } from '../numbers/read';
 
-export const FUEL_LABELS: Record<(typeof FUEL_LEVELS)[number], string> = { empty: 'Empty', quarter: 'A quarter', half: 'Half', 'three-quarters': 'Three quarters', full: 'Full' };
 const CORNERS = [
   ['leftFront', 'LF', 'Left front'],
   ['rightFront', 'RF', 'Right front'],
@@ -67,7 +67,7 @@ export function WeighInForm({ build, onDone }: { build: OwnerBuild; onDone: () =
       </div>
       <LiveSplits values={values as Partial<Values>} unit={values.unit ?? 'kg'} />
       <div className="grid gap-4 sm:grid-cols-2">
-        <SelectField label="Fuel" options={FUEL_LEVELS.map((f) => ({ value: f, label: FUEL_LABELS[f] }))} {...register('fuelLevel')} error={errorAt(errors, 'fuelLevel')} />
+        <SelectField label="Fuel" options={FUEL_LEVELS.map((f) => ({ value: f, label: FUEL_LEVEL_LABELS[f] }))} {...register('fuelLevel')} error={errorAt(errors, 'fuelLevel')} />
         <label className="flex min-h-11 items-center gap-3 self-end">
           <input type="checkbox" className="h-5 w-5 accent-ink" {...register('withDriver')} />
           <span>Driver in the car</span>

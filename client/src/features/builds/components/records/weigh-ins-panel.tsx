@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import type { OwnerBuild, WeighIn } from '@shared/schemas/build';
+import { FUEL_LEVEL_LABELS, inText } from '@shared/build-sheet/choice-labels';
 import { cornerWeights, formatNumber, formatPercent, formatQuantity, toSystem, type Unit } from '@shared/calc';
 import { Button } from '@client/components/ui/button';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
@@ -8,7 +9,7 @@ import { useApplyWeighIn } from '../../api/apply-weigh-in';
 import { useDeleteWeighIn } from '../../api/delete-weigh-in';
 import { EditorSection } from '../editor/section-form';
 import { attempt } from '../numbers/read';
-import { FUEL_LABELS, WeighInForm } from './weigh-in-form';
+import { WeighInForm } from './weigh-in-form';
 
 const newestFirst = (a: WeighIn, b: WeighIn) => (a.date < b.date ? 1 : a.date > b.date ? -1 : b.id - a.id);
 
@@ -65,7 +66,7 @@ export function WeighInsPanel({ build }: { build: OwnerBuild }) {
           {list.map((w) => (
             <li key={w.id} className="border border-rule p-3">
               <p className="font-display uppercase">
-                {w.date} · {w.withDriver ? 'with driver' : 'no driver'} · fuel: {FUEL_LABELS[w.fuelLevel].toLowerCase()}
+                {w.date} · {w.withDriver ? 'with driver' : 'no driver'} · fuel: {inText(FUEL_LEVEL_LABELS[w.fuelLevel])}
               </p>
               {w.note ? <p className="text-sm text-graphite">{w.note}</p> : null}
               <div className="mt-2">

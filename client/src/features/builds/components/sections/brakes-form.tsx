@@ -1,5 +1,6 @@
 import { BRAKE_TYPES, BrakesSectionSchema, type BrakesSection } from '@shared/schemas/build-sections';
 import type { OwnerBuild } from '@shared/schemas/build';
+import { BRAKE_TYPE_LABELS } from '@shared/build-sheet/choice-labels';
 import { useSaveSection } from '../../api/save-section';
 import { useEditorForm } from '../editor/use-editor-form';
 import { MADE_BY_BLANKS, withBlanks } from '../editor/form-values';
@@ -10,7 +11,6 @@ const END_TEXT = ['type', 'caliper', 'pad'];
 const TEXT = [...END_TEXT.map((k) => `front.${k}`), ...END_TEXT.map((k) => `rear.${k}`), 'masterCylinder', 'booster', 'parkingBrake', ...MADE_BY_BLANKS];
 const fromBuild = (b: OwnerBuild) => withBlanks<BrakesSection>(b.sections.brakes, TEXT);
 const FIELDS = Object.keys(BrakesSectionSchema.shape);
-const TYPE_LABELS = { disc: 'Disc', drum: 'Drum', none: 'None' };
 
 export function BrakesForm({ build }: { build: OwnerBuild }) {
   const mutation = useSaveSection(build.id, 'brakes');
@@ -21,7 +21,7 @@ export function BrakesForm({ build }: { build: OwnerBuild }) {
     <SectionForm id="brakes" title="Brakes" caution {...panel}>
       {(['front', 'rear'] as const).map((end) => (
         <FieldGroup key={end} title={end === 'front' ? 'Front brakes' : 'Rear brakes'}>
-          <Choice {...f} name={`${end}.type`} label="Type" options={BRAKE_TYPES} labels={TYPE_LABELS} />
+          <Choice {...f} name={`${end}.type`} label="Type" options={BRAKE_TYPES} labels={BRAKE_TYPE_LABELS} />
           <NumberField {...f} name={`${end}.caliperPistons`} label="Caliper pistons" />
           <FigureField control={control} form="brakes" name={`${end}.rotorDiameter`} label="Rotor or drum diameter" kind="length" />
           <FigureField control={control} form="brakes" name={`${end}.rotorThickness`} label="Rotor thickness" kind="length" />

@@ -1,5 +1,6 @@
 import { ChassisSectionSchema, FRAME_KINDS, type ChassisSection } from '@shared/schemas/build-sections';
 import type { OwnerBuild } from '@shared/schemas/build';
+import { FRAME_LABELS } from '@shared/build-sheet/choice-labels';
 import { useSaveSection } from '../../api/save-section';
 import { useEditorForm } from '../editor/use-editor-form';
 import { MADE_BY_BLANKS, withBlanks } from '../editor/form-values';
@@ -16,7 +17,6 @@ const fromBuild = (b: OwnerBuild) => {
   return { ...values, tubes: (values.tubes ?? []).map((t) => ({ ...t, material: t.material ?? '' })) };
 };
 const FIELDS = Object.keys(ChassisSectionSchema.shape);
-const FRAME_LABELS = { factory: 'Factory', modified: 'Modified factory', custom: 'Custom tube' };
 
 export function ChassisForm({ build }: { build: OwnerBuild }) {
   const mutation = useSaveSection(build.id, 'chassis');

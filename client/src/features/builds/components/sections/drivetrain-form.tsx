@@ -1,5 +1,6 @@
 import { DrivetrainSectionSchema, LIMITED_SLIP_TYPES, TRANSMISSION_TYPES, type DrivetrainSection } from '@shared/schemas/build-sections';
 import type { OwnerBuild } from '@shared/schemas/build';
+import { LIMITED_SLIP_LABELS, TRANSMISSION_LABELS } from '@shared/build-sheet/choice-labels';
 import { useSaveSection } from '../../api/save-section';
 import { useEditorForm } from '../editor/use-editor-form';
 import { MADE_BY_BLANKS, withBlanks } from '../editor/form-values';
@@ -14,8 +15,6 @@ const fromBuild = (b: OwnerBuild) => {
   return { ...values, gears: values.gears ?? [] };
 };
 const FIELDS = Object.keys(DrivetrainSectionSchema.shape);
-const TRANSMISSION_LABELS = { manual: 'Manual', sequential: 'Sequential', 'dog-engagement': 'Dog-engagement', automatic: 'Automatic', cvt: 'CVT', 'direct-drive': 'Direct drive' };
-const LSD_LABELS = { open: 'Open', 'clutch-type': 'Clutch-type limited slip', 'gear-type': 'Gear-type limited slip', locker: 'Locker', spool: 'Spool', electronic: 'Electronic' };
 
 export function DrivetrainForm({ build }: { build: OwnerBuild }) {
   const mutation = useSaveSection(build.id, 'drivetrain');
@@ -31,7 +30,7 @@ export function DrivetrainForm({ build }: { build: OwnerBuild }) {
       <GearsInput control={control} name="gears" errors={errors} />
       <div className="grid gap-4 sm:grid-cols-2">
         <NumberField {...f} name="finalDrive" label="Final drive ratio" hint="e.g. 3.73" />
-        <Choice {...f} name="limitedSlip" label="Differential" options={LIMITED_SLIP_TYPES} labels={LSD_LABELS} />
+        <Choice {...f} name="limitedSlip" label="Differential" options={LIMITED_SLIP_TYPES} labels={LIMITED_SLIP_LABELS} />
         <TextInput {...f} name="axle" label="Rear axle" />
         <NumberField {...f} name="axleSplines" label="Axle splines" />
         <TextInput {...f} name="clutch" label="Clutch" />

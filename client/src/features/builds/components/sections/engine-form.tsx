@@ -1,6 +1,7 @@
 import { useWatch } from 'react-hook-form';
 import { ASPIRATIONS, ENGINE_LAYOUTS, EngineSectionSchema, type EngineSection } from '@shared/schemas/build-sections';
 import type { OwnerBuild } from '@shared/schemas/build';
+import { ASPIRATION_LABELS, ENGINE_LAYOUT_LABELS } from '@shared/build-sheet/choice-labels';
 import { useSaveSection } from '../../api/save-section';
 import { useEditorForm } from '../editor/use-editor-form';
 import { MADE_BY_BLANKS, withBlanks } from '../editor/form-values';
@@ -11,8 +12,6 @@ import { SectionNumbers } from '../numbers/numbers-panel';
 const TEXT = ['layout', 'aspiration', 'blockMaterial', 'headMaterial', 'superchargerType', 'pulley', 'fuel', 'induction', 'ignition', 'cooling', 'exhaust', ...MADE_BY_BLANKS];
 const fromBuild = (b: OwnerBuild) => withBlanks<EngineSection>(b.sections.engine, TEXT);
 const FIELDS = Object.keys(EngineSectionSchema.shape);
-const LAYOUT_LABELS = { inline: 'Inline', V: 'V', flat: 'Flat', rotary: 'Rotary', electric: 'Electric' };
-const ASPIRATION_LABELS = { natural: 'Natural', supercharged: 'Supercharged', turbocharged: 'Turbocharged' };
 
 export function EngineForm({ build }: { build: OwnerBuild }) {
   const mutation = useSaveSection(build.id, 'engine');
@@ -23,7 +22,7 @@ export function EngineForm({ build }: { build: OwnerBuild }) {
   return (
     <SectionForm id="engine" title="Engine" {...panel} below={<SectionNumbers section="engine" />}>
       <div className="grid gap-4 sm:grid-cols-2">
-        <Choice {...f} name="layout" label="Layout" options={ENGINE_LAYOUTS} labels={LAYOUT_LABELS} />
+        <Choice {...f} name="layout" label="Layout" options={ENGINE_LAYOUTS} labels={ENGINE_LAYOUT_LABELS} />
         <NumberField {...f} name="cylinders" label="Cylinders" />
         <FigureField control={control} form="engine" name="bore" label="Bore" kind="length" />
         <FigureField control={control} form="engine" name="stroke" label="Stroke" kind="length" />

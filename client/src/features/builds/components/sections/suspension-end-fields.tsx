@@ -1,21 +1,8 @@
 import type { Control, FieldErrors, UseFormRegister } from 'react-hook-form';
 import { SPRING_TYPES, SUSPENSION_TYPES, type ChassisSection } from '@shared/schemas/build-sections';
+import { SPRING_LABELS, SUSPENSION_LABELS } from '@shared/build-sheet/choice-labels';
 import { Choice, FigureField, NumberField, TextInput } from '../editor/fields';
 import { FieldGroup } from '../editor/section-form';
-
-const SUSPENSION_LABELS: Record<string, string> = {
-  'double-wishbone': 'Double wishbone',
-  strut: 'Strut',
-  'beam-axle': 'Beam axle',
-  'solid-axle': 'Solid axle',
-  'four-link': 'Four-link',
-  'triangulated-four-link': 'Triangulated four-link',
-  'ladder-bar': 'Ladder bar',
-  leaf: 'Leaf',
-  'independent-rear': 'Independent rear',
-  other: 'Other',
-};
-const SPRING_LABELS: Record<string, string> = { 'coil-over': 'Coil-over', coil: 'Coil', leaf: 'Leaf', air: 'Air', torsion: 'Torsion bar', 'transverse-leaf': 'Transverse leaf' };
 
 type Props = { end: 'front' | 'rear'; register: UseFormRegister<ChassisSection>; errors: FieldErrors<ChassisSection>; control: Control<ChassisSection> };
 
