@@ -1,6 +1,6 @@
 // The build sheet in words, in one unit system: the rows the public page lists and the one-line
 // summaries a card prints. Both read only the public presenter's output (PublicBuild), never a model.
-import { ENGINEERING_CAUTION, convert, formatNumber, formatQuantity, parseUnit, preferredUnit, type QuantityKind, type Unit, type UnitOf, type UnitSystem } from '../calc';
+import { ENGINEERING_CAUTION, convert, formatNumber, formatQuantity, parseUnit, preferredUnit, shownDecimals, type QuantityKind, type TradePrecision, type Unit, type UnitOf, type UnitSystem } from '../calc';
 import type { FigureInput } from '../schemas/figure';
 import { BRAKE_TYPE_LABELS, FRAME_LABELS, LIMITED_SLIP_LABELS, MADE_BY_LABELS, PROVENANCE_MARKS, SPRING_LABELS, SUSPENSION_LABELS, TRANSMISSION_LABELS, inText } from './choice-labels';
 import {
@@ -36,8 +36,12 @@ const withMark = (text: string, f: FigureInput) => {
   return mark ? `${text} ${mark}` : text;
 };
 
-/** A figure in the visitor's system, e.g. "650 hp est."; an unreadable unit prints as typed. */
-export function showFigure(kind: QuantityKind, f: FigureInput | undefined, units: UnitSystem, opts: { decimals?: number; mark?: boolean; to?: Unit } = {}): string {
+/**
+ * A figure in the visitor's system, e.g. "650 hp est."; an unreadable unit prints as typed. Decimals:
+ * as the owner typed them, or after converting as fine as the typed figure and the trade allow
+ * (`shownDecimals`), unless `decimals` says otherwise.
+ */
+export function showFigure(kind: QuantityKind, f: FigureInput | undefined, units: UnitSystem, opts: { decimals?: number; mark?: boolean; to?: Unit; trade?: TradePrecision } = {}): string {
   if (!f) return '';
   const from = parseUnit(kind, f.unit);
   let text: string;
@@ -45,12 +49,19 @@ export function showFigure(kind: QuantityKind, f: FigureInput | undefined, units
   else {
     const to = (opts.to ?? preferredUnit(kind, units)) as UnitOf<typeof kind>;
     const value = convert(kind, f.value, from as UnitOf<typeof kind>, to);
-    text = formatQuantity({ value, unit: to as Unit }, opts.decimals === undefined ? {} : { decimals: opts.decimals });
+    text = formatQuantity({ value, unit: to as Unit }, { decimals: opts.decimals ?? shownDecimals(kind, f.value, from as UnitOf<typeof kind>, to, opts.trade) });
   }
   return opts.mark === false ? text : withMark(text, f);
 }
 
-const length = (f: FigureInput | undefined, units: UnitSystem, big = false) => showFigure('length', f, units, units === 'imperial' ? { decimals: big ? 1 : 2 } : {});
+// How finely the trade gives each kind of length (common practice, from memory): engine bores and
+// strokes to 0.01 mm or 0.001 in; tube sizes to 0.1 mm or 0.001 in; brake rotors to the millimetre
+// or 0.01 in; wheelbase, track and backspacing to the millimetre or 0.1 in.
+const ENGINE_FINE: TradePrecision = { mm: 2, in: 3 };
+const TUBE: TradePrecision = { mm: 1, in: 3 };
+const ROTOR: TradePrecision = { mm: 0, in: 2 };
+const CHASSIS: TradePrecision = { mm: 0, in: 1 };
+const length = (f: FigureInput | undefined, units: UnitSystem, trade: TradePrecision) => showFigure('length', f, units, { trade });
 const volume = (f: FigureInput | undefined, units: UnitSystem) => (units === 'metric' ? showFigure('volume', f, units, { to: 'L', decimals: 1 }) : showFigure('volume', f, units, { decimals: 0 }));
 const rpm = (n: number | undefined) => (n ? `${formatNumber(n)} rpm` : '');
 const at = (figure: string, r: number | undefined) => (figure && r ? `${figure} at ${rpm(r)}` : figure);
@@ -110,7 +121,7 @@ function engineRows(e: EngineSection, u: UnitSystem): SpecRow[] {
   return [
     ...row('Layout', cap(cylindersText(e))),
     ...row(DISPLACEMENT_ROW, volume(e.displacement, u)),
-    ...row('Bore × stroke', e.bore && e.stroke ? `${length(e.bore, u)} × ${length(e.stroke, u)}` : ''),
+    ...row('Bore × stroke', e.bore && e.stroke ? `${length(e.bore, u, ENGINE_FINE)} × ${length(e.stroke, u, ENGINE_FINE)}` : ''),
     ...row('Block', e.blockMaterial),
     ...row('Heads', e.headMaterial),
     ...row('Aspiration', cap(aspirationText(e, u))),
@@ -160,16 +171,16 @@ const frameText = (c: ChassisSection) => (c.frame ? `${inText(FRAME_LABELS[c.fra
 function chassisRows(c: ChassisSection, u: UnitSystem): SpecRow[] {
   return [
     ...row('Frame', cap(join([frameText(c), c.frameDescription], ' — '))),
-    ...row('Wheelbase', length(c.wheelbase, u, true)),
-    ...row('Track', c.trackFront || c.trackRear ? join([c.trackFront ? `front ${length(c.trackFront, u, true)}` : '', c.trackRear ? `rear ${length(c.trackRear, u, true)}` : '']) : ''),
+    ...row('Wheelbase', length(c.wheelbase, u, CHASSIS)),
+    ...row('Track', c.trackFront || c.trackRear ? join([c.trackFront ? `front ${length(c.trackFront, u, CHASSIS)}` : '', c.trackRear ? `rear ${length(c.trackRear, u, CHASSIS)}` : '']) : ''),
     ...row('Front suspension', cap(suspensionText(c.front, u))),
     ...row('Rear suspension', cap(suspensionText(c.rear, u))),
     ...(c.tubes ?? []).flatMap((t) =>
       row(
         cap(t.use),
         join([
-          t.shape === 'rectangular' && t.height ? `rectangular ${length(t.outside, u, false)} × ${length(t.height, u, false)}` : `round ${length(t.outside, u, false)}`,
-          `${length(t.wall, u, false)} wall`,
+          t.shape === 'rectangular' && t.height ? `rectangular ${length(t.outside, u, TUBE)} × ${length(t.height, u, TUBE)}` : `round ${length(t.outside, u, TUBE)}`,
+          `${length(t.wall, u, TUBE)} wall`,
           t.material,
         ]),
       ),
@@ -183,7 +194,7 @@ function brakeText(b: BrakeEnd | undefined, u: UnitSystem): string {
   if (b.type === 'none') return 'none';
   return join([
     join([b.caliperPistons ? `${b.caliperPistons}-piston` : '', b.type ? inText(BRAKE_TYPE_LABELS[b.type]) : ''], ' '),
-    b.rotorDiameter ? (b.rotorThickness ? `${length(b.rotorDiameter, u)} × ${length(b.rotorThickness, u)}` : length(b.rotorDiameter, u)) : '',
+    b.rotorDiameter ? (b.rotorThickness ? `${length(b.rotorDiameter, u, ROTOR)} × ${length(b.rotorThickness, u, ROTOR)}` : length(b.rotorDiameter, u, ROTOR)) : '',
     b.caliper,
     b.pad,
   ]);
@@ -197,8 +208,9 @@ type WheelEnd = NonNullable<WheelsSection['front']>;
 function wheelText(w: WheelEnd | undefined, u: UnitSystem): string {
   if (!w) return '';
   const rim = w.rimDiameterIn && w.rimWidthIn ? `${formatNumber(w.rimDiameterIn, { decimals: w.rimDiameterIn % 1 ? 1 : 0 })} × ${formatNumber(w.rimWidthIn, { decimals: w.rimWidthIn % 1 ? 1 : 0 })} in` : w.rimDiameterIn ? `${w.rimDiameterIn} in` : '';
-  const offset = w.offset ? `offset ${w.offset.value > 0 ? '+' : ''}${showFigure('length', w.offset, 'metric')}` : '';
-  return join([rim, offset, w.construction, w.tyreSize, w.tyre, w.pressure ? `${showFigure('pressure', w.pressure, u)}` : '']);
+  const offset = w.offset ? `offset ${w.offset.value > 0 ? '+' : ''}${showFigure('length', w.offset, 'metric', { trade: CHASSIS })}` : '';
+  const backspacing = w.backspacing ? `${length(w.backspacing, u, CHASSIS)} backspacing` : '';
+  return join([rim, offset, backspacing, w.construction, w.tyreSize, w.tyre, w.pressure ? `${showFigure('pressure', w.pressure, u)}` : '']);
 }
 
 function wheelRows(w: WheelsSection, u: UnitSystem): SpecRow[] {
@@ -221,7 +233,7 @@ function summaryOf(kind: SectionKind, s: Sections, rows: SpecRow[], u: UnitSyste
       const c = s.chassis!;
       const end = (label: string, e: SuspensionEnd | undefined) =>
         e && (e.type || e.springType) ? `${label} ${join([e.type ? inText(SUSPENSION_LABELS[e.type]) : '', e.springType ? inText(SPRING_LABELS[e.springType]) : ''], ' ')}` : '';
-      return join([frameText(c) || c.frameDescription, end('front', c.front), end('rear', c.rear), c.wheelbase ? `wheelbase ${length(c.wheelbase, u, true)}` : ''], ' · ');
+      return join([frameText(c) || c.frameDescription, end('front', c.front), end('rear', c.rear), c.wheelbase ? `wheelbase ${length(c.wheelbase, u, CHASSIS)}` : ''], ' · ');
     }
     case 'brakes': {
       const b = s.brakes!;

@@ -2,6 +2,7 @@
 export * from './errors';
 export * from './units';
 export * from './format';
+export * from './precision';
 export * from './figure';
 export * from './engine';
 export * from './tyres';

@@ -208,7 +208,7 @@ describe('GET /api/public/builds/:code, the JSON twin', () => {
     // The measured dyno figure wins over the owner's estimate.
     expect(power).toMatchObject({ provenance: 'measured', measuredOn: '2026-04-18', imperial: { unit: 'hp', value: 548 } });
     expect(b.keyFigures.map((f: { key: string }) => f.key)).toEqual(['power', 'torque', 'weight', 'powerToWeight', 'displacement']);
-    expect(b.engineLine.metric).toBe('5.4\u00a0L V8, supercharged (twin-screw), 0.90\u00a0bar est. boost, aluminium block, E85');
+    expect(b.engineLine.metric).toBe('5.4\u00a0L V8, supercharged (twin-screw), 0.9\u00a0bar est. boost, aluminium block, E85');
     expect(res.headers['set-cookie']).toBeUndefined();
   });
 
