@@ -83,7 +83,10 @@ export function FigureInput({ label, kind, value, onChange, onBlur, system, erro
   };
 
   const messages = [error?.message, error?.value?.message, error?.unit?.message, error?.provenance?.message, error?.measuredOn?.message].filter((m): m is string => Boolean(m));
-  const other = otherSystem(kind, value);
+  // The live conversion never dresses up an impossible figure: a negative spring rate or a value the
+  // schema refused is said to be wrong instead (lengths may be negative: a wheel's offset).
+  const impossible = value && Number.isFinite(value.value) && value.value < 0 && kind !== 'length' ? `${label} cannot be negative.` : null;
+  const other = impossible || messages.length ? '' : otherSystem(kind, value);
   const boxClass = 'min-h-11 border bg-white px-2 text-base outline-none focus:border-ink focus:ring-1 focus:ring-ink';
 
   return (
@@ -101,8 +104,8 @@ export function FigureInput({ label, kind, value, onChange, onBlur, system, erro
             emit({ text: e.target.value });
           }}
           onBlur={onBlur}
-          aria-invalid={error?.value || error?.message ? true : undefined}
-          className={`min-w-[8rem] flex-1 tabular-nums ${boxClass} ${error?.value || error?.message ? 'border-danger' : 'border-rule'}`}
+          aria-invalid={error?.value || error?.message || impossible ? true : undefined}
+          className={`min-w-[8rem] flex-1 tabular-nums ${boxClass} ${error?.value || error?.message || impossible ? 'border-danger' : 'border-rule'}`}
         />
         <select aria-label={`${label} unit`} value={unit} onChange={(e) => emit({ unit: e.target.value })} onBlur={onBlur} className={`w-24 ${boxClass} border-rule`}>
           {offered.map((u) => (
@@ -146,6 +149,11 @@ export function FigureInput({ label, kind, value, onChange, onBlur, system, erro
         ) : null}
       </div>
       {other ? <p className="text-sm tabular-nums text-graphite">{other}</p> : null}
+      {impossible && !messages.length ? (
+        <p role="alert" className="text-sm font-semibold text-danger">
+          {impossible}
+        </p>
+      ) : null}
       {hint ? <p className="text-sm text-graphite">{hint}</p> : null}
       {messages.length ? (
         <p id={`${id}-error`} role="alert" className="text-sm text-danger">
