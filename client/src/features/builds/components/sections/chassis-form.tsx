@@ -35,7 +35,7 @@ export function ChassisForm({ build }: { build: OwnerBuild }) {
       <TubesFields register={register} errors={errors} control={control} />
       <SuspensionEndFields end="front" register={register} errors={errors} control={control} />
       <SuspensionEndFields end="rear" register={register} errors={errors} control={control} />
-      <FourLinkFields register={register} errors={errors} />
+      <FourLinkFields register={register} errors={errors} control={control} />
       <MadeByFields register={register} errors={errors} control={control} />
     </SectionForm>
   );
