@@ -1,16 +1,16 @@
 import { Router } from 'express';
 import { IdParamSchema } from '@shared/schemas/params';
 import { replaceBody } from '@shared/schemas/body';
-import { CARD_LEFT_OFF_HEADER, CardQuerySchema, CardSettingsSchema, type CardSettingsResponse } from '@shared/schemas/card';
-import { SECTION_KINDS } from '@shared/schemas/build-sections';
+import { CARD_LEFT_OFF_HEADER, CardQuerySchema, CardSettingsSchema } from '@shared/schemas/card';
 import { parseBody, parseParams, parseQuery } from '../middlewares/validate';
 import { cardRenderLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
 import { findBuild, loadFullBuildOrThrow } from '../services/builds';
-import { availableFigures, loadCoverImage, qrPng, qrSvg, renderCard, saveCardSettings, savedCardSettings, settingsFromQuery, showFromQuery } from '../services/cards';
+import { loadCoverImage, qrPng, qrSvg, renderCard, saveCardSettings, savedCardSettings, settingsFromQuery, showFromQuery } from '../services/cards';
 import { publicBuildUrl } from '../presenters/build';
 import { presentPublicBuild } from '../presenters/public-build';
+import { presentCardSettings } from '../presenters/card-settings';
 
 /** The owner's windshield cards and QR codes (mounted under /api, after session and CSRF). */
 export const cardsRouter = Router();
@@ -21,20 +21,7 @@ cardsRouter.get('/builds/:id/card-settings', requireUser, async (req, res) => {
   const { id } = parseParams(req, IdParamSchema);
   const build = await loadFullBuildOrThrow(id);
   authorizeBuild(currentUser(req), 'edit', build);
-  const body: CardSettingsResponse = {
-    settings: savedCardSettings(build),
-    saved: build.cardSettings != null,
-    build: {
-      id: build.id,
-      code: build.code,
-      title: build.title,
-      published: build.published,
-      publicUrl: publicBuildUrl(build.code),
-      sections: SECTION_KINDS.filter((kind) => build.sections?.some((s) => s.kind === kind)),
-      figures: availableFigures(presentPublicBuild(build)),
-    },
-  };
-  res.json(body);
+  res.json(presentCardSettings(build, savedCardSettings(build)));
 });
 
 cardsRouter.put('/builds/:id/card-settings', requireUser, async (req, res) => {

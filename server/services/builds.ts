@@ -1,7 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
 import type { BuildCreateInput, BuildPrivate, BuildUpdateInput, Credit } from '@shared/schemas/build';
 import { SECTION_SCHEMAS, type SectionKind } from '@shared/schemas/build-sections';
-import { sequelize } from '../db/sequelize';
 import { withTransaction } from '../db/transaction';
 import { Build } from '../models/build';
 import { BuildSection } from '../models/build-section';
@@ -70,8 +69,8 @@ export const listBuildsOf = (owner: User) =>
     order: [['updatedAt', 'DESC'], ['id', 'DESC'], [{ model: DynoRun, as: 'dynoRuns' }, 'id', 'DESC'], [{ model: WeighIn, as: 'weighIns' }, 'id', 'DESC']],
   });
 
-export async function createBuild(owner: User, input: BuildCreateInput): Promise<Build> {
-  return sequelize.transaction(async (transaction) => {
+export async function createBuild(owner: User, input: BuildCreateInput, outer?: Transaction): Promise<Build> {
+  return withTransaction(outer, async (transaction) => {
     const code = await newBuildCode(transaction);
     return Build.create(
       {
@@ -147,9 +146,12 @@ export async function setPublished(build: Build, published: boolean, transaction
   await build.update({ published }, { transaction });
 }
 
-/** Deletes the build and everything under it; its code is retired so an old card never opens another car. */
-export async function deleteBuild(build: Build): Promise<{ photoKeys: string[] }> {
-  return sequelize.transaction(async (transaction) => {
+/**
+ * Deletes the build and everything under it; its code is retired so an old card never opens another car.
+ * The photo files are the caller's to delete, once the transaction has committed.
+ */
+export async function deleteBuild(build: Build, outer?: Transaction): Promise<{ photoKeys: string[] }> {
+  return withTransaction(outer, async (transaction) => {
     const show = await blockingEntryOf(build.id, transaction);
     if (show) throw new ConflictError(`This build is entered in ${show}. Withdraw the entry, or wait until the show is over, before deleting the build.`, { id: `Entered in ${show}.` });
     const photos = await Photo.findAll({ where: { buildId: build.id }, transaction });

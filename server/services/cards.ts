@@ -3,7 +3,7 @@ import { renderToBuffer } from '@react-pdf/renderer';
 import QRCode from 'qrcode';
 import { BUILD_STYLE_LABELS, type PublicBuild } from '@shared/schemas/build';
 import { ENGINEERING_CAUTION } from '@shared/calc';
-import { CARD_FIGURES, DEFAULT_CARD_SETTINGS, CardSettingsSchema, type CardFigureKey, type CardLeftOff, type CardQuery, type CardSettings, type CardShow } from '@shared/schemas/card';
+import { CARD_FIGURES, DEFAULT_CARD_SETTINGS, CardSettingsSchema, type CardLeftOff, type CardQuery, type CardSettings, type CardShow } from '@shared/schemas/card';
 import { CardDocument, layoutCard } from '@templates/cards/card-document';
 import type { CardContent } from '@templates/cards/content';
 import { registerCardFonts } from '@templates/cards/fonts';
@@ -58,11 +58,7 @@ export const showFromQuery = (q: CardQuery): CardShow | null => (q.showName || q
 
 export type CoverImage = NonNullable<CardContent['cover']>;
 
-/** The headline figures this build can print, in the card's order: the default offer in the designer. */
-export const availableFigures = (build: PublicBuild): CardFigureKey[] => {
-  const have = new Set(computeKeyFigures(build).map((f) => f.key));
-  return CARD_FIGURES.filter((key) => have.has(key));
-};
+export { availableFigures } from '@shared/build-sheet/key-figures';
 
 /** The words and figures of a card, from the public face of the build only (never the model). */
 export function cardContent(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null } = {}): CardContent {

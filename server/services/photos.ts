@@ -2,7 +2,7 @@ import { Op, type Transaction } from 'sequelize';
 import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES, photoTooLargeMessage } from '@shared/schemas/build';
 import { sequelize } from '../db/sequelize';
 import { Photo } from '../models/photo';
-import { newPhotoStorageKey, PHOTO_STORAGE_KEY, photoVariantKey } from '../storage/keys';
+import { newPhotoStorageKey, PHOTO_STORAGE_KEY, photoVariantKey, photoVariantsPrefix } from '../storage/keys';
 import { storage } from '../storage/index';
 import { logger } from '../logger';
 import { AppError, NotFoundError, ValidationError } from '../errors';
@@ -168,6 +168,6 @@ export async function deletePhoto(buildId: number, photoId: number): Promise<voi
 /** Removes every stored file of these photos (all widths, both formats). Used when a photo or a whole build goes. */
 export async function deletePhotoFiles(storageKeys: string[]): Promise<void> {
   const valid = storageKeys.filter((key) => PHOTO_STORAGE_KEY.test(key));
-  const keys = (await Promise.all(valid.map((key) => storage.list(`photos/${key}-`)))).flat();
+  const keys = (await Promise.all(valid.map((key) => storage.list(photoVariantsPrefix(key))))).flat();
   await deleteKeys(keys);
 }

@@ -12,6 +12,8 @@ export const newPhotoStorageKey = () => randomBytes(16).toString('hex');
 
 /** The key of one stored width of a photo. */
 export const photoVariantKey = (storageKey: string, width: number, ext: 'webp' | 'jpg') => `photos/${storageKey}-${width}.${ext}`;
+/** What every stored width and format of one photo starts with, to list them all from the key alone. */
+export const photoVariantsPrefix = (storageKey: string) => `photos/${storageKey}-`;
 
 const MEDIA_PREFIX = '/media/';
 /** The URL a stored file is served at (`GET /media/<key>`, no session). */

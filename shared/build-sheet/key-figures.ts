@@ -4,7 +4,7 @@ import { CalcInputError, convert, cornerWeights, displacement, formatNumber, for
 import type { DynoRunCreateInput, PublicBuild, WeighInCreateInput } from '../schemas/build';
 import type { Sections } from '../schemas/build-sections';
 import type { FigureInput } from '../schemas/figure';
-import { CARD_FIGURE_LABELS, type CardFigureKey, type KeyFigure } from '../schemas/card';
+import { CARD_FIGURES, CARD_FIGURE_LABELS, type CardFigureKey, type KeyFigure } from '../schemas/card';
 
 type Provenance = FigureInput['provenance'];
 const RANK: Record<Provenance, number> = { measured: 0, estimated: 1, target: 2 };
@@ -147,4 +147,10 @@ export function computeKeyFigures(b: PublicBuild): KeyFigure[] {
   }
   out.push(keyFigure(b, 'displacement', 'volume', volume, { units: { metric: 'L', imperial: 'in3', uk: 'L' }, decimals: { metric: 1, imperial: 0, uk: 1 } }));
   return out.filter((f): f is KeyFigure => f !== null);
+}
+
+/** The headline figures this build can print, in the card's order: the default offer in the card designer. */
+export function availableFigures(b: PublicBuild): CardFigureKey[] {
+  const have = new Set(computeKeyFigures(b).map((f) => f.key));
+  return CARD_FIGURES.filter((key) => have.has(key));
 }
