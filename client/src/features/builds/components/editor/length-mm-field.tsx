@@ -56,7 +56,7 @@ export function LengthMmField<T extends FieldValues>({ control, name, label }: P
                 }}
                 aria-invalid={error ? true : undefined}
                 aria-describedby={error ? `${id}-error` : undefined}
-                className={`min-h-11 min-w-0 flex-1 border bg-white px-2 text-base tabular-nums outline-none focus:border-ink focus:ring-1 focus:ring-ink ${error ? 'border-danger' : 'border-rule'}`}
+                className={`min-h-11 min-w-[4.5rem] flex-1 border bg-white px-2 text-base tabular-nums outline-none focus:border-ink focus:ring-1 focus:ring-ink ${error ? 'border-danger' : 'border-rule'}`}
               />
               <select
                 aria-label={`${label} unit`}
@@ -67,7 +67,7 @@ export function LengthMmField<T extends FieldValues>({ control, name, label }: P
                   // The number on screen keeps its length: the box shows it again in the new unit.
                   setText(null);
                 }}
-                className="min-h-11 w-20 border border-rule bg-white px-2 text-base"
+                className="min-h-11 w-16 shrink-0 border border-rule bg-white px-1 text-base"
               >
                 <option value="mm">mm</option>
                 <option value="in">in</option>

@@ -41,7 +41,7 @@ export function FourLinkFields({ control }: Omit<Props, 'end'>) {
     <FieldGroup title="Rear four-link (side view)">
       <p className="text-sm text-graphite sm:col-span-2">x: forward from the rear axle centre; y: up from the ground. For anti-squat, with the wheelbase above.</p>
       {POINTS.map(([key, label]) => (
-        <div key={key} className="grid grid-cols-2 gap-2">
+        <div key={key} className="grid grid-cols-2 gap-2 sm:col-span-2">
           <LengthMmField control={control} name={`rear.fourLink.${key}.x`} label={`${label}: x`} />
           <LengthMmField control={control} name={`rear.fourLink.${key}.y`} label={`${label}: y`} />
         </div>
