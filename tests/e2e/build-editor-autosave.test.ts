@@ -91,4 +91,39 @@ describe('leaving the build editor never drops an edit', () => {
       await context.close();
     }, 120_000);
   }
+
+  it('saves on the browser\'s back button and when the tab is closed', async () => {
+    const { user, email, password } = await createUser({ name: 'Ivo Marrant' });
+    const build = await createBuild(user.id, { title: 'The Umber Sedan' });
+    const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, locale: 'en-GB' });
+    const page = await context.newPage();
+    await signIn(page, email, password, '/builds');
+    await page.getByRole('link', { name: 'The Umber Sedan' }).click();
+    await page.waitForURL(`${env.baseUrl}/builds/${build.id}`);
+
+    // Back, at once after typing: the editor saves, then goes back to My builds.
+    const engine = page.getByRole('form', { name: 'Engine' });
+    await engine.getByLabel('Bore unit').selectOption('mm');
+    await engine.getByLabel('Bore', { exact: true }).fill('96');
+    await page.goBack();
+    // The address changes at once and is put back while the editor saves: wait for My builds itself.
+    await page.getByRole('heading', { name: 'My builds' }).waitFor();
+    expect(new URL(page.url()).pathname).toBe('/builds');
+    expect((await storedEngine(page, build.id)).bore).toMatchObject({ value: 96, unit: 'mm' });
+
+    // Closing the tab at once after typing: the browser asks first, and the save goes out anyway.
+    await page.goForward();
+    await engine.getByLabel('Bore', { exact: true }).fill('97');
+    const dialogs: string[] = [];
+    page.on('dialog', (dialog) => {
+      dialogs.push(dialog.type());
+      void dialog.accept();
+    });
+    await page.close({ runBeforeUnload: true });
+    await expect.poll(() => page.isClosed()).toBe(true);
+    expect(dialogs).toEqual(['beforeunload']);
+    const checker = await context.newPage();
+    await expect.poll(async () => (await storedEngine(checker, build.id)).bore?.value).toBe(97);
+    await context.close();
+  }, 120_000);
 });
