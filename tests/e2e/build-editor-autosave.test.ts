@@ -92,6 +92,33 @@ describe('leaving the build editor never drops an edit', () => {
     }, 120_000);
   }
 
+  it('shows the server\'s reason when it refuses a save, on the field and in the status, and keeps the edit', async () => {
+    const { user, email, password } = await createUser({ name: 'Ivo Marrant' });
+    const build = await createBuild(user.id, { title: 'The Ash Pickup' });
+    const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
+    const page = await context.newPage();
+    await signIn(page, email, password, `/builds/${build.id}`);
+    // The server's answer stands in for a rule only the server knows: its field error is the reason shown.
+    const refusal = { error: { code: 'VALIDATION_FAILED', message: 'Check the highlighted fields.', fields: { exhaust: 'Exhaust is refused by the server for this test.' } } };
+    await page.route(`**/api/builds/${build.id}/sections/engine`, (route) => route.fulfill({ status: 400, contentType: 'application/json', body: JSON.stringify(refusal) }));
+
+    const engine = page.getByRole('form', { name: 'Engine' });
+    await engine.getByLabel('Exhaust').fill('Side pipes');
+    await expect.poll(() => engine.getByRole('status').textContent()).toBe('● Not saved: Exhaust is refused by the server for this test.');
+    await expect.poll(() => engine.getByRole('alert').filter({ hasText: 'Exhaust is refused by the server for this test.' }).count()).toBeGreaterThan(0);
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-server-refused-desktop.png') });
+
+    // Leaving says so too; once the server takes it, the edit (still in the box) is stored.
+    await page.getByRole('link', { name: '← My builds' }).click();
+    await expect.poll(() => page.getByRole('dialog').textContent()).toContain('Engine: Exhaust is refused by the server for this test.');
+    await page.getByRole('button', { name: 'Stay and fix' }).click();
+    await page.unroute(`**/api/builds/${build.id}/sections/engine`);
+    await engine.getByLabel('Exhaust').press('Enter');
+    await expect.poll(() => engine.getByRole('status').textContent()).toBe('Saved');
+    expect((await storedEngine(page, build.id)).exhaust).toBe('Side pipes');
+    await context.close();
+  }, 120_000);
+
   it('saves on the browser\'s back button and when the tab is closed', async () => {
     const { user, email, password } = await createUser({ name: 'Ivo Marrant' });
     const build = await createBuild(user.id, { title: 'The Umber Sedan' });
