@@ -58,6 +58,9 @@ describe('leaving the build editor never drops an edit', () => {
       await engine.getByLabel('Bore', { exact: true }).fill('2000');
       await expect.poll(() => engine.getByRole('status').textContent()).toMatch(/^● Not saved: Bore must be between 20 and 200 mm\.$/);
       await expect.poll(() => engine.getByRole('alert').filter({ hasText: 'Bore must be between 20 and 200 mm.' }).count()).toBeGreaterThan(0);
+      // The line kept in view beside the sections says so too, wherever the owner has scrolled.
+      const summary = page.locator('[data-testid=save-summary]:visible');
+      await expect.poll(() => summary.textContent()).toBe('● Not saved: Engine');
       await engine.scrollIntoViewIfNeeded();
       await page.screenshot({ path: path.join(SCREENSHOT_DIR, `build-editor-not-saved-${name}.png`) });
 
@@ -73,13 +76,14 @@ describe('leaving the build editor never drops an edit', () => {
 
       // The summary at the top of the panel lists every error of the panel, not just the first.
       await engine.getByLabel('Stroke', { exact: true }).fill('900');
-      const summary = engine.getByRole('alert').filter({ hasText: 'Not saved yet.' });
-      await expect.poll(() => summary.locator('li').allTextContents()).toEqual(['Bore must be between 20 and 200 mm.', 'Stroke must be between 20 and 200 mm.']);
+      const errorList = engine.getByRole('alert').filter({ hasText: 'Not saved yet.' });
+      await expect.poll(() => errorList.locator('li').allTextContents()).toEqual(['Bore must be between 20 and 200 mm.', 'Stroke must be between 20 and 200 mm.']);
       await engine.getByLabel('Stroke', { exact: true }).fill('');
 
       // Fixed, it saves by itself; text typed and left at once is kept as well.
       await engine.getByLabel('Bore', { exact: true }).fill('102');
       await expect.poll(() => engine.getByRole('status').textContent()).toBe('Saved');
+      await expect.poll(() => summary.textContent()).toBe('All changes saved');
       await engine.getByLabel('Exhaust').fill('Twin 2.5 in pipes, hand-bent, through bullet mufflers that run the length of the frame rails');
       await page.getByRole('link', { name: '← My builds' }).click();
       await page.waitForURL(`${env.baseUrl}/builds`);
