@@ -3,6 +3,7 @@ import type { QuantityKind } from '@shared/calc';
 import { MADE_BY_KINDS } from '@shared/schemas/build-sections';
 import type { FigureInput as Figure } from '@shared/schemas/figure';
 import { FigureInput } from '@client/components/ui/figure-input';
+import { CheckNote } from '@client/components/ui/check-note';
 import { SelectField } from '@client/components/ui/select-field';
 import { TextField } from '@client/components/ui/text-field';
 import { TextAreaField } from '@client/components/ui/text-area-field';
@@ -69,14 +70,8 @@ export function NumberField<T extends FieldValues>({ register, errors, name, lab
   );
 }
 
-export function Warning({ message, why }: { message: string; why: string }) {
-  return (
-    <p className="border-l-4 border-caution bg-white/70 px-2 py-1 text-sm">
-      <span className="font-semibold">Check: </span>
-      {message} <span className="text-graphite">{why}</span>
-    </p>
-  );
-}
+/** The spec check's note for one field (see CheckNote: the reasoning is one tap away). */
+export const Warning = CheckNote;
 
 export function TextInput<T extends FieldValues>({ register, errors, name, label, hint, form }: Registered<T>) {
   const warning = useFieldWarning(form ?? 'engine', form ? name : '\u0000');
