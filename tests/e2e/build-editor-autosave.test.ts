@@ -123,6 +123,44 @@ describe('leaving the build editor never drops an edit', () => {
     await context.close();
   }, 120_000);
 
+  it('keeps both panels when their saves answer out of order', async () => {
+    const { user, email, password } = await createUser({ name: 'Ivo Marrant' });
+    const build = await createBuild(user.id, { title: 'The Pewter Wagon' });
+    const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
+    const page = await context.newPage();
+    await signIn(page, email, password, `/builds/${build.id}`);
+
+    // The engine's save reaches the server first, but its answer is held back until the wheels' save has answered.
+    let engineSent!: () => void;
+    const engineAtServer = new Promise<void>((resolve) => (engineSent = resolve));
+    let releaseEngine!: () => void;
+    const engineReleased = new Promise<void>((resolve) => (releaseEngine = resolve));
+    await page.route(`**/api/builds/${build.id}/sections/engine`, async (route) => {
+      const response = await route.fetch();
+      engineSent();
+      await engineReleased;
+      await route.fulfill({ response });
+    });
+    const engine = page.getByRole('form', { name: 'Engine' });
+    const wheels = page.getByRole('form', { name: 'Wheels and tyres' });
+    await engine.getByLabel('Cylinders').fill('8');
+    await engine.getByLabel('Cylinders').press('Enter');
+    await engineAtServer;
+    await wheels.getByLabel('Tyre size').nth(0).fill('245/40R18');
+    await expect.poll(() => wheels.getByRole('status').textContent()).toBe('Saved');
+    releaseEngine();
+    await expect.poll(() => engine.getByRole('status').textContent()).toBe('Saved');
+
+    // The engine's older answer did not put the wheels back to empty.
+    await expect.poll(() => page.getByTestId('save-summary').locator('visible=true').textContent()).toBe('All changes saved');
+    expect(await wheels.getByLabel('Tyre size').nth(0).inputValue()).toBe('245/40R18');
+    const res = await page.request.get(`${env.baseUrl}/api/builds/${build.id}`);
+    const stored = ((await res.json()) as { build: { sections: { engine?: { cylinders?: number }; wheels?: { front?: { tyreSize?: string } } } } }).build.sections;
+    expect(stored.engine?.cylinders).toBe(8);
+    expect(stored.wheels?.front?.tyreSize).toBe('245/40R18');
+    await context.close();
+  }, 120_000);
+
   it('saves on the browser\'s back button and when the tab is closed', async () => {
     const { user, email, password } = await createUser({ name: 'Ivo Marrant' });
     const build = await createBuild(user.id, { title: 'The Umber Sedan' });
