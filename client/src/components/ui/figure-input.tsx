@@ -1,7 +1,6 @@
 import { useId, useState } from 'react';
 import { CalcInputError, convert, formatQuantity, toSystem, UNIT_LABELS, type QuantityKind, type Unit, type UnitOf, type UnitSystem, PREFERRED_UNITS } from '@shared/calc';
 import { PROVENANCES, type FigureInput as Figure } from '@shared/schemas/figure';
-import { CheckNote } from './check-note';
 
 /** The units offered for each kind, both systems; a saved figure in another unit is still shown. */
 export const FIGURE_UNITS: Partial<{ [K in QuantityKind]: UnitOf<K>[] }> = {
@@ -168,7 +167,12 @@ export function FigureInput({ label, kind, value, onChange, onBlur, system, erro
           {messages.join(' ')}
         </p>
       ) : null}
-      {warning && !messages.length ? <CheckNote message={warning.message} why={warning.why} /> : null}
+      {warning && !messages.length ? (
+        <p className="border-l-4 border-caution bg-white/70 px-2 py-1 text-sm">
+          <span className="font-semibold">Check: </span>
+          {warning.message} <span className="text-graphite">{warning.why}</span>
+        </p>
+      ) : null}
     </fieldset>
   );
 }

@@ -39,19 +39,22 @@ export function FigureField<T extends FieldValues>({ control, name, label, kind,
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <FigureInput
-          label={label}
-          kind={kind}
-          system={system}
-          value={field.value as Figure | undefined}
-          onChange={field.onChange}
-          onBlur={field.onBlur}
-          error={fieldState.error as never}
-          {...(warning ? { warning } : {})}
-          {...(hint ? { hint } : {})}
-          {...(defaultUnit ? { defaultUnit } : {})}
-          evidencePhotos={evidencePhotos}
-        />
+        <div className="flex min-w-0 flex-col gap-1">
+          <FigureInput
+            label={label}
+            kind={kind}
+            system={system}
+            value={field.value as Figure | undefined}
+            onChange={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error as never}
+            {...(hint ? { hint } : {})}
+            {...(defaultUnit ? { defaultUnit } : {})}
+            evidencePhotos={evidencePhotos}
+          />
+          {/* The field's own error already says what is wrong; the spec check would only repeat it. */}
+          {warning && !fieldState.error ? <CheckNote message={warning.message} why={warning.why} /> : null}
+        </div>
       )}
     />
   );
