@@ -58,6 +58,9 @@ describe('leaving the build editor never drops an edit', () => {
       await engine.getByLabel('Bore', { exact: true }).fill('2000');
       await expect.poll(() => engine.getByRole('status').textContent()).toMatch(/^● Not saved: Bore must be between 20 and 200 mm\.$/);
       await expect.poll(() => engine.getByRole('alert').filter({ hasText: 'Bore must be between 20 and 200 mm.' }).count()).toBeGreaterThan(0);
+      // The line kept in view beside the sections says so too, wherever the owner has scrolled.
+      const summary = page.locator('[data-testid=save-summary]:visible');
+      await expect.poll(() => summary.textContent()).toBe('● Not saved: Engine');
       await engine.scrollIntoViewIfNeeded();
       await page.screenshot({ path: path.join(SCREENSHOT_DIR, `build-editor-not-saved-${name}.png`) });
 
@@ -73,13 +76,14 @@ describe('leaving the build editor never drops an edit', () => {
 
       // The summary at the top of the panel lists every error of the panel, not just the first.
       await engine.getByLabel('Stroke', { exact: true }).fill('900');
-      const summary = engine.getByRole('alert').filter({ hasText: 'Not saved yet.' });
-      await expect.poll(() => summary.locator('li').allTextContents()).toEqual(['Bore must be between 20 and 200 mm.', 'Stroke must be between 20 and 200 mm.']);
+      const errorList = engine.getByRole('alert').filter({ hasText: 'Not saved yet.' });
+      await expect.poll(() => errorList.locator('li').allTextContents()).toEqual(['Bore must be between 20 and 200 mm.', 'Stroke must be between 20 and 200 mm.']);
       await engine.getByLabel('Stroke', { exact: true }).fill('');
 
       // Fixed, it saves by itself; text typed and left at once is kept as well.
       await engine.getByLabel('Bore', { exact: true }).fill('102');
       await expect.poll(() => engine.getByRole('status').textContent()).toBe('Saved');
+      await expect.poll(() => summary.textContent()).toBe('All changes saved');
       await engine.getByLabel('Exhaust').fill('Twin 2.5 in pipes, hand-bent, through bullet mufflers that run the length of the frame rails');
       await page.getByRole('link', { name: '← My builds' }).click();
       await page.waitForURL(`${env.baseUrl}/builds`);
@@ -91,4 +95,104 @@ describe('leaving the build editor never drops an edit', () => {
       await context.close();
     }, 120_000);
   }
+
+  it('shows the server\'s reason when it refuses a save, on the field and in the status, and keeps the edit', async () => {
+    const { user, email, password } = await createUser({ name: 'Ivo Marrant' });
+    const build = await createBuild(user.id, { title: 'The Ash Pickup' });
+    const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
+    const page = await context.newPage();
+    await signIn(page, email, password, `/builds/${build.id}`);
+    // The server's answer stands in for a rule only the server knows: its field error is the reason shown.
+    const refusal = { error: { code: 'VALIDATION_FAILED', message: 'Check the highlighted fields.', fields: { exhaust: 'Exhaust is refused by the server for this test.' } } };
+    await page.route(`**/api/builds/${build.id}/sections/engine`, (route) => route.fulfill({ status: 400, contentType: 'application/json', body: JSON.stringify(refusal) }));
+
+    const engine = page.getByRole('form', { name: 'Engine' });
+    await engine.getByLabel('Exhaust').fill('Side pipes');
+    await expect.poll(() => engine.getByRole('status').textContent()).toBe('● Not saved: Exhaust is refused by the server for this test.');
+    await expect.poll(() => engine.getByRole('alert').filter({ hasText: 'Exhaust is refused by the server for this test.' }).count()).toBeGreaterThan(0);
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-server-refused-desktop.png') });
+
+    // Leaving says so too; once the server takes it, the edit (still in the box) is stored.
+    await page.getByRole('link', { name: '← My builds' }).click();
+    await expect.poll(() => page.getByRole('dialog').textContent()).toContain('Engine: Exhaust is refused by the server for this test.');
+    await page.getByRole('button', { name: 'Stay and fix' }).click();
+    await page.unroute(`**/api/builds/${build.id}/sections/engine`);
+    await engine.getByLabel('Exhaust').press('Enter');
+    await expect.poll(() => engine.getByRole('status').textContent()).toBe('Saved');
+    expect((await storedEngine(page, build.id)).exhaust).toBe('Side pipes');
+    await context.close();
+  }, 120_000);
+
+  it('keeps both panels when their saves answer out of order', async () => {
+    const { user, email, password } = await createUser({ name: 'Ivo Marrant' });
+    const build = await createBuild(user.id, { title: 'The Pewter Wagon' });
+    const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
+    const page = await context.newPage();
+    await signIn(page, email, password, `/builds/${build.id}`);
+
+    // The engine's save reaches the server first, but its answer is held back until the wheels' save has answered.
+    let engineSent!: () => void;
+    const engineAtServer = new Promise<void>((resolve) => (engineSent = resolve));
+    let releaseEngine!: () => void;
+    const engineReleased = new Promise<void>((resolve) => (releaseEngine = resolve));
+    await page.route(`**/api/builds/${build.id}/sections/engine`, async (route) => {
+      const response = await route.fetch();
+      engineSent();
+      await engineReleased;
+      await route.fulfill({ response });
+    });
+    const engine = page.getByRole('form', { name: 'Engine' });
+    const wheels = page.getByRole('form', { name: 'Wheels and tyres' });
+    await engine.getByLabel('Cylinders').fill('8');
+    await engine.getByLabel('Cylinders').press('Enter');
+    await engineAtServer;
+    await wheels.getByLabel('Tyre size').nth(0).fill('245/40R18');
+    await expect.poll(() => wheels.getByRole('status').textContent()).toBe('Saved');
+    releaseEngine();
+    await expect.poll(() => engine.getByRole('status').textContent()).toBe('Saved');
+
+    // The engine's older answer did not put the wheels back to empty.
+    await expect.poll(() => page.getByTestId('save-summary').locator('visible=true').textContent()).toBe('All changes saved');
+    expect(await wheels.getByLabel('Tyre size').nth(0).inputValue()).toBe('245/40R18');
+    const res = await page.request.get(`${env.baseUrl}/api/builds/${build.id}`);
+    const stored = ((await res.json()) as { build: { sections: { engine?: { cylinders?: number }; wheels?: { front?: { tyreSize?: string } } } } }).build.sections;
+    expect(stored.engine?.cylinders).toBe(8);
+    expect(stored.wheels?.front?.tyreSize).toBe('245/40R18');
+    await context.close();
+  }, 120_000);
+
+  it('saves on the browser\'s back button and when the tab is closed', async () => {
+    const { user, email, password } = await createUser({ name: 'Ivo Marrant' });
+    const build = await createBuild(user.id, { title: 'The Umber Sedan' });
+    const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, locale: 'en-GB' });
+    const page = await context.newPage();
+    await signIn(page, email, password, '/builds');
+    await page.getByRole('link', { name: 'The Umber Sedan' }).click();
+    await page.waitForURL(`${env.baseUrl}/builds/${build.id}`);
+
+    // Back, at once after typing: the editor saves, then goes back to My builds.
+    const engine = page.getByRole('form', { name: 'Engine' });
+    await engine.getByLabel('Bore unit').selectOption('mm');
+    await engine.getByLabel('Bore', { exact: true }).fill('96');
+    await page.goBack();
+    // The address changes at once and is put back while the editor saves: wait for My builds itself.
+    await page.getByRole('heading', { name: 'My builds' }).waitFor();
+    expect(new URL(page.url()).pathname).toBe('/builds');
+    expect((await storedEngine(page, build.id)).bore).toMatchObject({ value: 96, unit: 'mm' });
+
+    // Closing the tab at once after typing: the browser asks first, and the save goes out anyway.
+    await page.goForward();
+    await engine.getByLabel('Bore', { exact: true }).fill('97');
+    const dialogs: string[] = [];
+    page.on('dialog', (dialog) => {
+      dialogs.push(dialog.type());
+      void dialog.accept();
+    });
+    await page.close({ runBeforeUnload: true });
+    await expect.poll(() => page.isClosed()).toBe(true);
+    expect(dialogs).toEqual(['beforeunload']);
+    const checker = await context.newPage();
+    await expect.poll(async () => (await storedEngine(checker, build.id)).bore?.value).toBe(97);
+    await context.close();
+  }, 120_000);
 });

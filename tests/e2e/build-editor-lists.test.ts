@@ -45,7 +45,18 @@ describe('credits and extra lines in the build editor', () => {
     const editorPath = `/builds/${build.id}`;
     const context = await env.browser.newContext({ viewport: { width: 1024, height: 900 }, locale: 'en-GB' });
     const page = await context.newPage();
+    const writes: string[] = [];
+    page.on('request', (r) => {
+      if (r.method() !== 'GET' && r.url().includes('/api/builds/')) writes.push(`${r.method()} ${r.url()}`);
+    });
     await signIn(page, email, password, editorPath);
+
+    // Opening a full build sheet changes nothing: every panel reads as stored, none waits to save.
+    const statuses = page.locator('form[aria-label] [role=status]');
+    await expect.poll(() => statuses.count()).toBeGreaterThanOrEqual(10);
+    const shown = await statuses.allTextContents();
+    expect(shown.filter((t) => t !== 'Saved' && t !== 'Not filled in yet')).toEqual([]);
+    expect(writes).toEqual([]);
 
     const extra = page.getByRole('form', { name: 'Extra lines' });
     await extra.getByRole('button', { name: 'Add a line' }).click();

@@ -12,7 +12,11 @@ export function useBuildMutation<TInput>(buildId: number, mutationFn: (input: TI
   return useMutation({
     mutationFn,
     onSuccess: ({ build }) => {
-      qc.setQueryData(buildQueryKey(buildId), { build });
+      // Panels save by themselves, so two answers can cross: one older than the build already in the
+      // cache would put back what a later save changed. Ask for the build afresh instead.
+      const cached = qc.getQueryData<{ build: OwnerBuild }>(buildQueryKey(buildId));
+      if (cached && cached.build.updatedAt > build.updatedAt) void qc.invalidateQueries({ queryKey: buildQueryKey(buildId), exact: true });
+      else qc.setQueryData(buildQueryKey(buildId), { build });
       void qc.invalidateQueries({ queryKey: buildsQueryKey, exact: true });
     },
   });

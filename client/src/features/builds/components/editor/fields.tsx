@@ -4,6 +4,7 @@ import { MADE_BY_KINDS } from '@shared/schemas/build-sections';
 import { MADE_BY_LABELS } from '@shared/build-sheet/choice-labels';
 import type { FigureInput as Figure } from '@shared/schemas/figure';
 import { FigureInput } from '@client/components/ui/figure-input';
+import { CheckNote } from '@client/components/ui/check-note';
 import { SelectField } from '@client/components/ui/select-field';
 import { TextField } from '@client/components/ui/text-field';
 import { TextAreaField } from '@client/components/ui/text-area-field';
@@ -39,19 +40,22 @@ export function FigureField<T extends FieldValues>({ control, name, label, kind,
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <FigureInput
-          label={label}
-          kind={kind}
-          system={system}
-          value={field.value as Figure | undefined}
-          onChange={field.onChange}
-          onBlur={field.onBlur}
-          error={fieldState.error as never}
-          {...(warning ? { warning } : {})}
-          {...(hint ? { hint } : {})}
-          {...(defaultUnit ? { defaultUnit } : {})}
-          evidencePhotos={evidencePhotos}
-        />
+        <div className="flex min-w-0 flex-col gap-1">
+          <FigureInput
+            label={label}
+            kind={kind}
+            system={system}
+            value={field.value as Figure | undefined}
+            onChange={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error as never}
+            {...(hint ? { hint } : {})}
+            {...(defaultUnit ? { defaultUnit } : {})}
+            evidencePhotos={evidencePhotos}
+          />
+          {/* The field's own error already says what is wrong; the spec check would only repeat it. */}
+          {warning && !fieldState.error ? <CheckNote message={warning.message} why={warning.why} /> : null}
+        </div>
       )}
     />
   );
@@ -70,14 +74,8 @@ export function NumberField<T extends FieldValues>({ register, errors, name, lab
   );
 }
 
-export function Warning({ message, why }: { message: string; why: string }) {
-  return (
-    <p className="border-l-4 border-caution bg-white/70 px-2 py-1 text-sm">
-      <span className="font-semibold">Check: </span>
-      {message} <span className="text-graphite">{why}</span>
-    </p>
-  );
-}
+/** The spec check's note for one field (see CheckNote: the reasoning is one tap away). */
+export const Warning = CheckNote;
 
 export function TextInput<T extends FieldValues>({ register, errors, name, label, hint, form }: Registered<T>) {
   const warning = useFieldWarning(form ?? 'engine', form ? name : '\u0000');

@@ -23,7 +23,7 @@ export function SaveState({ status, why, live = true }: { status: SaveStatus; wh
 /** Panel chrome for one section of the editor: an anchor, a title, where its edits stand. */
 export function EditorSection({ id, title, status, actions, children }: { id: string; title: string; status?: SaveStatus; actions?: ReactNode; children: ReactNode }) {
   return (
-    <section id={`section-${id}`} aria-labelledby={`section-${id}-title`} className="scroll-mt-20 border border-rule bg-white/60">
+    <section id={`section-${id}`} aria-labelledby={`section-${id}-title`} className="scroll-mt-28 border border-rule bg-white/60 lg:scroll-mt-4">
       <header className="flex flex-wrap items-center justify-between gap-2 border-b border-rule px-4 py-2">
         <h2 id={`section-${id}-title`} tabIndex={-1} className="font-display text-lg uppercase tracking-wide outline-none">
           {title}

@@ -1,4 +1,5 @@
 import { useEditor, useStoreVersion } from './editor-stores';
+import { SaveSummary } from './save-summary';
 
 export const EDITOR_SECTIONS = [
   ['overview', 'Overview'],
@@ -33,7 +34,7 @@ export function SectionNav() {
   const mark = (id: string) => (dirty.entries().some(([key]) => key === id || key.startsWith(`${id}:`)) ? ' ●' : '');
   return (
     <>
-      <div className="sticky top-0 z-10 -mx-4 border-b border-rule bg-paper px-4 py-2 lg:hidden">
+      <div className="sticky top-0 z-10 -mx-4 flex flex-col gap-1 border-b border-rule bg-paper px-4 py-2 lg:hidden">
         <label htmlFor="section-jump" className="sr-only">
           Go to section
         </label>
@@ -46,8 +47,12 @@ export function SectionNav() {
             </option>
           ))}
         </select>
+        <SaveSummary onGoTo={goTo} />
       </div>
       <nav aria-label="Build sheet sections" className="sticky top-4 hidden max-h-[calc(100vh-2rem)] overflow-y-auto lg:block">
+        <div className="mb-2 px-3">
+          <SaveSummary onGoTo={goTo} />
+        </div>
         <ol className="flex flex-col border-l border-rule">
           {EDITOR_SECTIONS.map(([id, label]) => (
             <li key={id}>
