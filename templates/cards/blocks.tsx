@@ -1,5 +1,5 @@
 import { Image, View } from '@react-pdf/renderer';
-import type { CardLeftOff, CardShow, Legibility } from '@shared/schemas/card';
+import { CARD_QR_MODULE_MIN_PT, type CardLeftOff, type CardShow, type Legibility } from '@shared/schemas/card';
 import type { CardContent } from './content';
 import type { BlockSpec, Laid } from './layout';
 import { lineWidth, setLines, sizeForCap, textWidth, withEllipsis, type Line, type Span } from './measure';
@@ -126,8 +126,11 @@ export function entryBlock(ctx: Ctx): BlockSpec | undefined {
 
 // ---------------------------------------------------------------- QR code
 
-/** The side of the drawn QR block (code plus quiet zone) for a code at least `codePt` wide. */
-export const qrBlockSide = (content: CardContent, codePt: number) => (codePt / content.qr.size) * (content.qr.size + 2 * QR_QUIET);
+/** The side of the drawn QR block (code plus quiet zone) for a code at least `codePt` wide, with modules never under the minimum. */
+export const qrBlockSide = (content: CardContent, codePt: number) => {
+  const module = Math.max(codePt / content.qr.size, CARD_QR_MODULE_MIN_PT);
+  return module * (content.qr.size + 2 * QR_QUIET);
+};
 
 export function qrBlock({ content, k, leg }: Ctx, scale = 1): BlockSpec {
   const side = qrBlockSide(content, leg.qrPt * scale);
@@ -251,10 +254,11 @@ export function flowBlock(label: string, items: FlowItem[], sizes: number[], opt
       const queue = [...(i && used[used.length - 1]! > 0 ? [spacer] : []), ...lines];
       for (const [li, line] of queue.entries()) {
         const c = columns.length - 1;
-        // An item's first line never ends a column alone (a heading without its rows).
+        // An item's first line never ends a column alone (a heading without its rows), the last column included.
         const keepWith = line === lines[0] && lines.length > 1 ? lines[1]!.height : 0;
-        if (used[c]! + line.height + keepWith > limit + 0.01 && (used[c]! + line.height > limit + 0.01 || columns.length < cols)) {
-          if (columns.length < cols) {
+        if (used[c]! + line.height + keepWith > limit + 0.01) {
+          // A fresh column takes the line only if it fits there (a limit under one line prints nothing).
+          if (columns.length < cols && line.height + keepWith <= limit + 0.01) {
             columns.push([]);
             used.push(0);
             if (line === spacer) continue;
@@ -406,9 +410,12 @@ export function photoBlock({ content, contentHeight }: Ctx, shares = [0.42, 0.32
       draw: (w, h) =>
         cover ? (
           <Image src={{ data: cover.data, format: cover.format }} style={{ width: w, height: h, objectFit: 'cover' }} />
+        ) : h <= 60 ? (
+          // Too short for the year: a bare dark stripe reads as a printing fault, so the space stays paper.
+          <View style={{ width: w, height: h }} />
         ) : (
           <View style={{ width: w, height: h, backgroundColor: INK, justifyContent: 'flex-end', padding: Math.min(18, h / 6) }}>
-            {year && h > 60 ? <Lines lines={setLines([{ text: year, face: 'display-700' }], Math.min(h * 0.55, (w - 40) / (textWidth(year, 'display-700', 1) * 1.05)), w - 36, 1.05)} color="#2E2C29" /> : null}
+            {year ? <Lines lines={setLines([{ text: year, face: 'display-700' }], Math.min(h * 0.55, (w - 40) / (textWidth(year, 'display-700', 1) * 1.05)), w - 36, 1.05)} color="#2E2C29" /> : null}
           </View>
         ),
     }),
