@@ -4,8 +4,8 @@ import { fitBlocks, type BlockId, type Geo } from './layout';
 
 /**
  * Data sheet: the title and the show beside the QR code, the figures on a rule, then every chosen
- * section as a block of label / value rows poured into columns. A sparse build's photo fills what
- * the rows leave.
+ * section as a block of label / value rows poured into columns. The photo (or, without one, a dark
+ * panel with the year) fills what the rows leave.
  */
 export const dataSheetDesign: DesignFn = (ctx, box) => {
   const { k } = ctx;
@@ -21,7 +21,8 @@ export const dataSheetDesign: DesignFn = (ctx, box) => {
     engine: engineBlock(ctx),
     sections: sectionRowsBlock(ctx, box.landscape ? 3 : 2),
     credits: creditsBlock(ctx),
-    photo: ctx.content.cover ? photoBlock(ctx, [0.25, 0.15]) : undefined,
+    // Without a photo the dark panel with the year takes what the rows leave, so a sparse sheet is not half blank.
+    photo: photoBlock(ctx, [0.25, 0.15]),
     story: storyBlock(ctx),
     more: moreBlock(ctx),
     footer: footerBlock(ctx),
