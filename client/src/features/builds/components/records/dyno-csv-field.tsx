@@ -1,4 +1,4 @@
-import { useId, type ChangeEvent } from 'react';
+import type { ChangeEvent } from 'react';
 import type { UseFormRegisterReturn } from 'react-hook-form';
 import type { DynoRun } from '@shared/schemas/build';
 import type { DynoCsvResult } from '@shared/schemas/dyno-csv';
@@ -13,7 +13,6 @@ type RunUnits = Pick<DynoRun, 'powerUnit' | 'torqueUnit'>;
  * as it changes and the curve drawn before anything is saved; a problem is said once, under the field.
  */
 export function DynoCsvField({ field, parsed, serverError, units, onFile }: { field: UseFormRegisterReturn<'curveCsv'>; parsed: DynoCsvResult | null; serverError?: string; units: RunUnits; onFile: (text: string) => void }) {
-  const fileId = useId();
   const pick = async (e: ChangeEvent<HTMLInputElement>) => {
     const file = e.target.files?.[0];
     if (file) onFile(await file.text());
@@ -22,10 +21,11 @@ export function DynoCsvField({ field, parsed, serverError, units, onFile }: { fi
   return (
     <div className="flex flex-col gap-2">
       <div className="flex flex-wrap items-center gap-3">
-        <label htmlFor={fileId} className="inline-flex min-h-11 cursor-pointer items-center border-2 border-ink px-4 font-display text-sm uppercase tracking-wide hover:bg-ink hover:text-paper focus-within:ring-2 focus-within:ring-signal">
+        {/* The input sits inside its label, so the keyboard focus ring shows on the visible button. */}
+        <label className="inline-flex min-h-11 cursor-pointer items-center border-2 border-ink px-4 font-display text-sm uppercase tracking-wide focus-within:ring-2 focus-within:ring-signal hover:bg-ink hover:text-paper">
           Import the dyno’s CSV file
+          <input type="file" accept=".csv,.txt,.tsv,text/csv,text/plain" className="sr-only" onChange={pick} />
         </label>
-        <input id={fileId} type="file" accept=".csv,.txt,.tsv,text/csv,text/plain" className="sr-only" onChange={pick} />
         <span className="text-sm text-graphite">or paste it below.</span>
       </div>
       <TextAreaField
