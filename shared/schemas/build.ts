@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { boundedNumber, figureSchema, shortText, type FigureInput } from './figure';
 import type { Sections, SectionKind } from './build-sections';
-import { parseDynoCsv } from './dyno-csv';
+import { dynoCurveFromCsv } from './dyno-csv';
 import { text } from './text';
 import { calendarDate } from './dates';
 import { megabytes } from '../words';
@@ -111,7 +111,7 @@ export const DynoRunCreateSchema = z
   })
   .transform(({ curveCsv, ...run }, ctx) => {
     if (curveCsv === undefined || curveCsv.trim() === '') return run;
-    const parsed = parseDynoCsv(curveCsv);
+    const parsed = dynoCurveFromCsv(curveCsv, run);
     if (!parsed.ok) {
       ctx.addIssue({ code: 'custom', path: ['curveCsv'], message: parsed.message });
       return z.NEVER;

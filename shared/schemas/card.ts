@@ -57,6 +57,14 @@ export const CARD_LEGIBILITY: Record<'small' | 'large', Legibility> = {
   small: { titleCapPt: 12 * MM, entryCapPt: 12 * MM, figureCapPt: 8 * MM, linePt: 10, qrPt: 50 * MM },
   large: { titleCapPt: 16 * MM, entryCapPt: 16 * MM, figureCapPt: 10 * MM, linePt: 12, qrPt: 75 * MM },
 };
+/**
+ * The smallest QR module, 6 pt (1/12 in, 2.1 mm): two pixels a module in a 24 px per inch picture of
+ * the card. At 50 mm a 29-module code has 1.6 px modules there and decodes only when the pixel grid
+ * happens to fall kindly (measured with jsQR on pdftoppm renders, tests/server/cards); at two
+ * pixels every design, paper and orientation decodes. A longer address means more modules, so
+ * the code grows with it rather than shrinking its modules.
+ */
+export const CARD_QR_MODULE_MIN_PT = 6;
 export const paperClass = (paper: Paper): keyof typeof CARD_LEGIBILITY => (paper === 'tabloid' || paper === 'a3' ? 'large' : 'small');
 /** Entry numbers run 1 to 9999. */
 export const CARD_ENTRY_NUMBER_MAX = 9999;

@@ -1,22 +1,143 @@
-/** A dyno curve pasted as CSV: a header naming rpm, power and torque columns (any order), then one row per point. */
-export type DynoCsvResult = { ok: true; points: { rpm: number; power: number; torque: number }[] } | { ok: false; message: string };
+import Papa from 'papaparse';
+import { convert, parseUnit, type PowerUnit, type TorqueUnit } from '../calc/units';
 
-const COLUMNS = ['rpm', 'power', 'torque'] as const;
+// A dyno curve from a CSV file or pasted text, as dyno software exports it: a header row naming an
+// rpm, a power and a torque column in any order and any case ("RPM,HP,TQ", "Engine Speed;Power
+// (kW);Torque (Nm)", "rpm, Horsepower, Torque (lb-ft)"), possibly after a few lines about the run
+// and followed by a row of units; commas, semicolons or tabs between cells; decimal points or
+// decimal commas. Other columns (boost, air-fuel ratio, road speed) are passed over.
 
-export function parseDynoCsv(text: string): DynoCsvResult {
-  const lines = text.split(/\r?\n/).map((l) => l.trim()).filter((l) => l && !l.startsWith('#'));
-  if (lines.length < 2) return { ok: false, message: 'Paste a header line (rpm, power, torque) and at least one row.' };
-  const sep = lines[0]!.includes(';') ? ';' : lines[0]!.includes('\t') ? '\t' : ',';
-  const header = lines[0]!.split(sep).map((h) => h.trim().toLowerCase());
-  const index = Object.fromEntries(COLUMNS.map((c) => [c, header.findIndex((h) => h.startsWith(c))])) as Record<(typeof COLUMNS)[number], number>;
-  const missing = COLUMNS.filter((c) => index[c] < 0);
-  if (missing.length) return { ok: false, message: `The header has no ${missing.join(' or ')} column (found: ${header.join(', ')}).` };
-  const points = [];
-  for (let i = 1; i < lines.length; i++) {
-    const cells = lines[i]!.split(sep).map((c) => c.trim());
-    const row = COLUMNS.map((c) => Number(cells[index[c]]));
-    if (cells.length < header.length || row.some((n) => !Number.isFinite(n))) return { ok: false, message: `Line ${i + 1} does not have a number in every column.` };
-    points.push({ rpm: row[0]!, power: row[1]!, torque: row[2]! });
+export type DynoPoint = { rpm: number; power: number; torque: number };
+type Column = 'rpm' | 'power' | 'torque';
+export type DynoCsvColumns = Record<Column, { index: number; name: string }>;
+export type DynoCsvResult =
+  | { ok: true; points: DynoPoint[]; units: { power: PowerUnit | null; torque: TorqueUnit | null }; columns: DynoCsvColumns }
+  | { ok: false; message: string };
+
+/** How far down a file the header may sit (exports put the run's details above it). */
+const HEADER_SEARCH_ROWS = 25;
+
+// Header words for each column, matched as whole words after lower-casing. Torque is tried first,
+// so "Torque (kW·h)" style oddities never pass for power; rpm before power, so "Power @ RPM" is not rpm.
+const WORDS: Record<Column, RegExp> = {
+  torque: /\b(torque|tq|trq)\b|^(nm|n·m|n-m|lb-?ft|lbs?-?ft|ft-?lbs?|lbf-?ft)$/,
+  rpm: /\b(rpm|revs|1\/min|u\/min|engine speed|motor speed)\b|^rpm$/,
+  power: /\b(power|pwr|horsepower|hp|whp|bhp|rwhp|ps|kw|cv)\b/,
+};
+const POWER_WORDS: Record<string, PowerUnit> = { horsepower: 'hp', rwhp: 'hp' };
+
+const clean = (h: string) => h.replace(/^\uFEFF/, '').trim();
+
+/** The unit a header names, in brackets ("Power (kW)", "Torque [Nm]") or as one of its words ("HP", "Torque lb-ft"). */
+function unitOf<K extends 'power' | 'torque'>(kind: K, header: string) {
+  const bracketed = header.match(/[([]\s*([^)\]]+?)\s*[)\]]/)?.[1];
+  const words = header.toLowerCase().split(/[\s_()[\]]+/).filter(Boolean);
+  for (const candidate of [bracketed, header, ...words]) {
+    if (!candidate) continue;
+    const unit = parseUnit(kind, candidate) ?? (kind === 'power' ? POWER_WORDS[candidate.toLowerCase()] : undefined);
+    if (unit) return unit as K extends 'power' ? PowerUnit : TorqueUnit;
   }
-  return { ok: true, points };
+  return null;
+}
+
+function columnsOf(row: string[]): Partial<DynoCsvColumns> {
+  const found: Partial<DynoCsvColumns> = {};
+  row.forEach((cell, index) => {
+    const name = clean(cell);
+    const text = name.toLowerCase();
+    if (!text) return;
+    const column = (['torque', 'rpm', 'power'] as const).find((c) => WORDS[c].test(text));
+    if (column && !found[column]) found[column] = { index, name };
+  });
+  return found;
+}
+
+/**
+ * A cell as a number: "5500", "5 500", "312.4", "312,4" (decimal comma), "1.234,5" and "1,234.5"
+ * (the last separator is the decimal one). Null when it is not a number.
+ */
+export function readDecimal(cell: string | undefined): number | null {
+  let s = (cell ?? '').replace(/[\s\u00a0\u202f']/g, '');
+  if (!s) return null;
+  const lastComma = s.lastIndexOf(',');
+  const lastDot = s.lastIndexOf('.');
+  if (lastComma >= 0 && lastDot >= 0) s = lastComma > lastDot ? s.replace(/\./g, '').replace(',', '.') : s.replace(/,/g, '');
+  else if (lastComma >= 0) s = s.indexOf(',') === lastComma ? s.replace(',', '.') : s.replace(/,/g, '');
+  if (!/^[-+]?(\d+\.?\d*|\.\d+)$/.test(s)) return null;
+  return Number(s);
+}
+
+const COLUMN_WORDS: Record<Column, string> = { rpm: 'rpm', power: 'power', torque: 'torque' };
+
+type Row = { cells: string[]; line: number };
+
+function rowsOf(text: string, delimiter?: string): Row[] {
+  const { data } = Papa.parse(text, delimiter ? { delimiter } : { delimitersToGuess: [';', '\t', ',', '|'] });
+  // Blank lines and # notes are passed over here rather than by the parser, so line numbers stay the file's.
+  return data.map((cells, i) => ({ cells, line: i + 1 })).filter((r) => r.cells.some((c) => c.trim()) && !r.cells[0]!.trimStart().startsWith('#'));
+}
+
+const headerAt = (lines: Row[]) => lines.slice(0, HEADER_SEARCH_ROWS).findIndex((r) => Object.keys(columnsOf(r.cells)).length === 3);
+
+export function parseDynoCsv(input: string): DynoCsvResult {
+  const text = input.replace(/^\uFEFF/, '');
+  // The separator is the one that splits some early row into the three columns: lines about the run
+  // above the header can mislead a guess made from the whole file.
+  const split = [';', '\t', ',', '|'].map((d) => rowsOf(text, d)).find((rows) => headerAt(rows) >= 0);
+  const lines = split ?? rowsOf(text);
+  if (lines.length < 2) return { ok: false, message: 'Give a header row naming the rpm, power and torque columns, then at least one row of numbers.' };
+
+  const at = headerAt(lines);
+  if (at < 0) {
+    const first = lines[0]!.cells.map(clean).filter(Boolean);
+    const have = columnsOf(lines[0]!.cells);
+    const missing = (['rpm', 'power', 'torque'] as const).filter((c) => !have[c]).map((c) => COLUMN_WORDS[c]);
+    return { ok: false, message: `The header has no ${missing.join(' or ')} column (found: ${first.join(', ')}). Name them, for example RPM, HP and TQ.` };
+  }
+  const columns = columnsOf(lines[at]!.cells) as DynoCsvColumns;
+  let units = { power: unitOf('power', columns.power.name), torque: unitOf('torque', columns.torque.name) };
+
+  let body = lines.slice(at + 1);
+  // A row of units under the header ("rpm, kW, Nm"): read, then skipped.
+  const unitsRow = body[0];
+  const cellOf = (column: Column) => unitsRow?.cells[columns[column].index] ?? '';
+  if (unitsRow && readDecimal(cellOf('rpm')) === null && (/rpm|min/i.test(cellOf('rpm')) || unitOf('power', cellOf('power')) || unitOf('torque', cellOf('torque')))) {
+    units = { power: units.power ?? unitOf('power', cellOf('power')), torque: units.torque ?? unitOf('torque', cellOf('torque')) };
+    body = body.slice(1);
+  }
+  if (!body.length) return { ok: false, message: 'The header is there, but no row of numbers follows it.' };
+
+  const width = lines[at]!.cells.length;
+  const points: DynoPoint[] = [];
+  for (const { cells, line } of body) {
+    // More cells than the header has: most often decimal commas in a file split by commas.
+    if (cells.length > width && cells.slice(width).some((c) => c.trim())) return { ok: false, message: `Line ${line} has more cells than the header. Decimal commas need semicolons or tabs between the cells.` };
+    const point = {} as DynoPoint;
+    for (const column of ['rpm', 'power', 'torque'] as const) {
+      const cell = (cells[columns[column].index] ?? '').trim();
+      const value = readDecimal(cell);
+      if (value === null) return { ok: false, message: cell ? `Line ${line}: "${cell}" in the ${columns[column].name} column is not a number.` : `Line ${line} has no ${columns[column].name} value.` };
+      point[column] = value;
+    }
+    points.push(point);
+  }
+  return { ok: true, points, units, columns };
+}
+
+const round = (n: number, decimals: number) => Math.round(n * 10 ** decimals) / 10 ** decimals;
+
+/**
+ * The curve in the run's own units: a column whose header names another unit ("Power (kW)" for a
+ * run in hp) is converted; a header with no unit ("TQ") is read in the run's unit.
+ */
+export function dynoCurveFromCsv(text: string, runUnits: { powerUnit: PowerUnit; torqueUnit: TorqueUnit }): DynoCsvResult {
+  const parsed = parseDynoCsv(text);
+  if (!parsed.ok) return parsed;
+  const { power, torque } = parsed.units;
+  const points = parsed.points.map((p) => ({
+    rpm: p.rpm,
+    power: power && power !== runUnits.powerUnit ? round(convert('power', p.power, power, runUnits.powerUnit), 2) : p.power,
+    torque: torque && torque !== runUnits.torqueUnit ? round(convert('torque', p.torque, torque, runUnits.torqueUnit), 2) : p.torque,
+  }));
+  return { ...parsed, points };
 }

@@ -1,5 +1,5 @@
 import { Image, View } from '@react-pdf/renderer';
-import type { CardLeftOff, CardShow, Legibility } from '@shared/schemas/card';
+import { CARD_QR_MODULE_MIN_PT, type CardLeftOff, type CardShow, type Legibility } from '@shared/schemas/card';
 import type { CardContent } from './content';
 import type { BlockSpec, Laid } from './layout';
 import { lineWidth, setLines, sizeForCap, textWidth, withEllipsis, type Line, type Span } from './measure';
@@ -126,8 +126,11 @@ export function entryBlock(ctx: Ctx): BlockSpec | undefined {
 
 // ---------------------------------------------------------------- QR code
 
-/** The side of the drawn QR block (code plus quiet zone) for a code at least `codePt` wide. */
-export const qrBlockSide = (content: CardContent, codePt: number) => (codePt / content.qr.size) * (content.qr.size + 2 * QR_QUIET);
+/** The side of the drawn QR block (code plus quiet zone) for a code at least `codePt` wide, with modules never under the minimum. */
+export const qrBlockSide = (content: CardContent, codePt: number) => {
+  const module = Math.max(codePt / content.qr.size, CARD_QR_MODULE_MIN_PT);
+  return module * (content.qr.size + 2 * QR_QUIET);
+};
 
 export function qrBlock({ content, k, leg }: Ctx, scale = 1): BlockSpec {
   const side = qrBlockSide(content, leg.qrPt * scale);
@@ -178,11 +181,16 @@ export function figuresBlock({ content, k, leg }: Ctx, opts: { maxCols?: number;
     lay(step, width, maxHeight) {
       const size = sizes[step]!;
       let cols = Math.min(figures.length, opts.maxCols ?? 5);
-      const fitsIn = (n: number) => figures.every((f) => lineWidth(valueSpans(f), size) <= ((width - (n - 1) * gap) / n) * 0.97);
+      // A column count fits when every value and every label fits its cell whole ("POWER-TO-WEIGHT" is never cut).
+      const labelSpans = (f: CardContent['figures'][number]): Span[] => [{ text: f.label.toUpperCase(), face: 'display-500', letterSpacing: 0.8 }];
+      const fitsIn = (n: number) => {
+        const cell = (width - (n - 1) * gap) / n;
+        return figures.every((f) => lineWidth(valueSpans(f), size) <= cell * 0.97 && lineWidth(labelSpans(f), labelSize) <= cell);
+      };
       while (cols > 1 && !fitsIn(cols)) cols--;
       const cellW = (width - (cols - 1) * gap) / cols;
       const cells = figures.map((f) => ({
-        label: clamp(setLines([{ text: f.label.toUpperCase(), face: 'display-500', letterSpacing: 0.8 }], labelSize, cellW, 1.25), 1, cellW),
+        label: clamp(setLines(labelSpans(f), labelSize, cellW, 1.25), 1, cellW),
         value: clamp(setLines(valueSpans(f), size, cellW, DISPLAY_LH), 1, cellW),
         note: f.note ? clamp(setLines([{ text: f.note, face: 'text-400' }], noteSize, cellW, 1.25), 1, cellW) : [],
       }));
@@ -251,10 +259,11 @@ export function flowBlock(label: string, items: FlowItem[], sizes: number[], opt
       const queue = [...(i && used[used.length - 1]! > 0 ? [spacer] : []), ...lines];
       for (const [li, line] of queue.entries()) {
         const c = columns.length - 1;
-        // An item's first line never ends a column alone (a heading without its rows).
+        // An item's first line never ends a column alone (a heading without its rows), the last column included.
         const keepWith = line === lines[0] && lines.length > 1 ? lines[1]!.height : 0;
-        if (used[c]! + line.height + keepWith > limit + 0.01 && (used[c]! + line.height > limit + 0.01 || columns.length < cols)) {
-          if (columns.length < cols) {
+        if (used[c]! + line.height + keepWith > limit + 0.01) {
+          // A fresh column takes the line only if it fits there (a limit under one line prints nothing).
+          if (columns.length < cols && line.height + keepWith <= limit + 0.01) {
             columns.push([]);
             used.push(0);
             if (line === spacer) continue;
@@ -393,22 +402,37 @@ export function storyBlock({ content, k, leg }: Ctx): BlockSpec | undefined {
 
 // ---------------------------------------------------------------- photo, "more on the phone", footer
 
-/** The cover photo, taking what its column has left (at least a share of the page); without one, a dark panel with the year. */
-export function photoBlock({ content, contentHeight }: Ctx, shares = [0.42, 0.32, 0.24, 0.16]): BlockSpec {
+/**
+ * The cover photo, taking what its column has left (at least a share of the page); without one, a dark
+ * panel with the year. With `spareOnly` it asks for no room of its own and only fills what is left over
+ * (Compact: a sparse card gets its photo, a full one loses nothing to it).
+ */
+export function photoBlock({ content, contentHeight }: Ctx, shares = [0.42, 0.32, 0.24, 0.16], opts: { spareOnly?: boolean } = {}): BlockSpec {
   const cover = content.cover;
   const year = content.heading.match(/^\d{4}\b/)?.[0] ?? '';
+  const sized = cover && !opts.spareOnly;
   return {
-    label: cover ? 'Photo' : '',
-    steps: cover ? shares.length : 1,
+    label: sized ? 'Photo' : '',
+    steps: sized ? shares.length : 1,
     grow: true,
     lay: (step) => ({
-      height: cover ? contentHeight * shares[step]! : 1,
+      height: sized ? contentHeight * shares[step]! : 1,
       draw: (w, h) =>
-        cover ? (
-          <Image src={{ data: cover.data, format: cover.format }} style={{ width: w, height: h, objectFit: 'cover' }} />
+        h <= 60 ? (
+          // Too short to show anything: a sliver of photo or a bare dark stripe reads as a printing fault, so the space stays paper.
+          <View style={{ width: w, height: h }} />
+        ) : cover ? (
+          w / h > (cover.width / cover.height) * 4 ? (
+            // Cropped to a strip under a quarter of its height, a photo shows a slice of roof: the whole photo, centred, instead.
+            <View style={{ width: w, height: h, alignItems: 'center' }}>
+              <Image src={{ data: cover.data, format: cover.format }} style={{ width: (h * cover.width) / cover.height, height: h }} />
+            </View>
+          ) : (
+            <Image src={{ data: cover.data, format: cover.format }} style={{ width: w, height: h, objectFit: 'cover' }} />
+          )
         ) : (
           <View style={{ width: w, height: h, backgroundColor: INK, justifyContent: 'flex-end', padding: Math.min(18, h / 6) }}>
-            {year && h > 60 ? <Lines lines={setLines([{ text: year, face: 'display-700' }], Math.min(h * 0.55, (w - 40) / (textWidth(year, 'display-700', 1) * 1.05)), w - 36, 1.05)} color="#2E2C29" /> : null}
+            {year ? <Lines lines={setLines([{ text: year, face: 'display-700' }], Math.min(h * 0.55, (w - 40) / (textWidth(year, 'display-700', 1) * 1.05)), w - 36, 1.05)} color="#2E2C29" /> : null}
           </View>
         ),
     }),

@@ -1,4 +1,4 @@
-import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock } from './blocks';
+import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock } from './blocks';
 import { only, type DesignFn } from './design';
 
 /**
@@ -22,10 +22,11 @@ export const compactDesign: DesignFn = (ctx, box) => {
     sections: sectionLinesBlock(big),
     credits: creditsBlock(ctx),
     story: storyBlock(ctx),
+    photo: photoBlock(ctx, undefined, { spareOnly: true }),
     more: moreBlock(ctx),
     footer: footerBlock(ctx),
   });
-  const priority = ['footer', 'title', 'entry', 'qr', 'figures', 'engine', 'sections', 'credits', 'story'] as const;
+  const priority = ['footer', 'title', 'entry', 'qr', 'figures', 'engine', 'sections', 'credits', 'story', 'photo'] as const;
   if (!box.landscape) {
     return {
       blocks,
@@ -39,6 +40,7 @@ export const compactDesign: DesignFn = (ctx, box) => {
           { block: 'sections', width: cw },
           { block: 'credits', width: cw },
           { block: 'story', width: cw },
+          { block: 'photo', width: cw },
           { block: 'more', width: cw },
           { block: 'footer', width: cw },
         ],
@@ -54,7 +56,7 @@ export const compactDesign: DesignFn = (ctx, box) => {
       col: [
         {
           row: [
-            { col: [{ block: 'title', width: sideW }, { block: 'figures', width: sideW }, { block: 'engine', width: sideW }, { block: 'sections', width: sideW }, { block: 'credits', width: sideW }, { block: 'story', width: sideW }, { block: 'more', width: sideW }], width: sideW, gap: g },
+            { col: [{ block: 'title', width: sideW }, { block: 'figures', width: sideW }, { block: 'engine', width: sideW }, { block: 'sections', width: sideW }, { block: 'credits', width: sideW }, { block: 'story', width: sideW }, { block: 'photo', width: sideW }, { block: 'more', width: sideW }], width: sideW, gap: g },
             { col: [{ block: 'entry', width: qrW }, { block: 'qr', width: qrW }], width: qrW, gap: g },
           ],
           gap: g * 1.5,

@@ -1,10 +1,11 @@
 import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionRowsBlock, storyBlock, titleBlock } from './blocks';
 import { only, type DesignFn } from './design';
+import { fitBlocks, type BlockId, type Geo } from './layout';
 
 /**
  * Data sheet: the title and the show beside the QR code, the figures on a rule, then every chosen
- * section as a block of label / value rows poured into columns. A sparse build's photo fills what
- * the rows leave.
+ * section as a block of label / value rows poured into columns. The photo (or, without one, a dark
+ * panel with the year) fills what the rows leave.
  */
 export const dataSheetDesign: DesignFn = (ctx, box) => {
   const { k } = ctx;
@@ -20,28 +21,53 @@ export const dataSheetDesign: DesignFn = (ctx, box) => {
     engine: engineBlock(ctx),
     sections: sectionRowsBlock(ctx, box.landscape ? 3 : 2),
     credits: creditsBlock(ctx),
-    photo: ctx.content.cover ? photoBlock(ctx, [0.25, 0.15]) : undefined,
+    // Without a photo the dark panel with the year takes what the rows leave, so a sparse sheet is not half blank.
+    photo: photoBlock(ctx, [0.25, 0.15]),
     story: storyBlock(ctx),
     more: moreBlock(ctx),
     footer: footerBlock(ctx),
   });
-  return {
-    blocks,
-    priority: ['footer', 'title', 'entry', 'qr', 'figures', 'engine', 'sections', 'credits', 'photo', 'story'],
-    geo: {
-      col: [
-        { row: [{ col: [{ block: 'title', width: headW }, { block: 'entry', width: headW }], width: headW, gap: g }, { col: [{ block: 'qr', width: qrW }], width: qrW, gap: g }], gap: g * 1.5 },
-        { block: 'figures', width: cw },
-        { block: 'engine', width: cw },
-        { block: 'sections', width: cw },
-        { block: 'credits', width: cw },
-        { block: 'story', width: cw },
-        { block: 'photo', width: cw },
-        { block: 'more', width: cw },
-        { block: 'footer', width: cw },
-      ],
-      width: cw,
-      gap: g,
-    },
+  const priority: BlockId[] = ['footer', 'title', 'entry', 'qr', 'figures', 'engine', 'sections', 'credits', 'photo', 'story'];
+  // The head: title and show beside the code, the figures below. A long title (and a long show name)
+  // can make that head so tall that the figures fall off the card; then the figures move up beside
+  // the code, with the title across the page above when that keeps more. The head that keeps the
+  // most important blocks whole wins; ties keep the usual one.
+  const beside = (ids: BlockId[]): Geo => ({ row: [{ col: ids.map((block) => ({ block, width: headW })), width: headW, gap: g }, { col: [{ block: 'qr', width: qrW }], width: qrW, gap: g }], gap: g * 1.5 });
+  const heads: Geo[][] = [
+    [beside(['title', 'entry']), { block: 'figures', width: cw }],
+    [beside(['title', 'entry', 'figures'])],
+    [{ block: 'title', width: cw }, beside(['entry', 'figures'])],
+    [{ block: 'title', width: cw }, { block: 'entry', width: cw }, beside(['figures'])],
+  ];
+  const geoWith = (head: Geo[]): Geo => ({
+    col: [
+      ...head,
+      { block: 'engine', width: cw },
+      { block: 'sections', width: cw },
+      { block: 'credits', width: cw },
+      { block: 'story', width: cw },
+      { block: 'photo', width: cw },
+      { block: 'more', width: cw },
+      { block: 'footer', width: cw },
+    ],
+    width: cw,
+    gap: g,
+  });
+  // How many blocks, most important first, a head keeps whole.
+  const kept = (geo: Geo) => {
+    const lostLabels = new Set(fitBlocks(geo, blocks, priority, ctx.contentHeight).leftOff.map((l) => l.block));
+    const lost = priority.findIndex((id) => blocks[id] && lostLabels.has(blocks[id].label));
+    return lost < 0 ? priority.length : lost;
   };
+  // Only a head that loses the figures (or more) is worth changing the card's usual look for.
+  const figuresAt = priority.indexOf('figures');
+  let best = geoWith(heads[0]!);
+  let bestKept = kept(best);
+  for (const head of heads.slice(1)) {
+    if (bestKept > figuresAt) break;
+    const geo = geoWith(head);
+    const keeps = kept(geo);
+    if (keeps > bestKept) [best, bestKept] = [geo, keeps];
+  }
+  return { blocks, priority, geo: best };
 };

@@ -28,13 +28,15 @@ export type Geo = { block: BlockId; width: number } | { col: Geo[]; width: numbe
 type State = { step: Partial<Record<BlockId, number>>; cut: Partial<Record<BlockId, number>>; dropped: Set<BlockId> };
 export type Fitted = { state: State; laid: Map<BlockId, Laid>; leftOff: CardLeftOff[] };
 
-export const anyCut = (s: Pick<State, 'cut' | 'dropped'>) => s.dropped.size > 0 || Object.keys(s.cut).length > 0;
+/** Whether anything worth naming was cut or left off (a block with no label is decoration). */
+export const anyCut = (s: Pick<State, 'cut' | 'dropped'>, blocks: Partial<Record<BlockId, BlockSpec>>) =>
+  [...s.dropped].some((id) => blocks[id]?.label) || Object.keys(s.cut).length > 0;
 
 function layAll(geo: Geo, blocks: Partial<Record<BlockId, BlockSpec>>, state: State, out: Map<BlockId, Laid>) {
   if ('block' in geo) {
     const spec = blocks[geo.block];
     if (!spec || state.dropped.has(geo.block)) return;
-    const laid = geo.block === 'more' ? (anyCut(state) ? spec.lay(0, geo.width) : null) : spec.lay(state.step[geo.block] ?? 0, geo.width, state.cut[geo.block]);
+    const laid = geo.block === 'more' ? (anyCut(state, blocks) ? spec.lay(0, geo.width) : null) : spec.lay(state.step[geo.block] ?? 0, geo.width, state.cut[geo.block]);
     if (laid && laid.height > 0) out.set(geo.block, laid);
     return;
   }
@@ -119,7 +121,10 @@ export function fitBlocks(geo: Geo, blocks: Partial<Record<BlockId, BlockSpec>>,
   const { laid } = evaluate();
   const leftOff: CardLeftOff[] = [];
   for (const id of ids) {
-    if (state.dropped.has(id)) leftOff.push({ block: blocks[id]!.label, detail: 'left off' });
+    // A block with no label (the dark panel standing in for a photo) is decoration: never reported.
+    if (state.dropped.has(id)) {
+      if (blocks[id]!.label) leftOff.push({ block: blocks[id]!.label, detail: 'left off' });
+    }
     else leftOff.push(...(laid.get(id)?.leftOff ?? []));
   }
   return { state, laid, leftOff };

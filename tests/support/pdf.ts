@@ -1,5 +1,5 @@
 import { execFileSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { PNG } from 'pngjs';
@@ -43,6 +43,38 @@ export function rasterize(pdf: Buffer, dpi: number): { width: number; height: nu
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
+}
+
+export type Pixels = { width: number; height: number; data: Buffer };
+
+/** Every page as RGBA pixels at `dpi`, from one pdftoppm run (cheap at scanning resolutions). */
+export function rasterizePages(pdf: Buffer, dpi: number): Pixels[] {
+  const dir = mkdtempSync(path.join(tmpdir(), 'placard-pdf-'));
+  try {
+    writeFileSync(path.join(dir, 'doc.pdf'), pdf);
+    execFileSync(PDFTOPPM, ['-r', String(dpi), '-png', path.join(dir, 'doc.pdf'), path.join(dir, 'page')]);
+    // pdftoppm numbers the files page-01.png … with as many digits as the last page needs.
+    const files = readdirSync(dir).filter((f) => f.startsWith('page-')).sort((a, b) => Number(a.match(/\d+/)![0]) - Number(b.match(/\d+/)![0]));
+    return files.map((f) => PNG.sync.read(readFileSync(path.join(dir, f))));
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+/**
+ * The part of a page a phone aimed at the code would see: `box` (PDF points, origin bottom left)
+ * grown by `aroundPt` on every side, cut out of pixels rendered at `dpi`.
+ */
+export function cropPoints(img: Pixels, box: Box, dpi: number, aroundPt: number): Pixels {
+  const s = dpi / 72;
+  const x0 = Math.max(0, Math.floor((box.x0 - aroundPt) * s));
+  const x1 = Math.min(img.width, Math.ceil((box.x1 + aroundPt) * s));
+  const y0 = Math.max(0, Math.floor(img.height - (box.y1 + aroundPt) * s));
+  const y1 = Math.min(img.height, Math.ceil(img.height - (box.y0 - aroundPt) * s));
+  const width = x1 - x0;
+  const data = Buffer.alloc(width * (y1 - y0) * 4);
+  for (let y = y0; y < y1; y++) img.data.copy(data, (y - y0) * width * 4, (y * img.width + x0) * 4, (y * img.width + x1) * 4);
+  return { width, height: y1 - y0, data };
 }
 
 /** Decodes a QR code in RGBA pixels; null when none reads. */

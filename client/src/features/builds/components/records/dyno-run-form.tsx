@@ -1,16 +1,15 @@
 import { useState } from 'react';
 import { useFieldArray, useForm, useWatch } from 'react-hook-form';
 import { CORRECTION_STANDARDS, DynoRunCreateSchema, type DynoRunFormInput, type OwnerBuild } from '@shared/schemas/build';
-import { parseDynoCsv } from '@shared/schemas/dyno-csv';
-import { formatNumber } from '@shared/calc';
+import { dynoCurveFromCsv } from '@shared/schemas/dyno-csv';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
 import { SelectField } from '@client/components/ui/select-field';
-import { TextAreaField } from '@client/components/ui/text-area-field';
 import { TextField } from '@client/components/ui/text-field';
 import { useAddDynoRun } from '../../api/add-dyno-run';
 import { asNumber, formResolver, placeServerErrors } from '../editor/form-values';
 import { errorAt } from '../editor/fields';
+import { DynoCsvField } from './dyno-csv-field';
 
 type Values = DynoRunFormInput & { curveMode: 'csv' | 'table' };
 
@@ -39,26 +38,17 @@ function firstMessage(error: unknown): string | undefined {
   return undefined;
 }
 
-function CsvPreview({ text }: { text: string | undefined }) {
-  if (!text?.trim()) return <p className="text-sm text-graphite">Paste a header line naming rpm, power and torque (any order, comma, semicolon or tab), then one row per point.</p>;
-  const parsed = parseDynoCsv(text);
-  if (!parsed.ok) return <p role="alert" className="text-sm text-danger">{parsed.message}</p>;
-  const first = parsed.points[0]!;
-  const last = parsed.points[parsed.points.length - 1]!;
-  return (
-    <p className="text-sm text-ok" data-testid="csv-preview">
-      Reads as {parsed.points.length} points, {formatNumber(first.rpm)}–{formatNumber(last.rpm)} rpm; highest power {formatNumber(Math.max(...parsed.points.map((p) => p.power)), { decimals: 1 })}, highest torque {formatNumber(Math.max(...parsed.points.map((p) => p.torque)), { decimals: 1 })}.
-    </p>
-  );
-}
-
 export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () => void }) {
   const add = useAddDynoRun(build.id);
   const [formError, setFormError] = useState('');
-  const { register, control, handleSubmit, setError, formState: { errors } } = useForm<Values>({ resolver: formResolver<Values>(DynoRunCreateSchema, clean), defaultValues: blank() });
+  const { register, control, handleSubmit, setError, setValue, formState: { errors } } = useForm<Values>({ resolver: formResolver<Values>(DynoRunCreateSchema, clean), defaultValues: blank() });
   const { fields, append, remove } = useFieldArray({ control, name: 'curve' });
   const mode = useWatch({ control, name: 'curveMode' });
   const csv = useWatch({ control, name: 'curveCsv' });
+  const powerUnit = useWatch({ control, name: 'powerUnit' });
+  const torqueUnit = useWatch({ control, name: 'torqueUnit' });
+  // Parsed as the owner types or imports, with the same function the server saves with.
+  const parsed = mode === 'csv' && csv?.trim() ? dynoCurveFromCsv(csv, { powerUnit, torqueUnit }) : null;
   const onSubmit = handleSubmit((run) => {
     setFormError('');
     add.mutate(run as DynoRunFormInput, {
@@ -87,17 +77,20 @@ export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () =
         <legend className="mb-1 text-sm font-semibold">The curve</legend>
         <div className="flex flex-wrap gap-4">
           <label className="flex min-h-11 items-center gap-2">
-            <input type="radio" value="csv" className="h-5 w-5 accent-ink" {...register('curveMode')} /> Paste CSV
+            <input type="radio" value="csv" className="h-5 w-5 accent-ink" {...register('curveMode')} /> A CSV file or pasted
           </label>
           <label className="flex min-h-11 items-center gap-2">
             <input type="radio" value="table" className="h-5 w-5 accent-ink" {...register('curveMode')} /> Type rows
           </label>
         </div>
         {mode === 'csv' ? (
-          <>
-            <TextAreaField label="Curve as CSV" rows={6} className="[&_textarea]:font-mono" placeholder={'rpm,power,torque\n3000,210,368\n3500,250,375'} {...register('curveCsv')} error={errorAt(errors, 'curveCsv')} />
-            <CsvPreview text={csv} />
-          </>
+          <DynoCsvField
+            field={register('curveCsv')}
+            parsed={parsed}
+            serverError={errorAt(errors, 'curveCsv')}
+            units={{ powerUnit, torqueUnit }}
+            onFile={(text) => setValue('curveCsv', text, { shouldDirty: true, shouldValidate: true })}
+          />
         ) : (
           <>
             <table className="w-full text-sm">
