@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { UNITS, convert, type QuantityKind, type Unit, type UnitOf } from '../calc/units';
-import { formatQuantity } from '../calc/format';
+import { DEFAULT_DECIMALS, UNIT_LABELS, formatNumber } from '../calc/format';
 
 export const PROVENANCES = ['measured', 'estimated', 'target'] as const;
 export const ProvenanceSchema = z.enum(PROVENANCES, { error: 'Say whether the figure is measured, estimated or a target.' });
@@ -37,14 +37,15 @@ export function figureSchema<K extends QuantityKind>(kind: K, range: Range<K>) {
 }
 
 /**
- * "Bore must be between 20 and 200 mm.", said again in the unit the owner typed when it is another
- * ("… (0.79 in to 7.87 in)."), so inches need no sums. The one wording the form and the API both show.
+ * "Bore must be between 20 and 200 mm." When the owner typed another unit, the range leads in that
+ * unit and the rule's own follows ("Bore must be between 0.79 and 7.87 in (20 to 200 mm)."), so
+ * inches need no sums. The one wording the form and the API both show.
  */
 export function figureRangeMessage<K extends QuantityKind>(kind: K, range: Range<K>, typedUnit?: string): string {
-  const base = `${range.label} must be between ${range.min} and ${range.max} ${range.unit}`;
-  if (!typedUnit || typedUnit === range.unit || !(typedUnit in UNITS[kind])) return `${base}.`;
-  const inTyped = (v: number) => formatQuantity({ value: convert(kind, v, range.unit, typedUnit as UnitOf<K>), unit: typedUnit as Unit });
-  return `${base} (${inTyped(range.min)} to ${inTyped(range.max)}).`;
+  if (!typedUnit || typedUnit === range.unit || !(typedUnit in UNITS[kind])) return `${range.label} must be between ${range.min} and ${range.max} ${range.unit}.`;
+  const unit = typedUnit as UnitOf<K>;
+  const inTyped = (v: number) => formatNumber(convert(kind, v, range.unit, unit), { decimals: DEFAULT_DECIMALS[unit as Unit] });
+  return `${range.label} must be between ${inTyped(range.min)} and ${inTyped(range.max)}\u00a0${UNIT_LABELS[unit as Unit]} (${range.min} to ${range.max} ${range.unit}).`;
 }
 
 export type FigureInput = {
