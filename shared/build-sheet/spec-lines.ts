@@ -272,8 +272,10 @@ export function sectionViews(sections: Sections, units: UnitSystem, only: readon
     const s = sections[kind];
     if (!s) continue;
     const rows = ROWS_OF[kind](sections, units);
-    const madeBy = madeByText(s.madeBy);
-    const note = s.note?.trim() || null;
+    // "Made by" and "why this choice" belong to spec sections: the extra lines no longer offer them,
+    // and what an older sheet kept there is not shown.
+    const madeBy = kind === 'extra' ? null : madeByText(s.madeBy);
+    const note = kind === 'extra' ? null : s.note?.trim() || null;
     if (rows.length === 0 && !madeBy && !note) continue;
     views.push({
       kind,

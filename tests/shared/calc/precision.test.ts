@@ -45,3 +45,13 @@ describe('the build sheet in words, to the trade’s precision', () => {
     expect(row('imperial', 'wheels', 'Front')).toContain('5.5\u00a0in backspacing');
   });
 });
+
+describe('extra lines', () => {
+  it('show their lines only: "Made by" and "why this choice" belong to spec sections', () => {
+    const sections = { extra: { lines: [{ label: 'Fuel cell', value: '16 gal' }], madeBy: { kind: 'shop', name: 'Old Kept Shop' }, note: 'An old reason' } } as unknown as Sections;
+    const view = sectionViews(sections, 'metric').find((v) => v.kind === 'extra')!;
+    expect(view.rows).toEqual([{ label: 'Fuel cell', value: '16 gal' }]);
+    expect(view.madeBy).toBeNull();
+    expect(view.note).toBeNull();
+  });
+});
