@@ -95,7 +95,7 @@ describe('spec sections', () => {
   });
 
   it.each([
-    ['a negative bore', 'engine', { bore: { value: -4, unit: 'in', provenance: 'measured' } }, 'bore.value', /between 20 and 200 mm/],
+    ['a negative bore', 'engine', { bore: { value: -4, unit: 'in', provenance: 'measured' } }, 'bore.value', /^Bore must be between 0.79 and 7.87\u00a0in \(20 to 200 mm\)\.$/],
     ['a wrong unit', 'engine', { bore: { value: 4, unit: 'furlong', provenance: 'measured' } }, 'bore.unit', /unit must be one of/],
     ['a 40-speed gearbox', 'drivetrain', { gears: Array.from({ length: 40 }, () => 1) }, 'gears', /At most 10/],
     ['a 200-inch rim', 'wheels', { front: { rimDiameterIn: 200 } }, 'front.rimDiameterIn', /at most 30/],

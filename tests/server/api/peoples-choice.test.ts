@@ -93,7 +93,7 @@ describe('a visitor votes on the public build page', () => {
     expect(formTokenIn(pageB.text)).not.toBe(formTokenIn(pageA.text));
     expect(pageB.text).not.toContain('Thank you for voting');
     expect((await a.view(car)).text).toContain('Thank you for voting');
-    const cached = [...Array(2)].map((_, i) => publicPageCache.get(`${car}|${i ? 'imperial' : 'metric'}`)).find(Boolean);
+    const cached = ['metric', 'uk', 'imperial'].map((units) => publicPageCache.get(`${car}|${units}`)).find(Boolean);
     expect(cached).toBeDefined();
     const shared = cached!.identity.toString('utf8');
     expect(shared).toContain('data-vote-box');
