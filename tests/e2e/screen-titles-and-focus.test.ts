@@ -8,12 +8,14 @@ import { createFullBuild } from '../support/build-factory';
 const env = useBrowserAndServer();
 
 /** What a screen reader user would be told: the tab's title and the focused element. */
+const EMAIL_MESSAGE = 'Enter a valid e-mail address.';
+
 const focused = (page: Page) => page.evaluate(() => `${document.activeElement?.tagName ?? ''} ${document.activeElement?.textContent?.trim() ?? ''}`);
 
 describe('screen titles, focus after navigation and a safe editor address', () => {
   it('names each screen in the tab title, moves the focus to the new heading, and never asks for /api/builds/NaN', async () => {
     const { user, email, password } = await createUser({ name: 'Orla Fenwick' });
-    await createFullBuild(user.id, { title: 'Low Tide Roadster' });
+    const build = await createFullBuild(user.id, { title: 'Low Tide Roadster' });
     const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, locale: 'en-GB' });
     const page = await context.newPage();
     const apiCalls: string[] = [];
@@ -25,7 +27,16 @@ describe('screen titles, focus after navigation and a safe editor address', () =
     await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent('/builds')}`);
     await expect.poll(() => page.title()).toBe('Sign in · Placard');
     expect(await focused(page)).not.toMatch(/^H1/);
+    // Sign-in checks its fields with the shared schema (loaded on demand): each field says what is wrong,
+    // the first one in trouble takes the focus, and a message goes once its field is changed.
+    await page.getByLabel('E-mail').fill('not an address');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect.poll(() => page.getByRole('alert').allTextContents()).toEqual([EMAIL_MESSAGE, 'Password is required.']);
+    await expect.poll(() => focused(page)).toBe('INPUT ');
+    expect(await page.evaluate(() => (document.activeElement as HTMLInputElement).name)).toBe('email');
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'sign-in-field-errors-phone.png') });
     await page.getByLabel('E-mail').fill(email);
+    await expect.poll(() => page.getByRole('alert').allTextContents()).toEqual(['Password is required.']);
     await page.getByLabel('Password').fill(password);
     await page.getByRole('button', { name: 'Sign in' }).click();
 
@@ -59,6 +70,14 @@ describe('screen titles, focus after navigation and a safe editor address', () =
     await page.goto(`${env.baseUrl}/builds/not-a-number`);
     await expect.poll(() => page.getByText('That is not a build’s address.').count()).toBe(1);
     expect(apiCalls.filter((p) => p.startsWith('/api/builds/'))).toEqual([]);
+
+    // On a desk: the editor overlays the newest two dyno runs in the public page's chart.
+    await page.setViewportSize({ width: 1366, height: 900 });
+    await page.goto(`${env.baseUrl}/builds/${build.id}`);
+    const chart = page.getByTestId('dyno-chart').getByRole('img', { name: /Dyno curves/ });
+    await expect.poll(() => chart.locator('path').count()).toBe(4);
+    await page.locator('#section-dyno').scrollIntoViewIfNeeded();
+    await page.locator('#section-dyno').screenshot({ path: path.join(SCREENSHOT_DIR, 'editor-dyno-two-runs-desktop.png') });
     await context.close();
   });
 });
