@@ -20,6 +20,14 @@ export function useScreenHeading(main: RefObject<HTMLElement | null>): void {
     // The first screen of a visit keeps the browser's own starting point; later screens take the focus.
     let focusPending = shownPath.current !== null && shownPath.current !== pathname;
     shownPath.current = pathname;
+    // Until the new screen's heading is there, the tab names the site, never the screen left behind.
+    document.title = SITE;
+    // A heading that arrives after the person has started doing something does not pull the focus away.
+    const stopWaiting = () => {
+      focusPending = false;
+    };
+    document.addEventListener('pointerdown', stopWaiting, { once: true });
+    document.addEventListener('keydown', stopWaiting, { once: true });
     const follow = () => {
       const heading = root.querySelector('h1');
       const text = heading?.textContent?.trim();
@@ -33,6 +41,10 @@ export function useScreenHeading(main: RefObject<HTMLElement | null>): void {
     follow();
     const watcher = new MutationObserver(follow);
     watcher.observe(root, { childList: true, subtree: true, characterData: true });
-    return () => watcher.disconnect();
+    return () => {
+      watcher.disconnect();
+      document.removeEventListener('pointerdown', stopWaiting);
+      document.removeEventListener('keydown', stopWaiting);
+    };
   }, [main, pathname]);
 }
