@@ -71,6 +71,12 @@ describe('screen titles, focus after navigation and a safe editor address', () =
     await expect.poll(() => page.getByText('That is not a build’s address.').count()).toBe(1);
     expect(apiCalls.filter((p) => p.startsWith('/api/builds/'))).toEqual([]);
 
+    // The judge's home names itself even with nothing to judge.
+    await page.goto(`${env.baseUrl}/judge`);
+    await expect.poll(() => page.getByText('Nothing to judge now').count()).toBe(1);
+    await expect.poll(() => page.title()).toBe('Shows to judge · Placard');
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'judge-home-empty-phone.png') });
+
     // On a desk: the editor overlays the newest two dyno runs in the public page's chart.
     await page.setViewportSize({ width: 1366, height: 900 });
     await page.goto(`${env.baseUrl}/builds/${build.id}`);
