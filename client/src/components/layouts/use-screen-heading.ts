@@ -1,4 +1,4 @@
-import { useEffect, useRef, type RefObject } from 'react';
+import { useLayoutEffect, useRef, type RefObject } from 'react';
 import { useLocation } from 'react-router-dom';
 
 const SITE = 'Placard';
@@ -14,7 +14,9 @@ export function useScreenHeading(main: RefObject<HTMLElement | null>): void {
   const { pathname } = useLocation();
   const shownPath = useRef<string | null>(null);
 
-  useEffect(() => {
+  // A layout effect, so the focus moves before the new screen is painted: never after someone (or a
+  // test) has already clicked or typed into it.
+  useLayoutEffect(() => {
     const root = main.current;
     if (!root) return;
     // The first screen of a visit keeps the browser's own starting point; later screens take the focus.
@@ -26,8 +28,8 @@ export function useScreenHeading(main: RefObject<HTMLElement | null>): void {
     const stopWaiting = () => {
       focusPending = false;
     };
-    document.addEventListener('pointerdown', stopWaiting, { once: true });
-    document.addEventListener('keydown', stopWaiting, { once: true });
+    const USER_EVENTS = ['pointerdown', 'keydown', 'focusin'] as const;
+    for (const type of USER_EVENTS) document.addEventListener(type, stopWaiting, { once: true });
     const follow = () => {
       const heading = root.querySelector('h1');
       const text = heading?.textContent?.trim();
@@ -43,8 +45,7 @@ export function useScreenHeading(main: RefObject<HTMLElement | null>): void {
     watcher.observe(root, { childList: true, subtree: true, characterData: true });
     return () => {
       watcher.disconnect();
-      document.removeEventListener('pointerdown', stopWaiting);
-      document.removeEventListener('keydown', stopWaiting);
+      for (const type of USER_EVENTS) document.removeEventListener(type, stopWaiting);
     };
   }, [main, pathname]);
 }
