@@ -21,7 +21,9 @@ const LAYER_ZONES = [
   // shared/ → nothing of ours but itself.
   zone('./shared', ['./client', './server', './templates', './tests'], 'shared/ is pure: it imports nothing from client/, server/, templates/ or tests/.'),
   // The browser never reaches into the server or the print templates.
-  zone('./client', ['./server', './templates', './tests'], 'client/ never imports server/ or templates/: share code through shared/.'),
+  zone('./client', ['./server', './tests'], 'client/ never imports server/: share code through shared/.'),
+  // …nor the print templates, except templates/charts: plain SVG views the public page and the editor both draw.
+  zone('./client', './templates', 'client/ never imports templates/ (only templates/charts, plain SVG views drawn on both sides).', ['./charts']),
   // The server never reaches into the client.
   zone('./server', ['./client', './tests'], 'server/ never imports client/ code.'),
   // Templates are what is printed or sent: they get finished content, never the server's code.
@@ -85,7 +87,8 @@ export default tseslint.config(
     },
   },
   {
-    files: ['client/**/*.ts', 'client/**/*.tsx'],
+    // templates/charts also run in the browser.
+    files: ['client/**/*.ts', 'client/**/*.tsx', 'templates/charts/**/*.tsx', 'templates/charts/**/*.ts'],
     rules: { 'import-x/no-nodejs-modules': 'error' },
   },
   {

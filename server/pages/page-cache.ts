@@ -82,26 +82,3 @@ export class PageCache {
 }
 
 export const publicPageCache = new PageCache();
-
-/** br, then gzip, then none, honouring q=0. */
-export function pickEncoding(header: string | undefined): 'br' | 'gzip' | 'identity' {
-  if (!header) return 'identity';
-  const accepted = new Set<string>();
-  for (const part of header.toLowerCase().split(',')) {
-    const [name = '', ...params] = part.trim().split(';');
-    const q = params.map((p) => p.trim()).find((p) => p.startsWith('q='));
-    if (q && Number(q.slice(2)) === 0) continue;
-    accepted.add(name.trim());
-  }
-  if (accepted.has('br')) return 'br';
-  if (accepted.has('gzip') || accepted.has('*')) return 'gzip';
-  return 'identity';
-}
-
-/** If-None-Match against our weak ETag (weak comparison, as RFC 9110 asks for GET). */
-export function matchesEtag(header: string | undefined, etag: string): boolean {
-  if (!header) return false;
-  if (header.trim() === '*') return true;
-  const bare = etag.replace(/^W\//, '');
-  return header.split(',').some((t) => t.trim().replace(/^W\//, '') === bare);
-}

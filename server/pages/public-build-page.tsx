@@ -7,7 +7,7 @@ import { computeKeyFigures } from '@shared/build-sheet/key-figures';
 import { FUEL_LEVEL_LABELS, PROVENANCE_MARKS, inText } from '@shared/build-sheet/choice-labels';
 import { headlineOf } from '@shared/build-sheet/headline';
 import { DISPLACEMENT_ROW, engineLine, sectionViews, type SectionView } from '@shared/build-sheet/spec-lines';
-import { DynoChart } from './dyno-chart';
+import { DynoChart } from '@templates/charts/dyno-chart';
 import { PAGE_CSS } from './page-styles';
 
 /**

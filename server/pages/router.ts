@@ -7,7 +7,8 @@ import { loadPublicBuild, publicVersion } from '../services/public-builds';
 import { presentPublicBuild } from '../presenters/public-build';
 import { showSlotOfBuild } from '../services/public-events';
 import { NOT_FOUND_HTML, renderPublicBuildPage } from './public-build-page';
-import { compressPage, matchesEtag, pickEncoding, publicPageCache, type CachedPage } from './page-cache';
+import { compressPage, publicPageCache, type CachedPage } from './page-cache';
+import { encodingFor } from './send-html';
 import { OSWALD_URL } from './page-styles';
 import { config } from '../config';
 import { isDatabaseUnavailable } from '../services/database-unavailable';
@@ -62,11 +63,12 @@ function send(req: Request, res: Response, page: CachedPage, varyLanguage: boole
     'Cache-Control': `${res.getHeader('set-cookie') ? 'private' : 'public'}, ${page.mustRevalidate ? 'no-cache' : 'max-age=30, stale-while-revalidate=300'}`,
     Vary: varyOf(varyLanguage),
   });
-  if (matchesEtag(req.get('if-none-match'), page.etag)) {
+  // req.fresh compares If-None-Match with the ETag just set (weakly, as RFC 9110 asks for GET).
+  if (req.fresh) {
     res.status(304).end();
     return;
   }
-  const encoding = pickEncoding(req.get('accept-encoding'));
+  const encoding = encodingFor(req);
   if (encoding !== 'identity') res.set('Content-Encoding', encoding);
   res.type('html').end(encoding === 'br' ? page.br : encoding === 'gzip' ? page.gzip : page.identity);
 }
@@ -93,7 +95,7 @@ async function sendWithVoteBox(req: Request, res: Response, page: CachedPage, vo
     // vote carry its real Origin for the check, and still tells other sites nothing.
     'Referrer-Policy': 'same-origin',
   });
-  const encoding = pickEncoding(req.get('accept-encoding'));
+  const encoding = encodingFor(req);
   if (encoding !== 'identity') res.set('Content-Encoding', encoding);
   // Compressed per response at a quick level: a page is a few tens of kilobytes.
   res.type('html').end(encoding === 'br' ? brotliCompressSync(html, { params: { [zlib.BROTLI_PARAM_QUALITY]: 5 } }) : encoding === 'gzip' ? gzipSync(html, { level: 6 }) : html);

@@ -13,5 +13,5 @@ export * from './suspension';
 export * from './four-link';
 export * from './tubes';
 export * from './corner-weights';
-export * from './spec-check';
+export * from './spec-check-rules';
 export * from './safety';

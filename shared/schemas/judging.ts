@@ -1,9 +1,11 @@
 import { z } from 'zod';
+import { SCORE_ITEMS_PER_REQUEST_MAX } from '../judging/sheet-state';
+
+// The judge's phone reads these without zod (they are in the code it keeps offline): they live in judging/sheet-state.ts.
+export { SCORE_ITEMS_PER_REQUEST_MAX, SHEET_STATES, SHEET_STATE_LABELS, sheetState, type SheetState } from '../judging/sheet-state';
 
 export const SCORE_COMMENT_MAX = 1000;
 export const SHEET_NOTE_MAX = 2000;
-/** A phone sends one car's sheet at a time; this is room for a long sheet and a few replays. */
-export const SCORE_ITEMS_PER_REQUEST_MAX = 200;
 /** A phone clock this far ahead of the server is refused: its scores would otherwise win every later change. */
 export const DEVICE_CLOCK_AHEAD_MAX_MS = 24 * 3600_000;
 
@@ -63,15 +65,6 @@ export type ScoreSubmitInput = z.infer<typeof ScoreSubmitSchema>;
 /** For each item sent: whether it became the stored value (false = an older or repeated one, ignored). */
 export const ScoreSubmitResultSchema = z.object({ applied: z.array(z.object({ clientId: z.string(), applied: z.boolean() })) });
 
-export const SHEET_STATES = ['scored', 'partly', 'not_yet'] as const;
-export type SheetState = (typeof SHEET_STATES)[number];
-export const SHEET_STATE_LABELS: Record<SheetState, string> = { scored: 'Scored', partly: 'Partly', not_yet: 'Not yet' };
-
-/** A sheet counts once every line has points; anything less is still being filled in. */
-export function sheetState(linesScored: number, lines: number): SheetState {
-  if (lines > 0 && linesScored >= lines) return 'scored';
-  return linesScored > 0 ? 'partly' : 'not_yet';
-}
 
 /** Entries that are judged: those holding a paid or free place (checked in or not); waiting, unpaid and withdrawn ones are not. */
 export const JUDGED_ENTRY_STATUSES = ['confirmed', 'checked_in'] as const;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { specWarnings } from '@client/features/builds/components/numbers/spec-input';
+import { specWarnings } from '@client/features/builds/model/numbers/spec-input';
 import type { Sections } from '@shared/schemas/build-sections';
 
 // The editor's spec check: the build sheet mapped onto shared/calc's specCheck, each warning placed on its field.

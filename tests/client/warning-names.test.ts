@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { specWarnings } from '@client/features/builds/components/numbers/spec-input';
-import { groupWarnings, warningFieldName } from '@client/features/builds/components/numbers/warning-names';
+import { specWarnings } from '@client/features/builds/model/numbers/spec-input';
+import { groupWarnings, warningFieldName } from '@client/features/builds/model/numbers/warning-names';
 import type { Sections } from '@shared/schemas/build-sections';
 
 // The numbers panel's spec-check list: each message names its section and field; an explanation is said once.

@@ -127,8 +127,11 @@ describe('the build editor in the browser', () => {
     await expect.poll(() => run.getByTestId('csv-preview').textContent()).toContain('8 points');
     await run.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-dyno-form-phone.png') });
     await run.getByRole('button', { name: 'Add the run' }).click();
-    await dyno.locator('svg.recharts-surface').first().waitFor({ timeout: 10_000 });
-    await expect.poll(() => dyno.locator('.recharts-line').count()).toBeGreaterThanOrEqual(2);
+    // The editor draws the public page's SVG chart: one solid power and one dashed torque curve for the run.
+    const chart = dyno.getByRole('img', { name: /Dyno curves, power solid and torque dashed/ });
+    await expect.poll(() => chart.getAttribute('aria-labelledby')).toBe('editor-dyno-title');
+    await expect.poll(() => chart.locator('path').count()).toBe(2);
+    await expect.poll(() => chart.locator('path[stroke-dasharray]').count()).toBe(1);
     await dyno.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-dyno-phone.png') });
     await dyno.getByRole('button', { name: 'Use as the build’s power figure' }).click();
     await expect.poll(() => dyno.getByText(/now measured on/).count()).toBe(1);

@@ -1,19 +1,9 @@
-import { createBrowserRouter } from 'react-router-dom';
+import type { ComponentType } from 'react';
+import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { AppLayout } from '@client/components/layouts/app-layout';
 import { RequireUser } from '@client/components/layouts/require-user';
 import { ServerPage } from './server-page';
 import { SignInPage } from '@client/features/session/components/sign-in-page';
-import { SignUpPage } from '@client/features/session/components/sign-up-page';
-import { ResetPasswordPage } from '@client/features/account/components/reset-password-page';
-import { AccountPage } from '@client/features/account/components/account-page';
-import { VerifyEmailPage } from '@client/features/account/components/verify-email-page';
-import { MyBuildsPage } from '@client/features/builds/components/my-builds-page';
-import { ShowsPage } from '@client/features/shows/components/shows-page';
-import { CreateShowPage } from '@client/features/shows/components/create-show-page';
-import { ShowPage } from '@client/features/shows/components/show-page';
-import { EnterShowPage } from '@client/features/shows/components/enter-show-page';
-import { MyEntriesPage } from '@client/features/shows/components/my-entries-page';
-import { InvitationPage } from '@client/features/shows/components/invitation-page';
 import { NotFoundPage } from './not-found-page';
 import { RouteError } from './route-error';
 import { LoadingState } from '@client/components/ui/states';
@@ -21,6 +11,21 @@ import { JudgeLayout } from '@client/features/judging/components/judge-layout';
 import { JudgeHomePage } from '@client/features/judging/components/judge-home-page';
 import { JudgeCarsPage } from '@client/features/judging/components/judge-cars-page';
 import { ScoreSheetPage } from '@client/features/judging/components/score-sheet-page';
+
+/**
+ * A screen whose code is fetched the first time it is opened, so sign-in and the home page carry only
+ * what they need (`npm run bench` prints the sizes). `signedIn` wraps it in RequireUser.
+ */
+function lazyScreen(path: string, load: () => Promise<ComponentType>, { signedIn = true } = {}): RouteObject {
+  return {
+    path,
+    lazy: async () => {
+      const Screen = await load();
+      return { element: signedIn ? <RequireUser><Screen /></RequireUser> : <Screen /> };
+    },
+    errorElement: <RouteError />,
+  };
+}
 
 export const router = createBrowserRouter([
   // The judge's screens are in the main bundle and outside the app layout: they must open from the
@@ -44,11 +49,11 @@ export const router = createBrowserRouter([
       { path: '/', element: <ServerPage />, errorElement: <RouteError /> },
       { path: '/c', element: <ServerPage />, errorElement: <RouteError /> },
       { path: '/sign-in', element: <SignInPage />, errorElement: <RouteError /> },
-      { path: '/sign-up', element: <SignUpPage />, errorElement: <RouteError /> },
-      { path: '/reset-password', element: <ResetPasswordPage />, errorElement: <RouteError /> },
-      { path: '/verify-email', element: <VerifyEmailPage />, errorElement: <RouteError /> },
-      { path: '/account', element: <RequireUser><AccountPage /></RequireUser>, errorElement: <RouteError /> },
-      { path: '/builds', element: <RequireUser><MyBuildsPage /></RequireUser>, errorElement: <RouteError /> },
+      lazyScreen('/sign-up', async () => (await import('@client/features/session/components/sign-up-page')).SignUpPage, { signedIn: false }),
+      lazyScreen('/reset-password', async () => (await import('@client/features/account/components/reset-password-page')).ResetPasswordPage, { signedIn: false }),
+      lazyScreen('/verify-email', async () => (await import('@client/features/account/components/verify-email-page')).VerifyEmailPage, { signedIn: false }),
+      lazyScreen('/account', async () => (await import('@client/features/account/components/account-page')).AccountPage),
+      lazyScreen('/builds', async () => (await import('@client/features/builds/components/my-builds-page')).MyBuildsPage),
       {
         path: '/builds/:id',
         // The editor (forms, the numbers, the dyno chart) loads only when opened, so the home page stays light.
@@ -91,12 +96,12 @@ export const router = createBrowserRouter([
         },
         errorElement: <RouteError />,
       },
-      { path: '/shows', element: <RequireUser><ShowsPage /></RequireUser>, errorElement: <RouteError /> },
-      { path: '/shows/new', element: <RequireUser><CreateShowPage /></RequireUser>, errorElement: <RouteError /> },
-      { path: '/shows/:id', element: <RequireUser><ShowPage /></RequireUser>, errorElement: <RouteError /> },
-      { path: '/enter/:slug', element: <RequireUser><EnterShowPage /></RequireUser>, errorElement: <RouteError /> },
-      { path: '/entries', element: <RequireUser><MyEntriesPage /></RequireUser>, errorElement: <RouteError /> },
-      { path: '/invitations/:token', element: <InvitationPage />, errorElement: <RouteError /> },
+      lazyScreen('/shows', async () => (await import('@client/features/shows/components/shows-page')).ShowsPage),
+      lazyScreen('/shows/new', async () => (await import('@client/features/shows/components/create-show-page')).CreateShowPage),
+      lazyScreen('/shows/:id', async () => (await import('@client/features/shows/components/show-page')).ShowPage),
+      lazyScreen('/enter/:slug', async () => (await import('@client/features/shows/components/enter-show-page')).EnterShowPage),
+      lazyScreen('/entries', async () => (await import('@client/features/shows/components/my-entries-page')).MyEntriesPage),
+      lazyScreen('/invitations/:token', async () => (await import('@client/features/shows/components/invitation-page')).InvitationPage, { signedIn: false }),
       // Show day: the organiser's entries table and the gate, loaded only when opened.
       {
         path: '/shows/:id/entries',

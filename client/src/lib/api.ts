@@ -1,4 +1,4 @@
-import { ErrorResponseSchema, type ErrorCode } from '@shared/errors';
+import type { ErrorCode } from '@shared/errors';
 
 /** An API error in the server's one shape; `fields` names what to fix. */
 export class ApiError extends Error {
@@ -47,7 +47,10 @@ async function send(path: string, { method = 'GET', body, signal, keepalive }: O
 }
 
 async function toError(res: Response): Promise<ApiError> {
-  const parsed = ErrorResponseSchema.safeParse(await res.json().catch(() => null));
+  // The schema (and zod with it) loads on the first error answer, not with the first screen: most
+  // visits never see one, and sign-in stays light (`npm run bench`).
+  const [{ ErrorResponseSchema }, body] = await Promise.all([import('@shared/errors'), res.json().catch(() => null)]);
+  const parsed = ErrorResponseSchema.safeParse(body);
   if (parsed.success) return new ApiError(res.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.fields);
   return new ApiError(res.status, 'INTERNAL', `The server answered ${res.status}. Please try again.`);
 }

@@ -135,6 +135,13 @@ describe('GET /c/:code, the public build page', () => {
     expect(br.body.length).toBeLessThan(30 * 1024);
     expect(gz.body.length).toBeLessThan(30 * 1024);
     expect(gz.headers.etag).toBe(plain.headers.etag);
+    // A refusal (q=0) is honoured; "*" stands for brotli too.
+    const noBr = await rawGet(`${http.baseUrl}/c/${build.code}`, { 'Accept-Encoding': 'br;q=0, gzip' });
+    expect(noBr.headers['content-encoding']).toBe('gzip');
+    const any = await rawGet(`${http.baseUrl}/c/${build.code}`, { 'Accept-Encoding': '*' });
+    expect(any.headers['content-encoding']).toBe('br');
+    const none = await rawGet(`${http.baseUrl}/c/${build.code}`, { 'Accept-Encoding': 'br;q=0, gzip;q=0' });
+    expect(none.headers['content-encoding']).toBeUndefined();
   });
 
   it('answers a matching If-None-Match with 304 and no body', async () => {

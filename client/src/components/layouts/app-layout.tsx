@@ -1,4 +1,6 @@
+import { useRef } from 'react';
 import { Link, NavLink, Outlet } from 'react-router-dom';
+import { useScreenHeading } from './use-screen-heading';
 import { useSession } from '@client/features/session/api/get-session';
 import { useSignOut } from '@client/features/session/api/sign-out';
 import { VerifyEmailBanner } from '@client/features/account/components/verify-email-banner';
@@ -11,6 +13,8 @@ export function AppLayout() {
   const { data: session } = useSession();
   const signOut = useSignOut();
   const user = session?.user;
+  const main = useRef<HTMLElement>(null);
+  useScreenHeading(main);
 
   return (
     <div className="flex min-h-screen flex-col">
@@ -76,7 +80,7 @@ export function AppLayout() {
         </div>
       </header>
       {user && !user.emailVerified ? <VerifyEmailBanner user={user} demoMode={session.demoMode} /> : null}
-      <main id="main" className="mx-auto w-full min-w-0 max-w-5xl flex-1 px-4 py-6">
+      <main id="main" ref={main} className="mx-auto w-full min-w-0 max-w-5xl flex-1 px-4 py-6">
         <Outlet />
       </main>
       <footer className="border-t border-rule px-4 py-4 text-center text-sm text-graphite">

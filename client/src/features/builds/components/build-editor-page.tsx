@@ -77,8 +77,13 @@ function NoSuchBuild({ children }: { children: string }) {
 /** /builds/:id — the build editor: one form per section, each saved by itself as the owner types, and the live numbers. */
 export function BuildEditorPage() {
   const id = Number(useParams().id);
-  const { data, isPending, error, refetch } = useBuild(id);
+  // Checked before any request: /builds/abc must not ask the server for /api/builds/NaN.
   if (!Number.isInteger(id) || id <= 0) return <NoSuchBuild>That is not a build’s address.</NoSuchBuild>;
+  return <LoadedEditor id={id} />;
+}
+
+function LoadedEditor({ id }: { id: number }) {
+  const { data, isPending, error, refetch } = useBuild(id);
   if (isPending) return <LoadingState label="Loading the build sheet…" />;
   if (error) {
     if (error instanceof ApiError && (error.status === 404 || error.status === 403)) return <NoSuchBuild>No build of yours at this address. It may have been deleted.</NoSuchBuild>;

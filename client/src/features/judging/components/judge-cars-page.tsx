@@ -1,5 +1,5 @@
 import { Link, useParams } from 'react-router-dom';
-import { SHEET_STATE_LABELS, type SheetState } from '@shared/schemas/judging';
+import { SHEET_STATE_LABELS, type SheetState } from '@shared/judging/sheet-state';
 import { ErrorState, LoadingState, EmptyState } from '@client/components/ui/states';
 import { useJudgeView } from '../api/get-judge-view';
 import { carSheet } from '../offline/sheet-merge';

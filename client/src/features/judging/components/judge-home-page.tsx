@@ -6,6 +6,15 @@ import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/stat
 
 /** The shows this person is judging now; one tap opens their cars. */
 export function JudgeHomePage() {
+  return (
+    <>
+      <h1 className="mb-3 font-display text-3xl uppercase">Shows to judge</h1>
+      <ShowsToJudge />
+    </>
+  );
+}
+
+function ShowsToJudge() {
   const { data, error, isPending, refetch } = useQuery({ queryKey: ['judging', 'shows'], queryFn: () => api<{ events: EventSummary[] }>('/api/judging') });
   if (isPending) return <LoadingState />;
   if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;

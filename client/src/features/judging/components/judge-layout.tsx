@@ -1,4 +1,5 @@
-import { useEffect } from 'react';
+import { useEffect, useRef } from 'react';
+import { useScreenHeading } from '@client/components/layouts/use-screen-heading';
 import { Link, Outlet } from 'react-router-dom';
 import { useOnline } from './use-online';
 
@@ -8,6 +9,8 @@ import { useOnline } from './use-online';
  */
 export function JudgeLayout() {
   const online = useOnline();
+  const main = useRef<HTMLElement>(null);
+  useScreenHeading(main);
   useEffect(() => {
     // Scoped to /judge: the rest of the app keeps the network's answers.
     if ('serviceWorker' in navigator && import.meta.env.PROD) void navigator.serviceWorker.register('/judge-sw.js', { scope: '/judge' });
@@ -22,7 +25,7 @@ export function JudgeLayout() {
           {online ? 'Online' : 'No signal'}
         </span>
       </header>
-      <main id="main" className="mx-auto max-w-xl px-3 pb-24 pt-3">
+      <main id="main" ref={main} className="mx-auto max-w-xl px-3 pb-24 pt-3">
         <Outlet />
       </main>
     </div>

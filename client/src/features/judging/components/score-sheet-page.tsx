@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
-import { SHEET_STATE_LABELS } from '@shared/schemas/judging';
+import { SHEET_STATE_LABELS } from '@shared/judging/sheet-state';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
 import { useJudgeView } from '../api/get-judge-view';
 import { carSheet } from '../offline/sheet-merge';

@@ -1,6 +1,6 @@
 import { api, ApiError } from '@client/lib/api';
 import type { NoteItem, ScoreItem } from '@shared/schemas/judging';
-import { SCORE_ITEMS_PER_REQUEST_MAX } from '@shared/schemas/judging';
+import { SCORE_ITEMS_PER_REQUEST_MAX } from '@shared/judging/sheet-state';
 import { lineKey, readLines, writeLines, type LocalLine } from './sheet-store';
 
 /**

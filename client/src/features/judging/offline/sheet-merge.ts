@@ -1,4 +1,5 @@
-import { sheetState, type JudgeView, type SheetState } from '@shared/schemas/judging';
+import { sheetState, type SheetState } from '@shared/judging/sheet-state';
+import type { JudgeView } from '@shared/schemas/judging';
 import { lineKey, type LineState, type LocalLine } from './sheet-store';
 
 export type LineView = { points: number | null; comment: string; state: LineState | 'server' | 'empty'; message?: string };

@@ -1,10 +1,7 @@
-import { useState } from 'react';
-import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
-import { SignInSchema, type SignInInput } from '@shared/schemas/user';
 import { useSignIn } from '../api/sign-in';
-import { applyServerErrors } from '@client/lib/form-errors';
+import { fieldMessages, splitServerErrors } from '@client/lib/form-errors';
 import { Button } from '@client/components/ui/button';
 import { TextField } from '@client/components/ui/text-field';
 import { Notice } from '@client/components/ui/notice';
@@ -12,29 +9,59 @@ import { PageHeader } from '@client/components/ui/page-header';
 import { safeNext } from '../safe-next';
 import { landingAfterSignIn } from '@client/features/shows/api/landing';
 
+const FIELDS = ['email', 'password'] as const;
+type Field = (typeof FIELDS)[number];
+
+/** The shared schema, and zod with it, load once the person starts on the form rather than with the first screen. */
+const loadSchema = async () => (await import('@shared/schemas/user')).SignInSchema;
+
+/**
+ * /sign-in. Two fields checked by the shared schema directly, without a form library: this screen is
+ * in the code every visitor downloads first, so it stays light (see `npm run bench`).
+ */
 export function SignInPage() {
   const [params] = useSearchParams();
   const navigate = useNavigate();
   const signIn = useSignIn();
   const [formError, setFormError] = useState('');
-  const { register, handleSubmit, setError, formState: { errors } } = useForm<SignInInput>({ resolver: zodResolver(SignInSchema) });
+  const [errors, setErrors] = useState<Partial<Record<Field, string>>>({});
 
-  const onSubmit = handleSubmit((input) => {
+  const showErrors = (form: HTMLFormElement, fields: Partial<Record<Field, string>>) => {
+    setErrors(fields);
+    // As a form library would: the first field in trouble takes the focus.
+    const first = FIELDS.find((f) => fields[f]);
+    if (first) (form.elements.namedItem(first) as HTMLInputElement | null)?.focus();
+  };
+
+  const onSubmit = async (event: FormEvent<HTMLFormElement>) => {
+    event.preventDefault();
+    const form = event.currentTarget;
+    const data = new FormData(form);
     setFormError('');
-    signIn.mutate(input, {
+    const parsed = (await loadSchema()).safeParse({ email: data.get('email'), password: data.get('password') });
+    if (!parsed.success) return showErrors(form, fieldMessages<Field>(parsed.error));
+    setErrors({});
+    signIn.mutate(parsed.data, {
       onSuccess: async () => navigate(params.get('next') ? safeNext(params.get('next')) : await landingAfterSignIn(), { replace: true }),
-      onError: (err) => setFormError(applyServerErrors(err, setError, ['email', 'password'])),
+      onError: (err) => {
+        const { fields, message } = splitServerErrors(err, FIELDS);
+        showErrors(form, fields);
+        setFormError(message);
+      },
     });
-  });
+  };
+
+  // A field's message goes once the person changes that field.
+  const clearOnEdit = (field: Field) => () => setErrors((e) => (e[field] ? { ...e, [field]: undefined } : e));
 
   return (
     <div className="mx-auto max-w-md">
       <PageHeader title="Sign in" />
       {params.get('reset') === 'done' ? <Notice tone="ok">Your password is changed. Sign in with the new one.</Notice> : null}
-      <form onSubmit={onSubmit} noValidate className="mt-4 flex flex-col gap-4">
+      <form onSubmit={(e) => void onSubmit(e)} onFocus={() => void loadSchema()} noValidate className="mt-4 flex flex-col gap-4">
         {formError ? <Notice tone="danger">{formError}</Notice> : null}
-        <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" {...register('email')} error={errors.email?.message} />
-        <TextField label="Password" type="password" autoComplete="current-password" {...register('password')} error={errors.password?.message} />
+        <TextField label="E-mail" name="email" type="email" autoComplete="email" inputMode="email" onChange={clearOnEdit('email')} error={errors.email} />
+        <TextField label="Password" name="password" type="password" autoComplete="current-password" onChange={clearOnEdit('password')} error={errors.password} />
         <Button type="submit" busy={signIn.isPending}>
           Sign in
         </Button>

@@ -1,6 +1,7 @@
-import { SECTION_LABELS } from '@shared/schemas/build-sections';
 import { createContext, useContext, useSyncExternalStore } from 'react';
 import type { OwnerBuild } from '@shared/schemas/build';
+// The form names are the editor's vocabulary, used by the numbers logic too: they live in model/.
+export { FORM_LABELS, type FormKey } from '../../model/form-keys';
 
 /** A tiny external store: forms write to it as the owner types without re-rendering the page. */
 export class MapStore<V> {
@@ -22,8 +23,6 @@ export class MapStore<V> {
     return () => this.listeners.delete(listener);
   };
 }
-
-export type FormKey = 'overview' | 'engine' | 'drivetrain' | 'chassis' | 'brakes' | 'wheels' | 'body' | 'extra' | 'credits' | 'private';
 
 /** A panel whose edits are not stored yet: waiting for the typing to stop, on the way, or refused. */
 export type PendingState = 'pending' | 'saving' | 'failed';
@@ -58,10 +57,3 @@ export function useEditor(): Editor {
 export function useStoreVersion<V>(store: MapStore<V>): number {
   return useSyncExternalStore(store.subscribe, store.getVersion, store.getVersion);
 }
-
-export const FORM_LABELS: Record<FormKey, string> = {
-  overview: 'Overview',
-  ...SECTION_LABELS,
-  credits: 'Credits',
-  private: 'Private details',
-};

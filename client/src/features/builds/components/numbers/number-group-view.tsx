@@ -1,6 +1,6 @@
 import { ENGINEERING_CAUTION } from '@shared/calc';
 import { ProvenanceMark } from '@client/components/ui/provenance-mark';
-import type { NumberGroup } from './types';
+import type { NumberGroup } from '../../model/numbers/types';
 
 /** One block of computed figures: a small data table, with its notes in words. */
 export function NumberGroupView({ group, showHint = true }: { group: NumberGroup; showHint?: boolean }) {

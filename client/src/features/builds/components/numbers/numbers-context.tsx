@@ -6,8 +6,8 @@ import { SECTION_KINDS } from '@shared/schemas/build-sections';
 import { useEditor, useStoreVersion, type FormKey } from '../editor/editor-stores';
 import { cleanValues } from '../editor/form-values';
 import { useUnitSystem } from '../editor/unit-system';
-import { computeNumbers, type Numbers } from './compute-numbers';
-import type { PlacedWarning } from './spec-input';
+import { computeNumbers, type Numbers } from '../../model/numbers/compute-numbers';
+import type { PlacedWarning } from '../../model/numbers/spec-input';
 
 type NumbersState = Numbers & { system: UnitSystem; setSystem: (s: UnitSystem) => void; cruise: number; setCruise: (n: number) => void };
 

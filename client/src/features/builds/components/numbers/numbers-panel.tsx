@@ -2,8 +2,8 @@ import { useId, useState } from 'react';
 import { useNumbers } from './numbers-context';
 import { UnitSystemSwitch } from '../unit-system-switch';
 import { NumberGroupView } from './number-group-view';
-import { groupWarnings } from './warning-names';
-import type { NumberGroup } from './types';
+import { groupWarnings } from '../../model/numbers/warning-names';
+import type { NumberGroup } from '../../model/numbers/types';
 
 export function UnitToggle() {
   const { system, setSystem } = useNumbers();

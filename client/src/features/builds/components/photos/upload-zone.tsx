@@ -1,4 +1,4 @@
-import { useId, useRef, useState, type DragEvent } from 'react';
+import { useRef, useState, type DragEvent } from 'react';
 import { ApiError } from '@client/lib/api';
 import { megabytes } from '@shared/words';
 import { useUploadPhoto } from '../../api/upload-photos';
@@ -23,7 +23,6 @@ function refusalOf(file: File, err: Error): string {
 
 export function UploadZone({ buildId, maxBytes, maxFiles }: { buildId: number; maxBytes: number; maxFiles: number }) {
   const upload = useUploadPhoto(buildId);
-  const inputId = useId();
   const input = useRef<HTMLInputElement>(null);
   const [uploads, setUploads] = useState<Upload[]>([]);
   const [hover, setHover] = useState(false);
@@ -77,22 +76,22 @@ export function UploadZone({ buildId, maxBytes, maxFiles }: { buildId: number; m
         <p className="font-display uppercase tracking-wide">Drop photos here</p>
         <p className="text-sm text-graphite">
           or{' '}
-          <label htmlFor={inputId} className="inline-flex min-h-11 cursor-pointer items-center border-2 border-ink px-3 font-display uppercase text-ink hover:bg-ink hover:text-paper">
+          {/* The input sits inside its label, so the label shows the focus ring when the keyboard reaches the (visually hidden) input. */}
+          <label className="inline-flex min-h-11 cursor-pointer items-center border-2 border-ink px-3 font-display uppercase text-ink hover:bg-ink hover:text-paper has-focus-visible:outline-3 has-focus-visible:outline-offset-2 has-focus-visible:outline-signal">
             Choose photos
+            <input
+              ref={input}
+              type="file"
+              multiple
+              accept={TYPES.join(',')}
+              className="sr-only"
+              onChange={(e) => {
+                start([...(e.target.files ?? [])]);
+                if (input.current) input.current.value = '';
+              }}
+            />
           </label>
         </p>
-        <input
-          ref={input}
-          id={inputId}
-          type="file"
-          multiple
-          accept={TYPES.join(',')}
-          className="sr-only"
-          onChange={(e) => {
-            start([...(e.target.files ?? [])]);
-            if (input.current) input.current.value = '';
-          }}
-        />
         <p className="text-xs text-graphite">
           JPEG, PNG, WebP or AVIF, up to {megabytes(maxBytes)} each, {maxFiles} at a time. Location data is stripped; each photo is stored in sizes for phones and print.
         </p>

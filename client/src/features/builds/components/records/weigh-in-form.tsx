@@ -11,7 +11,7 @@ import { TextField } from '@client/components/ui/text-field';
 import { useAddWeighIn } from '../../api/add-weigh-in';
 import { asNumber, placeServerErrors } from '../editor/form-values';
 import { errorAt } from '../editor/fields';
-import { attempt } from '../numbers/read';
+import { attempt } from '../../model/numbers/read';
 
 const CORNERS = [
   ['leftFront', 'LF', 'Left front'],

@@ -8,7 +8,7 @@ import { Notice } from '@client/components/ui/notice';
 import { useApplyWeighIn } from '../../api/apply-weigh-in';
 import { useDeleteWeighIn } from '../../api/delete-weigh-in';
 import { EditorSection } from '../editor/section-form';
-import { attempt } from '../numbers/read';
+import { attempt } from '../../model/numbers/read';
 import { WeighInForm } from './weigh-in-form';
 
 const newestFirst = (a: WeighIn, b: WeighIn) => (a.date < b.date ? 1 : a.date > b.date ? -1 : b.id - a.id);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import type { Figure } from '@shared/calc/figure';
-import { SPEC_SECTIONS, specCheck, type SpecCheckInput } from '@shared/calc/spec-check';
+import { SPEC_SECTIONS, specCheck, type SpecCheckInput } from '@shared/calc/spec-check-rules';
 
 const measured = (value: number, unit: string, measuredOn = '2024-05-11'): Figure => ({
   value,

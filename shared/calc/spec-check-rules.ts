@@ -9,16 +9,16 @@ import {
   type SpecCheckInput,
   type SpecCheckOptions,
   type SpecWarning,
-} from './spec-check-types';
-import { SpecChecker, isFigure, isIsoDate, showFigure } from './spec-checker';
+} from './spec-check-contract';
+import { SpecWarningCollector, isFigure, isIsoDate, showFigure } from './spec-warning-collector';
 import type { TyreDimensions } from './tyres';
 import { UNITS, convert, parseUnit } from './units';
 import { wheelSpacing } from './wheels';
 
-export * from './spec-check-types';
+export * from './spec-check-contract';
 
 export function specCheck(input: SpecCheckInput, options: SpecCheckOptions = {}): SpecWarning[] {
-  const ctx = new SpecChecker({ ...SPEC_CHECK_DEFAULTS, ...options });
+  const ctx = new SpecWarningCollector({ ...SPEC_CHECK_DEFAULTS, ...options });
   ctx.run('engine.displacement', () => checkDisplacement(ctx, input));
   ctx.run('engine.wheelPower', () => checkWheelPower(ctx, input));
   ctx.run('performance.topSpeed', () => checkTopSpeed(ctx, input));
@@ -30,7 +30,7 @@ export function specCheck(input: SpecCheckInput, options: SpecCheckOptions = {})
   return ctx.warnings;
 }
 
-function checkDisplacement(ctx: SpecChecker, { engine }: SpecCheckInput): void {
+function checkDisplacement(ctx: SpecWarningCollector, { engine }: SpecCheckInput): void {
   if (!engine?.bore || !engine.stroke || !engine.displacement) return;
   if (engine.cylinders === undefined) return;
   const bore = ctx.read('length', engine.bore, 'mm', 'engine.bore');
@@ -62,7 +62,7 @@ function checkDisplacement(ctx: SpecChecker, { engine }: SpecCheckInput): void {
   );
 }
 
-function checkWheelPower(ctx: SpecChecker, { engine }: SpecCheckInput): void {
+function checkWheelPower(ctx: SpecWarningCollector, { engine }: SpecCheckInput): void {
   if (!engine?.flywheelPower || !engine.wheelPower) return;
   const flywheel = ctx.read('power', engine.flywheelPower, 'W', 'engine.flywheelPower');
   const wheel = ctx.read('power', engine.wheelPower, 'W', 'engine.wheelPower');
@@ -77,7 +77,7 @@ function checkWheelPower(ctx: SpecChecker, { engine }: SpecCheckInput): void {
   );
 }
 
-function checkTopSpeed(ctx: SpecChecker, input: SpecCheckInput): void {
+function checkTopSpeed(ctx: SpecWarningCollector, input: SpecCheckInput): void {
   const { engine, drivetrain, wheels, performance } = input;
   const ratios = drivetrain?.gearRatios;
   if (!performance?.topSpeed || !ratios?.length) return;
@@ -109,7 +109,7 @@ function checkTopSpeed(ctx: SpecChecker, input: SpecCheckInput): void {
   );
 }
 
-function checkTyreDiameters(ctx: SpecChecker, { wheels }: SpecCheckInput): void {
+function checkTyreDiameters(ctx: SpecWarningCollector, { wheels }: SpecCheckInput): void {
   const front = ctx.tyre(wheels?.front?.tyre, 'wheels.front.tyre');
   const rear = ctx.tyre(wheels?.rear?.tyre, 'wheels.rear.tyre');
   if (!front || !rear || wheels?.raked) return;
@@ -128,7 +128,7 @@ function checkTyreDiameters(ctx: SpecChecker, { wheels }: SpecCheckInput): void 
   );
 }
 
-function checkFrontspacing(ctx: SpecChecker, { wheels }: SpecCheckInput, end: 'front' | 'rear') {
+function checkFrontspacing(ctx: SpecWarningCollector, { wheels }: SpecCheckInput, end: 'front' | 'rear') {
   const w = wheels?.[end];
   if (!w?.rimWidth || (!w.offset && !w.backspacing)) return;
   const at = `wheels.${end}`;
@@ -158,7 +158,7 @@ function checkFrontspacing(ctx: SpecChecker, { wheels }: SpecCheckInput, end: 'f
   );
 }
 
-function checkPowerToWeight(ctx: SpecChecker, { engine, chassis }: SpecCheckInput): void {
+function checkPowerToWeight(ctx: SpecWarningCollector, { engine, chassis }: SpecCheckInput): void {
   const power = engine?.flywheelPower ?? engine?.wheelPower;
   if (!power || !chassis?.weight) return;
   const powerField = engine?.flywheelPower ? 'engine.flywheelPower' : 'engine.wheelPower';
@@ -180,7 +180,7 @@ function checkPowerToWeight(ctx: SpecChecker, { engine, chassis }: SpecCheckInpu
 }
 
 /** Every figure anywhere in the input that says "measured" should say when. */
-function checkMeasuredDates(ctx: SpecChecker, value: unknown, path: string): void {
+function checkMeasuredDates(ctx: SpecWarningCollector, value: unknown, path: string): void {
   if (value === null || typeof value !== 'object') return;
   if (!isFigure(value)) {
     for (const [key, child] of Object.entries(value)) {

@@ -1,4 +1,4 @@
-import { FORM_LABELS, type FormKey } from '../editor/editor-stores';
+import { FORM_LABELS, type FormKey } from '../form-keys';
 import type { PlacedWarning } from './spec-input';
 
 // The editor's own words for the figures the spec check reads (as their boxes are labelled).

@@ -1,7 +1,7 @@
 import { specCheck, type Figure, type SpecCheckInput, type SpecWarning } from '@shared/calc';
 import type { Sections } from '@shared/schemas/build-sections';
 import type { FigureInput } from '@shared/schemas/figure';
-import type { FormKey } from '../editor/editor-stores';
+import type { FormKey } from '../form-keys';
 
 export type Overview = { weight?: FigureInput | null };
 

@@ -1,32 +1,46 @@
 import { convert, formatNumber, preferredUnit, type UnitSystem } from '@shared/calc';
-import type { PublicBuild } from '@shared/schemas/build';
+import type { DynoRunCreateInput } from '@shared/schemas/build';
 
-type Run = PublicBuild['dynoRuns'][number];
+/** What the chart reads of a run: the owner's runs and the public page's both carry it. */
+export type ChartRun = Pick<DynoRunCreateInput, 'date' | 'curve' | 'powerUnit' | 'torqueUnit' | 'peakPower' | 'peakPowerRpm' | 'peakTorque' | 'peakTorqueRpm'>;
 
 const W = 640;
 const H = 320;
 const PAD = { left: 48, right: 56, top: 24, bottom: 50 };
 const COLOURS = ['#D9481C', '#55524C'];
+/** More than two overlaid runs cannot be told apart by colour and dash alone. */
+export const MAX_CHART_RUNS = 2;
 
-/** A run's curve in the visitor's units. */
-function inUnits(run: Run, units: UnitSystem) {
+/** A run's curve in the reader's units. */
+function inUnits(run: ChartRun, units: UnitSystem) {
   const pTo = preferredUnit('power', units);
   const tTo = preferredUnit('torque', units);
   return run.curve.map((p) => ({ rpm: p.rpm, power: convert('power', p.power, run.powerUnit, pTo), torque: convert('torque', p.torque, run.torqueUnit, tTo) }));
 }
 
+/** A round grid step (1, 2, 2.5 or 5 times a power of ten) giving about `ticks` lines: common practice for chart axes. */
 const niceStep = (range: number, ticks: number) => {
   const raw = range / ticks;
   const mag = 10 ** Math.floor(Math.log10(raw));
   return [1, 2, 2.5, 5, 10].map((m) => m * mag).find((s) => s >= raw) ?? raw;
 };
 
+type Props = {
+  /** Newest first; the first two with a curve are drawn. */
+  runs: ChartRun[];
+  units: UnitSystem;
+  /** Unique on the page: the SVG's accessible name points at it. */
+  titleId?: string;
+  className?: string;
+};
+
 /**
- * Power and torque against rpm for the latest two runs, drawn on the server as plain SVG: power
- * solid, torque dashed, one colour per run. No script and no chart bundle.
+ * Power and torque against rpm for up to two runs overlaid, as plain SVG with no script: power solid,
+ * torque dashed, one colour per run. The public page renders it on the server and the editor in the
+ * browser, so both draw the same chart with no charting library. Hovering a curve names its peak.
  */
-export function DynoChart({ runs, units }: { runs: Run[]; units: UnitSystem }) {
-  const drawn = runs.filter((r) => r.curve.length >= 2).slice(0, 2);
+export function DynoChart({ runs, units, titleId = 'dyno-title', className }: Props) {
+  const drawn = runs.filter((r) => r.curve.length >= 2).slice(0, MAX_CHART_RUNS);
   if (drawn.length === 0) return null;
   const curves = drawn.map((r) => inUnits(r, units));
   const all = curves.flat();
@@ -45,11 +59,13 @@ export function DynoChart({ runs, units }: { runs: Run[]; units: UnitSystem }) {
   for (let v = 0; v <= top + 1e-9; v += step) yTicks.push(v);
   const pu = preferredUnit('power', units);
   const tu = preferredUnit('torque', units) === 'lbft' ? 'lb·ft' : 'N·m';
-  const label = drawn.map((r) => `${r.date}: ${formatNumber(convert('power', r.peakPower, r.powerUnit, pu))} ${pu} peak`).join('; ');
+  const peak = (r: ChartRun) => `${formatNumber(convert('power', r.peakPower, r.powerUnit, pu))} ${pu} peak`;
+  const label = drawn.map((r) => `${r.date}: ${peak(r)}`).join('; ');
+  const peakTorque = (r: ChartRun) => `${formatNumber(convert('torque', r.peakTorque, r.torqueUnit, preferredUnit('torque', units)))} ${tu} peak`;
 
   return (
-    <svg viewBox={`0 0 ${W} ${H}`} width={W} height={H} role="img" aria-labelledby="dyno-title" xmlns="http://www.w3.org/2000/svg" fontFamily="system-ui,sans-serif" fontSize="17">
-      <title id="dyno-title">{`Dyno curves, power solid and torque dashed. ${label}`}</title>
+    <svg viewBox={`0 0 ${W} ${H}`} width={W} height={H} className={className} role="img" aria-labelledby={titleId} xmlns="http://www.w3.org/2000/svg" fontFamily="system-ui,sans-serif" fontSize="17">
+      <title id={titleId}>{`Dyno curves, power solid and torque dashed. ${label}`}</title>
       {yTicks.map((v) => (
         <g key={`y${v}`}>
           <line x1={PAD.left} x2={W - PAD.right} y1={y(v)} y2={y(v)} stroke="#D8D0C0" strokeWidth="1" />
@@ -70,8 +86,12 @@ export function DynoChart({ runs, units }: { runs: Run[]; units: UnitSystem }) {
       <text x={W - PAD.right + 6} y={PAD.top + 30} fill="#55524C">{tu}</text>
       {curves.map((c, i) => (
         <g key={i} fill="none" stroke={COLOURS[i]} strokeWidth={i === 0 ? 3 : 2} strokeLinejoin="round">
-          <path d={path(c.map((p) => ({ rpm: p.rpm, v: p.power })))} />
-          <path d={path(c.map((p) => ({ rpm: p.rpm, v: p.torque })))} strokeDasharray="7 5" />
+          <path d={path(c.map((p) => ({ rpm: p.rpm, v: p.power })))}>
+            <title>{`Power, ${drawn[i]!.date}: ${peak(drawn[i]!)} at ${formatNumber(drawn[i]!.peakPowerRpm)} rpm`}</title>
+          </path>
+          <path d={path(c.map((p) => ({ rpm: p.rpm, v: p.torque })))} strokeDasharray="7 5">
+            <title>{`Torque, ${drawn[i]!.date}: ${peakTorque(drawn[i]!)} at ${formatNumber(drawn[i]!.peakTorqueRpm)} rpm`}</title>
+          </path>
         </g>
       ))}
       {drawn.map((r, i) => (

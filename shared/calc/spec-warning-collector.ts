@@ -9,11 +9,11 @@ import {
   type SpecSection,
   type SpecWarning,
   type SpecWarningCode,
-} from './spec-check-types';
+} from './spec-check-contract';
 import { tryParseTyreCode, tyreDimensions, type TyreDimensions } from './tyres';
 import { convert, parseUnit, type QuantityKind, type UnitOf } from './units';
 
-export class SpecChecker {
+export class SpecWarningCollector {
   readonly warnings: SpecWarning[] = [];
   private readonly tyres = new Map<string, TyreDimensions | null>();
 
