@@ -38,6 +38,6 @@ describe("the owner's preview of the public page", () => {
     expect((await (await apiClient()).get(`/api/builds/${body.build.id}/preview`)).status).toBe(401);
     const bad = await client.get(`/api/builds/${body.build.id}/preview?units=furlongs`);
     expect(bad.status).toBe(400);
-    expect(bad.body.error.fields.units).toMatch(/metric or imperial/);
+    expect(bad.body.error.fields.units).toBe('Units must be metric, uk or imperial.');
   });
 });

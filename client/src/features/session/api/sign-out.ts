@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, setCsrfToken } from '@client/lib/api';
 import { sessionQueryOptions } from './get-session';
+import { forgetVisitorData } from './forget-visitor-data';
 
 export const signOut = () => api<void>('/api/session', { method: 'DELETE' });
 
@@ -10,8 +11,8 @@ export function useSignOut() {
     mutationFn: signOut,
     onSuccess: async () => {
       setCsrfToken(undefined);
-      qc.clear();
-      await qc.fetchQuery(sessionQueryOptions());
+      forgetVisitorData(qc);
+      await qc.fetchQuery({ ...sessionQueryOptions(), staleTime: 0 });
     },
   });
 }
