@@ -49,7 +49,21 @@ function CurvePreview({ parsed, units }: { parsed: Extract<DynoCsvResult, { ok: 
   const read = (column: 'power' | 'torque', unit: Unit | null, runUnit: Unit) =>
     unit && unit !== runUnit ? `${columns[column].name}, converted to ${UNIT_LABELS[runUnit]}` : `${columns[column].name} in ${UNIT_LABELS[runUnit]}`;
   // The preview is drawn by the same chart as saved runs, from a run that exists only here.
-  const run = { id: 0, date: 'Preview', facility: '', measuredAt: 'wheel', powerUnit: units.powerUnit, torqueUnit: units.torqueUnit, curve: points } as unknown as DynoRun;
+  // The chart also names each run's peaks, so the preview run carries them too.
+  const top = (key: 'power' | 'torque') => points.reduce((best, p) => (p[key] > best[key] ? p : best), first);
+  const run = {
+    id: 0,
+    date: 'Preview',
+    facility: '',
+    measuredAt: 'wheel',
+    powerUnit: units.powerUnit,
+    torqueUnit: units.torqueUnit,
+    peakPower: top('power').power,
+    peakPowerRpm: top('power').rpm,
+    peakTorque: top('torque').torque,
+    peakTorqueRpm: top('torque').rpm,
+    curve: points,
+  } as unknown as DynoRun;
   const system = units.powerUnit === 'hp' ? 'imperial' : 'metric';
   return (
     <div className="flex flex-col gap-1 border border-rule bg-white p-2" data-testid="csv-preview">
