@@ -13,6 +13,8 @@ describe('a forgotten password, in demo mode', () => {
     const phone = await env.browser.newPage({ viewport: { width: 390, height: 844 } });
     await phone.goto(`${env.baseUrl}/sign-in`);
     await phone.getByRole('link', { name: 'Forgot your password?' }).click();
+    // The screen loads lazily; until its heading shows, the sign-in form (with its own E-mail) is still up.
+    await phone.getByRole('heading', { name: 'Reset your password' }).waitFor();
     await phone.getByLabel('E-mail').fill(forgetful.email);
     await phone.getByRole('button', { name: 'Send the link' }).click();
     await phone.getByText('a reset link is on its way').waitFor();
