@@ -195,4 +195,38 @@ describe('leaving the build editor never drops an edit', () => {
     await expect.poll(async () => (await storedEngine(checker, build.id)).bore?.value).toBe(97);
     await context.close();
   }, 120_000);
+  it('never drops a dyno run or a weigh-in written but not added: leaving names them, and staying keeps them', async () => {
+    const { user, email, password } = await createUser({ name: 'Ivo Marrant' });
+    const build = await createBuild(user.id, { title: 'The Ochre Pickup' });
+    const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, locale: 'en-GB' });
+    const page = await context.newPage();
+    await signIn(page, email, password, `/builds/${build.id}`);
+
+    await page.getByRole('button', { name: 'Add a dyno run' }).click();
+    const run = page.getByRole('form', { name: 'Add a dyno run' });
+    await run.getByLabel('Facility').fill('The rolling road behind the grain store');
+    await run.getByLabel('Peak power').fill('312');
+    await page.getByRole('button', { name: 'Add a weigh-in' }).click();
+    const weighIn = page.getByRole('form', { name: 'Add a weigh-in' });
+    await weighIn.getByLabel('LF · Left front').fill('402');
+    await expect.poll(() => page.locator('[data-testid=save-summary]:visible').textContent()).toBe('● Not added yet: Dyno run, Weigh-in');
+
+    await page.getByRole('link', { name: '← My builds' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Not saved' });
+    await dialog.getByText('Dyno run: not added yet. Press “Add the run”, or leave without it.').waitFor();
+    await dialog.getByText('Weigh-in: not added yet. Press “Add the weigh-in”, or leave without it.').waitFor();
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'editor-leave-unadded-phone.png') });
+    await dialog.getByRole('button', { name: 'Stay and fix' }).click();
+    expect(new URL(page.url()).pathname).toBe(`/builds/${build.id}`);
+    expect(await run.getByLabel('Facility').inputValue()).toBe('The rolling road behind the grain store');
+    expect(await weighIn.getByLabel('LF · Left front').inputValue()).toBe('402');
+
+    // Cleared by hand (Cancel), nothing is left to ask about; the weigh-in still holds the owner back.
+    await run.getByRole('button', { name: 'Cancel' }).click();
+    await expect.poll(() => page.locator('[data-testid=save-summary]:visible').textContent()).toBe('● Not added yet: Weigh-in');
+    await page.getByRole('link', { name: '← My builds' }).click();
+    await page.getByRole('dialog', { name: 'Not saved' }).getByRole('button', { name: 'Leave without saving' }).click();
+    await page.getByRole('heading', { name: 'My builds' }).waitFor();
+    await context.close();
+  }, 120_000);
 });

@@ -24,8 +24,11 @@ export class MapStore<V> {
   };
 }
 
-/** A panel whose edits are not stored yet: waiting for the typing to stop, on the way, or refused. */
-export type PendingState = 'pending' | 'saving' | 'failed';
+/**
+ * A panel whose edits are not stored yet: waiting for the typing to stop, on the way, or refused;
+ * or a record (a dyno run, a weigh-in) written but not added, which only the owner can store.
+ */
+export type PendingState = 'pending' | 'saving' | 'failed' | 'unadded';
 
 /** Saves a panel's edits now; resolves to null once they are stored, or to why they are not. */
 export type SaveNow = () => Promise<string | null>;

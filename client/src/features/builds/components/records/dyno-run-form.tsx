@@ -10,6 +10,7 @@ import { useAddDynoRun } from '../../api/add-dyno-run';
 import { asNumber, formResolver, placeServerErrors } from '../editor/form-values';
 import { errorAt } from '../editor/fields';
 import { DynoCsvField } from './dyno-csv-field';
+import { useUnaddedRecord } from '../editor/use-unadded-record';
 
 type Values = DynoRunFormInput & { curveMode: 'csv' | 'table' };
 
@@ -41,8 +42,9 @@ function firstMessage(error: unknown): string | undefined {
 export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () => void }) {
   const add = useAddDynoRun(build.id);
   const [formError, setFormError] = useState('');
-  const { register, control, handleSubmit, setError, setValue, formState: { errors } } = useForm<Values>({ resolver: formResolver<Values>(DynoRunCreateSchema, clean), defaultValues: blank() });
+  const { register, control, handleSubmit, setError, setValue, formState: { errors, isDirty } } = useForm<Values>({ resolver: formResolver<Values>(DynoRunCreateSchema, clean), defaultValues: blank() });
   const { fields, append, remove } = useFieldArray({ control, name: 'curve' });
+  useUnaddedRecord({ key: 'dyno:new', label: 'Dyno run', section: 'dyno', addLabel: 'Add the run', filled: isDirty });
   const mode = useWatch({ control, name: 'curveMode' });
   const csv = useWatch({ control, name: 'curveCsv' });
   const powerUnit = useWatch({ control, name: 'powerUnit' });

@@ -12,6 +12,7 @@ import { useAddWeighIn } from '../../api/add-weigh-in';
 import { asNumber, placeServerErrors } from '../editor/form-values';
 import { errorAt } from '../editor/fields';
 import { attempt } from '../../model/numbers/read';
+import { useUnaddedRecord } from '../editor/use-unadded-record';
 
 const CORNERS = [
   ['leftFront', 'LF', 'Left front'],
@@ -38,11 +39,12 @@ function LiveSplits({ values, unit }: { values: Partial<Values>; unit: string })
 export function WeighInForm({ build, onDone }: { build: OwnerBuild; onDone: () => void }) {
   const add = useAddWeighIn(build.id);
   const [formError, setFormError] = useState('');
-  const { register, control, handleSubmit, setError, formState: { errors } } = useForm<Values>({
+  const { register, control, handleSubmit, setError, formState: { errors, isDirty } } = useForm<Values>({
     resolver: zodResolver(WeighInCreateSchema) as never,
     defaultValues: { date: new Date().toISOString().slice(0, 10), unit: 'kg', withDriver: false, fuelLevel: 'full', note: '' },
   });
   const values = useWatch({ control });
+  useUnaddedRecord({ key: 'weighIns:new', label: 'Weigh-in', section: 'weighIns', addLabel: 'Add the weigh-in', filled: isDirty });
   const onSubmit = handleSubmit((input) => {
     setFormError('');
     add.mutate({ ...input, note: input.note?.trim() || undefined }, { onSuccess: onDone, onError: (err) => setFormError(placeServerErrors(err, setError, ['date', 'unit', 'leftFront', 'rightFront', 'leftRear', 'rightRear', 'withDriver', 'fuelLevel', 'note'])) });
