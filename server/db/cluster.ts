@@ -4,7 +4,7 @@
  */
 import { spawnSync, type SpawnSyncOptions } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { chownSync, existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync, rmSync } from 'node:fs';
+import { chownSync, existsSync, mkdirSync, readdirSync, readFileSync, statSync, writeFileSync, rmSync } from 'node:fs';
 import { userInfo } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -86,10 +86,17 @@ function initCluster(bin: string, dir: string) {
 
 function startCluster(bin: string, dir: string, port: number) {
   const log = path.join(path.dirname(dir), 'postgres.log');
+  const before = existsSync(log) ? statSync(log).size : 0;
   const opts = `-c listen_addresses=127.0.0.1 -c unix_socket_directories='' -p ${port}`;
   const r = run(path.join(bin, 'pg_ctl'), ['start', '-w', '-t', '60', '-D', dir, '-l', log, '-o', opts]);
   // Another process (npm start and npm test side by side) may have started it a moment ago.
-  if (r.status !== 0 && !isRunning(bin, dir)) throw new Error(`PostgreSQL did not start (see ${log}):\n${r.stderr || r.stdout}`);
+  if (r.status === 0 || isRunning(bin, dir)) return;
+  // Only what this attempt wrote: the log keeps every earlier start.
+  const said = existsSync(log) ? readFileSync(log).subarray(before).toString('utf8') : '';
+  if (said.includes('Address already in use')) {
+    throw new Error(`PostgreSQL did not start: port ${port} is taken (another copy of Placard, or another PostgreSQL). Stop it, or choose a free port, e.g. PGPORT=${port + 10} npm start`);
+  }
+  throw new Error(`PostgreSQL did not start (see ${log}):\n${r.stderr || r.stdout}`);
 }
 
 async function createDatabases(port: number, names: string[]) {
