@@ -1,19 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
 const env = useBrowserAndServer();
-
-async function signIn(page: Page, email: string, password: string, next: string) {
-  await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${env.baseUrl}${next}`);
-}
 
 /** The engine section as the API stores it (the browser's own session). */
 async function storedEngine(page: Page, buildId: number) {
@@ -38,7 +30,7 @@ describe('leaving the build editor never drops an edit', () => {
       const page = await context.newPage();
       const pageErrors: string[] = [];
       page.on('pageerror', (err) => pageErrors.push(err.message));
-      await signIn(page, email, password, editorPath);
+      await signInInBrowser(page, env.baseUrl, email, password, editorPath);
 
       // Change a figure and leave at once: no pause for the autosave, no Save button.
       const engine = page.getByRole('form', { name: 'Engine' });
@@ -101,7 +93,7 @@ describe('leaving the build editor never drops an edit', () => {
     const build = await createBuild(user.id, { title: 'The Ash Pickup' });
     const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signIn(page, email, password, `/builds/${build.id}`);
+    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
     // The server's answer stands in for a rule only the server knows: its field error is the reason shown.
     const refusal = { error: { code: 'VALIDATION_FAILED', message: 'Check the highlighted fields.', fields: { exhaust: 'Exhaust is refused by the server for this test.' } } };
     await page.route(`**/api/builds/${build.id}/sections/engine`, (route) => route.fulfill({ status: 400, contentType: 'application/json', body: JSON.stringify(refusal) }));
@@ -128,7 +120,7 @@ describe('leaving the build editor never drops an edit', () => {
     const build = await createBuild(user.id, { title: 'The Pewter Wagon' });
     const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signIn(page, email, password, `/builds/${build.id}`);
+    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     // The engine's save reaches the server first, but its answer is held back until the wheels' save has answered.
     let engineSent!: () => void;
@@ -166,7 +158,7 @@ describe('leaving the build editor never drops an edit', () => {
     const build = await createBuild(user.id, { title: 'The Umber Sedan' });
     const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signIn(page, email, password, '/builds');
+    await signInInBrowser(page, env.baseUrl, email, password, '/builds');
     await page.getByRole('link', { name: 'The Umber Sedan' }).click();
     await page.waitForURL(`${env.baseUrl}/builds/${build.id}`);
 
@@ -200,7 +192,7 @@ describe('leaving the build editor never drops an edit', () => {
     const build = await createBuild(user.id, { title: 'The Ochre Pickup' });
     const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signIn(page, email, password, `/builds/${build.id}`);
+    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     await page.getByRole('button', { name: 'Add a dyno run' }).click();
     const run = page.getByRole('form', { name: 'Add a dyno run' });

@@ -1,19 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
 import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
 const env = useBrowserAndServer();
-
-async function signIn(page: Page, email: string, password: string, next: string) {
-  await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${env.baseUrl}${next}`);
-}
 
 async function box(locator: Locator) {
   const b = await locator.boundingBox();
@@ -49,7 +41,7 @@ describe('credits and extra lines in the build editor', () => {
     page.on('request', (r) => {
       if (r.method() !== 'GET' && r.url().includes('/api/builds/')) writes.push(`${r.method()} ${r.url()}`);
     });
-    await signIn(page, email, password, editorPath);
+    await signInInBrowser(page, env.baseUrl, email, password, editorPath);
 
     // Opening a full build sheet changes nothing: every panel reads as stored, none waits to save.
     const statuses = page.locator('form[aria-label] [role=status]');

@@ -2,19 +2,11 @@ import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import path from 'node:path';
 import sharp from 'sharp';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
 const env = useBrowserAndServer();
-
-async function signIn(page: Page, email: string, password: string, next: string) {
-  await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${env.baseUrl}${next}`);
-}
 
 /** A drawn test image (no real photo) of a given shape, so each stored photo can be told apart by its proportions. */
 async function drawn(name: string, width: number, height: number, colour: string) {
@@ -37,7 +29,7 @@ describe('photos in the build editor', () => {
     const editorPath = `/builds/${build.id}`;
     const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signIn(page, email, password, editorPath);
+    await signInInBrowser(page, env.baseUrl, email, password, editorPath);
     const photos = page.getByTestId('photos-panel');
     const input = photos.locator('input[type=file]');
 

@@ -1,19 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import type { Locator, Page } from 'playwright-core';
+import type { Locator } from 'playwright-core';
 import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
 const env = useBrowserAndServer();
-
-async function signIn(page: Page, email: string, password: string, next: string) {
-  await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${env.baseUrl}${next}`);
-}
 
 const WHY = /^A measured figure means more with the day it was measured/;
 
@@ -28,7 +20,7 @@ describe('spec-check messages in the build editor', () => {
     const build = await createBuild(user.id, { title: 'The Flint Gasser' });
     const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signIn(page, email, password, `/builds/${build.id}`);
+    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     // Two figures marked measured, neither with a date.
     const engine = page.getByRole('form', { name: 'Engine' });

@@ -4,7 +4,7 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 
 const env = useBrowserAndServer();
@@ -24,14 +24,6 @@ afterAll(async () => {
 
 const shot = (page: Page, name: string) => page.screenshot({ path: path.join(SCREENSHOT_DIR, name), fullPage: true });
 
-async function signIn(page: Page, email: string, password: string, next: string) {
-  await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${env.baseUrl}${next}`);
-}
-
 const DYNO_CSV = ['rpm,power,torque', '2500,160,336', '3000,205,359', '3500,244,366', '4000,281,369', '4500,312,364', '5000,334,351', '5500,342,327', '6000,338,296'].join('\n');
 
 describe('the build editor in the browser', () => {
@@ -42,7 +34,7 @@ describe('the build editor in the browser', () => {
     const pageErrors: string[] = [];
     page.on('pageerror', (err) => pageErrors.push(err.message));
 
-    await signIn(page, email, password, '/builds');
+    await signInInBrowser(page, env.baseUrl, email, password, '/builds');
     await expect.poll(() => page.getByText('No builds yet').count()).toBe(1);
     await page.getByRole('button', { name: 'New build' }).click();
     // Title is required: the shared schema says so before anything is sent.
@@ -175,7 +167,7 @@ describe('the build editor in the browser', () => {
     // The desktop layout: section nav, forms and the sticky numbers panel side by side.
     const desk = await env.browser.newContext({ viewport: { width: 1280, height: 900 }, locale: 'en-GB' });
     const deskPage = await desk.newPage();
-    await signIn(deskPage, email, password, new URL(buildUrl).pathname);
+    await signInInBrowser(deskPage, env.baseUrl, email, password, new URL(buildUrl).pathname);
     const panel = deskPage.getByTestId('numbers-panel');
     await expect.poll(() => panel.textContent()).toMatch(/Displacement/);
     await expect.poll(() => panel.textContent()).toMatch(/At the flywheel/);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
@@ -11,11 +11,7 @@ describe('a figure’s live conversion', () => {
     const { user, email, password } = await createUser({ name: 'Tobin Raske' });
     const build = await createBuild(user.id, { title: 'The Cinder Sedan' });
     const page = await env.browser.newPage({ viewport: { width: 390, height: 844 }, locale: 'en-GB' });
-    await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(`/builds/${build.id}`)}`);
-    await page.getByLabel('E-mail').fill(email);
-    await page.getByLabel('Password').fill(password);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(`${env.baseUrl}/builds/${build.id}`);
+    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     const chassis = page.getByRole('form', { name: 'Chassis and suspension' });
     const field = chassis.getByRole('group', { name: 'Spring rate' }).first();

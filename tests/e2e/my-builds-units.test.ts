@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -15,11 +15,7 @@ describe('My builds in one unit system', () => {
     await createFullBuild(owner.user.id);
     const context = await env.browser.newContext({ viewport, locale: 'en-GB' });
     const page = await context.newPage();
-    await page.goto(`${env.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill(owner.email);
-    await page.getByLabel('Password').fill(owner.password);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(/\/builds$/);
+    await signInInBrowser(page, env.baseUrl, owner.email, owner.password);
 
     const card = page.getByRole('listitem').filter({ hasText: 'Night Shift' });
     const figures = () => card.locator('dd').allInnerTexts();

@@ -1,19 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import type { Page } from 'playwright-core';
 import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
 const env = useBrowserAndServer();
-
-async function signIn(page: Page, email: string, password: string, next: string) {
-  await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${env.baseUrl}${next}`);
-}
 
 // The words come from shared/: the range message in the unit the owner typed, the choice labels and
 // the private details, on a phone and on a desktop.
@@ -24,7 +15,7 @@ describe('the editor says what shared/ says', () => {
       const build = await createFullBuild(user.id, { vin: 'VIN-OF-THE-OWNER-1' });
       const context = await env.browser.newContext({ viewport, locale: 'en-US' });
       const page = await context.newPage();
-      await signIn(page, email, password, `/builds/${build.id}`);
+      await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
       const engine = page.getByRole('form', { name: 'Engine' });
       await engine.getByLabel('Bore unit').selectOption('in');

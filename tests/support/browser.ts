@@ -1,5 +1,5 @@
 import { afterAll, beforeAll } from 'vitest';
-import { chromium, type Browser } from 'playwright-core';
+import { chromium, type Browser, type Page } from 'playwright-core';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { existsSync } from 'node:fs';
@@ -57,4 +57,13 @@ export function useBrowserAndServer(): { browser: Browser; server: Server; baseU
     await new Promise((r) => env.server?.close(r));
   });
   return env;
+}
+
+/** Signs in through the form, as a person would, and waits until the app has gone on to `next`. */
+export async function signInInBrowser(page: Page, baseUrl: string, email: string, password: string, next = '/builds'): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL(`${baseUrl}${next}`);
 }
