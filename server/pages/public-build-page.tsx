@@ -2,13 +2,13 @@ import { renderToStaticMarkup } from 'react-dom/server';
 import { convert, cornerWeights, formatNumber, formatPercent, formatQuantity, preferredUnit, type Unit, type UnitSystem } from '@shared/calc';
 import { BUILD_STYLE_LABELS, type Photo, type PublicBuild } from '@shared/schemas/build';
 import type { KeyFigure } from '@shared/schemas/card';
-import { config } from '../config';
 import { computeKeyFigures } from '@shared/build-sheet/key-figures';
 import { FUEL_LEVEL_LABELS, PROVENANCE_MARKS, inText } from '@shared/build-sheet/choice-labels';
 import { headlineOf } from '@shared/build-sheet/headline';
 import { DISPLACEMENT_ROW, engineLine, sectionViews, type SectionView } from '@shared/build-sheet/spec-lines';
 import { DynoChart } from '@templates/charts/dyno-chart';
 import { PAGE_CSS } from './page-styles';
+import { PageHead } from './page-head';
 
 /**
  * What a show adds to the page: the entry, and while the show's people's choice window is open, the
@@ -23,7 +23,6 @@ const UNIT_CHOICES: Array<[UnitSystem, string, string]> = [
   ['imperial', 'US', 'Inches, pounds, hp, lb·ft, mph'],
 ];
 
-const absolute = (url: string) => (url.startsWith('http') ? url : `${config.publicBaseUrl}${url}`);
 const cover = (b: PublicBuild) => b.photos.find((p) => p.isCover) ?? b.photos[0] ?? null;
 const styleLabel = (s: string | null) => (s && s in BUILD_STYLE_LABELS ? BUILD_STYLE_LABELS[s as keyof typeof BUILD_STYLE_LABELS] : null);
 const mark = (f: { provenance: KeyFigure['provenance'] }) => PROVENANCE_MARKS[f.provenance] || null;
@@ -213,28 +212,7 @@ function Page({ build, units, show, preview }: { build: PublicBuild; units: Unit
   const gallery = build.photos.filter((p) => p !== photo);
   return (
     <html lang="en">
-      <head>
-        <meta charSet="utf-8" />
-        <meta name="viewport" content="width=device-width, initial-scale=1" />
-        <title>{`${title} · Placard`}</title>
-        <meta name="description" content={description} />
-        <link rel="canonical" href={build.url} />
-        <meta property="og:type" content="website" />
-        <meta property="og:site_name" content="Placard" />
-        <meta property="og:title" content={title} />
-        <meta property="og:description" content={description} />
-        <meta property="og:url" content={build.url} />
-        {og ? <meta property="og:image" content={absolute(og.jpeg)} /> : null}
-        {og ? <meta property="og:image:width" content={String(og.width)} /> : null}
-        {og ? <meta property="og:image:height" content={String(og.height)} /> : null}
-        <meta name="twitter:card" content={og ? 'summary_large_image' : 'summary'} />
-        <meta name="twitter:title" content={title} />
-        <meta name="twitter:description" content={description} />
-        {og ? <meta name="twitter:image" content={absolute(og.jpeg)} /> : null}
-        <meta name="theme-color" content="#F5F0E6" />
-        {preview ? <meta name="robots" content="noindex" /> : null}
-        <style dangerouslySetInnerHTML={{ __html: PAGE_CSS }} />
-      </head>
+      <PageHead title={`${title} · Placard`} shareTitle={title} description={description} css={PAGE_CSS} url={build.url} image={og ? { url: og.jpeg, width: og.width, height: og.height } : null} noindex={Boolean(preview)} />
       <body>
         <header className="bar">
           <a className="brand" href="/">

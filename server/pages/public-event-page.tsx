@@ -3,6 +3,7 @@ import { formatInZone } from '@shared/calc/time-zone';
 import type { PublicEvent } from '@shared/schemas/public-event';
 import { placeWords, type PublicResultLine, type PublicResults } from '@shared/schemas/results';
 import { PAGE_CSS } from './page-styles';
+import { PageHead } from './page-head';
 
 export const EVENT_CSS = `.meta{margin:12px 0 0;display:grid;grid-template-columns:max-content 1fr;gap:4px 16px}
 .meta dt{font-size:.75rem;letter-spacing:.08em;text-transform:uppercase;color:var(--graphite);padding-top:3px}
@@ -77,18 +78,7 @@ function Page({ e }: { e: PublicEvent }) {
   const description = `${e.name}: ${e.venueName}, ${when(e, e.startsAt)}.`;
   return (
     <html lang="en">
-      <head>
-        <meta charSet="utf-8" />
-        <meta name="viewport" content="width=device-width, initial-scale=1" />
-        <title>{`${e.name} · Placard`}</title>
-        <meta name="description" content={description} />
-        <link rel="canonical" href={e.url} />
-        <meta property="og:type" content="website" />
-        <meta property="og:title" content={e.name} />
-        <meta property="og:description" content={description} />
-        <meta name="theme-color" content="#F5F0E6" />
-        <style dangerouslySetInnerHTML={{ __html: PAGE_CSS + EVENT_CSS }} />
-      </head>
+      <PageHead title={`${e.name} · Placard`} shareTitle={e.name} description={description} css={PAGE_CSS + EVENT_CSS} url={e.url} />
       <body>
         <header className="bar">
           <a className="brand" href="/">

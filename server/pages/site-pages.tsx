@@ -5,6 +5,7 @@ import { countOf } from '@shared/words';
 import { BUILD_STYLES, BUILD_STYLE_LABELS, type PublicBuildSearch, type PublicBuildTile } from '@shared/schemas/build';
 import type { EventSummary } from '@shared/schemas/event';
 import { PAGE_CSS } from './page-styles';
+import { PageHead } from './page-head';
 
 // The home page and the list of builds: server HTML like the build page, readable with no script.
 // The app (sign-in, My builds, shows) is a link away; these pages know nothing of the session, so
@@ -48,13 +49,7 @@ function Shell({ title, description, current, children }: { title: string; descr
   const here = (page: Current) => (page === current ? { 'aria-current': 'page' as const } : {});
   return (
     <html lang="en">
-      <head>
-        <meta charSet="utf-8" />
-        <meta name="viewport" content="width=device-width, initial-scale=1" />
-        <title>{title}</title>
-        <meta name="description" content={description} />
-        <style dangerouslySetInnerHTML={{ __html: PAGE_CSS + SITE_CSS }} />
-      </head>
+      <PageHead title={title} description={description} css={PAGE_CSS + SITE_CSS} />
       <body>
         <header className="bar wide">
           <a className="brand" href="/">
