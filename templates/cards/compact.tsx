@@ -1,5 +1,6 @@
 import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock } from './blocks';
 import { only, type DesignFn } from './design';
+import { column } from './layout';
 
 /**
  * Compact: few words, all of them big, and the largest QR code of the three designs. The figures
@@ -31,40 +32,12 @@ export const compactDesign: DesignFn = (ctx, box) => {
     return {
       blocks,
       priority: [...priority],
-      geo: {
-        col: [
-          { block: 'entry', width: cw },
-          { block: 'title', width: cw },
-          { row: [{ col: [{ block: 'figures', width: sideW }], width: sideW, gap: g }, { col: [{ block: 'qr', width: qrW }], width: qrW, gap: g }], gap: g * 1.5 },
-          { block: 'engine', width: cw },
-          { block: 'sections', width: cw },
-          { block: 'credits', width: cw },
-          { block: 'story', width: cw },
-          { block: 'photo', width: cw },
-          { block: 'more', width: cw },
-          { block: 'footer', width: cw },
-        ],
-        width: cw,
-        gap: g,
-      },
+      geo: column(['entry', 'title', { row: [column(['figures'], sideW, g), column(['qr'], qrW, g)], gap: g * 1.5 }, 'engine', 'sections', 'credits', 'story', 'photo', 'more', 'footer'], cw, g),
     };
   }
   return {
     blocks,
     priority: [...priority],
-    geo: {
-      col: [
-        {
-          row: [
-            { col: [{ block: 'title', width: sideW }, { block: 'figures', width: sideW }, { block: 'engine', width: sideW }, { block: 'sections', width: sideW }, { block: 'credits', width: sideW }, { block: 'story', width: sideW }, { block: 'photo', width: sideW }, { block: 'more', width: sideW }], width: sideW, gap: g },
-            { col: [{ block: 'entry', width: qrW }, { block: 'qr', width: qrW }], width: qrW, gap: g },
-          ],
-          gap: g * 1.5,
-        },
-        { block: 'footer', width: cw },
-      ],
-      width: cw,
-      gap: g,
-    },
+    geo: column([{ row: [column(['title', 'figures', 'engine', 'sections', 'credits', 'story', 'photo', 'more'], sideW, g), column(['entry', 'qr'], qrW, g)], gap: g * 1.5 }, 'footer'], cw, g),
   };
 };

@@ -1,6 +1,6 @@
 import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionRowsBlock, storyBlock, titleBlock } from './blocks';
 import { only, type DesignFn } from './design';
-import { fitBlocks, type BlockId, type Geo } from './layout';
+import { column, fitBlocks, type BlockId, type Geo } from './layout';
 
 /**
  * Data sheet: the title and the show beside the QR code, the figures on a rule, then every chosen
@@ -32,27 +32,14 @@ export const dataSheetDesign: DesignFn = (ctx, box) => {
   // can make that head so tall that the figures fall off the card; then the figures move up beside
   // the code, with the title across the page above when that keeps more. The head that keeps the
   // most important blocks whole wins; ties keep the usual one.
-  const beside = (ids: BlockId[]): Geo => ({ row: [{ col: ids.map((block) => ({ block, width: headW })), width: headW, gap: g }, { col: [{ block: 'qr', width: qrW }], width: qrW, gap: g }], gap: g * 1.5 });
-  const heads: Geo[][] = [
-    [beside(['title', 'entry']), { block: 'figures', width: cw }],
+  const beside = (ids: BlockId[]): Geo => ({ row: [column(ids, headW, g), column(['qr'], qrW, g)], gap: g * 1.5 });
+  const heads: Array<Array<BlockId | Geo>> = [
+    [beside(['title', 'entry']), 'figures'],
     [beside(['title', 'entry', 'figures'])],
-    [{ block: 'title', width: cw }, beside(['entry', 'figures'])],
-    [{ block: 'title', width: cw }, { block: 'entry', width: cw }, beside(['figures'])],
+    ['title', beside(['entry', 'figures'])],
+    ['title', 'entry', beside(['figures'])],
   ];
-  const geoWith = (head: Geo[]): Geo => ({
-    col: [
-      ...head,
-      { block: 'engine', width: cw },
-      { block: 'sections', width: cw },
-      { block: 'credits', width: cw },
-      { block: 'story', width: cw },
-      { block: 'photo', width: cw },
-      { block: 'more', width: cw },
-      { block: 'footer', width: cw },
-    ],
-    width: cw,
-    gap: g,
-  });
+  const geoWith = (head: Array<BlockId | Geo>): Geo => column([...head, 'engine', 'sections', 'credits', 'story', 'photo', 'more', 'footer'], cw, g);
   // How many blocks, most important first, a head keeps whole.
   const kept = (geo: Geo) => {
     const lostLabels = new Set(fitBlocks(geo, blocks, priority, ctx.contentHeight).leftOff.map((l) => l.block));

@@ -25,6 +25,9 @@ export type BlockSpec = {
 
 export type Geo = { block: BlockId; width: number } | { col: Geo[]; width: number; gap: number } | { row: Geo[]; gap: number };
 
+/** A column of the given width: a block named by its id takes the column's width, a nested row or column its own. */
+export const column = (items: Array<BlockId | Geo>, width: number, gap: number): Geo => ({ col: items.map((item) => (typeof item === 'string' ? { block: item, width } : item)), width, gap });
+
 type State = { step: Partial<Record<BlockId, number>>; cut: Partial<Record<BlockId, number>>; dropped: Set<BlockId> };
 export type Fitted = { state: State; laid: Map<BlockId, Laid>; leftOff: CardLeftOff[] };
 

@@ -1,5 +1,6 @@
 import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock } from './blocks';
 import { only, type DesignFn } from './design';
+import { column } from './layout';
 
 /**
  * Poster: the cover photo large, the title in big condensed capitals, the headline figures on a
@@ -30,17 +31,7 @@ export const posterDesign: DesignFn = (ctx, box) => {
     return {
       blocks,
       priority: [...priority],
-      geo: {
-        col: [
-          { block: 'entry', width: cw },
-          { block: 'photo', width: cw },
-          { block: 'title', width: cw },
-          { row: [{ col: [{ block: 'figures', width: leftW }, { block: 'engine', width: leftW }, { block: 'sections', width: leftW }, { block: 'credits', width: leftW }, { block: 'story', width: leftW }, { block: 'more', width: leftW }], width: leftW, gap: g }, { col: [{ block: 'qr', width: qrW }], width: qrW, gap: g }], gap: g },
-          { block: 'footer', width: cw },
-        ],
-        width: cw,
-        gap: g,
-      },
+      geo: column(['entry', 'photo', 'title', { row: [column(['figures', 'engine', 'sections', 'credits', 'story', 'more'], leftW, g), column(['qr'], qrW, g)], gap: g }, 'footer'], cw, g),
     };
   }
   const leftW = Math.max(qrW, Math.round(cw * 0.4));
@@ -48,19 +39,6 @@ export const posterDesign: DesignFn = (ctx, box) => {
   return {
     blocks,
     priority: [...priority],
-    geo: {
-      col: [
-        {
-          row: [
-            { col: [{ block: 'entry', width: leftW }, { block: 'photo', width: leftW }, { block: 'qr', width: leftW }], width: leftW, gap: g },
-            { col: [{ block: 'title', width: rightW }, { block: 'figures', width: rightW }, { block: 'engine', width: rightW }, { block: 'sections', width: rightW }, { block: 'credits', width: rightW }, { block: 'story', width: rightW }, { block: 'more', width: rightW }], width: rightW, gap: g },
-          ],
-          gap: g * 1.5,
-        },
-        { block: 'footer', width: cw },
-      ],
-      width: cw,
-      gap: g,
-    },
+    geo: column([{ row: [column(['entry', 'photo', 'qr'], leftW, g), column(['title', 'figures', 'engine', 'sections', 'credits', 'story', 'more'], rightW, g)], gap: g * 1.5 }, 'footer'], cw, g),
   };
 };
