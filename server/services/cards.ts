@@ -80,7 +80,7 @@ export function cardContent(build: PublicBuild, settings: CardSettings, opts: { 
     byline: [style, build.ownerName ? `owned by ${build.ownerName}` : null].filter(Boolean).join('  ·  '),
     figures,
     engineLine: settings.sections.includes('engine') ? engineLine(build.sections.engine, units) : '',
-    sections: views.map((v) => ({ label: v.label, summary: v.summary || v.madeBy || v.note || '', rows: v.rows, madeBy: v.madeBy })),
+    sections: views.map((v) => ({ kind: v.kind, label: v.label, summary: v.summary || v.madeBy || v.note || '', rows: v.rows, madeBy: v.madeBy })),
     credits: build.credits,
     story: build.story ?? '',
     caution: views.some((v) => v.caution) ? ENGINEERING_CAUTION : null,

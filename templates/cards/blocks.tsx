@@ -432,7 +432,8 @@ export function photoBlock({ content, contentHeight }: Ctx, shares = [0.42, 0.32
           )
         ) : (
           <View style={{ width: w, height: h, backgroundColor: INK, justifyContent: 'flex-end', padding: Math.min(18, h / 6) }}>
-            {year ? <Lines lines={setLines([{ text: year, face: 'display-700' }], Math.min(h * 0.55, (w - 40) / (textWidth(year, 'display-700', 1) * 1.05)), w - 36, 1.05)} color="#2E2C29" /> : null}
+            {/* Decoration, dark on dark: set in a lighter face than the title's so it never reads (to a PDF reader either) as a second title. */}
+            {year ? <Lines lines={setLines([{ text: year, face: 'display-600' }], Math.min(h * 0.55, (w - 40) / (textWidth(year, 'display-600', 1) * 1.05)), w - 36, 1.05)} color="#2E2C29" /> : null}
           </View>
         ),
     }),

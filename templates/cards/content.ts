@@ -1,4 +1,5 @@
 import type { CardShow, Orientation, Paper } from '@shared/schemas/card';
+import type { SectionKind } from '@shared/schemas/build-sections';
 
 /**
  * Everything a card prints, already in words and in the chosen units: the templates lay it out
@@ -27,6 +28,6 @@ export type CardContent = {
 };
 
 export type CardFigure = { label: string; value: string; unit: string; mark: string; note: string };
-export type CardSection = { label: string; summary: string; rows: Array<{ label: string; value: string }>; madeBy: string | null };
+export type CardSection = { kind: SectionKind; label: string; summary: string; rows: Array<{ label: string; value: string }>; madeBy: string | null };
 
 export type CardProps = { content: CardContent; paper: Paper; orientation: Orientation };

@@ -18,7 +18,8 @@ export const dataSheetDesign: DesignFn = (ctx, box) => {
     entry: entryBlock(ctx),
     qr: qrBlock(ctx),
     figures: figuresBlock(ctx, { growTo: 1.3 }),
-    engine: engineBlock(ctx),
+    // The engine's own rows say all the engine line says (and more): one of them, not both.
+    engine: ctx.content.sections.some((s) => s.kind === 'engine' && s.rows.length) ? undefined : engineBlock(ctx),
     sections: sectionRowsBlock(ctx, box.landscape ? 3 : 2),
     credits: creditsBlock(ctx),
     // Without a photo the dark panel with the year takes what the rows leave, so a sparse sheet is not half blank.

@@ -50,6 +50,17 @@ describe('windshield card templates', () => {
     expect(text).not.toMatch(/650\s*hp/);
   });
 
+  it('prints the engine once on the data sheet: its rows, not the engine line again, and nothing of it when the Engine section is not chosen', async () => {
+    const build = typicalPublicBuild({ dynoRuns: [] });
+    const base: CardSettings = { ...DEFAULT_CARD_SETTINGS, design: 'data-sheet', units: 'imperial' };
+    const withRows = (await pdfText(await renderCardPdf(build, { ...base, sections: ['engine', 'brakes'] }))).replace(/\s+/g, ' ');
+    expect(withRows).toContain('Layout V8');
+    expect(withRows.match(/supercharged/gi)).toHaveLength(1);
+    const without = (await pdfText(await renderCardPdf(build, { ...base, sections: ['brakes'] }))).replace(/\s+/g, ' ');
+    expect(without).not.toContain('Layout V8');
+    expect(without).not.toMatch(/supercharged/i);
+  });
+
   it('offers by default the figures the build has, in the order power, torque, weight, displacement, power-to-weight', () => {
     expect(DEFAULT_CARD_SETTINGS.figures).toEqual(['power', 'torque', 'weight', 'displacement', 'powerToWeight']);
     expect(availableFigures(typicalPublicBuild())).toEqual(['power', 'torque', 'weight', 'displacement', 'powerToWeight']);
