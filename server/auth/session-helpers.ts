@@ -1,6 +1,8 @@
 import type { Request, Response } from 'express';
 import { passport } from './passport';
 import type { User } from '../models/user';
+import { csrfToken } from '../middlewares/csrf';
+import { recordSignIn } from '../services/accounts';
 
 /** Checks e-mail and password with the local strategy; resolves to the user or undefined. */
 export function authenticateLocal(req: Request, res: Response): Promise<User | undefined> {
@@ -15,6 +17,13 @@ export function authenticateLocal(req: Request, res: Response): Promise<User | u
 /** Signs in: passport regenerates the session id first, so a planted pre-sign-in id is worthless. */
 export function signIn(req: Request, user: User): Promise<void> {
   return new Promise((resolve, reject) => req.login(user, (err) => (err ? reject(err) : resolve())));
+}
+
+/** Signs the person in with a fresh session id and CSRF token, and notes the sign-in for the site admin. */
+export async function startSession(req: Request, user: User): Promise<void> {
+  await signIn(req, user);
+  await recordSignIn(user);
+  csrfToken(req, true);
 }
 
 /** Signs out and destroys the session row itself, not just its user. */

@@ -5,14 +5,22 @@ import { requireUser, currentUser } from '../middlewares/authenticate';
 import { verificationConfirmLimiter, verificationResendLimiter } from '../middlewares/rate-limits';
 import { confirmEmail, resendVerificationMail } from '../services/email-verification';
 import { config } from '../config';
+import { signedUpHere } from '../auth/sign-up-session';
+import { startSession } from '../auth/session-helpers';
+import { sessionBody } from './session';
 
 export const emailVerificationsRouter = Router();
 
-/** The landing page of the link posts its token here (a GET would be spent by mail scanners that open links). */
+/**
+ * The landing page of the link posts its token here (a GET would be spent by mail scanners that open
+ * links). In the browser that signed up, confirming also signs the new account in.
+ */
 emailVerificationsRouter.post('/email-verifications/confirm', verificationConfirmLimiter, async (req, res) => {
   const { token } = parseBody(req, EmailVerificationConfirmSchema);
-  await confirmEmail(token);
-  const body: EmailVerificationConfirmResponse = { verified: true };
+  const user = await confirmEmail(token);
+  const signInNow = signedUpHere(req, user);
+  if (signInNow) await startSession(req, user);
+  const body: EmailVerificationConfirmResponse = { verified: true, session: signInNow ? sessionBody(req) : null };
   res.json(body);
 });
 

@@ -3,8 +3,7 @@ import { SignInSchema, type SessionResponse } from '@shared/schemas/user';
 import { parseBody } from '../middlewares/validate';
 import { csrfToken } from '../middlewares/csrf';
 import { forgiveSignInFailures, signInAddressLimiter, signInLimiter } from '../middlewares/rate-limits';
-import { recordSignIn } from '../services/accounts';
-import { authenticateLocal, signIn, signOut } from '../auth/session-helpers';
+import { authenticateLocal, signOut, startSession } from '../auth/session-helpers';
 import { presentCurrentUser } from '../presenters/user';
 import { AppError } from '../errors';
 import { config } from '../config';
@@ -12,7 +11,7 @@ import { config } from '../config';
 export const SESSION_COOKIE = 'placard.sid';
 export const sessionRouter = Router();
 
-const sessionBody = (req: Request): SessionResponse => ({
+export const sessionBody = (req: Request): SessionResponse => ({
   user: req.user ? presentCurrentUser(req.user) : null,
   csrfToken: csrfToken(req),
   demoMode: config.demoMode,
@@ -32,9 +31,7 @@ sessionRouter.post('/session', signInAddressLimiter, signInLimiter, async (req, 
   const user = await authenticateLocal(req, res);
   if (!user) throw new AppError(401, 'UNAUTHENTICATED', 'That e-mail and password do not match an account.', { password: 'E-mail or password is not right.' });
   await forgiveSignInFailures(req);
-  await signIn(req, user);
-  await recordSignIn(user);
-  csrfToken(req, true);
+  await startSession(req, user);
   res.json(sessionBody(req));
 });
 

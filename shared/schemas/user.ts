@@ -58,7 +58,8 @@ export const EmailVerificationConfirmSchema = z.object({
 });
 export type EmailVerificationConfirmInput = z.infer<typeof EmailVerificationConfirmSchema>;
 
-export const EmailVerificationConfirmResponseSchema = z.object({ verified: z.literal(true) });
+/** `session` is the new session when confirming signed the person in (the browser that signed up). */
+export const EmailVerificationConfirmResponseSchema = z.object({ verified: z.literal(true), session: z.lazy(() => SessionResponseSchema).nullable() });
 export type EmailVerificationConfirmResponse = z.infer<typeof EmailVerificationConfirmResponseSchema>;
 
 /** What the signed-in person may do across the site; event roles add to it per event. */

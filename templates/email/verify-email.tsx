@@ -10,7 +10,7 @@ export function verifyEmail(params: { name: string; link: string; hours: number 
     '',
     link,
     '',
-    `It works once, within ${hours} hours. You can build and publish already; entering shows and joining a show's team need a confirmed address.`,
+    `It works once, within ${hours} hours. Opened in the browser you signed up in, it signs you in too. You can sign in and build before confirming; entering shows and joining a show's team need a confirmed address.`,
     '',
     'If you did not make a Placard account, ignore this e-mail: nothing happens without the link.',
     '',
@@ -22,8 +22,8 @@ export function verifyEmail(params: { name: string; link: string; hours: number 
       <p>Welcome to Placard. Confirm that this e-mail address is yours:</p>
       <ActionLink href={link}>Confirm my address</ActionLink>
       <p>
-        It works once, within {hours} hours. You can build and publish already; entering shows and joining a show&apos;s team need a confirmed
-        address.
+        It works once, within {hours} hours. Opened in the browser you signed up in, it signs you in too. You can sign in and build before
+        confirming; entering shows and joining a show&apos;s team need a confirmed address.
       </p>
       <p>If you did not make a Placard account, ignore this e-mail: nothing happens without the link.</p>
     </>,

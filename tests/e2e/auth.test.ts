@@ -75,6 +75,52 @@ describe('a newcomer in the browser', () => {
     await page.close();
   });
 
+  it('signs up on the way to a private page: the link, opened in the same browser, signs in and goes on there; elsewhere it only confirms', async () => {
+    const email = uniqueEmail('on-the-way');
+    const browser = await env.browser.newContext({ viewport: { width: 390, height: 844 } });
+    const page = await browser.newPage();
+    await page.goto(`${env.baseUrl}/account`);
+    await page.waitForURL(/\/sign-in\?next=%2Faccount/);
+    await page.getByRole('link', { name: 'New here? Make an account' }).click();
+    await page.waitForURL(/\/sign-up\?next=%2Faccount/);
+    await page.getByRole('heading', { name: 'Make an account' }).waitFor();
+    await page.getByLabel('Your name').fill('Oren Castell');
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByLabel('Password').fill('a long browser password');
+    await page.getByRole('button', { name: 'Make my account' }).click();
+    await page.getByRole('heading', { name: 'Check your inbox' }).waitFor();
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'sign-up-check-inbox-on-the-way-phone.png'), fullPage: true });
+
+    // The mail's link, opened in a new tab of the same browser (as a mail app hands it over).
+    const link = new URL((await waitForMail(email)).text.match(/http\S+verify-email\?token=\S+/)![0]);
+    const tab = await browser.newPage();
+    await tab.goto(`${env.baseUrl}${link.pathname}${link.search}`);
+    await tab.waitForURL(`${env.baseUrl}/account`);
+    await tab.getByText('Signed in as Oren Castell.').waitFor();
+    expect(await tab.getByRole('region', { name: 'Confirm your e-mail address' }).count()).toBe(0);
+    await tab.screenshot({ path: path.join(SCREENSHOT_DIR, 'sign-up-link-signs-in-phone.png'), fullPage: true });
+    await browser.close();
+
+    // Someone else's browser: a second newcomer's link opened there confirms, and signs nobody in.
+    const other = uniqueEmail('elsewhere');
+    const signingUp = await env.browser.newPage();
+    await signingUp.goto(`${env.baseUrl}/sign-up`);
+    await signingUp.getByLabel('Your name').fill('Pell Varga');
+    await signingUp.getByLabel('E-mail').fill(other);
+    await signingUp.getByLabel('Password').fill('a long browser password');
+    await signingUp.getByRole('button', { name: 'Make my account' }).click();
+    await signingUp.getByRole('heading', { name: 'Check your inbox' }).waitFor();
+    const otherLink = new URL((await waitForMail(other)).text.match(/http\S+verify-email\?token=\S+/)![0]);
+    const elsewhere = await env.browser.newPage();
+    await elsewhere.goto(`${env.baseUrl}${otherLink.pathname}${otherLink.search}`);
+    await elsewhere.getByText('Your e-mail address is confirmed.').waitFor();
+    await elsewhere.getByRole('link', { name: 'Sign in', exact: true }).first().waitFor();
+    expect(new URL(elsewhere.url()).pathname).toBe('/verify-email');
+    expect(await elsewhere.getByText(/Signed in as/).count()).toBe(0);
+    await signingUp.close();
+    await elsewhere.close();
+  });
+
   it('sends a visitor to sign in before a private page, and back after', async () => {
     const page = await env.browser.newPage();
     await page.goto(`${env.baseUrl}/account`);

@@ -3,7 +3,7 @@ import { Op } from 'sequelize';
 import { CaughtMail } from '@server/models/caught-mail';
 import { EmailVerificationToken } from '@server/models/email-verification-token';
 import { User } from '@server/models/user';
-import { SignUpResponseSchema } from '@shared/schemas/user';
+import { EmailVerificationConfirmResponseSchema, SignUpResponseSchema } from '@shared/schemas/user';
 import { EMAIL_VERIFICATION_RESENDS_PER_HOUR } from '@shared/constants';
 import { apiClient } from '../../support/api-client';
 import { createUser, DEFAULT_PASSWORD, uniqueEmail } from '../../support/factories';
@@ -67,7 +67,7 @@ describe('sign-up and e-mail verification', () => {
 
     const res = await client.post('/api/email-verifications/confirm', { token });
     expect(res.status).toBe(200);
-    expect(res.body).toEqual({ verified: true });
+    expect(res.body).toEqual({ verified: true, session: null }); // signed in already: nothing changes
     expect((await client.get('/api/session')).body.user.emailVerified).toBe(true);
     const user = (await User.findOne({ where: { email } }))!;
     expect(user.emailVerifiedAt).toBeInstanceOf(Date);
@@ -75,6 +75,34 @@ describe('sign-up and e-mail verification', () => {
 
     // The link works without a session too (opened on another device), and again after use.
     expect((await (await apiClient()).post('/api/email-verifications/confirm', { token })).status).toBe(200);
+  });
+
+  it('signs the new account in when its link is confirmed in the browser that signed up, and only there', async () => {
+    const { email, client, token } = await signUpAndGetToken('same-browser');
+    const res = await client.post('/api/email-verifications/confirm', { token });
+    expect(res.status).toBe(200);
+    const body = EmailVerificationConfirmResponseSchema.parse(res.body);
+    expect(body.session?.user).toMatchObject({ email, name: 'Kit Ansel', emailVerified: true });
+    const now = await client.refresh();
+    expect(now.body.user).toMatchObject({ email, emailVerified: true });
+    // The answer carries the new session's CSRF token, and it works for the next write.
+    expect(now.body.csrfToken).toBe(body.session!.csrfToken);
+    const renamed = await client.patch('/api/account', { name: 'Kit Ansel-Rowe' });
+    expect(renamed.body).toMatchObject({ user: { name: 'Kit Ansel-Rowe' } });
+
+    // Another browser (or the same one after signing up as someone else) only confirms.
+    const second = await signUpAndGetToken('other-browser');
+    const stranger = await apiClient();
+    const elsewhere = await stranger.post('/api/email-verifications/confirm', { token: second.token });
+    expect(elsewhere.body).toEqual({ verified: true, session: null });
+    expect((await stranger.get('/api/session')).body.user).toBeNull();
+    expect((await User.findOne({ where: { email: second.email } }))!.emailVerified).toBe(true);
+
+    // A disabled account is not signed in by its link, even in its own browser.
+    const third = await signUpAndGetToken('disabled-then-confirmed');
+    await User.update({ disabledAt: new Date() }, { where: { email: third.email } });
+    expect((await third.client.post('/api/email-verifications/confirm', { token: third.token })).body.session ?? null).toBeNull();
+    expect((await third.client.get('/api/session')).body.user).toBeNull();
   });
 
   it('refuses an expired link and a made-up one with a 400 naming the token, and confirms nothing', async () => {

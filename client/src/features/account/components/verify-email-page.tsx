@@ -1,11 +1,12 @@
 import { useEffect, useRef } from 'react';
-import { Link, useSearchParams } from 'react-router-dom';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { useConfirmEmail } from '../api/confirm-email';
 import { useSession } from '@client/features/session/api/get-session';
 import { Notice } from '@client/components/ui/notice';
 import { PageHeader } from '@client/components/ui/page-header';
 import { LoadingState } from '@client/components/ui/states';
 import { ApiError } from '@client/lib/api';
+import { takeNextAfterSignUp } from '@client/features/session/next-after-sign-up';
 
 const linkClass = 'inline-flex min-h-11 items-center border-2 border-ink bg-ink px-4 font-display uppercase tracking-wide text-paper hover:border-signal hover:bg-signal';
 
@@ -15,13 +16,18 @@ export function VerifyEmailPage() {
   const token = params.get('token') ?? '';
   const confirm = useConfirmEmail();
   const { data: session } = useSession();
+  const navigate = useNavigate();
   const sent = useRef(false);
 
   useEffect(() => {
     if (sent.current) return; // React's development double effect must not spend the link twice
     sent.current = true;
-    confirm.mutate({ token });
-  }, [confirm, token]);
+    confirm.mutate(
+      { token },
+      // Signed in by the link (this browser signed up): straight on to where they were going.
+      { onSuccess: ({ session }) => (session ? navigate(takeNextAfterSignUp(), { replace: true, state: { confirmed: true } }) : undefined) },
+    );
+  }, [confirm, token, navigate]);
 
   return (
     <div className="mx-auto max-w-md">

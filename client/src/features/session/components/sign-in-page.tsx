@@ -68,7 +68,9 @@ export function SignInPage() {
       </form>
       <p className="mt-6 flex flex-wrap justify-between gap-2 text-sm">
         <Link to="/reset-password" className="underline underline-offset-4">Forgot your password?</Link>
-        <Link to="/sign-up" className="underline underline-offset-4">New here? Make an account</Link>
+        <Link to={params.get('next') ? `/sign-up?next=${encodeURIComponent(safeNext(params.get('next')))}` : '/sign-up'} className="underline underline-offset-4">
+          New here? Make an account
+        </Link>
       </p>
     </div>
   );

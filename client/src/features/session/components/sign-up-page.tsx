@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Link } from 'react-router-dom';
+import { Link, useSearchParams } from 'react-router-dom';
 import { PASSWORD_MIN_LENGTH } from '@shared/constants';
 import { SignUpSchema, type SignUpInput } from '@shared/schemas/user';
 import { useSignUp } from '../api/sign-up';
@@ -10,14 +10,17 @@ import { Button } from '@client/components/ui/button';
 import { TextField } from '@client/components/ui/text-field';
 import { Notice } from '@client/components/ui/notice';
 import { PageHeader } from '@client/components/ui/page-header';
+import { rememberNextAfterSignUp } from '../next-after-sign-up';
 
 export function SignUpPage() {
+  const [params] = useSearchParams();
   const signUp = useSignUp();
   const [formError, setFormError] = useState('');
   const { register, handleSubmit, setError, formState: { errors } } = useForm<SignUpInput>({ resolver: zodResolver(SignUpSchema) });
 
   const onSubmit = handleSubmit((input) => {
     setFormError('');
+    rememberNextAfterSignUp(params.get('next'));
     signUp.mutate(input, {
       onError: (err) => setFormError(applyServerErrors(err, setError, ['email', 'name', 'password'])),
     });
@@ -31,7 +34,8 @@ export function SignUpPage() {
           <p>{signUp.data.message}</p>
           {signUp.data.demoMode ? <p className="mt-1 text-sm">Demo mode: mail is caught, not sent. The site admin reads it under Caught mail.</p> : null}
         </Notice>
-        <p className="mt-6 text-sm">
+        <p className="mt-6 text-sm">Opened in this browser, the link confirms your address and signs you in. Elsewhere it confirms it, and you sign in there with your password.</p>
+        <p className="mt-2 text-sm">
           Nothing arrived? Look in the spam folder, then <Link to="/sign-in" className="underline underline-offset-4">sign in</Link> and ask for a new link.
         </p>
       </div>
@@ -51,7 +55,10 @@ export function SignUpPage() {
         </Button>
       </form>
       <p className="mt-6 text-sm">
-        Already have one? <Link to="/sign-in" className="underline underline-offset-4">Sign in</Link>
+        Already have one?{' '}
+        <Link to={params.get('next') ? `/sign-in?next=${encodeURIComponent(params.get('next')!)}` : '/sign-in'} className="underline underline-offset-4">
+          Sign in
+        </Link>
       </p>
     </div>
   );
