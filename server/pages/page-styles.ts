@@ -7,7 +7,7 @@ export const PAGE_CSS = `@font-face{font-family:Oswald;font-weight:600;font-disp
 :root{--paper:#F5F0E6;--ink:#1C1B19;--graphite:#55524C;--rule:#D8D0C0;--signal:#D9481C;--signal-ink:#B3390F}
 *{box-sizing:border-box}
 html{background:var(--paper);color:var(--ink);font:16px/1.5 system-ui,-apple-system,"Segoe UI",Roboto,"Helvetica Neue",Arial,sans-serif;-webkit-text-size-adjust:100%}
-body{margin:0}
+body{margin:0;overflow-wrap:break-word}
 a{color:inherit}
 h1,h2,.d{font-family:Oswald,"Arial Narrow","Roboto Condensed",sans-serif;font-weight:600;letter-spacing:.01em;text-transform:uppercase;line-height:1.1}
 .bar{display:flex;justify-content:space-between;align-items:center;gap:8px;padding:8px 16px;border-bottom:1px solid var(--rule)}
@@ -31,8 +31,9 @@ h1{font-size:clamp(2rem,9vw,3.4rem);margin:16px 0 4px}
 section{margin-top:28px}
 h2{font-size:1.35rem;margin:0 0 8px;padding-bottom:4px;border-bottom:1px solid var(--ink)}
 .story p{margin:0 0 12px}
-dl.spec{margin:0;display:grid;grid-template-columns:minmax(110px,35%) 1fr}
-dl.spec dt,dl.spec dd{margin:0;padding:6px 0;border-bottom:1px solid var(--rule)}
+dl.spec{margin:0;display:grid;grid-template-columns:minmax(110px,35%) minmax(0,1fr)}
+/* A web address or a part number with no spaces wraps instead of widening the page on a phone. */
+dl.spec dt,dl.spec dd{margin:0;padding:6px 0;border-bottom:1px solid var(--rule);overflow-wrap:anywhere}
 dl.spec dt{color:var(--graphite);padding-right:12px}
 dl.spec dd{font-variant-numeric:tabular-nums}
 .made,.why{margin:8px 0 0;color:var(--graphite)}

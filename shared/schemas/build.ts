@@ -55,11 +55,13 @@ export type BuildPrivate = z.infer<typeof BuildPrivateSchema>;
 export const PRIVATE_FIELD_NAMES = ['vin', 'plate', 'ownerPhone', 'ownerAddress'] as const;
 
 export const CREDIT_ROLES = ['paint', 'body', 'chassis', 'engine build', 'upholstery', 'wiring', 'fabrication', 'machining', 'other'] as const;
+/** How long a credit's words may be, and how many credits a build holds: the editor's boxes stop there too. */
+export const CREDIT_LIMITS = { role: 60, name: 120, count: 40 } as const;
 export const CreditSchema = z.object({
-  role: shortText('Role', 60).min(1, { error: 'Say what they did.' }),
-  name: shortText('Name', 120).min(1, { error: 'Say who did it.' }),
+  role: shortText('Role', CREDIT_LIMITS.role).min(1, { error: 'Say what they did.' }),
+  name: shortText('Name', CREDIT_LIMITS.name).min(1, { error: 'Say who did it.' }),
 });
-export const CreditsSchema = z.object({ credits: z.array(CreditSchema).max(40, { error: 'At most 40 credits.' }) });
+export const CreditsSchema = z.object({ credits: z.array(CreditSchema).max(CREDIT_LIMITS.count, { error: `At most ${CREDIT_LIMITS.count} credits.` }) });
 export type Credit = z.infer<typeof CreditSchema>;
 
 export const PublishSchema = z.object({ published: z.boolean({ error: 'Published must be true or false.' }) });

@@ -30,6 +30,10 @@ async function expectRemoveButtonsInside(page: Page, sectionId: string) {
 const LONG_VALUE =
   'Twelve-circuit harness drawn up by the owner, every wire labelled at both ends, run in braided loom along the inner frame rail, fused behind the glovebox door, with a spare circuit for the trailer plug';
 
+const LONG_ROLE = 'Paint, bodywork, pinstriping and gold-leaf lettering';
+// No space to wrap at: the page must still not widen on a phone.
+const LONG_ADDRESS = 'https://coachwork-notes.example/builds/the-long-roof-wagon-restoration-diary-part-eleven';
+
 describe('credits and extra lines in the build editor', () => {
   it('keeps the Remove buttons inside their panel at 1024, 1366 and 1920 px and on a phone, and wraps long values', async () => {
     const { user, email, password } = await createUser({ name: 'Petra Vandell' });
@@ -54,7 +58,15 @@ describe('credits and extra lines in the build editor', () => {
     await extra.getByRole('button', { name: 'Add a line' }).click();
     await extra.getByLabel('Label').last().fill('Wiring');
     await extra.getByLabel('Value').last().fill(LONG_VALUE);
+    await extra.getByRole('button', { name: 'Add a line' }).click();
+    await extra.getByLabel('Label').last().fill('Build diary');
+    await extra.getByLabel('Value').last().fill(LONG_ADDRESS);
     await expect.poll(() => extra.getByRole('status').textContent()).toBe('Saved');
+    const creditsForm = page.getByRole('form', { name: 'Credits' });
+    await creditsForm.getByRole('button', { name: 'Add a credit' }).click();
+    await creditsForm.getByLabel('Role').last().fill(LONG_ROLE);
+    await creditsForm.getByLabel('Name').last().fill('Marrow Lane Coachworks');
+    await expect.poll(() => creditsForm.getByRole('status').textContent()).toBe('Saved');
     // Extra lines carry no "Made by" or "Why this choice": those belong to the spec sections.
     expect(await extra.getByLabel('Made by').count()).toBe(0);
     expect(await extra.getByLabel('Why this choice').count()).toBe(0);
@@ -77,8 +89,10 @@ describe('credits and extra lines in the build editor', () => {
         );
         expect(boxes.filter((b) => !b.wide || !b.tall).map((b) => b.text), `at ${width} px in ${sectionId}`).toEqual([]);
       }
+      // Nothing, not even a web address with no space in it, makes the page scroll sideways.
+      expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth), `at ${width} px`).toBeLessThanOrEqual(0);
       // The long value is shown whole: its box grew to hold the text, nothing scrolls out of sight.
-      const value = extra.getByLabel('Value').last();
+      const value = extra.getByLabel('Value').nth(-2);
       const fit = await value.evaluate((el) => ({ scroll: el.scrollHeight, client: el.clientHeight, width: el.clientWidth }));
       expect(fit.scroll, `at ${width} px the value's text fits its box`).toBeLessThanOrEqual(fit.client + 1);
       expect(fit.client, `at ${width} px the value's box is taller than one line`).toBeGreaterThan(44);
@@ -88,7 +102,8 @@ describe('credits and extra lines in the build editor', () => {
 
     // After a reload the long value is stored and shown whole.
     await page.reload();
-    await expect.poll(() => extra.getByLabel('Value').last().inputValue()).toBe(LONG_VALUE);
+    await expect.poll(() => extra.getByLabel('Value').nth(-2).inputValue()).toBe(LONG_VALUE);
+    expect(await extra.getByLabel('Value').last().inputValue()).toBe(LONG_ADDRESS);
     await context.close();
   }, 120_000);
 });

@@ -7,7 +7,7 @@ export function TextAreaField({ label, error, hint, id, ref, className = '', are
   const areaId = id ?? autoId;
   const describedBy = [error ? `${areaId}-error` : '', hint ? `${areaId}-hint` : ''].filter(Boolean).join(' ') || undefined;
   return (
-    <div className={`flex flex-col gap-1 ${className}`}>
+    <div className={`flex min-w-0 flex-col gap-1 ${className}`}>
       <label htmlFor={areaId} className="text-sm font-semibold">
         {label}
       </label>
@@ -18,7 +18,7 @@ export function TextAreaField({ label, error, hint, id, ref, className = '', are
         rows={rows}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy}
-        className={`border bg-white px-3 py-2 text-base outline-none focus:border-ink focus:ring-1 focus:ring-ink ${error ? 'border-danger' : 'border-rule'} ${areaClassName}`}
+        className={`w-full min-w-0 border bg-white px-3 py-2 text-base outline-none focus:border-ink focus:ring-1 focus:ring-ink ${error ? 'border-danger' : 'border-rule'} ${areaClassName}`}
       />
       {hint ? <p id={`${areaId}-hint`} className="text-sm text-graphite">{hint}</p> : null}
       {error ? <p id={`${areaId}-error`} role="alert" className="text-sm text-danger">{error}</p> : null}
