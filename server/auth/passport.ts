@@ -3,6 +3,9 @@ import { Strategy as LocalStrategy } from 'passport-local';
 import { User } from '../models/user';
 import { verifyPassword } from './passwords';
 
+/** The strategy's note when the password is right but a site admin turned the account off. */
+export const DISABLED_REFUSAL = 'account-disabled';
+
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
@@ -17,8 +20,10 @@ passport.use(
     User.findOne({ where: { email: email.trim().toLowerCase() } })
       .then(async (user) => {
         const ok = await verifyPassword(user?.passwordHash, password);
-        // A disabled account is refused like a wrong password: the message never tells who has an account.
-        done(null, ok && user && !user.disabledAt ? user : false);
+        if (!ok || !user) return done(null, false);
+        // Only someone who knows the password learns that the account is turned off; a wrong password says nothing more.
+        if (user.disabledAt) return done(null, false, { message: DISABLED_REFUSAL });
+        done(null, user);
       })
       .catch(done);
   }),

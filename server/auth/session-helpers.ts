@@ -1,15 +1,18 @@
 import type { Request, Response } from 'express';
-import { passport } from './passport';
+import { DISABLED_REFUSAL, passport } from './passport';
 import type { User } from '../models/user';
 import { csrfToken } from '../middlewares/csrf';
 import { recordSignIn } from '../services/accounts';
 
-/** Checks e-mail and password with the local strategy; resolves to the user or undefined. */
-export function authenticateLocal(req: Request, res: Response): Promise<User | undefined> {
+export type LocalSignIn = { user: User } | { user: undefined; disabled: boolean };
+
+/** Checks e-mail and password with the local strategy: the user, or none and whether a right password met a disabled account. */
+export function authenticateLocal(req: Request, res: Response): Promise<LocalSignIn> {
   return new Promise((resolve, reject) => {
-    passport.authenticate('local', { session: false }, (err: unknown, user: User | false) => {
+    passport.authenticate('local', { session: false }, (err: unknown, user: User | false, info?: { message?: string }) => {
       if (err) reject(err);
-      else resolve(user || undefined);
+      else if (user) resolve({ user });
+      else resolve({ user: undefined, disabled: info?.message === DISABLED_REFUSAL });
     })(req, res, reject);
   });
 }

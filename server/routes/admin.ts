@@ -11,7 +11,7 @@ import { listUsers, updateRoles } from '../services/users';
 import { getCaughtMail, listCaughtMail } from '../services/caught-mail';
 import { presentAdminUser, presentAdminUserDetail } from '../presenters/user';
 import { buildsOfAccount, findAccount, setAccountDisabled } from '../services/accounts';
-import { requestPasswordReset } from '../services/password-resets';
+import { sendResetFromAdmin } from '../services/password-resets';
 import { presentCaughtMail, presentCaughtMailSummary } from '../presenters/caught-mail';
 import { NotFoundError } from '../errors';
 import { config } from '../config';
@@ -50,12 +50,12 @@ adminRouter.put('/admin/users/:id/disabled', async (req, res) => {
   res.json({ user: presentAdminUser(user) });
 });
 
-/** Mails the account a password-reset link, as if its owner had asked on the sign-in page. */
+/** Mails the account a password-reset link that says the site admin sent it; a turned-off account gets none (409). */
 adminRouter.post('/admin/users/:id/password-reset', async (req, res) => {
   const { id } = parseParams(req, IdParamSchema);
   authorizeUser(currentUser(req), 'sendReset', { id });
   const user = await findAccount(id);
-  await requestPasswordReset(user.email, config.publicBaseUrl);
+  await sendResetFromAdmin(user, config.publicBaseUrl);
   res.status(202).json({ sentTo: user.email });
 });
 

@@ -5,7 +5,7 @@ import { csrfToken } from '../middlewares/csrf';
 import { forgiveSignInFailures, signInAddressLimiter, signInLimiter } from '../middlewares/rate-limits';
 import { authenticateLocal, signOut, startSession } from '../auth/session-helpers';
 import { presentCurrentUser } from '../presenters/user';
-import { AppError } from '../errors';
+import { AppError, ForbiddenError } from '../errors';
 import { config } from '../config';
 
 export const SESSION_COOKIE = 'placard.sid';
@@ -28,8 +28,10 @@ sessionRouter.get('/session', (req, res) => {
 
 sessionRouter.post('/session', signInAddressLimiter, signInLimiter, async (req, res) => {
   parseBody(req, SignInSchema); // a 400 naming the field before passport looks at the body
-  const user = await authenticateLocal(req, res);
-  if (!user) throw new AppError(401, 'UNAUTHENTICATED', 'That e-mail and password do not match an account.', { password: 'E-mail or password is not right.' });
+  const found = await authenticateLocal(req, res);
+  if (!found.user && found.disabled) throw new ForbiddenError('This account is turned off. Ask the site admin.'); // the password was right: say why, not "wrong password"
+  if (!found.user) throw new AppError(401, 'UNAUTHENTICATED', 'That e-mail and password do not match an account.', { password: 'E-mail or password is not right.' });
+  const { user } = found;
   await forgiveSignInFailures(req);
   await startSession(req, user);
   res.json(sessionBody(req));

@@ -2,12 +2,12 @@ import { createHash, randomBytes } from 'node:crypto';
 import { Op } from 'sequelize';
 import { PASSWORD_RESET_TTL_MINUTES } from '@shared/constants';
 import type { PasswordResetConfirmInput } from '@shared/schemas/user';
-import { passwordResetEmail } from '@templates/email/password-reset';
+import { passwordResetEmail, type ResetAskedBy } from '@templates/email/password-reset';
 import { sequelize } from '../db/sequelize';
 import { PasswordResetToken } from '../models/password-reset-token';
 import { User } from '../models/user';
 import { hashPassword } from '../auth/passwords';
-import { AppError } from '../errors';
+import { AppError, ConflictError } from '../errors';
 import { queueMail } from '../mail/outbox';
 import { destroySessionsOf } from './sessions';
 
@@ -19,7 +19,21 @@ const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
  */
 export async function requestPasswordReset(email: string, publicBaseUrl: string): Promise<void> {
   const user = await User.findOne({ where: { email } });
-  if (!user) return;
+  if (user) await mailResetLink(user, publicBaseUrl, 'owner');
+}
+
+/**
+ * The site admin mails an account a reset link. A turned-off account is refused: the link could
+ * not get its owner back in, and the mail would say otherwise.
+ */
+export async function sendResetFromAdmin(user: User, publicBaseUrl: string): Promise<void> {
+  if (user.disabledAt) {
+    throw new ConflictError('This account is turned off, so no reset link was sent. Enable the account first.');
+  }
+  await mailResetLink(user, publicBaseUrl, 'site-admin');
+}
+
+async function mailResetLink(user: User, publicBaseUrl: string, askedBy: ResetAskedBy): Promise<void> {
   const token = randomBytes(32).toString('base64url');
   const link = `${publicBaseUrl}/reset-password?token=${token}`;
   // The token and its mail are one write: no mail for a token that was not saved, no token without its mail.
@@ -28,7 +42,7 @@ export async function requestPasswordReset(email: string, publicBaseUrl: string)
       { userId: user.id, tokenHash: sha256(token), expiresAt: new Date(Date.now() + PASSWORD_RESET_TTL_MINUTES * 60_000), usedAt: null },
       { transaction },
     );
-    await queueMail({ to: user.email, ...passwordResetEmail({ name: user.name, link, minutes: PASSWORD_RESET_TTL_MINUTES }) }, { transaction });
+    await queueMail({ to: user.email, ...passwordResetEmail({ name: user.name, link, minutes: PASSWORD_RESET_TTL_MINUTES, askedBy }) }, { transaction });
   });
 }
 

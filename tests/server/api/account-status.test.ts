@@ -5,7 +5,8 @@ import { AdminUserDetailSchema, AdminUserSchema } from '@shared/schemas/user';
 import { apiClient, testApp } from '../../support/api-client';
 import { createUser } from '../../support/factories';
 import { createBuild } from '../../support/build-factory';
-import { waitForMail } from '../../support/mailbox';
+import { countMail, waitForMail } from '../../support/mailbox';
+import { PasswordResetToken } from '@server/models/password-reset-token';
 
 async function signedIn(flags: { isSiteAdmin?: boolean } = {}) {
   const made = await createUser({ ...flags, name: flags.isSiteAdmin ? 'An Admin' : 'An Owner' });
@@ -35,11 +36,12 @@ describe('disabling an account (site admin)', () => {
     expect(res.status).toBe(200);
     expect(AdminUserSchema.parse(res.body.user).disabledAt).not.toBeNull();
 
-    // The open session is over, a new sign-in is refused like a wrong password, the public page is gone.
+    // The open session is over, a new sign-in is refused, the public page is gone.
     expect((await owner.client.get('/api/session')).body.user).toBeNull();
     expect((await owner.client.get('/api/builds')).status).toBe(401);
     const again = await (await apiClient()).signIn(owner.email, owner.password);
-    expect(again.status).toBe(401);
+    expect(again.status).toBe(403);
+    expect(again.body.error.message).toBe('This account is turned off. Ask the site admin.');
     expect((await request(testApp()).get(`/c/${build.code}`)).status).toBe(404);
     expect((await request(testApp()).get(`/api/public/builds/${build.code}`)).status).toBe(404);
     const tiles = await request(testApp()).get('/api/public/builds?limit=24');
@@ -77,6 +79,30 @@ describe('disabling an account (site admin)', () => {
   });
 });
 
+describe('signing in to a turned-off account', () => {
+  it('tells the person who knows the password that the account is off; a wrong password hears only the usual answer', async () => {
+    const { client: admin } = await signedIn({ isSiteAdmin: true });
+    const owner = await createUser({ name: 'Wenna Pellock' });
+    expect((await admin.put(`/api/admin/users/${owner.user.id}/disabled`, { disabled: true })).status).toBe(200);
+
+    const right = await (await apiClient()).signIn(owner.email, owner.password);
+    expect(right.status).toBe(403);
+    expect(right.body.error.message).toBe('This account is turned off. Ask the site admin.');
+    expect(right.body.error.fields).toBeUndefined();
+
+    const wrong = await (await apiClient()).signIn(owner.email, `${owner.password}x`);
+    const nobody = await (await apiClient()).signIn('nobody-here@placard.test', owner.password);
+    for (const res of [wrong, nobody]) {
+      expect(res.status).toBe(401);
+      expect(res.body.error.fields.password).toBe('E-mail or password is not right.');
+      expect(res.body.error.message).not.toMatch(/turned off/);
+    }
+    // The refused sign-in made no session.
+    const session = await (await apiClient()).get('/api/session');
+    expect(session.body.user).toBeNull();
+  });
+});
+
 describe('an account opened by the site admin', () => {
   it('shows its builds, last sign-in and status, and sends it a password-reset e-mail', async () => {
     const { client: admin } = await signedIn({ isSiteAdmin: true });
@@ -95,10 +121,32 @@ describe('an account opened by the site admin', () => {
     expect(sent.status).toBe(202);
     const mail = await waitForMail(owner.email);
     expect(mail.text).toMatch(/reset-password\?token=/);
+    // The mail says who sent it, not "someone (hopefully you) asked".
+    expect(mail.text).toMatch(/The site admin of Placard sent you this link/);
+    expect(mail.text).not.toMatch(/hopefully you/);
 
     const { client: someone } = await signedIn();
     expect((await someone.get(`/api/admin/users/${owner.user.id}`)).status).toBe(403);
     expect((await someone.post(`/api/admin/users/${owner.user.id}/password-reset`, {})).status).toBe(403);
+  });
+});
+
+describe('a reset link for a turned-off account', () => {
+  it('is refused with a reason, and no link is made or mailed', async () => {
+    const { client: admin } = await signedIn({ isSiteAdmin: true });
+    const owner = await createUser({ name: 'Tamsin Orrery' });
+    expect((await admin.put(`/api/admin/users/${owner.user.id}/disabled`, { disabled: true })).status).toBe(200);
+
+    const res = await admin.post(`/api/admin/users/${owner.user.id}/password-reset`, {});
+    expect(res.status).toBe(409);
+    expect(res.body.error.message).toBe('This account is turned off, so no reset link was sent. Enable the account first.');
+    expect(await PasswordResetToken.count({ where: { userId: owner.user.id } })).toBe(0);
+    expect(await countMail(owner.email)).toBe(0);
+
+    // Enabled again, the same button works.
+    expect((await admin.put(`/api/admin/users/${owner.user.id}/disabled`, { disabled: false })).status).toBe(200);
+    expect((await admin.post(`/api/admin/users/${owner.user.id}/password-reset`, {})).status).toBe(202);
+    expect((await waitForMail(owner.email)).text).toMatch(/The site admin of Placard sent you this link/);
   });
 });
 

@@ -70,12 +70,20 @@ export function AccountPanel({ id, selfId, onClose }: { id: number; selfId: numb
         >
           {disabled ? 'Enable the account' : 'Disable the account'}
         </Button>
-        <Button variant="secondary" disabled={sendReset.isPending} onClick={() => sendReset.mutate(user.id)}>
-          Send a password-reset e-mail
-        </Button>
+        {/* A reset link could not get a disabled account back in, so none is offered (the server refuses one too). */}
+        {disabled ? null : (
+          <Button variant="secondary" disabled={sendReset.isPending} onClick={() => sendReset.mutate(user.id)}>
+            Send a password-reset e-mail
+          </Button>
+        )}
       </div>
+      {disabled ? (
+        <p className="mt-2 text-graphite">
+          No password-reset e-mail while the account is disabled: enable it first. If they sign in with their password, they are told the account is turned off.
+        </p>
+      ) : null}
       <div aria-live="polite" className="mt-2">
-        {sendReset.isSuccess ? <p className="text-ok">A reset link went to {sendReset.data.sentTo}.</p> : null}
+        {sendReset.isSuccess && !disabled ? <p className="text-ok">A reset link went to {sendReset.data.sentTo}.</p> : null}
         {sendReset.error ? <p className="text-danger">{sendReset.error.message}</p> : null}
         {setDisabled.error ? <p className="text-danger">{setDisabled.error.message}</p> : null}
       </div>
