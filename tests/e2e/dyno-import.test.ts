@@ -96,4 +96,33 @@ describe('importing a dyno export', () => {
     await section.screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-import-public-desktop.png') });
     await context.close();
   });
+
+  it('fills the peaks from rows typed in, so the run is added without typing them', async () => {
+    const { user, email, password } = await createUser({ name: 'Ines Marlow' });
+    const build = await createFullBuild(user.id);
+    const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+    const page = await context.newPage();
+    await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(`/builds/${build.id}`)}`);
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByLabel('Password').fill(password);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL(`${env.baseUrl}/builds/${build.id}`);
+
+    const dyno = page.getByTestId('dyno-panel');
+    await dyno.getByRole('button', { name: 'Add a dyno run' }).click();
+    const run = page.getByRole('form', { name: 'Add a dyno run' });
+    await run.getByLabel('Facility').fill('Creek Road chassis dyno');
+    await run.getByLabel('Type rows').check();
+    const rows = [['4000', '221.3', '290.6'], ['5000', '277.4', '291.4'], ['6000', '310', '271.4']];
+    for (const [i, row] of rows.entries()) {
+      await run.getByRole('button', { name: 'Add a row' }).click();
+      for (const [j, column] of (['rpm', 'power', 'torque'] as const).entries()) await run.getByLabel(`Row ${i + 1} ${column}`).fill(row[j]!);
+    }
+    const box = (label: string) => run.getByLabel(label, { exact: true });
+    await expect.poll(() => Promise.all(['Peak power', 'Rpm at peak power', 'Peak torque', 'Rpm at peak torque'].map((l) => box(l).inputValue()))).toEqual(['310', '6000', '291.4', '5000']);
+    await run.getByRole('button', { name: 'Add the run' }).click();
+    await expect.poll(() => run.count()).toBe(0);
+    expect(await dyno.locator('li').filter({ hasText: 'Creek Road chassis dyno' }).innerText()).toContain('310 hp at 6,000 rpm · 291.4 lb·ft at 5,000 rpm');
+    await context.close();
+  });
 });
