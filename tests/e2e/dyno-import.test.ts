@@ -34,6 +34,8 @@ describe('importing a dyno export', () => {
     await expect.poll(() => run.getByRole('alert').filter({ hasText: 'Enter the peak power.' }).count()).toBe(1);
     expect(await run.getByRole('alert').filter({ hasText: 'Enter the rpm at peak torque.' }).count()).toBe(1);
     expect(await box('Rpm at peak torque').getAttribute('aria-invalid')).toBe('true');
+    await box('Peak power').scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-import-peaks-missing-phone.png') });
 
     // A file with a missing column: the problem is said once, under the field.
     await run.getByLabel('Import the dyno’s CSV file').setInputFiles({ name: 'broken.csv', mimeType: 'text/csv', buffer: Buffer.from('RPM,HP\n3000,200\n') });
