@@ -115,12 +115,18 @@ describe('importing a dyno export', () => {
     const run = page.getByRole('form', { name: 'Add a dyno run' });
     await run.getByLabel('Facility').fill('Creek Road chassis dyno');
     await run.getByLabel('Type rows').check();
-    const rows = [['4000', '221.3', '290.6'], ['5000', '277.4', '291.4'], ['6000', '310', '271.4']];
+    // A slip of the finger on row 2: refused, naming the row.
+    const rows = [['4000', '221.3', '290.6'], ['5000', '-277.4', '291.4'], ['6000', '310', '271.4']];
     for (const [i, row] of rows.entries()) {
       await run.getByRole('button', { name: 'Add a row' }).click();
       for (const [j, column] of (['rpm', 'power', 'torque'] as const).entries()) await run.getByLabel(`Row ${i + 1} ${column}`).fill(row[j]!);
     }
     const box = (label: string) => run.getByLabel(label, { exact: true });
+    await run.getByRole('button', { name: 'Add the run' }).click();
+    await expect.poll(() => run.getByRole('alert').filter({ hasText: 'Row 2: Curve power must be at least 0.' }).count()).toBe(1);
+    await run.getByLabel('Row 2 power').scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-typed-rows-error-phone.png') });
+    await run.getByLabel('Row 2 power').fill('277.4');
     await expect.poll(() => Promise.all(['Peak power', 'Rpm at peak power', 'Peak torque', 'Rpm at peak torque'].map((l) => box(l).inputValue()))).toEqual(['310', '6000', '291.4', '5000']);
     await run.getByRole('button', { name: 'Add the run' }).click();
     await expect.poll(() => run.count()).toBe(0);

@@ -40,6 +40,13 @@ function firstMessage(error: unknown): string | undefined {
   return undefined;
 }
 
+/** A typed curve's first problem, with the row it is on ("Row 2: Curve power must be at least 0."). */
+function curveMessage(error: unknown): string | undefined {
+  const row = Array.isArray(error) ? error.findIndex(Boolean) : -1;
+  const message = firstMessage(row >= 0 ? (error as unknown[])[row] : error);
+  return message && row >= 0 ? `Row ${row + 1}: ${message}` : message;
+}
+
 const PEAK_NAMES = Object.keys(DYNO_PEAK_FIELDS) as (keyof CurvePeaks)[];
 
 /**
@@ -147,7 +154,7 @@ export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () =
                 ))}
               </tbody>
             </table>
-            {errors.curve ? <p role="alert" className="text-sm text-danger">{firstMessage(errors.curve)}</p> : null}
+            {errors.curve ? <p role="alert" className="text-sm text-danger">{curveMessage(errors.curve)}</p> : null}
             <Button type="button" variant="secondary" className="self-start" onClick={() => append({ rpm: undefined, power: undefined, torque: undefined } as never)}>
               Add a row
             </Button>
