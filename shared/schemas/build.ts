@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { boundedNumber, figureSchema, shortText, type FigureInput } from './figure';
 import type { Sections, SectionKind } from './build-sections';
 import { dynoCurveFromCsv } from './dyno-csv';
+import { curvePeaks, DYNO_PEAK_LIMITS, DYNO_POINT_LIMITS, type CurvePeaks } from '../calc/dyno';
 import { text } from './text';
 import { calendarDate } from './dates';
 import { megabytes } from '../words';
@@ -88,11 +89,20 @@ export const PhotoOrderSchema = z.object({ photoIds: z.array(z.number().int().po
 
 // Dyno runs
 export const CORRECTION_STANDARDS = ['SAE J1349', 'DIN 70020', 'SAE J607', 'uncorrected'] as const;
+const { rpm: RPM, power: POWER, torque: TORQUE } = DYNO_POINT_LIMITS;
 export const DynoPointSchema = z.object({
-  rpm: boundedNumber('Curve rpm', 300, 25_000),
-  power: boundedNumber('Curve power', 0, 5000),
-  torque: boundedNumber('Curve torque', 0, 8000),
+  rpm: boundedNumber('Curve rpm', RPM.min, RPM.max),
+  power: boundedNumber('Curve power', POWER.min, POWER.max),
+  torque: boundedNumber('Curve torque', TORQUE.min, TORQUE.max),
 });
+/** The four peak boxes: their labels in the form, and what an empty one asks for. */
+export const DYNO_PEAK_FIELDS = {
+  peakPower: { label: 'Peak power', missing: 'Enter the peak power.' },
+  peakPowerRpm: { label: 'Rpm at peak power', missing: 'Enter the rpm at peak power.' },
+  peakTorque: { label: 'Peak torque', missing: 'Enter the peak torque.' },
+  peakTorqueRpm: { label: 'Rpm at peak torque', missing: 'Enter the rpm at peak torque.' },
+} as const satisfies Record<keyof CurvePeaks, { label: string; missing: string }>;
+const peak = (field: keyof CurvePeaks, { min, max }: { min: number; max: number }, opts: { int?: boolean } = {}) => boundedNumber(DYNO_PEAK_FIELDS[field].label, min, max, opts).optional();
 export const DynoRunCreateSchema = z
   .object({
     date: calendarDate('Date'),
@@ -101,29 +111,42 @@ export const DynoRunCreateSchema = z
     measuredAt: z.enum(['wheel', 'flywheel'], { error: 'Say whether the dyno measured at the wheels or the flywheel.' }),
     powerUnit: z.enum(['hp', 'PS', 'kW'], { error: 'Power unit must be hp, PS or kW.' }),
     torqueUnit: z.enum(['lbft', 'Nm'], { error: 'Torque unit must be lbft or Nm.' }),
-    peakPower: boundedNumber('Peak power', 1, 5000),
-    peakPowerRpm: boundedNumber('Peak power rpm', 300, 25_000, { int: true }),
-    peakTorque: boundedNumber('Peak torque', 1, 8000),
-    peakTorqueRpm: boundedNumber('Peak torque rpm', 300, 25_000, { int: true }),
+    /** Each peak may be left out when a curve is given: it is then read from the curve. */
+    peakPower: peak('peakPower', DYNO_PEAK_LIMITS.power),
+    peakPowerRpm: peak('peakPowerRpm', DYNO_PEAK_LIMITS.rpm, { int: true }),
+    peakTorque: peak('peakTorque', DYNO_PEAK_LIMITS.torque),
+    peakTorqueRpm: peak('peakTorqueRpm', DYNO_PEAK_LIMITS.rpm, { int: true }),
     curve: z.array(DynoPointSchema).max(400, { error: 'At most 400 curve points.' }).default([]),
     /** The curve pasted as CSV, instead of `curve`. */
     curveCsv: text('Pasted curve').max(40_000, { error: 'The pasted curve is too long.' }).optional(),
     sheetPhotoId: z.number().int().positive().optional(),
     note: shortText('Note', 500).optional(),
   })
-  .transform(({ curveCsv, ...run }, ctx) => {
-    if (curveCsv === undefined || curveCsv.trim() === '') return run;
-    const parsed = dynoCurveFromCsv(curveCsv, run);
-    if (!parsed.ok) {
-      ctx.addIssue({ code: 'custom', path: ['curveCsv'], message: parsed.message });
-      return z.NEVER;
+  .transform(({ curveCsv, ...given }, ctx) => {
+    let curve = given.curve;
+    if (curveCsv !== undefined && curveCsv.trim() !== '') {
+      // The same reader (limits, line numbers, sorting) the form's preview uses.
+      const parsed = dynoCurveFromCsv(curveCsv, given);
+      if (!parsed.ok) {
+        ctx.addIssue({ code: 'custom', path: ['curveCsv'], message: parsed.message });
+        return z.NEVER;
+      }
+      const points = DynoPointSchema.array().max(400, { error: 'At most 400 curve points.' }).safeParse(parsed.points);
+      if (!points.success) {
+        ctx.addIssue({ code: 'custom', path: ['curveCsv'], message: points.error.issues[0]!.message });
+        return z.NEVER;
+      }
+      curve = points.data;
     }
-    const points = DynoPointSchema.array().max(400).safeParse(parsed.points);
-    if (!points.success) {
-      ctx.addIssue({ code: 'custom', path: ['curveCsv'], message: points.error.issues[0]!.message });
-      return z.NEVER;
+    const fromCurve = curvePeaks(curve);
+    const peaks = {} as CurvePeaks;
+    for (const field of Object.keys(DYNO_PEAK_FIELDS) as (keyof CurvePeaks)[]) {
+      const value = given[field] ?? fromCurve?.[field];
+      if (value === undefined) ctx.addIssue({ code: 'custom', path: [field], message: DYNO_PEAK_FIELDS[field].missing });
+      else peaks[field] = value;
     }
-    return { ...run, curve: points.data };
+    if (Object.keys(peaks).length < 4) return z.NEVER;
+    return { ...given, ...peaks, curve };
   })
   .superRefine((run, ctx) => {
     for (let i = 1; i < run.curve.length; i++) {

@@ -1,5 +1,7 @@
 import Papa from 'papaparse';
 import { convert, parseUnit, type PowerUnit, type TorqueUnit } from '../calc/units';
+import { formatNumber, UNIT_LABELS } from '../calc/format';
+import { DYNO_POINT_LIMITS, type CurvePoint } from '../calc/dyno';
 
 // A dyno curve from a CSV file or pasted text, as dyno software exports it: a header row naming an
 // rpm, a power and a torque column in any order and any case ("RPM,HP,TQ", "Engine Speed;Power
@@ -7,11 +9,12 @@ import { convert, parseUnit, type PowerUnit, type TorqueUnit } from '../calc/uni
 // and followed by a row of units; commas, semicolons or tabs between cells; decimal points or
 // decimal commas. Other columns (boost, air-fuel ratio, road speed) are passed over.
 
-export type DynoPoint = { rpm: number; power: number; torque: number };
+export type DynoPoint = CurvePoint;
 type Column = 'rpm' | 'power' | 'torque';
 export type DynoCsvColumns = Record<Column, { index: number; name: string }>;
 export type DynoCsvResult =
-  | { ok: true; points: DynoPoint[]; units: { power: PowerUnit | null; torque: TorqueUnit | null }; columns: DynoCsvColumns }
+  /** `lines[i]` is the file's line of `points[i]`, so a later check can still name it. */
+  | { ok: true; points: DynoPoint[]; lines: number[]; units: { power: PowerUnit | null; torque: TorqueUnit | null }; columns: DynoCsvColumns }
   | { ok: false; message: string };
 
 /** How far down a file the header may sit (exports put the run's details above it). */
@@ -109,6 +112,7 @@ export function parseDynoCsv(input: string): DynoCsvResult {
 
   const width = lines[at]!.cells.length;
   const points: DynoPoint[] = [];
+  const pointLines: number[] = [];
   for (const { cells, line } of body) {
     // More cells than the header has: most often decimal commas in a file split by commas.
     if (cells.length > width && cells.slice(width).some((c) => c.trim())) return { ok: false, message: `Line ${line} has more cells than the header. Decimal commas need semicolons or tabs between the cells.` };
@@ -120,24 +124,58 @@ export function parseDynoCsv(input: string): DynoCsvResult {
       point[column] = value;
     }
     points.push(point);
+    pointLines.push(line);
   }
-  return { ok: true, points, units, columns };
+  return { ok: true, points, lines: pointLines, units, columns };
 }
 
 const round = (n: number, decimals: number) => Math.round(n * 10 ** decimals) / 10 ** decimals;
 
+type RunUnits = { powerUnit: PowerUnit; torqueUnit: TorqueUnit };
+
 /**
- * The curve in the run's own units: a column whose header names another unit ("Power (kW)" for a
- * run in hp) is converted; a header with no unit ("TQ") is read in the run's unit.
+ * A point outside what a run may hold (`DYNO_POINT_LIMITS`), said as the other cell errors are: the
+ * line, the cell as written and its column; a converted value also says what it came to.
  */
-export function dynoCurveFromCsv(text: string, runUnits: { powerUnit: PowerUnit; torqueUnit: TorqueUnit }): DynoCsvResult {
+function outOfRange(point: DynoPoint, read: DynoPoint, line: number, columns: DynoCsvColumns, runUnits: RunUnits): string | null {
+  for (const column of ['rpm', 'power', 'torque'] as const) {
+    const { min, max } = DYNO_POINT_LIMITS[column];
+    const value = point[column];
+    if (value >= min && value <= max) continue;
+    const unit = column === 'rpm' ? 'rpm' : UNIT_LABELS[column === 'power' ? runUnits.powerUnit : runUnits.torqueUnit];
+    const cell = `Line ${line}: ${read[column]} in the ${columns[column].name} column`;
+    if (value < 0) return `${cell} is below 0: ${column === 'rpm' ? 'rpm' : column} can’t be negative.`;
+    const limit = value < min ? `at least ${formatNumber(min)} ${unit}` : `at most ${formatNumber(max)} ${unit}`;
+    return value === read[column] ? `${cell} must be ${limit}.` : `${cell} is ${formatNumber(value)} ${unit}; it must be ${limit}.`;
+  }
+  return null;
+}
+
+/**
+ * The curve in the run's own units, checked against what a run may hold and sorted by rpm (some
+ * exports list a run-down from the top): a column whose header names another unit ("Power (kW)" for
+ * a run in hp) is converted; a header with no unit ("TQ") is read in the run's unit.
+ */
+export function dynoCurveFromCsv(text: string, runUnits: RunUnits): DynoCsvResult {
   const parsed = parseDynoCsv(text);
   if (!parsed.ok) return parsed;
   const { power, torque } = parsed.units;
-  const points = parsed.points.map((p) => ({
-    rpm: p.rpm,
-    power: power && power !== runUnits.powerUnit ? round(convert('power', p.power, power, runUnits.powerUnit), 2) : p.power,
-    torque: torque && torque !== runUnits.torqueUnit ? round(convert('torque', p.torque, torque, runUnits.torqueUnit), 2) : p.torque,
-  }));
-  return { ...parsed, points };
+  const rows = parsed.points.map((read, i) => {
+    const point = {
+      rpm: read.rpm,
+      power: power && power !== runUnits.powerUnit ? round(convert('power', read.power, power, runUnits.powerUnit), 2) : read.power,
+      torque: torque && torque !== runUnits.torqueUnit ? round(convert('torque', read.torque, torque, runUnits.torqueUnit), 2) : read.torque,
+    };
+    return { point, read, line: parsed.lines[i]! };
+  });
+  for (const { point, read, line } of rows) {
+    const problem = outOfRange(point, read, line, parsed.columns, runUnits);
+    if (problem) return { ok: false, message: problem };
+  }
+  rows.sort((a, b) => a.point.rpm - b.point.rpm || a.line - b.line);
+  for (let i = 1; i < rows.length; i++) {
+    const [before, after] = [rows[i - 1]!, rows[i]!];
+    if (before.point.rpm === after.point.rpm) return { ok: false, message: `Lines ${before.line} and ${after.line} both give ${formatNumber(after.point.rpm)} rpm: keep one row for each rpm.` };
+  }
+  return { ...parsed, points: rows.map((r) => r.point), lines: rows.map((r) => r.line) };
 }

@@ -197,7 +197,7 @@ describe('leaving the build editor never drops an edit', () => {
     await page.getByRole('button', { name: 'Add a dyno run' }).click();
     const run = page.getByRole('form', { name: 'Add a dyno run' });
     await run.getByLabel('Facility').fill('The rolling road behind the grain store');
-    await run.getByLabel('Peak power').fill('312');
+    await run.getByLabel('Peak power', { exact: true }).fill('312');
     await page.getByRole('button', { name: 'Add a weigh-in' }).click();
     const weighIn = page.getByRole('form', { name: 'Add a weigh-in' });
     await weighIn.getByLabel('LF · Left front').fill('402');

@@ -109,10 +109,10 @@ describe('the build editor in the browser', () => {
     await dyno.getByRole('button', { name: 'Add a dyno run' }).click();
     const run = page.getByRole('form', { name: 'Add a dyno run' });
     await run.getByLabel('Facility').fill('Valley rolling road');
-    await run.getByLabel('Peak power').fill('342');
-    await run.getByLabel('at rpm').nth(0).fill('5500');
-    await run.getByLabel('Peak torque').fill('369');
-    await run.getByLabel('at rpm').nth(1).fill('4000');
+    await run.getByLabel('Peak power', { exact: true }).fill('342');
+    await run.getByLabel('Rpm at peak power', { exact: true }).fill('5500');
+    await run.getByLabel('Peak torque', { exact: true }).fill('369');
+    await run.getByLabel('Rpm at peak torque', { exact: true }).fill('4000');
     await run.getByLabel('Curve as CSV').fill('rpm;power\n3000;200');
     await expect.poll(() => run.getByText(/no torque column/).count()).toBe(1);
     await run.getByLabel('Curve as CSV').fill(DYNO_CSV);

@@ -35,4 +35,31 @@ describe('dyno exports through the API', () => {
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({ curveCsv: 'Line 3: "--" in the HP column is not a number.' });
   });
+
+  it('refuses a negative or out-of-range cell with its line and column, as the form’s preview does', async () => {
+    const { client, id } = await ownerWithBuild();
+    const negative = await client.post(`/api/builds/${id}/dyno-runs`, { ...run, curveCsv: 'RPM,HP,TQ\n3000,-150,262\n4000,220,289' });
+    expect(negative.status).toBe(400);
+    expect(negative.body.error.fields).toEqual({ curveCsv: 'Line 2: -150 in the HP column is below 0: power can’t be negative.' });
+    const tooHigh = await client.post(`/api/builds/${id}/dyno-runs`, { ...run, curveCsv: 'RPM,HP,TQ\n3000,150,262\n40000,220,289' });
+    expect(tooHigh.body.error.fields).toEqual({ curveCsv: 'Line 3: 40000 in the RPM column must be at most 25,000 rpm.' });
+  });
+
+  it('saves rows given in falling rpm as a rising curve, and reads the peaks left out from it', async () => {
+    const { client, id } = await ownerWithBuild();
+    const { peakPower: _p, peakPowerRpm: _pr, peakTorque: _t, peakTorqueRpm: _tr, ...noPeaks } = run;
+    const res = await client.post(`/api/builds/${id}/dyno-runs`, { ...noPeaks, curveCsv: 'RPM,HP,TQ\n6000,338.1,296\n5500,342.4,327\n4000,281.3,369.4' });
+    expect(res.status).toBe(201);
+    const saved = res.body.build.dynoRuns[0];
+    expect(saved.curve.map((p: { rpm: number }) => p.rpm)).toEqual([4000, 5500, 6000]);
+    expect(saved).toMatchObject({ peakPower: 342.4, peakPowerRpm: 5500, peakTorque: 369.4, peakTorqueRpm: 4000 });
+  });
+
+  it('asks for the peaks by name when no curve is given', async () => {
+    const { client, id } = await ownerWithBuild();
+    const { peakPower: _p, peakTorqueRpm: _tr, ...partial } = run;
+    const res = await client.post(`/api/builds/${id}/dyno-runs`, partial);
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toEqual({ peakPower: 'Enter the peak power.', peakTorqueRpm: 'Enter the rpm at peak torque.' });
+  });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { dynoCurveFromCsv, parseDynoCsv, readDecimal } from '@shared/schemas/dyno-csv';
 import { DynoRunCreateSchema } from '@shared/schemas/build';
+import { curvePeaks } from '@shared/calc/dyno';
 
 // Exports are invented here in the shapes dyno software writes: a header in its own words, perhaps
 // lines about the run above it and a units row under it, commas or semicolons, decimal commas.
@@ -86,5 +87,56 @@ describe('reading a dyno curve from CSV', () => {
     const refused = DynoRunCreateSchema.safeParse({ ...run, curveCsv: 'RPM,HP\n4000,281' });
     expect(refused.success).toBe(false);
     expect(refused.error!.issues).toEqual([expect.objectContaining({ path: ['curveCsv'], message: expect.stringContaining('no torque column') })]);
+  });
+
+  it('refuses at once a negative or out-of-range cell, naming its line and column, as saving would', () => {
+    const units = { powerUnit: 'hp', torqueUnit: 'lbft' } as const;
+    expect(dynoCurveFromCsv('RPM,HP,TQ\n3000,-150,262\n4000,220,289', units)).toEqual({ ok: false, message: 'Line 2: -150 in the HP column is below 0: power can’t be negative.' });
+    expect(dynoCurveFromCsv('RPM,HP,TQ\n3000,150,262\n4000,220,-1', units)).toEqual({ ok: false, message: 'Line 3: -1 in the TQ column is below 0: torque can’t be negative.' });
+    expect(dynoCurveFromCsv('RPM,HP,TQ\n200,150,262', units)).toEqual({ ok: false, message: 'Line 2: 200 in the RPM column must be at least 300 rpm.' });
+    expect(dynoCurveFromCsv('RPM,HP,TQ\n4000,5001,262', units)).toEqual({ ok: false, message: 'Line 2: 5001 in the HP column must be at most 5,000 hp.' });
+    // 4000 kW = 5364.1 hp (1 hp = 745.69987 W; NIST SP 811): within the kW the file gives, over what a run in hp holds.
+    expect(dynoCurveFromCsv('Run 1\nRPM;Power (kW);Torque (Nm)\n4000;4000;400', units)).toEqual({ ok: false, message: 'Line 3: 4000 in the Power (kW) column is 5,364 hp; it must be at most 5,000 hp.' });
+  });
+
+  it('sorts rows given in falling rpm and refuses two rows at one rpm, naming both lines', () => {
+    const r = dynoCurveFromCsv('RPM,HP,TQ\n6000,338,296\n5000,334,351\n4000,281,369', { powerUnit: 'hp', torqueUnit: 'lbft' });
+    expect(r).toMatchObject({ ok: true, points: [{ rpm: 4000 }, { rpm: 5000 }, { rpm: 6000 }], lines: [4, 3, 2] });
+    expect(dynoCurveFromCsv('RPM,HP,TQ\n4000,281,369\n5000,334,351\n4000,282,368', { powerUnit: 'hp', torqueUnit: 'lbft' })).toEqual({ ok: false, message: 'Lines 2 and 4 both give 4,000 rpm: keep one row for each rpm.' });
+  });
+
+  it('saves the same refusals the preview shows, on the pasted field', () => {
+    const run = { date: '2026-05-01', standard: 'SAE J1349', measuredAt: 'wheel', powerUnit: 'hp', torqueUnit: 'lbft' } as const;
+    const refused = DynoRunCreateSchema.safeParse({ ...run, curveCsv: 'RPM,HP,TQ\n3000,-150,262\n4000,220,289' });
+    expect(refused.error!.issues).toEqual([expect.objectContaining({ path: ['curveCsv'], message: 'Line 2: -150 in the HP column is below 0: power can’t be negative.' })]);
+    const saved = DynoRunCreateSchema.parse({ ...run, curveCsv: 'RPM,HP,TQ\n6000,338.1,296\n5500,342.4,327\n4000,281.3,369.4' });
+    expect(saved.curve.map((p) => p.rpm)).toEqual([4000, 5500, 6000]);
+  });
+});
+
+describe('the peaks of a dyno run', () => {
+  const run = { date: '2026-05-01', standard: 'SAE J1349', measuredAt: 'wheel', powerUnit: 'hp', torqueUnit: 'lbft' } as const;
+
+  it('reads the highest power and torque and their rpm from the curve', () => {
+    expect(curvePeaks([{ rpm: 4000, power: 281.3, torque: 369.4 }, { rpm: 5500, power: 342.4, torque: 327 }, { rpm: 6000, power: 338.1, torque: 296 }])).toEqual({ peakPower: 342.4, peakPowerRpm: 5500, peakTorque: 369.4, peakTorqueRpm: 4000 });
+    expect(curvePeaks([])).toBeNull();
+  });
+
+  it('fills the peaks left out from the curve, pasted or typed, and keeps the ones given', () => {
+    const pasted = DynoRunCreateSchema.parse({ ...run, curveCsv: 'RPM,HP,TQ\n4000,281.3,369.4\n5500,342.4,327\n6000,338.1,296' });
+    expect(pasted).toMatchObject({ peakPower: 342.4, peakPowerRpm: 5500, peakTorque: 369.4, peakTorqueRpm: 4000 });
+    const typed = DynoRunCreateSchema.parse({ ...run, peakPower: 345, curve: [{ rpm: 4000, power: 281, torque: 369 }, { rpm: 5500, power: 342, torque: 327 }] });
+    expect(typed).toMatchObject({ peakPower: 345, peakPowerRpm: 5500, peakTorque: 369, peakTorqueRpm: 4000 });
+  });
+
+  it('asks for each peak by its label when there is no curve to read them from', () => {
+    const refused = DynoRunCreateSchema.safeParse({ ...run, peakTorque: 300 });
+    expect(refused.error!.issues.map((i) => [i.path.join('.'), i.message])).toEqual([
+      ['peakPower', 'Enter the peak power.'],
+      ['peakPowerRpm', 'Enter the rpm at peak power.'],
+      ['peakTorqueRpm', 'Enter the rpm at peak torque.'],
+    ]);
+    const notWhole = DynoRunCreateSchema.safeParse({ ...run, peakPower: 300, peakPowerRpm: 5500.5, peakTorque: 300, peakTorqueRpm: 4000 });
+    expect(notWhole.error!.issues).toEqual([expect.objectContaining({ path: ['peakPowerRpm'], message: 'Rpm at peak power must be a whole number.' })]);
   });
 });

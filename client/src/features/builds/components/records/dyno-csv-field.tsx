@@ -2,7 +2,8 @@ import type { ChangeEvent } from 'react';
 import type { UseFormRegisterReturn } from 'react-hook-form';
 import type { DynoRun } from '@shared/schemas/build';
 import type { DynoCsvResult } from '@shared/schemas/dyno-csv';
-import { formatNumber, UNIT_LABELS, type Unit } from '@shared/calc';
+import { formatNumber, shownDecimals, UNIT_LABELS, type Unit } from '@shared/calc';
+import { curvePeaks, DYNO_PRECISION } from '@shared/calc/dyno';
 import { TextAreaField } from '@client/components/ui/text-area-field';
 import { DynoChart } from './dyno-chart';
 
@@ -44,32 +45,24 @@ export function DynoCsvField({ field, parsed, serverError, units, onFile }: { fi
 
 function CurvePreview({ parsed, units }: { parsed: Extract<DynoCsvResult, { ok: true }>; units: RunUnits }) {
   const { points, columns } = parsed;
-  const first = points[0]!;
-  const last = points[points.length - 1]!;
+  // The curve comes sorted by rpm and checked against the run's limits by the same reader saving uses.
+  const low = points[0]!.rpm;
+  const high = points[points.length - 1]!.rpm;
+  const peaks = curvePeaks(points)!;
   const read = (column: 'power' | 'torque', unit: Unit | null, runUnit: Unit) =>
     unit && unit !== runUnit ? `${columns[column].name}, converted to ${UNIT_LABELS[runUnit]}` : `${columns[column].name} in ${UNIT_LABELS[runUnit]}`;
-  // The preview is drawn by the same chart as saved runs, from a run that exists only here.
-  // The chart also names each run's peaks, so the preview run carries them too.
-  const top = (key: 'power' | 'torque') => points.reduce((best, p) => (p[key] > best[key] ? p : best), first);
-  const run = {
-    id: 0,
-    date: 'Preview',
-    facility: '',
-    measuredAt: 'wheel',
-    powerUnit: units.powerUnit,
-    torqueUnit: units.torqueUnit,
-    peakPower: top('power').power,
-    peakPowerRpm: top('power').rpm,
-    peakTorque: top('torque').torque,
-    peakTorqueRpm: top('torque').rpm,
-    curve: points,
-  } as unknown as DynoRun;
+  // As many decimals as the file gives; a converted column to the trade's whole units.
+  const power = formatNumber(peaks.peakPower, { decimals: shownDecimals('power', peaks.peakPower, parsed.units.power ?? units.powerUnit, units.powerUnit, DYNO_PRECISION) });
+  const torque = formatNumber(peaks.peakTorque, { decimals: shownDecimals('torque', peaks.peakTorque, parsed.units.torque ?? units.torqueUnit, units.torqueUnit, DYNO_PRECISION) });
+  // The preview is drawn by the same chart as saved runs, from a run that exists only here; the
+  // chart names each run's peaks, so the preview run carries them too.
+  const run = { id: 0, date: 'Preview', facility: '', measuredAt: 'wheel', powerUnit: units.powerUnit, torqueUnit: units.torqueUnit, ...peaks, curve: points } as unknown as DynoRun;
   const system = units.powerUnit === 'hp' ? 'imperial' : 'metric';
   return (
     <div className="flex flex-col gap-1 border border-rule bg-white p-2" data-testid="csv-preview">
       <p className="text-sm text-ok">
-        Reads as {points.length} points, {formatNumber(first.rpm)}–{formatNumber(last.rpm)} rpm; highest power {formatNumber(Math.max(...points.map((p) => p.power)), { decimals: 1 })} {UNIT_LABELS[units.powerUnit]}, highest torque{' '}
-        {formatNumber(Math.max(...points.map((p) => p.torque)), { decimals: 1 })} {UNIT_LABELS[units.torqueUnit]}.
+        Reads as {points.length} {points.length === 1 ? 'point' : 'points'}, {low === high ? formatNumber(low) : `${formatNumber(low)}–${formatNumber(high)}`} rpm; highest power {power} {UNIT_LABELS[units.powerUnit]} at {formatNumber(peaks.peakPowerRpm)} rpm, highest torque {torque}{' '}
+        {UNIT_LABELS[units.torqueUnit]} at {formatNumber(peaks.peakTorqueRpm)} rpm.
       </p>
       <p className="text-xs text-graphite">
         Columns: {columns.rpm.name}; {read('power', parsed.units.power, units.powerUnit)}; {read('torque', parsed.units.torque, units.torqueUnit)}. Nothing is saved until you add the run.

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import type { DynoRun, OwnerBuild } from '@shared/schemas/build';
-import { convert, formatNumber, type UnitSystem } from '@shared/calc';
+import { convert, formatNumber, shownDecimals, type UnitSystem } from '@shared/calc';
+import { DYNO_PRECISION } from '@shared/calc/dyno';
 import { Button } from '@client/components/ui/button';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { Notice } from '@client/components/ui/notice';
@@ -12,16 +13,18 @@ import { DynoChart } from './dyno-chart';
 import { DynoRunForm } from './dyno-run-form';
 
 const UNIT = { hp: 'hp', PS: 'PS', kW: 'kW', lbft: 'lb·ft', Nm: 'N·m' } as const;
-/** A run's peaks in the owner's unit system, and as recorded when that differs. */
+type PowerUnit = DynoRun['powerUnit'];
+type TorqueUnit = DynoRun['torqueUnit'];
+/** A run's peaks in the owner's unit system, and as recorded when that differs: as many decimals as entered, converted ones to the trade's whole units. */
 function peaks(run: DynoRun, system: UnitSystem): { shown: string; recorded?: string } {
   const powerUnit = system === 'metric' ? 'kW' : 'hp';
   const torqueUnit = system === 'metric' ? 'Nm' : 'lbft';
-  const line = (power: number, pUnit: keyof typeof UNIT, torque: number, tUnit: keyof typeof UNIT) =>
-    `${formatNumber(power, { decimals: 1 })} ${UNIT[pUnit]} at ${formatNumber(run.peakPowerRpm)} rpm · ${formatNumber(torque, { decimals: 1 })} ${UNIT[tUnit]} at ${formatNumber(run.peakTorqueRpm)} rpm`;
-  const recorded = line(run.peakPower, run.powerUnit, run.peakTorque, run.torqueUnit);
+  const power = (unit: PowerUnit) => formatNumber(convert('power', run.peakPower, run.powerUnit, unit), { decimals: shownDecimals('power', run.peakPower, run.powerUnit, unit, DYNO_PRECISION) });
+  const torque = (unit: TorqueUnit) => formatNumber(convert('torque', run.peakTorque, run.torqueUnit, unit), { decimals: shownDecimals('torque', run.peakTorque, run.torqueUnit, unit, DYNO_PRECISION) });
+  const line = (pUnit: PowerUnit, tUnit: TorqueUnit) => `${power(pUnit)} ${UNIT[pUnit]} at ${formatNumber(run.peakPowerRpm)} rpm · ${torque(tUnit)} ${UNIT[tUnit]} at ${formatNumber(run.peakTorqueRpm)} rpm`;
+  const recorded = line(run.powerUnit, run.torqueUnit);
   if (run.powerUnit === powerUnit && run.torqueUnit === torqueUnit) return { shown: recorded };
-  const shown = line(convert('power', run.peakPower, run.powerUnit, powerUnit), powerUnit, convert('torque', run.peakTorque, run.torqueUnit, torqueUnit), torqueUnit);
-  return { shown, recorded };
+  return { shown: line(powerUnit, torqueUnit), recorded };
 }
 
 const newestFirst = (a: DynoRun, b: DynoRun) => (a.date < b.date ? 1 : a.date > b.date ? -1 : b.id - a.id);

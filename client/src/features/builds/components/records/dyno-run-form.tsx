@@ -1,6 +1,7 @@
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { useFieldArray, useForm, useWatch } from 'react-hook-form';
-import { CORRECTION_STANDARDS, DynoRunCreateSchema, type DynoRunFormInput, type OwnerBuild } from '@shared/schemas/build';
+import { CORRECTION_STANDARDS, DYNO_PEAK_FIELDS, DynoPointSchema, DynoRunCreateSchema, type DynoRunFormInput, type OwnerBuild } from '@shared/schemas/build';
+import { curvePeaks, type CurvePeaks, type CurvePoint } from '@shared/calc/dyno';
 import { dynoCurveFromCsv } from '@shared/schemas/dyno-csv';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
@@ -39,10 +40,40 @@ function firstMessage(error: unknown): string | undefined {
   return undefined;
 }
 
+/** A typed curve's first problem, with the row it is on ("Row 2: Curve power must be at least 0."). */
+function curveMessage(error: unknown): string | undefined {
+  const row = Array.isArray(error) ? error.findIndex(Boolean) : -1;
+  const message = firstMessage(row >= 0 ? (error as unknown[])[row] : error);
+  return message && row >= 0 ? `Row ${row + 1}: ${message}` : message;
+}
+
+const PEAK_NAMES = Object.keys(DYNO_PEAK_FIELDS) as (keyof CurvePeaks)[];
+
+/**
+ * Puts the curve's peaks in the peak boxes that are empty or still hold the curve's earlier peaks, so
+ * an owner who gives a curve never types them, and a figure the owner typed is never overwritten.
+ */
+function useFillPeaks(peaks: CurvePeaks | null, getValues: (name: keyof CurvePeaks) => unknown, setValue: (name: keyof CurvePeaks, value: number, options: { shouldDirty: boolean; shouldValidate: boolean }) => void) {
+  const filled = useRef<Partial<CurvePeaks>>({});
+  const key = peaks ? PEAK_NAMES.map((name) => peaks[name]).join(' ') : '';
+  useEffect(() => {
+    if (!peaks) return;
+    for (const name of PEAK_NAMES) {
+      const now = getValues(name);
+      const untouched = now === undefined || now === '' || Number.isNaN(now) || now === filled.current[name];
+      if (!untouched || now === peaks[name]) continue;
+      filled.current[name] = peaks[name];
+      setValue(name, peaks[name], { shouldDirty: true, shouldValidate: false });
+    }
+    // The key stands for the peaks: a new curve with the same peaks fills nothing new.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [key]);
+}
+
 export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () => void }) {
   const add = useAddDynoRun(build.id);
   const [formError, setFormError] = useState('');
-  const { register, control, handleSubmit, setError, setValue, formState: { errors, isDirty } } = useForm<Values>({ resolver: formResolver<Values>(DynoRunCreateSchema, clean), defaultValues: blank() });
+  const { register, control, handleSubmit, setError, setValue, getValues, formState: { errors, isDirty } } = useForm<Values>({ resolver: formResolver<Values>(DynoRunCreateSchema, clean), defaultValues: blank() });
   const { fields, append, remove } = useFieldArray({ control, name: 'curve' });
   useUnaddedRecord({ key: 'dyno:new', label: 'Dyno run', section: 'dyno', addLabel: 'Add the run', filled: isDirty });
   const mode = useWatch({ control, name: 'curveMode' });
@@ -51,6 +82,12 @@ export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () =
   const torqueUnit = useWatch({ control, name: 'torqueUnit' });
   // Parsed as the owner types or imports, with the same function the server saves with.
   const parsed = mode === 'csv' && csv?.trim() ? dynoCurveFromCsv(csv, { powerUnit, torqueUnit }) : null;
+  const rows = useWatch({ control, name: 'curve' });
+  const curve: CurvePoint[] = mode === 'csv' ? (parsed?.ok ? parsed.points : []) : (rows ?? []).flatMap((row) => DynoPointSchema.safeParse(row).data ?? []);
+  const fromCurve = curvePeaks(curve);
+  useFillPeaks(fromCurve, getValues, setValue);
+  const peakValues = useWatch({ control, name: PEAK_NAMES });
+  const filledFromCurve = fromCurve !== null && PEAK_NAMES.some((name, i) => peakValues[i] === fromCurve[name]);
   const onSubmit = handleSubmit((run) => {
     setFormError('');
     add.mutate(run as DynoRunFormInput, {
@@ -58,7 +95,7 @@ export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () =
       onError: (err) => setFormError(placeServerErrors(err, setError, [...Object.keys(blank()), 'peakPower', 'peakPowerRpm', 'peakTorque', 'peakTorqueRpm', 'note', 'sheetPhotoId'])),
     });
   });
-  const num = (name: 'peakPower' | 'peakPowerRpm' | 'peakTorque' | 'peakTorqueRpm', label: string) => <TextField label={label} inputMode="decimal" autoComplete="off" {...register(name, asNumber as never)} error={errorAt(errors, name)} />;
+  const num = (name: keyof CurvePeaks) => <TextField key={name} label={DYNO_PEAK_FIELDS[name].label} inputMode="decimal" autoComplete="off" {...register(name, asNumber as never)} error={errorAt(errors, name)} />;
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Add a dyno run" className="flex flex-col gap-4 border border-ink p-3">
       <h3 className="font-display text-base uppercase tracking-wide">Add a dyno run</h3>
@@ -70,10 +107,6 @@ export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () =
         <SelectField label="Measured at" options={[{ value: 'wheel', label: 'The wheels (chassis dyno)' }, { value: 'flywheel', label: 'The flywheel (engine dyno)' }]} {...register('measuredAt')} error={errorAt(errors, 'measuredAt')} />
         <SelectField label="Power unit" options={[{ value: 'hp', label: 'hp' }, { value: 'PS', label: 'PS' }, { value: 'kW', label: 'kW' }]} {...register('powerUnit')} />
         <SelectField label="Torque unit" options={[{ value: 'lbft', label: 'lb·ft' }, { value: 'Nm', label: 'N·m' }]} {...register('torqueUnit')} />
-        {num('peakPower', 'Peak power')}
-        {num('peakPowerRpm', 'at rpm')}
-        {num('peakTorque', 'Peak torque')}
-        {num('peakTorqueRpm', 'at rpm')}
       </div>
       <fieldset className="flex flex-col gap-2">
         <legend className="mb-1 text-sm font-semibold">The curve</legend>
@@ -121,12 +154,19 @@ export function DynoRunForm({ build, onDone }: { build: OwnerBuild; onDone: () =
                 ))}
               </tbody>
             </table>
-            {errors.curve ? <p role="alert" className="text-sm text-danger">{firstMessage(errors.curve)}</p> : null}
+            {errors.curve ? <p role="alert" className="text-sm text-danger">{curveMessage(errors.curve)}</p> : null}
             <Button type="button" variant="secondary" className="self-start" onClick={() => append({ rpm: undefined, power: undefined, torque: undefined } as never)}>
               Add a row
             </Button>
           </>
         )}
+      </fieldset>
+      <fieldset className="flex flex-col gap-2">
+        <legend className="mb-1 text-sm font-semibold">The peaks</legend>
+        <p className="text-sm text-graphite" data-testid="peaks-hint">
+          {filledFromCurve ? 'Read from the curve. Change them if the printed sheet says otherwise.' : 'Give the curve above and they are read from it, or type them from the printed sheet.'}
+        </p>
+        <div className="grid gap-4 sm:grid-cols-2">{PEAK_NAMES.map(num)}</div>
       </fieldset>
       <TextField label="Note" {...register('note')} error={errorAt(errors, 'note')} />
       {build.photos.length ? (
