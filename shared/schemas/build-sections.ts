@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { tryParseTyreCode } from '../calc/tyres';
-import { boundedNumber, figureSchema, shortText } from './figure';
+import { boundedNumber, figureSchema, plainMm, shortText, type MmRange } from './figure';
 import { text } from './text';
 
 /** Who made a part or a section: the owner, a shop or person, a donor vehicle, or bought new. */
@@ -87,14 +87,36 @@ export const TubeSchema = z
     if (t.shape === 'rectangular' && !t.height) ctx.addIssue({ code: 'custom', path: ['height'], message: 'A rectangular tube needs a height.' });
   });
 
-const LinkPointSchema = z.object({ x: boundedNumber('Link point x', -3000, 3000), y: boundedNumber('Link point y', 0, 1500) });
-/** Rear four-link side view, in mm: x forward from the axle centre, y up from the ground. */
+/** The rear four-link's pivots as the owner reads them off the car, side view. */
+export const FOUR_LINK_POINTS = {
+  upperFront: 'Upper link, front pivot',
+  upperRear: 'Upper link, axle pivot',
+  lowerFront: 'Lower link, front pivot',
+  lowerRear: 'Lower link, axle pivot',
+} as const;
+export type FourLinkPoint = keyof typeof FOUR_LINK_POINTS;
+
+/** Limits of the plain-millimetre lengths, for the schema and for the editor's messages in inches. */
+export const MM_RANGES = {
+  linkX: (point: FourLinkPoint): MmRange => ({ label: `${FOUR_LINK_POINTS[point]}: x`, min: -3000, max: 3000 }),
+  linkY: (point: FourLinkPoint): MmRange => ({ label: `${FOUR_LINK_POINTS[point]}: y`, min: 0, max: 1500 }),
+  cgHeight: { label: 'Centre of gravity height', min: 100, max: 1500 } satisfies MmRange,
+  bellCrankSpringArm: { label: 'Bell-crank spring arm', min: 10, max: 500 } satisfies MmRange,
+  bellCrankPushrodArm: { label: 'Bell-crank pushrod arm', min: 10, max: 500 } satisfies MmRange,
+};
+
+const linkPoint = (point: FourLinkPoint) => z.object({ x: plainMm(MM_RANGES.linkX(point)).optional(), y: plainMm(MM_RANGES.linkY(point)).optional() });
+/**
+ * Rear four-link side view, in mm: x forward from the axle centre, y up from the ground. Every value
+ * is optional, so a four-link filled in over several evenings is stored as it stands and never holds
+ * back the rest of the chassis panel; anti-squat is worked out once all of it is there.
+ */
 export const FourLinkSchema = z.object({
-  upperFront: LinkPointSchema,
-  upperRear: LinkPointSchema,
-  lowerFront: LinkPointSchema,
-  lowerRear: LinkPointSchema,
-  cgHeightMm: boundedNumber('Centre of gravity height', 100, 1500),
+  upperFront: linkPoint('upperFront').optional(),
+  upperRear: linkPoint('upperRear').optional(),
+  lowerFront: linkPoint('lowerFront').optional(),
+  lowerRear: linkPoint('lowerRear').optional(),
+  cgHeightMm: plainMm(MM_RANGES.cgHeight).optional(),
 });
 
 export const SuspensionEndSchema = z.object({
@@ -104,8 +126,8 @@ export const SuspensionEndSchema = z.object({
   /** Spring travel / wheel travel (see shared/calc/suspension.ts). */
   motionRatio: boundedNumber('Motion ratio', 0.1, 2).optional(),
   springAngleDeg: boundedNumber('Spring angle', 0, 60).optional(),
-  bellCrankSpringArmMm: boundedNumber('Bell-crank spring arm', 10, 500).optional(),
-  bellCrankPushrodArmMm: boundedNumber('Bell-crank pushrod arm', 10, 500).optional(),
+  bellCrankSpringArmMm: plainMm(MM_RANGES.bellCrankSpringArm).optional(),
+  bellCrankPushrodArmMm: plainMm(MM_RANGES.bellCrankPushrodArm).optional(),
   cornerSprungMass: figureSchema('mass', { label: 'Corner sprung mass', min: 20, max: 2000, unit: 'kg' }).optional(),
   dampers: shortText('Dampers', 200).optional(),
   antiRollBar: shortText('Anti-roll bar', 200).optional(),

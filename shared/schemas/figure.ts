@@ -56,6 +56,24 @@ export type FigureInput = {
   evidencePhotoId?: number;
 };
 
+/** A length the sheet keeps as plain millimetres (four-link pivots, centre of gravity height, bell-crank arms). */
+export type MmRange = { label: string; min: number; max: number };
+
+/** "… must be between 3.94 and 59.06 in (100 to 1500 mm).": led by the unit the person typed in. */
+export function mmRangeMessage(range: MmRange, typedUnit: 'mm' | 'in' = 'mm'): string {
+  if (typedUnit === 'mm') return `${range.label} must be between ${range.min} and ${range.max} mm.`;
+  const inches = (v: number) => formatNumber(convert('length', v, 'mm', 'in'), { decimals: 2 });
+  return `${range.label} must be between ${inches(range.min)} and ${inches(range.max)}\u00a0in (${range.min} to ${range.max} mm).`;
+}
+
+/** A plain-millimetre length with its limits; the message gives the unit. */
+export const plainMm = (range: MmRange) =>
+  z
+    .number({ error: `${range.label} must be a number.` })
+    .finite({ error: `${range.label} must be a number.` })
+    .min(range.min, { error: mmRangeMessage(range) })
+    .max(range.max, { error: mmRangeMessage(range) });
+
 /** A plain number with limits (ratios, counts, rpm), with an error that names the rule. */
 export const boundedNumber = (label: string, min: number, max: number, opts: { int?: boolean } = {}) => {
   const base = z.number({ error: `${label} must be a number.` }).finite({ error: `${label} must be a finite number.` });

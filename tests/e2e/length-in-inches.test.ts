@@ -39,4 +39,30 @@ describe('lengths the sheet keeps in millimetres', () => {
     await expect.poll(() => cg.inputValue()).toBe('457.2');
     await page.close();
   });
+  it('stores a four-link filled in part way, so it never holds back the rest of the chassis panel, and tells a range in the unit typed', async () => {
+    const { user, email, password } = await createUser({ name: 'Dace Morrow' });
+    const build = await createBuild(user.id, { title: 'The Flint Roadster' });
+    const page = await env.browser.newPage({ viewport: { width: 1366, height: 900 }, locale: 'en-US' });
+    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+    const chassis = page.getByRole('form', { name: 'Chassis and suspension' });
+    const stored = async () => {
+      const res = await page.request.get(`${env.baseUrl}/api/builds/${build.id}`);
+      const body = (await res.json()) as { build: { sections: { chassis?: { trackFront?: { value: number }; rear?: { fourLink?: { upperFront?: { x?: number; y?: number } } } } } } };
+      return body.build.sections.chassis;
+    };
+
+    // One pivot's x only, then another field of the panel: both are stored.
+    await chassis.getByLabel('Upper link, front pivot: x', { exact: true }).fill('22');
+    await chassis.getByLabel('Front track', { exact: true }).fill('59');
+    await expect.poll(async () => [(await stored())?.rear?.fourLink?.upperFront, (await stored())?.trackFront?.value]).toEqual([{ x: 558.8 }, 59]);
+    await expect.poll(() => chassis.getByRole('status').textContent()).toBe('Saved');
+
+    // Out of range in inches: the message leads with inches and names the box.
+    const cg = chassis.getByLabel('Centre of gravity height', { exact: true });
+    await cg.fill('9999');
+    await chassis.getByText('Centre of gravity height must be between 3.94 and 59.06\u00a0in (100 to 1500 mm).').waitFor();
+    await cg.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'length-in-inches-range-desktop.png') });
+    await page.close();
+  });
 });

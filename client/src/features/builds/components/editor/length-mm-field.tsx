@@ -1,6 +1,7 @@
 import { useId, useState } from 'react';
 import { Controller, type Control, type FieldValues, type Path } from 'react-hook-form';
 import { formatNumber } from '@shared/calc';
+import { mmRangeMessage, type MmRange } from '@shared/schemas/figure';
 import { useNumbers } from '../numbers/numbers-context';
 
 // Exact by definition: 1 in = 25.4 mm (NIST SP 811, appendix B).
@@ -11,14 +12,16 @@ const parse = (text: string) => (text.trim() === '' ? undefined : Number(text.tr
 /** Stored millimetres in the unit shown: inches to the thousandth, as a machinist would give them. */
 const inUnit = (mm: number, unit: LengthUnit) => (unit === 'mm' ? String(mm) : String(Math.round((mm / MM_PER_IN) * 1000) / 1000));
 
-type Props<T extends FieldValues> = { control: Control<T>; name: Path<T>; label: string };
+/** `range` is the shared limits: its label is the box's, and a value outside it is told in the unit typed. */
+type Props<T extends FieldValues> = { control: Control<T>; name: Path<T>; range: MmRange };
 
 /**
  * A length the sheet keeps in millimetres (four-link pivots, centre of gravity height, bell-crank
  * arms), typed in millimetres or inches: inches are converted as they are typed, and the millimetres
  * kept are said under the box.
  */
-export function LengthMmField<T extends FieldValues>({ control, name, label }: Props<T>) {
+export function LengthMmField<T extends FieldValues>({ control, name, range }: Props<T>) {
+  const { label } = range;
   const id = useId();
   const { system } = useNumbers();
   const [unit, setUnit] = useState<LengthUnit>(system === 'imperial' ? 'in' : 'mm');
@@ -37,7 +40,8 @@ export function LengthMmField<T extends FieldValues>({ control, name, label }: P
           const n = parse(nextText);
           field.onChange(n === undefined ? undefined : Number.isFinite(n) ? (nextUnit === 'in' ? n * MM_PER_IN : n) : Number.NaN);
         };
-        const error = fieldState.error?.message;
+        const outside = mm !== undefined && (mm < range.min || mm > range.max);
+        const error = fieldState.error ? (outside ? mmRangeMessage(range, unit) : fieldState.error.message) : undefined;
         return (
           <div className="flex min-w-0 flex-col gap-1">
             <label htmlFor={id} className="text-sm font-semibold">

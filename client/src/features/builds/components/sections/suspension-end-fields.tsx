@@ -1,5 +1,5 @@
 import type { Control, FieldErrors, UseFormRegister } from 'react-hook-form';
-import { SPRING_TYPES, SUSPENSION_TYPES, type ChassisSection } from '@shared/schemas/build-sections';
+import { FOUR_LINK_POINTS, MM_RANGES, SPRING_TYPES, SUSPENSION_TYPES, type ChassisSection, type FourLinkPoint } from '@shared/schemas/build-sections';
 import { SPRING_LABELS, SUSPENSION_LABELS } from '@shared/build-sheet/choice-labels';
 import { Choice, FigureField, NumberField, TextInput } from '../editor/fields';
 import { FieldGroup } from '../editor/section-form';
@@ -17,8 +17,8 @@ export function SuspensionEndFields({ end, register, errors, control }: Props) {
       <NumberField {...f} name={`${end}.motionRatio`} label="Motion ratio" hint="Spring travel ÷ wheel travel (with a bell-crank: the pushrod’s)." />
       <NumberField {...f} name={`${end}.springAngleDeg`} label="Spring angle (degrees from the line of wheel travel)" />
       <FigureField control={control} form="chassis" name={`${end}.cornerSprungMass`} label="Sprung mass on one corner" kind="mass" />
-      <LengthMmField control={control} name={`${end}.bellCrankSpringArmMm`} label="Bell-crank spring arm" />
-      <LengthMmField control={control} name={`${end}.bellCrankPushrodArmMm`} label="Bell-crank pushrod arm" />
+      <LengthMmField control={control} name={`${end}.bellCrankSpringArmMm`} range={MM_RANGES.bellCrankSpringArm} />
+      <LengthMmField control={control} name={`${end}.bellCrankPushrodArmMm`} range={MM_RANGES.bellCrankPushrodArm} />
       <TextInput {...f} name={`${end}.dampers`} label="Dampers" />
       <TextInput {...f} name={`${end}.antiRollBar`} label="Anti-roll bar" />
       <div className="sm:col-span-2">
@@ -28,25 +28,18 @@ export function SuspensionEndFields({ end, register, errors, control }: Props) {
   );
 }
 
-const POINTS = [
-  ['upperFront', 'Upper link, front pivot'],
-  ['upperRear', 'Upper link, axle pivot'],
-  ['lowerFront', 'Lower link, front pivot'],
-  ['lowerRear', 'Lower link, axle pivot'],
-] as const;
-
 /** Side-view pivot points of the rear four-link (kept in mm, typed in mm or inches): x forward from the axle centre, y up from the ground. */
 export function FourLinkFields({ control }: Omit<Props, 'end'>) {
   return (
     <FieldGroup title="Rear four-link (side view)">
       <p className="text-sm text-graphite sm:col-span-2">x: forward from the rear axle centre; y: up from the ground. For anti-squat, with the wheelbase above.</p>
-      {POINTS.map(([key, label]) => (
-        <div key={key} className="grid grid-cols-2 gap-2 sm:col-span-2">
-          <LengthMmField control={control} name={`rear.fourLink.${key}.x`} label={`${label}: x`} />
-          <LengthMmField control={control} name={`rear.fourLink.${key}.y`} label={`${label}: y`} />
+      {(Object.keys(FOUR_LINK_POINTS) as FourLinkPoint[]).map((point) => (
+        <div key={point} className="grid grid-cols-2 gap-2 sm:col-span-2">
+          <LengthMmField control={control} name={`rear.fourLink.${point}.x`} range={MM_RANGES.linkX(point)} />
+          <LengthMmField control={control} name={`rear.fourLink.${point}.y`} range={MM_RANGES.linkY(point)} />
         </div>
       ))}
-      <LengthMmField control={control} name="rear.fourLink.cgHeightMm" label="Centre of gravity height" />
+      <LengthMmField control={control} name="rear.fourLink.cgHeightMm" range={MM_RANGES.cgHeight} />
     </FieldGroup>
   );
 }

@@ -52,15 +52,21 @@ export function antiSquatNumbers({ sections, system }: NumbersInput): NumberGrou
   const wheelbase = read('length', sections.chassis?.wheelbase, 'mm');
   const rows: NumberRow[] = [];
   const notes: string[] = [];
-  const pts = link && [link.upperFront, link.upperRear, link.lowerFront, link.lowerRear];
-  const complete = pts?.every((p) => num(p?.x) !== undefined && num(p?.y) !== undefined) && num(link?.cgHeightMm) !== undefined;
-  if (link && complete && wheelbase !== undefined) {
+  // A pivot counts once both its x and y are in; the sheet may hold a four-link filled in part way.
+  const point = (p?: { x?: number; y?: number }) => {
+    const x = num(p?.x);
+    const y = num(p?.y);
+    return x !== undefined && y !== undefined ? { x, y } : undefined;
+  };
+  const [upperFront, upperRear, lowerFront, lowerRear] = [link?.upperFront, link?.upperRear, link?.lowerFront, link?.lowerRear].map(point);
+  const cgHeight = num(link?.cgHeightMm);
+  if (upperFront && upperRear && lowerFront && lowerRear && cgHeight !== undefined && wheelbase !== undefined) {
     const r = attempt(() =>
       fourLinkAntiSquat({
-        upperLink: { chassisEnd: link.upperFront, axleEnd: link.upperRear },
-        lowerLink: { chassisEnd: link.lowerFront, axleEnd: link.lowerRear },
+        upperLink: { chassisEnd: upperFront, axleEnd: upperRear },
+        lowerLink: { chassisEnd: lowerFront, axleEnd: lowerRear },
         wheelbase,
-        cgHeight: link.cgHeightMm,
+        cgHeight,
       }),
     );
     if (r.ok) {
