@@ -2,6 +2,7 @@
 // It never throws on what an owner types; unreadable figures become warnings of their own.
 import { displacement } from './engine';
 import { DEFAULT_DECIMALS, formatNumber, formatQuantity } from './format';
+import { enteredDecimals } from './precision';
 import { topSpeedAtRevLimit } from './gearing';
 import { powerToWeight } from './power';
 import {
@@ -55,7 +56,8 @@ function checkDisplacement(ctx: SpecWarningCollector, { engine }: SpecCheckInput
     'displacement_mismatch',
     'engine.displacement',
     `Bore × stroke × ${cylinders} cylinders gives ${show(computed)}, ` +
-      `but the sheet says ${show(stated)}.`,
+      // The owner's own figure as they typed it: no decimals added to it.
+      `but the sheet says ${formatQuantity({ value: engine.displacement.value, unit }, { decimals: enteredDecimals(engine.displacement.value) })}.`,
     `Displacement follows from bore, stroke and cylinder count. A gap of more than ${tolerance}% ` +
       'usually means a typo or a unit mix-up; badge figures are often rounded, so give the ' +
       'exact one or correct the bore and stroke.',

@@ -55,7 +55,8 @@ describe('specCheck', () => {
       field: 'engine.displacement',
     });
     expect(w?.message).toContain('4.94\u00a0L');
-    expect(w?.message).toContain('5.00\u00a0L');
+    // The owner's figure as typed ("5 L"), with no decimals it never had.
+    expect(w?.message).toContain('the sheet says 5\u00a0L.');
     expect(w?.why).toMatch(/bore, stroke/);
     // 4.9 L is 0.85% low: within 1%.
     input.engine!.displacement = stated(4.9, 'L');

@@ -43,7 +43,9 @@ export function powerNumbers({ sections, weight, weighIns, dynoRuns, system }: N
     if (est.ok) rows.push({ label: `At the flywheel (${lossText} loss)`, value: show('power', est.value.value, 'hp', system), other: show('power', est.value.value, 'hp', other(system)), estimate: true, ...firmness(e.wheelPower) });
   } else if (wheel !== undefined && fly !== undefined) {
     const loss = attempt(() => impliedDrivetrainLoss({ value: fly, unit: 'hp' }, { value: wheel, unit: 'hp' }));
-    if (loss.ok && Number.isFinite(loss.value)) rows.push({ label: 'Drivetrain loss the two figures imply', value: formatPercent(loss.value * 100), ...firmness(e.flywheelPower, e.wheelPower) });
+    // A negative loss is impossible (the wheels cannot make more than the engine): said, never shown as a figure.
+    if (loss.ok && Number.isFinite(loss.value) && loss.value < 0) notes.push('No drivetrain loss to show: the wheel power is above the flywheel power, so one of the two is wrong.');
+    else if (loss.ok && Number.isFinite(loss.value)) rows.push({ label: 'Drivetrain loss the two figures imply', value: formatPercent(loss.value * 100), ...firmness(e.flywheelPower, e.wheelPower) });
   }
   if (rows.some((r) => r.estimate)) notes.push(DRIVETRAIN_LOSS_NOTE + ' (common practice)');
   // Power to weight from the figures the build shows everywhere (the shared rule: measured first, dyno and weigh-ins included).
