@@ -19,7 +19,8 @@ const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
  */
 export async function requestPasswordReset(email: string, publicBaseUrl: string): Promise<void> {
   const user = await User.findOne({ where: { email } });
-  if (user) await mailResetLink(user, publicBaseUrl, 'owner');
+  // A turned-off account gets no link (it could not sign in with the new password); the answer is the same either way.
+  if (user && !user.disabledAt) await mailResetLink(user, publicBaseUrl, 'owner');
 }
 
 /**

@@ -44,6 +44,13 @@ describe('disabling an account (site admin)', () => {
     expect(again.body.error.message).toBe('This account is turned off. Ask the site admin.');
     expect((await request(testApp()).get(`/c/${build.code}`)).status).toBe(404);
     expect((await request(testApp()).get(`/api/public/builds/${build.code}`)).status).toBe(404);
+    // Asking for a reset answers as always, but makes no link for a turned-off account.
+    expect((await (await apiClient()).post('/api/password-resets', { email: owner.email })).status).toBe(202);
+    // The request answers before its work: a second one, for an account that does get a link, is done after it.
+    const marker = await createUser();
+    await (await apiClient()).post('/api/password-resets', { email: marker.email });
+    await waitForMail(marker.email);
+    expect(await PasswordResetToken.count({ where: { userId: owner.user.id } })).toBe(0);
     const tiles = await request(testApp()).get('/api/public/builds?limit=24');
     expect(tiles.body.builds.map((b: { code: string }) => b.code)).not.toContain(build.code);
 
