@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { powerNumbers } from '@client/features/builds/model/numbers/engine-numbers';
-import type { FigureInput } from '@shared/schemas/figure';
 
-const hp = (value: number): FigureInput => ({ value, unit: 'hp', provenance: 'measured', measuredOn: '2026-05-02' });
+const hp = (value: number) => ({ value, unit: 'hp' as const, provenance: 'measured' as const, measuredOn: '2026-05-02' });
 const group = (flywheel: number, wheel: number) => powerNumbers({ sections: { engine: { flywheelPower: hp(flywheel), wheelPower: hp(wheel) } }, weighIns: [], dynoRuns: [], system: 'imperial', cruise: 60 });
 
 describe('the power numbers in the editor', () => {

@@ -72,6 +72,15 @@ describe('a newcomer in the browser', () => {
     await page.getByText('Signed in as Kit Ellery.').waitFor();
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'signed-in-lands-on-my-builds-phone.png'), fullPage: true });
     expect(await banner.count()).toBe(0);
+
+    // Signed in, the sign-in and sign-up pages say so instead of offering a form.
+    for (const where of ['/sign-in', '/sign-up']) {
+      await page.goto(`${env.baseUrl}${where}`);
+      await page.getByText('You are signed in as Kit Ellery.').waitFor();
+      expect(await page.getByLabel('Password').count()).toBe(0);
+    }
+    await page.getByRole('link', { name: 'Go to my builds' }).click();
+    await page.waitForURL(`${env.baseUrl}/builds`);
     await page.close();
   });
 

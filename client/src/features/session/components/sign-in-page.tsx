@@ -8,6 +8,8 @@ import { Notice } from '@client/components/ui/notice';
 import { PageHeader } from '@client/components/ui/page-header';
 import { safeNext } from '../safe-next';
 import { landingAfterSignIn } from '@client/features/shows/api/landing';
+import { useSession } from '../api/get-session';
+import { AlreadySignedIn } from './already-signed-in';
 
 const FIELDS = ['email', 'password'] as const;
 type Field = (typeof FIELDS)[number];
@@ -23,6 +25,7 @@ export function SignInPage() {
   const [params] = useSearchParams();
   const navigate = useNavigate();
   const signIn = useSignIn();
+  const { data: session } = useSession();
   const [formError, setFormError] = useState('');
   const [errors, setErrors] = useState<Partial<Record<Field, string>>>({});
 
@@ -53,6 +56,9 @@ export function SignInPage() {
 
   // A field's message goes once the person changes that field.
   const clearOnEdit = (field: Field) => () => setErrors((e) => (e[field] ? { ...e, [field]: undefined } : e));
+
+  // Someone already signed in (not this form's own sign-in, which goes on by itself).
+  if (session?.user && signIn.isIdle) return <AlreadySignedIn title="Sign in" name={session.user.name} next={safeNext(params.get('next'))} />;
 
   return (
     <div className="mx-auto max-w-md">

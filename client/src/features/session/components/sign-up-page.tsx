@@ -11,10 +11,14 @@ import { TextField } from '@client/components/ui/text-field';
 import { Notice } from '@client/components/ui/notice';
 import { PageHeader } from '@client/components/ui/page-header';
 import { rememberNextAfterSignUp } from '../next-after-sign-up';
+import { safeNext } from '../safe-next';
+import { useSession } from '../api/get-session';
+import { AlreadySignedIn } from './already-signed-in';
 
 export function SignUpPage() {
   const [params] = useSearchParams();
   const signUp = useSignUp();
+  const { data: session } = useSession();
   const [formError, setFormError] = useState('');
   const { register, handleSubmit, setError, formState: { errors } } = useForm<SignUpInput>({ resolver: zodResolver(SignUpSchema) });
 
@@ -25,6 +29,8 @@ export function SignUpPage() {
       onError: (err) => setFormError(applyServerErrors(err, setError, ['email', 'name', 'password'])),
     });
   });
+
+  if (session?.user && signUp.isIdle) return <AlreadySignedIn title="Make an account" name={session.user.name} next={safeNext(params.get('next'))} />;
 
   if (signUp.isSuccess) {
     return (
