@@ -206,7 +206,14 @@ function BuildListPage({ listing }: { listing: BuildListing }) {
       {builds.length ? (
         <Tiles builds={builds} />
       ) : (
-        <p>{narrowed ? 'No published build matches. Try fewer words or any style.' : search.page > 1 ? 'There is no build on this page.' : 'No builds are published yet.'}</p>
+        search.page > 1 && total > 0 ? (
+          // An old or typed page number past the end: say so, and link back to where the builds are.
+          <p>
+            There is no build on page {search.page}. <a href={pageLink(search, 1)}>Back to the first page</a>
+          </p>
+        ) : (
+          <p>{narrowed ? 'No published build matches. Try fewer words or any style.' : 'No builds are published yet.'}</p>
+        )
       )}
       {pages > 1 ? (
         <nav className="pager" aria-label="Pages">

@@ -106,6 +106,13 @@ describe('GET /c (every published build)', () => {
     expect(titlesOn(second.text)).toHaveLength(2);
     expect(second.text).toContain(`href="/c?q=${tag}"`);
     expect(new Set([...titlesOn(first.text), ...titlesOn(second.text)]).size).toBe(PUBLIC_BUILDS_PER_PAGE + 2);
+
+    // A page past the end (an old link, a typed number) says so and links back to the first.
+    const past = await request(testApp()).get(`/c?q=${tag}&page=9`);
+    expect(past.status).toBe(200);
+    expect(titlesOn(past.text)).toHaveLength(0);
+    expect(past.text).toContain('There is no build on page 9.');
+    expect(past.text).toContain(`<a href="/c?q=${tag}">Back to the first page</a>`);
   });
 
   it('answers a search it cannot read with 400 and a page naming the problem, never a 500', async () => {
