@@ -64,6 +64,8 @@ describe('leaving the build editor never drops an edit', () => {
       await dialog.getByRole('button', { name: 'Stay and fix' }).click();
       expect(new URL(page.url()).pathname).toBe(editorPath);
       await expect.poll(() => engine.getByLabel('Bore', { exact: true }).inputValue()).toBe('2000');
+      // The keyboard is on the field to fix, not left on the link.
+      await expect.poll(() => engine.getByLabel('Bore', { exact: true }).evaluate((el) => el === document.activeElement)).toBe(true);
       expect((await storedEngine(page, build.id)).bore).toMatchObject({ value: 101.6 });
 
       // The summary at the top of the panel lists every error of the panel, not just the first.

@@ -27,7 +27,19 @@ export function UnsavedGuard() {
     blockerRef.current = blocker;
   });
   const [refusals, setRefusals] = useState<Refusal[]>([]);
+  const fixAt = useRef<string | null>(null);
   const blocked = blocker.state === 'blocked';
+
+  // Staying to fix: once the dialog is gone, the keyboard goes where the fixing is (the first field
+  // in trouble, else the panel's first field), not back to the link that was clicked.
+  useEffect(() => {
+    if (!fixAt.current || blocked || refusals.length) return;
+    const section = document.getElementById(`section-${fixAt.current}`);
+    fixAt.current = null;
+    section?.scrollIntoView({ block: 'start' });
+    const target = section?.querySelector<HTMLElement>('[aria-invalid="true"]') ?? section?.querySelector<HTMLElement>('input, select, textarea');
+    target?.focus({ preventScroll: true });
+  }, [blocked, refusals.length]);
 
   useEffect(() => {
     if (!blocked) return;
@@ -65,7 +77,7 @@ export function UnsavedGuard() {
     const first = refusals[0]?.section;
     setRefusals([]);
     blocker.reset?.();
-    if (first) document.getElementById(`section-${first}`)?.scrollIntoView({ block: 'start' });
+    fixAt.current = first ?? null;
   };
   const leave = () => {
     setRefusals([]);
