@@ -26,7 +26,7 @@ export const DEMO_OPEN_SHOW = {
   entryFee: 2500,
   currency: 'USD',
   description:
-    'A one-weekend regional meet for hot rods, customs, trucks and everything between. Gates open at 8 in the morning; judging runs Saturday afternoon and the awards are Sunday at 3.\n\nBring the car clean and the build sheet current: judges read it on their phones while they walk the field.',
+    'A one-weekend regional meet for hot rods, customs, trucks and everything between. Gates open at 8 in the morning; judging runs on the first afternoon and the awards are at 3 on the last day.\n\nBring the car clean and the build sheet current: judges read it on their phones while they walk the field.',
 };
 
 export const DEMO_FINISHED_SHOW = {

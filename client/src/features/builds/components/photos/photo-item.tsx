@@ -32,7 +32,7 @@ export function PhotoItem({ photo, index, count, busy, onCaption, onCover, onMov
       </div>
       {/* The whole width of the card, and taller as it wraps: a caption is read in full while typed. It saves itself. */}
       <GrowingTextField
-        label="Caption"
+        label={`Caption, photo ${index + 1}`}
         value={caption.text}
         maxLength={PHOTO_CAPTION_MAX}
         onChange={(e) => caption.change(e.target.value)}
