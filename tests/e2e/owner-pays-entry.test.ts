@@ -40,17 +40,14 @@ describe('an owner entering a paid show', { timeout: 300_000 }, () => {
     const link = /https?:\/\/\S+verify-email\?token=[\w-]+/.exec(mail.text)![0];
     const { pathname, search } = new URL(link);
     await page.goto(`${env.baseUrl}${pathname}${search}`);
-    await page.getByText('Your e-mail address is confirmed.').waitFor();
+    // Opened in the browser that signed up, the link confirms and signs in: on to My builds.
+    await page.waitForURL(`${env.baseUrl}/builds`);
+    await page.getByText('Signed in as Rae Paysworth.').waitFor();
 
     // A published build of theirs (made directly: the build editor has its own browser test).
     const user = (await User.findOne({ where: { email } }))!;
     await createBuild(user.id, { title: 'Sectioned sedan delivery', published: true });
 
-    await page.goto(`${env.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill(email);
-    await page.getByLabel('Password').fill('a long payer password');
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
     await page.goto(`${env.baseUrl}/enter/${slug}`);
     await page.getByLabel('Your car').selectOption({ label: 'Sectioned sedan delivery' });
     await page.getByLabel('Class').selectOption({ label: 'Early iron' });

@@ -19,7 +19,9 @@ export async function apiClient() {
   };
   await refresh();
   const keepToken = (res: request.Response) => {
-    if (typeof res.body?.csrfToken === 'string') csrf = res.body.csrfToken;
+    // As the browser client does: a new session (sign-in, a confirmation that signs in) brings a new token.
+    const token: unknown = res.body?.csrfToken ?? res.body?.session?.csrfToken;
+    if (typeof token === 'string') csrf = token;
     return res;
   };
   return {
