@@ -119,21 +119,23 @@ export const FourLinkSchema = z.object({
   cgHeightMm: plainMm(MM_RANGES.cgHeight).optional(),
 });
 
-export const SuspensionEndSchema = z.object({
-  type: z.enum(SUSPENSION_TYPES, { error: 'Choose a suspension type.' }).optional(),
-  springType: z.enum(SPRING_TYPES, { error: 'Choose a spring type.' }).optional(),
-  springRate: figureSchema('springRate', { label: 'Spring rate', min: 1, max: 1000, unit: 'N/mm' }).optional(),
-  /** Spring travel / wheel travel (see shared/calc/suspension.ts). */
-  motionRatio: boundedNumber('Motion ratio', 0.1, 2).optional(),
-  springAngleDeg: boundedNumber('Spring angle', 0, 60).optional(),
-  bellCrankSpringArmMm: plainMm(MM_RANGES.bellCrankSpringArm).optional(),
-  bellCrankPushrodArmMm: plainMm(MM_RANGES.bellCrankPushrodArm).optional(),
-  cornerSprungMass: figureSchema('mass', { label: 'Corner sprung mass', min: 20, max: 2000, unit: 'kg' }).optional(),
-  dampers: shortText('Dampers', 200).optional(),
-  antiRollBar: shortText('Anti-roll bar', 200).optional(),
-  description: shortText('Description', 300).optional(),
-  fourLink: FourLinkSchema.optional(),
-});
+/** One end's suspension; its messages say which end, since both ends' fields share a panel. */
+const suspensionEnd = (end: 'Front' | 'Rear') =>
+  z.object({
+    type: z.enum(SUSPENSION_TYPES, { error: 'Choose a suspension type.' }).optional(),
+    springType: z.enum(SPRING_TYPES, { error: 'Choose a spring type.' }).optional(),
+    springRate: figureSchema('springRate', { label: `${end} spring rate`, min: 1, max: 1000, unit: 'N/mm' }).optional(),
+    /** Spring travel / wheel travel (see shared/calc/suspension.ts). */
+    motionRatio: boundedNumber(`${end} motion ratio`, 0.1, 2).optional(),
+    springAngleDeg: boundedNumber(`${end} spring angle`, 0, 60).optional(),
+    bellCrankSpringArmMm: plainMm(MM_RANGES.bellCrankSpringArm).optional(),
+    bellCrankPushrodArmMm: plainMm(MM_RANGES.bellCrankPushrodArm).optional(),
+    cornerSprungMass: figureSchema('mass', { label: `${end} corner sprung mass`, min: 20, max: 2000, unit: 'kg' }).optional(),
+    dampers: shortText(`${end} dampers`, 200).optional(),
+    antiRollBar: shortText(`${end} anti-roll bar`, 200).optional(),
+    description: shortText(`${end} suspension description`, 300).optional(),
+    fourLink: FourLinkSchema.optional(),
+  });
 
 export const ChassisSectionSchema = z.object({
   ...common,
@@ -143,8 +145,8 @@ export const ChassisSectionSchema = z.object({
   wheelbase: lengthMm('Wheelbase', 1500, 5000).optional(),
   trackFront: lengthMm('Front track', 900, 2500).optional(),
   trackRear: lengthMm('Rear track', 900, 2500).optional(),
-  front: SuspensionEndSchema.optional(),
-  rear: SuspensionEndSchema.optional(),
+  front: suspensionEnd('Front').optional(),
+  rear: suspensionEnd('Rear').optional(),
 });
 
 // Brakes
