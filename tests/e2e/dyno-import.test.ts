@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -18,11 +18,7 @@ describe('importing a dyno export', () => {
     const build = await createFullBuild(user.id);
     const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
     const page = await context.newPage();
-    await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(`/builds/${build.id}`)}`);
-    await page.getByLabel('E-mail').fill(email);
-    await page.getByLabel('Password').fill(password);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(`${env.baseUrl}/builds/${build.id}`);
+    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     const dyno = page.getByTestId('dyno-panel');
     await dyno.getByRole('button', { name: 'Add a dyno run' }).click();
@@ -104,11 +100,7 @@ describe('importing a dyno export', () => {
     const build = await createFullBuild(user.id);
     const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
     const page = await context.newPage();
-    await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(`/builds/${build.id}`)}`);
-    await page.getByLabel('E-mail').fill(email);
-    await page.getByLabel('Password').fill(password);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(`${env.baseUrl}/builds/${build.id}`);
+    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     const dyno = page.getByTestId('dyno-panel');
     await dyno.getByRole('button', { name: 'Add a dyno run' }).click();
