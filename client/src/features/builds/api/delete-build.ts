@@ -9,9 +9,15 @@ export function useDeleteBuild(id: number) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: () => deleteBuild(id),
-    onSuccess: () => {
-      qc.removeQueries({ queryKey: buildQueryKey(id) });
-      void qc.invalidateQueries({ queryKey: buildsQueryKey, exact: true });
-    },
+    onSuccess: () => void qc.invalidateQueries({ queryKey: buildsQueryKey, exact: true }),
   });
+}
+
+/**
+ * Forgets a deleted build once the screen watching it has gone: forgotten while it still watches,
+ * the build would be asked for again (and answer 404).
+ */
+export function useForgetBuild() {
+  const qc = useQueryClient();
+  return (id: number) => qc.removeQueries({ queryKey: buildQueryKey(id) });
 }

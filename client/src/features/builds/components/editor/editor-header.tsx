@@ -5,7 +5,7 @@ import { Button } from '@client/components/ui/button';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { Notice } from '@client/components/ui/notice';
 import { useSetPublished } from '../../api/set-published';
-import { useDeleteBuild } from '../../api/delete-build';
+import { useDeleteBuild, useForgetBuild } from '../../api/delete-build';
 import { useEditor } from './editor-stores';
 import { useUnitSystem } from './unit-system';
 
@@ -17,6 +17,7 @@ export function EditorHeader({ build }: { build: OwnerBuild }) {
   const navigate = useNavigate();
   const publish = useSetPublished(build.id);
   const remove = useDeleteBuild(build.id);
+  const forget = useForgetBuild();
   const [confirming, setConfirming] = useState(false);
   const [error, setError] = useState('');
   const { overview } = build;
@@ -72,7 +73,7 @@ export function EditorHeader({ build }: { build: OwnerBuild }) {
           remove.mutate(undefined, {
             onSuccess: () => {
               for (const [key] of dirty.entries()) dirty.set(key, undefined);
-              navigate('/builds', { replace: true });
+              void Promise.resolve(navigate('/builds', { replace: true })).then(() => forget(build.id));
             },
             onError: (err) => {
               setConfirming(false);
