@@ -57,7 +57,10 @@ describe('a newcomer in the browser', () => {
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'verify-email-done-phone.png'), fullPage: true });
     await expect.poll(() => banner.count()).toBe(0);
 
+    // Signing out lands on the home page (a whole new page load): wait for it before going on.
     await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL(`${env.baseUrl}/`);
+    await page.waitForLoadState('load');
     await expect.poll(() => page.getByRole('link', { name: 'Sign in' }).count()).toBeGreaterThan(0);
 
     await page.goto(`${env.baseUrl}/sign-in`);
