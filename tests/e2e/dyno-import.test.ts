@@ -12,18 +12,23 @@ const env = useBrowserAndServer();
 // Power and torque agree row by row (hp = lb·ft × rpm / 5252, from memory).
 const EXPORT = ['Dyno day, bay 2', 'RPM,HP,TQ', '2500,120.3,252.7', '3000,153.6,268.9', '3500,188.4,282.7', '4000,221.3,290.6', '4500,251.9,294.0', '5000,277.4,291.4', '5500,298.6,285.1', '6000,310.0,271.4', ''].join('\r\n');
 
+/** An owner with a full build, signed in on a phone, with the "Add a dyno run" form open and its facility filled. */
+async function openNewRunOnPhone(ownerName: string, facility: string) {
+  const { user, email, password } = await createUser({ name: ownerName });
+  const build = await createFullBuild(user.id);
+  const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+  const page = await context.newPage();
+  await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+  const dyno = page.getByTestId('dyno-panel');
+  await dyno.getByRole('button', { name: 'Add a dyno run' }).click();
+  const run = page.getByRole('form', { name: 'Add a dyno run' });
+  await run.getByLabel('Facility').fill(facility);
+  return { build, context, page, dyno, run };
+}
+
 describe('importing a dyno export', () => {
   it('reads an "RPM,HP,TQ" file, previews the curve, fills the peaks from it, saves the run and shows the curve on the public page', async () => {
-    const { user, email, password } = await createUser({ name: 'Rowan Teller' });
-    const build = await createFullBuild(user.id);
-    const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
-    const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
-
-    const dyno = page.getByTestId('dyno-panel');
-    await dyno.getByRole('button', { name: 'Add a dyno run' }).click();
-    const run = page.getByRole('form', { name: 'Add a dyno run' });
-    await run.getByLabel('Facility').fill('Gravel Pit rolling road');
+    const { build, context, page, dyno, run } = await openNewRunOnPhone('Rowan Teller', 'Gravel Pit rolling road');
     const box = (label: string) => run.getByLabel(label, { exact: true });
     // No curve and no peaks: each empty peak box asks for itself, by its label.
     await run.getByRole('button', { name: 'Add the run' }).click();
@@ -96,16 +101,7 @@ describe('importing a dyno export', () => {
   });
 
   it('fills the peaks from rows typed in, so the run is added without typing them', async () => {
-    const { user, email, password } = await createUser({ name: 'Ines Marlow' });
-    const build = await createFullBuild(user.id);
-    const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
-    const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
-
-    const dyno = page.getByTestId('dyno-panel');
-    await dyno.getByRole('button', { name: 'Add a dyno run' }).click();
-    const run = page.getByRole('form', { name: 'Add a dyno run' });
-    await run.getByLabel('Facility').fill('Creek Road chassis dyno');
+    const { context, page, dyno, run } = await openNewRunOnPhone('Ines Marlow', 'Creek Road chassis dyno');
     await run.getByLabel('Type rows').check();
     // A slip of the finger on row 2: refused, naming the row.
     const rows = [['4000', '221.3', '290.6'], ['5000', '-277.4', '291.4'], ['6000', '310', '271.4']];
