@@ -13,27 +13,49 @@ const alias = {
   '@templates': here('./templates'),
 };
 
+/**
+ * The test projects (`npm test` runs them all; `npm run test:quick` runs unit and api):
+ * - unit: pure code, threads, no database;
+ * - api: the real app and the test database, one module graph per worker (no per-file isolation:
+ *   every file keeps to rows of its own), so the server is imported once per worker, not per file;
+ * - isolated: files that mock a module or point the server elsewhere before importing it;
+ * - browser: one server and one Chromium per worker, a fresh browser context per test, after the api group;
+ * - slow: database restarts, forked servers and the card-layout corpus, last, with patient limits.
+ */
+const PURE_SERVER_TESTS = ['tests/server/config.test.ts', 'tests/server/env-example.test.ts', 'tests/server/payments/config.test.ts', 'tests/server/policies/**', 'tests/server/pages/page-contrast.test.ts', 'tests/server/auth/**'];
+const ISOLATED_TESTS = ['tests/server/api/password-reset-timing.test.ts', 'tests/server/api/health-down.test.ts', 'tests/server/mail/**'];
+const SLOW_TESTS = ['tests/server/resilience/**', 'tests/server/cards/layout-*.test.ts', 'tests/server/results/certificate-layout.test.ts'];
+const BROWSER_TESTS = ['tests/e2e/**'];
+
+function testConfig() {
+  // Fail fast: a step that hangs fails in seconds, not minutes (the slow project keeps patient limits).
+  const quick = { testTimeout: 60_000, hookTimeout: 60_000, expect: { poll: { timeout: 10_000 } } };
+  const project = (name: string, options: Record<string, unknown>) => ({ extends: true as const, test: { name, ...quick, ...options } });
+  return {
+    environment: 'node' as const,
+    env: { ...TEST_ENV },
+    globalSetup: ['tests/support/global-setup.ts'],
+    // Two cores: two workers, and the browser journeys start only when the API files are done.
+    maxWorkers: 2,
+    projects: [
+      project('unit', { include: ['tests/shared/**/*.test.ts', 'tests/client/**/*.test.ts', 'tests/lint/**/*.test.ts', ...PURE_SERVER_TESTS.map(glob)], pool: 'threads', isolate: false, sequence: { groupOrder: 0 } }),
+      project('api', { include: ['tests/server/**/*.test.ts'], exclude: [...PURE_SERVER_TESTS, ...ISOLATED_TESTS, ...SLOW_TESTS].map(glob), pool: 'forks', isolate: false, sequence: { groupOrder: 0 } }),
+      project('isolated', { include: ISOLATED_TESTS.map(glob), pool: 'forks', isolate: true, sequence: { groupOrder: 0 } }),
+      project('browser', { include: BROWSER_TESTS.map(glob), pool: 'forks', isolate: false, sequence: { groupOrder: 1 } }),
+      project('slow', { include: SLOW_TESTS.map(glob), pool: 'forks', isolate: true, testTimeout: 300_000, hookTimeout: 180_000, expect: { poll: { timeout: 60_000 } }, sequence: { groupOrder: 2 } }),
+    ],
+  };
+}
+
+/** A folder glob names its test files. */
+function glob(pattern: string): string {
+  return pattern.endsWith('/**') ? `${pattern}/*.test.ts` : pattern;
+}
+
 // One file configures the client build, the dev server and the tests.
 // The client lives in client/ (its index.html is the entry); tests run from the project root.
 export default defineConfig(({ mode }) => {
-  if (mode === 'test') {
-    return {
-      resolve: { alias },
-      test: {
-        include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
-        environment: 'node',
-        env: { ...TEST_ENV },
-        globalSetup: ['tests/support/global-setup.ts'],
-        // Browser journeys upload and resize photos and render PDFs: generous limits, so a busy machine
-        // (several checkouts testing at once on two cores) is slow, not red. A hang still fails, later.
-        testTimeout: 300_000,
-        expect: { poll: { timeout: 60_000 } },
-        hookTimeout: 180_000,
-        // API and browser tests share one test database and one browser; two workers match the machine.
-        maxWorkers: 2,
-      },
-    };
-  }
+  if (mode === 'test') return { resolve: { alias }, test: testConfig() };
   const apiTarget = `http://127.0.0.1:${process.env.PORT ?? '3000'}`;
   return {
     root: here('./client'),

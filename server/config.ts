@@ -46,7 +46,16 @@ const EnvSchema = z.object({
   STRIPE_SECRET_KEY: z.string().optional().transform((v) => v || undefined),
   STRIPE_WEBHOOK_SECRET: z.string().optional().transform((v) => v || undefined),
   PAYMENTS_FAKE_PORT: z.coerce.number().int().min(0).max(65535).default(12111),
+  PASSWORD_HASH_MEMORY_KIB: z.coerce.number().int().min(1024).max(4_194_304).optional(),
+  PASSWORD_HASH_PASSES: z.coerce.number().int().min(1).max(20).optional(),
 });
+
+/** argon2id's cost: the library's defaults (RFC 9106's second recommended option) unless set. */
+export const PASSWORD_HASH_DEFAULTS = { memoryKiB: 65_536, passes: 3, lanes: 4 } as const;
+/** The least memory production accepts: OWASP's Password Storage Cheat Sheet gives 19 MiB with 2 passes as its lowest argon2id setting. */
+const PRODUCTION_MIN_HASH_MEMORY_KIB = 19_456;
+/** Tests hash at the smallest cost: every user a test makes and every sign-in pays it. */
+const TEST_PASSWORD_HASH = { memoryKiB: 1024, passes: 1, lanes: 1 } as const;
 
 export type Config = ReturnType<typeof loadConfig>;
 
@@ -87,6 +96,13 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
   if (e.STRIPE_SECRET_KEY && !e.STRIPE_WEBHOOK_SECRET) {
     throw new Error('Invalid environment:\n  STRIPE_WEBHOOK_SECRET: required with STRIPE_SECRET_KEY (the signing secret of the webhook endpoint)');
   }
+  if (production && e.PASSWORD_HASH_MEMORY_KIB !== undefined && e.PASSWORD_HASH_MEMORY_KIB < PRODUCTION_MIN_HASH_MEMORY_KIB) {
+    throw new Error(`Invalid environment:\n  PASSWORD_HASH_MEMORY_KIB: at least ${PRODUCTION_MIN_HASH_MEMORY_KIB} in production`);
+  }
+  if (production && e.PASSWORD_HASH_PASSES !== undefined && e.PASSWORD_HASH_PASSES < 2) {
+    throw new Error('Invalid environment:\n  PASSWORD_HASH_PASSES: at least 2 in production');
+  }
+  const hashBase = e.NODE_ENV === 'test' ? TEST_PASSWORD_HASH : PASSWORD_HASH_DEFAULTS;
   const publicBaseUrl = (e.PUBLIC_BASE_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/$/, '');
   return {
     env: e.NODE_ENV,
@@ -136,6 +152,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     mailRetryDelaySeconds: e.MAIL_RETRY_DELAY_SECONDS,
     mailRetryLimit: e.MAIL_RETRY_LIMIT,
     payments: paymentsConfig(e.STRIPE_SECRET_KEY, e.STRIPE_WEBHOOK_SECRET, e.PAYMENTS_FAKE_PORT),
+    /** argon2id's cost for new password hashes (stored hashes carry their own). */
+    passwordHash: { memoryKiB: e.PASSWORD_HASH_MEMORY_KIB ?? hashBase.memoryKiB, passes: e.PASSWORD_HASH_PASSES ?? hashBase.passes, lanes: hashBase.lanes },
   };
 }
 

@@ -1,7 +1,13 @@
 import argon2 from 'argon2';
+import { config } from '../config';
 
-// argon2id with the library's defaults (64 MiB, 3 passes), which follow RFC 9106's second recommended option.
-export const hashPassword = (plain: string) => argon2.hash(plain, { type: argon2.argon2id });
+/**
+ * argon2id at the configured cost. The default (64 MiB, 3 passes, 4 lanes) is the library's own and
+ * follows RFC 9106's second recommended option; tests run at the smallest cost the config allows
+ * outside production. A stored hash carries its own parameters, so verifying never depends on the config.
+ */
+export const hashPassword = (plain: string) =>
+  argon2.hash(plain, { type: argon2.argon2id, memoryCost: config.passwordHash.memoryKiB, timeCost: config.passwordHash.passes, parallelism: config.passwordHash.lanes });
 
 let dummyHash: Promise<string> | undefined;
 

@@ -1,5 +1,6 @@
 import PgBoss from 'pg-boss';
 import { QueryTypes, type Transaction } from 'sequelize';
+import { JobWakeListener, JOB_WAKE_CHANNEL } from './wake-listener';
 import { config } from '../config';
 import { logger } from '../logger';
 import { sequelize } from '../db/sequelize';
@@ -37,7 +38,8 @@ export type JobQueueOptions = {
 export class JobQueue {
   readonly boss: PgBoss;
   private starting?: Promise<PgBoss>;
-  private readonly workerIds: string[] = [];
+  private readonly workers: { id: string; name: string }[] = [];
+  private listener?: JobWakeListener;
 
   constructor(readonly options: JobQueueOptions) {
     this.boss = new PgBoss({
@@ -82,27 +84,46 @@ export class JobQueue {
     return this.boss;
   }
 
-  /** Works the named queue one job at a time; returns when the worker is registered. */
+  /**
+   * Works the named queue one job at a time; returns when the worker is registered. A worker that
+   * found a job asks again at once (a backlog drains at the speed of its jobs, not one per poll), and
+   * a job committed by any process wakes it through PostgreSQL's LISTEN/NOTIFY; the poll is the fallback.
+   */
   async work<T extends object>(name: string, handler: (job: PgBoss.Job<T>) => Promise<void>): Promise<void> {
     const boss = await this.start();
-    const id = await boss.work<T>(name, { batchSize: 1, pollingIntervalSeconds: this.options.pollSeconds }, async ([job]) => {
-      if (job) await handler(job);
+    const id: string = await boss.work<T>(name, { batchSize: 1, pollingIntervalSeconds: this.options.pollSeconds }, async ([job]) => {
+      if (!job) return;
+      try {
+        await handler(job);
+      } finally {
+        boss.notifyWorker(id);
+      }
     });
-    this.workerIds.push(id);
+    this.workers.push({ id, name });
+    this.listener ??= new JobWakeListener(this.options.connectionString, (queue) => this.wake(queue));
+    await this.listener.start();
   }
 
-  /** Wakes this process's workers now instead of at their next poll (a job was just committed). */
-  wake(): void {
-    for (const id of this.workerIds) this.boss.notifyWorker(id);
+  /** Wakes this process's workers (of one queue, or all) now instead of at their next poll. */
+  wake(queue?: string): void {
+    for (const w of this.workers) if (queue === undefined || w.name === queue) this.boss.notifyWorker(w.id);
   }
 
-  /** Sends a job; inside `transaction` the job exists only if that transaction commits. */
+  /**
+   * Sends a job; inside `transaction` the job exists only if that transaction commits. Workers in
+   * every process hear of it on commit (a notification sent in a transaction is delivered when it commits).
+   */
   async send(name: string, data: object, transaction?: Transaction): Promise<string> {
     const boss = await this.start();
     const id = await boss.send(name, data, transaction ? { db: inTransaction(transaction) } : {});
     if (!id) throw new Error(`job queue: ${name} refused the job (is the queue created?)`);
-    if (transaction) transaction.afterCommit(() => this.wake());
-    else this.wake();
+    await sequelize.query('SELECT pg_notify($1, $2)', { bind: [JOB_WAKE_CHANNEL, name], transaction, type: QueryTypes.SELECT }).catch((err: unknown) => {
+      // The job is stored; a worker's poll finds it even if the wake-up is lost.
+      if (transaction) throw err;
+      logger.warn({ err }, 'job queue: wake-up not sent (the next poll finds the job)');
+    });
+    if (transaction) transaction.afterCommit(() => this.wake(name));
+    else this.wake(name);
     return id;
   }
 
@@ -111,6 +132,8 @@ export class JobQueue {
     if (!this.starting) return;
     const starting = this.starting;
     this.starting = undefined;
+    await this.listener?.stop();
+    this.listener = undefined;
     await starting.catch(() => undefined);
     await this.boss.stop({ graceful: true, timeout: timeoutMs, wait: true }).catch((err: unknown) => logger.error({ err }, 'job queue: stop failed'));
   }

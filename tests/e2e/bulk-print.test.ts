@@ -54,7 +54,7 @@ describe('numbered cards in bulk, from the organiser’s entries page', { timeou
     expect(await bar.getAttribute('aria-valuemax')).toBe(String(CARDS));
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'bulk-print-progress.png') });
     const link = panel.getByRole('link', { name: `Download the PDF (${CARDS} cards)` });
-    await link.waitFor({ timeout: 240_000 });
+    await link.waitFor({ timeout: 30_000 });
     const seen = await page.evaluate(() => (window as unknown as { barSeen: number[] }).barSeen);
     console.log('progress seen by the page:', seen.join(' → '));
     expect(seen[0]).toBe(0);

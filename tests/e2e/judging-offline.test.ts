@@ -8,7 +8,7 @@ import { judgeOf, showInJudging } from '../support/judging-factory';
 const env = useBrowserAndServer();
 
 describe('judging on a phone with no signal', () => {
-  it('opens the sheet, survives a reload offline, keeps three scored cars on the phone and sends every score exactly once when the signal returns', { timeout: 300_000 }, async () => {
+  it('opens the sheet, survives a reload offline, keeps three scored cars on the phone and sends every score exactly once when the signal returns', async () => {
     const show = await showInJudging({ carsPerClass: 2 });
     const judge = await judgeOf(show.eventId, 'Field Judge');
     expect((await show.organiser.client.put(`/api/events/${show.eventId}/judges/${judge.user.id}/classes`, { allClasses: true })).status).toBe(200);
@@ -60,7 +60,7 @@ describe('judging on a phone with no signal', () => {
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'judge-cars-phone-unsent.png'), fullPage: true });
 
     await context.setOffline(false);
-    await expect.poll(() => page.getByText('Everything is sent.').count(), { timeout: 60_000 }).toBe(1);
+    await expect.poll(() => page.getByText('Everything is sent.').count()).toBe(1);
     const rows = await Score.findAll({ where: { eventId: show.eventId, judgeId: judge.user.id } });
     expect(rows).toHaveLength(9);
     for (let car = 0; car < 3; car++) {

@@ -7,7 +7,7 @@ import { judgeOf, scoreItem, showInJudging } from '../support/judging-factory';
 const env = useBrowserAndServer();
 
 describe('the organiser watches judging', () => {
-  it('sees finished sheets per class and what each judge has left, and closes judging', { timeout: 300_000 }, async () => {
+  it('sees finished sheets per class and what each judge has left, and closes judging', async () => {
     const show = await showInJudging({ carsPerClass: 2 });
     const judge = await judgeOf(show.eventId, 'Pat Marker');
     await show.organiser.client.put(`/api/events/${show.eventId}/judges/${judge.user.id}/classes`, { allClasses: false, classIds: [show.classIds[0]] });

@@ -22,7 +22,7 @@ beforeAll(async () => {
 });
 afterAll(async () => browser?.close());
 
-describe('an owner entering a paid show', { timeout: 300_000 }, () => {
+describe('an owner entering a paid show', () => {
   it('confirms the e-mail, enters, pays the fee and sees the entry confirmed', async () => {
     const { slug, eventId, organiser } = await showWithClasses({ settings: { name: 'Lantern Hill Drive-In', entryFee: 3000, currency: 'USD' }, classes: [{ name: 'Early iron' }] });
     const page = await browser.newPage({ viewport: { width: 390, height: 844 } });

@@ -9,7 +9,7 @@ import { showInJudging } from '../support/judging-factory';
 const env = useBrowserAndServer();
 
 describe('people’s choice on a phone with JavaScript turned off', () => {
-  it('a visitor votes with one big button, is thanked, and a second vote is refused; the organiser sees it in the tally', { timeout: 300_000 }, async () => {
+  it('a visitor votes with one big button, is thanked, and a second vote is refused; the organiser sees it in the tally', async () => {
     const show = await showInJudging();
     const first = await Entry.findByPk(show.entries[0]!.id, { include: [{ model: Build, as: 'build', attributes: ['code'] }] });
     const second = await Entry.findByPk(show.entries[1]!.id, { include: [{ model: Build, as: 'build', attributes: ['code'] }] });

@@ -1,5 +1,5 @@
-import { afterAll, beforeAll } from 'vitest';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { afterEach, beforeAll } from 'vitest';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { existsSync } from 'node:fs';
@@ -9,8 +9,8 @@ export const CHROMIUM = '/usr/bin/chromium';
 // Flags for a sandboxed root session on a machine with no outside network (see DEVELOPERS.md).
 export const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 
-/** How long one browser action may wait: patient, because a busy two-core machine can take many seconds per step. */
-export const BROWSER_ACTION_TIMEOUT_MS = 90_000;
+/** How long one browser action may wait: the browser journeys run on their own after the API tests, so a step that takes longer is stuck. */
+export const BROWSER_ACTION_TIMEOUT_MS = 20_000;
 
 export async function launchBrowser(): Promise<Browser> {
   if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: run the tests with \`npm test\`, which installs Debian's chromium.`);
@@ -42,19 +42,46 @@ export async function startTestServer(): Promise<{ server: Server; baseUrl: stri
 
 export const SCREENSHOT_DIR = path.resolve('test-results/screenshots');
 
+type BrowserAndServer = { browser: Browser; server: Server; baseUrl: string };
+
+// One server and one Chromium per test worker: the browser project runs without per-file isolation,
+// so every file of a worker shares them; the process's exit ends both.
+let shared: Promise<BrowserAndServer> | undefined;
+const contextsOfThisTest = new Set<BrowserContext>();
+
+async function startShared(): Promise<BrowserAndServer> {
+  const [{ server, baseUrl }, browser] = await Promise.all([startTestServer(), launchBrowser()]);
+  // Every page or context a test opens is remembered, so it is closed when that test ends.
+  const newContext = browser.newContext.bind(browser);
+  browser.newContext = async (options) => {
+    const context = await newContext(options);
+    contextsOfThisTest.add(context);
+    return context;
+  };
+  const newPage = browser.newPage.bind(browser);
+  browser.newPage = async (options) => {
+    const page = await newPage(options);
+    contextsOfThisTest.add(page.context());
+    return page;
+  };
+  return { server, baseUrl, browser };
+}
+
 /**
- * For a browser test file: starts the test server and the browser before its tests and stops them
- * after. Read `env.browser` and `env.baseUrl` inside the tests.
+ * For a browser test file: the worker's test server and browser, started once. Read `env.browser`
+ * and `env.baseUrl` inside the tests. Whatever a test opened is closed after it, so each test begins
+ * with fresh contexts (no cookies, storage or pages of another test).
  */
-export function useBrowserAndServer(): { browser: Browser; server: Server; baseUrl: string } {
-  const env = {} as { browser: Browser; server: Server; baseUrl: string };
+export function useBrowserAndServer(): BrowserAndServer {
+  const env = {} as BrowserAndServer;
   beforeAll(async () => {
-    Object.assign(env, await startTestServer());
-    env.browser = await launchBrowser();
+    shared ??= startShared();
+    Object.assign(env, await shared);
   });
-  afterAll(async () => {
-    await env.browser?.close();
-    await new Promise((r) => env.server?.close(r));
+  afterEach(async () => {
+    const open = [...contextsOfThisTest];
+    contextsOfThisTest.clear();
+    await Promise.all(open.map((c) => c.close().catch(() => undefined)));
   });
   return env;
 }

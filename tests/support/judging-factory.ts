@@ -1,6 +1,6 @@
 import { expect } from 'vitest';
 import { randomUUID } from 'node:crypto';
-import argon2 from 'argon2';
+import { hashPassword } from '@server/auth/passwords';
 import { EventMembership } from '@server/models/event-membership';
 import { User } from '@server/models/user';
 import { apiClient } from './api-client';
@@ -21,13 +21,12 @@ export async function judgeOf(eventId: number, name = 'Jude Judgely') {
   return judge;
 }
 
-// Many judges at once: a hash at argon2's smallest cost keeps 50 sign-ins from dominating a busy machine.
-// Sign-in verifies it the same way (the cost is read from the hash itself); real accounts keep the full cost.
+// Many judges at once share one hash, made once at the test cost.
 let cheapHash: Promise<string> | undefined;
 
-/** A judge whose account has a low-cost password hash, for tests that need dozens of them. */
+/** A judge with one shared password hash, for tests that need dozens of them. */
 export async function quickJudgeOf(eventId: number, name: string) {
-  cheapHash ??= argon2.hash(DEFAULT_PASSWORD, { type: argon2.argon2id, memoryCost: 1024, timeCost: 1 });
+  cheapHash ??= hashPassword(DEFAULT_PASSWORD);
   const user = await User.create({ email: uniqueEmail('judge'), name, passwordHash: await cheapHash, isSiteAdmin: false, mayOrganise: false });
   await EventMembership.create({ eventId, userId: user.id, role: 'judge' });
   const client = await apiClient();

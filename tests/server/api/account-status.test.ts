@@ -1,5 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { publicPageCache } from '@server/pages/page-cache';
+import { describe, expect, it } from 'vitest';
+import { checkPageVersionOnEveryRequest } from '../../support/page-cache';
 import request from 'supertest';
 import { AdminUserDetailSchema, AdminUserSchema } from '@shared/schemas/user';
 import { apiClient, testApp } from '../../support/api-client';
@@ -17,14 +17,7 @@ async function signedIn(flags: { isSiteAdmin?: boolean } = {}) {
 
 describe('disabling an account (site admin)', () => {
   // Each server process trusts a cached page for up to a second; here every request checks the version.
-  let trust = 0;
-  beforeAll(() => {
-    trust = publicPageCache.revalidateAfterMs;
-    publicPageCache.revalidateAfterMs = 0;
-  });
-  afterAll(() => {
-    publicPageCache.revalidateAfterMs = trust;
-  });
+  checkPageVersionOnEveryRequest();
 
   it('stops its sign-in, ends its sessions, takes its public pages offline, and re-enabling brings all back', async () => {
     const { client: admin } = await signedIn({ isSiteAdmin: true });

@@ -67,13 +67,9 @@ describe('accounts (site admin)', () => {
     const { client: admin } = await signedIn({ isSiteAdmin: true });
     const target = await createUser();
     await (await apiClient()).post('/api/password-resets', { email: target.email });
-    let found: { id: number; to: string } | undefined;
-    for (let i = 0; i < 50 && !found; i++) {
-      const list = await admin.get('/api/admin/mail');
-      found = list.body.mail.find((m: { to: string }) => m.to.includes(target.email));
-      if (!found) await new Promise((r) => setTimeout(r, 100));
-    }
-    expect(found).toBeDefined();
+    const listed = async () => ((await admin.get('/api/admin/mail')).body.mail as { id: number; to: string }[]).find((m) => m.to.includes(target.email));
+    await expect.poll(listed).toBeDefined();
+    const found = await listed();
     const one = await admin.get(`/api/admin/mail/${found!.id}`);
     expect(one.body.mail.text).toContain('/reset-password?token=');
     expect((await owner.get(`/api/admin/mail/${found!.id}`)).status).toBe(403);

@@ -20,7 +20,7 @@ const FIVE = [
   { title: 'Track-nose pickup', cls: 0 },
 ] as const;
 
-describe('bulk numbered cards', { timeout: 300_000 }, () => {
+describe('bulk numbered cards', () => {
   it('is for the show’s organisers only; a second start while one waits returns the same print', async () => {
     const s = await showWithConfirmedEntries([...FIVE.slice(0, 2)]);
     const judge = await memberOf(s.eventId, 'judge', 'Jude Judgely');
@@ -158,7 +158,7 @@ describe('bulk numbered cards', { timeout: 300_000 }, () => {
   });
 });
 
-describe('the owner’s card for an entry, and the show reminder that attaches it', { timeout: 300_000 }, () => {
+describe('the owner’s card for an entry, and the show reminder that attaches it', () => {
   it('gives the owner their card with the show, class and number; others and waiting entries get none', async () => {
     const s = await showWithConfirmedEntries([{ title: 'Scalloped roadster', cls: 1 }], { showName: 'Lakeside Cruise Night' });
     const entry = s.confirmed[0]!;

@@ -20,7 +20,7 @@ function inUnit(kind: 'power' | 'mass', figure: { value: number; unit: string },
 }
 
 describe('every screen shows the same figures', () => {
-  it('My builds, the public JSON and the card agree on power and weight for every demo build', { timeout: 240_000 }, async () => {
+  it('My builds, the public JSON and the card agree on power and weight for every demo build', async () => {
     const { user, email, password } = await createUser({ name: 'Figures Owner' });
     const made = await createDemoCardBuilds(user);
     expect(made).toHaveLength(DEMO_BUILDS.length);

@@ -22,7 +22,7 @@ async function showDay() {
   return { ...show, paid, unpaid, withdrawn, waiting, gate };
 }
 
-describe('the gate', { timeout: 300_000 }, () => {
+describe('the gate', () => {
   it('looks a card up by its QR address or its number and names the problem in words, without private fields', async () => {
     const s = await showDay();
     const byCode = await s.gate.client.get(`/api/events/${s.eventId}/gate/lookup?code=${encodeURIComponent(`http://localhost/c/${s.paid.owner.build.code}`)}`);

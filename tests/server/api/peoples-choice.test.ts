@@ -5,6 +5,7 @@ import { Build } from '@server/models/build';
 import { Entry } from '@server/models/entry';
 import { Vote } from '@server/models/vote';
 import { publicPageCache } from '@server/pages/page-cache';
+import { checkPageVersionOnEveryRequest } from '../../support/page-cache';
 import { peoplesChoiceWinners } from '@server/services/peoples-choice';
 import { apiClient } from '../../support/api-client';
 import { listenApp, rawGet } from '../../support/raw-http';
@@ -13,15 +14,12 @@ import { judgeOf, showInJudging, type ShowInJudging } from '../../support/judgin
 import { formTokenIn, loopbackAddress, visitor } from '../../support/visitor';
 
 let server: Awaited<ReturnType<typeof listenApp>>;
-let trust: number;
+// See a change of the window at once instead of within the cache's one-second trust.
+checkPageVersionOnEveryRequest();
 beforeAll(async () => {
   server = await listenApp();
-  // See a change of the window at once instead of within the cache's one-second trust.
-  trust = publicPageCache.revalidateAfterMs;
-  publicPageCache.revalidateAfterMs = 0;
 });
 afterAll(async () => {
-  publicPageCache.revalidateAfterMs = trust;
   await server.close();
 });
 

@@ -5,12 +5,13 @@ import { createUser } from '../../support/factories';
 import { createBuild } from '../../support/build-factory';
 import { jpegWithGps } from '../../support/images';
 import { storePhotosForBuild } from '@server/services/photos';
-import { publicPageCache } from '@server/pages/page-cache';
+import { checkPageVersionOnEveryRequest } from '../../support/page-cache';
 import { Build } from '@server/models/build';
 
+
+checkPageVersionOnEveryRequest();
 describe('a measured figure with an evidence photo, on the public page', () => {
   it('links the weight to its scale-ticket photo', async () => {
-    publicPageCache.revalidateAfterMs = 0;
     const { user } = await createUser({ name: 'Ines Varro' });
     const build = await createBuild(user.id, { title: 'Weighed coupe', published: true });
     const [photo] = await storePhotosForBuild(build.id, [{ buffer: await jpegWithGps(), originalName: 'ticket.jpg' }], ['Scale ticket']);

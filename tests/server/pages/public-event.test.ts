@@ -4,8 +4,10 @@ import { testApp } from '../../support/api-client';
 import { createFullBuild } from '../../support/build-factory';
 import { showWithClasses, signedIn } from '../../support/event-factory';
 import { confirmEntryPayment } from '@server/services/entries';
-import { publicPageCache } from '@server/pages/page-cache';
+import { checkPageVersionOnEveryRequest } from '../../support/page-cache';
 
+
+checkPageVersionOnEveryRequest();
 describe('the public show page /e/<slug>', () => {
   it('shows name, dates in the show’s zone, venue, fee in the currency’s decimals, classes and confirmed entries linking to their pages; nothing private', async () => {
     const { eventId, classIds, slug, organiser } = await showWithClasses({
@@ -48,7 +50,6 @@ describe('the public show page /e/<slug>', () => {
     expect(ics.text).toMatch(/SUMMARY:Dry Lake Gathering/);
 
     // The car's own page names the show it is entered in while the show is on.
-    publicPageCache.revalidateAfterMs = 0;
     const carPage = await request(testApp()).get(`/c/${build.code}`);
     expect(carPage.text).toMatch(/id="show-entry"/);
     expect(carPage.text).toContain('Dry Lake Gathering');
