@@ -89,17 +89,20 @@ export class JobQueue {
    * found a job asks again at once (a backlog drains at the speed of its jobs, not one per poll), and
    * a job committed by any process wakes it through PostgreSQL's LISTEN/NOTIFY; the poll is the fallback.
    */
-  async work<T extends object>(name: string, handler: (job: PgBoss.Job<T>) => Promise<void>): Promise<void> {
+  async work<T extends object>(name: string, handler: (job: PgBoss.Job<T>) => Promise<void>, { concurrency = 1 } = {}): Promise<void> {
     const boss = await this.start();
-    const id: string = await boss.work<T>(name, { batchSize: 1, pollingIntervalSeconds: this.options.pollSeconds }, async ([job]) => {
-      if (!job) return;
-      try {
-        await handler(job);
-      } finally {
-        boss.notifyWorker(id);
-      }
-    });
-    this.workers.push({ id, name });
+    // Each loop works one job at a time; several loops take turns on the queue (a job is fetched by one only).
+    for (let i = 0; i < concurrency; i++) {
+      const id: string = await boss.work<T>(name, { batchSize: 1, pollingIntervalSeconds: this.options.pollSeconds }, async ([job]) => {
+        if (!job) return;
+        try {
+          await handler(job);
+        } finally {
+          boss.notifyWorker(id);
+        }
+      });
+      this.workers.push({ id, name });
+    }
     this.listener ??= new JobWakeListener(this.options.connectionString, (queue) => this.wake(queue));
     await this.listener.start();
   }
