@@ -35,6 +35,7 @@ function testConfig() {
     environment: 'node' as const,
     env: { ...TEST_ENV },
     globalSetup: ['tests/support/global-setup.ts'],
+    reporters: ['default', './tests/support/project-times-reporter.ts'],
     // Two cores: two workers, and the browser journeys start only when the API files are done.
     maxWorkers: 2,
     projects: [

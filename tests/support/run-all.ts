@@ -1,9 +1,10 @@
-// `npm test`: lint and typecheck (the layer rules live there), what a fresh machine lacks
-// (PostgreSQL, Debian's chromium), a current client build, then every test (unit, API, browser)
-// against the test database. Exits non-zero on any failure.
-// `npm test -- <files>` runs just those files and skips lint and typecheck (they take a minute or
-// two on this machine); PLACARD_CHECKS=1 runs them there too.
-import { spawnSync } from 'node:child_process';
+// `npm test`: what a fresh machine lacks (PostgreSQL, Debian's chromium), a current client build,
+// then every test project (unit, api, isolated, browser, slow) against the test database, with lint
+// and typecheck (the layer rules live there) running beside them, both cached between runs.
+// Exits non-zero on any failure of any of them, and prints the time each took.
+// `npm test -- <files>` (or `--project <name>`) runs just those and skips lint and typecheck;
+// PLACARD_CHECKS=1 runs them there too. `npm run test:quick` is the unit and api projects.
+import { spawn, spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -32,24 +33,53 @@ function ensureTools() {
   }
 }
 
-/** Runs an npm script's tool from node_modules/.bin; a failure ends the run before any test starts. */
-function check(name: string, bin: string, args: string[]) {
-  console.log(`npm test: ${name}…`);
-  const r = spawnSync(path.join(ROOT, 'node_modules/.bin', bin), args, { cwd: ROOT, stdio: 'inherit' });
-  if (r.status !== 0) {
-    console.error(`npm test: ${name} failed, so no test ran.`);
-    process.exit(r.status ?? 1);
-  }
+type Outcome = { name: string; status: number; seconds: number; output: string };
+
+/** Runs a tool from node_modules/.bin beside the tests, keeping its output for the end of the run. */
+function runBeside(name: string, bin: string, args: string[]): Promise<Outcome> {
+  const started = Date.now();
+  return new Promise((resolve) => {
+    let output = '';
+    const child = spawn(path.join(ROOT, 'node_modules/.bin', bin), args, { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] });
+    child.stdout.on('data', (c: Buffer) => (output += c.toString()));
+    child.stderr.on('data', (c: Buffer) => (output += c.toString()));
+    child.on('error', (err) => resolve({ name, status: 1, seconds: (Date.now() - started) / 1000, output: String(err) }));
+    child.on('close', (code) => resolve({ name, status: code ?? 1, seconds: (Date.now() - started) / 1000, output }));
+  });
 }
 
-const targeted = process.argv.slice(2).some((a) => !a.startsWith('-'));
-if (!targeted || process.env.PLACARD_CHECKS === '1') {
-  check('lint', 'eslint', ['.']);
-  check('typecheck', 'tsc', ['-b']);
+/** Runs vitest in its own process, its output straight to ours. */
+function runTests(args: string[]): Promise<Outcome> {
+  const started = Date.now();
+  return new Promise((resolve) => {
+    const child = spawn(process.execPath, [path.join(ROOT, 'node_modules/vitest/vitest.mjs'), 'run', ...args], { cwd: ROOT, stdio: 'inherit' });
+    child.on('close', (code) => resolve({ name: 'tests', status: code ?? 1, seconds: (Date.now() - started) / 1000, output: '' }));
+  });
 }
+
+const runStarted = Date.now();
+const args = process.argv.slice(2);
+const targeted = args.some((a) => !a.startsWith('-') || a.startsWith('--project'));
+const withChecks = !targeted || process.env.PLACARD_CHECKS === '1';
 
 ensureTools();
 await ensureDatabase();
 buildClientIfStale();
-const vitest = spawnSync(process.execPath, [path.join(ROOT, 'node_modules/vitest/vitest.mjs'), 'run', ...process.argv.slice(2)], { cwd: ROOT, stdio: 'inherit' });
-process.exit(vitest.status ?? 1);
+
+// Lint and typecheck share the machine with the tests but mostly fill the time the tests spend
+// waiting on the database and the browser; their caches make a second run take seconds.
+const checks = withChecks
+  ? [
+      runBeside('lint', 'eslint', ['.', '--cache', '--cache-location', 'node_modules/.cache/eslint/', '--cache-strategy', 'content']),
+      runBeside('typecheck', 'tsc', ['-b']),
+    ]
+  : [];
+const outcomes = [await runTests(args), ...(await Promise.all(checks))];
+
+for (const o of outcomes.filter((o) => o.name !== 'tests' && (o.status !== 0 || o.output.trim()))) {
+  console.log(`\nnpm test: ${o.name} ${o.status === 0 ? 'passed with warnings' : 'FAILED'}:\n${o.output.trim()}`);
+}
+console.log('\nnpm test:');
+for (const o of outcomes) console.log(`  ${o.name.padEnd(10)} ${o.status === 0 ? 'passed' : 'FAILED'} in ${o.seconds.toFixed(1)} s`);
+console.log(`  all        ${((Date.now() - runStarted) / 1000).toFixed(1)} s from the start of npm test`);
+process.exit(outcomes.every((o) => o.status === 0) ? 0 : 1);
