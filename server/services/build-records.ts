@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import type { DynoRunCreateInput, WeighInCreateInput } from '@shared/schemas/build';
 import type { EngineSection } from '@shared/schemas/build-sections';
-import { weighedTotal } from '@shared/build-sheet/key-figures';
+import { engineWithDynoPeaks, weightOfWeighIn } from '@shared/build-sheet/records';
 import { BuildSection } from '../models/build-section';
 import { DynoRun } from '../models/dyno-run';
 import { WeighIn } from '../models/weigh-in';
@@ -65,19 +65,7 @@ export async function applyDynoRun(build: Build, id: number, outer?: Transaction
     const run = (await findRecord(DynoRun, build, id, transaction)).data;
     // Read under the lock, so a section saved meanwhile is merged into, not overwritten.
     const section = await BuildSection.findOne({ where: { buildId: build.id, kind: 'engine' }, lock: transaction.LOCK.UPDATE, transaction });
-    const engine = { ...((section?.data ?? {}) as EngineSection) };
-    const measured = { provenance: 'measured' as const, measuredOn: run.date };
-    if (run.measuredAt === 'wheel') {
-      engine.wheelPower = { value: run.peakPower, unit: run.powerUnit, ...measured };
-      engine.wheelPowerRpm = run.peakPowerRpm;
-      engine.wheelTorque = { value: run.peakTorque, unit: run.torqueUnit, ...measured };
-      engine.wheelTorqueRpm = run.peakTorqueRpm;
-    } else {
-      engine.flywheelPower = { value: run.peakPower, unit: run.powerUnit, ...measured };
-      engine.flywheelPowerRpm = run.peakPowerRpm;
-      engine.flywheelTorque = { value: run.peakTorque, unit: run.torqueUnit, ...measured };
-      engine.flywheelTorqueRpm = run.peakTorqueRpm;
-    }
+    const engine = engineWithDynoPeaks({ ...((section?.data ?? {}) as EngineSection) }, run);
     await saveSection(locked, 'engine', engine, transaction);
   });
 }
@@ -88,6 +76,6 @@ export async function applyWeighIn(build: Build, id: number, outer?: Transaction
     // The locked row carries the weight as it is now, so the figure history records the right "before".
     const locked = await lockBuild(build.id, transaction);
     const w = (await findRecord(WeighIn, build, id, transaction)).data;
-    await updateOverview(locked, { weight: { value: weighedTotal(w), unit: w.unit, provenance: 'measured', measuredOn: w.date } }, transaction);
+    await updateOverview(locked, { weight: weightOfWeighIn(w) }, transaction);
   });
 }

@@ -1,4 +1,5 @@
 import { Op, type Transaction } from 'sequelize';
+import { newestRecordFirst } from '@shared/build-sheet/records';
 import type { BuildCreateInput, BuildPrivate, BuildUpdateInput, Credit } from '@shared/schemas/build';
 import { SECTION_SCHEMAS, type SectionKind } from '@shared/schemas/build-sections';
 import { withTransaction } from '../db/transaction';
@@ -49,8 +50,8 @@ export async function loadFullBuild(where: { id: number } | { code: string }, tr
   const build = await Build.findOne({ where, include: FULL_BUILD_INCLUDE, transaction });
   if (!build) return null;
   build.photos?.sort((a, b) => a.position - b.position || a.id - b.id);
-  build.dynoRuns?.sort((a, b) => b.date.localeCompare(a.date) || b.id - a.id);
-  build.weighIns?.sort((a, b) => b.date.localeCompare(a.date) || b.id - a.id);
+  build.dynoRuns?.sort(newestRecordFirst);
+  build.weighIns?.sort(newestRecordFirst);
   build.figureChanges?.sort((a, b) => b.createdAt.getTime() - a.createdAt.getTime() || b.id - a.id);
   return build;
 }

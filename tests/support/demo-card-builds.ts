@@ -1,8 +1,22 @@
-// The demo scenario's builds, made through the same services as the seeder (photos drawn, dyno runs
-// and weigh-ins applied) for one test owner, and handed back as the cards see them: the public
-// build and its cover photo.
+// The demo scenario's builds, handed back as the cards see them: the public build and its cover photo.
+// `createDemoCardBuilds` makes them through the same services as the seeder (photos drawn, dyno runs
+// and weigh-ins applied) for one test owner; `demoCardBuildsInMemory` makes the same builds with no
+// database, through the same rules and the same public presenter, for the card-layout corpus.
 import '@server/models/index';
 import sharp from 'sharp';
+import { Build } from '@server/models/build';
+import { BuildSection } from '@server/models/build-section';
+import { DynoRun } from '@server/models/dyno-run';
+import { Photo } from '@server/models/photo';
+import { User } from '@server/models/user';
+import { WeighIn } from '@server/models/weigh-in';
+import { randomBuildCode } from '@server/services/build-codes';
+import { photoVariantKey } from '@server/storage/keys';
+import { processImage } from '@server/services/image-processing';
+import { coverSourceKey } from '@server/services/cards';
+import { engineWithDynoPeaks, newestRecordFirst, weightOfWeighIn } from '@shared/build-sheet/records';
+import { SECTION_SCHEMAS, type EngineSection } from '@shared/schemas/build-sections';
+import type { DemoBuild } from '@server/db/demo/builds';
 import { DEMO_BUILDS } from '@server/db/demo/builds';
 import { carDrawingSvg } from '@server/db/demo/art';
 import { createBuild, loadFullBuildOrThrow, saveCredits, savePrivate, saveSection, updateOverview } from '@server/services/builds';
@@ -38,4 +52,36 @@ export async function createDemoCardBuilds(owner?: Awaited<ReturnType<typeof cre
     out.push({ id: build.id, name: demo.title, build: publicBuild, cover: await loadCoverImage(publicBuild, DEFAULT_CARD_SETTINGS) });
   }
   return out;
+}
+
+/** The demo builds as `createDemoCardBuilds` makes them, without the database (unsaved models through the public presenter). */
+export async function demoCardBuildsInMemory(): Promise<DemoCardBuild[]> {
+  return Promise.all(DEMO_BUILDS.map((demo, i) => demoCardBuildInMemory(demo, i + 1)));
+}
+
+async function demoCardBuildInMemory(demo: DemoBuild, id: number): Promise<DemoCardBuild> {
+  // As the services leave them: each section parsed by its schema, the newest dyno run's peaks and the
+  // last weigh-in applied, the records listed newest first as loadFullBuild lists them.
+  const sections = Object.fromEntries(Object.entries(demo.sections).map(([kind, data]) => [kind, SECTION_SCHEMAS[kind as SectionKind].parse(data) as Record<string, unknown>]));
+  const runs = demo.dynoRuns ?? [];
+  const newestRun = [...runs].sort((a, b) => b.date.localeCompare(a.date))[0];
+  if (newestRun) sections.engine = SECTION_SCHEMAS.engine.parse(engineWithDynoPeaks((sections.engine ?? {}) as EngineSection, newestRun)) as Record<string, unknown>;
+  const weighIns = demo.weighIns ?? [];
+  const weight = weighIns.length ? weightOfWeighIn(weighIns[weighIns.length - 1]!) : (demo.weight ?? null);
+
+  const drawing = demo.drawings[0];
+  const image = drawing ? await processImage(await sharp(Buffer.from(carDrawingSvg(drawing.drawing))).jpeg({ quality: 80 }).toBuffer()) : null;
+  const build = Build.build({ id, code: randomBuildCode(), title: demo.title, modelYear: demo.modelYear ?? null, bodyOrigin: demo.bodyOrigin || null, style: demo.style ?? null, story: demo.story, weight, credits: demo.credits, vin: null, plate: null, ownerPhone: null, ownerAddress: null, updatedAt: new Date() });
+  build.owner = User.build({ email: 'demo-owner@example.test', name: 'Demo Owner', passwordHash: '' });
+  build.sections = Object.entries(sections).map(([kind, data]) => BuildSection.build({ buildId: id, kind: kind as SectionKind, data }));
+  build.photos = image ? [Photo.build({ id, buildId: id, storageKey: `memory/${id}`, caption: drawing!.caption, position: 0, isCover: true, width: image.width, height: image.height, variants: image.variants.map((v) => ({ width: v.width, height: v.height })) })] : [];
+  build.dynoRuns = runs.map((data, n) => DynoRun.build({ id: n + 1, buildId: id, date: data.date, data })).sort(newestRecordFirst);
+  build.weighIns = weighIns.map((data, n) => WeighIn.build({ id: n + 1, buildId: id, date: data.date, data })).sort(newestRecordFirst);
+  const publicBuild = presentPublicBuild(build);
+
+  // The same width of the cover the card service reads from storage for the default settings.
+  const key = coverSourceKey(publicBuild, DEFAULT_CARD_SETTINGS);
+  const variant = image && key ? image.variants.find((v) => key === photoVariantKey(`memory/${id}`, v.width, 'jpg')) : undefined;
+  const cover = image && variant ? { data: variant.jpeg, format: 'jpg' as const, width: image.width, height: image.height } : null;
+  return { id, name: demo.title, build: publicBuild, cover };
 }

@@ -6,7 +6,7 @@ import { DEMO_BUILDS } from '@server/db/demo/builds';
 import { findBuild, setPublished } from '@server/services/builds';
 import { apiClient } from '../../support/api-client';
 import { createUser } from '../../support/factories';
-import { createDemoCardBuilds } from '../../support/demo-card-builds';
+import { createDemoCardBuilds, demoCardBuildsInMemory } from '../../support/demo-card-builds';
 import { pdfText } from '../../support/pdf';
 
 const squash = (s: string) => s.replace(/\s+/g, '');
@@ -63,5 +63,18 @@ describe('every screen shows the same figures', () => {
     }
     // Most demo builds have one or both figures: the comparison is not vacuous.
     expect(compared).toBeGreaterThan(DEMO_BUILDS.length / 2);
+  });
+
+  it('the card-layout corpus makes the same demo builds in memory as the services make in the database', async () => {
+    const { user } = await createUser({ name: 'Corpus Owner' });
+    const [stored, inMemory] = await Promise.all([createDemoCardBuilds(user), demoCardBuildsInMemory()]);
+    // What differs by nature: the public code and its address, ids, the photo's storage address, the time.
+    const comparable = (d: (typeof stored)[number]) => ({
+      name: d.name,
+      build: { ...d.build, code: '', url: '', updatedAt: '', ownerName: '', photos: d.build.photos.map((p) => ({ ...p, id: 0, sources: p.sources.map((s) => [s.width, s.height]) })) },
+      cover: d.cover && { width: d.cover.width, height: d.cover.height, format: d.cover.format, bytes: d.cover.data.length > 0 },
+    });
+    expect(inMemory.map(comparable)).toEqual(stored.map(comparable));
+    expect(inMemory.filter((d) => d.cover).length).toBeGreaterThan(DEMO_BUILDS.length / 2);
   });
 });

@@ -8,7 +8,7 @@ import { pageBox } from '@templates/cards/theme';
 import { capShare } from '@templates/cards/measure';
 import { QR_QUIET } from '@templates/cards/parts';
 import { ENTRY_SHOWS, LONGEST_SHOW, emptyPublicBuild, longTitlePublicBuild, longestPublicBuild, sparsePublicBuild, typicalPublicBuild } from '../../support/card-fixtures';
-import { createDemoCardBuilds, type DemoCardBuild } from '../../support/demo-card-builds';
+import { demoCardBuildsInMemory, type DemoCardBuild } from '../../support/demo-card-builds';
 import { cropPoints, inside, overlaps, pageCount, rasterize, rasterizePages, readCardLayout, readCardLayouts, readQr, type Box, type CardLayout, type Pixels } from '../../support/pdf';
 import { Fragment, cloneElement, createElement } from 'react';
 import { renderToBuffer } from '@react-pdf/renderer';
@@ -154,7 +154,7 @@ function check(design: CardDesign, c: Case, { pdf, layout, leftOff, scan }: Rend
 export function describeCardLayouts(design: CardDesign) {
   describe(`${design} cards, read back from the PDF`, () => {
     it('never overlap, keep the margins, the minimum sizes, the QR code and the exact paper, for every build, paper and orientation', async () => {
-      const cases = corpus(await createDemoCardBuilds());
+      const cases = corpus(await demoCardBuildsInMemory());
       expect(cases.length).toBe(6 * 8 + 11);
       const rendered = await renderAll(design, cases);
       const leftOffs = cases.map((c, i) => ({ c, leftOff: check(design, c, rendered[i]!) }));
