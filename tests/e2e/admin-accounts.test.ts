@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
 import { randomUUID } from 'node:crypto';
 import type { Browser, Page } from 'playwright-core';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 import { waitForMail } from '../support/mailbox';
@@ -49,14 +48,14 @@ describe('the site admin’s accounts page', () => {
     await panel.getByRole('button', { name: 'Disable the account' }).click();
     const dialog = page.getByRole('dialog', { name: 'Disable Odalys Brennecke?' });
     await dialog.getByText('public pages of their 1 published build go').waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'admin-disable-confirm.png') });
+    await keepScreenshot(page, 'admin-disable-confirm.png');
     await dialog.getByRole('button', { name: 'Disable' }).click();
     await panel.getByText(/Disabled since \d{4}-\d{2}-\d{2}/).waitFor();
     await page.getByRole('cell', { name: 'Disabled' }).waitFor();
     // A disabled account is offered no reset link, and the panel says why.
     await panel.getByText('No password-reset e-mail while the account is disabled: enable it first.', { exact: false }).waitFor();
     expect(await panel.getByRole('button', { name: 'Send a password-reset e-mail' }).count()).toBe(0);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'admin-account-disabled.png'), fullPage: true });
+    await keepScreenshot(page, 'admin-account-disabled.png', { fullPage: true });
     expect((await fetch(`${env.baseUrl}/c/${build.code}`)).status).toBe(404);
 
     // Its owner, with the right password, is told the account is turned off; a wrong password hears the usual answer.
@@ -66,7 +65,7 @@ describe('the site admin’s accounts page', () => {
     await ownerPage.getByLabel('Password').fill(owner.password);
     await ownerPage.getByRole('button', { name: 'Sign in' }).click();
     await ownerPage.getByText('This account is turned off. Ask the site admin.').waitFor();
-    await ownerPage.screenshot({ path: path.join(SCREENSHOT_DIR, 'sign-in-turned-off.png') });
+    await keepScreenshot(ownerPage, 'sign-in-turned-off.png');
     await ownerPage.getByLabel('Password').fill(`${owner.password}-wrong`);
     await ownerPage.getByRole('button', { name: 'Sign in' }).click();
     await ownerPage.getByText('E-mail or password is not right.').waitFor();
@@ -130,7 +129,7 @@ describe('the site admin’s accounts page', () => {
       const open = (await box.getByRole('button', { name: `Open ${names[0]}` }).boundingBox())!;
       const outer = (await box.boundingBox())!;
       expect(open.x + open.width).toBeLessThanOrEqual(outer.x + outer.width);
-      await page.screenshot({ path: path.join(SCREENSHOT_DIR, `admin-accounts-${width}.png`), fullPage: true });
+      await keepScreenshot(page, `admin-accounts-${width}.png`, { fullPage: true });
     }
   });
 
@@ -156,10 +155,10 @@ describe('the site admin’s accounts page', () => {
       }
     }
     expect(await phone.getByRole('listitem', { name: names[1] }).getByRole('switch', { name: `May organise: ${names[1]}` }).getAttribute('aria-checked')).toBe('true');
-    await phone.screenshot({ path: path.join(SCREENSHOT_DIR, 'admin-accounts-phone.png'), fullPage: true });
+    await keepScreenshot(phone, 'admin-accounts-phone.png', { fullPage: true });
 
     await phone.getByRole('button', { name: `Open ${names[0]}` }).click();
     await phone.getByRole('region', { name: names[0] }).getByText('No builds yet.').waitFor();
-    await phone.screenshot({ path: path.join(SCREENSHOT_DIR, 'admin-account-open-phone.png'), fullPage: true });
+    await keepScreenshot(phone, 'admin-account-open-phone.png', { fullPage: true });
   });
 });

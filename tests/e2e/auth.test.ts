@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { createUser, uniqueEmail } from '../support/factories';
 import { waitForMail } from '../support/mailbox';
 
@@ -24,7 +23,7 @@ describe('a newcomer in the browser', () => {
     await page.getByRole('button', { name: 'Make my account' }).click();
     await page.getByRole('heading', { name: 'Check your inbox' }).waitFor();
     await page.getByText('Demo mode: mail is caught, not sent.').waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'sign-up-check-inbox-phone.png'), fullPage: true });
+    await keepScreenshot(page, 'sign-up-check-inbox-phone.png', { fullPage: true });
 
     // Signed in before confirming (once the mail is there, as a person would): a banner asks for the confirmation.
     await waitForMail(email);
@@ -35,7 +34,7 @@ describe('a newcomer in the browser', () => {
     await page.waitForURL(`${env.baseUrl}/builds`);
     const banner = page.getByRole('region', { name: 'Confirm your e-mail address' });
     await banner.waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'verify-banner-phone.png'), fullPage: true });
+    await keepScreenshot(page, 'verify-banner-phone.png', { fullPage: true });
 
     // The site admin reads the caught confirmation mail; the newcomer follows its link.
     const desk = await env.browser.newPage();
@@ -48,13 +47,13 @@ describe('a newcomer in the browser', () => {
     await desk.getByRole('link', { name: new RegExp(`Confirm your e-mail address for Placard.*${email}`) }).click();
     const link = desk.getByRole('link', { name: /verify-email\?token=/ });
     await link.waitFor();
-    await desk.screenshot({ path: path.join(SCREENSHOT_DIR, 'caught-confirmation-mail.png'), fullPage: true });
+    await keepScreenshot(desk, 'caught-confirmation-mail.png', { fullPage: true });
     // The mail points at PUBLIC_BASE_URL; the test server listens elsewhere, so follow the same path here.
     const { pathname, search } = new URL((await link.getAttribute('href'))!);
     await desk.close();
     await page.goto(`${env.baseUrl}${pathname}${search}`);
     await page.getByText('Your e-mail address is confirmed.').waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'verify-email-done-phone.png'), fullPage: true });
+    await keepScreenshot(page, 'verify-email-done-phone.png', { fullPage: true });
     await expect.poll(() => banner.count()).toBe(0);
 
     // Signing out lands on the home page (a whole new page load): wait for it before going on.
@@ -73,7 +72,7 @@ describe('a newcomer in the browser', () => {
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL(`${env.baseUrl}/builds`);
     await page.getByText('Signed in as Kit Ellery.').waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'signed-in-lands-on-my-builds-phone.png'), fullPage: true });
+    await keepScreenshot(page, 'signed-in-lands-on-my-builds-phone.png', { fullPage: true });
     expect(await banner.count()).toBe(0);
 
     // Signed in, the sign-in and sign-up pages say so instead of offering a form.
@@ -101,7 +100,7 @@ describe('a newcomer in the browser', () => {
     await page.getByLabel('Password').fill('a long browser password');
     await page.getByRole('button', { name: 'Make my account' }).click();
     await page.getByRole('heading', { name: 'Check your inbox' }).waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'sign-up-check-inbox-on-the-way-phone.png'), fullPage: true });
+    await keepScreenshot(page, 'sign-up-check-inbox-on-the-way-phone.png', { fullPage: true });
 
     // The mail's link, opened in a new tab of the same browser (as a mail app hands it over).
     const link = new URL((await waitForMail(email)).text.match(/http\S+verify-email\?token=\S+/)![0]);
@@ -110,7 +109,7 @@ describe('a newcomer in the browser', () => {
     await tab.waitForURL(`${env.baseUrl}/account`);
     await tab.getByText('Signed in as Oren Castell.').waitFor();
     expect(await tab.getByRole('region', { name: 'Confirm your e-mail address' }).count()).toBe(0);
-    await tab.screenshot({ path: path.join(SCREENSHOT_DIR, 'sign-up-link-signs-in-phone.png'), fullPage: true });
+    await keepScreenshot(tab, 'sign-up-link-signs-in-phone.png', { fullPage: true });
     await browser.close();
 
     // Someone else's browser: a second newcomer's link opened there confirms, and signs nobody in.

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import path from 'node:path';
-import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
@@ -54,13 +53,13 @@ describe('leaving the build editor never drops an edit', () => {
       const summary = page.locator('[data-testid=save-summary]:visible');
       await expect.poll(() => summary.textContent()).toBe('● Not saved: Engine');
       await engine.scrollIntoViewIfNeeded();
-      await page.screenshot({ path: path.join(SCREENSHOT_DIR, `build-editor-not-saved-${name}.png`) });
+      await keepScreenshot(page, `build-editor-not-saved-${name}.png`);
 
       // Leaving with it names the panel and why, and staying keeps the edit in the box.
       await page.getByRole('link', { name: '← My builds' }).click();
       const dialog = page.getByRole('dialog');
       await expect.poll(() => dialog.textContent()).toContain('Engine: Bore must be between 20 and 200 mm.');
-      await page.screenshot({ path: path.join(SCREENSHOT_DIR, `build-editor-leave-not-saved-${name}.png`) });
+      await keepScreenshot(page, `build-editor-leave-not-saved-${name}.png`);
       await dialog.getByRole('button', { name: 'Stay and fix' }).click();
       expect(new URL(page.url()).pathname).toBe(editorPath);
       await expect.poll(() => engine.getByLabel('Bore', { exact: true }).inputValue()).toBe('2000');
@@ -104,7 +103,7 @@ describe('leaving the build editor never drops an edit', () => {
     await engine.getByLabel('Exhaust').fill('Side pipes');
     await expect.poll(() => engine.getByRole('status').textContent()).toBe('● Not saved: Exhaust is refused by the server for this test.');
     await expect.poll(() => engine.getByRole('alert').filter({ hasText: 'Exhaust is refused by the server for this test.' }).count()).toBeGreaterThan(0);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-server-refused-desktop.png') });
+    await keepScreenshot(page, 'build-editor-server-refused-desktop.png');
 
     // Leaving says so too; once the server takes it, the edit (still in the box) is stored.
     await page.getByRole('link', { name: '← My builds' }).click();
@@ -209,7 +208,7 @@ describe('leaving the build editor never drops an edit', () => {
     const dialog = page.getByRole('dialog', { name: 'Not saved' });
     await dialog.getByText('Dyno run: not added yet. Press “Add the run”, or leave without it.').waitFor();
     await dialog.getByText('Weigh-in: not added yet. Press “Add the weigh-in”, or leave without it.').waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'editor-leave-unadded-phone.png') });
+    await keepScreenshot(page, 'editor-leave-unadded-phone.png');
     await dialog.getByRole('button', { name: 'Stay and fix' }).click();
     expect(new URL(page.url()).pathname).toBe(`/builds/${build.id}`);
     expect(await run.getByLabel('Facility').inputValue()).toBe('The rolling road behind the grain store');

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
-import path from 'node:path';
-import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -96,8 +95,8 @@ describe('credits and extra lines in the build editor', () => {
       const fit = await value.evaluate((el) => ({ scroll: el.scrollHeight, client: el.clientHeight, width: el.clientWidth }));
       expect(fit.scroll, `at ${width} px the value's text fits its box`).toBeLessThanOrEqual(fit.client + 1);
       expect(fit.client, `at ${width} px the value's box is taller than one line`).toBeGreaterThan(44);
-      await page.locator('#section-extra').screenshot({ path: path.join(SCREENSHOT_DIR, `build-editor-extra-lines-${width}.png`) });
-      await page.locator('#section-credits').screenshot({ path: path.join(SCREENSHOT_DIR, `build-editor-credits-${width}.png`) });
+      await keepScreenshot(page.locator('#section-extra'), `build-editor-extra-lines-${width}.png`);
+      await keepScreenshot(page.locator('#section-credits'), `build-editor-credits-${width}.png`);
     }
 
     // After a reload the long value is stored and shown whole.

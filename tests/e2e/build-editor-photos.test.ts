@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import path from 'node:path';
 import sharp from 'sharp';
-import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
@@ -40,7 +39,7 @@ describe('photos in the build editor', () => {
     ]);
     const alerts = photos.getByRole('alert');
     await expect.poll(() => alerts.allTextContents()).toEqual(['sketch.gif is not a JPEG, PNG, WebP or AVIF image.', 'notes.jpg is not a JPEG, PNG, WebP or AVIF image.']);
-    await photos.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-photos-refused-desktop.png') });
+    await keepScreenshot(photos, 'build-editor-photos-refused-desktop.png');
 
     // Three chosen at once: the largest (slowest to resize) is chosen first and still becomes the cover, and the order is kept.
     await input.setInputFiles([await drawn('front.jpg', 2400, 1600, '#7a3b1e'), await drawn('cab.jpg', 800, 1000, '#2f4a3a'), await drawn('dash.jpg', 640, 480, '#c9b48a')]);
@@ -67,11 +66,11 @@ describe('photos in the build editor', () => {
     const fit = await caption.evaluate((el) => ({ width: el.clientWidth, scroll: el.scrollHeight, client: el.clientHeight }));
     expect(fit.width).toBeGreaterThanOrEqual(200);
     expect(fit.scroll).toBeLessThanOrEqual(fit.client + 1);
-    await photos.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-photos-desktop.png') });
+    await keepScreenshot(photos, 'build-editor-photos-desktop.png');
 
     await page.setViewportSize({ width: 390, height: 844 });
     expect(await caption.evaluate((el) => el.clientWidth)).toBeGreaterThanOrEqual(280);
-    await photos.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-photos-phone.png') });
+    await keepScreenshot(photos, 'build-editor-photos-phone.png');
     await context.close();
   }, 120_000);
 });

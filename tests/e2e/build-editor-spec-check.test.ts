@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Locator } from 'playwright-core';
-import path from 'node:path';
-import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
@@ -38,13 +37,13 @@ describe('spec-check messages in the build editor', () => {
     expect(await engine.getByText(WHY).first().isVisible()).toBe(false);
     await notes.first().getByText('Why?').click();
     await expect.poll(() => engine.getByText(WHY).first().isVisible()).toBe(true);
-    await panel.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-spec-check-panel-desktop.png') });
+    await keepScreenshot(panel, 'build-editor-spec-check-panel-desktop.png');
     await engine.getByLabel('Flywheel power', { exact: true }).scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-spec-check-field-desktop.png') });
+    await keepScreenshot(page, 'build-editor-spec-check-field-desktop.png');
 
     await page.setViewportSize({ width: 390, height: 844 });
     await engine.getByLabel('Flywheel torque', { exact: true }).scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-spec-check-field-phone.png') });
+    await keepScreenshot(page, 'build-editor-spec-check-field-phone.png');
     await context.close();
   }, 120_000);
 });

@@ -4,7 +4,7 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
-import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 
 const env = useBrowserAndServer();
@@ -22,7 +22,7 @@ afterAll(async () => {
   if (tmp) await rm(tmp, { recursive: true, force: true });
 });
 
-const shot = (page: Page, name: string) => page.screenshot({ path: path.join(SCREENSHOT_DIR, name), fullPage: true });
+const shot = (page: Page, name: string) => keepScreenshot(page, name, { fullPage: true });
 
 const DYNO_CSV = ['rpm,power,torque', '2500,160,336', '3000,205,359', '3500,244,366', '4000,281,369', '4500,312,364', '5000,334,351', '5500,342,327', '6000,338,296'].join('\n');
 
@@ -58,7 +58,7 @@ describe('the build editor in the browser', () => {
     const engineNumbers = page.getByTestId('section-numbers-engine');
     await expect.poll(() => engineNumbers.textContent()).toMatch(/302\sin³/);
     await engineNumbers.scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-engine-phone.png') });
+    await keepScreenshot(page, 'build-editor-engine-phone.png');
     await engineNumbers.getByRole('button', { name: 'metric' }).click();
     await expect.poll(() => engineNumbers.textContent()).toMatch(/4,942\scm³/);
     // No Save button: the panel saves itself once the typing stops.
@@ -75,7 +75,7 @@ describe('the build editor in the browser', () => {
     await expect.poll(() => wheelNumbers.textContent()).toContain('Rear tyre diameter');
     await expect.poll(() => wheelNumbers.textContent()).toContain('Rear backspacing');
     await expect.poll(() => wheels.getByRole('status').filter({ hasText: /^Saved$/ }).count()).toBeGreaterThan(0);
-    await wheels.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-wheels-phone.png') });
+    await keepScreenshot(wheels, 'build-editor-wheels-phone.png');
 
     // A tyre code that does not read is not sent: the schema's message is on the field and in the status.
     await wheels.getByLabel('Tyre size').nth(0).fill('245/40X18');
@@ -117,14 +117,14 @@ describe('the build editor in the browser', () => {
     await expect.poll(() => run.getByText(/no torque column/).count()).toBe(1);
     await run.getByLabel('Curve as CSV').fill(DYNO_CSV);
     await expect.poll(() => run.getByTestId('csv-preview').textContent()).toContain('8 points');
-    await run.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-dyno-form-phone.png') });
+    await keepScreenshot(run, 'build-editor-dyno-form-phone.png');
     await run.getByRole('button', { name: 'Add the run' }).click();
     // The editor draws the public page's SVG chart: one solid power and one dashed torque curve for the run.
     const chart = dyno.getByRole('img', { name: /Dyno curves, power solid and torque dashed/ });
     await expect.poll(() => chart.getAttribute('aria-labelledby')).toBe('editor-dyno-title');
     await expect.poll(() => chart.locator('path').count()).toBe(2);
     await expect.poll(() => chart.locator('path[stroke-dasharray]').count()).toBe(1);
-    await dyno.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-dyno-phone.png') });
+    await keepScreenshot(dyno, 'build-editor-dyno-phone.png');
     await dyno.getByRole('button', { name: 'Use as the build’s power figure' }).click();
     await expect.poll(() => dyno.getByText(/now measured on/).count()).toBe(1);
 
@@ -140,12 +140,12 @@ describe('the build editor in the browser', () => {
     await weigh.getByLabel('LR · Left rear').fill('334');
     await weigh.getByLabel('RR · Right rear').fill('343');
     await expect.poll(() => weigh.textContent()).toMatch(/Total\s*1,287\skg/);
-    await weigh.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-weigh-in-form-phone.png') });
+    await keepScreenshot(weigh, 'build-editor-weigh-in-form-phone.png');
     await weigh.getByRole('button', { name: 'Add the weigh-in' }).click();
     await page.getByRole('button', { name: 'Use as the build’s weight' }).click();
     await expect.poll(() => page.locator('#section-history').textContent()).toMatch(/estimated 1,250\skg → measured 1,287\skg on \d{4}-\d{2}-\d{2}/);
     await expect.poll(() => overview.getByLabel('Weight', { exact: true }).inputValue()).toBe('1287');
-    await page.locator('#section-weighIns').screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-weigh-ins-phone.png') });
+    await keepScreenshot(page.locator('#section-weighIns'), 'build-editor-weigh-ins-phone.png');
 
     // Text saves itself too (leaving at once is covered by build-editor-autosave.test.ts).
     await page.getByRole('form', { name: 'Body and interior' }).getByLabel('Paint').fill('Deep oxblood, hand-rubbed');
@@ -171,7 +171,7 @@ describe('the build editor in the browser', () => {
     const panel = deskPage.getByTestId('numbers-panel');
     await expect.poll(() => panel.textContent()).toMatch(/Displacement/);
     await expect.poll(() => panel.textContent()).toMatch(/At the flywheel/);
-    await deskPage.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-desktop.png') });
+    await keepScreenshot(deskPage, 'build-editor-desktop.png');
     // A stated displacement that bore × stroke cannot give: the spec check says so beside the field and in the panel.
     const deskEngine = deskPage.getByRole('form', { name: 'Engine' });
     await deskEngine.getByLabel('Displacement (as stated) unit').selectOption('L');
@@ -181,7 +181,7 @@ describe('the build editor in the browser', () => {
     // The message names the section and the field, not just the section.
     await expect.poll(() => panel.getByTestId('spec-check-message').allTextContents()).toEqual([expect.stringMatching(/^Engine · displacement: /)]);
     await deskEngine.getByLabel('Displacement (as stated)', { exact: true }).scrollIntoViewIfNeeded();
-    await deskPage.screenshot({ path: path.join(SCREENSHOT_DIR, 'build-editor-desktop-spec-check.png') });
+    await keepScreenshot(deskPage, 'build-editor-desktop-spec-check.png');
 
     // Deleting asks for the title first, then leaves for My builds (unsaved edits no longer matter).
     await deskPage.getByRole('button', { name: 'Delete build' }).click();

@@ -3,7 +3,7 @@ import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { KEEP_SCREENSHOTS, SCREENSHOT_DIR, keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { PDFTOPPM, pdfText, rasterize, readQr } from '../support/pdf';
 import { cardWorker, numberOnPage, pagesOf, showWithConfirmedEntries } from '../support/card-print-helpers';
@@ -20,7 +20,7 @@ async function signIn(page: Page, email: string) {
 }
 
 /** Pages of a PDF as PNGs beside the screenshots, to look at. */
-const pdfToPngs = (file: string, name: string, last = 2) => execFileSync(PDFTOPPM, ['-r', '60', '-png', '-f', '1', '-l', String(last), file, path.join(SCREENSHOT_DIR, name)]);
+const pdfToPngs = (file: string, name: string, last = 2) => KEEP_SCREENSHOTS && execFileSync(PDFTOPPM, ['-r', '60', '-png', '-f', '1', '-l', String(last), file, path.join(SCREENSHOT_DIR, name)]);
 
 // Enough cards that the job outlasts a few polls of the page, so the bar is seen between empty and full.
 const CARDS = 100;
@@ -52,7 +52,7 @@ describe('numbered cards in bulk, from the organiser’s entries page', { timeou
     const bar = panel.getByRole('progressbar', { name: 'Cards done' });
     await bar.waitFor();
     expect(await bar.getAttribute('aria-valuemax')).toBe(String(CARDS));
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'bulk-print-progress.png') });
+    await keepScreenshot(page, 'bulk-print-progress.png');
     const link = panel.getByRole('link', { name: `Download the PDF (${CARDS} cards)` });
     await link.waitFor({ timeout: 30_000 });
     const seen = await page.evaluate(() => (window as unknown as { barSeen: number[] }).barSeen);
@@ -61,7 +61,7 @@ describe('numbered cards in bulk, from the organiser’s entries page', { timeou
     expect(seen.some((v) => v > 0 && v < CARDS)).toBe(true); // it moved through the job, not just from empty to gone
     expect([...seen].sort((a, b) => a - b)).toEqual(seen);
     expect(await panel.getByText(`${CARDS} cards drawn`).count()).toBe(1);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'bulk-print-done.png') });
+    await keepScreenshot(page, 'bulk-print-done.png');
 
     const [download] = await Promise.all([page.waitForEvent('download'), link.click()]);
     const file = await download.path();
@@ -89,7 +89,7 @@ describe('numbered cards in bulk, from the organiser’s entries page', { timeou
     const third = expected[2]!;
     const cardLink = ownerPage.getByRole('link', { name: `Download the card for entry ${third.number}`, exact: true });
     await cardLink.waitFor();
-    await ownerPage.screenshot({ path: path.join(SCREENSHOT_DIR, 'my-entries-card-link.png'), fullPage: false });
+    await keepScreenshot(ownerPage, 'my-entries-card-link.png', { fullPage: false });
     const [cardDownload] = await Promise.all([ownerPage.waitForEvent('download'), cardLink.click()]);
     const cardFile = await cardDownload.path();
     const card = readFileSync(cardFile);

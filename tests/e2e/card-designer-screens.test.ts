@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -54,7 +53,7 @@ describe('the card designer on a phone and a desktop', () => {
     expect(p.width).toBeGreaterThan(300);
     expect((await boxOf(page, designPanel)).y).toBeGreaterThan(p.y + p.height);
     expect(await shapeOf(page)).toBeCloseTo(792 / 612, 1);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'card-designer-phone.png') });
+    await keepScreenshot(page, 'card-designer-phone.png');
 
     // Every section ticked and a long story on Letter: the card cannot hold it all, and the designer names what gave way.
     const leftOff = page.getByRole('status', { name: 'Left off the card' });
@@ -63,7 +62,7 @@ describe('the card designer on a phone and a desktop', () => {
     expect(await leftOff.innerText()).toContain('Not everything fits on this paper');
     expect(await leftOff.innerText()).toContain('Story: cut short');
     await leftOff.scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'card-designer-phone-left-off.png') });
+    await keepScreenshot(page, 'card-designer-phone-left-off.png');
 
     // Compact on Tabloid landscape: the preview asks for that card and takes that shape; the note follows the new render.
     await page.getByRole('radio', { name: /Compact/ }).check();
@@ -74,7 +73,7 @@ describe('the card designer on a phone and a desktop', () => {
     expect(await shapeOf(page)).toBeCloseTo(792 / 1224, 1);
     await expect.poll(() => leftOff.innerText()).toMatch(/Story: (left off|cut short)/);
     await preview.scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'card-designer-phone-compact-tabloid.png') });
+    await keepScreenshot(page, 'card-designer-phone-compact-tabloid.png');
     await context.close();
   });
 
@@ -94,7 +93,7 @@ describe('the card designer on a phone and a desktop', () => {
     expect(await shapeOf(page)).toBeCloseTo(1190.55 / 841.89, 1);
     // The usual build fits whole on A3, and the designer says so.
     await expect.poll(() => page.getByText('Everything you ticked fits on this card.').count()).toBe(1);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'card-designer-desktop.png'), fullPage: true });
+    await keepScreenshot(page, 'card-designer-desktop.png', { fullPage: true });
     await context.close();
   });
 });

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
-import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 import { mediaBoxes, pageCount } from '../support/pdf';
@@ -38,7 +37,7 @@ describe('the card designer', () => {
     const savedSettings = async () => (await Build.findByPk(build.id))!.cardSettings as Record<string, unknown> & { sections?: string[] };
     await expect.poll(async () => (await savedSettings()).sections?.includes('extra')).toBe(false);
     expect(await savedSettings()).toMatchObject({ design: 'data-sheet', paper: 'a4', orientation: 'landscape' });
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'card-designer.png'), fullPage: true });
+    await keepScreenshot(page, 'card-designer.png', { fullPage: true });
 
     const [download] = await Promise.all([page.waitForEvent('download', (d) => d.suggestedFilename().includes('data-sheet-a4-landscape')), page.getByRole('link', { name: 'Download PDF' }).click()]);
     const pdf = readFileSync((await download.path())!);

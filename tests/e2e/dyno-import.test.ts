@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
-import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -36,7 +35,7 @@ describe('importing a dyno export', () => {
     expect(await run.getByRole('alert').filter({ hasText: 'Enter the rpm at peak torque.' }).count()).toBe(1);
     expect(await box('Rpm at peak torque').getAttribute('aria-invalid')).toBe('true');
     await box('Peak power').scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-import-peaks-missing-phone.png') });
+    await keepScreenshot(page, 'dyno-import-peaks-missing-phone.png');
 
     // A file with a missing column: the problem is said once, under the field.
     await run.getByLabel('Import the dyno’s CSV file').setInputFiles({ name: 'broken.csv', mimeType: 'text/csv', buffer: Buffer.from('RPM,HP\n3000,200\n') });
@@ -53,7 +52,7 @@ describe('importing a dyno export', () => {
     expect(await preview.count()).toBe(0);
     expect(await box('Peak power').inputValue()).toBe('');
     await pasted.scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-import-negative-phone.png') });
+    await keepScreenshot(page, 'dyno-import-negative-phone.png');
     // Rows in falling rpm read low to high.
     await pasted.fill('RPM,HP,TQ\n6000,310,271.4\n4000,221.3,290.6');
     await expect.poll(() => preview.textContent()).toContain('Reads as 2 points, 4,000–6,000 rpm');
@@ -70,16 +69,16 @@ describe('importing a dyno export', () => {
     await expect.poll(() => preview.locator('svg path').count()).toBeGreaterThanOrEqual(2);
     expect(await run.getByText(/no torque column/).count()).toBe(0);
     await preview.scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-import-preview-phone.png') });
+    await keepScreenshot(page, 'dyno-import-preview-phone.png');
     await page.setViewportSize({ width: 1366, height: 900 });
     await preview.scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-import-preview-desktop.png') });
+    await keepScreenshot(page, 'dyno-import-preview-desktop.png');
 
     await run.getByTestId('peaks-hint').scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-import-peaks-desktop.png') });
+    await keepScreenshot(page, 'dyno-import-peaks-desktop.png');
     await page.setViewportSize({ width: 390, height: 844 });
     await run.getByTestId('peaks-hint').scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-import-peaks-phone.png') });
+    await keepScreenshot(page, 'dyno-import-peaks-phone.png');
 
     // The owner changes one peak (the printed sheet rounds it otherwise); the others stay as read.
     await box('Rpm at peak torque').fill('4400');
@@ -88,7 +87,7 @@ describe('importing a dyno export', () => {
     await expect.poll(() => dyno.getByText(/Gravel Pit rolling road/).count()).toBeGreaterThan(0);
     // Figures as entered: no decimals the owner never gave.
     expect(await dyno.locator('li').filter({ hasText: 'Gravel Pit rolling road' }).innerText()).toContain('310 hp at 6,000 rpm · 294 lb·ft at 4,400 rpm');
-    await dyno.locator('li').filter({ hasText: 'Gravel Pit rolling road' }).screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-import-run-phone.png') });
+    await keepScreenshot(dyno.locator('li').filter({ hasText: 'Gravel Pit rolling road' }), 'dyno-import-run-phone.png');
 
     // The public page: the run in the list of runs and its eight points drawn as the power and torque curves.
     await page.goto(`${env.baseUrl}/c/${build.code}`);
@@ -96,7 +95,7 @@ describe('importing a dyno export', () => {
     expect(await section.locator('ol.runs').innerText()).toContain('Gravel Pit rolling road');
     const curves = await section.locator('svg path').evaluateAll((paths) => paths.map((p) => p.getAttribute('d') ?? ''));
     expect(curves.filter((d) => d.startsWith('M') && (d.match(/L/g) ?? []).length === 7).length).toBeGreaterThanOrEqual(2);
-    await section.screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-import-public-desktop.png') });
+    await keepScreenshot(section, 'dyno-import-public-desktop.png');
     await context.close();
   });
 
@@ -113,7 +112,7 @@ describe('importing a dyno export', () => {
     await run.getByRole('button', { name: 'Add the run' }).click();
     await expect.poll(() => run.getByRole('alert').filter({ hasText: 'Row 2: Curve power must be at least 0.' }).count()).toBe(1);
     await run.getByLabel('Row 2 power').scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'dyno-typed-rows-error-phone.png') });
+    await keepScreenshot(page, 'dyno-typed-rows-error-phone.png');
     await run.getByLabel('Row 2 power').fill('277.4');
     await expect.poll(() => Promise.all(['Peak power', 'Rpm at peak power', 'Peak torque', 'Rpm at peak torque'].map((l) => box(l).inputValue()))).toEqual(['310', '6000', '291.4', '5000']);
     await run.getByRole('button', { name: 'Add the run' }).click();

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
-import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
@@ -26,7 +25,7 @@ describe('a figure’s live conversion', () => {
     await expect.poll(() => field.getByRole('alert').count()).toBeGreaterThan(0);
     expect(await field.innerText()).not.toContain('≈');
     await field.scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'figure-input-negative-phone.png') });
+    await keepScreenshot(page, 'figure-input-negative-phone.png');
     await page.close();
   });
 });

@@ -4,7 +4,7 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { chromium } from 'playwright-core';
-import { CHROMIUM, CHROMIUM_ARGS, SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { CHROMIUM, CHROMIUM_ARGS, keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { showWithClasses } from '../support/event-factory';
 import { enter, enterAs, memberOf, step } from '../support/show-day-factory';
@@ -69,7 +69,7 @@ describe('the gate on a phone', () => {
       await expect.poll(() => car.getByText('Checked in.').count()).toBe(1);
       expect(await car.getByRole('button', { name: /Undo/ }).count()).toBe(1);
       await expect.poll(() => page.getByLabel('Hot rods: 1 of 1 arrived').count(), { timeout: 15_000 }).toBe(1);
-      await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'gate-scanned.png'), fullPage: true });
+      await keepScreenshot(page, 'gate-scanned.png', { fullPage: true });
       expect((await Entry.findByPk(paid.entry.id))!.status).toBe('checked_in');
 
       await page.getByLabel('Entry number').fill(String(unpaid.entry.number));
@@ -77,7 +77,7 @@ describe('the gate on a phone', () => {
       await expect.poll(() => car.getByText('Typed coupe').count()).toBe(1);
       expect(await car.getByText(/not paid yet/).count()).toBe(1);
       expect(await car.getByRole('button', { name: 'Check in', exact: true }).count()).toBe(0);
-      await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'gate-unpaid.png'), fullPage: true });
+      await keepScreenshot(page, 'gate-unpaid.png', { fullPage: true });
       await car.getByRole('button', { name: 'Take €25.00 cash and check in' }).click();
       await expect.poll(() => car.getByText('Checked in.').count()).toBe(1);
       expect(await car.getByText('Payment: Paid').count()).toBe(1);

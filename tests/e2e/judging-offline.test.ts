@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
 import { Score } from '@server/models/score';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { judgeOf, showInJudging } from '../support/judging-factory';
 
@@ -24,7 +23,7 @@ describe('judging on a phone with no signal', () => {
     await expect.poll(() => page.getByText('My cars: 0 of 4 scored').count()).toBe(1);
     // The service worker has kept the shell and its assets once it is active (it then answers the next load of /judge…).
     await expect.poll(() => page.evaluate(async () => (await navigator.serviceWorker.getRegistration('/judge'))?.active?.state)).toBe('activated');
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'judge-cars-phone.png'), fullPage: true });
+    await keepScreenshot(page, 'judge-cars-phone.png', { fullPage: true });
 
     await page.getByRole('link', { name: /First car/ }).click();
     await page.getByRole('heading', { name: 'First car' }).waitFor();
@@ -47,7 +46,7 @@ describe('judging on a phone with no signal', () => {
       if (car === 0) {
         await page.getByLabel('Comment on the whole car').fill('Clean underside, loose trim on the left door.');
         await page.getByLabel('Comment on paint and body').click(); // leaving the box saves it
-        await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'judge-sheet-phone-offline.png'), fullPage: true });
+        await keepScreenshot(page, 'judge-sheet-phone-offline.png', { fullPage: true });
       }
       if (car < 2) await page.getByRole('link', { name: /^No\. \d+ →$/ }).tap();
       await page.getByRole('heading', { name: car < 2 ? `Car ${car + 2}` : 'Car 3' }).waitFor();
@@ -57,7 +56,7 @@ describe('judging on a phone with no signal', () => {
     await page.getByRole('link', { name: 'My cars' }).tap();
     await expect.poll(() => page.getByText(/10 lines not yet sent/).count()).toBe(1);
     expect(await Score.count({ where: { eventId: show.eventId } })).toBe(0);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'judge-cars-phone-unsent.png'), fullPage: true });
+    await keepScreenshot(page, 'judge-cars-phone-unsent.png', { fullPage: true });
 
     await context.setOffline(false);
     await expect.poll(() => page.getByText('Everything is sent.').count()).toBe(1);
@@ -69,7 +68,7 @@ describe('judging on a phone with no signal', () => {
         expect(matching.map((r) => r.points)).toEqual([picks[car]![i]]);
       }
     }
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'judge-cars-phone-sent.png'), fullPage: true });
+    await keepScreenshot(page, 'judge-cars-phone-sent.png', { fullPage: true });
     await context.close();
   });
 });

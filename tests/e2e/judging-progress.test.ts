@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { judgeOf, scoreItem, showInJudging } from '../support/judging-factory';
 
@@ -23,7 +22,7 @@ describe('the organiser watches judging', () => {
     await panel.getByRole('row', { name: /Pat Marker/ }).waitFor();
     expect(await panel.getByRole('row', { name: /Pat Marker/ }).innerText()).toMatch(/1 \/ 2\s+0\s+1\s+2/);
     expect(await panel.getByRole('row', { name: /Hot rods/ }).innerText()).toMatch(/1 with 0 · 1 with 1/);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'judging-progress-organiser.png'), fullPage: true });
+    await keepScreenshot(page, 'judging-progress-organiser.png', { fullPage: true });
 
     await panel.getByRole('button', { name: 'Close judging' }).click();
     await panel.getByText(/Judging is closed/).waitFor();

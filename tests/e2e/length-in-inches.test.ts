@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
-import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
@@ -32,7 +31,7 @@ describe('lengths the sheet keeps in millimetres', () => {
       return [link?.cgHeightMm, link?.lowerRear?.x];
     }).toEqual([457.2, -50.8]);
     await cg.scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'length-in-inches-desktop.png') });
+    await keepScreenshot(page, 'length-in-inches-desktop.png');
 
     // Shown again in millimetres, the same length.
     await chassis.getByLabel('Centre of gravity height unit').selectOption('mm');
@@ -62,7 +61,7 @@ describe('lengths the sheet keeps in millimetres', () => {
     await cg.fill('9999');
     await chassis.getByText('Centre of gravity height must be between 3.94 and 59.06\u00a0in (100 to 1500 mm).').waitFor();
     await cg.scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'length-in-inches-range-desktop.png') });
+    await keepScreenshot(page, 'length-in-inches-range-desktop.png');
     await page.close();
   });
 });

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
-import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -23,14 +22,14 @@ describe('My builds in one unit system', () => {
     // Metric for a British browser: power in kW, displacement in litres, weight in kilograms; no hp, PS or cm³ beside them.
     expect((await figures()).join(' | ')).toMatch(/kW.*\|.*L.*\|.*kg/);
     expect((await figures()).join(' ')).not.toMatch(/hp|PS|cm³|lb/);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, `my-builds-metric-${device}.png`), fullPage: true });
+    await keepScreenshot(page, `my-builds-metric-${device}.png`, { fullPage: true });
 
     await page.getByRole('button', { name: 'Imperial' }).click();
     await expect.poll(async () => (await figures()).join(' | ')).toMatch(/hp.*\|.*in³.*\|.*lb/);
     await page.reload();
     await expect.poll(async () => (await figures()).join(' | ')).toMatch(/hp.*\|.*in³.*\|.*lb/);
     expect(await page.getByRole('button', { name: 'Imperial' }).getAttribute('aria-pressed')).toBe('true');
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, `my-builds-imperial-${device}.png`), fullPage: true });
+    await keepScreenshot(page, `my-builds-imperial-${device}.png`, { fullPage: true });
     await context.close();
   });
 });

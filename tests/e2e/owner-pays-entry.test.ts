@@ -1,10 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import path from 'node:path';
 import type { Browser } from 'playwright-core';
 import { config } from '@server/config';
 import { User } from '@server/models/user';
 import { Entry } from '@server/models/entry';
-import { launchBrowser, SCREENSHOT_DIR } from '../support/browser';
+import { launchBrowser, keepScreenshot } from '../support/browser';
 import { createBuild } from '../support/build-factory';
 import { showWithClasses } from '../support/event-factory';
 import { DEFAULT_PASSWORD, uniqueEmail } from '../support/factories';
@@ -54,17 +53,17 @@ describe('an owner entering a paid show', () => {
     await page.getByRole('button', { name: 'Enter the car' }).click();
     await page.waitForURL(`${env.baseUrl}/entries`);
     await page.getByText('Pay the entry fee of $30.00 to confirm number 1.').waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'entry-awaiting-payment-phone.png'), fullPage: true });
+    await keepScreenshot(page, 'entry-awaiting-payment-phone.png', { fullPage: true });
 
     await page.getByRole('button', { name: 'Pay $30.00' }).click();
     await page.waitForURL(/\/pay\//);
     await page.getByText('Entry 1 — Lantern Hill Drive-In').waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'fake-checkout-phone.png'), fullPage: true });
+    await keepScreenshot(page, 'fake-checkout-phone.png', { fullPage: true });
     await page.getByRole('button', { name: 'Pay $30.00' }).click();
 
     await page.waitForURL(/\/entries\?paid=\d+/);
     await page.getByText('Paid, thank you: number 1 in Lantern Hill Drive-In is confirmed.').waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'entry-paid-phone.png'), fullPage: true });
+    await keepScreenshot(page, 'entry-paid-phone.png', { fullPage: true });
     const entry = (await Entry.findOne({ where: { ownerId: user.id } }))!;
     expect(entry).toMatchObject({ status: 'confirmed', paidAmount: 3000 });
     await waitForMailAbout(email, /paid|confirmed/i);
@@ -80,6 +79,6 @@ describe('an owner entering a paid show', () => {
     const row = desk.getByRole('row', { name: /Sectioned sedan delivery/ });
     await row.waitFor();
     await expect.poll(() => row.innerText()).toMatch(/Rae Paysworth[\s\S]*Confirmed[\s\S]*Paid/);
-    await desk.screenshot({ path: path.join(SCREENSHOT_DIR, 'organiser-sees-paid-entry.png'), fullPage: true });
+    await keepScreenshot(desk, 'organiser-sees-paid-entry.png', { fullPage: true });
   });
 });

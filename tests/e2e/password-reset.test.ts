@@ -1,6 +1,5 @@
 import { describe, it } from 'vitest';
-import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 
 const env = useBrowserAndServer();
@@ -30,7 +29,7 @@ describe('a forgotten password, in demo mode', () => {
     await desk.getByRole('link', { name: new RegExp(`Reset your Placard password.*${forgetful.email}`) }).click();
     const link = desk.getByRole('link', { name: /reset-password\?token=/ });
     await link.waitFor();
-    await desk.screenshot({ path: path.join(SCREENSHOT_DIR, 'caught-mail.png'), fullPage: true });
+    await keepScreenshot(desk, 'caught-mail.png', { fullPage: true });
     // The mail points at PUBLIC_BASE_URL; the test server listens elsewhere, so follow the same path here.
     const { pathname, search } = new URL((await link.getAttribute('href'))!);
     await phone.goto(`${env.baseUrl}${pathname}${search}`);

@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
 import { Build } from '@server/models/build';
 import { Entry } from '@server/models/entry';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { showInJudging } from '../support/judging-factory';
 
@@ -30,8 +29,8 @@ describe('people’s choice on a phone with JavaScript turned off', () => {
     expect(box!.height).toBeGreaterThanOrEqual(44);
     expect(box!.width).toBeGreaterThan(300); // the width of the phone, easy to hit with a thumb
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
-    await page.locator('#show-entry').screenshot({ path: path.join(SCREENSHOT_DIR, 'peoples-choice-vote-button.png') });
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'peoples-choice-page-phone.png') });
+    await keepScreenshot(page.locator('#show-entry'), 'peoples-choice-vote-button.png');
+    await keepScreenshot(page, 'peoples-choice-page-phone.png');
 
     const [posted] = await Promise.all([page.waitForResponse((r) => r.url().endsWith(`/c/${car1}/vote`)), button.click()]);
     expect(posted.status()).toBe(303);
@@ -39,14 +38,14 @@ describe('people’s choice on a phone with JavaScript turned off', () => {
     expect(page.url()).toBe(`${env.baseUrl}/c/${car1}#vote`);
     expect(await page.getByText(/went to this car/).count()).toBe(1);
     expect(await page.getByRole('button', { name: 'Vote for this car' }).count()).toBe(0);
-    await page.locator('#show-entry').screenshot({ path: path.join(SCREENSHOT_DIR, 'peoples-choice-thanks.png') });
+    await keepScreenshot(page.locator('#show-entry'), 'peoples-choice-thanks.png');
 
     // The tab opened before the vote still shows its button; pressing it is refused in words.
     const [refused] = await Promise.all([otherTab.waitForResponse((r) => r.url().endsWith(`/c/${car2}/vote`)), otherTab.getByRole('button', { name: 'Vote for this car' }).click()]);
     expect(refused.status()).toBe(409);
     await otherTab.getByRole('heading', { name: 'You have already voted' }).waitFor();
     expect(await otherTab.getByText(/for entry 1\./).count()).toBe(1);
-    await otherTab.screenshot({ path: path.join(SCREENSHOT_DIR, 'peoples-choice-refused.png') });
+    await keepScreenshot(otherTab, 'peoples-choice-refused.png');
     await otherTab.getByRole('link', { name: 'Back to the car' }).click();
     await otherTab.getByText(/went to entry 1/).waitFor();
     await phone.close();
@@ -63,7 +62,7 @@ describe('people’s choice on a phone with JavaScript turned off', () => {
     expect(await panel.getByRole('row', { name: /First car/ }).innerText()).toMatch(/^1\s+First car\s*leading\s+Hot rods\s+1$/i);
     expect(await panel.getByText(/^1 vote counted/).count()).toBe(1);
     await panel.scrollIntoViewIfNeeded();
-    await panel.screenshot({ path: path.join(SCREENSHOT_DIR, 'peoples-choice-organiser.png') });
+    await keepScreenshot(panel, 'peoples-choice-organiser.png');
 
     await panel.getByRole('button', { name: /^Void the votes of [0-9a-f]{10}$/ }).click();
     const dialog = org.getByRole('dialog', { name: 'Void these votes?' });
@@ -73,7 +72,7 @@ describe('people’s choice on a phone with JavaScript turned off', () => {
     expect(await panel.getByRole('row', { name: /First car/ }).innerText()).toMatch(/\s0$/);
     await panel.getByRole('button', { name: 'Close voting' }).click();
     await panel.getByRole('button', { name: 'Reopen voting' }).waitFor();
-    await panel.screenshot({ path: path.join(SCREENSHOT_DIR, 'peoples-choice-organiser-voided.png') });
+    await keepScreenshot(panel, 'peoples-choice-organiser-voided.png');
     await desk.close();
   });
 });

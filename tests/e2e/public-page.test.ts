@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 import { storePhotosForBuild } from '@server/services/photos';
@@ -26,12 +25,12 @@ describe('the public build page on a phone', () => {
     expect(await page.getByText(/3,415\s*lb/).count()).toBeGreaterThan(0);
     // Nothing wider than the phone.
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'public-page-phone.png'), fullPage: true });
+    await keepScreenshot(page, 'public-page-phone.png', { fullPage: true });
 
     await page.getByRole('link', { name: 'Metric', exact: true }).click();
     await page.waitForURL(/units=metric/);
     expect(await page.getByText(/1,549\s*kg/).count()).toBeGreaterThan(0);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'public-page-phone-top.png') });
+    await keepScreenshot(page, 'public-page-phone-top.png');
     await context.close();
   });
 
@@ -50,7 +49,7 @@ describe('the public build page on a phone', () => {
     const title = await page.getByRole('heading', { level: 1 }).boundingBox();
     expect(title!.y + title!.height).toBeLessThan(844);
     expect(firstFigure!.y + firstFigure!.height).toBeLessThan(844);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'public-page-portrait-cover-phone.png') });
+    await keepScreenshot(page, 'public-page-portrait-cover-phone.png');
 
     // British English: kilograms, with power in hp.
     await expect.poll(() => page.locator('.fig > div').first().innerText()).toMatch(/hp/);
@@ -59,7 +58,7 @@ describe('the public build page on a phone', () => {
     const dyno = page.locator('#dyno');
     await dyno.scrollIntoViewIfNeeded();
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
-    await dyno.screenshot({ path: path.join(SCREENSHOT_DIR, 'public-page-dyno-phone.png') });
+    await keepScreenshot(dyno, 'public-page-dyno-phone.png');
 
     const photoLinks = page.locator('a.big');
     expect(await photoLinks.count()).toBe(2);

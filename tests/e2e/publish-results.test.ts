@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { judgedShow } from '../support/results-factory';
 
@@ -39,7 +38,7 @@ describe('publishing results', () => {
     const hotRods = await panel.getByRole('table', { name: 'Hot rods' }).innerText();
     expect(hotRods).toMatch(/1st\s+\d+\s+Flathead\s+29\.00/);
     expect(hotRods).toMatch(/2nd\s+\d+\s+Deuce\s+29\.00/);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'results-review-organiser.png'), fullPage: true });
+    await keepScreenshot(page, 'results-review-organiser.png', { fullPage: true });
 
     await panel.getByRole('button', { name: 'Publish results' }).click();
     const dialog = page.getByRole('dialog', { name: 'Publish results?' });
@@ -49,7 +48,7 @@ describe('publishing results', () => {
     await panel.getByRole('link', { name: 'Results sheet (PDF)' }).waitFor();
     expect(await panel.getByRole('link', { name: 'Results sheet (PDF)' }).getAttribute('href')).toBe(`/api/events/${show.eventId}/results/sheet.pdf?paper=letter`);
     await panel.getByText(/Best of show: \d+ Merc/).waitFor();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'results-published-organiser.png'), fullPage: true });
+    await keepScreenshot(page, 'results-published-organiser.png', { fullPage: true });
 
     // The visitor's phone: the public show page, no script.
     const phone = await env.browser.newContext({ viewport: { width: 390, height: 844 }, javaScriptEnabled: false });
@@ -60,7 +59,7 @@ describe('publishing results', () => {
     const classText = await results.getByRole('region', { name: 'Results: Hot rods' }).innerText();
     expect(classText).toMatch(/1st\s+\d+\s+Flathead\s+29\.00[\s\S]*2nd\s+\d+\s+Deuce\s+29\.00[\s\S]*3rd\s+\d+\s+Ratrod\s+25\.00/i);
     expect(await results.getByRole('link', { name: 'Flathead' }).getAttribute('href')).toMatch(new RegExp(`/c/${show.car('Flathead').code}$`));
-    await visitor.screenshot({ path: path.join(SCREENSHOT_DIR, 'results-public-phone.png'), fullPage: true });
+    await keepScreenshot(visitor, 'results-public-phone.png', { fullPage: true });
     await phone.close();
 
     // The owner of Deuce reads their own scores in the app.
@@ -72,7 +71,7 @@ describe('publishing results', () => {
     await scores.getByText(/2nd in Hot rods · total 29\.00/).waitFor();
     expect(await scores.getByRole('row', { name: /Paint and body/ }).innerText()).toMatch(/8\.00\s*\/ 10\s+8, 8/);
     await scores.getByText('“Deep, even black paint”').waitFor();
-    await ownerPage.screenshot({ path: path.join(SCREENSHOT_DIR, 'results-own-scores-phone.png'), fullPage: true });
+    await keepScreenshot(ownerPage, 'results-own-scores-phone.png', { fullPage: true });
     await ownerContext.close();
     await context.close();
   });

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import path from 'node:path';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -34,7 +33,7 @@ describe('screen titles, focus after navigation and a safe editor address', () =
     await expect.poll(() => page.getByRole('alert').allTextContents()).toEqual([EMAIL_MESSAGE, 'Password is required.']);
     await expect.poll(() => focused(page)).toBe('INPUT ');
     expect(await page.evaluate(() => (document.activeElement as HTMLInputElement).name)).toBe('email');
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'sign-in-field-errors-phone.png') });
+    await keepScreenshot(page, 'sign-in-field-errors-phone.png');
     await page.getByLabel('E-mail').fill(email);
     await expect.poll(() => page.getByRole('alert').allTextContents()).toEqual(['Password is required.']);
     await page.getByLabel('Password').fill(password);
@@ -54,7 +53,7 @@ describe('screen titles, focus after navigation and a safe editor address', () =
     await page.getByRole('link', { name: /Low Tide Roadster/ }).first().click();
     await expect.poll(() => page.title()).toBe('Low Tide Roadster · Placard');
     await expect.poll(() => focused(page)).toBe('H1 Low Tide Roadster');
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'editor-heading-focused-phone.png') });
+    await keepScreenshot(page, 'editor-heading-focused-phone.png');
 
     // The photo upload control shows a focus ring when the keyboard reaches it.
     const photos = page.locator('#section-photos');
@@ -63,7 +62,7 @@ describe('screen titles, focus after navigation and a safe editor address', () =
     await photos.locator('input[type=file]').focus();
     await expect.poll(() => choose.evaluate((el) => `${getComputedStyle(el).outlineStyle} ${getComputedStyle(el).outlineWidth}`)).toBe('solid 3px');
     await choose.scrollIntoViewIfNeeded();
-    await photos.screenshot({ path: path.join(SCREENSHOT_DIR, 'photo-upload-focus-ring-phone.png') });
+    await keepScreenshot(photos, 'photo-upload-focus-ring-phone.png');
 
     // An address that is not a build's: a plain message, and no request for build "NaN".
     apiCalls.length = 0;
@@ -75,7 +74,7 @@ describe('screen titles, focus after navigation and a safe editor address', () =
     await page.goto(`${env.baseUrl}/judge`);
     await expect.poll(() => page.getByText('Nothing to judge now').count()).toBe(1);
     await expect.poll(() => page.title()).toBe('Shows to judge · Placard');
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'judge-home-empty-phone.png') });
+    await keepScreenshot(page, 'judge-home-empty-phone.png');
 
     // On a desk: the editor overlays the newest two dyno runs in the public page's chart.
     await page.setViewportSize({ width: 1366, height: 900 });
@@ -83,7 +82,7 @@ describe('screen titles, focus after navigation and a safe editor address', () =
     const chart = page.getByTestId('dyno-chart').getByRole('img', { name: /Dyno curves/ });
     await expect.poll(() => chart.locator('path').count()).toBe(4);
     await page.locator('#section-dyno').scrollIntoViewIfNeeded();
-    await page.locator('#section-dyno').screenshot({ path: path.join(SCREENSHOT_DIR, 'editor-dyno-two-runs-desktop.png') });
+    await keepScreenshot(page.locator('#section-dyno'), 'editor-dyno-two-runs-desktop.png');
     await context.close();
   });
 });

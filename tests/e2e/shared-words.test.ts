@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
-import { SCREENSHOT_DIR, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -24,7 +23,7 @@ describe('the editor says what shared/ says', () => {
       const rangeMessage = engine.getByText(/Bore must be between 0\.79 and 7\.87\s*in \(20 to 200 mm\)\./);
       await expect.poll(() => rangeMessage.count()).toBeGreaterThan(0);
       await rangeMessage.first().scrollIntoViewIfNeeded();
-      await page.screenshot({ path: path.join(SCREENSHOT_DIR, `shared-words-range-${viewport.name}.png`) });
+      await keepScreenshot(page, `shared-words-range-${viewport.name}.png`);
 
       const chassis = page.getByRole('form', { name: 'Chassis and suspension' });
       expect(await chassis.getByLabel('Frame').locator('option:checked').innerText()).toBe('Custom tube');
@@ -32,16 +31,16 @@ describe('the editor says what shared/ says', () => {
       // The owner sees their own private details (the policy's viewPrivate).
       await expect.poll(() => page.getByLabel('VIN or chassis number').inputValue()).toBe('VIN-OF-THE-OWNER-1');
       await chassis.scrollIntoViewIfNeeded();
-      await page.screenshot({ path: path.join(SCREENSHOT_DIR, `shared-words-editor-${viewport.name}.png`) });
+      await keepScreenshot(page, `shared-words-editor-${viewport.name}.png`);
 
       await page.goto(`${env.baseUrl}/builds`);
       await expect.poll(() => page.getByText('Power (wheels)').count()).toBe(1);
-      await page.screenshot({ path: path.join(SCREENSHOT_DIR, `shared-words-my-builds-${viewport.name}.png`), fullPage: true });
+      await keepScreenshot(page, `shared-words-my-builds-${viewport.name}.png`, { fullPage: true });
 
       await page.goto(`${env.baseUrl}/c/${build.code}`);
       await expect.poll(() => page.getByText('Custom tube frame', { exact: false }).count()).toBeGreaterThan(0);
       expect(await page.getByText('VIN-OF-THE-OWNER-1').count()).toBe(0);
-      await page.screenshot({ path: path.join(SCREENSHOT_DIR, `shared-words-public-${viewport.name}.png`), fullPage: true });
+      await keepScreenshot(page, `shared-words-public-${viewport.name}.png`, { fullPage: true });
       await context.close();
     });
   }

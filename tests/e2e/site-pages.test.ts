@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import path from 'node:path';
 import { randomUUID } from 'node:crypto';
-import { SCREENSHOT_DIR, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 import { storePhotosForBuild } from '@server/services/photos';
@@ -30,7 +29,7 @@ describe('the home page and the list of builds, with JavaScript turned off', () 
     }
     expect(await page.getByRole('link', { name: /Dusk Runner/ }).count()).toBeGreaterThan(0);
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(viewport.width);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, `home-no-js-${device}.png`), fullPage: true });
+    await keepScreenshot(page, `home-no-js-${device}.png`, { fullPage: true });
 
     // The form works without script: a plain GET to /c.
     await page.getByRole('searchbox', { name: 'Title' }).fill(tag);
@@ -41,7 +40,7 @@ describe('the home page and the list of builds, with JavaScript turned off', () 
     await page.getByRole('combobox', { name: 'Style' }).selectOption({ label: 'Any style' });
     await page.getByRole('button', { name: 'Find builds' }).click();
     await expect.poll(() => page.getByText(/build(s)? matching/).innerText()).toMatch(/^1 build matching/);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, `build-list-no-js-${device}.png`), fullPage: true });
+    await keepScreenshot(page, `build-list-no-js-${device}.png`, { fullPage: true });
 
     await page.getByRole('link', { name: /Dusk Runner/ }).click();
     await page.waitForURL(new RegExp(`/c/${build.code}`));

@@ -1,5 +1,5 @@
 import { afterEach, beforeAll } from 'vitest';
-import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Locator, type Page } from 'playwright-core';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { existsSync } from 'node:fs';
@@ -41,6 +41,15 @@ export async function startTestServer(): Promise<{ server: Server; baseUrl: stri
 }
 
 export const SCREENSHOT_DIR = path.resolve('test-results/screenshots');
+
+/** Screenshots are for people to look at, not for the run to assert on: kept only with PLACARD_SCREENSHOTS=1. */
+export const KEEP_SCREENSHOTS = process.env.PLACARD_SCREENSHOTS === '1';
+
+/** Saves a picture of a page or an element under test-results/screenshots when asked for (see KEEP_SCREENSHOTS). */
+export async function keepScreenshot(target: Page | Locator, name: string, options: { fullPage?: boolean } = {}): Promise<void> {
+  if (!KEEP_SCREENSHOTS) return;
+  await target.screenshot({ path: path.join(SCREENSHOT_DIR, name), ...options });
+}
 
 type BrowserAndServer = { browser: Browser; server: Server; baseUrl: string };
 
