@@ -1,7 +1,8 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { EventDetail } from '@shared/schemas/event';
-import { api } from '@client/lib/api';
+import { useQuery } from '@tanstack/react-query';
+import { showQueryOptions } from '@client/features/shows/api/get-show';
 
-export const getShow = (id: number) => api<{ event: EventDetail }>(`/api/events/${id}`).then((r) => r.event);
-export const showQueryOptions = (id: number) => queryOptions({ queryKey: ['shows', id], queryFn: () => getShow(id) });
-export const useShow = (id: number) => useQuery(showQueryOptions(id));
+/**
+ * The show as the show-day screens read it: the one cached answer of GET /api/events/:id (its key and
+ * shape belong to the shows feature), with the event picked out. Never a second query under that key.
+ */
+export const useShow = (id: number) => useQuery({ ...showQueryOptions(id), select: (r) => r.event });

@@ -1,0 +1,83 @@
+import { expect } from 'vitest';
+import type { Page } from 'playwright-core';
+import { DEFAULT_PASSWORD } from './factories';
+
+/** What a walk found: every screen reached (by its path) and anything that broke on the way. */
+export type Walk = { reached: string[]; problems: string[] };
+
+/** The in-app links of the show side that a walk follows (files, the public pages and sign-out are left alone). */
+const SHOW_SIDE = /^\/(shows|judge|entries|enter|invitations)(\/|$)/;
+
+/**
+ * Records, for the life of the page, every script error and console error, so a walk can tell which
+ * step each one came from.
+ */
+function watchForErrors(page: Page): string[] {
+  const errors: string[] = [];
+  page.on('pageerror', (err) => errors.push(`script error: ${err.message}`));
+  page.on('console', (msg) => {
+    if (msg.type() === 'error') errors.push(`console error: ${msg.text()}`);
+  });
+  return errors;
+}
+
+/** Waits until the screen has stopped loading, then says what is wrong with it, if anything. */
+async function settle(page: Page): Promise<string | null> {
+  await page.locator('main h1').first().waitFor();
+  await expect.poll(() => page.getByRole('status').filter({ hasText: /^Loading/ }).count()).toBe(0);
+  if (await page.getByRole('heading', { name: 'This screen broke' }).count()) return 'the screen broke (error boundary)';
+  if (await page.getByRole('heading', { name: /not found/i }).count()) return 'a link led to a page that is not there';
+  return null;
+}
+
+/** The show-side links on the screen now, in page order, each once. */
+async function showSideLinks(page: Page): Promise<string[]> {
+  const hrefs = await page.locator('main a[href], nav a[href]').evaluateAll((as) => as.filter((a) => !a.hasAttribute('download')).map((a) => a.getAttribute('href') ?? ''));
+  return [...new Set(hrefs.filter((h) => SHOW_SIDE.test(h)))];
+}
+
+/**
+ * Signs in through the form and walks the show side as a person would: from the "Shows" link, every
+ * show-side link on each screen is clicked (depth first, each path once), each screen checked once it
+ * has loaded, then the browser's Back button is pressed and the screen before is checked again.
+ */
+export async function walkShowSide(page: Page, baseUrl: string, email: string, opts: { maxScreens?: number } = {}): Promise<Walk> {
+  const errors = watchForErrors(page);
+  const problems: string[] = [];
+  const reached: string[] = [];
+  const visited = new Set<string>();
+  const maxScreens = opts.maxScreens ?? 30;
+
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+  await page.locator('nav').getByRole('link', { name: 'Shows', exact: true }).click();
+  await page.waitForURL(`${baseUrl}/shows`);
+
+  const check = async (where: string) => {
+    const wrong = await settle(page);
+    const seen = errors.splice(0);
+    if (wrong) problems.push(`${where}: ${wrong}`);
+    for (const e of seen) problems.push(`${where}: ${e}`);
+  };
+
+  const visit = async (path: string, depth: number): Promise<void> => {
+    visited.add(path);
+    reached.push(path);
+    await check(`at ${path}`);
+    if (depth >= 4) return;
+    for (const href of await showSideLinks(page)) {
+      if (visited.has(href) || reached.length >= maxScreens) continue;
+      await page.locator(`main a[href="${href}"], nav a[href="${href}"]`).first().click();
+      await page.waitForURL((u) => u.pathname + u.search === href);
+      await visit(href, depth + 1);
+      await page.goBack();
+      await page.waitForURL((u) => u.pathname + u.search === path);
+      await check(`back at ${path} from ${href}`);
+    }
+  };
+  await visit('/shows', 0);
+  return { reached, problems };
+}
