@@ -35,6 +35,8 @@ import { eventsRouter } from './routes/events';
 import { eventPeopleRouter } from './routes/event-people';
 import { entriesRouter } from './routes/entries';
 import { paymentsWebhookRouter } from './routes/payments';
+import { registerPaymentHandler } from './payments/handlers';
+import { handleEntryPayment } from './services/entry-payments';
 import { showDayRouter } from './routes/show-day';
 import { judgingRouter } from './routes/judging';
 import { EVENT_LOGO_PATH, eventLogoRouter } from './routes/event-logo';
@@ -92,7 +94,13 @@ function clientRouter() {
 }
 
 /** Builds the Express app without listening, so tests drive it through supertest. */
+/** What each kind of payment reference confirms when its webhook arrives: wired here, in one place. */
+function wirePaymentHandlers(): void {
+  registerPaymentHandler('entry', handleEntryPayment);
+}
+
 export function createApp(): Express {
+  wirePaymentHandlers();
   const app = express();
   app.disable('x-powered-by');
   if (config.trustProxy) app.set('trust proxy', 1);

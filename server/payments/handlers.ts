@@ -16,9 +16,15 @@ export type PaymentHandler = (notice: PaymentNotice, transaction: Transaction) =
 
 const handlers = new Map<string, PaymentHandler>();
 
-/** One handler per kind of reference, e.g. registerPaymentHandler('entry', confirmEntryPayment). */
+/**
+ * One handler per kind of reference, e.g. registerPaymentHandler('entry', handleEntryPayment), called
+ * where the app is assembled. The same handler again is a no-op (each app made in a process wires it);
+ * a different one for a kind already claimed is a mistake.
+ */
 export function registerPaymentHandler(kind: string, handler: PaymentHandler): () => void {
-  if (handlers.has(kind)) throw new Error(`A payment handler for "${kind}" is registered already.`);
+  const existing = handlers.get(kind);
+  if (existing === handler) return () => void handlers.delete(kind);
+  if (existing) throw new Error(`A payment handler for "${kind}" is registered already.`);
   handlers.set(kind, handler);
   return () => void handlers.delete(kind);
 }

@@ -5,7 +5,7 @@ import { Entry } from '../models/entry';
 import { Event } from '../models/event';
 import { User } from '../models/user';
 import { createCheckout, retrieveCheckout } from '../payments/checkout';
-import { registerPaymentHandler } from '../payments/handlers';
+import type { PaymentHandler } from '../payments/handlers';
 import { writeAudit } from './audit';
 import { confirmEntryPayment } from './entries';
 import { CHECKOUT_REF, queueEntryRefund } from './entry-refunds';
@@ -47,8 +47,11 @@ export async function openEntryCheckout(entryId: number): Promise<{ url: string 
   return { url: checkout.url };
 }
 
-// The payment service's webhook for `entry:<id>`: a paid checkout confirms the entry (once, however often it is delivered).
-registerPaymentHandler('entry', async (notice, transaction) => {
+/**
+ * The payment service's webhook for `entry:<id>`: a paid checkout confirms the entry (once, however
+ * often it is delivered). Wired in `createApp()` (server/app.ts), never by importing this file.
+ */
+export const handleEntryPayment: PaymentHandler = async (notice, transaction) => {
   if (notice.kind !== 'paid') return;
   const entryId = Number(notice.referenceId);
   if (!Number.isSafeInteger(entryId)) return;
@@ -58,4 +61,4 @@ registerPaymentHandler('entry', async (notice, transaction) => {
     await entry.update({ refundDue: entry.paidAmount }, { transaction });
     await queueEntryRefund(entry, entry.paidAmount ?? 0, transaction);
   }
-});
+};
