@@ -1,4 +1,5 @@
 import { renderToStaticMarkup } from 'react-dom/server';
+import { coverPhotoOf } from '@shared/build-sheet/cover';
 import { convert, cornerWeights, formatNumber, formatPercent, formatQuantity, preferredUnit, type Unit, type UnitSystem } from '@shared/calc';
 import { BUILD_STYLE_LABELS, type Photo, type PublicBuild } from '@shared/schemas/build';
 import type { KeyFigure } from '@shared/schemas/card';
@@ -23,7 +24,7 @@ const UNIT_CHOICES: Array<[UnitSystem, string, string]> = [
   ['imperial', 'US', 'Inches, pounds, hp, lb·ft, mph'],
 ];
 
-const cover = (b: PublicBuild) => b.photos.find((p) => p.isCover) ?? b.photos[0] ?? null;
+const cover = (b: PublicBuild) => coverPhotoOf(b.photos);
 const styleLabel = (s: string | null) => (s && s in BUILD_STYLE_LABELS ? BUILD_STYLE_LABELS[s as keyof typeof BUILD_STYLE_LABELS] : null);
 const mark = (f: { provenance: KeyFigure['provenance'] }) => PROVENANCE_MARKS[f.provenance] || null;
 

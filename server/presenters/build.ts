@@ -1,4 +1,5 @@
 import type { BuildSummary, DynoRun as DynoRunBody, FigureChange as FigureChangeBody, OwnerBuild, WeighIn as WeighInBody } from '@shared/schemas/build';
+import { coverPhotoOf } from '@shared/build-sheet/cover';
 import type { SectionKind, Sections } from '@shared/schemas/build-sections';
 import { shownFigures } from '@shared/build-sheet/key-figures';
 import type { Build } from '../models/build';
@@ -70,8 +71,7 @@ export function keyFigures(build: Build): BuildSummary['keyFigures'] {
 }
 
 export function presentBuildSummary(build: Build): BuildSummary {
-  const photos = [...(build.photos ?? [])].sort((a, b) => a.position - b.position);
-  const cover = photos.find((p) => p.isCover) ?? photos[0];
+  const cover = coverPhotoOf(build.photos);
   return {
     id: build.id,
     code: build.code,

@@ -1,4 +1,5 @@
 import type { PublicBuild, PublicBuildTile } from '@shared/schemas/build';
+import { coverPhotoOf } from '@shared/build-sheet/cover';
 import type { PublicBuildResponse } from '@shared/schemas/card';
 import { publicSections, publicWeight } from '@shared/schemas/public-build-sections';
 import { computeKeyFigures } from '@shared/build-sheet/key-figures';
@@ -65,7 +66,6 @@ export function presentPublicBuildResponse(b: PublicBuild): PublicBuildResponse 
 
 /** A published build as a tile: title, year, style, cover and its public address; nothing else. */
 export function presentPublicBuildTile(build: Build): PublicBuildTile {
-  const photos = [...(build.photos ?? [])].sort((a, b) => a.position - b.position);
-  const cover = photos.find((p) => p.isCover) ?? photos[0];
+  const cover = coverPhotoOf(build.photos);
   return { code: build.code, url: publicBuildUrl(build.code), title: build.title, modelYear: build.modelYear, style: build.style, cover: cover ? presentPhoto(cover) : null };
 }

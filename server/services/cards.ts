@@ -1,4 +1,5 @@
 import { createElement } from 'react';
+import { coverPhotoOf } from '@shared/build-sheet/cover';
 import { renderToBuffer } from '@react-pdf/renderer';
 import QRCode from 'qrcode';
 import { BUILD_STYLE_LABELS, type PublicBuild } from '@shared/schemas/build';
@@ -93,7 +94,7 @@ export function cardContent(build: PublicBuild, settings: CardSettings, opts: { 
 
 /** The stored photo a card prints: the cover (or the first photo), as JPEG, big enough for the paper. */
 export function coverSourceKey(build: PublicBuild, settings: CardSettings): string | null {
-  const photo = build.photos.find((p) => p.isCover) ?? build.photos[0];
+  const photo = coverPhotoOf(build.photos);
   if (!photo || photo.sources.length === 0) return null;
   const want = settings.paper === 'tabloid' || settings.paper === 'a3' ? 1600 : 960;
   const source = photo.sources.find((s) => s.width >= want) ?? photo.sources[photo.sources.length - 1]!;
@@ -108,7 +109,7 @@ export async function loadCoverImage(build: PublicBuild, settings: CardSettings)
   if (!object) return null;
   const chunks: Buffer[] = [];
   for await (const chunk of object.body) chunks.push(chunk as Buffer);
-  const photo = build.photos.find((p) => p.isCover) ?? build.photos[0]!;
+  const photo = coverPhotoOf(build.photos)!;
   return { data: Buffer.concat(chunks), format: 'jpg', width: photo.width, height: photo.height };
 }
 

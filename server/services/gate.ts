@@ -1,4 +1,5 @@
 import { Op } from 'sequelize';
+import { coverPhotoOf } from '@shared/build-sheet/cover';
 import { CHECK_IN_UNDO_SECONDS, paymentStateOf, type GateCard, type GateCounts, type GateProblem } from '@shared/schemas/show-day';
 import { buildCodeFromScan, gateProblemMessage } from '@shared/gate';
 import { formatInZone } from '@shared/calc/time-zone';
@@ -22,8 +23,7 @@ const entryInclude = [
 ];
 
 function coverOf(build: Build | undefined) {
-  const photos = [...(build?.photos ?? [])].sort((a, b) => a.position - b.position);
-  const cover = photos.find((p) => p.isCover) ?? photos[0];
+  const cover = coverPhotoOf(build?.photos);
   if (!cover) return null;
   // The smallest variant at least 480 px wide is enough for a phone at the gate.
   const variants = [...cover.variants].sort((a, b) => a.width - b.width);
