@@ -36,7 +36,7 @@ import { eventPeopleRouter } from './routes/event-people';
 import { entriesRouter } from './routes/entries';
 import { paymentsWebhookRouter } from './routes/payments';
 import { registerPaymentHandler } from './payments/handlers';
-import { handleEntryPayment } from './services/entry-payments';
+import { handleEntryPayment } from './services/entries/entry-payments';
 import { showDayRouter } from './routes/show-day';
 import { judgingRouter } from './routes/judging';
 import { EVENT_LOGO_PATH, eventLogoRouter } from './routes/event-logo';

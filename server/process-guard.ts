@@ -1,5 +1,5 @@
 import { logger } from './logger';
-import { isDatabaseUnavailable } from './services/database-unavailable';
+import { isDatabaseUnavailable } from './services/platform/database-unavailable';
 
 /**
  * A pg client that loses its server while nobody listens for its 'error' event (a client between two

@@ -2,7 +2,7 @@ import type { Request, Response } from 'express';
 import { DISABLED_REFUSAL, passport } from './passport';
 import type { User } from '../models/user';
 import { csrfToken } from '../middlewares/csrf';
-import { recordSignIn } from '../services/accounts';
+import { recordSignIn } from '../services/accounts/accounts';
 
 export type LocalSignIn = { user: User } | { user: undefined; disabled: boolean };
 

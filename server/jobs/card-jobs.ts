@@ -1,5 +1,5 @@
 import { logger } from '../logger';
-import { runCardPrint, type CardPrintJob } from '../services/card-prints';
+import { runCardPrint, type CardPrintJob } from '../services/show-day/card-prints';
 import { sendShowReminders, type ShowReminderJob } from './show-reminders';
 import { CARD_QUEUE, jobQueue, type JobQueue } from './queue';
 

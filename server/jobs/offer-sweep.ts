@@ -1,5 +1,5 @@
 import { logger } from '../logger';
-import { sweepExpiredOffers } from '../services/waitlist';
+import { sweepExpiredOffers } from '../services/entries/waitlist';
 
 /**
  * Every minute, lapsed waiting-list offers pass to the next in line even when nobody opens the show

@@ -1,5 +1,5 @@
 import { logger } from '../logger';
-import { sendEntryRefund, type RefundJob } from '../services/entry-refunds';
+import { sendEntryRefund, type RefundJob } from '../services/entries/entry-refunds';
 import { jobQueue, REFUND_QUEUE, type JobQueue } from './queue';
 
 /** Works the refund queue: a payment service that is down throws, and pg-boss retries later. */

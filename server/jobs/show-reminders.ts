@@ -7,10 +7,10 @@ import { logger } from '../logger';
 import { queueMail } from '../mail/outbox';
 import { Event } from '../models/event';
 import { presentPublicBuild } from '../presenters/public-build';
-import { entryCardBuild, entryCardFileName, entryCardShow, reminderEntries, renderEntryCard } from '../services/entry-card';
-import { reminderDedupeKey } from '../services/show-reminders';
+import { entryCardBuild, entryCardFileName, entryCardShow, reminderEntries, renderEntryCard } from '../services/entries/entry-card';
+import { reminderDedupeKey } from '../services/show-day/show-reminders';
 
-export type { ShowReminderJob } from '../services/show-reminders';
+export type { ShowReminderJob } from '../services/show-day/show-reminders';
 
 /**
  * The show reminder, one mail per confirmed entry with the owner's card attached (their own design,

@@ -3,7 +3,7 @@ import { UniqueConstraintError, ValidationError as SequelizeValidationError } fr
 import { ZodError } from 'zod';
 import { fieldsFromIssues, type ErrorResponse } from '@shared/errors';
 import { AppError, NotFoundError, UnavailableError } from '../errors';
-import { isDatabaseUnavailable } from '../services/database-unavailable';
+import { isDatabaseUnavailable } from '../services/platform/database-unavailable';
 
 export const apiNotFound: RequestHandler = () => {
   throw new NotFoundError('No such API endpoint.');

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { loadPublicEvent } from '../services/public-events';
+import { loadPublicEvent } from '../services/public/public-events';
 import { presentPublicEvent } from '../presenters/public-event';
 import { EVENT_NOT_FOUND_HTML, renderPublicEventPage } from './public-event-page';
 import { eventCalendar } from './event-calendar';

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { PublicBuildSearchSchema } from '@shared/schemas/build';
-import { listRecentPublicBuilds, searchPublicBuilds } from '../services/public-builds';
-import { listOpenEvents } from '../services/events';
+import { listRecentPublicBuilds, searchPublicBuilds } from '../services/public/public-builds';
+import { listOpenEvents } from '../services/shows/events';
 import { presentPublicBuildTile } from '../presenters/public-build';
 import { presentEventSummary } from '../presenters/event';
 import { renderBadSearchPage, renderBuildListPage, renderHomePage } from './site-pages';

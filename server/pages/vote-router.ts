@@ -1,8 +1,8 @@
 import express, { Router, type ErrorRequestHandler, type Response } from 'express';
 import { BuildCodeSchema } from '@shared/schemas/build';
 import { voteLimiter } from '../middlewares/rate-limits';
-import { castVote } from '../services/peoples-choice';
-import { isDatabaseUnavailable } from '../services/database-unavailable';
+import { castVote } from '../services/results/peoples-choice';
+import { isDatabaseUnavailable } from '../services/platform/database-unavailable';
 import { existingVoter, formTokenMatches, fromOurOrigin, readVoterCookie } from './voter';
 import { renderVoteRefusal, type VoteRefusal } from './vote-box';
 

@@ -4,7 +4,7 @@ import { parseBody } from '../middlewares/validate';
 import { passwordChangeLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeUser } from '../policies/user';
-import { changePassword, updateAccount } from '../services/users';
+import { changePassword, updateAccount } from '../services/accounts/users';
 import { presentCurrentUser } from '../presenters/user';
 
 export const accountRouter = Router();

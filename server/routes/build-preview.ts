@@ -4,7 +4,7 @@ import { IdParamSchema } from '@shared/schemas/params';
 import { parseParams, parseQuery } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
-import { loadFullBuildOrThrow } from '../services/builds';
+import { loadFullBuildOrThrow } from '../services/builds/builds';
 import { presentPublicBuild } from '../presenters/public-build';
 import { renderPublicBuildPage } from '../pages/public-build-page';
 

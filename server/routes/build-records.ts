@@ -5,8 +5,8 @@ import { IdParamSchema, IdSchema } from '@shared/schemas/params';
 import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
-import { findBuild } from '../services/builds';
-import { addDynoRun, addWeighIn, applyDynoRun, applyWeighIn, deleteDynoRun, deleteWeighIn } from '../services/build-records';
+import { findBuild } from '../services/builds/builds';
+import { addDynoRun, addWeighIn, applyDynoRun, applyWeighIn, deleteDynoRun, deleteWeighIn } from '../services/builds/build-records';
 import { respondWithBuild } from './respond-with-build';
 
 /** Dyno runs and weigh-ins: dated measurements that can feed the build's figures. */

@@ -7,8 +7,9 @@ import { replaceBody } from '@shared/schemas/body';
 import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
-import { createBuild, deleteBuild, findBuild, listBuildsOf, saveCredits, savePrivate, saveSection, setPublished, updateOverview } from '../services/builds';
-import { deletePhotoFiles } from '../services/photos';
+import { createBuild, findBuild, listBuildsOf, saveCredits, savePrivate, saveSection, setPublished, updateOverview } from '../services/builds/builds';
+import { deleteBuild } from '../services/commands/delete-build';
+import { deletePhotoFiles } from '../services/media/photos';
 import { presentBuildSummary } from '../presenters/build';
 import { respondWithBuild } from './respond-with-build';
 

@@ -3,7 +3,7 @@ import { EmailVerificationConfirmSchema, type EmailVerificationConfirmResponse }
 import { parseBody } from '../middlewares/validate';
 import { requireUser, currentUser } from '../middlewares/authenticate';
 import { verificationConfirmLimiter, verificationResendLimiter } from '../middlewares/rate-limits';
-import { confirmEmail, resendVerificationMail } from '../services/email-verification';
+import { confirmEmail, resendVerificationMail } from '../services/accounts/email-verification';
 import { config } from '../config';
 import { signedUpHere } from '../auth/sign-up-session';
 import { startSession } from '../auth/session-helpers';

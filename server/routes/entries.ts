@@ -1,18 +1,18 @@
 import { Router } from 'express';
 import { EntryCreateSchema } from '@shared/schemas/event';
 import { GateCheckInSchema } from '@shared/schemas/show-day';
-import { gateCheckIn } from '../services/gate';
+import { gateCheckIn } from '../services/show-day/gate';
 import { IdParamSchema } from '@shared/schemas/params';
 import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeEntry, authorizeEvent } from '../policies/event';
 import { hasEventRole } from '../policies/actor';
-import { actorInEvent } from '../services/event-actor';
-import { findEvent } from '../services/events';
-import { acceptOffer, findEntry, listEntriesOf, listEntriesOfEvent, registerEntry, withdrawEntry } from '../services/entries';
+import { actorInEvent } from '../services/shows/event-actor';
+import { findEvent } from '../services/shows/events';
+import { acceptOffer, findEntry, listEntriesOf, listEntriesOfEvent, registerEntry, withdrawEntry } from '../services/entries/entries';
 import { presentMyEntry, presentOrganiserEntry } from '../presenters/event';
 import { authorizedEvent } from './events';
-import { openEntryCheckout } from '../services/entry-payments';
+import { openEntryCheckout } from '../services/entries/entry-payments';
 
 export const entriesRouter = Router();
 entriesRouter.use('/entries', requireUser);

@@ -5,7 +5,7 @@ import { IdParamSchema } from '@shared/schemas/params';
 import { parseParams } from '../middlewares/validate';
 import { photoUploadLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
-import { removeEventLogo, setEventLogo, tooLargeError } from '../services/event-logo';
+import { removeEventLogo, setEventLogo, tooLargeError } from '../services/shows/event-logo';
 import { AppError, ValidationError } from '../errors';
 import { authorizedEvent, respondWithEvent } from './events';
 

@@ -7,7 +7,7 @@ import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorize } from '../policies/authorize';
 import { mayTakePartInShows } from '../policies/event';
-import { acceptInvitation, inviteToEvent, listMembers, listOpenInvitations, previewInvitation, removeMember, revokeInvitation } from '../services/event-people';
+import { acceptInvitation, inviteToEvent, listMembers, listOpenInvitations, previewInvitation, removeMember, revokeInvitation } from '../services/shows/event-people';
 import { presentInvitation, presentMember } from '../presenters/event';
 import { authorizedEvent } from './events';
 

@@ -6,11 +6,12 @@ import type { EventAction as LifecycleAction } from '@shared/event-lifecycle';
 import { parseBody, parseParams, parseQuery } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeEvent, type EventAction } from '../policies/event';
-import { actorInEvent } from '../services/event-actor';
-import { createEvent, findEvent, listEventsOf, listOpenEvents, loadEventDetail, takeLifecycleStep, updateEvent } from '../services/events';
-import { addClass, deleteClass, updateClass } from '../services/event-classes';
-import { saveJudgingSheet } from '../services/judging-sheet';
-import { listAudit } from '../services/audit';
+import { actorInEvent } from '../services/shows/event-actor';
+import { createEvent, findEvent, listEventsOf, listOpenEvents, loadEventDetail, updateEvent } from '../services/shows/events';
+import { takeLifecycleStep } from '../services/commands/take-lifecycle-step';
+import { addClass, deleteClass, updateClass } from '../services/shows/event-classes';
+import { saveJudgingSheet } from '../services/judging/judging-sheet';
+import { listAudit } from '../services/audit/audit';
 import { presentAuditLine, presentClass, presentEvent, presentEventSummary } from '../presenters/event';
 
 export const eventsRouter = Router();

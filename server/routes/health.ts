@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { databaseReachable } from '../services/health';
+import { databaseReachable } from '../services/platform/health';
 
 export const healthRouter = Router();
 

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { pipeline } from 'node:stream/promises';
-import { openMediaFile } from '../services/media';
+import { openMediaFile } from '../services/media/media';
 import { NotFoundError } from '../errors';
 
 export const mediaRouter = Router();

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { PasswordResetConfirmSchema, PasswordResetRequestSchema } from '@shared/schemas/user';
 import { parseBody } from '../middlewares/validate';
 import { passwordResetConfirmLimiter, passwordResetLimiter } from '../middlewares/rate-limits';
-import { confirmPasswordReset, requestPasswordReset } from '../services/password-resets';
+import { confirmPasswordReset, requestPasswordReset } from '../services/accounts/password-resets';
 import { config } from '../config';
 
 export const passwordResetsRouter = Router();

@@ -4,9 +4,9 @@ import { VoidAddressSchema } from '@shared/schemas/peoples-choice';
 import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizePeoplesChoice } from '../policies/peoples-choice';
-import { actorInEvent } from '../services/event-actor';
-import { findEvent } from '../services/events';
-import { loadPeoplesChoice, setVotingWindow, voidVotesOfAddress } from '../services/peoples-choice';
+import { actorInEvent } from '../services/shows/event-actor';
+import { findEvent } from '../services/shows/events';
+import { loadPeoplesChoice, setVotingWindow, voidVotesOfAddress } from '../services/results/peoples-choice';
 import { presentPeoplesChoice } from '../presenters/peoples-choice';
 
 /** The organiser's side of people's choice; visitors vote on the public build page (`pages/vote-router.ts`). */

@@ -8,8 +8,8 @@ import { parseBody, parseParams } from '../middlewares/validate';
 import { photoUploadLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorizeBuild } from '../policies/build';
-import { findBuild } from '../services/builds';
-import { deletePhoto, reorderPhotos, storePhotosForBuild, tooLargeError, tooManyError, updatePhoto } from '../services/photos';
+import { findBuild } from '../services/builds/builds';
+import { deletePhoto, reorderPhotos, storePhotosForBuild, tooLargeError, tooManyError, updatePhoto } from '../services/media/photos';
 import { presentPhoto } from '../presenters/photo';
 import { AppError, ValidationError } from '../errors';
 

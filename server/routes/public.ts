@@ -1,11 +1,11 @@
 import { Router } from 'express';
 import { PublicBuildListQuerySchema, type PublicBuildTileListResponse } from '@shared/schemas/build';
 import { parseQuery } from '../middlewares/validate';
-import { listRecentPublicBuilds, loadPublicBuild } from '../services/public-builds';
+import { listRecentPublicBuilds, loadPublicBuild } from '../services/public/public-builds';
 import { presentPublicBuild, presentPublicBuildResponse, presentPublicBuildTile } from '../presenters/public-build';
 import { NotFoundError } from '../errors';
-import { loadPublicEvent } from '../services/public-events';
-import { listOpenEvents } from '../services/events';
+import { loadPublicEvent } from '../services/public/public-events';
+import { listOpenEvents } from '../services/shows/events';
 import { presentEventSummary } from '../presenters/event';
 import { presentPublicEvent } from '../presenters/public-event';
 

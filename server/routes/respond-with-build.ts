@@ -1,6 +1,6 @@
 import type { Request, Response } from 'express';
 import { currentUser } from '../middlewares/authenticate';
-import { loadFullBuildOrThrow } from '../services/builds';
+import { loadFullBuildOrThrow } from '../services/builds/builds';
 import { presentOwnerBuild } from '../presenters/build';
 
 /** After any change, the owner's routes answer with the whole build as the editor shows it. */

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { SignUpSchema, type SignUpResponse } from '@shared/schemas/user';
 import { parseBody } from '../middlewares/validate';
 import { signInLimiter, signUpLimiter } from '../middlewares/rate-limits';
-import { signUp } from '../services/users';
+import { signUp } from '../services/accounts/users';
 import { config } from '../config';
 import { rememberSignUp } from '../auth/sign-up-session';
 

@@ -21,7 +21,7 @@ export const mediaUrl = (key: string) => `${MEDIA_PREFIX}${key}`;
 /** The storage key behind a /media URL, or null for any other URL. */
 export const keyOfMediaUrl = (url: string): string | null => (url.startsWith(MEDIA_PREFIX) ? url.slice(MEDIA_PREFIX.length) : null);
 
-/** A numbered card's cached one-page PDF, by the SHA-256 of its content and design (`services/numbered-cards.ts`). */
+/** A numbered card's cached one-page PDF, by the SHA-256 of its content and design (`services/show-day/numbered-cards.ts`). */
 export const cardCacheKey = (hash: string) => `card-cache/${hash}.pdf`;
 /** A finished bulk print, by the SHA-256 of its cards' keys in order: the same cards in the same order are one file. */
 export const cardSetKey = (hash: string) => `card-sets/${hash}.pdf`;

@@ -3,7 +3,7 @@ import type { SectionKind } from '@shared/schemas/build-sections';
 
 /**
  * Everything a card prints, already in words and in the chosen units: the templates lay it out
- * and decide nothing else. The service (server/services/cards.ts) builds it from the public build.
+ * and decide nothing else. The service (server/services/builds/cards.ts) builds it from the public build.
  */
 export type CardContent = {
   /** Year and body, the big line: "1969 fastback coupe". */

@@ -19,12 +19,12 @@ const { sequelize } = await import('@server/db/sequelize');
 const { Build } = await import('@server/models/build');
 const { Entry } = await import('@server/models/entry');
 const { CardPrint } = await import('@server/models/card-print');
-const { createEvent } = await import('@server/services/events');
-const { addClass } = await import('@server/services/event-classes');
-const { runCardPrint } = await import('@server/services/card-prints');
+const { createEvent } = await import('@server/services/shows/events');
+const { addClass } = await import('@server/services/shows/event-classes');
+const { runCardPrint } = await import('@server/services/show-day/card-prints');
 const { createUser } = await import('../support/factories');
 const { showSettings } = await import('../support/event-factory');
-const { randomBuildCode } = await import('@server/services/build-codes');
+const { randomBuildCode } = await import('@server/services/builds/build-codes');
 
 // An invented show with four classes and CARDS confirmed entries, made straight through the models.
 const { user } = await createUser({ name: 'Bench Organiser', mayOrganise: true });

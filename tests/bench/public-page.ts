@@ -27,7 +27,7 @@ async function serve(): Promise<void> {
   const { default: express } = await import('express');
   const { createApp } = await import('@server/app');
   const { renderPublicBuildPage } = await import('@server/pages/public-build-page');
-  const { loadPublicBuild } = await import('@server/services/public-builds');
+  const { loadPublicBuild } = await import('@server/services/public/public-builds');
   const { presentPublicBuild } = await import('@server/presenters/public-build');
 
   // The same bytes the page route sends, written to a file and served by express.static.

@@ -9,7 +9,7 @@ import { DEFAULT_PASSWORD } from '../support/factories';
 import { showWithClasses } from '../support/event-factory';
 import { enter, enterAs, memberOf, step } from '../support/show-day-factory';
 import { PDFTOPPM } from '../support/pdf';
-import { confirmEntryPayment } from '@server/services/entries';
+import { confirmEntryPayment } from '@server/services/entries/entries';
 import { Entry } from '@server/models/entry';
 
 const env = useBrowserAndServer();

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
-import { storePhotosForBuild } from '@server/services/photos';
+import { storePhotosForBuild } from '@server/services/media/photos';
 import { jpegWithGps, sidewaysJpeg } from '../support/images';
 
 const env = useBrowserAndServer();

@@ -4,7 +4,7 @@ import { walkShowSide } from '../support/crawl';
 import { showWithClasses, signedIn } from '../support/event-factory';
 import { enter, memberOf, step } from '../support/show-day-factory';
 import { judgeOf, showInJudging } from '../support/judging-factory';
-import { confirmEntryPayment } from '@server/services/entries';
+import { confirmEntryPayment } from '@server/services/entries/entries';
 import { User } from '@server/models/user';
 
 // Every role reaches every screen of the show side by clicking the product's own links (never by

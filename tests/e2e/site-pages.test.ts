@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
-import { storePhotosForBuild } from '@server/services/photos';
+import { storePhotosForBuild } from '@server/services/media/photos';
 import { jpegWithGps } from '../support/images';
 
 const env = useBrowserAndServer();

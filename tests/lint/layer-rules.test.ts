@@ -62,17 +62,17 @@ describe('layer rules', () => {
     expect(messages.filter((m) => /no-restricted-paths: .*Routes and pages never touch models/.test(m))).toHaveLength(4);
     const page = await lintAs('server/pages/probe.ts', "import { Build } from '../models/build';\nexport const all = [Build];");
     expect(page).toContainEqual(expect.stringMatching(/Routes and pages never touch models/));
-    expect(await lintAs('server/routes/probe.ts', "import { findBuild } from '../services/builds';\nimport { presentPhoto } from '../presenters/photo';\nexport const all = [findBuild, presentPhoto];")).toEqual([]);
+    expect(await lintAs('server/routes/probe.ts', "import { findBuild } from '../services/builds/builds';\nimport { presentPhoto } from '../presenters/photo';\nexport const all = [findBuild, presentPhoto];")).toEqual([]);
   });
 
   it('keep presenters to picking fields: no services, model types only', async () => {
     const messages = await lintAs('server/presenters/probe.ts', [
-      "import { findBuild } from '../services/builds';",
+      "import { findBuild } from '../services/builds/builds';",
       "import { User } from '../models/user';",
       "import { storage } from '../storage/index';",
       'export const all = [findBuild, User, storage];',
     ].join('\n'));
-    expect(messages).toContainEqual(expect.stringMatching(/no-restricted-paths: .*"\.\.\/services\/builds".*Presenters only pick fields/));
+    expect(messages).toContainEqual(expect.stringMatching(/no-restricted-paths: .*"\.\.\/services\/builds\/builds".*Presenters only pick fields/));
     expect(messages).toContainEqual(expect.stringMatching(/no-restricted-imports: '\.\.\/models\/user' .*import type/));
     expect(messages).toContainEqual(expect.stringMatching(/no-restricted-paths: .*"\.\.\/storage\/index".*storage key and URL shapes/));
     expect(await lintAs('server/presenters/probe.ts', "import type { Build } from '../models/build';\nimport { mediaUrl } from '../storage/keys';\nexport type B = Build;\nexport const all = [mediaUrl];")).toEqual([]);

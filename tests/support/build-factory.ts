@@ -1,5 +1,5 @@
 import { Build } from '@server/models/build';
-import { randomBuildCode } from '@server/services/build-codes';
+import { randomBuildCode } from '@server/services/builds/build-codes';
 
 /** A bare draft build owned by `ownerId`, made straight through the model (no API round trip). */
 export async function createBuild(ownerId: number, overrides: Partial<{ title: string; published: boolean }> = {}) {

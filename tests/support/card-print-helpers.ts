@@ -2,7 +2,7 @@ import { expect } from 'vitest';
 import { PDFDocument } from 'pdf-lib';
 import { extractText, getDocumentProxy } from 'unpdf';
 import { startCardWorker } from '@server/jobs/card-jobs';
-import { confirmEntryPayment } from '@server/services/entries';
+import { confirmEntryPayment } from '@server/services/entries/entries';
 import { showWithClasses } from './event-factory';
 import { enter, enterAs } from './show-day-factory';
 import type { ApiClient } from './api-client';

@@ -6,7 +6,7 @@ import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { CARD_DESIGNS, DEFAULT_CARD_SETTINGS, ORIENTATIONS, PAPERS } from '@shared/schemas/card';
 import { SECTION_KINDS } from '@shared/schemas/build-sections';
-import { renderCard } from '@server/services/cards';
+import { renderCard } from '@server/services/builds/cards';
 import { ENTRY_SHOWS, longestPublicBuild, sparsePublicBuild, typicalPublicBuild } from './card-fixtures';
 
 const args = process.argv.slice(2);

@@ -6,7 +6,7 @@ import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { PRINT_PAPERS, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
 import { DEFAULT_RESULT_RULES } from '@shared/schemas/judging';
-import { renderCertificates, renderResultsSheet } from '@server/services/result-pdfs';
+import { renderCertificates, renderResultsSheet } from '@server/services/results/result-pdfs';
 
 const args = process.argv.slice(2);
 const out = args.find((a) => !a.startsWith('--')) ?? '/tmp/results';

@@ -6,13 +6,14 @@ import { Build } from '../../models/build';
 import { Event } from '../../models/event';
 import type { Entry } from '../../models/entry';
 import { EventMembership } from '../../models/event-membership';
-import { createEvent, takeLifecycleStep } from '../../services/events';
-import { addClass } from '../../services/event-classes';
-import { saveJudgingSheet } from '../../services/judging-sheet';
-import { checkInEntry, registerEntry } from '../../services/entries';
-import { assignJudge } from '../../services/judge-assignments';
-import { submitScores } from '../../services/scores';
-import { castVote, setVotingWindow } from '../../services/peoples-choice';
+import { createEvent } from '../../services/shows/events';
+import { takeLifecycleStep } from '../../services/commands/take-lifecycle-step';
+import { addClass } from '../../services/shows/event-classes';
+import { saveJudgingSheet } from '../../services/judging/judging-sheet';
+import { checkInEntry, registerEntry } from '../../services/entries/entries';
+import { assignJudge } from '../../services/judging/judge-assignments';
+import { submitScores } from '../../services/judging/scores';
+import { castVote, setVotingWindow } from '../../services/results/peoples-choice';
 import { DEMO_SHOW_CLASSES, DEMO_SHOW_SHEET } from './shows';
 
 /** The demo's third invented show: on today, being judged, people's choice voting open. */

@@ -6,8 +6,8 @@ import { Entry } from '../../models/entry';
 import { Event } from '../../models/event';
 import { EventClass } from '../../models/event-class';
 import { User } from '../../models/user';
-import { assignJudge } from '../../services/judge-assignments';
-import { submitScores } from '../../services/scores';
+import { assignJudge } from '../../services/judging/judge-assignments';
+import { submitScores } from '../../services/judging/scores';
 
 /**
  * The finished demo show's judging, before its results are published: two more cars that came on

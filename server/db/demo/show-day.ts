@@ -3,10 +3,11 @@ import { Build } from '../../models/build';
 import { Event } from '../../models/event';
 import { EventMembership } from '../../models/event-membership';
 import { User } from '../../models/user';
-import { createEvent, takeLifecycleStep } from '../../services/events';
-import { addClass } from '../../services/event-classes';
-import { checkInEntry, confirmEntryPayment, registerEntry } from '../../services/entries';
-import { runCardPrint, startCardPrint } from '../../services/card-prints';
+import { createEvent } from '../../services/shows/events';
+import { takeLifecycleStep } from '../../services/commands/take-lifecycle-step';
+import { addClass } from '../../services/shows/event-classes';
+import { checkInEntry, confirmEntryPayment, registerEntry } from '../../services/entries/entries';
+import { runCardPrint, startCardPrint } from '../../services/show-day/card-prints';
 import { DEMO_SHOW_CLASSES } from './shows';
 
 const DAY = 86400_000;

@@ -5,9 +5,9 @@ import { DEMO_BUILDS, DEMO_OWNERS } from '../demo/builds';
 import { carDrawingSvg, dynoSheetSvg } from '../demo/art';
 import { User } from '../../models/user';
 import { hashPassword } from '../../auth/passwords';
-import { createBuild, saveCredits, savePrivate, saveSection, setPublished, updateOverview } from '../../services/builds';
-import { addDynoRun, addWeighIn, applyDynoRun, applyWeighIn } from '../../services/build-records';
-import { storePhotosForBuild } from '../../services/photos';
+import { createBuild, saveCredits, savePrivate, saveSection, setPublished, updateOverview } from '../../services/builds/builds';
+import { addDynoRun, addWeighIn, applyDynoRun, applyWeighIn } from '../../services/builds/build-records';
+import { storePhotosForBuild } from '../../services/media/photos';
 import type { SectionKind } from '@shared/schemas/build-sections';
 
 /** A dozen invented builds of different eras and styles, with photos drawn here, a dyno day and a weigh-in. */

@@ -12,11 +12,12 @@ import { wallTimeToInstant } from '@shared/calc/time-zone';
 import { startMailCatcher } from '../../mail/catcher';
 import { seedJudgingShow } from '../demo/judging';
 import { seedFinishedShowJudging } from '../demo/results';
-import { createEvent, takeLifecycleStep } from '../../services/events';
-import { addClass } from '../../services/event-classes';
-import { saveJudgingSheet } from '../../services/judging-sheet';
-import { inviteToEvent } from '../../services/event-people';
-import { confirmEntryPayment, registerEntry, withdrawEntry, checkInEntry } from '../../services/entries';
+import { createEvent } from '../../services/shows/events';
+import { takeLifecycleStep } from '../../services/commands/take-lifecycle-step';
+import { addClass } from '../../services/shows/event-classes';
+import { saveJudgingSheet } from '../../services/judging/judging-sheet';
+import { inviteToEvent } from '../../services/shows/event-people';
+import { confirmEntryPayment, registerEntry, withdrawEntry, checkInEntry } from '../../services/entries/entries';
 
 const DAY = 86400_000;
 

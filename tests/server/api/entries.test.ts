@@ -6,7 +6,7 @@ import { Event } from '@server/models/event';
 import { createBuild } from '../../support/build-factory';
 import { ownerWithBuild, showWithClasses, signedIn } from '../../support/event-factory';
 import { countMail, waitForMail, waitForMailAbout } from '../../support/mailbox';
-import { confirmEntryPayment } from '@server/services/entries';
+import { confirmEntryPayment } from '@server/services/entries/entries';
 import { startOfferSweep } from '@server/jobs/offer-sweep';
 
 const DAY = 86400_000;

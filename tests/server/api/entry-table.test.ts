@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { AuditLine } from '@server/models/audit-line';
 import { Entry } from '@server/models/entry';
 import { Event } from '@server/models/event';
-import { confirmEntryPayment } from '@server/services/entries';
+import { confirmEntryPayment } from '@server/services/entries/entries';
 import { showWithClasses } from '../../support/event-factory';
 import { enter, memberOf } from '../../support/show-day-factory';
 

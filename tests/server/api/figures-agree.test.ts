@@ -3,7 +3,7 @@ import { convert, parseUnit } from '@shared/calc';
 import type { BuildSummary } from '@shared/schemas/build';
 import type { KeyFigure, PublicBuildResponse } from '@shared/schemas/card';
 import { DEMO_BUILDS } from '@server/db/demo/builds';
-import { findBuild, setPublished } from '@server/services/builds';
+import { findBuild, setPublished } from '@server/services/builds/builds';
 import { apiClient } from '../../support/api-client';
 import { createUser } from '../../support/factories';
 import { createDemoCardBuilds, demoCardBuildsInMemory } from '../../support/demo-card-builds';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { AuditLine } from '@server/models/audit-line';
 import { Entry } from '@server/models/entry';
-import { confirmEntryPayment } from '@server/services/entries';
+import { confirmEntryPayment } from '@server/services/entries/entries';
 import { createBuild } from '../../support/build-factory';
 import { showWithClasses } from '../../support/event-factory';
 import { enter, enterAs, memberOf, step } from '../../support/show-day-factory';

@@ -6,7 +6,7 @@ import { Entry } from '@server/models/entry';
 import { Vote } from '@server/models/vote';
 import { publicPageCache } from '@server/pages/page-cache';
 import { checkPageVersionOnEveryRequest } from '../../support/page-cache';
-import { peoplesChoiceWinners } from '@server/services/peoples-choice';
+import { peoplesChoiceWinners } from '@server/services/results/peoples-choice';
 import { apiClient } from '../../support/api-client';
 import { listenApp, rawGet } from '../../support/raw-http';
 import { signedIn, showWithClasses } from '../../support/event-factory';

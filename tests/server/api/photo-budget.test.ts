@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import sharp from 'sharp';
 import { config } from '@server/config';
 import { Photo } from '@server/models/photo';
-import { Slots, imageSlots } from '@server/services/image-budget';
+import { Slots, imageSlots } from '@server/services/media/image-budget';
 import { apiClient, type ApiClient } from '../../support/api-client';
 import { createUser } from '../../support/factories';
 import { createBuild } from '../../support/build-factory';

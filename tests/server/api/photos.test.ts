@@ -6,7 +6,7 @@ import type request from 'supertest';
 import { PHOTO_MAX_FILES, type Photo as PhotoBody } from '@shared/schemas/build';
 import { config } from '@server/config';
 import { Photo } from '@server/models/photo';
-import { deletePhotoFiles, storePhotosForBuild } from '@server/services/photos';
+import { deletePhotoFiles, storePhotosForBuild } from '@server/services/media/photos';
 import { apiClient, type ApiClient } from '../../support/api-client';
 import { createUser } from '../../support/factories';
 import { createBuild } from '../../support/build-factory';

@@ -3,7 +3,7 @@ import { CARD_FIGURE_LABELS, CARD_QR_MODULE_MIN_PT, DEFAULT_CARD_SETTINGS, ORIEN
 import { SECTION_KINDS } from '@shared/schemas/build-sections';
 import { ENGINEERING_CAUTION } from '@shared/calc';
 import type { PublicBuild } from '@shared/schemas/build';
-import { cardContent, qrMatrix, renderCard, type CoverImage } from '@server/services/cards';
+import { cardContent, qrMatrix, renderCard, type CoverImage } from '@server/services/builds/cards';
 import { pageBox } from '@templates/cards/theme';
 import { capShare } from '@templates/cards/measure';
 import { QR_QUIET } from '@templates/cards/parts';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import QRCode from 'qrcode';
 import { PNG } from 'pngjs';
-import { qrMatrix, qrPng, qrSvg, QR_ERROR_CORRECTION } from '@server/services/cards';
+import { qrMatrix, qrPng, qrSvg, QR_ERROR_CORRECTION } from '@server/services/builds/cards';
 import { QR_QUIET } from '@templates/cards/parts';
 import { readQr, readQrPng } from '../../support/pdf';
 

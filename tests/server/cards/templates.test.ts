@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { CARD_DESIGNS, DEFAULT_CARD_SETTINGS, PAPERS, PAPER_SIZES_PT, type CardSettings } from '@shared/schemas/card';
 import { SECTION_KINDS } from '@shared/schemas/build-sections';
-import { availableFigures, cardContent, renderCard, renderCardPdf } from '@server/services/cards';
+import { availableFigures, cardContent, renderCard, renderCardPdf } from '@server/services/builds/cards';
 import { emptyPublicBuild, longestPublicBuild, sparsePublicBuild, typicalPublicBuild } from '../../support/card-fixtures';
 import { pdfText } from '../../support/pdf';
 

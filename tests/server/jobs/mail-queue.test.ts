@@ -12,7 +12,7 @@ import { enqueueMail, queueMail } from '@server/mail/outbox';
 import { countMail, waitForMail } from '../../support/mailbox';
 import { createUser, uniqueEmail } from '../../support/factories';
 import { apiClient } from '../../support/api-client';
-import { listUndeliveredMail } from '@server/services/undelivered-mail';
+import { listUndeliveredMail } from '@server/services/accounts/undelivered-mail';
 import { SmtpTrap } from '../../support/smtp-trap';
 
 type JobRow = { state: string; retry_count: number; to: string };

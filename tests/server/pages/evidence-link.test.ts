@@ -4,7 +4,7 @@ import { testApp } from '../../support/api-client';
 import { createUser } from '../../support/factories';
 import { createBuild } from '../../support/build-factory';
 import { jpegWithGps } from '../../support/images';
-import { storePhotosForBuild } from '@server/services/photos';
+import { storePhotosForBuild } from '@server/services/media/photos';
 import { checkPageVersionOnEveryRequest } from '../../support/page-cache';
 import { Build } from '@server/models/build';
 

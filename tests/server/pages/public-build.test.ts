@@ -6,8 +6,8 @@ import { createUser } from '../../support/factories';
 import { createBuild, createFullBuild } from '../../support/build-factory';
 import { listenApp, rawGet } from '../../support/raw-http';
 import { jpegWithGps, sidewaysJpeg } from '../../support/images';
-import { randomBuildCode } from '@server/services/build-codes';
-import { storePhotosForBuild } from '@server/services/photos';
+import { randomBuildCode } from '@server/services/builds/build-codes';
+import { storePhotosForBuild } from '@server/services/media/photos';
 import { publicPageCache } from '@server/pages/page-cache';
 import { Build } from '@server/models/build';
 

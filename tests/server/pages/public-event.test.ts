@@ -3,7 +3,7 @@ import request from 'supertest';
 import { testApp } from '../../support/api-client';
 import { createFullBuild } from '../../support/build-factory';
 import { showWithClasses, signedIn } from '../../support/event-factory';
-import { confirmEntryPayment } from '@server/services/entries';
+import { confirmEntryPayment } from '@server/services/entries/entries';
 import { checkPageVersionOnEveryRequest } from '../../support/page-cache';
 
 

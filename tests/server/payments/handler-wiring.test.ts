@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { paymentHandlerFor } from '@server/payments/handlers';
-import { handleEntryPayment } from '@server/services/entry-payments';
+import { handleEntryPayment } from '@server/services/entries/entry-payments';
 
 // Runs in the isolated project: a fresh module graph, so nothing else has made an app in this process.
 describe('payment webhook handlers', () => {

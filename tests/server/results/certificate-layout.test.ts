@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { DEFAULT_RESULT_RULES } from '@shared/schemas/judging';
 import { PRINT_PAPERS, type ResultsSnapshot } from '@shared/schemas/results';
 import { TITLE_MAX } from '@shared/schemas/build';
-import { renderCertificates, renderResultsSheet } from '@server/services/result-pdfs';
+import { renderCertificates, renderResultsSheet } from '@server/services/results/result-pdfs';
 import { inside, overlaps, readCardLayouts } from '../../support/pdf';
 
 const longest = 'W'.repeat(12) + ' Long-roof custom wagon with a chopped top and a hand-formed aluminium grille and a name that runs on'.padEnd(TITLE_MAX - 12, ' x').slice(0, TITLE_MAX - 12);

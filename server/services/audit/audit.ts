@@ -1,0 +1,21 @@
+import type { Transaction } from 'sequelize';
+import { AuditLine } from '../../models/audit-line';
+import { User } from '../../models/user';
+
+/** One audit line (who, when, before → after), written in the caller's transaction so it exists exactly when the change does. */
+export async function writeAudit(
+  line: { eventId: number; entryId?: number | null; actorId: number | null; action: string; before?: unknown; after?: unknown },
+  transaction: Transaction,
+): Promise<void> {
+  await AuditLine.create({ eventId: line.eventId, entryId: line.entryId ?? null, actorId: line.actorId, action: line.action, before: line.before ?? null, after: line.after ?? null }, { transaction });
+}
+
+/** The show's trail, newest first (optionally one entry's). */
+export function listAudit(eventId: number, entryId?: number, limit = 200) {
+  return AuditLine.findAll({
+    where: { eventId, ...(entryId ? { entryId } : {}) },
+    include: [{ model: User, as: 'actor', attributes: ['id', 'name'] }],
+    order: [['id', 'DESC']],
+    limit,
+  });
+}

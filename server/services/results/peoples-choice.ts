@@ -1,0 +1,129 @@
+import { createHmac } from 'node:crypto';
+import { QueryTypes, type Transaction } from 'sequelize';
+import { peoplesChoice } from '@shared/calc/results';
+import { VOTING_STATUSES, votingOpen } from '@shared/schemas/peoples-choice';
+import { sequelize } from '../../db/sequelize';
+import { config } from '../../config';
+import { ConflictError, NotFoundError } from '../../errors';
+import { Event } from '../../models/event';
+import { Vote } from '../../models/vote';
+import { findEvent } from '../shows/events';
+import { writeAudit } from '../audit/audit';
+import { entryOnShowNow } from '../entries/entries';
+
+/**
+ * A keyed hash (HMAC-SHA256 with the server's secret, per show) of a voter's token or address.
+ * Keyed, because the IPv4 space is small enough to hash whole: a plain digest of an address is no
+ * secret. Per show, so one visitor's votes in two shows cannot be linked by their hashes.
+ */
+export function votingHash(kind: 'voter' | 'address', eventId: number, value: string): string {
+  return createHmac('sha256', config.sessionSecret).update(`placard-${kind}\0${eventId}\0${value}`).digest('hex');
+}
+
+/** The organiser opens or closes the window; opening needs the show on the field (show day or judging). */
+export async function setVotingWindow(eventId: number, open: boolean, person: { id: number }): Promise<Event> {
+  return sequelize.transaction(async (transaction) => {
+    // FOR UPDATE: a vote holds the show's row FOR SHARE, so none is counted after the close commits.
+    const event = await Event.findByPk(eventId, { lock: transaction.LOCK.UPDATE, transaction });
+    if (!event) throw new NotFoundError('No such show.');
+    if (open && !VOTING_STATUSES.includes(event.status)) throw new ConflictError('People’s choice voting opens on show day or while the show is being judged.');
+    if (votingOpen(event) === open) return event;
+    const before = { openedAt: event.peoplesChoiceOpenedAt, closedAt: event.peoplesChoiceClosedAt };
+    const now = new Date();
+    await event.update(open ? { peoplesChoiceOpenedAt: now, peoplesChoiceClosedAt: null } : { peoplesChoiceClosedAt: now }, { transaction });
+    await writeAudit(
+      { eventId, actorId: person.id, action: open ? 'peoples_choice_opened' : 'peoples_choice_closed', before, after: { openedAt: event.peoplesChoiceOpenedAt, closedAt: event.peoplesChoiceClosedAt } },
+      transaction,
+    );
+    return event;
+  });
+}
+
+export type VoteOutcome =
+  | { ok: true; eventId: number; entryNumber: number }
+  | { ok: false; reason: 'not-entered' | 'closed' }
+  | { ok: false; reason: 'twice'; votedNumber: number | null };
+
+/**
+ * One visitor's vote for the car with this public code, in the show its page names. The token and the
+ * address arrive raw and leave this function only as keyed hashes. Refusals are outcomes, not errors:
+ * the page answers each in words.
+ */
+export async function castVote(input: { code: string; voterToken: string; address: string }): Promise<VoteOutcome> {
+  return sequelize.transaction(async (transaction) => {
+    const entry = await entryOnShowNow(input.code, transaction);
+    if (!entry?.event) return { ok: false, reason: 'not-entered' };
+    const event = await Event.findByPk(entry.eventId, { lock: transaction.LOCK.SHARE, transaction });
+    if (!event || !votingOpen(event)) return { ok: false, reason: 'closed' };
+    const voterHash = votingHash('voter', event.id, input.voterToken);
+    const inserted = await sequelize.query(
+      `INSERT INTO votes (event_id, entry_id, voter_hash, address_hash, created_at) VALUES (:eventId, :entryId, :voterHash, :addressHash, now())
+       ON CONFLICT (event_id, voter_hash) DO NOTHING RETURNING id`,
+      { replacements: { eventId: event.id, entryId: entry.id, voterHash, addressHash: votingHash('address', event.id, input.address) }, type: QueryTypes.SELECT, transaction },
+    );
+    if (inserted.length === 0) return { ok: false, reason: 'twice', votedNumber: await votedNumber(event.id, input.voterToken, transaction) };
+    return { ok: true, eventId: event.id, entryNumber: entry.number! };
+  });
+}
+
+/** The number of the car this visitor voted for in this show, or null. A voided vote still used up the visitor's vote. */
+export async function votedNumber(eventId: number, voterToken: string, transaction?: Transaction): Promise<number | null> {
+  const rows = await sequelize.query<{ number: number }>(
+    `SELECT e.number FROM votes v JOIN entries e ON e.id = v.entry_id WHERE v.event_id = :eventId AND v.voter_hash = :voterHash`,
+    { replacements: { eventId, voterHash: votingHash('voter', eventId, voterToken) }, type: QueryTypes.SELECT, transaction },
+  );
+  return rows[0]?.number ?? null;
+}
+
+export type TallyRow = { entryId: number; number: number; title: string; className: string; votes: number };
+
+/** Votes per car that can win (confirmed or checked in, with a number), voided votes left out; most votes first. */
+export function loadTally(eventId: number, transaction?: Transaction): Promise<TallyRow[]> {
+  return sequelize.query<TallyRow>(
+    `SELECT e.id AS "entryId", e.number, b.title, c.name AS "className", count(v.id)::int AS votes
+       FROM entries e
+       JOIN builds b ON b.id = e.build_id
+       JOIN event_classes c ON c.id = e.class_id
+       LEFT JOIN votes v ON v.entry_id = e.id AND v.voided_at IS NULL
+      WHERE e.event_id = :eventId AND e.number IS NOT NULL AND e.status IN ('confirmed', 'checked_in')
+      GROUP BY e.id, b.title, c.name
+      ORDER BY votes DESC, e.number`,
+    { replacements: { eventId }, type: QueryTypes.SELECT, transaction },
+  );
+}
+
+/** Each address (as its keyed hash) that voted in the show: its votes and how many of them are voided. */
+export function loadAddresses(eventId: number) {
+  return sequelize.query<{ addressHash: string; votes: number; voided: number }>(
+    `SELECT address_hash AS "addressHash", count(*)::int AS votes, count(voided_at)::int AS voided
+       FROM votes WHERE event_id = :eventId GROUP BY address_hash ORDER BY votes DESC, address_hash`,
+    { replacements: { eventId }, type: QueryTypes.SELECT },
+  );
+}
+
+/** Everything the organiser's panel shows. */
+export async function loadPeoplesChoice(eventId: number) {
+  const event = await findEvent(eventId);
+  const [tally, addresses] = await Promise.all([loadTally(eventId), loadAddresses(eventId)]);
+  return { event, tally, addresses, leaders: peoplesChoice(tally).entryIds };
+}
+
+/** Voids every counted vote from one address in the show (ballot stuffing from one network); the audit line says how many. */
+export async function voidVotesOfAddress(eventId: number, addressHash: string, person: { id: number }): Promise<number> {
+  return sequelize.transaction(async (transaction) => {
+    await findEvent(eventId, transaction);
+    const [count] = await Vote.update({ voidedAt: new Date(), voidedBy: person.id }, { where: { eventId, addressHash, voidedAt: null }, transaction });
+    if (count > 0) await writeAudit({ eventId, actorId: person.id, action: 'peoples_choice_votes_voided', after: { addressHash, votes: count } }, transaction);
+    return count;
+  });
+}
+
+/** The people's choice award: the entry ids with the most counted votes, ties shared; none without votes. */
+export async function peoplesChoiceWinners(eventId: number, transaction?: Transaction): Promise<number[]> {
+  return (await peoplesChoiceResult(eventId, transaction)).entryIds;
+}
+
+/** The winners and their vote count, as results publishing stores them. */
+export async function peoplesChoiceResult(eventId: number, transaction?: Transaction): Promise<{ entryIds: number[]; votes: number }> {
+  return peoplesChoice(await loadTally(eventId, transaction));
+}

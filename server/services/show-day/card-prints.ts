@@ -1,0 +1,158 @@
+import { createHash } from 'node:crypto';
+import { Op } from 'sequelize';
+import { PDFDocument } from 'pdf-lib';
+import { CARD_PRINT_ACTIVE, CARD_PRINT_ENTRY_STATUSES } from '@shared/schemas/card-print';
+import { sequelize } from '../../db/sequelize';
+import { logger } from '../../logger';
+import { CardPrint } from '../../models/card-print';
+import { Entry } from '../../models/entry';
+import { Event } from '../../models/event';
+import { EventClass } from '../../models/event-class';
+import { User } from '../../models/user';
+import { ConflictError, NotFoundError, ValidationError } from '../../errors';
+import { CARD_QUEUE, jobQueue } from '../../jobs/queue';
+import { storage, type StoredObject } from '../../storage/index';
+import { cardCacheKey, cardSetKey } from '../../storage/keys';
+import { numberedCardsOf, readStoredFile, renderNumberedCards, type NumberedCard } from './numbered-cards';
+
+/** The job that renders a print; the card queue also carries show reminders (`jobs/card-jobs.ts`). */
+export type CardPrintJob = { kind: 'print'; printId: number };
+
+/** Cards missing from the cache are drawn this many to a document (much quicker than one by one), then split into pages. */
+export const RENDER_BATCH = 20;
+
+const withPeople = [
+  { model: User, as: 'starter', attributes: ['id', 'name'] },
+  { model: EventClass, as: 'eventClass', attributes: ['id', 'name'] },
+];
+
+async function classOfShow(eventId: number, classId: number) {
+  const cls = await EventClass.findOne({ where: { id: classId, eventId }, attributes: ['id'] });
+  if (!cls) throw new ValidationError({ classId: 'Not a class of this show.' });
+}
+
+const confirmedWhere = (eventId: number, classId: number | null) => ({
+  eventId,
+  status: { [Op.in]: [...CARD_PRINT_ENTRY_STATUSES] },
+  number: { [Op.ne]: null },
+  ...(classId ? { classId } : {}),
+});
+
+/**
+ * Starts a bulk print of numbered cards for every confirmed entry of the show (or one class). While
+ * one runs for the same show and filter, that one is returned instead of a second. A show (or class)
+ * with no confirmed entries is refused with the reason rather than producing an empty file.
+ */
+export async function startCardPrint(event: Event, classId: number | null, person: { id: number }): Promise<{ print: CardPrint; created: boolean }> {
+  if (classId) await classOfShow(event.id, classId);
+  const queue = jobQueue();
+  await queue.start(); // before the transaction: the first start creates pg-boss's tables on its own connection
+  const { id, created } = await sequelize.transaction(async (transaction) => {
+    // Two organisers starting at once take turns here, so the second finds the first one's print.
+    await Event.findByPk(event.id, { lock: transaction.LOCK.UPDATE, transaction });
+    const running = await CardPrint.findOne({ where: { eventId: event.id, classId, status: { [Op.in]: [...CARD_PRINT_ACTIVE] } }, transaction });
+    if (running) return { id: running.id, created: false };
+    const total = await Entry.count({ where: confirmedWhere(event.id, classId), transaction });
+    if (total === 0) {
+      throw new ConflictError(classId ? 'This class has no confirmed entries yet: there are no cards to print.' : 'This show has no confirmed entries yet: there are no cards to print.', { classId: 'No confirmed entries.' });
+    }
+    const print = await CardPrint.create({ eventId: event.id, classId, total, startedBy: person.id }, { transaction });
+    const job: CardPrintJob = { kind: 'print', printId: print.id };
+    await queue.send(CARD_QUEUE, job, transaction);
+    return { id: print.id, created: true };
+  });
+  return { print: (await CardPrint.findByPk(id, { include: withPeople }))!, created };
+}
+
+/** One print of this show. */
+export async function findCardPrint(eventId: number, printId: number): Promise<CardPrint> {
+  const print = await CardPrint.findOne({ where: { id: printId, eventId }, include: withPeople });
+  if (!print) throw new NotFoundError('No such print for this show.');
+  return print;
+}
+
+/** The newest print of this show for the filter (every class, or one), running or not: what a reload or a second organiser sees. */
+export async function latestCardPrint(eventId: number, classId: number | null): Promise<CardPrint | null> {
+  return CardPrint.findOne({ where: { eventId, classId }, include: withPeople, order: [['id', 'DESC']] });
+}
+
+/** The finished PDF, or a 409 while it is not ready. */
+export async function cardPrintFile(print: CardPrint): Promise<StoredObject> {
+  if (print.status !== 'done' || !print.fileKey) throw new ConflictError('The cards are not ready yet.', { status: print.status });
+  const file = await storage.get(print.fileKey);
+  if (!file) throw new NotFoundError('The printed file is gone; start the print again.');
+  return file;
+}
+
+/** Splits a document into one-page documents, in order (the cache keeps each card on its own). */
+async function splitPages(pdf: Buffer): Promise<Buffer[]> {
+  const src = await PDFDocument.load(pdf);
+  const out: Buffer[] = [];
+  for (let i = 0; i < src.getPageCount(); i++) {
+    const one = await PDFDocument.create();
+    const [page] = await one.copyPages(src, [i]);
+    one.addPage(page!);
+    out.push(Buffer.from(await one.save()));
+  }
+  return out;
+}
+
+/** Concatenates one-page PDFs with pdf-lib: pages are copied, never drawn again. */
+async function joinPages(pdfs: Buffer[], title: string): Promise<Buffer> {
+  const out = await PDFDocument.create();
+  out.setTitle(title);
+  out.setProducer('Placard');
+  out.setCreator('Placard');
+  for (const pdf of pdfs) {
+    const src = await PDFDocument.load(pdf);
+    for (const page of await out.copyPages(src, src.getPageIndices())) out.addPage(page);
+  }
+  return Buffer.from(await out.save());
+}
+
+/**
+ * Renders a print: each card's page comes from the cache when its content and design are unchanged,
+ * the rest are drawn (a batch to a document) and cached; the pages are joined in number order. The
+ * whole set is cached too, by the list of its cards: an unchanged re-print reuses the finished file.
+ * Progress (done / total) is written as it goes, for the organiser's progress bar.
+ */
+export async function runCardPrint(printId: number): Promise<void> {
+  const print = await CardPrint.findByPk(printId);
+  if (!print || print.status === 'done' || print.status === 'failed') return;
+  try {
+    const event = (await Event.findByPk(print.eventId, { attributes: ['id', 'name'] }))!;
+    const cards = await numberedCardsOf(event, print.classId);
+    if (cards.length === 0) throw new Error('No confirmed entries are left to print.');
+    await print.update({ status: 'running', total: cards.length, done: 0, rendered: 0, error: null });
+    const setKey = cardSetKey(createHash('sha256').update(cards.map((c) => c.hash).join('\n')).digest('hex'));
+    if (await storage.exists(setKey)) {
+      await print.update({ status: 'done', done: cards.length, fileKey: setKey, finishedAt: new Date() });
+      return;
+    }
+    const pages: Array<Buffer | null> = await Promise.all(cards.map((c) => readStoredFile(cardCacheKey(c.hash))));
+    const missing = cards.map((c, i) => ({ card: c, i })).filter(({ i }) => !pages[i]);
+    let done = cards.length - missing.length;
+    let rendered = 0;
+    await print.update({ done });
+    for (let at = 0; at < missing.length; at += RENDER_BATCH) {
+      const batch = missing.slice(at, at + RENDER_BATCH);
+      const drawn = await splitPages(await renderNumberedCards(batch.map((m) => m.card.content), event.name));
+      await Promise.all(batch.map(({ card, i }, n) => {
+        pages[i] = drawn[n]!;
+        return storage.put(cardCacheKey(card.hash), drawn[n]!, 'application/pdf');
+      }));
+      done += batch.length;
+      rendered += batch.length;
+      await print.update({ done, rendered });
+    }
+    const joined = await joinPages(pages as Buffer[], `${event.name}: numbered cards`);
+    await storage.put(setKey, joined, 'application/pdf');
+    await print.update({ status: 'done', fileKey: setKey, finishedAt: new Date() });
+  } catch (err) {
+    logger.error({ err, printId }, 'card print failed');
+    const message = err instanceof Error ? err.message.slice(0, 480) : 'The print failed.';
+    await print.update({ status: 'failed', error: message, finishedAt: new Date() });
+  }
+}
+
+export type { NumberedCard };

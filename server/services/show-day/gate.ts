@@ -1,0 +1,153 @@
+import { Op } from 'sequelize';
+import { coverPhotoOf } from '@shared/build-sheet/cover';
+import { CHECK_IN_UNDO_SECONDS, paymentStateOf, type GateCard, type GateCounts, type GateProblem } from '@shared/schemas/show-day';
+import { buildCodeFromScan, gateProblemMessage } from '@shared/gate';
+import { formatInZone } from '@shared/calc/time-zone';
+import { sequelize } from '../../db/sequelize';
+import { AuditLine } from '../../models/audit-line';
+import { Build } from '../../models/build';
+import { Entry } from '../../models/entry';
+import { Event } from '../../models/event';
+import { EventClass } from '../../models/event-class';
+import { Photo } from '../../models/photo';
+import { ConflictError, NotFoundError } from '../../errors';
+import { mediaUrl, photoVariantKey } from '../../storage/keys';
+import { writeAudit } from '../audit/audit';
+import { recordManualPayment } from '../entries/entry-actions';
+
+type Person = { id: number };
+
+const entryInclude = [
+  { model: Build, as: 'build', attributes: ['id', 'title', 'code'], include: [{ model: Photo, as: 'photos', attributes: ['storageKey', 'variants', 'isCover', 'position'] }] },
+  { model: EventClass, as: 'eventClass', attributes: ['id', 'name'] },
+];
+
+function coverOf(build: Build | undefined) {
+  const cover = coverPhotoOf(build?.photos);
+  if (!cover) return null;
+  // The smallest variant at least 480 px wide is enough for a phone at the gate.
+  const variants = [...cover.variants].sort((a, b) => a.width - b.width);
+  const v = variants.find((x) => x.width >= 480) ?? variants[variants.length - 1];
+  return v ? { src: mediaUrl(photoVariantKey(cover.storageKey, v.width, 'jpg')), width: v.width, height: v.height } : null;
+}
+
+const timeAt = (d: Date, event: Event) => formatInZone(d.toISOString(), event.timeZone, { hour: '2-digit', minute: '2-digit' });
+
+function problemOf(entry: Entry): GateProblem | null {
+  if (entry.status === 'checked_in') return 'already_checked_in';
+  if (entry.status === 'withdrawn') return 'withdrawn';
+  if (entry.status === 'waiting_list') return 'waiting_list';
+  if (entry.status === 'awaiting_payment') return 'unpaid';
+  return null;
+}
+
+/** What the gate shows for one entry of this show: the car, and the problem in words if there is one. */
+export function gateCardOf(entry: Entry, event: Event): GateCard {
+  const problem = problemOf(entry);
+  return {
+    entry: {
+      id: entry.id,
+      number: entry.number,
+      title: entry.build?.title ?? '',
+      className: entry.eventClass?.name ?? '',
+      classId: entry.classId,
+      status: entry.status,
+      payment: paymentStateOf(entry),
+      feeAmount: entry.feeAmount,
+      currency: entry.currency,
+      checkedInAt: entry.checkedInAt ? entry.checkedInAt.toISOString() : null,
+      cover: coverOf(entry.build),
+    },
+    problem,
+    message: problem ? gateProblemMessage(problem, { number: entry.number, at: entry.checkedInAt ? timeAt(entry.checkedInAt, event) : undefined }) : null,
+    canCheckIn: problem === null,
+    canTakeCash: problem === 'unpaid',
+  };
+}
+
+const nothing = (problem: GateProblem, showName?: string): GateCard => ({ entry: null, problem, message: gateProblemMessage(problem, { showName }), canCheckIn: false, canTakeCash: false });
+
+/** A scanned card or a typed number, looked up in this show only. A build not entered here offers nothing but the message. */
+export async function gateLookup(event: Event, what: { code?: string; number?: number }): Promise<GateCard> {
+  if (what.number !== undefined) {
+    const entry = await Entry.findOne({ where: { eventId: event.id, number: what.number }, include: entryInclude });
+    if (!entry) throw new NotFoundError(`No entry number ${what.number} in this show.`);
+    return gateCardOf(entry, event);
+  }
+  const code = buildCodeFromScan(what.code ?? '');
+  const build = code ? await Build.findOne({ where: { code }, attributes: ['id'] }) : null;
+  if (!build) return nothing('unknown_code');
+  const entry = await Entry.findOne({ where: { eventId: event.id, buildId: build.id }, include: entryInclude });
+  if (entry) return gateCardOf(entry, event);
+  const elsewhere = await Entry.findOne({
+    where: { buildId: build.id, status: { [Op.ne]: 'withdrawn' } },
+    include: [{ model: Event, as: 'event', attributes: ['name', 'startsAt'] }],
+    order: [[{ model: Event, as: 'event' }, 'startsAt', 'DESC']],
+  });
+  return elsewhere ? nothing('other_show', elsewhere.event?.name) : nothing('not_entered');
+}
+
+async function reload(entryId: number, event: Event) {
+  return gateCardOf((await Entry.findByPk(entryId, { include: entryInclude }))!, event);
+}
+
+/**
+ * Check a car in by its number. A confirmed entry checks in; an unpaid one only with `takeCash`
+ * (the fee is recorded as paid by hand in the same transaction); anything else is refused with the
+ * reason, and a second check-in changes nothing.
+ */
+export async function gateCheckIn(event: Event, number: number, takeCash: boolean, person: Person, now = new Date()): Promise<GateCard> {
+  const entryId = await sequelize.transaction(async (transaction) => {
+    const locked = await Event.findByPk(event.id, { lock: transaction.LOCK.UPDATE, transaction });
+    const entry = await Entry.findOne({ where: { eventId: event.id, number }, lock: transaction.LOCK.UPDATE, transaction });
+    if (!locked || !entry) throw new NotFoundError(`No entry number ${number} in this show.`);
+    const problem = problemOf(entry);
+    if (problem === 'unpaid' && takeCash) {
+      await recordManualPayment(entry, locked, 'Cash taken at the gate.', person, transaction, now);
+    } else if (problem) {
+      throw new ConflictError(gateProblemMessage(problem, { number, at: entry.checkedInAt ? timeAt(entry.checkedInAt, event) : undefined }), { number: problem });
+    }
+    const before = { status: entry.status };
+    await entry.update({ status: 'checked_in', checkedInAt: now }, { transaction });
+    await writeAudit({ eventId: event.id, entryId: entry.id, actorId: person.id, action: 'checked_in', before, after: { status: 'checked_in', cashTaken: problem === 'unpaid' } }, transaction);
+    return entry.id;
+  });
+  return reload(entryId, event);
+}
+
+/**
+ * Undo a check-in made less than a minute ago (a wrong car, a slip of the thumb). Cash taken with
+ * it is undone too, so the entry is exactly as it was.
+ */
+export async function undoCheckIn(event: Event, entryId: number, person: Person, now = new Date()): Promise<GateCard> {
+  await sequelize.transaction(async (transaction) => {
+    await Event.findByPk(event.id, { lock: transaction.LOCK.UPDATE, transaction });
+    const entry = await Entry.findOne({ where: { id: entryId, eventId: event.id }, lock: transaction.LOCK.UPDATE, transaction });
+    if (!entry) throw new NotFoundError('No such entry in this show.');
+    if (entry.status !== 'checked_in' || !entry.checkedInAt) throw new ConflictError('This entry is not checked in.', { entryId: 'Not checked in.' });
+    if (now.getTime() - entry.checkedInAt.getTime() > CHECK_IN_UNDO_SECONDS * 1000) throw new ConflictError(`A check-in can be undone for ${CHECK_IN_UNDO_SECONDS} seconds only; ask an organiser.`, { entryId: 'Too late to undo.' });
+    const line = await AuditLine.findOne({ where: { entryId, action: 'checked_in' }, order: [['id', 'DESC']], transaction });
+    const cashTaken = Boolean((line?.after as { cashTaken?: boolean } | null)?.cashTaken);
+    const before = { status: entry.status, paymentRef: entry.paymentRef };
+    await entry.update({ status: cashTaken ? 'awaiting_payment' : 'confirmed', checkedInAt: null, ...(cashTaken ? { paidAt: null, paidAmount: null, paymentRef: null } : {}) }, { transaction });
+    await writeAudit({ eventId: event.id, entryId, actorId: person.id, action: 'check_in_undone', before, after: { status: entry.status, cashReturned: cashTaken } }, transaction);
+  });
+  return reload(entryId, event);
+}
+
+/** Arrived / expected per class: expected counts every entry with a place (paid or not), arrived those checked in. */
+export async function gateCounts(eventId: number): Promise<GateCounts> {
+  const classes = await EventClass.findAll({ where: { eventId }, attributes: ['id', 'name'], order: [['position', 'ASC'], ['id', 'ASC']] });
+  const rows = (await Entry.findAll({
+    where: { eventId, status: { [Op.in]: ['awaiting_payment', 'confirmed', 'checked_in'] } },
+    attributes: ['classId', 'status', [sequelize.fn('COUNT', sequelize.col('id')), 'n']],
+    group: ['classId', 'status'],
+    raw: true,
+  })) as unknown as Array<{ classId: number; status: string; n: string }>;
+  const out = classes.map((c) => {
+    const mine = rows.filter((r) => r.classId === c.id);
+    const sum = (pred: (r: { status: string }) => boolean) => mine.filter(pred).reduce((s, r) => s + Number(r.n), 0);
+    return { classId: c.id, name: c.name, arrived: sum((r) => r.status === 'checked_in'), expected: sum(() => true) };
+  });
+  return { classes: out, arrived: out.reduce((s, c) => s + c.arrived, 0), expected: out.reduce((s, c) => s + c.expected, 0) };
+}
