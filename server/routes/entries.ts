@@ -1,7 +1,5 @@
 import { Router } from 'express';
 import { EntryCreateSchema } from '@shared/schemas/event';
-import { GateCheckInSchema } from '@shared/schemas/show-day';
-import { gateCheckIn } from '../services/show-day/gate';
 import { IdParamSchema } from '@shared/schemas/params';
 import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
@@ -34,14 +32,6 @@ entriesRouter.get('/events/:id/entries', requireUser, async (req, res) => {
   await authorizedEvent(req, id, 'viewEntries');
   const { entries, positions } = await listEntriesOfEvent(id);
   res.json({ entries: entries.map((e) => presentOrganiserEntry(e, positions)) });
-});
-
-entriesRouter.post('/events/:id/check-in', requireUser, async (req, res) => {
-  const { id } = parseParams(req, IdParamSchema);
-  const { number, takeCash } = parseBody(req, GateCheckInSchema);
-  const { event } = await authorizedEvent(req, id, 'checkIn');
-  const card = await gateCheckIn(event, number, takeCash, currentUser(req));
-  res.json({ entry: { id: card.entry!.id, number: card.entry!.number, status: card.entry!.status }, card });
 });
 
 entriesRouter.get('/entries', async (req, res) => {

@@ -10,7 +10,8 @@ import { createEvent } from '../../services/shows/events';
 import { takeLifecycleStep } from '../../services/commands/take-lifecycle-step';
 import { addClass } from '../../services/shows/event-classes';
 import { saveJudgingSheet } from '../../services/judging/judging-sheet';
-import { checkInEntry, registerEntry } from '../../services/entries/entries';
+import { registerEntry } from '../../services/entries/entries';
+import { gateCheckIn } from '../../services/show-day/gate';
 import { assignJudge } from '../../services/judging/judge-assignments';
 import { submitScores } from '../../services/judging/scores';
 import { castVote, setVotingWindow } from '../../services/results/peoples-choice';
@@ -77,7 +78,7 @@ export async function seedJudgingShow(organiser: User): Promise<void> {
   await takeLifecycleStep(show.id, organiser, 'close_registration');
   await takeLifecycleStep(show.id, organiser, 'open_gate');
   const gate = await person('gate@placard.test');
-  for (const e of entries.slice(0, 6)) await checkInEntry(show.id, e.number!, gate); // the wagon never arrived
+  for (const e of entries.slice(0, 6)) await gateCheckIn(show, e.number!, false, gate); // the wagon never arrived
   await takeLifecycleStep(show.id, organiser, 'start_judging');
   // On now, whatever the hour the demo is loaded: started two hours ago (on the hour), ends in ten.
   const hour = Math.floor(Date.now() / 3600_000) * 3600_000;

@@ -6,7 +6,8 @@ import { User } from '../../models/user';
 import { createEvent } from '../../services/shows/events';
 import { takeLifecycleStep } from '../../services/commands/take-lifecycle-step';
 import { addClass } from '../../services/shows/event-classes';
-import { checkInEntry, confirmEntryPayment, registerEntry } from '../../services/entries/entries';
+import { confirmEntryPayment, registerEntry } from '../../services/entries/entries';
+import { gateCheckIn } from '../../services/show-day/gate';
 import { runCardPrint, startCardPrint } from '../../services/show-day/card-prints';
 import { DEMO_SHOW_CLASSES } from './shows';
 
@@ -72,7 +73,7 @@ export async function seedShowDay(): Promise<void> {
   await takeLifecycleStep(show.id, organiser, 'close_registration');
   await takeLifecycleStep(show.id, organiser, 'open_gate');
   const gate = await person('gate@placard.test');
-  for (const number of arrived) await checkInEntry(show.id, number, gate);
+  for (const number of arrived) await gateCheckIn(show, number, false, gate);
 
   const day = new Date(now).toISOString().slice(0, 10);
   const today = (time: string) => new Date(wallTimeToInstant(`${day}T${time}`, DEMO_SHOW_DAY_SHOW.timeZone));

@@ -17,7 +17,8 @@ import { takeLifecycleStep } from '../../services/commands/take-lifecycle-step';
 import { addClass } from '../../services/shows/event-classes';
 import { saveJudgingSheet } from '../../services/judging/judging-sheet';
 import { inviteToEvent } from '../../services/shows/event-people';
-import { confirmEntryPayment, registerEntry, withdrawEntry, checkInEntry } from '../../services/entries/entries';
+import { confirmEntryPayment, registerEntry, withdrawEntry } from '../../services/entries/entries';
+import { gateCheckIn } from '../../services/show-day/gate';
 
 const DAY = 86400_000;
 
@@ -106,7 +107,7 @@ async function seedShows() {
   }
   await takeLifecycleStep(done.id, organiser, 'close_registration');
   await takeLifecycleStep(done.id, organiser, 'open_gate');
-  for (const e of entered) await checkInEntry(done.id, e.number!, gate);
+  for (const e of entered) await gateCheckIn(done, e.number!, false, gate);
   await takeLifecycleStep(done.id, organiser, 'start_judging');
   await seedFinishedShowJudging(done.id, organiser);
   await takeLifecycleStep(done.id, organiser, 'publish_results');

@@ -146,20 +146,6 @@ export async function confirmEntryPayment(
   return opts.transaction ? run(opts.transaction) : sequelize.transaction(run);
 }
 
-/** The gate checks a car in by its number: only a confirmed entry, once. */
-export async function checkInEntry(eventId: number, number: number, person: Person): Promise<Entry> {
-  return sequelize.transaction(async (transaction) => {
-    const entry = await Entry.findOne({ where: { eventId, number }, lock: transaction.LOCK.UPDATE, transaction });
-    if (!entry) throw new NotFoundError(`No entry number ${number} in this show.`);
-    if (entry.status === 'awaiting_payment') throw new ConflictError(`Entry ${number} is not paid yet.`, { number: 'Unpaid.' });
-    if (entry.status === 'checked_in') throw new ConflictError(`Entry ${number} is already checked in.`, { number: 'Already checked in.' });
-    if (entry.status !== 'confirmed') throw new ConflictError(`Entry ${number} is withdrawn.`, { number: 'Withdrawn.' });
-    await entry.update({ status: 'checked_in', checkedInAt: new Date() }, { transaction });
-    await writeAudit({ eventId, entryId: entry.id, actorId: person.id, action: 'checked_in', before: { status: 'confirmed' }, after: { status: 'checked_in' } }, transaction);
-    return entry;
-  });
-}
-
 export async function findEntry(id: number): Promise<Entry> {
   const entry = await Entry.findByPk(id);
   if (!entry) throw new NotFoundError('No such entry.');

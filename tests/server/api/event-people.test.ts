@@ -118,14 +118,14 @@ describe('gate and judge roles do only their thing', () => {
       expect((await who.client.post(`/api/entries/${entry.id}/withdraw`)).status).toBe(403);
     }
     // Before show day, nobody checks in.
-    expect((await gate.client.post(`/api/events/${eventId}/check-in`, { number: 1 })).status).toBe(403);
+    expect((await gate.client.post(`/api/events/${eventId}/gate/check-in`, { number: 1 })).status).toBe(403);
     await organiser.client.post(`/api/events/${eventId}/lifecycle`, { action: 'close_registration' });
     await organiser.client.post(`/api/events/${eventId}/lifecycle`, { action: 'open_gate' });
-    expect((await judge.client.post(`/api/events/${eventId}/check-in`, { number: 1 })).status).toBe(403);
-    const checked = await gate.client.post(`/api/events/${eventId}/check-in`, { number: 1 });
-    expect(checked.body.entry).toMatchObject({ number: 1, status: 'checked_in' });
-    expect((await gate.client.post(`/api/events/${eventId}/check-in`, { number: 1 })).body.error.message).toMatch(/already checked in/);
-    expect((await gate.client.post(`/api/events/${eventId}/check-in`, { number: 99 })).status).toBe(404);
+    expect((await judge.client.post(`/api/events/${eventId}/gate/check-in`, { number: 1 })).status).toBe(403);
+    const checked = await gate.client.post(`/api/events/${eventId}/gate/check-in`, { number: 1 });
+    expect(checked.body.card.entry).toMatchObject({ number: 1, status: 'checked_in' });
+    expect((await gate.client.post(`/api/events/${eventId}/gate/check-in`, { number: 1 })).body.error.message).toMatch(/already checked in/);
+    expect((await gate.client.post(`/api/events/${eventId}/gate/check-in`, { number: 99 })).status).toBe(404);
     expect((await gate.client.get(`/api/events/${eventId}`)).body.event.abilities).toMatchObject({ checkIn: true, manage: false, judge: false });
   });
 });
