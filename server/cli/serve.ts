@@ -8,7 +8,7 @@ import { createMailSender } from '../mail/mailer';
 import { jobQueue } from '../jobs/queue';
 import { startMailWorker } from '../jobs/send-mail';
 import { startRefundWorker } from '../jobs/refund-entry';
-import { startOfferSweep } from '../jobs/offer-sweep';
+import { startOfferSweepWorker } from '../jobs/offer-sweep';
 import { startCardWorker } from '../jobs/card-jobs';
 import { pointPaymentsAtFake } from '../payments/client';
 import { startLocalPayments } from '../payments/fake';
@@ -25,7 +25,7 @@ const server = await listen();
 // The one-machine default: this process also works the job queue (mail now; more jobs join it).
 await startMailWorker(jobQueue(), createMailSender(demoCatcher?.smtpUrl ?? config.smtpUrl));
 await startRefundWorker();
-const stopOfferSweep = startOfferSweep();
+await startOfferSweepWorker();
 await startCardWorker();
 const url = `http://${config.host}:${config.port}`;
 
@@ -66,7 +66,6 @@ async function stop() {
   if (stopping) return;
   stopping = true;
   server.close();
-  stopOfferSweep();
   catcher?.close(() => undefined);
   await fakePayments?.close();
   await closeConnections();

@@ -17,6 +17,9 @@ export const REFUND_QUEUE = 'entry-refund';
  * queue, so a print is rendered where its test reads it back.
  */
 export const CARD_QUEUE = config.env === 'test' ? `cards-${process.pid}` : 'cards';
+/** Every minute, lapsed waiting-list offers pass to the next in line even when nobody opens the show. */
+export const OFFER_SWEEP_QUEUE = 'offer-sweep';
+export const OFFER_SWEEP_CRON = '* * * * *';
 
 export type JobQueueOptions = {
   connectionString: string;
@@ -26,6 +29,8 @@ export type JobQueueOptions = {
   applicationName?: string;
   /** Maintenance (expiring, archiving, retrying stuck jobs) runs in processes that work jobs. */
   supervise: boolean;
+  /** Timekeeping: this process turns the stored schedules (cron) into jobs; pg-boss lets one process at a time do it per minute. */
+  schedule?: boolean;
   pollSeconds: number;
   mailRetryDelaySeconds: number;
   mailRetryLimit: number;
@@ -48,7 +53,7 @@ export class JobQueue {
       application_name: options.applicationName ?? 'placard-jobs',
       max: 4,
       supervise: options.supervise,
-      schedule: false,
+      schedule: options.schedule ?? false,
     });
     // A database restart makes idle pool clients and the polling loop fail: log it and carry on
     // (pg-boss reconnects on its next query). Without a listener the 'error' event would end the process.
@@ -81,6 +86,9 @@ export class JobQueue {
     // A print of hundreds of cards takes a minute at most; a lost worker's job is tried again after this.
     const cards = { retryLimit: 2, retryDelay: 5, expireInSeconds: 15 * 60 };
     await this.boss.createQueue(CARD_QUEUE, { name: CARD_QUEUE, ...cards });
+    // Timed work is a scheduled job, not a timer in one process: whichever process keeps time sends it, any worker runs it.
+    await this.boss.createQueue(OFFER_SWEEP_QUEUE, { name: OFFER_SWEEP_QUEUE, retryLimit: 0, expireInSeconds: 60 });
+    await this.boss.schedule(OFFER_SWEEP_QUEUE, OFFER_SWEEP_CRON, {}, { tz: 'UTC' });
     return this.boss;
   }
 
@@ -160,6 +168,8 @@ export function jobQueue(): JobQueue {
     connectionString: config.databaseUrl,
     // Every process may do the upkeep; pg-boss lets one at a time do it.
     supervise: true,
+    // Test runs make their own sweeps when they want one; a server keeps time.
+    schedule: config.env !== 'test',
     pollSeconds: config.jobPollSeconds,
     mailRetryDelaySeconds: config.mailRetryDelaySeconds,
     mailRetryLimit: config.mailRetryLimit,

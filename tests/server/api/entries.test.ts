@@ -7,7 +7,8 @@ import { createBuild } from '../../support/build-factory';
 import { ownerWithBuild, showWithClasses, signedIn } from '../../support/event-factory';
 import { countMail, waitForMail, waitForMailAbout } from '../../support/mailbox';
 import { confirmEntryPayment } from '@server/services/entries/entries';
-import { startOfferSweep } from '@server/jobs/offer-sweep';
+import { startOfferSweepWorker } from '@server/jobs/offer-sweep';
+import { jobQueue, OFFER_SWEEP_CRON, OFFER_SWEEP_QUEUE } from '@server/jobs/queue';
 
 const DAY = 86400_000;
 
@@ -144,13 +145,13 @@ describe('capacity and the waiting list', () => {
     await a.client.post(`/api/entries/${ea.id}/withdraw`);
     expect((await Entry.findByPk(eb.id))!.offerExpiresAt).not.toBeNull();
     await Entry.update({ offerExpiresAt: new Date(Date.now() - 1000) }, { where: { id: eb.id } });
-    // The server's timer (every minute under npm start; every 100 ms here) sweeps with nobody reading the show.
-    const stop = startOfferSweep(100);
-    try {
-      await vi.waitFor(async () => expect((await Entry.findByPk(eb.id))!.status).toBe('withdrawn'), { timeout: 15_000 });
-    } finally {
-      stop();
-    }
+    // The minute's scheduled sweep (stored as a schedule; here the job is sent at once) runs with nobody reading the show.
+    const queue = jobQueue();
+    await queue.start();
+    expect((await queue.boss.getSchedules()).find((s) => s.name === OFFER_SWEEP_QUEUE)).toMatchObject({ cron: OFFER_SWEEP_CRON });
+    await startOfferSweepWorker(queue);
+    await queue.send(OFFER_SWEEP_QUEUE, {});
+    await vi.waitFor(async () => expect((await Entry.findByPk(eb.id))!.status).toBe('withdrawn'));
     expect((await Entry.findByPk(ec.id))!.offerExpiresAt).not.toBeNull();
   });
 });
