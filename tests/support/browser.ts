@@ -12,20 +12,23 @@ export const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--
 /** How long one browser action may wait: the browser journeys run on their own after the API tests, so a step that takes longer is stuck. */
 export const BROWSER_ACTION_TIMEOUT_MS = 20_000;
 
-export async function launchBrowser(): Promise<Browser> {
+/** `onContext` hears of every context made from this browser (`newPage` makes one of its own too). */
+export async function launchBrowser({ onContext }: { onContext?: (context: BrowserContext) => void } = {}): Promise<Browser> {
   if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: run the tests with \`npm test\`, which installs Debian's chromium.`);
   const browser = await chromium.launch({ executablePath: CHROMIUM, args: CHROMIUM_ARGS, timeout: 120_000 });
-  // Every page and context made from this browser gets the patient limit instead of Playwright's 30 s.
+  // Every page and context made from this browser gets the run's limit instead of Playwright's 30 s.
   const newContext = browser.newContext.bind(browser);
   browser.newContext = async (options) => {
     const context = await newContext(options);
     context.setDefaultTimeout(BROWSER_ACTION_TIMEOUT_MS);
+    onContext?.(context);
     return context;
   };
   const newPage = browser.newPage.bind(browser);
   browser.newPage = async (options) => {
     const page = await newPage(options);
     page.setDefaultTimeout(BROWSER_ACTION_TIMEOUT_MS);
+    onContext?.(page.context());
     return page;
   };
   return browser;
@@ -59,20 +62,8 @@ let shared: Promise<BrowserAndServer> | undefined;
 const contextsOfThisTest = new Set<BrowserContext>();
 
 async function startShared(): Promise<BrowserAndServer> {
-  const [{ server, baseUrl }, browser] = await Promise.all([startTestServer(), launchBrowser()]);
   // Every page or context a test opens is remembered, so it is closed when that test ends.
-  const newContext = browser.newContext.bind(browser);
-  browser.newContext = async (options) => {
-    const context = await newContext(options);
-    contextsOfThisTest.add(context);
-    return context;
-  };
-  const newPage = browser.newPage.bind(browser);
-  browser.newPage = async (options) => {
-    const page = await newPage(options);
-    contextsOfThisTest.add(page.context());
-    return page;
-  };
+  const [{ server, baseUrl }, browser] = await Promise.all([startTestServer(), launchBrowser({ onContext: (c) => contextsOfThisTest.add(c) })]);
   return { server, baseUrl, browser };
 }
 

@@ -2,6 +2,9 @@ import { expect } from 'vitest';
 import type { Page } from 'playwright-core';
 import { DEFAULT_PASSWORD } from './factories';
 
+/** The shows a walk may enter (by id, and by the public slug the entry form uses). */
+export type WalkedShow = { id: number; slug: string };
+
 /** What a walk found: every screen reached (by its path) and anything that broke on the way. */
 export type Walk = { reached: string[]; problems: string[] };
 
@@ -30,10 +33,21 @@ async function settle(page: Page): Promise<string | null> {
   return null;
 }
 
-/** The show-side links on the screen now, in page order, each once. */
-async function showSideLinks(page: Page): Promise<string[]> {
+/**
+ * The show-side links on the screen now, in page order, each once: the lists, and the screens of the
+ * walk's own shows (the test database holds every other test's shows too; a walk of them all would
+ * grow with the suite, not with the product).
+ */
+async function showSideLinks(page: Page, shows: readonly WalkedShow[]): Promise<string[]> {
   const hrefs = await page.locator('main a[href], nav a[href]').evaluateAll((as) => as.filter((a) => !a.hasAttribute('download')).map((a) => a.getAttribute('href') ?? ''));
-  return [...new Set(hrefs.filter((h) => SHOW_SIDE.test(h)))];
+  const ours = (h: string) => {
+    const id = /^\/(?:shows|judge)\/(\d+)/.exec(h)?.[1];
+    const slug = /^\/enter\/([^/?#]+)/.exec(h)?.[1];
+    if (id !== undefined) return shows.some((s) => s.id === Number(id));
+    if (slug !== undefined) return shows.some((s) => s.slug === slug);
+    return true;
+  };
+  return [...new Set(hrefs.filter((h) => SHOW_SIDE.test(h) && ours(h)))];
 }
 
 /**
@@ -41,7 +55,7 @@ async function showSideLinks(page: Page): Promise<string[]> {
  * show-side link on each screen is clicked (depth first, each path once), each screen checked once it
  * has loaded, then the browser's Back button is pressed and the screen before is checked again.
  */
-export async function walkShowSide(page: Page, baseUrl: string, email: string, opts: { maxScreens?: number } = {}): Promise<Walk> {
+export async function walkShowSide(page: Page, baseUrl: string, email: string, opts: { shows: readonly WalkedShow[]; maxScreens?: number }): Promise<Walk> {
   const errors = watchForErrors(page);
   const problems: string[] = [];
   const reached: string[] = [];
@@ -68,7 +82,7 @@ export async function walkShowSide(page: Page, baseUrl: string, email: string, o
     reached.push(path);
     await check(`at ${path}`);
     if (depth >= 4) return;
-    for (const href of await showSideLinks(page)) {
+    for (const href of await showSideLinks(page, opts.shows)) {
       if (visited.has(href) || reached.length >= maxScreens) continue;
       await page.locator(`main a[href="${href}"], nav a[href="${href}"]`).first().click();
       await page.waitForURL((u) => u.pathname + u.search === href);

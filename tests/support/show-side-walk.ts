@@ -1,0 +1,69 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { BrowserContextOptions } from 'playwright-core';
+import { useBrowserAndServer } from './browser';
+import { walkShowSide, type WalkedShow } from './crawl';
+import { showWithClasses, signedIn } from './event-factory';
+import { enter, memberOf, step } from './show-day-factory';
+import { judgeOf, showInJudging } from './judging-factory';
+import { confirmEntryPayment } from '@server/services/entries/entries';
+import { User } from '@server/models/user';
+
+type Person = { role: string; email: string };
+
+/**
+ * Every role reaches every screen of the show side by clicking the product's own links (never by
+ * typing an address), forward and back, and nothing breaks on the way: no error boundary, no script or
+ * console error. Screens that share a cached answer are reached one after the other here, which is how
+ * two shapes under one cache key were found breaking. One file per device, so the two run side by side.
+ */
+export function describeShowSideWalk(device: string, options: BrowserContextOptions): void {
+  const env = useBrowserAndServer();
+  const people: Person[] = [];
+  const shows: WalkedShow[] = [];
+
+  beforeAll(async () => {
+    // A show on its day, gate open: paid and unpaid cars, a co-organiser and a gate person.
+    const onTheDay = await showWithClasses({ settings: { name: 'Walkabout Show' }, classes: [{ name: 'Hot rods' }, { name: 'Customs' }] });
+    const paid = await enter(onTheDay.eventId, onTheDay.classIds[0]!, 'Walked roadster');
+    await confirmEntryPayment(paid.entry.id, 'ref-walk');
+    await enter(onTheDay.eventId, onTheDay.classIds[1]!, 'Walked coupe');
+    await step(onTheDay.organiser.client, onTheDay.eventId, 'close_registration', 'open_gate');
+    const co = await memberOf(onTheDay.eventId, 'organiser', 'Cora Organiser');
+    const gate = await memberOf(onTheDay.eventId, 'gate', 'Gil Gatekeeper');
+    // A show being judged, with a judge of every class; the owner of its cars.
+    const judged = await showInJudging();
+    const judge = await judgeOf(judged.eventId);
+    expect((await judged.organiser.client.put(`/api/events/${judged.eventId}/judges/${judge.user.id}/classes`, { allClasses: true })).status).toBe(200);
+    const admin = await signedIn({ name: 'Ada Admin' });
+    await User.update({ isSiteAdmin: true }, { where: { id: admin.user.id } });
+    shows.push({ id: onTheDay.eventId, slug: onTheDay.slug }, { id: judged.eventId, slug: judged.slug });
+    people.push(
+      { role: 'organiser', email: onTheDay.organiser.email },
+      { role: 'co-organiser', email: co.email },
+      { role: 'gate', email: gate.email },
+      { role: 'judge', email: judge.email },
+      { role: 'owner', email: judged.owner.email },
+      { role: 'site admin', email: admin.email },
+    );
+  });
+
+  describe('the show side, walked by every role through its own links', () => {
+    it(`breaks no screen on a ${device}`, async () => {
+      const walks: string[] = [];
+      for (const person of people) {
+        const context = await env.browser.newContext(options);
+        const { reached, problems } = await walkShowSide(await context.newPage(), env.baseUrl, person.email, { shows });
+        await context.close();
+        expect(problems, `${person.role} on a ${device}`).toEqual([]);
+        walks.push(`${person.role}: ${reached.join(' ')}`);
+      }
+      // The walks reached the screens of each role's day, not only the list of shows.
+      const of = (role: string) => walks.find((w) => w.startsWith(`${role}:`)) ?? '';
+      expect(of('organiser')).toMatch(/\/shows\/\d+ .*\/shows\/\d+\/entries/);
+      expect(of('organiser')).toMatch(/\/shows\/\d+\/gate/);
+      expect(of('co-organiser')).toMatch(/\/shows\/\d+\/entries/);
+      expect(of('gate')).toMatch(/\/shows\/\d+\/gate/);
+      expect(of('judge')).toMatch(/\/judge\/\d+/);
+    });
+  });
+}
