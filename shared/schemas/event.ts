@@ -170,7 +170,6 @@ export const EntryCreateSchema = z.object({
   classId: z.number({ error: 'Pick a class.' }).int().positive({ error: 'Pick a class.' }),
 });
 export type EntryCreateInput = z.infer<typeof EntryCreateSchema>;
-export const CheckInSchema = z.object({ number: z.number({ error: 'Entry number is required.' }).int().positive() });
 
 export const EventListQuerySchema = z.object({ open: z.enum(['1']).optional() });
 

@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { JudgeView } from '@shared/schemas/judging';
 import { api, ApiError } from '@client/lib/api';
 import { readView, saveView } from '../offline/sheet-store';
+import { judgingKeys } from './judging-keys';
 
 export type JudgeViewResult = { view: JudgeView; fromDevice: boolean };
 
@@ -19,5 +20,5 @@ export async function getJudgeView(eventId: number): Promise<JudgeViewResult> {
 }
 
 export const judgeViewQueryOptions = (eventId: number) =>
-  queryOptions({ queryKey: ['judging', eventId, 'mine'], queryFn: () => getJudgeView(eventId), staleTime: 15_000, networkMode: 'always', retry: false });
+  queryOptions({ queryKey: judgingKeys.mine(eventId), queryFn: () => getJudgeView(eventId), staleTime: 15_000, networkMode: 'always', retry: false });
 export const useJudgeView = (eventId: number) => useQuery(judgeViewQueryOptions(eventId));

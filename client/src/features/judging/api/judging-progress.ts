@@ -1,13 +1,14 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { JudgeClassesInput, JudgeSummary, JudgingProgress } from '@shared/schemas/judging';
 import { api } from '@client/lib/api';
+import { judgingKeys } from './judging-keys';
 
 export const getProgress = (eventId: number) => api<{ progress: JudgingProgress }>(`/api/events/${eventId}/judging/progress`);
-export const progressQueryOptions = (eventId: number) => queryOptions({ queryKey: ['judging', eventId, 'progress'], queryFn: () => getProgress(eventId), refetchInterval: 20_000 });
+export const progressQueryOptions = (eventId: number) => queryOptions({ queryKey: judgingKeys.progress(eventId), queryFn: () => getProgress(eventId), refetchInterval: 20_000 });
 export const useProgress = (eventId: number) => useQuery(progressQueryOptions(eventId));
 
 export const listJudges = (eventId: number) => api<{ judges: JudgeSummary[] }>(`/api/events/${eventId}/judges`);
-export const judgesQueryOptions = (eventId: number) => queryOptions({ queryKey: ['judging', eventId, 'judges'], queryFn: () => listJudges(eventId) });
+export const judgesQueryOptions = (eventId: number) => queryOptions({ queryKey: judgingKeys.judges(eventId), queryFn: () => listJudges(eventId) });
 export const useJudges = (eventId: number) => useQuery(judgesQueryOptions(eventId));
 
 export function useAssignJudge(eventId: number) {

@@ -2,10 +2,11 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { ResultsReview, ShowResultRules } from '@shared/schemas/judging';
 import type { ManualTieBreakView } from '@shared/schemas/results';
 import { api } from '@client/lib/api';
+import { resultsKeys } from './results-keys';
 
 export type ResultsReviewAnswer = { review: ResultsReview; tieBreaks: ManualTieBreakView[]; rules: ShowResultRules; published: boolean };
 
-export const resultsReviewQueryKey = (eventId: number) => ['results', eventId, 'review'] as const;
+export const resultsReviewQueryKey = resultsKeys.review;
 export const getResultsReview = (eventId: number) => api<ResultsReviewAnswer>(`/api/events/${eventId}/results/review`);
 export const resultsReviewQueryOptions = (eventId: number) => queryOptions({ queryKey: resultsReviewQueryKey(eventId), queryFn: () => getResultsReview(eventId) });
 export const useResultsReview = (eventId: number) => useQuery(resultsReviewQueryOptions(eventId));

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { AuditLine } from '@shared/schemas/event';
 import type { EntryTableRow } from '@shared/schemas/show-day';
 import { api } from '@client/lib/api';
+import { showDayKeys } from './show-day-keys';
 
 export type EntryActionInput =
   | { kind: 'class'; entryId: number; classId: number }
@@ -21,6 +22,6 @@ export function useActOnEntry(eventId: number) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: actOnEntry,
-    onSettled: (_d, _e, input) => Promise.all([qc.invalidateQueries({ queryKey: ['shows', eventId, 'entry-table'] }), qc.invalidateQueries({ queryKey: ['entries', input.entryId, 'audit'] })]),
+    onSettled: (_d, _e, input) => Promise.all([qc.invalidateQueries({ queryKey: showDayKeys.entryTables(eventId) }), qc.invalidateQueries({ queryKey: showDayKeys.entryAudit(input.entryId) })]),
   });
 }

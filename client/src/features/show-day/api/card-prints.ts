@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { CardPrint } from '@shared/schemas/card-print';
 import { api } from '@client/lib/api';
+import { showDayKeys } from './show-day-keys';
 
 /** While a print is queued or running the page asks for its progress this often. */
 export const CARD_PRINT_POLL_MS = 500;
@@ -13,7 +14,7 @@ export const getLatestCardPrint = (eventId: number, classId: number | null) =>
 
 export const latestCardPrintQueryOptions = (eventId: number, classId: number | null) =>
   queryOptions({
-    queryKey: ['shows', eventId, 'card-prints', classId ?? 'all'],
+    queryKey: showDayKeys.cardPrint(eventId, classId),
     queryFn: () => getLatestCardPrint(eventId, classId),
     // Poll only while the job works; a finished or failed print stays as it is.
     refetchInterval: (q) => (q.state.data && (q.state.data.status === 'queued' || q.state.data.status === 'running') ? CARD_PRINT_POLL_MS : false),

@@ -1,13 +1,14 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { GateCard, GateCounts } from '@shared/schemas/show-day';
 import { api } from '@client/lib/api';
+import { showDayKeys } from './show-day-keys';
 
 export const lookUpCard = (eventId: number, what: { code: string } | { number: number }) =>
   api<{ card: GateCard }>(`/api/events/${eventId}/gate/lookup?${new URLSearchParams('code' in what ? { code: what.code } : { number: String(what.number) })}`).then((r) => r.card);
 
 export const gateCountsQueryOptions = (eventId: number) =>
   // Live enough for a gate: other phones check cars in too.
-  queryOptions({ queryKey: ['shows', eventId, 'gate-counts'], queryFn: () => api<GateCounts>(`/api/events/${eventId}/gate/counts`), refetchInterval: 5000 });
+  queryOptions({ queryKey: showDayKeys.gateCounts(eventId), queryFn: () => api<GateCounts>(`/api/events/${eventId}/gate/counts`), refetchInterval: 5000 });
 export const useGateCounts = (eventId: number) => useQuery(gateCountsQueryOptions(eventId));
 
 export function useLookUpCard(eventId: number) {
@@ -18,7 +19,7 @@ export function useCheckIn(eventId: number) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (input: { number: number; takeCash: boolean }) => api<{ card: GateCard }>(`/api/events/${eventId}/gate/check-in`, { method: 'POST', body: input }).then((r) => r.card),
-    onSettled: () => qc.invalidateQueries({ queryKey: ['shows', eventId, 'gate-counts'] }),
+    onSettled: () => qc.invalidateQueries({ queryKey: showDayKeys.gateCounts(eventId) }),
   });
 }
 
@@ -26,6 +27,6 @@ export function useUndoCheckIn(eventId: number) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (entryId: number) => api<{ card: GateCard }>(`/api/events/${eventId}/gate/undo`, { method: 'POST', body: { entryId } }).then((r) => r.card),
-    onSettled: () => qc.invalidateQueries({ queryKey: ['shows', eventId, 'gate-counts'] }),
+    onSettled: () => qc.invalidateQueries({ queryKey: showDayKeys.gateCounts(eventId) }),
   });
 }

@@ -1,8 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { EventDetail } from '@shared/schemas/event';
 import { api } from '@client/lib/api';
+import { showKeys } from './show-keys';
 
-export const showQueryKey = (id: number) => ['shows', id] as const;
+export const showQueryKey = showKeys.detail;
 export const getShow = (id: number) => api<{ event: EventDetail }>(`/api/events/${id}`);
 export const showQueryOptions = (id: number) => queryOptions({ queryKey: showQueryKey(id), queryFn: () => getShow(id) });
 export const useShow = (id: number) => useQuery(showQueryOptions(id));

@@ -2,8 +2,9 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 import type { EventRole } from '@shared/constants';
 import type { InvitationPreview } from '@shared/schemas/event';
 import { api } from '@client/lib/api';
+import { showKeys } from './show-keys';
 
-export const invitationQueryKey = (token: string) => ['invitations', token] as const;
+export const invitationQueryKey = showKeys.invitation;
 export const getInvitation = (token: string) => api<{ invitation: InvitationPreview }>(`/api/invitations/${encodeURIComponent(token)}`);
 export const invitationQueryOptions = (token: string) => queryOptions({ queryKey: invitationQueryKey(token), queryFn: () => getInvitation(token), retry: false });
 export const useInvitation = (token: string) => useQuery(invitationQueryOptions(token));
@@ -12,6 +13,6 @@ export function useAcceptInvitation(token: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: () => api<{ eventId: number; role: EventRole }>(`/api/invitations/${encodeURIComponent(token)}/accept`, { method: 'POST' }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ['shows'] }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: showKeys.all }),
   });
 }

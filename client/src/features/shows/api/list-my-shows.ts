@@ -1,8 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { EventSummary } from '@shared/schemas/event';
 import { api } from '@client/lib/api';
+import { showKeys } from './show-keys';
 
-export const myShowsQueryKey = ['shows', 'mine'] as const;
+export const myShowsQueryKey = showKeys.mine();
 export const listMyShows = () => api<{ events: EventSummary[] }>('/api/events');
 export const myShowsQueryOptions = () => queryOptions({ queryKey: myShowsQueryKey, queryFn: listMyShows });
 export const useMyShows = () => useQuery(myShowsQueryOptions());

@@ -1,8 +1,9 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { EntryCreateInput, MyEntry } from '@shared/schemas/event';
 import { api } from '@client/lib/api';
+import { entryKeys, showKeys } from './show-keys';
 
-export const myEntriesQueryKey = ['entries', 'mine'] as const;
+export const myEntriesQueryKey = entryKeys.mine();
 export const listMyEntries = () => api<{ entries: MyEntry[] }>('/api/entries');
 export const myEntriesQueryOptions = () => queryOptions({ queryKey: myEntriesQueryKey, queryFn: listMyEntries });
 /** While an entry just paid waits for the payment service's confirmation, ask again every two seconds. */
@@ -23,7 +24,7 @@ export function useWithdrawEntry() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (entryId: number) => api<{ entry: { id: number; status: string; refundDue: number | null; currency: string } }>(`/api/entries/${entryId}/withdraw`, { method: 'POST' }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ['entries'] }).then(() => qc.invalidateQueries({ queryKey: ['shows'] })),
+    onSuccess: () => qc.invalidateQueries({ queryKey: entryKeys.all }).then(() => qc.invalidateQueries({ queryKey: showKeys.all })),
   });
 }
 export function useAcceptOffer() {

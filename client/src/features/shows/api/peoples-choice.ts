@@ -1,12 +1,13 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { PeoplesChoice, VoidAddressInput } from '@shared/schemas/peoples-choice';
 import { api } from '@client/lib/api';
+import { showKeys } from './show-keys';
 
 type Answer = { peoplesChoice: PeoplesChoice };
 
 export const getPeoplesChoice = (eventId: number) => api<Answer>(`/api/events/${eventId}/peoples-choice`);
 // Votes arrive while the organiser watches: refresh every 15 s.
-export const peoplesChoiceQueryOptions = (eventId: number) => queryOptions({ queryKey: ['shows', eventId, 'peoples-choice'], queryFn: () => getPeoplesChoice(eventId), refetchInterval: 15_000 });
+export const peoplesChoiceQueryOptions = (eventId: number) => queryOptions({ queryKey: showKeys.peoplesChoice(eventId), queryFn: () => getPeoplesChoice(eventId), refetchInterval: 15_000 });
 export const usePeoplesChoice = (eventId: number) => useQuery(peoplesChoiceQueryOptions(eventId));
 
 export function useSetVotingWindow(eventId: number) {

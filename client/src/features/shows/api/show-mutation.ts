@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { EventDetail } from '@shared/schemas/event';
 import { showQueryKey } from './get-show';
+import { showKeys } from './show-keys';
 
 /** A change to a show whose answer is the whole show: put straight into the cache. */
 export function useShowMutation<I>(id: number, send: (input: I) => Promise<{ event: EventDetail }>) {
@@ -9,7 +10,7 @@ export function useShowMutation<I>(id: number, send: (input: I) => Promise<{ eve
     mutationFn: send,
     onSuccess: (data) => {
       qc.setQueryData(showQueryKey(id), data);
-      void qc.invalidateQueries({ queryKey: ['shows', 'mine'] });
+      void qc.invalidateQueries({ queryKey: showKeys.mine() });
     },
   });
 }

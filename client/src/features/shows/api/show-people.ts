@@ -2,8 +2,9 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 import type { EventRole } from '@shared/constants';
 import type { Invitation, InvitationCreateInput, Member } from '@shared/schemas/event';
 import { api } from '@client/lib/api';
+import { showKeys } from './show-keys';
 
-export const peopleQueryKey = (id: number) => ['shows', id, 'people'] as const;
+export const peopleQueryKey = showKeys.people;
 export const getPeople = (id: number) => api<{ members: Member[]; invitations: Invitation[] }>(`/api/events/${id}/people`);
 export const peopleQueryOptions = (id: number) => queryOptions({ queryKey: peopleQueryKey(id), queryFn: () => getPeople(id) });
 export const usePeople = (id: number) => useQuery(peopleQueryOptions(id));
