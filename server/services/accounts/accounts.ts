@@ -1,9 +1,9 @@
 import { Op, type Transaction } from 'sequelize';
-import { sequelize } from '../../db/sequelize';
 import { User } from '../../models/user';
 import { Build } from '../../models/build';
 import { AppError, NotFoundError } from '../../errors';
 import { destroySessionsOf } from './sessions';
+import { withTransaction } from '../../db/transaction';
 
 /** The site admin's view of accounts: disable, re-enable, open one with its builds. */
 
@@ -21,8 +21,8 @@ export const otherActiveAdmins = (exceptId: number, transaction?: Transaction) =
  * Disables or re-enables an account. A disabled account cannot sign in, every session it holds
  * ends at once, and its public pages go offline (the owner row's updatedAt changes their cache version).
  */
-export async function setAccountDisabled(targetId: number, disabled: boolean): Promise<User> {
-  return sequelize.transaction(async (transaction) => {
+export async function setAccountDisabled(targetId: number, disabled: boolean, outer?: Transaction): Promise<User> {
+  return withTransaction(outer, async (transaction) => {
     const target = await User.findByPk(targetId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!target) throw new NotFoundError('No such account.');
     if (disabled && target.isSiteAdmin && (await otherActiveAdmins(target.id, transaction)) === 0) {

@@ -7,6 +7,7 @@ import { EmailVerificationToken } from '../../models/email-verification-token';
 import { User } from '../../models/user';
 import { AppError, ConflictError } from '../../errors';
 import { queueMail } from '../../mail/outbox';
+import { withTransaction } from '../../db/transaction';
 
 const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 
@@ -36,8 +37,8 @@ const invalidLink = () =>
  * Confirms the address the link was sent to and spends every link of that account. A link that
  * was already used for an address now confirmed answers the same success, so a second click is harmless.
  */
-export async function confirmEmail(token: string): Promise<User> {
-  return sequelize.transaction(async (transaction) => {
+export async function confirmEmail(token: string, outer?: Transaction): Promise<User> {
+  return withTransaction(outer, async (transaction) => {
     const row = await EmailVerificationToken.findOne({ where: { tokenHash: sha256(token) }, lock: transaction.LOCK.UPDATE, transaction });
     if (!row) throw invalidLink();
     const user = await User.findByPk(row.userId, { transaction, lock: transaction.LOCK.UPDATE });

@@ -9,6 +9,7 @@ import { ConflictError, NotFoundError, ValidationError } from '../../errors';
 import { writeAudit } from '../audit/audit';
 import { mailEntryReceived, mailPaymentConfirmed } from './entry-mail';
 import { hasRoom, offerFreedPlaces } from './waitlist';
+import { withTransaction } from '../../db/transaction';
 
 type Person = { id: number };
 
@@ -67,8 +68,8 @@ export async function markEntryPaid(entryId: number, note: string, person: Perso
  * The organiser gives a waiting entry a place now, out of turn or above capacity (their call):
  * it gets the next number and awaits payment, or is confirmed in a free show.
  */
-export async function moveUpFromWaitingList(entryId: number, person: Person): Promise<Entry> {
-  return sequelize.transaction(async (transaction) => {
+export async function moveUpFromWaitingList(entryId: number, person: Person, outer?: Transaction): Promise<Entry> {
+  return withTransaction(outer, async (transaction) => {
     const { event, entry } = await lockEntry(entryId, transaction);
     if (entry.status !== 'waiting_list') throw new ConflictError('This entry is not on the waiting list.');
     const number = event.lastEntryNumber + 1;

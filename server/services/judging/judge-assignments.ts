@@ -1,12 +1,12 @@
 import { Op, type Transaction } from 'sequelize';
 import type { JudgeClassesInput } from '@shared/schemas/judging';
-import { sequelize } from '../../db/sequelize';
 import { EventClass } from '../../models/event-class';
 import { EventMembership } from '../../models/event-membership';
 import { JudgeAssignment } from '../../models/judge-assignment';
 import { User } from '../../models/user';
 import { ValidationError } from '../../errors';
 import { writeAudit } from '../audit/audit';
+import { withTransaction } from '../../db/transaction';
 
 /** A judge's classes: 'all', or the ids of the classes they score (empty = none assigned yet). */
 export type JudgeClasses = 'all' | ReadonlySet<number>;
@@ -20,8 +20,8 @@ export async function classesOfJudge(eventId: number, judgeId: number, transacti
 export const judgesClass = (classes: JudgeClasses, classId: number) => classes === 'all' || classes.has(classId);
 
 /** Replaces a judge's classes in one transaction, with an audit line. The person must hold the judge role in this show. */
-export async function assignJudge(eventId: number, judgeId: number, input: JudgeClassesInput, person: { id: number }): Promise<void> {
-  await sequelize.transaction(async (transaction) => {
+export async function assignJudge(eventId: number, judgeId: number, input: JudgeClassesInput, person: { id: number }, outer?: Transaction): Promise<void> {
+  await withTransaction(outer, async (transaction) => {
     const membership = await EventMembership.findOne({ where: { eventId, userId: judgeId, role: 'judge' }, transaction });
     if (!membership) throw new ValidationError({ judgeId: 'This person is not a judge of this show; invite them as a judge first.' });
     const classIds = [...new Set(input.classIds)];

@@ -1,14 +1,15 @@
+import type { Transaction } from 'sequelize';
 import { sheetEditable } from '@shared/event-lifecycle';
 import type { JudgingSheetInput } from '@shared/schemas/event';
-import { sequelize } from '../../db/sequelize';
 import { Criterion } from '../../models/criterion';
 import { Event } from '../../models/event';
 import { ConflictError, NotFoundError } from '../../errors';
 import { writeAudit } from '../audit/audit';
+import { withTransaction } from '../../db/transaction';
 
 /** Replaces the whole sheet, in the order given, until judging starts; then it is fixed. */
-export async function saveJudgingSheet(eventId: number, person: { id: number }, input: JudgingSheetInput) {
-  return sequelize.transaction(async (transaction) => {
+export async function saveJudgingSheet(eventId: number, person: { id: number }, input: JudgingSheetInput, outer?: Transaction) {
+  return withTransaction(outer, async (transaction) => {
     const event = await Event.findByPk(eventId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!event) throw new NotFoundError('No such show.');
     if (!sheetEditable(event.status)) throw new ConflictError('Judging has started: the judging sheet is fixed.', { criteria: 'Fixed once judging starts.' });

@@ -7,6 +7,7 @@ import { Event } from '../../models/event';
 import { AppError, ConflictError, NotFoundError, ValidationError } from '../../errors';
 import { classesOfJudge, judgesClass } from './judge-assignments';
 import { writeAudit } from '../audit/audit';
+import { withTransaction } from '../../db/transaction';
 
 /** Why a score is refused when the show no longer takes them, in words the judge's phone shows as they are. */
 export function judgingClosedReason(event: Pick<Event, 'status' | 'judgingClosedAt'>): string | null {
@@ -88,8 +89,8 @@ async function upsert(sql: string, replacements: Record<string, unknown>, transa
 }
 
 /** Closes judging (scores refused from now on) or opens it again before results are published; an audit line either way. */
-export async function setJudgingClosed(eventId: number, closed: boolean, person: { id: number }): Promise<void> {
-  await sequelize.transaction(async (transaction) => {
+export async function setJudgingClosed(eventId: number, closed: boolean, person: { id: number }, outer?: Transaction): Promise<void> {
+  await withTransaction(outer, async (transaction) => {
     const event = await Event.findByPk(eventId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!event) throw new NotFoundError('No such show.');
     if (event.status !== 'judging') throw new ConflictError('Judging can be closed or reopened only while the show is being judged.');

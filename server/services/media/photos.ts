@@ -9,6 +9,7 @@ import { AppError, NotFoundError, ValidationError } from '../../errors';
 import { imagePixels, processImage, ImageRejectedError, type ProcessedImage } from './image-processing';
 import { chargePersonPixels, checkRequestPixels, imageSlots } from './image-budget';
 import { lockBuild, touchBuild } from '../builds/builds';
+import { withTransaction } from '../../db/transaction';
 
 export type PhotoFile = { buffer: Buffer; originalName: string };
 
@@ -114,8 +115,8 @@ export async function storePhotosForBuild(buildId: number, files: PhotoFile[], c
 }
 
 /** Changes a caption and/or makes the photo the build's one cover. */
-export async function updatePhoto(buildId: number, photoId: number, input: { caption?: string; isCover?: true }): Promise<Photo> {
-  return sequelize.transaction(async (transaction) => {
+export async function updatePhoto(buildId: number, photoId: number, input: { caption?: string; isCover?: true }, outer?: Transaction): Promise<Photo> {
+  return withTransaction(outer, async (transaction) => {
     const build = await lockBuild(buildId, transaction);
     const photo = await findPhotoOf(buildId, photoId, transaction);
     if (input.isCover) {
@@ -130,8 +131,8 @@ export async function updatePhoto(buildId: number, photoId: number, input: { cap
 }
 
 /** Puts the photos in the given order; the list must name each of the build's photos exactly once. */
-export async function reorderPhotos(buildId: number, photoIds: number[]): Promise<Photo[]> {
-  return sequelize.transaction(async (transaction) => {
+export async function reorderPhotos(buildId: number, photoIds: number[], outer?: Transaction): Promise<Photo[]> {
+  return withTransaction(outer, async (transaction) => {
     const build = await lockBuild(buildId, transaction);
     const photos = await listPhotos(buildId, transaction);
     if (new Set(photoIds).size !== photoIds.length) throw new ValidationError({ photoIds: 'Each photo may appear only once.' });

@@ -10,6 +10,7 @@ import { Vote } from '../../models/vote';
 import { findEvent } from '../shows/events';
 import { writeAudit } from '../audit/audit';
 import { entryOnShowNow } from '../entries/entries';
+import { withTransaction } from '../../db/transaction';
 
 /**
  * A keyed hash (HMAC-SHA256 with the server's secret, per show) of a voter's token or address.
@@ -21,8 +22,8 @@ export function votingHash(kind: 'voter' | 'address', eventId: number, value: st
 }
 
 /** The organiser opens or closes the window; opening needs the show on the field (show day or judging). */
-export async function setVotingWindow(eventId: number, open: boolean, person: { id: number }): Promise<Event> {
-  return sequelize.transaction(async (transaction) => {
+export async function setVotingWindow(eventId: number, open: boolean, person: { id: number }, outer?: Transaction): Promise<Event> {
+  return withTransaction(outer, async (transaction) => {
     // FOR UPDATE: a vote holds the show's row FOR SHARE, so none is counted after the close commits.
     const event = await Event.findByPk(eventId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!event) throw new NotFoundError('No such show.');
@@ -49,8 +50,8 @@ export type VoteOutcome =
  * address arrive raw and leave this function only as keyed hashes. Refusals are outcomes, not errors:
  * the page answers each in words.
  */
-export async function castVote(input: { code: string; voterToken: string; address: string }): Promise<VoteOutcome> {
-  return sequelize.transaction(async (transaction) => {
+export async function castVote(input: { code: string; voterToken: string; address: string }, outer?: Transaction): Promise<VoteOutcome> {
+  return withTransaction(outer, async (transaction) => {
     const entry = await entryOnShowNow(input.code, transaction);
     if (!entry?.event) return { ok: false, reason: 'not-entered' };
     const event = await Event.findByPk(entry.eventId, { lock: transaction.LOCK.SHARE, transaction });
@@ -109,8 +110,8 @@ export async function loadPeoplesChoice(eventId: number) {
 }
 
 /** Voids every counted vote from one address in the show (ballot stuffing from one network); the audit line says how many. */
-export async function voidVotesOfAddress(eventId: number, addressHash: string, person: { id: number }): Promise<number> {
-  return sequelize.transaction(async (transaction) => {
+export async function voidVotesOfAddress(eventId: number, addressHash: string, person: { id: number }, outer?: Transaction): Promise<number> {
+  return withTransaction(outer, async (transaction) => {
     await findEvent(eventId, transaction);
     const [count] = await Vote.update({ voidedAt: new Date(), voidedBy: person.id }, { where: { eventId, addressHash, voidedAt: null }, transaction });
     if (count > 0) await writeAudit({ eventId, actorId: person.id, action: 'peoples_choice_votes_voided', after: { addressHash, votes: count } }, transaction);

@@ -1,11 +1,12 @@
+import type { Transaction } from 'sequelize';
 import type { TieBreakCreateInput } from '@shared/schemas/results';
-import { sequelize } from '../../db/sequelize';
 import { Event } from '../../models/event';
 import { ManualTieBreak } from '../../models/manual-tie-break';
 import { User } from '../../models/user';
 import { ConflictError, NotFoundError, ValidationError } from '../../errors';
 import { writeAudit } from '../audit/audit';
 import { computeShowResults } from './results';
+import { withTransaction } from '../../db/transaction';
 
 type Person = { id: number };
 
@@ -22,8 +23,8 @@ async function lockUnpublished(eventId: number, transaction: import('sequelize')
  * The organiser orders cars the rules left tied, best first, with a reason. The cars must be exactly
  * one tie the results flag now, so a hand order never overrides a place the scores decided.
  */
-export async function addTieBreak(eventId: number, person: Person, input: TieBreakCreateInput) {
-  return sequelize.transaction(async (transaction) => {
+export async function addTieBreak(eventId: number, person: Person, input: TieBreakCreateInput, outer?: Transaction) {
+  return withTransaction(outer, async (transaction) => {
     await lockUnpublished(eventId, transaction);
     const { results, cars } = await computeShowResults(eventId, transaction);
     const wanted = [...input.entryIds].sort((a, b) => a - b);
@@ -36,8 +37,8 @@ export async function addTieBreak(eventId: number, person: Person, input: TieBre
   });
 }
 
-export async function removeTieBreak(eventId: number, tieBreakId: number, person: Person) {
-  await sequelize.transaction(async (transaction) => {
+export async function removeTieBreak(eventId: number, tieBreakId: number, person: Person, outer?: Transaction) {
+  await withTransaction(outer, async (transaction) => {
     await lockUnpublished(eventId, transaction);
     const row = await ManualTieBreak.findOne({ where: { id: tieBreakId, eventId }, transaction });
     if (!row) throw new NotFoundError('No such tie-break in this show.');

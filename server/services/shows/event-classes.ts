@@ -1,13 +1,14 @@
+import type { Transaction } from 'sequelize';
 import { CLASSES_PER_EVENT_MAX } from '@shared/constants';
 import { settingsEditable } from '@shared/event-lifecycle';
 import type { ClassInput, ClassUpdateInput } from '@shared/schemas/event';
-import { sequelize } from '../../db/sequelize';
 import { Entry } from '../../models/entry';
 import { Event } from '../../models/event';
 import { EventClass } from '../../models/event-class';
 import { ConflictError, NotFoundError } from '../../errors';
 import { writeAudit } from '../audit/audit';
 import { offerFreedPlaces } from '../entries/waitlist';
+import { withTransaction } from '../../db/transaction';
 
 type Person = { id: number };
 
@@ -18,8 +19,8 @@ async function lockEditable(eventId: number, transaction: import('sequelize').Tr
   return event;
 }
 
-export async function addClass(eventId: number, person: Person, input: ClassInput) {
-  return sequelize.transaction(async (transaction) => {
+export async function addClass(eventId: number, person: Person, input: ClassInput, outer?: Transaction) {
+  return withTransaction(outer, async (transaction) => {
     await lockEditable(eventId, transaction);
     const count = await EventClass.count({ where: { eventId }, transaction });
     if (count >= CLASSES_PER_EVENT_MAX) throw new ConflictError(`A show has at most ${CLASSES_PER_EVENT_MAX} classes.`);
@@ -29,8 +30,8 @@ export async function addClass(eventId: number, person: Person, input: ClassInpu
   });
 }
 
-export async function updateClass(eventId: number, classId: number, person: Person, input: ClassUpdateInput) {
-  return sequelize.transaction(async (transaction) => {
+export async function updateClass(eventId: number, classId: number, person: Person, input: ClassUpdateInput, outer?: Transaction) {
+  return withTransaction(outer, async (transaction) => {
     await lockEditable(eventId, transaction);
     const cls = await EventClass.findOne({ where: { id: classId, eventId }, transaction });
     if (!cls) throw new NotFoundError('No such class in this show.');
@@ -50,8 +51,8 @@ export async function updateClass(eventId: number, classId: number, person: Pers
 }
 
 /** A class with entries (even withdrawn ones, which keep their history) cannot go. */
-export async function deleteClass(eventId: number, classId: number, person: Person) {
-  await sequelize.transaction(async (transaction) => {
+export async function deleteClass(eventId: number, classId: number, person: Person, outer?: Transaction) {
+  await withTransaction(outer, async (transaction) => {
     await lockEditable(eventId, transaction);
     const cls = await EventClass.findOne({ where: { id: classId, eventId }, transaction });
     if (!cls) throw new NotFoundError('No such class in this show.');

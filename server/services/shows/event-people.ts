@@ -1,9 +1,8 @@
 import { createHash, randomBytes } from 'node:crypto';
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { EVENT_ROLE_LABELS, INVITATION_TTL_DAYS, type EventRole } from '@shared/constants';
 import { showInvitationEmail } from '@templates/email/show-invitation';
 import { config } from '../../config';
-import { sequelize } from '../../db/sequelize';
 import { Event } from '../../models/event';
 import { EventInvitation } from '../../models/event-invitation';
 import { EventMembership } from '../../models/event-membership';
@@ -11,6 +10,7 @@ import { User } from '../../models/user';
 import { queueMail } from '../../mail/outbox';
 import { ConflictError, NotFoundError, ValidationError } from '../../errors';
 import { writeAudit } from '../audit/audit';
+import { withTransaction } from '../../db/transaction';
 
 type Person = { id: number; name: string };
 const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
@@ -29,8 +29,8 @@ export function listOpenInvitations(eventId: number) {
 }
 
 /** Mails a single-use link; only its hash is kept. */
-export async function inviteToEvent(eventId: number, person: Person, email: string, role: EventRole) {
-  return sequelize.transaction(async (transaction) => {
+export async function inviteToEvent(eventId: number, person: Person, email: string, role: EventRole, outer?: Transaction) {
+  return withTransaction(outer, async (transaction) => {
     const event = await Event.findByPk(eventId, { transaction });
     if (!event) throw new NotFoundError('No such show.');
     const invitee = await User.findOne({ where: { email }, attributes: ['id'], transaction });
@@ -49,8 +49,8 @@ export async function inviteToEvent(eventId: number, person: Person, email: stri
   });
 }
 
-export async function revokeInvitation(eventId: number, invitationId: number, person: Person) {
-  await sequelize.transaction(async (transaction) => {
+export async function revokeInvitation(eventId: number, invitationId: number, person: Person, outer?: Transaction) {
+  await withTransaction(outer, async (transaction) => {
     const inv = await EventInvitation.findOne({ where: { id: invitationId, eventId, acceptedAt: null, revokedAt: null }, lock: transaction.LOCK.UPDATE, transaction });
     if (!inv) throw new NotFoundError('No open invitation with that id.');
     await inv.update({ revokedAt: new Date() }, { transaction });
@@ -68,8 +68,8 @@ export async function previewInvitation(token: string) {
 }
 
 /** The signed-in person takes the role; the link is spent. */
-export async function acceptInvitation(token: string, person: { id: number }) {
-  return sequelize.transaction(async (transaction) => {
+export async function acceptInvitation(token: string, person: { id: number }, outer?: Transaction) {
+  return withTransaction(outer, async (transaction) => {
     const inv = await EventInvitation.findOne({ where: { tokenHash: sha256(token) }, lock: transaction.LOCK.UPDATE, transaction });
     if (!inv) throw new NotFoundError('This invitation link is not valid.');
     const state = stateOf(inv);
@@ -82,8 +82,8 @@ export async function acceptInvitation(token: string, person: { id: number }) {
 }
 
 /** Removes one role of one person; the show always keeps at least one organiser. */
-export async function removeMember(eventId: number, userId: number, role: EventRole, person: Person) {
-  await sequelize.transaction(async (transaction) => {
+export async function removeMember(eventId: number, userId: number, role: EventRole, person: Person, outer?: Transaction) {
+  await withTransaction(outer, async (transaction) => {
     await Event.findByPk(eventId, { lock: transaction.LOCK.UPDATE, transaction });
     const membership = await EventMembership.findOne({ where: { eventId, userId, role }, transaction });
     if (!membership) throw new NotFoundError('That person has no such role in this show.');

@@ -2,7 +2,6 @@ import { Op, type Transaction } from 'sequelize';
 import type { EventStatus } from '@shared/constants';
 import { EVENT_ACTIONS, settingsEditable, type EventAction } from '@shared/event-lifecycle';
 import { eventDateProblems, type EventCreateInput, type EventUpdateInput } from '@shared/schemas/event';
-import { sequelize } from '../../db/sequelize';
 import { Event } from '../../models/event';
 import { EventClass } from '../../models/event-class';
 import { Criterion } from '../../models/criterion';
@@ -10,6 +9,7 @@ import { EventMembership } from '../../models/event-membership';
 import { ConflictError, NotFoundError, ValidationError } from '../../errors';
 import { writeAudit } from '../audit/audit';
 import { offerFreedPlaces } from '../entries/waitlist';
+import { withTransaction } from '../../db/transaction';
 
 type Person = { id: number };
 
@@ -38,8 +38,8 @@ const toRow = (input: EventCreateInput | EventUpdateInput) => {
 };
 
 /** A new show in draft; whoever creates it becomes its first organiser. */
-export async function createEvent(person: Person, input: EventCreateInput): Promise<Event> {
-  return sequelize.transaction(async (transaction) => {
+export async function createEvent(person: Person, input: EventCreateInput, outer?: Transaction): Promise<Event> {
+  return withTransaction(outer, async (transaction) => {
     const event = await Event.create({ ...(toRow(input) as unknown as EventCreateInput & { startsAt: Date; endsAt: Date; registrationOpensAt: Date; registrationClosesAt: Date }), createdBy: person.id }, { transaction });
     await EventMembership.create({ eventId: event.id, userId: person.id, role: 'organiser' }, { transaction });
     await writeAudit({ eventId: event.id, actorId: person.id, action: 'show_created', after: { status: 'draft', name: event.name } }, transaction);
@@ -48,8 +48,8 @@ export async function createEvent(person: Person, input: EventCreateInput): Prom
 }
 
 /** Changes settings; the date rules are checked on the result, and a larger capacity offers freed places. */
-export async function updateEvent(eventId: number, person: Person, input: EventUpdateInput): Promise<void> {
-  await sequelize.transaction(async (transaction) => {
+export async function updateEvent(eventId: number, person: Person, input: EventUpdateInput, outer?: Transaction): Promise<void> {
+  await withTransaction(outer, async (transaction) => {
     const event = await Event.findByPk(eventId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!event) throw new NotFoundError('No such show.');
     if (!settingsEditable(event.status)) throw new ConflictError('An archived show cannot change.');
