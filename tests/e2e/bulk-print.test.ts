@@ -26,7 +26,7 @@ const pdfToPngs = (file: string, name: string, last = 2) => KEEP_SCREENSHOTS && 
 const CARDS = 100;
 const TITLES = ['Flathead roadster', 'Chopped mercury-style coupe', 'Gasser wagon', 'Fenderless tudor', 'Shortbed pickup'];
 
-describe('numbered cards in bulk, from the organiser’s entries page', { timeout: 600_000 }, () => {
+describe('numbered cards in bulk, from the organiser’s entries page', () => {
   it('starts a print, watches the bar move, downloads the cards in number order, and finds the same print after a reload', async () => {
     const entries = Array.from({ length: CARDS }, (_, i) => ({ title: `${TITLES[i % TITLES.length]} ${i + 1}`, cls: (i % 3 === 0 ? 1 : 0) as 0 | 1 }));
     const s = await showWithConfirmedEntries(entries, { showName: 'Stonebridge Summer Nationals' });

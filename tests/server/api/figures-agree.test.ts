@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { convert, parseUnit } from '@shared/calc';
 import type { BuildSummary } from '@shared/schemas/build';
 import type { KeyFigure, PublicBuildResponse } from '@shared/schemas/card';
@@ -20,9 +20,16 @@ function inUnit(kind: 'power' | 'mass', figure: { value: number; unit: string },
 }
 
 describe('every screen shows the same figures', () => {
+  // The demo builds made once, through the services, for both tests.
+  let owner: Awaited<ReturnType<typeof createUser>>;
+  let made: Awaited<ReturnType<typeof createDemoCardBuilds>>;
+  beforeAll(async () => {
+    owner = await createUser({ name: 'Figures Owner' });
+    made = await createDemoCardBuilds(owner.user);
+  });
+
   it('My builds, the public JSON and the card agree on power and weight for every demo build', async () => {
-    const { user, email, password } = await createUser({ name: 'Figures Owner' });
-    const made = await createDemoCardBuilds(user);
+    const { email, password } = owner;
     expect(made).toHaveLength(DEMO_BUILDS.length);
     for (const m of made) await setPublished(await findBuild(m.id), true);
 
@@ -66,8 +73,8 @@ describe('every screen shows the same figures', () => {
   });
 
   it('the card-layout corpus makes the same demo builds in memory as the services make in the database', async () => {
-    const { user } = await createUser({ name: 'Corpus Owner' });
-    const [stored, inMemory] = await Promise.all([createDemoCardBuilds(user), demoCardBuildsInMemory()]);
+    const stored = made;
+    const inMemory = await demoCardBuildsInMemory();
     // What differs by nature: the public code and its address, ids, the photo's storage address, the time.
     const comparable = (d: (typeof stored)[number]) => ({
       name: d.name,
