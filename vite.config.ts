@@ -43,7 +43,7 @@ function testConfig() {
       project('api', { include: ['tests/server/**/*.test.ts'], exclude: [...PURE_SERVER_TESTS, ...ISOLATED_TESTS, ...SLOW_TESTS].map(glob), pool: 'forks', isolate: false, sequence: { groupOrder: 0 } }),
       project('isolated', { include: ISOLATED_TESTS.map(glob), pool: 'forks', isolate: true, sequence: { groupOrder: 0 } }),
       project('browser', { include: BROWSER_TESTS.map(glob), pool: 'forks', isolate: false, sequence: { groupOrder: 1 } }),
-      project('slow', { include: SLOW_TESTS.map(glob), pool: 'forks', isolate: true, testTimeout: 300_000, hookTimeout: 180_000, expect: { poll: { timeout: 60_000 } }, sequence: { groupOrder: 2 } }),
+      project('slow', { include: SLOW_TESTS.map(glob), pool: 'forks', isolate: false, testTimeout: 300_000, hookTimeout: 180_000, expect: { poll: { timeout: 60_000 } }, sequence: { groupOrder: 2 } }),
     ],
   };
 }
