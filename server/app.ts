@@ -93,12 +93,12 @@ function clientRouter() {
   return client;
 }
 
-/** Builds the Express app without listening, so tests drive it through supertest. */
 /** What each kind of payment reference confirms when its webhook arrives: wired here, in one place. */
 function wirePaymentHandlers(): void {
   registerPaymentHandler('entry', handleEntryPayment);
 }
 
+/** Builds the Express app without listening, so tests drive it through supertest. */
 export function createApp(): Express {
   wirePaymentHandlers();
   const app = express();

@@ -122,7 +122,8 @@ export class JobQueue {
 
   /**
    * Sends a job; inside `transaction` the job exists only if that transaction commits. Workers in
-   * every process hear of it on commit (a notification sent in a transaction is delivered when it commits).
+   * every process, this one included, hear of it on commit through their wake listener (a notification
+   * sent in a transaction is delivered when it commits).
    */
   async send(name: string, data: object, transaction?: Transaction): Promise<string> {
     const boss = await this.start();
@@ -133,8 +134,6 @@ export class JobQueue {
       if (transaction) throw err;
       logger.warn({ err }, 'job queue: wake-up not sent (the next poll finds the job)');
     });
-    if (transaction) transaction.afterCommit(() => this.wake(name));
-    else this.wake(name);
     return id;
   }
 

@@ -29,6 +29,9 @@ import type { PublicBuild } from '@shared/schemas/build';
 import type { SectionKind } from '@shared/schemas/build-sections';
 import { createUser } from './factories';
 
+/** The record with the latest date: the dyno run the seeder applies. */
+const latestByDate = <T extends { date: string }>(records: T[]): T | undefined => [...records].sort((a, b) => b.date.localeCompare(a.date))[0];
+
 export type DemoCardBuild = { id: number; name: string; build: PublicBuild; cover: CoverImage | null };
 
 /** `owner`: whose builds they become (a new test owner when left out). */
@@ -45,7 +48,7 @@ export async function createDemoCardBuilds(owner?: Awaited<ReturnType<typeof cre
     if (images.length) await storePhotosForBuild(build.id, images, demo.drawings.slice(0, 1).map((d) => d.caption));
     const runs = [];
     for (const run of demo.dynoRuns ?? []) runs.push(await addDynoRun(build, run));
-    const newest = [...runs].sort((a, b) => b.date.localeCompare(a.date))[0];
+    const newest = latestByDate(runs);
     if (newest) await applyDynoRun(build, newest.id);
     for (const w of demo.weighIns ?? []) await applyWeighIn(build, (await addWeighIn(build, w)).id);
     const publicBuild = presentPublicBuild(await loadFullBuildOrThrow(build.id));
@@ -64,7 +67,7 @@ async function demoCardBuildInMemory(demo: DemoBuild, id: number): Promise<DemoC
   // last weigh-in applied, the records listed newest first as loadFullBuild lists them.
   const sections = Object.fromEntries(Object.entries(demo.sections).map(([kind, data]) => [kind, SECTION_SCHEMAS[kind as SectionKind].parse(data) as Record<string, unknown>]));
   const runs = demo.dynoRuns ?? [];
-  const newestRun = [...runs].sort((a, b) => b.date.localeCompare(a.date))[0];
+  const newestRun = latestByDate(runs);
   if (newestRun) sections.engine = SECTION_SCHEMAS.engine.parse(engineWithDynoPeaks((sections.engine ?? {}) as EngineSection, newestRun)) as Record<string, unknown>;
   const weighIns = demo.weighIns ?? [];
   const weight = weighIns.length ? weightOfWeighIn(weighIns[weighIns.length - 1]!) : (demo.weight ?? null);
