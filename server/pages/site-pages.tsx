@@ -3,7 +3,7 @@ import { renderToStaticMarkup } from 'react-dom/server';
 import { formatInZone } from '@shared/calc/time-zone';
 import { countOf } from '@shared/words';
 import { BUILD_STYLES, BUILD_STYLE_LABELS, type PublicBuildSearch, type PublicBuildTile } from '@shared/schemas/build';
-import type { EventSummary } from '@shared/schemas/event';
+import type { EventSummary } from '@shared/schemas/show';
 import { PAGE_CSS } from './page-styles';
 import { PageHead } from './page-head';
 

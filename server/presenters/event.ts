@@ -1,5 +1,8 @@
 import type { EventRole } from '@shared/constants';
-import type { AuditLine as AuditLineOut, Criterion as CriterionOut, Entry as EntryOut, EventClass as ClassOut, EventDetail, EventLogoOut, EventSummary, Invitation, Member, MyEntry, OrganiserEntry } from '@shared/schemas/event';
+import type { AuditLine as AuditLineOut, Entry as EntryOut, MyEntry, OrganiserEntry } from '@shared/schemas/entry';
+import type { Criterion as CriterionOut, EventClass as ClassOut } from '@shared/schemas/show-classes';
+import type { EventDetail, EventLogoOut, EventSummary } from '@shared/schemas/show';
+import type { Invitation, Member } from '@shared/schemas/show-people';
 import { config } from '../config';
 import type { Actor } from '../policies/actor';
 import { eventAbilities } from '../policies/event';

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { EntryCreateSchema } from '@shared/schemas/event';
+import { EntryCreateSchema } from '@shared/schemas/entry';
 import { IdParamSchema } from '@shared/schemas/params';
 import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { EVENT_ROLES } from '@shared/constants';
-import { InvitationCreateSchema, InvitationTokenSchema } from '@shared/schemas/event';
+import { InvitationCreateSchema, InvitationTokenSchema } from '@shared/schemas/show-people';
 import { IdParamSchema, IdSchema } from '@shared/schemas/params';
 import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';

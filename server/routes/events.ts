@@ -1,6 +1,7 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
-import { ClassInputSchema, ClassUpdateSchema, EventCreateSchema, EventUpdateSchema, JudgingSheetSchema, LifecycleActionSchema } from '@shared/schemas/event';
+import { ClassInputSchema, ClassUpdateSchema, JudgingSheetSchema } from '@shared/schemas/show-classes';
+import { EventCreateSchema, EventUpdateSchema, LifecycleActionSchema } from '@shared/schemas/show';
 import { IdParamSchema, IdSchema } from '@shared/schemas/params';
 import type { EventAction as LifecycleAction } from '@shared/event-lifecycle';
 import { parseBody, parseParams, parseQuery } from '../middlewares/validate';

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { EVENT_STATUSES } from '../constants';
-import { EventLogoOutSchema } from './event';
+import { EventLogoOutSchema } from './show';
 import { PublicResultsSchema } from './results';
 
 /** The public face of a show: nothing about any person (no e-mail, phone, plate, VIN, home address). */

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { ENTRY_STATUSES } from '../constants';
 import { IdSchema } from './params';
-import { EntryStatusSchema } from './event';
+import { EntryStatusSchema } from './entry';
 
 /** The organiser's entries table: one page at a time, sorted and filtered on the server. */
 export const ENTRY_TABLE_SORTS = ['number', 'title', 'owner', 'class', 'status', 'created'] as const;

@@ -29,3 +29,9 @@ export const shortText = (label: string, max = 200) =>
   text(label)
     .trim()
     .max(max, { error: `${label} must be at most ${max} characters.` });
+
+/** A trimmed text field that must not be empty, e.g. `requiredText('Venue', 200)`. */
+export const requiredText = (label: string, max = 200) => shortText(label, max).min(1, { error: `${label} is required.` });
+
+/** A trimmed text field that may be empty. */
+export const optionalText = (label: string, max = 200) => shortText(label, max);

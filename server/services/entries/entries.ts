@@ -1,7 +1,7 @@
 import { Op, type Transaction } from 'sequelize';
 import { EVENT_OVER_STATUSES, ENTRY_PLACE_STATUSES, type EntryStatus } from '@shared/constants';
 import { refundDue } from '@shared/calc/refund';
-import type { EntryCreateInput } from '@shared/schemas/event';
+import type { EntryCreateInput } from '@shared/schemas/entry';
 import { sequelize } from '../../db/sequelize';
 import { Build } from '../../models/build';
 import { Entry } from '../../models/entry';

@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
 import { sheetEditable } from '@shared/event-lifecycle';
-import type { JudgingSheetInput } from '@shared/schemas/event';
+import type { JudgingSheetInput } from '@shared/schemas/show-classes';
 import { Criterion } from '../../models/criterion';
 import { Event } from '../../models/event';
 import { ConflictError, NotFoundError } from '../../errors';

@@ -1,5 +1,5 @@
 import { VOTING_STATUSES, votingOpen } from '@shared/schemas/peoples-choice';
-import { EventSlugSchema } from '@shared/schemas/event';
+import { EventSlugSchema } from '@shared/schemas/show';
 import { findEventBySlug } from '../shows/events';
 import { entryOnShowNow, listPublicEntries } from '../entries/entries';
 import { loadPublishedResults } from '../results/published-results';

@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { CLASSES_PER_EVENT_MAX } from '@shared/constants';
 import { settingsEditable } from '@shared/event-lifecycle';
-import type { ClassInput, ClassUpdateInput } from '@shared/schemas/event';
+import type { ClassInput, ClassUpdateInput } from '@shared/schemas/show-classes';
 import { Entry } from '../../models/entry';
 import { Event } from '../../models/event';
 import { EventClass } from '../../models/event-class';

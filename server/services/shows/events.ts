@@ -1,7 +1,7 @@
 import { Op, type Transaction } from 'sequelize';
 import type { EventStatus } from '@shared/constants';
 import { EVENT_ACTIONS, settingsEditable, type EventAction } from '@shared/event-lifecycle';
-import { eventDateProblems, type EventCreateInput, type EventUpdateInput } from '@shared/schemas/event';
+import { eventDateProblems, type EventCreateInput, type EventUpdateInput } from '@shared/schemas/show';
 import { Event } from '../../models/event';
 import { EventClass } from '../../models/event-class';
 import { Criterion } from '../../models/criterion';

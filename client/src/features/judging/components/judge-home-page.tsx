@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import type { EventSummary } from '@shared/schemas/event';
+import type { EventSummary } from '@shared/schemas/show';
 import { api } from '@client/lib/api';
 import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/states';
 import { judgingKeys } from '../api/judging-keys';

@@ -1,4 +1,4 @@
-import type { EventDetail } from '@shared/schemas/event';
+import type { EventDetail } from '@shared/schemas/show';
 import { Panel } from '@client/components/ui/panel';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { EventDetail } from '@shared/schemas/event';
+import type { EventDetail } from '@shared/schemas/show';
 import { EVENT_ACTIONS } from '@shared/event-lifecycle';
 import { Button } from '@client/components/ui/button';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';

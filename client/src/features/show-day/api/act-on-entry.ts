@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { AuditLine } from '@shared/schemas/event';
+import type { AuditLine } from '@shared/schemas/entry';
 import type { EntryTableRow } from '@shared/schemas/show-day';
 import { api } from '@client/lib/api';
 import { showDayKeys } from './show-day-keys';

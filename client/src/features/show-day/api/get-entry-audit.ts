@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { AuditLine } from '@shared/schemas/event';
+import type { AuditLine } from '@shared/schemas/entry';
 import { api } from '@client/lib/api';
 import { showDayKeys } from './show-day-keys';
 

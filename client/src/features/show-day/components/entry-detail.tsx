@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { ENTRY_STATUS_LABELS } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
-import type { EventClass } from '@shared/schemas/event';
+import type { EventClass } from '@shared/schemas/show-classes';
 import { auditActionLabel, PAYMENT_STATE_LABELS, type EntryTableRow } from '@shared/schemas/show-day';
 import { useActOnEntry, type EntryActionInput } from '../api/act-on-entry';
 import { useEntryAudit } from '../api/get-entry-audit';

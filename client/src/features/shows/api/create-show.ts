@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { EventCreateInput, EventDetail } from '@shared/schemas/event';
+import type { EventCreateInput, EventDetail } from '@shared/schemas/show';
 import { api } from '@client/lib/api';
 import { myShowsQueryKey } from './list-my-shows';
 

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { EventRole } from '@shared/constants';
-import type { InvitationPreview } from '@shared/schemas/event';
+import type { InvitationPreview } from '@shared/schemas/show-people';
 import { api } from '@client/lib/api';
 import { showKeys } from './show-keys';
 

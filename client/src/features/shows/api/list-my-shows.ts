@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { EventSummary } from '@shared/schemas/event';
+import type { EventSummary } from '@shared/schemas/show';
 import { api } from '@client/lib/api';
 import { showKeys } from './show-keys';
 

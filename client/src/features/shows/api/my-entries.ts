@@ -1,5 +1,5 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { EntryCreateInput, MyEntry } from '@shared/schemas/event';
+import type { EntryCreateInput, MyEntry } from '@shared/schemas/entry';
 import { api } from '@client/lib/api';
 import { entryKeys, showKeys } from './show-keys';
 

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ClassInput, ClassUpdateInput, EventClass } from '@shared/schemas/event';
+import type { ClassInput, ClassUpdateInput, EventClass } from '@shared/schemas/show-classes';
 import { api } from '@client/lib/api';
 import { showQueryKey } from './get-show';
 

@@ -1,4 +1,5 @@
-import type { EventDetail, JudgingSheetInput } from '@shared/schemas/event';
+import type { EventDetail } from '@shared/schemas/show';
+import type { JudgingSheetInput } from '@shared/schemas/show-classes';
 import { api } from '@client/lib/api';
 import { useShowMutation } from './show-mutation';
 

@@ -1,4 +1,4 @@
-import type { EventDetail } from '@shared/schemas/event';
+import type { EventDetail } from '@shared/schemas/show';
 import { api } from '@client/lib/api';
 import { useShowMutation } from './show-mutation';
 

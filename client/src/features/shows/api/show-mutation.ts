@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { EventDetail } from '@shared/schemas/event';
+import type { EventDetail } from '@shared/schemas/show';
 import { showQueryKey } from './get-show';
 import { showKeys } from './show-keys';
 

@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
-import { ClassInputSchema, type EventDetail } from '@shared/schemas/event';
+import { ClassInputSchema } from '@shared/schemas/show-classes';
+import { type EventDetail } from '@shared/schemas/show';
 import { fieldsFromIssues } from '@shared/errors';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
-import { EntryCreateSchema } from '@shared/schemas/event';
+import { EntryCreateSchema } from '@shared/schemas/entry';
 import { fieldsFromIssues } from '@shared/errors';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';

@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import type { EventDetail } from '@shared/schemas/event';
+import type { EventDetail } from '@shared/schemas/show';
 import { Panel } from '@client/components/ui/panel';
 import { showTime } from './show-dates';
 

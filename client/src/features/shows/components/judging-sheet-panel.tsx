@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { sheetEditable } from '@shared/event-lifecycle';
-import { JudgingSheetSchema, type EventDetail } from '@shared/schemas/event';
+import { JudgingSheetSchema } from '@shared/schemas/show-classes';
+import { type EventDetail } from '@shared/schemas/show';
 import { fieldsFromIssues } from '@shared/errors';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';

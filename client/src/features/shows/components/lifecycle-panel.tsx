@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { EVENT_STATUS_LABELS, EVENT_STATUSES } from '@shared/constants';
 import { EVENT_ACTIONS, actionsFrom, type EventAction } from '@shared/event-lifecycle';
-import type { EventDetail } from '@shared/schemas/event';
+import type { EventDetail } from '@shared/schemas/show';
 import { Button } from '@client/components/ui/button';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { Notice } from '@client/components/ui/notice';

@@ -1,5 +1,5 @@
 import { useRef, useState } from 'react';
-import type { EventDetail } from '@shared/schemas/event';
+import type { EventDetail } from '@shared/schemas/show';
 import { ApiError } from '@client/lib/api';
 import { Button } from '@client/components/ui/button';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';

@@ -1,6 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { EVENT_ROLES, EVENT_ROLE_LABELS, type EventRole } from '@shared/constants';
-import { InvitationCreateSchema, type EventDetail } from '@shared/schemas/event';
+import { InvitationCreateSchema } from '@shared/schemas/show-people';
+import { type EventDetail } from '@shared/schemas/show';
 import { fieldsFromIssues } from '@shared/errors';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';

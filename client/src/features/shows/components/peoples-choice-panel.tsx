@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { EventDetail } from '@shared/schemas/event';
+import type { EventDetail } from '@shared/schemas/show';
 import { ADDRESS_HASH_SHOWN } from '@shared/schemas/peoples-choice';
 import { countOf, formatDateTime } from '@shared/words';
 import { Button } from '@client/components/ui/button';

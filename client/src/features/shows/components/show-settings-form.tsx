@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from 'react';
-import { EventCreateSchema, type EventCreateInput, type EventDetail } from '@shared/schemas/event';
+import { EventCreateSchema, type EventCreateInput, type EventDetail } from '@shared/schemas/show';
 import { currencyDecimals, isKnownCurrency, parseMoney } from '@shared/calc/money';
 import { instantToWallTime, isValidTimeZone, wallTimeToInstant } from '@shared/calc/time-zone';
 import { fieldsFromIssues } from '@shared/errors';

@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { EVENT_ROLE_LABELS, EVENT_STATUS_LABELS } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
-import type { EventSummary } from '@shared/schemas/event';
+import type { EventSummary } from '@shared/schemas/show';
 import { PageHeader } from '@client/components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/states';
 import { useSession } from '@client/features/session/api/get-session';
