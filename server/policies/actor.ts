@@ -16,6 +16,11 @@ export type Actor = {
   memberships?: ReadonlyArray<{ eventId: number; role: EventRole }>;
 };
 
+/** Any role at all in this show: what decides whether its records exist for the person (404) or are refused (403). */
+export function hasAnyEventRole(actor: Actor | null | undefined, eventId: number): boolean {
+  return Boolean(actor?.memberships?.some((m) => m.eventId === eventId));
+}
+
 export function hasEventRole(actor: Actor | null | undefined, eventId: number, role: EventRole): boolean {
   return Boolean(actor?.memberships?.some((m) => m.eventId === eventId && m.role === role));
 }

@@ -94,3 +94,8 @@ export const presentMyEntry = (e: Entry, positions: Map<number, number>): MyEntr
 export const presentMember = (m: EventMembership): Member => ({ userId: m.userId, name: m.user?.name ?? '', email: m.user?.email ?? '', role: m.role });
 export const presentInvitation = (i: EventInvitation): Invitation => ({ id: i.id, email: i.email, role: i.role, expiresAt: i.expiresAt.toISOString(), invitedBy: i.inviter?.name ?? '' });
 export const presentAuditLine = (a: AuditLine): AuditLineOut => ({ id: a.id, at: a.createdAt.toISOString(), who: a.actor?.name ?? null, action: a.action, entryId: a.entryId, before: a.before, after: a.after });
+
+/** What the withdrawing person learns: the entry's new state and any refund due. */
+export const presentWithdrawal = (e: Pick<Entry, 'id' | 'status' | 'refundDue' | 'currency'>): { id: number; status: Entry['status']; refundDue: number | null; currency: string } => ({ id: e.id, status: e.status, refundDue: e.refundDue, currency: e.currency });
+
+export const presentMembership = (m: { eventId: number; role: EventRole }) => ({ eventId: m.eventId, role: m.role });

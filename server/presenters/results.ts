@@ -1,7 +1,8 @@
 import type { RankedEntry, ShowResults } from '@shared/calc/results';
 import type { ResultLine, ResultsReview } from '@shared/schemas/judging';
-import { decidedByWords, totalShown, type Award, type AwardView, type ManualTieBreakView, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
+import { decidedByWords, totalShown, type Award, type OwnResults, type AwardView, type ManualTieBreakView, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
 import type { ManualTieBreak } from '../models/manual-tie-break';
+import type { ShowResultRules } from '@shared/schemas/judging';
 
 type Cars = Map<number, { number: number; title: string; className: string }>;
 
@@ -40,5 +41,43 @@ export function presentPublishedReview(r: ResultsSnapshot): ResultsReview {
     classes: r.classes.map((c) => ({ classId: c.classId, className: c.className, placings: c.placings.map(line), unscored: r.entries.filter((e) => e.classId === c.classId && e.total === null).length })),
     bestOfShow: r.bestOfShow.map(line),
     ties: [],
+  };
+}
+
+/** The organiser's review screen: the results (as they stand, or as published), the ties ordered by hand, the rules. */
+export function presentResultsReviewReply(r: {
+  results: ShowResults;
+  cars: Cars;
+  criteria: Map<number, string>;
+  classNames: Map<number, string>;
+  tieBreaks: Array<{ row: ManualTieBreak; by: string }>;
+  published: ResultsSnapshot | null;
+  rules: ShowResultRules;
+}) {
+  return {
+    review: r.published ? presentPublishedReview(r.published) : presentResultsReview(r.results, r.cars, r.criteria, r.classNames),
+    tieBreaks: r.tieBreaks.map((t) => presentTieBreak(t.row, t.by, r.cars)),
+    rules: r.rules,
+    published: r.published !== null,
+  };
+}
+
+export const presentNewTieBreak = (t: ManualTieBreak): { id: number; entryIds: number[]; reason: string } => ({ id: t.id, entryIds: t.entryIds, reason: t.reason });
+
+/** A car's own results as its owner's screen shows them: every field named. */
+export function presentOwnResults(r: OwnResults): OwnResults {
+  return {
+    entryId: r.entryId,
+    number: r.number,
+    showName: r.showName,
+    className: r.className,
+    place: r.place,
+    shared: r.shared,
+    placesAwarded: r.placesAwarded,
+    bestOfShow: r.bestOfShow,
+    total: r.total,
+    sheetsCounted: r.sheetsCounted,
+    criteria: r.criteria.map((c) => ({ name: c.name, maxPoints: c.maxPoints, weight: c.weight, mean: c.mean, judges: [...c.judges] })),
+    comments: r.comments ? r.comments.map((c) => ({ criterion: c.criterion, text: c.text })) : null,
   };
 }

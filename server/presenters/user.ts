@@ -2,7 +2,7 @@ import type { AdminUser, AdminUserDetail, CurrentUser } from '@shared/schemas/us
 import type { User } from '../models/user';
 import { can as canUser } from '../policies/user';
 import { can as canMail } from '../policies/mail';
-import { can as canEvent } from '../policies/event';
+import { canEvent } from '../policies/event';
 import { config } from '../config';
 
 /** The signed-in person as their own client sees them, with what the policies allow. */

@@ -1,49 +1,43 @@
 import { Router } from 'express';
-import { IdParamSchema } from '@shared/schemas/params';
 import { CardPrintLatestQuerySchema, CardPrintParamsSchema, CardPrintStartSchema } from '@shared/schemas/card-print';
 import { parseBody, parseParams, parseQuery } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { cardRenderLimiter } from '../middlewares/rate-limits';
-import { authorizeEntry } from '../policies/event';
-import { actorInEvent } from '../services/shows/event-actor';
-import { findEntry } from '../services/entries/entries';
 import { cardPrintFile, findCardPrint, latestCardPrint, startCardPrint } from '../services/show-day/card-prints';
 import { entryCardBuild, entryCardFileName, entryCardShow, renderEntryCard } from '../services/entries/entry-card';
 import { queueShowReminders } from '../services/show-day/show-reminders';
 import { presentCardPrint } from '../presenters/card-print';
 import { presentPublicBuild } from '../presenters/public-build';
-import { authorizedEvent } from './events';
+import { loadEntryFor, loadEventFor } from './load-for';
 
 /** Numbered cards in bulk for the organiser, the owner's card of one entry, and the show reminder that attaches it. */
 export const cardPrintsRouter = Router();
 
 /** Starts a print (202), or answers the one already running for this show and filter (200). */
 cardPrintsRouter.post('/events/:id/card-prints', requireUser, async (req, res) => {
-  const { id } = parseParams(req, IdParamSchema);
   const { classId } = parseBody(req, CardPrintStartSchema);
-  const { event } = await authorizedEvent(req, id, 'printCards');
+  const { event } = await loadEventFor(req, 'printCards');
   const { print, created } = await startCardPrint(event, classId ?? null, currentUser(req));
   res.status(created ? 202 : 200).json({ print: presentCardPrint(print) });
 });
 
 /** The newest print for the filter: what the page shows after a reload, or to a second organiser. */
 cardPrintsRouter.get('/events/:id/card-prints/latest', requireUser, async (req, res) => {
-  const { id } = parseParams(req, IdParamSchema);
   const { classId } = parseQuery(req, CardPrintLatestQuerySchema);
-  await authorizedEvent(req, id, 'printCards');
-  const print = await latestCardPrint(id, classId ?? null);
+  const { event } = await loadEventFor(req, 'printCards');
+  const print = await latestCardPrint(event.id, classId ?? null);
   res.set('Cache-Control', 'private, no-store').json({ print: print ? presentCardPrint(print) : null });
 });
 
 cardPrintsRouter.get('/events/:id/card-prints/:printId', requireUser, async (req, res) => {
   const { id, printId } = parseParams(req, CardPrintParamsSchema);
-  await authorizedEvent(req, id, 'printCards');
+  await loadEventFor(req, 'printCards');
   res.set('Cache-Control', 'private, no-store').json({ print: presentCardPrint(await findCardPrint(id, printId)) });
 });
 
 cardPrintsRouter.get('/events/:id/card-prints/:printId/cards.pdf', requireUser, async (req, res) => {
   const { id, printId } = parseParams(req, CardPrintParamsSchema);
-  const { event } = await authorizedEvent(req, id, 'printCards');
+  const { event } = await loadEventFor(req, 'printCards');
   const print = await findCardPrint(id, printId);
   const file = await cardPrintFile(print);
   const which = print.eventClass ? `-${print.eventClass.id}` : '';
@@ -56,16 +50,14 @@ cardPrintsRouter.get('/events/:id/card-prints/:printId/cards.pdf', requireUser, 
 
 /** Queues the show reminder with each confirmed entrant's card attached (202: the job renders and sends). */
 cardPrintsRouter.post('/events/:id/reminders', requireUser, async (req, res) => {
-  const { id } = parseParams(req, IdParamSchema);
-  const { event } = await authorizedEvent(req, id, 'manage');
-  res.status(202).json(await queueShowReminders(event));
+  const { event } = await loadEventFor(req, 'manage');
+  const { entrants } = await queueShowReminders(event);
+  res.status(202).json({ entrants });
 });
 
 /** The owner's card for one entry: their own design carrying the show, class and entry number. */
 cardPrintsRouter.get('/entries/:id/card.pdf', requireUser, cardRenderLimiter, async (req, res) => {
-  const { id } = parseParams(req, IdParamSchema);
-  const entry = await findEntry(id);
-  authorizeEntry(await actorInEvent(currentUser(req), entry.eventId), 'view', entry);
+  const { entry } = await loadEntryFor(req, 'view');
   const show = await entryCardShow(entry);
   const build = await entryCardBuild(entry);
   // Drawn from the public face only, so nothing private reaches the paper.

@@ -1,13 +1,12 @@
 import { Router, type Request, type Response } from 'express';
 import multer from 'multer';
 import { PHOTO_MAX_BYTES } from '@shared/schemas/build';
-import { IdParamSchema } from '@shared/schemas/params';
-import { parseParams } from '../middlewares/validate';
 import { photoUploadLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { removeEventLogo, setEventLogo, tooLargeError } from '../services/shows/event-logo';
 import { AppError, ValidationError } from '../errors';
-import { authorizedEvent, respondWithEvent } from './events';
+import { loadEventFor } from './load-for';
+import { respondWithEvent } from './respond-with-event';
 
 export const eventLogoRouter = Router();
 /** Takes multipart, like the build photo upload (see jsonBodiesOnly in app.ts). */
@@ -28,17 +27,15 @@ function receiveLogo(req: Request, res: Response): Promise<Express.Multer.File |
 
 /** The organisers of the show set its logo; the file is read only after they are known to be allowed. */
 eventLogoRouter.post('/events/:id/logo', requireUser, photoUploadLimiter, async (req, res) => {
-  const { id } = parseParams(req, IdParamSchema);
-  await authorizedEvent(req, id, 'manage');
+  const { event } = await loadEventFor(req, 'manage');
   const file = await receiveLogo(req, res);
   if (!file) throw new ValidationError({ logo: 'Choose an image for the logo.' });
-  await setEventLogo(id, { buffer: file.buffer, originalName: file.originalname }, currentUser(req).id);
-  await respondWithEvent(req, res, id);
+  await setEventLogo(event.id, { buffer: file.buffer, originalName: file.originalname }, currentUser(req).id);
+  await respondWithEvent(req, res, event.id);
 });
 
 eventLogoRouter.delete('/events/:id/logo', requireUser, async (req, res) => {
-  const { id } = parseParams(req, IdParamSchema);
-  await authorizedEvent(req, id, 'manage');
-  await removeEventLogo(id, currentUser(req).id);
-  await respondWithEvent(req, res, id);
+  const { event } = await loadEventFor(req, 'manage');
+  await removeEventLogo(event.id, currentUser(req).id);
+  await respondWithEvent(req, res, event.id);
 });

@@ -8,8 +8,8 @@ import { currentUser, requireUser } from '../middlewares/authenticate';
 import { authorize } from '../policies/authorize';
 import { mayTakePartInShows } from '../policies/event';
 import { acceptInvitation, inviteToEvent, listMembers, listOpenInvitations, previewInvitation, removeMember, revokeInvitation } from '../services/shows/event-people';
-import { presentInvitation, presentMember } from '../presenters/event';
-import { authorizedEvent } from './events';
+import { presentInvitation, presentMember, presentMembership } from '../presenters/event';
+import { loadEventFor } from './load-for';
 
 export const eventPeopleRouter = Router();
 
@@ -17,23 +17,21 @@ const MemberParamsSchema = IdParamSchema.extend({ userId: IdSchema, role: z.enum
 const InvitationParamsSchema = IdParamSchema.extend({ invitationId: IdSchema });
 
 eventPeopleRouter.get('/events/:id/people', requireUser, async (req, res) => {
-  const { id } = parseParams(req, IdParamSchema);
-  await authorizedEvent(req, id, 'manage');
-  const [members, invitations] = await Promise.all([listMembers(id), listOpenInvitations(id)]);
+  const { event } = await loadEventFor(req, 'manage');
+  const [members, invitations] = await Promise.all([listMembers(event.id), listOpenInvitations(event.id)]);
   res.json({ members: members.map(presentMember), invitations: invitations.map(presentInvitation) });
 });
 
 eventPeopleRouter.post('/events/:id/invitations', requireUser, async (req, res) => {
-  const { id } = parseParams(req, IdParamSchema);
   const input = parseBody(req, InvitationCreateSchema);
-  await authorizedEvent(req, id, 'manage');
-  const invitation = await inviteToEvent(id, currentUser(req), input.email, input.role);
+  const { event } = await loadEventFor(req, 'manage');
+  const invitation = await inviteToEvent(event.id, currentUser(req), input.email, input.role);
   res.status(201).json({ invitation: presentInvitation(invitation) });
 });
 
 eventPeopleRouter.delete('/events/:id/invitations/:invitationId', requireUser, async (req, res) => {
   const { id, invitationId } = parseParams(req, InvitationParamsSchema);
-  await authorizedEvent(req, id, 'manage');
+  await loadEventFor(req, 'manage');
   await revokeInvitation(id, invitationId, currentUser(req));
   res.status(204).end();
 });
@@ -42,7 +40,7 @@ eventPeopleRouter.delete('/events/:id/invitations/:invitationId', requireUser, a
 eventPeopleRouter.delete('/events/:id/members/:userId/:role', requireUser, async (req, res) => {
   const { id, userId, role } = parseParams(req, MemberParamsSchema);
   const user = currentUser(req);
-  await authorizedEvent(req, id, userId === user.id ? 'view' : 'manage');
+  await loadEventFor(req, userId === user.id ? 'view' : 'manage');
   await removeMember(id, userId, role, user);
   res.status(204).end();
 });
@@ -58,5 +56,5 @@ eventPeopleRouter.post('/invitations/:token/accept', requireUser, async (req, re
   const user = currentUser(req);
   authorize(mayTakePartInShows(user), user, 'Confirm your e-mail address before taking a role in a show.');
   const membership = await acceptInvitation(token, user);
-  res.json({ eventId: membership.eventId, role: membership.role });
+  res.json(presentMembership(membership));
 });

@@ -1,11 +1,8 @@
-import { Router, type Request } from 'express';
-import { IdParamSchema } from '@shared/schemas/params';
+import { Router } from 'express';
 import { VoidAddressSchema } from '@shared/schemas/peoples-choice';
-import { parseBody, parseParams } from '../middlewares/validate';
+import { parseBody } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
-import { authorizePeoplesChoice } from '../policies/peoples-choice';
-import { actorInEvent } from '../services/shows/event-actor';
-import { findEvent } from '../services/shows/events';
+import { loadEventFor } from './load-for';
 import { loadPeoplesChoice, setVotingWindow, voidVotesOfAddress } from '../services/results/peoples-choice';
 import { presentPeoplesChoice } from '../presenters/peoples-choice';
 
@@ -13,34 +10,26 @@ import { presentPeoplesChoice } from '../presenters/peoples-choice';
 export const peoplesChoiceRouter = Router();
 peoplesChoiceRouter.use('/events/:id/peoples-choice', requireUser);
 
-async function authorized(req: Request, id: number) {
-  const event = await findEvent(id);
-  authorizePeoplesChoice(await actorInEvent(currentUser(req), event.id), 'manage', event);
-}
-
 const respond = async (res: import('express').Response, id: number, extra: object = {}) =>
   res.json({ peoplesChoice: presentPeoplesChoice(await loadPeoplesChoice(id)), ...extra });
 
 peoplesChoiceRouter.get('/events/:id/peoples-choice', async (req, res) => {
-  const { id } = parseParams(req, IdParamSchema);
-  await authorized(req, id);
-  await respond(res, id);
+  const { event } = await loadEventFor(req, 'managePeoplesChoice');
+  await respond(res, event.id);
 });
 
 for (const [path, open] of [['open', true], ['close', false]] as const) {
   peoplesChoiceRouter.post(`/events/:id/peoples-choice/${path}`, async (req, res) => {
-    const { id } = parseParams(req, IdParamSchema);
-    await authorized(req, id);
-    await setVotingWindow(id, open, currentUser(req));
-    await respond(res, id);
+    const { event } = await loadEventFor(req, 'managePeoplesChoice');
+    await setVotingWindow(event.id, open, currentUser(req));
+    await respond(res, event.id);
   });
 }
 
 /** Voids every counted vote from one address (named by its hash from the tally). */
 peoplesChoiceRouter.post('/events/:id/peoples-choice/void', async (req, res) => {
-  const { id } = parseParams(req, IdParamSchema);
   const { addressHash } = parseBody(req, VoidAddressSchema);
-  await authorized(req, id);
-  const voided = await voidVotesOfAddress(id, addressHash, currentUser(req));
-  await respond(res, id, { voided });
+  const { event } = await loadEventFor(req, 'managePeoplesChoice');
+  const voided = await voidVotesOfAddress(event.id, addressHash, currentUser(req));
+  await respond(res, event.id, { voided });
 });

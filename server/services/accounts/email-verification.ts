@@ -2,7 +2,6 @@ import { createHash, randomBytes } from 'node:crypto';
 import type { Transaction } from 'sequelize';
 import { EMAIL_VERIFICATION_TTL_HOURS } from '@shared/constants';
 import { verifyEmail } from '@templates/email/verify-email';
-import { sequelize } from '../../db/sequelize';
 import { EmailVerificationToken } from '../../models/email-verification-token';
 import { User } from '../../models/user';
 import { AppError, ConflictError } from '../../errors';
@@ -23,9 +22,9 @@ export async function sendVerificationMail(user: User, publicBaseUrl: string, tr
 }
 
 /** A new link for a signed-in person whose address is not confirmed yet (the route limits how often). */
-export async function resendVerificationMail(user: User, publicBaseUrl: string): Promise<void> {
+export async function resendVerificationMail(user: User, publicBaseUrl: string, outer?: Transaction): Promise<void> {
   if (user.emailVerified) throw new ConflictError('Your e-mail address is already confirmed.');
-  await sequelize.transaction((transaction) => sendVerificationMail(user, publicBaseUrl, transaction));
+  await withTransaction(outer, (transaction) => sendVerificationMail(user, publicBaseUrl, transaction));
 }
 
 const invalidLink = () =>

@@ -1,9 +1,10 @@
+import type { Transaction } from 'sequelize';
 import { createHash, randomBytes } from 'node:crypto';
 import { Op } from 'sequelize';
 import { PASSWORD_RESET_TTL_MINUTES } from '@shared/constants';
 import type { PasswordResetConfirmInput } from '@shared/schemas/user';
 import { passwordResetEmail, type ResetAskedBy } from '@templates/email/password-reset';
-import { sequelize } from '../../db/sequelize';
+import { withTransaction } from '../../db/transaction';
 import { PasswordResetToken } from '../../models/password-reset-token';
 import { User } from '../../models/user';
 import { hashPassword } from '../../auth/passwords';
@@ -27,18 +28,18 @@ export async function requestPasswordReset(email: string, publicBaseUrl: string)
  * The site admin mails an account a reset link. A turned-off account is refused: the link could
  * not get its owner back in, and the mail would say otherwise.
  */
-export async function sendResetFromAdmin(user: User, publicBaseUrl: string): Promise<void> {
+export async function sendResetFromAdmin(user: User, publicBaseUrl: string, outer?: Transaction): Promise<void> {
   if (user.disabledAt) {
     throw new ConflictError('This account is turned off, so no reset link was sent. Enable the account first.');
   }
-  await mailResetLink(user, publicBaseUrl, 'site-admin');
+  await mailResetLink(user, publicBaseUrl, 'site-admin', outer);
 }
 
-async function mailResetLink(user: User, publicBaseUrl: string, askedBy: ResetAskedBy): Promise<void> {
+async function mailResetLink(user: User, publicBaseUrl: string, askedBy: ResetAskedBy, outer?: Transaction): Promise<void> {
   const token = randomBytes(32).toString('base64url');
   const link = `${publicBaseUrl}/reset-password?token=${token}`;
   // The token and its mail are one write: no mail for a token that was not saved, no token without its mail.
-  await sequelize.transaction(async (transaction) => {
+  await withTransaction(outer, async (transaction) => {
     await PasswordResetToken.create(
       { userId: user.id, tokenHash: sha256(token), expiresAt: new Date(Date.now() + PASSWORD_RESET_TTL_MINUTES * 60_000), usedAt: null },
       { transaction },
@@ -51,12 +52,12 @@ const invalidLink = () =>
   new AppError(400, 'VALIDATION_FAILED', 'This reset link has expired or was already used. Ask for a new one.', { token: 'Expired or already used.' });
 
 /** Sets the new password, spends the token and every other unspent one, and signs the person out everywhere. */
-export async function confirmPasswordReset(input: PasswordResetConfirmInput): Promise<User> {
+export async function confirmPasswordReset(input: PasswordResetConfirmInput, outer?: Transaction): Promise<User> {
   const live = () => ({ tokenHash: sha256(input.token), usedAt: null, expiresAt: { [Op.gt]: new Date() } });
   // A password hash costs real memory and time: spend it only for a link that works (checked again under the lock).
   if ((await PasswordResetToken.count({ where: live() })) === 0) throw invalidLink();
   const passwordHash = await hashPassword(input.password);
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(outer, async (transaction) => {
     const token = await PasswordResetToken.findOne({
       where: live(),
       lock: transaction.LOCK.UPDATE,

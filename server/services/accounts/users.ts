@@ -1,6 +1,6 @@
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { AccountUpdateInput, AdminUserListQuery, AdminUserUpdateInput, PasswordChangeInput, SignUpInput } from '@shared/schemas/user';
-import { sequelize } from '../../db/sequelize';
+import { withTransaction } from '../../db/transaction';
 import { User } from '../../models/user';
 import { hashPassword, verifyPassword } from '../../auth/passwords';
 import { accountExistsEmail } from '@templates/email/account-exists';
@@ -14,10 +14,10 @@ import { sendVerificationMail } from './email-verification';
  * confirmation link; one that already has an account gets a mail saying so (at most one an hour, so
  * sign-up cannot flood someone's inbox). Resolves with the new account, or null.
  */
-export async function signUp(input: SignUpInput, publicBaseUrl: string): Promise<User | null> {
+export async function signUp(input: SignUpInput, publicBaseUrl: string, outer?: Transaction): Promise<User | null> {
   const passwordHash = await hashPassword(input.password);
   try {
-    return await sequelize.transaction(async (transaction) => {
+    return await withTransaction(outer, async (transaction) => {
       const existing = await User.findOne({ where: { email: input.email }, transaction });
       if (existing) {
         await mailAccountExists(existing, publicBaseUrl, transaction);
@@ -45,12 +45,12 @@ export async function updateAccount(user: User, input: AccountUpdateInput): Prom
 }
 
 /** Changes the password after checking the current one; every other session of the person ends. */
-export async function changePassword(user: User, input: PasswordChangeInput, currentSid: string): Promise<void> {
+export async function changePassword(user: User, input: PasswordChangeInput, currentSid: string, outer?: Transaction): Promise<void> {
   if (!(await verifyPassword(user.passwordHash, input.currentPassword))) {
     throw new ValidationError({ currentPassword: 'The current password is not right.' });
   }
   const passwordHash = await hashPassword(input.newPassword);
-  await sequelize.transaction(async (transaction) => {
+  await withTransaction(outer, async (transaction) => {
     await user.update({ passwordHash }, { transaction });
     await destroySessionsOf(user.id, currentSid, transaction);
   });

@@ -3,6 +3,7 @@ import { EVENT_OVER_STATUSES, ENTRY_PLACE_STATUSES, type EntryStatus } from '@sh
 import { refundDue } from '@shared/calc/refund';
 import type { EntryCreateInput } from '@shared/schemas/entry';
 import { sequelize } from '../../db/sequelize';
+import { withTransaction } from '../../db/transaction';
 import { Build } from '../../models/build';
 import { Entry } from '../../models/entry';
 import { Event } from '../../models/event';
@@ -36,8 +37,8 @@ const statusWithPlace = (event: Event): EntryStatus => (event.entryFee > 0 ? 'aw
  * once (confirmed when the show is free, else awaiting payment); a full class or show puts the
  * entry on the waiting list, in order.
  */
-export async function registerEntry(person: Person, eventId: number, input: EntryCreateInput, now = new Date()): Promise<Entry> {
-  return sequelize.transaction(async (transaction) => {
+export async function registerEntry(person: Person, eventId: number, input: EntryCreateInput, now = new Date(), outer?: Transaction): Promise<Entry> {
+  return withTransaction(outer, async (transaction) => {
     const event = await lockEvent(eventId, transaction);
     if (event.status !== 'registration_open') throw new ConflictError('This show is not taking entries.', { eventId: 'Entries are not open for this show.' });
     if (now < event.registrationOpensAt) throw new ConflictError('Entries have not opened yet.', { eventId: `Entries open on ${event.registrationOpensAt.toISOString()}.` });
@@ -74,10 +75,10 @@ export async function registerEntry(person: Person, eventId: number, input: Entr
 }
 
 /** The waiting-list entrant takes the place offered, before its deadline. */
-export async function acceptOffer(entryId: number, person: Person, now = new Date()): Promise<Entry> {
+export async function acceptOffer(entryId: number, person: Person, now = new Date(), outer?: Transaction): Promise<Entry> {
   const entry0 = await findEntry(entryId);
   await settleOffers(entry0.eventId, now);
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(outer, async (transaction) => {
     const event = await lockEvent(entry0.eventId, transaction);
     const entry = await Entry.findByPk(entryId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!entry || entry.ownerId !== person.id) throw new NotFoundError('No such entry.');
@@ -98,9 +99,9 @@ export const refundAmountFor = (entry: Pick<Entry, 'paidAmount'>, event: Pick<Ev
  * Withdrawal by the owner or an organiser: the entry keeps its number (no reuse), records the
  * refund the show's rule gives, and the place it held goes to the first in line.
  */
-export async function withdrawEntry(entryId: number, person: Person, byOrganiser: boolean, now = new Date()): Promise<Entry> {
+export async function withdrawEntry(entryId: number, person: Person, byOrganiser: boolean, now = new Date(), outer?: Transaction): Promise<Entry> {
   const entry0 = await findEntry(entryId);
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(outer, async (transaction) => {
     const event = await lockEvent(entry0.eventId, transaction);
     const entry = await Entry.findByPk(entryId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!entry) throw new NotFoundError('No such entry.');
@@ -172,7 +173,6 @@ async function waitingPositions(eventIds: number[]): Promise<Map<number, number>
 
 /** Every entry of a show for its organisers, by number, then the waiting list in order. */
 export async function listEntriesOfEvent(eventId: number) {
-  await settleOffers(eventId);
   const entries = await Entry.findAll({
     where: { eventId },
     include: [...entryIncludes, { model: User, as: 'owner', attributes: ['id', 'name'] }],
@@ -184,7 +184,6 @@ export async function listEntriesOfEvent(eventId: number) {
 /** An owner's entries across shows, the soonest show first. */
 export async function listEntriesOf(person: Person) {
   const eventIds = (await Entry.findAll({ where: { ownerId: person.id }, attributes: ['eventId'], group: ['eventId'] })).map((r) => r.eventId);
-  for (const id of eventIds) await settleOffers(id);
   const entries = await Entry.findAll({
     where: { ownerId: person.id },
     include: [...entryIncludes, { model: Event, as: 'event' }],

@@ -1,7 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import type { Transaction } from 'sequelize';
 import { ENTRY_PLACE_STATUSES, EVENT_OVER_STATUSES } from '@shared/constants';
-import { sequelize } from '../../db/sequelize';
 import { Entry } from '../../models/entry';
 import { Event } from '../../models/event';
 import { EventClass } from '../../models/event-class';
@@ -28,8 +27,8 @@ async function lockEntry(entryId: number, transaction: Transaction) {
  * The organiser moves an entry to another class of the same show. A class that is full refuses
  * an entry holding a place (the waiting list is the way in); a waiting entry just changes line.
  */
-export async function changeEntryClass(entryId: number, classId: number, person: Person, now = new Date()): Promise<Entry> {
-  return sequelize.transaction(async (transaction) => {
+export async function changeEntryClass(entryId: number, classId: number, person: Person, now = new Date(), outer?: Transaction): Promise<Entry> {
+  return withTransaction(outer, async (transaction) => {
     const { event, entry } = await lockEntry(entryId, transaction);
     if (entry.status === 'withdrawn') throw new ConflictError('A withdrawn entry keeps its class.', { classId: 'This entry is withdrawn.' });
     if (entry.classId === classId) throw new ValidationError({ classId: 'The entry is already in this class.' });
@@ -56,8 +55,8 @@ export async function recordManualPayment(entry: Entry, event: Event, note: stri
   await mailPaymentConfirmed(entry, event, transaction);
 }
 
-export async function markEntryPaid(entryId: number, note: string, person: Person, now = new Date()): Promise<Entry> {
-  return sequelize.transaction(async (transaction) => {
+export async function markEntryPaid(entryId: number, note: string, person: Person, now = new Date(), outer?: Transaction): Promise<Entry> {
+  return withTransaction(outer, async (transaction) => {
     const { event, entry } = await lockEntry(entryId, transaction);
     await recordManualPayment(entry, event, note, person, transaction, now);
     return entry;

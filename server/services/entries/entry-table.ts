@@ -4,7 +4,6 @@ import { Build } from '../../models/build';
 import { Entry } from '../../models/entry';
 import { EventClass } from '../../models/event-class';
 import { User } from '../../models/user';
-import { settleOffers } from './waitlist';
 
 const includes = [
   { model: Build, as: 'build', attributes: ['id', 'title', 'code', 'vin', 'plate', 'ownerPhone', 'ownerAddress'] },
@@ -57,7 +56,6 @@ export async function waitingPlaces(eventId: number): Promise<Map<number, number
 
 /** One page of the table; the count runs on the same filters. Quick at thousands of entries: two indexed queries. */
 export async function listEntryTable(eventId: number, q: EntryTableQuery) {
-  await settleOffers(eventId);
   const where = whereFor(eventId, q);
   const [total, rows, places] = await Promise.all([
     Entry.count({ where, include: includes.map((i) => ({ ...i, attributes: [] })), distinct: true, col: 'id' }),
@@ -69,7 +67,6 @@ export async function listEntryTable(eventId: number, q: EntryTableQuery) {
 
 /** Every entry that matches, in the table's order, for the CSV export. */
 export async function listEntriesForExport(eventId: number, q: EntryExportQuery) {
-  await settleOffers(eventId);
   const [rows, places] = await Promise.all([
     Entry.findAll({ where: whereFor(eventId, q), include: includes, order: orderFor(q.sort, q.dir), subQuery: false }),
     waitingPlaces(eventId),

@@ -1,6 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
 import { ENTRY_PLACE_STATUSES, WAITLIST_OFFER_HOURS } from '@shared/constants';
-import { sequelize } from '../../db/sequelize';
+import { withTransaction } from '../../db/transaction';
 import { Entry } from '../../models/entry';
 import { Event } from '../../models/event';
 import { EventClass } from '../../models/event-class';
@@ -53,7 +53,8 @@ export async function offerFreedPlaces(eventId: number, transaction: Transaction
 
 /**
  * Offers whose deadline passed: the entry leaves the waiting list and the place goes to the next
- * in line. Run lazily before any read or write of a show's entries, and by the periodic sweep.
+ * in line. Run before any write to a show's entries, and by the minute's scheduled sweep; reads never
+ * write, so an offer past its deadline reads as lapsed (its deadline is in the answer) until then.
  */
 export async function lapseExpiredOffers(eventId: number, transaction: Transaction, now = new Date()): Promise<number> {
   const lapsed = await Entry.findAll({ where: { eventId, status: 'waiting_list', offerExpiresAt: { [Op.lte]: now } }, lock: transaction.LOCK.UPDATE, transaction });
@@ -65,11 +66,11 @@ export async function lapseExpiredOffers(eventId: number, transaction: Transacti
   return lapsed.length;
 }
 
-/** Lapses the expired offers of one show in a transaction of its own (a read path calls this first). */
-export async function settleOffers(eventId: number, now = new Date()): Promise<void> {
+/** Lapses the expired offers of one show in a transaction of its own (a write path calls this first). */
+export async function settleOffers(eventId: number, now = new Date(), outer?: Transaction): Promise<void> {
   const any = await Entry.count({ where: { eventId, status: 'waiting_list', offerExpiresAt: { [Op.lte]: now } } });
   if (!any) return;
-  await sequelize.transaction(async (transaction) => {
+  await withTransaction(outer, async (transaction) => {
     await Event.findByPk(eventId, { lock: transaction.LOCK.UPDATE, transaction });
     await lapseExpiredOffers(eventId, transaction, now);
   });

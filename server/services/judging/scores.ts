@@ -40,8 +40,8 @@ const UPSERT_NOTE = `
  * classes, a device clock not far ahead); the show row is read FOR SHARE, so closing judging
  * (FOR UPDATE) waits for sends in flight and every later send sees it closed.
  */
-export async function submitScores(eventId: number, judgeId: number, input: ScoreSubmitInput, now = new Date()) {
-  return sequelize.transaction(async (transaction) => {
+export async function submitScores(eventId: number, judgeId: number, input: ScoreSubmitInput, now = new Date(), outer?: Transaction) {
+  return withTransaction(outer, async (transaction) => {
     const event = await Event.findByPk(eventId, { lock: transaction.LOCK.SHARE, transaction });
     if (!event) throw new NotFoundError('No such show.');
     const closed = judgingClosedReason(event);

@@ -1,6 +1,5 @@
 import { Op, type Transaction } from 'sequelize';
 import { PHOTO_MAX_BYTES, PHOTO_MAX_FILES, photoTooLargeMessage } from '@shared/schemas/build';
-import { sequelize } from '../../db/sequelize';
 import { Photo } from '../../models/photo';
 import { newPhotoStorageKey, PHOTO_STORAGE_KEY, photoVariantKey, photoVariantsPrefix } from '../../storage/keys';
 import { storage } from '../../storage/index';
@@ -79,13 +78,13 @@ export async function putAll(files: { key: string; body: Buffer; type: string }[
  * files are written, then the rows in one transaction (the files are removed if it fails).
  * The first photo of a build becomes its cover. Returns all of the build's photos in order.
  */
-export async function storePhotosForBuild(buildId: number, files: PhotoFile[], captions: string[] = [], uploaderId?: number): Promise<Photo[]> {
+export async function storePhotosForBuild(buildId: number, files: PhotoFile[], captions: string[] = [], uploaderId?: number, outer?: Transaction): Promise<Photo[]> {
   if (captions.length > files.length) throw new ValidationError({ captions: 'There are more captions than photos.' });
   const images = await processAll(files, uploaderId);
   const prepared = images.map((image, i) => ({ image, storageKey: newPhotoStorageKey(), caption: captions[i]?.trim() ?? '' }));
   const written = await putAll(prepared.flatMap((p) => variantFiles(p.storageKey, p.image)));
   try {
-    return await sequelize.transaction(async (transaction) => {
+    return await withTransaction(outer, async (transaction) => {
       const build = await lockBuild(buildId, transaction);
       const existing = await listPhotos(buildId, transaction);
       const hasCover = existing.some((p) => p.isCover);
@@ -150,8 +149,8 @@ export async function reorderPhotos(buildId: number, photoIds: number[], outer?:
 }
 
 /** Deletes the photo and its files; when it was the cover, the next photo in order takes over. */
-export async function deletePhoto(buildId: number, photoId: number): Promise<void> {
-  const storageKey = await sequelize.transaction(async (transaction) => {
+export async function deletePhoto(buildId: number, photoId: number, outer?: Transaction): Promise<void> {
+  const storageKey = await withTransaction(outer, async (transaction) => {
     const build = await lockBuild(buildId, transaction);
     const photo = await findPhotoOf(buildId, photoId, transaction);
     await photo.destroy({ transaction });

@@ -1,8 +1,9 @@
+import type { Transaction } from 'sequelize';
 import { createHash } from 'node:crypto';
 import { Op } from 'sequelize';
 import { PDFDocument } from 'pdf-lib';
 import { CARD_PRINT_ACTIVE, CARD_PRINT_ENTRY_STATUSES } from '@shared/schemas/card-print';
-import { sequelize } from '../../db/sequelize';
+import { withTransaction } from '../../db/transaction';
 import { logger } from '../../logger';
 import { CardPrint } from '../../models/card-print';
 import { Entry } from '../../models/entry';
@@ -43,11 +44,11 @@ const confirmedWhere = (eventId: number, classId: number | null) => ({
  * one runs for the same show and filter, that one is returned instead of a second. A show (or class)
  * with no confirmed entries is refused with the reason rather than producing an empty file.
  */
-export async function startCardPrint(event: Event, classId: number | null, person: { id: number }): Promise<{ print: CardPrint; created: boolean }> {
+export async function startCardPrint(event: Event, classId: number | null, person: { id: number }, outer?: Transaction): Promise<{ print: CardPrint; created: boolean }> {
   if (classId) await classOfShow(event.id, classId);
   const queue = jobQueue();
   await queue.start(); // before the transaction: the first start creates pg-boss's tables on its own connection
-  const { id, created } = await sequelize.transaction(async (transaction) => {
+  const { id, created } = await withTransaction(outer, async (transaction) => {
     // Two organisers starting at once take turns here, so the second finds the first one's print.
     await Event.findByPk(event.id, { lock: transaction.LOCK.UPDATE, transaction });
     const running = await CardPrint.findOne({ where: { eventId: event.id, classId, status: { [Op.in]: [...CARD_PRINT_ACTIVE] } }, transaction });

@@ -1,9 +1,10 @@
+import type { Transaction } from 'sequelize';
 import { Op } from 'sequelize';
-import { coverPhotoOf } from '@shared/build-sheet/cover';
-import { CHECK_IN_UNDO_SECONDS, paymentStateOf, type GateCard, type GateCounts, type GateProblem } from '@shared/schemas/show-day';
+import { CHECK_IN_UNDO_SECONDS, type GateCounts, type GateProblem } from '@shared/schemas/show-day';
 import { buildCodeFromScan, gateProblemMessage } from '@shared/gate';
 import { formatInZone } from '@shared/calc/time-zone';
 import { sequelize } from '../../db/sequelize';
+import { withTransaction } from '../../db/transaction';
 import { AuditLine } from '../../models/audit-line';
 import { Build } from '../../models/build';
 import { Entry } from '../../models/entry';
@@ -11,7 +12,6 @@ import { Event } from '../../models/event';
 import { EventClass } from '../../models/event-class';
 import { Photo } from '../../models/photo';
 import { ConflictError, NotFoundError } from '../../errors';
-import { mediaUrl, photoVariantKey } from '../../storage/keys';
 import { writeAudit } from '../audit/audit';
 import { recordManualPayment } from '../entries/entry-actions';
 
@@ -22,18 +22,8 @@ const entryInclude = [
   { model: EventClass, as: 'eventClass', attributes: ['id', 'name'] },
 ];
 
-function coverOf(build: Build | undefined) {
-  const cover = coverPhotoOf(build?.photos);
-  if (!cover) return null;
-  // The smallest variant at least 480 px wide is enough for a phone at the gate.
-  const variants = [...cover.variants].sort((a, b) => a.width - b.width);
-  const v = variants.find((x) => x.width >= 480) ?? variants[variants.length - 1];
-  return v ? { src: mediaUrl(photoVariantKey(cover.storageKey, v.width, 'jpg')), width: v.width, height: v.height } : null;
-}
-
-const timeAt = (d: Date, event: Event) => formatInZone(d.toISOString(), event.timeZone, { hour: '2-digit', minute: '2-digit' });
-
-function problemOf(entry: Entry): GateProblem | null {
+/** Why the gate may not simply check this entry in, or null when it may. */
+export function gateProblemOf(entry: Entry): GateProblem | null {
   if (entry.status === 'checked_in') return 'already_checked_in';
   if (entry.status === 'withdrawn') return 'withdrawn';
   if (entry.status === 'waiting_list') return 'waiting_list';
@@ -41,54 +31,35 @@ function problemOf(entry: Entry): GateProblem | null {
   return null;
 }
 
-/** What the gate shows for one entry of this show: the car, and the problem in words if there is one. */
-export function gateCardOf(entry: Entry, event: Event): GateCard {
-  const problem = problemOf(entry);
-  return {
-    entry: {
-      id: entry.id,
-      number: entry.number,
-      title: entry.build?.title ?? '',
-      className: entry.eventClass?.name ?? '',
-      classId: entry.classId,
-      status: entry.status,
-      payment: paymentStateOf(entry),
-      feeAmount: entry.feeAmount,
-      currency: entry.currency,
-      checkedInAt: entry.checkedInAt ? entry.checkedInAt.toISOString() : null,
-      cover: coverOf(entry.build),
-    },
-    problem,
-    message: problem ? gateProblemMessage(problem, { number: entry.number, at: entry.checkedInAt ? timeAt(entry.checkedInAt, event) : undefined }) : null,
-    canCheckIn: problem === null,
-    canTakeCash: problem === 'unpaid',
-  };
-}
+const timeAt = (d: Date, event: Event) => formatInZone(d.toISOString(), event.timeZone, { hour: '2-digit', minute: '2-digit' });
 
-const nothing = (problem: GateProblem, showName?: string): GateCard => ({ entry: null, problem, message: gateProblemMessage(problem, { showName }), canCheckIn: false, canTakeCash: false });
+/** What the gate found: an entry of this show (with its car and class), or nothing and why. */
+export type GateFinding = { entry: Entry; problem: GateProblem | null } | { entry: null; problem: GateProblem; otherShowName?: string };
+
+const found = (entry: Entry): GateFinding => ({ entry, problem: gateProblemOf(entry) });
 
 /** A scanned card or a typed number, looked up in this show only. A build not entered here offers nothing but the message. */
-export async function gateLookup(event: Event, what: { code?: string; number?: number }): Promise<GateCard> {
+export async function gateLookup(event: Event, what: { code?: string; number?: number }): Promise<GateFinding> {
   if (what.number !== undefined) {
     const entry = await Entry.findOne({ where: { eventId: event.id, number: what.number }, include: entryInclude });
     if (!entry) throw new NotFoundError(`No entry number ${what.number} in this show.`);
-    return gateCardOf(entry, event);
+    return found(entry);
   }
   const code = buildCodeFromScan(what.code ?? '');
   const build = code ? await Build.findOne({ where: { code }, attributes: ['id'] }) : null;
-  if (!build) return nothing('unknown_code');
+  if (!build) return { entry: null, problem: 'unknown_code' };
   const entry = await Entry.findOne({ where: { eventId: event.id, buildId: build.id }, include: entryInclude });
-  if (entry) return gateCardOf(entry, event);
+  if (entry) return found(entry);
   const elsewhere = await Entry.findOne({
     where: { buildId: build.id, status: { [Op.ne]: 'withdrawn' } },
     include: [{ model: Event, as: 'event', attributes: ['name', 'startsAt'] }],
     order: [[{ model: Event, as: 'event' }, 'startsAt', 'DESC']],
   });
-  return elsewhere ? nothing('other_show', elsewhere.event?.name) : nothing('not_entered');
+  return elsewhere ? { entry: null, problem: 'other_show', otherShowName: elsewhere.event?.name ?? '' } : { entry: null, problem: 'not_entered' };
 }
 
-async function reload(entryId: number, event: Event) {
-  return gateCardOf((await Entry.findByPk(entryId, { include: entryInclude }))!, event);
+async function reload(entryId: number): Promise<GateFinding> {
+  return found((await Entry.findByPk(entryId, { include: entryInclude }))!);
 }
 
 /**
@@ -96,12 +67,12 @@ async function reload(entryId: number, event: Event) {
  * (the fee is recorded as paid by hand in the same transaction); anything else is refused with the
  * reason, and a second check-in changes nothing.
  */
-export async function gateCheckIn(event: Event, number: number, takeCash: boolean, person: Person, now = new Date()): Promise<GateCard> {
-  const entryId = await sequelize.transaction(async (transaction) => {
+export async function gateCheckIn(event: Event, number: number, takeCash: boolean, person: Person, now = new Date(), outer?: Transaction): Promise<GateFinding> {
+  const entryId = await withTransaction(outer, async (transaction) => {
     const locked = await Event.findByPk(event.id, { lock: transaction.LOCK.UPDATE, transaction });
     const entry = await Entry.findOne({ where: { eventId: event.id, number }, lock: transaction.LOCK.UPDATE, transaction });
     if (!locked || !entry) throw new NotFoundError(`No entry number ${number} in this show.`);
-    const problem = problemOf(entry);
+    const problem = gateProblemOf(entry);
     if (problem === 'unpaid' && takeCash) {
       await recordManualPayment(entry, locked, 'Cash taken at the gate.', person, transaction, now);
     } else if (problem) {
@@ -112,15 +83,15 @@ export async function gateCheckIn(event: Event, number: number, takeCash: boolea
     await writeAudit({ eventId: event.id, entryId: entry.id, actorId: person.id, action: 'checked_in', before, after: { status: 'checked_in', cashTaken: problem === 'unpaid' } }, transaction);
     return entry.id;
   });
-  return reload(entryId, event);
+  return reload(entryId);
 }
 
 /**
  * Undo a check-in made less than a minute ago (a wrong car, a slip of the thumb). Cash taken with
  * it is undone too, so the entry is exactly as it was.
  */
-export async function undoCheckIn(event: Event, entryId: number, person: Person, now = new Date()): Promise<GateCard> {
-  await sequelize.transaction(async (transaction) => {
+export async function undoCheckIn(event: Event, entryId: number, person: Person, now = new Date(), outer?: Transaction): Promise<GateFinding> {
+  await withTransaction(outer, async (transaction) => {
     await Event.findByPk(event.id, { lock: transaction.LOCK.UPDATE, transaction });
     const entry = await Entry.findOne({ where: { id: entryId, eventId: event.id }, lock: transaction.LOCK.UPDATE, transaction });
     if (!entry) throw new NotFoundError('No such entry in this show.');
@@ -132,7 +103,7 @@ export async function undoCheckIn(event: Event, entryId: number, person: Person,
     await entry.update({ status: cashTaken ? 'awaiting_payment' : 'confirmed', checkedInAt: null, ...(cashTaken ? { paidAt: null, paidAmount: null, paymentRef: null } : {}) }, { transaction });
     await writeAudit({ eventId: event.id, entryId, actorId: person.id, action: 'check_in_undone', before, after: { status: entry.status, cashReturned: cashTaken } }, transaction);
   });
-  return reload(entryId, event);
+  return reload(entryId);
 }
 
 /** Arrived / expected per class: expected counts every entry with a place (paid or not), arrived those checked in. */

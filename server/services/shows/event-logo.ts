@@ -1,4 +1,5 @@
-import { sequelize } from '../../db/sequelize';
+import type { Transaction } from 'sequelize';
+import { withTransaction } from '../../db/transaction';
 import { AppError, NotFoundError } from '../../errors';
 import { logger } from '../../logger';
 import { Event, type EventLogo } from '../../models/event';
@@ -18,7 +19,7 @@ const filesOf = (logo: EventLogo) => logo.variants.flatMap((v) => (['webp', 'jpg
  * several widths); the files are written first, the show row points at them in a transaction, and
  * the old logo's files go once that has committed.
  */
-export async function setEventLogo(eventId: number, file: PhotoFile, uploaderId: number): Promise<Event> {
+export async function setEventLogo(eventId: number, file: PhotoFile, uploaderId: number, outer?: Transaction): Promise<Event> {
   const [image] = await processAll([file], uploaderId).catch((err: unknown) => {
     // The photo pipeline names its own field; here the form's field is the logo.
     if (err instanceof AppError && err.fields?.photos) throw new AppError(err.status, err.code, 'The logo was refused.', { logo: err.fields.photos });
@@ -29,7 +30,7 @@ export async function setEventLogo(eventId: number, file: PhotoFile, uploaderId:
   const written = await putAll(variantFiles(logo.storageKey, kept));
   let previous: EventLogo | null = null;
   try {
-    const event = await sequelize.transaction(async (transaction) => {
+    const event = await withTransaction(outer, async (transaction) => {
       const found = await Event.findByPk(eventId, { lock: transaction.LOCK.UPDATE, transaction });
       if (!found) throw new NotFoundError('No such show.');
       previous = found.logo ?? null;
@@ -45,9 +46,9 @@ export async function setEventLogo(eventId: number, file: PhotoFile, uploaderId:
   }
 }
 
-export async function removeEventLogo(eventId: number, actorId: number): Promise<Event> {
+export async function removeEventLogo(eventId: number, actorId: number, outer?: Transaction): Promise<Event> {
   let previous: EventLogo | null = null;
-  const event = await sequelize.transaction(async (transaction) => {
+  const event = await withTransaction(outer, async (transaction) => {
     const found = await Event.findByPk(eventId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!found) throw new NotFoundError('No such show.');
     previous = found.logo ?? null;

@@ -26,9 +26,10 @@ describe('bulk numbered cards', () => {
     const judge = await memberOf(s.eventId, 'judge', 'Jude Judgely');
     const gate = await memberOf(s.eventId, 'gate', 'Gail Gately');
     const otherOrganiser = (await showWithClasses()).organiser;
-    for (const who of [judge.client, gate.client, s.owner.client, otherOrganiser.client]) {
-      expect((await who.post(`/api/events/${s.eventId}/card-prints`, {})).status).toBe(403);
-      expect((await who.get(`/api/events/${s.eventId}/card-prints/latest`)).status).toBe(403);
+    // Someone with no role in the show is told it does not exist, as for a missing one.
+    for (const [who, status] of [[judge.client, 403], [gate.client, 403], [s.owner.client, 404], [otherOrganiser.client, 404]] as const) {
+      expect((await who.post(`/api/events/${s.eventId}/card-prints`, {})).status).toBe(status);
+      expect((await who.get(`/api/events/${s.eventId}/card-prints/latest`)).status).toBe(status);
     }
     const anonymous = await apiClient();
     expect((await anonymous.post(`/api/events/${s.eventId}/card-prints`, {})).status).toBe(401);
@@ -52,15 +53,15 @@ describe('bulk numbered cards', () => {
     expect(joined.status).toBe(200);
     expect(joined.body.print.id).toBe(first.body.print.id);
 
-    for (const who of [judge.client, gate.client, s.owner.client]) {
-      expect((await who.get(`/api/events/${s.eventId}/card-prints/${first.body.print.id}`)).status).toBe(403);
-      expect((await who.get(`/api/events/${s.eventId}/card-prints/${first.body.print.id}/cards.pdf`)).status).toBe(403);
+    for (const [who, status] of [[judge.client, 403], [gate.client, 403], [s.owner.client, 404]] as const) {
+      expect((await who.get(`/api/events/${s.eventId}/card-prints/${first.body.print.id}`)).status).toBe(status);
+      expect((await who.get(`/api/events/${s.eventId}/card-prints/${first.body.print.id}/cards.pdf`)).status).toBe(status);
     }
     expect((await s.organiser.client.get(`/api/events/${s.eventId}/card-prints/${first.body.print.id}/cards.pdf`)).status).toBe(409);
     await cardWorker();
     const { print } = await waitForPrint(s.organiser.client, s.eventId, first.body.print.id);
     expect(print.status).toBe('done');
-    for (const who of [judge.client, gate.client, s.owner.client]) expect((await who.get(print.downloadUrl!)).status).toBe(403);
+    for (const [who, status] of [[judge.client, 403], [gate.client, 403], [s.owner.client, 404]] as const) expect((await who.get(print.downloadUrl!)).status).toBe(status);
   });
 
   it('refuses a show or a class with no confirmed entries, and a class of another show, naming the field', async () => {
@@ -172,7 +173,7 @@ describe('the owner’s card for an entry, and the show reminder that attaches i
     expect(readQr(rasterize(res.body as Buffer, 100))?.data).toBe(`http://127.0.0.1:3999/c/${entry.code}`);
 
     const stranger = await signedIn();
-    expect((await stranger.client.get(`/api/entries/${entry.id}/card.pdf`)).status).toBe(403);
+    expect((await stranger.client.get(`/api/entries/${entry.id}/card.pdf`)).status).toBe(404);
     await Entry.update({ status: 'waiting_list', number: null }, { where: { id: s.unpaid.entryId } });
     const waiting = await s.owner.client.get(`/api/entries/${s.unpaid.entryId}/card.pdf`);
     expect(waiting.status).toBe(409);
@@ -183,7 +184,7 @@ describe('the owner’s card for an entry, and the show reminder that attaches i
     await cardWorker();
     const s = await showWithConfirmedEntries([{ title: 'Pinstriped panel van', cls: 0 }], { showName: 'Harbour Lights Show' });
     const entry = s.confirmed[0]!;
-    expect((await s.owner.client.post(`/api/events/${s.eventId}/reminders`)).status).toBe(403);
+    expect((await s.owner.client.post(`/api/events/${s.eventId}/reminders`)).status).toBe(404);
     const sent = await s.organiser.client.post(`/api/events/${s.eventId}/reminders`);
     expect(sent.status).toBe(202);
     expect(sent.body).toEqual({ entrants: 1 });

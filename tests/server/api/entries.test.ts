@@ -133,8 +133,8 @@ describe('capacity and the waiting list', () => {
     expect(trail).toEqual(['offer_lapsed', 'place_offered', 'entry_created']);
   });
 
-  it('the periodic sweep lapses offers nobody read, and a show-wide capacity counts every class', async () => {
-    const { eventId, classIds } = await showWithClasses({ settings: { capacity: 1, entryFee: 0 } });
+  it('the periodic sweep lapses offers (reading them writes nothing), and a show-wide capacity counts every class', async () => {
+    const { eventId, classIds, organiser } = await showWithClasses({ settings: { capacity: 1, entryFee: 0 } });
     const a = await ownerWithBuild();
     const b = await ownerWithBuild();
     const c = await ownerWithBuild();
@@ -145,6 +145,14 @@ describe('capacity and the waiting list', () => {
     await a.client.post(`/api/entries/${ea.id}/withdraw`);
     expect((await Entry.findByPk(eb.id))!.offerExpiresAt).not.toBeNull();
     await Entry.update({ offerExpiresAt: new Date(Date.now() - 1000) }, { where: { id: eb.id } });
+    // Reading the show's entries, as its organiser or as the entrant, changes nothing: no GET writes.
+    const auditBefore = await AuditLine.count({ where: { eventId } });
+    expect((await b.client.get('/api/entries')).status).toBe(200);
+    expect((await organiser.client.get(`/api/events/${eventId}/entry-table`)).status).toBe(200);
+    expect((await organiser.client.get(`/api/events/${eventId}/entries.csv`)).status).toBe(200);
+    expect((await organiser.client.get(`/api/events/${eventId}/entries`)).status).toBe(200);
+    expect((await Entry.findByPk(eb.id))!.status).toBe('waiting_list');
+    expect(await AuditLine.count({ where: { eventId } })).toBe(auditBefore);
     // The minute's scheduled sweep (stored as a schedule; here the job is sent at once) runs with nobody reading the show.
     const queue = jobQueue();
     await queue.start();
@@ -197,10 +205,13 @@ describe('withdrawal, refunds and payment', () => {
     const entry = (await owner.client.post(`/api/events/${eventId}/entries`, { buildId: owner.build.id, classId: classIds[0] })).body.entry;
     const stranger = await signedIn();
     const otherOrganiser = await showWithClasses();
-    expect((await stranger.client.post(`/api/entries/${entry.id}/withdraw`)).status).toBe(403);
-    expect((await otherOrganiser.organiser.client.post(`/api/entries/${entry.id}/withdraw`)).status).toBe(403);
+    // An entry of a show they have no part in does not exist for them, exactly like a missing one.
+    const missing = await stranger.client.post('/api/entries/99999999/withdraw');
+    const foreign = await stranger.client.post(`/api/entries/${entry.id}/withdraw`);
+    expect([foreign.status, foreign.body]).toEqual([404, missing.body]);
+    expect((await otherOrganiser.organiser.client.post(`/api/entries/${entry.id}/withdraw`)).status).toBe(404);
     expect((await stranger.client.get('/api/entries')).body.entries).toEqual([]);
-    expect((await owner.client.get(`/api/events/${eventId}/entries`)).status).toBe(403);
+    expect((await owner.client.get(`/api/events/${eventId}/entries`)).status).toBe(404);
   });
 });
 

@@ -80,7 +80,7 @@ describe('paying an entry fee online', () => {
     const { owner, organiser, entryId } = await paidShowEntry();
     const stranger = await signedIn({ name: 'Someone Else' });
     expect((await organiser.client.post(`/api/entries/${entryId}/checkout`)).status).toBe(403);
-    expect((await stranger.client.post(`/api/entries/${entryId}/checkout`)).status).toBe(403);
+    expect((await stranger.client.post(`/api/entries/${entryId}/checkout`)).status).toBe(404);
     expect((await owner.client.post(`/api/entries/0x${entryId.toString(16)}/checkout`)).status).toBe(400);
     expect((await owner.client.post(`/api/entries/999999999/checkout`)).status).toBe(404);
     expect((await Entry.findByPk(entryId))!.checkoutId).toBeNull();

@@ -73,9 +73,9 @@ describe('the entries table', () => {
     const judge = await memberOf(eventId, 'judge');
     const gate = await memberOf(eventId, 'gate');
     const other = await showWithClasses();
-    for (const who of [judge.client, gate.client, owner.client, other.organiser.client]) {
-      expect((await who.get(`/api/events/${eventId}/entry-table`)).status).toBe(403);
-      expect((await who.get(`/api/events/${eventId}/entries.csv`)).status).toBe(403);
+    for (const [who, status] of [[judge.client, 403], [gate.client, 403], [owner.client, 404], [other.organiser.client, 404]] as const) {
+      expect((await who.get(`/api/events/${eventId}/entry-table`)).status).toBe(status);
+      expect((await who.get(`/api/events/${eventId}/entries.csv`)).status).toBe(status);
     }
     const { apiClient } = await import('../../support/api-client');
     expect((await (await apiClient()).get(`/api/events/${eventId}/entry-table`)).status).toBe(401);
@@ -161,13 +161,16 @@ describe('actions on an entry, each with an audit line', () => {
     const gate = await memberOf(eventId, 'gate');
     const judge = await memberOf(eventId, 'judge');
     const other = await showWithClasses();
-    for (const who of [gate.client, judge.client, owner.client, other.organiser.client]) {
-      expect((await who.post(`/api/entries/${entry.id}/class`, { classId: classIds[1]! })).status).toBe(403);
-      expect((await who.post(`/api/entries/${entry.id}/mark-paid`, { note: 'cash' })).status).toBe(403);
-      expect((await who.post(`/api/entries/${waiting.entry.id}/move-up`)).status).toBe(403);
-      expect((await who.get(`/api/entries/${entry.id}/audit`)).status).toBe(403);
+    // People of the show are refused (403); for another show's organiser the entry does not exist (404).
+    for (const [who, status] of [[gate.client, 403], [judge.client, 403], [owner.client, 403], [other.organiser.client, 404]] as const) {
+      expect((await who.post(`/api/entries/${entry.id}/class`, { classId: classIds[1]! })).status).toBe(status);
+      expect((await who.post(`/api/entries/${entry.id}/mark-paid`, { note: 'cash' })).status).toBe(status);
+      expect((await who.get(`/api/entries/${entry.id}/audit`)).status).toBe(status);
     }
-    for (const who of [gate.client, judge.client, other.organiser.client]) expect((await who.post(`/api/entries/${entry.id}/withdraw`)).status).toBe(403);
+    for (const [who, status] of [[gate.client, 403], [judge.client, 403], [owner.client, 404], [other.organiser.client, 404]] as const) {
+      expect((await who.post(`/api/entries/${waiting.entry.id}/move-up`)).status).toBe(status);
+    }
+    for (const [who, status] of [[gate.client, 403], [judge.client, 403], [other.organiser.client, 404]] as const) expect((await who.post(`/api/entries/${entry.id}/withdraw`)).status).toBe(status);
     expect(await Entry.findByPk(entry.id)).toMatchObject({ classId: classIds[0]!, status: 'awaiting_payment', paidAt: null });
     expect(await AuditLine.count({ where: { entryId: entry.id } })).toBe(1);
   });

@@ -62,9 +62,9 @@ describe('a show’s logo', () => {
     const { eventId } = await showWithClasses();
     const judge = await memberOf(eventId, 'judge', 'Jo Judgewell');
     const stranger = await signedIn({ mayOrganise: true });
-    for (const client of [judge.client, stranger.client]) {
-      expect((await sendLogo(client, eventId, await smallPng())).status).toBe(403);
-      expect((await client.delete(`/api/events/${eventId}/logo`)).status).toBe(403);
+    for (const [client, status] of [[judge.client, 403], [stranger.client, 404]] as const) {
+      expect((await sendLogo(client, eventId, await smallPng())).status).toBe(status);
+      expect((await client.delete(`/api/events/${eventId}/logo`)).status).toBe(status);
     }
     const anonymous = await request(testApp()).post(`/api/events/${eventId}/logo`).attach('logo', await smallPng(), 'logo.png');
     expect([401, 403]).toContain(anonymous.status);

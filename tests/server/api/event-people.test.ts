@@ -87,7 +87,7 @@ describe('people of a show: invitations', () => {
     await co.client.post(`/api/invitations/${linkToken((await waitForMail(co.email)).text)}/accept`);
     expect((await co.client.get(`/api/events/${eventId}/people`)).status).toBe(200);
     expect((await organiser.client.delete(`/api/events/${eventId}/members/${organiser.user.id}/organiser`)).status).toBe(204);
-    expect((await organiser.client.get(`/api/events/${eventId}`)).status).toBe(403);
+    expect((await organiser.client.get(`/api/events/${eventId}`)).status).toBe(404);
     expect((await co.client.delete(`/api/events/${eventId}/members/${co.user.id}/organiser`)).status).toBe(409);
   });
 });

@@ -156,21 +156,23 @@ describe('classes and the judging sheet', () => {
 });
 
 describe('one show’s organiser has no say in another show', () => {
-  it('answers 403 for another show’s settings, classes, sheet, people, entries, audit and lifecycle', async () => {
+  it('finds no such show behind another show’s settings, classes, sheet, people, entries, audit and lifecycle (404, as for a missing one)', async () => {
     const a = await showWithClasses();
     const b = await showWithClasses();
     const c = a.organiser.client;
     const id = b.eventId;
-    expect((await c.get(`/api/events/${id}`)).status).toBe(403);
-    expect((await c.patch(`/api/events/${id}`, { name: 'Mine' })).status).toBe(403);
-    expect((await c.post(`/api/events/${id}/classes`, { name: 'Mine' })).status).toBe(403);
-    expect((await c.patch(`/api/events/${id}/classes/${b.classIds[0]}`, { name: 'Mine' })).status).toBe(403);
-    expect((await c.put(`/api/events/${id}/criteria`, { criteria: [] })).status).toBe(403);
-    expect((await c.get(`/api/events/${id}/people`)).status).toBe(403);
-    expect((await c.post(`/api/events/${id}/invitations`, { email: 'x@example.test', role: 'judge' })).status).toBe(403);
-    expect((await c.get(`/api/events/${id}/entries`)).status).toBe(403);
-    expect((await c.get(`/api/events/${id}/audit`)).status).toBe(403);
-    expect((await c.post(`/api/events/${id}/lifecycle`, { action: 'close_registration' })).status).toBe(403);
+    const missing = await c.get('/api/events/999999999');
+    const foreign = await c.get(`/api/events/${id}`);
+    expect([foreign.status, foreign.body]).toEqual([404, missing.body]);
+    expect((await c.patch(`/api/events/${id}`, { name: 'Mine' })).status).toBe(404);
+    expect((await c.post(`/api/events/${id}/classes`, { name: 'Mine' })).status).toBe(404);
+    expect((await c.patch(`/api/events/${id}/classes/${b.classIds[0]}`, { name: 'Mine' })).status).toBe(404);
+    expect((await c.put(`/api/events/${id}/criteria`, { criteria: [] })).status).toBe(404);
+    expect((await c.get(`/api/events/${id}/people`)).status).toBe(404);
+    expect((await c.post(`/api/events/${id}/invitations`, { email: 'x@example.test', role: 'judge' })).status).toBe(404);
+    expect((await c.get(`/api/events/${id}/entries`)).status).toBe(404);
+    expect((await c.get(`/api/events/${id}/audit`)).status).toBe(404);
+    expect((await c.post(`/api/events/${id}/lifecycle`, { action: 'close_registration' })).status).toBe(404);
     expect((await c.get(`/api/events`)).body.events.map((e: { id: number }) => e.id)).not.toContain(id);
     // A class of another show cannot be reached through one's own show either.
     expect((await c.patch(`/api/events/${a.eventId}/classes/${b.classIds[0]}`, { name: 'Mine' })).status).toBe(404);

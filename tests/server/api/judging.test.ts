@@ -44,7 +44,7 @@ describe('judges and their classes', () => {
     const empty = await show.organiser.client.put(`/api/events/${show.eventId}/judges/${judge.user.id}/classes`, { allClasses: false, classIds: [] });
     expect(empty.body.error.fields.classIds).toMatch(/at least one class/);
     expect((await judge.client.put(`/api/events/${show.eventId}/judges/${judge.user.id}/classes`, { allClasses: true })).status).toBe(403);
-    expect((await other.organiser.client.get(`/api/events/${show.eventId}/judges`)).status).toBe(403);
+    expect((await other.organiser.client.get(`/api/events/${show.eventId}/judges`)).status).toBe(404);
     expect((await (await apiClient()).get(`/api/events/${show.eventId}/judges`)).status).toBe(401);
   });
 });
@@ -107,9 +107,9 @@ describe('scoring', () => {
     const otherJudge = await judgeOf(other.eventId);
     const body = { scores: [scoreItem(show.entries[0]!.id, show.criteria[0]!.id, 3)] };
     expect((await show.organiser.client.post(`/api/events/${show.eventId}/scores`, body)).status).toBe(403);
-    expect((await show.owner.client.post(`/api/events/${show.eventId}/scores`, body)).status).toBe(403);
-    expect((await otherJudge.client.post(`/api/events/${show.eventId}/scores`, body)).status).toBe(403);
-    expect((await otherJudge.client.get(`/api/events/${show.eventId}/judging/mine`)).status).toBe(403);
+    expect((await show.owner.client.post(`/api/events/${show.eventId}/scores`, body)).status).toBe(404);
+    expect((await otherJudge.client.post(`/api/events/${show.eventId}/scores`, body)).status).toBe(404);
+    expect((await otherJudge.client.get(`/api/events/${show.eventId}/judging/mine`)).status).toBe(404);
     expect((await (await apiClient()).post(`/api/events/${show.eventId}/scores`, body)).status).toBe(401);
     expect(await Score.count({ where: { eventId: show.eventId } })).toBe(0);
   });

@@ -260,7 +260,7 @@ describe('the organiser', () => {
     const stranger = await signedIn();
     const anonymous = await apiClient();
     const hash = 'a'.repeat(64);
-    for (const [who, status] of [[judge.client, 403], [show.owner.client, 403], [otherOrganiser.client, 403], [stranger.client, 403], [anonymous, 401]] as const) {
+    for (const [who, status] of [[judge.client, 403], [show.owner.client, 404], [otherOrganiser.client, 404], [stranger.client, 404], [anonymous, 401]] as const) {
       expect((await who.get(show.base)).status).toBe(status);
       expect((await who.post(`${show.base}/open`)).status).toBe(status);
       expect((await who.post(`${show.base}/close`)).status).toBe(status);

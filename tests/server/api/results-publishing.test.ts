@@ -29,7 +29,7 @@ describe('publishing results', () => {
     const step = { action: 'publish_results' };
     const url = `/api/events/${show.eventId}/lifecycle`;
     expect((await show.judges[0]!.client.post(url, step)).status).toBe(403);
-    expect((await show.car('Deuce').owner.client.post(url, step)).status).toBe(403);
+    expect((await show.car('Deuce').owner.client.post(url, step)).status).toBe(404);
     expect((await (await apiClient()).post(url, step)).status).toBe(401);
     expect((await (await apiClient()).get(`/api/public/events/${show.slug}`)).body.event.results).toBeNull();
 
@@ -120,7 +120,7 @@ describe('an owner’s own scores', () => {
     expect(after.body.results).toMatchObject({ place: 1, shared: true, total: '29.00', sheetsCounted: 2 });
     expect(after.body.results.criteria[0]).toEqual({ name: 'Paint and body', maxPoints: 10, weight: 2, mean: '8.00', judges: [8, 8] });
     expect(after.body.results.comments).toEqual([{ criterion: 'Paint and body', text: 'Deep, even black paint' }]);
-    expect((await show.car('Merc').owner.client.get(url)).status).toBe(403);
+    expect((await show.car('Merc').owner.client.get(url)).status).toBe(404);
     expect((await (await apiClient()).get(url)).status).toBe(401);
   });
 });
@@ -190,7 +190,7 @@ describe('the score export', () => {
     await show.score(0, 'Merc', [10, 9, 5]);
     const url = `/api/events/${show.eventId}/results/scores.csv`;
     expect((await show.judges[0]!.client.get(url)).status).toBe(403);
-    expect((await show.car('Deuce').owner.client.get(url)).status).toBe(403);
+    expect((await show.car('Deuce').owner.client.get(url)).status).toBe(404);
     const res = await show.organiser.client.get(url).buffer(true).parse((r, cb) => {
       const chunks: Buffer[] = [];
       r.on('data', (c: Buffer) => chunks.push(c));
@@ -266,6 +266,6 @@ describe('result rules', () => {
     expect((await show.organiser.client.get(url)).body.rules).toEqual({ ...RULES, shareCommentsWithEntrants: false, trimFromSheets: 5, printPaper: 'a4' });
     expect((await show.judges[0]!.client.put(url, RULES)).status).toBe(403);
     const stranger = await signedIn();
-    expect((await stranger.client.get(url)).status).toBe(403);
+    expect((await stranger.client.get(url)).status).toBe(404);
   });
 });

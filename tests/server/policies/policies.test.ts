@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { can as canUser, authorizeUser } from '@server/policies/user';
 import { can as canMail } from '@server/policies/mail';
-import { can as canEvent } from '@server/policies/event';
+import { canEvent } from '@server/policies/event';
 import { hasEventRole, type Actor } from '@server/policies/actor';
 import { ForbiddenError, UnauthenticatedError } from '@server/errors';
 

@@ -1,0 +1,38 @@
+import type { ShowResults } from '@shared/calc/results';
+import type { ShowResultRules } from '@shared/schemas/judging';
+import type { ResultsSnapshot } from '@shared/schemas/results';
+import type { Event } from '../../models/event';
+import { loadEventDetail } from '../shows/events';
+import { computeShowResults, rulesOf } from './results';
+import { listTieBreaks } from './tie-breaks';
+import { loadPublishedResults } from './published-results';
+
+export type ResultsReviewData = {
+  results: ShowResults;
+  cars: Awaited<ReturnType<typeof computeShowResults>>['cars'];
+  criteria: Map<number, string>;
+  classNames: Map<number, string>;
+  tieBreaks: Awaited<ReturnType<typeof listTieBreaks>>;
+  published: ResultsSnapshot | null;
+  rules: ShowResultRules;
+};
+
+/**
+ * What the organiser reviews before publishing: the results as they stand, with the names of the
+ * criteria and classes and the ties ordered by hand; once published, what was published.
+ */
+export async function loadResultsReview(event: Event): Promise<ResultsReviewData> {
+  const detail = await loadEventDetail(event.id);
+  const { results, cars } = await computeShowResults(event.id);
+  const tieBreaks = await listTieBreaks(event.id);
+  const published = await loadPublishedResults(event.id);
+  return {
+    results,
+    cars,
+    criteria: new Map((detail.criteria ?? []).map((c) => [c.id, c.name])),
+    classNames: new Map((detail.classes ?? []).map((c) => [c.id, c.name])),
+    tieBreaks,
+    published,
+    rules: published ? published.rules : rulesOf(event),
+  };
+}
