@@ -16,8 +16,13 @@ export type FakePaymentServiceOptions = {
   apiVersion: string;
 };
 
+/** How the fake's API answers: as the service does, not at all (connections dropped), or never (a hang). */
+export type FakeApiState = 'up' | 'down' | 'hanging';
+
 export type FakePaymentService = {
   url: string;
+  /** Test-only: set `state` to make the API calls fail or hang; the pay pages keep working. */
+  control: { state: FakeApiState };
   host: string;
   port: number;
   store: FakeStore;
@@ -39,7 +44,13 @@ export async function startFakePaymentService(options: FakePaymentServiceOptions
   let base = '';
   const webhooks = webhookSender(options.webhookUrl, options.webhookSecret, options.apiVersion);
 
+  const control: { state: FakeApiState } = { state: 'up' };
   const api = express.Router();
+  api.use((req, _res, next) => {
+    // A service that is down drops the connection; one that hangs never answers (close() ends those sockets).
+    if (control.state === 'down') req.socket.destroy();
+    else if (control.state === 'up') next();
+  });
   api.use((req, res, next) => {
     if (req.get('authorization') !== `Bearer ${options.secretKey}`) {
       res.status(401).json({ error: { type: 'invalid_request_error', message: 'Invalid API Key provided.' } });
@@ -142,6 +153,7 @@ export async function startFakePaymentService(options: FakePaymentServiceOptions
   base = `http://${host}:${port}`;
   return {
     url: base,
+    control,
     host,
     port,
     store,

@@ -10,7 +10,7 @@ describe('payments configuration', () => {
     const payments = loadConfig(base).payments;
     expect(payments.mode).toBe('fake');
     expect(payments.secretKey).toBe(FAKE_PAYMENTS_KEY);
-    expect(paymentsClientOptions(payments, { host: '127.0.0.1', port: 41234 })).toMatchObject({ host: '127.0.0.1', port: 41234, protocol: 'http', maxNetworkRetries: 0 });
+    expect(paymentsClientOptions(payments, { host: '127.0.0.1', port: 41234 })).toMatchObject({ host: '127.0.0.1', port: 41234, protocol: 'http', maxNetworkRetries: 2, timeout: 4000 });
     expect(() => paymentsClientOptions(payments, undefined)).toThrow(/fake payment service is not running/);
   });
 
