@@ -46,6 +46,9 @@ const EnvSchema = z.object({
   STRIPE_SECRET_KEY: z.string().optional().transform((v) => v || undefined),
   STRIPE_WEBHOOK_SECRET: z.string().optional().transform((v) => v || undefined),
   PAYMENTS_FAKE_PORT: z.coerce.number().int().min(0).max(65535).default(12111),
+  PAYMENTS_ONLINE: bool.default(true),
+  PAYMENTS_TIMEOUT_MS: z.coerce.number().int().min(50).max(60_000).default(4000),
+  PAYMENTS_NETWORK_RETRIES: z.coerce.number().int().min(0).max(5).default(2),
   PASSWORD_HASH_MEMORY_KIB: z.coerce.number().int().min(1024).max(4_194_304).optional(),
   PASSWORD_HASH_PASSES: z.coerce.number().int().min(1).max(20).optional(),
 });
@@ -59,15 +62,25 @@ const TEST_PASSWORD_HASH = { memoryKiB: 1024, passes: 1, lanes: 1 } as const;
 
 export type Config = ReturnType<typeof loadConfig>;
 
-/** Secret key and webhook secret of the local fake payment service (it is ours and on loopback only). */
+/** Secret key of the local fake payment service (it is ours and on loopback only). */
 export const FAKE_PAYMENTS_KEY = 'sk_test_placard_local_fake';
-export const FAKE_WEBHOOK_SECRET = 'whsec_placard_local_fake_signing_secret';
 
-/** A real key talks to the hosted payment service; without one the local fake stands in. */
-function paymentsConfig(secretKey: string | undefined, webhookSecret: string | undefined, fakePort: number) {
-  return secretKey
-    ? { mode: 'hosted' as const, secretKey, webhookSecret: webhookSecret!, fakePort }
-    : { mode: 'fake' as const, secretKey: FAKE_PAYMENTS_KEY, webhookSecret: FAKE_WEBHOOK_SECRET, fakePort };
+type PaymentsEnv = { STRIPE_SECRET_KEY?: string | undefined; STRIPE_WEBHOOK_SECRET?: string | undefined; PAYMENTS_FAKE_PORT: number; PAYMENTS_ONLINE: boolean; PAYMENTS_TIMEOUT_MS: number; PAYMENTS_NETWORK_RETRIES: number };
+
+/**
+ * A real key talks to the hosted payment service; without one the local fake stands in, outside
+ * production only. Its signing secret is random per start: a secret written in the source would let
+ * anyone sign their own webhook. `PAYMENTS_ONLINE=false` switches online payment off (fees in person).
+ */
+function paymentsConfig(e: PaymentsEnv, production: boolean) {
+  // How long one SDK call may wait, and how often the SDK tries again on its own (each write carries an idempotency key).
+  const calls = { fakePort: e.PAYMENTS_FAKE_PORT, timeoutMs: e.PAYMENTS_TIMEOUT_MS, networkRetries: e.PAYMENTS_NETWORK_RETRIES };
+  if (!e.PAYMENTS_ONLINE) return { mode: 'off' as const, secretKey: '', webhookSecret: '', ...calls };
+  if (e.STRIPE_SECRET_KEY) return { mode: 'hosted' as const, secretKey: e.STRIPE_SECRET_KEY, webhookSecret: e.STRIPE_WEBHOOK_SECRET!, ...calls };
+  if (production) {
+    throw new Error('Invalid environment:\n  STRIPE_SECRET_KEY: required in production with STRIPE_WEBHOOK_SECRET, or set PAYMENTS_ONLINE=false to take fees in person only');
+  }
+  return { mode: 'fake' as const, secretKey: FAKE_PAYMENTS_KEY, webhookSecret: `whsec_fake_${randomBytes(24).toString('hex')}`, ...calls };
 }
 
 const testStorageDir = () => path.join(os.tmpdir(), `placard-test-uploads-${process.pid}-${randomBytes(4).toString('hex')}`);
@@ -151,7 +164,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     /** Mail that fails is retried after about delay × 2^n seconds (with jitter), up to the limit, then kept aside. */
     mailRetryDelaySeconds: e.MAIL_RETRY_DELAY_SECONDS,
     mailRetryLimit: e.MAIL_RETRY_LIMIT,
-    payments: paymentsConfig(e.STRIPE_SECRET_KEY, e.STRIPE_WEBHOOK_SECRET, e.PAYMENTS_FAKE_PORT),
+    payments: paymentsConfig(e, production),
     /** argon2id's cost for new password hashes (stored hashes carry their own). */
     passwordHash: { memoryKiB: e.PASSWORD_HASH_MEMORY_KIB ?? hashBase.memoryKiB, passes: e.PASSWORD_HASH_PASSES ?? hashBase.passes, lanes: hashBase.lanes },
   };

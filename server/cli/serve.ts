@@ -42,7 +42,9 @@ const fakePayments =
 const paymentsLine =
   config.payments.mode === 'hosted'
     ? '  Payments: the hosted payment service (STRIPE_SECRET_KEY is set)'
-    : `  Payments: the local fake payment service on http://127.0.0.1:${fakePayments?.port ?? config.payments.fakePort} (no STRIPE_SECRET_KEY: no money moves)`;
+    : config.payments.mode === 'off'
+      ? '  Payments: online payment is switched off (PAYMENTS_ONLINE=false): fees are taken in person'
+      : `  Payments: the local fake payment service on http://127.0.0.1:${fakePayments?.port ?? config.payments.fakePort} (no STRIPE_SECRET_KEY: no money moves)`;
 const lines = [
   '',
   `  Placard is running on ${url}`,

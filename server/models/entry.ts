@@ -3,6 +3,7 @@ import type { EntryStatus } from '@shared/constants';
 import type { Build } from './build';
 import type { Event } from './event';
 import type { EventClass } from './event-class';
+import type { PaymentIssue } from './payment-issue';
 import type { User } from './user';
 
 /** A build entered in a show. Money in integer minor units of `currency`. */
@@ -26,6 +27,8 @@ export class Entry extends Model<InferAttributes<Entry>, InferCreationAttributes
   /** The refund the payment service made after a withdrawal; a refund of a cash payment is the organiser's to hand back. */
   declare refundRef: CreationOptional<string | null>;
   declare refundedAt: CreationOptional<Date | null>;
+  /** What that refund gave back (minor units); never more than was paid. */
+  declare refundedAmount: CreationOptional<number | null>;
   declare withdrawnAt: CreationOptional<Date | null>;
   declare waitlistedAt: CreationOptional<Date | null>;
   declare offerExpiresAt: CreationOptional<Date | null>;
@@ -37,6 +40,8 @@ export class Entry extends Model<InferAttributes<Entry>, InferCreationAttributes
   declare event?: NonAttribute<Event>;
   declare eventClass?: NonAttribute<EventClass>;
   declare owner?: NonAttribute<User>;
+  /** Loaded for the organiser's table and CSV: payments that need their attention. */
+  declare paymentIssues?: NonAttribute<PaymentIssue[]>;
 
   static initModel(sequelize: Sequelize) {
     Entry.init(
@@ -58,6 +63,7 @@ export class Entry extends Model<InferAttributes<Entry>, InferCreationAttributes
         checkoutAttempt: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         refundRef: { type: DataTypes.STRING(255), allowNull: true },
         refundedAt: { type: DataTypes.DATE, allowNull: true },
+        refundedAmount: { type: DataTypes.INTEGER, allowNull: true },
         withdrawnAt: { type: DataTypes.DATE, allowNull: true },
         waitlistedAt: { type: DataTypes.DATE, allowNull: true },
         offerExpiresAt: { type: DataTypes.DATE, allowNull: true },

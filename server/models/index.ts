@@ -24,8 +24,9 @@ import { CardPrint } from './card-print';
 import { Vote } from './vote';
 import { ManualTieBreak } from './manual-tie-break';
 import { PublishedResults } from './published-results';
+import { PaymentIssue } from './payment-issue';
 
-for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote, ManualTieBreak, PublishedResults]) {
+for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote, ManualTieBreak, PublishedResults, PaymentIssue]) {
   model.initModel(sequelize);
 }
 

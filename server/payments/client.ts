@@ -12,16 +12,23 @@ export function pointPaymentsAtFake(address: FakeAddress | undefined): void {
   client = undefined;
 }
 
+/** The next call makes a new client from config (a test that lowers the timeout calls this). */
+export function resetPaymentsClient(): void {
+  client = undefined;
+}
+
 /**
  * The SDK's options: with a real key, the hosted service as the SDK knows it; without one, the fake
- * on loopback, by host, port and protocol. Nothing else in the product knows which it is.
+ * on loopback, by host, port and protocol. Nothing else in the product knows which it is. Every call
+ * waits at most `timeoutMs` and is tried again `networkRetries` times by the SDK itself (safe: every
+ * write carries an idempotency key), so an entrant never waits long on a service that hangs.
  */
 export function paymentsClientOptions(payments: Config['payments'] = config.payments, fake: FakeAddress | undefined = fakeAddress): Stripe.StripeConfig {
-  // The SDK retries network failures itself, safely, because every write carries an idempotency key.
-  const common = { telemetry: false, timeout: 20_000 } as const;
-  if (payments.mode === 'hosted') return { ...common, maxNetworkRetries: 2 };
+  const common = { telemetry: false, timeout: payments.timeoutMs, maxNetworkRetries: payments.networkRetries } as const;
+  if (payments.mode === 'off') throw new Error('Payments: online payment is switched off (PAYMENTS_ONLINE=false).');
+  if (payments.mode === 'hosted') return common;
   if (!fake) throw new Error('Payments: no STRIPE_SECRET_KEY is set and the local fake payment service is not running.');
-  return { ...common, maxNetworkRetries: 0, host: fake.host, port: fake.port, protocol: 'http' };
+  return { ...common, host: fake.host, port: fake.port, protocol: 'http' };
 }
 
 export function paymentsClient(): Stripe {
@@ -29,7 +36,16 @@ export function paymentsClient(): Stripe {
   return client;
 }
 
-/** Webhook signatures are checked offline, with the signing secret of the endpoint. */
-export function verifyWebhook(rawBody: Buffer, signature: string, secret = config.payments.webhookSecret): Stripe.Event {
-  return Stripe.webhooks.constructEvent(rawBody, signature, secret);
+/** Signatures older than this, or stamped further ahead than this, are refused (the SDK's own default, 300 s). */
+export const SIGNATURE_TOLERANCE_SECONDS = Stripe.webhooks.DEFAULT_TOLERANCE;
+
+/**
+ * Webhook signatures are checked offline, with the signing secret of the endpoint. The SDK refuses
+ * a stamp older than the tolerance but not one from the future, so the future side is checked here.
+ */
+export function verifyWebhook(rawBody: Buffer, signature: string, secret = config.payments.webhookSecret, now = Date.now()): Stripe.Event {
+  const event = Stripe.webhooks.constructEvent(rawBody, signature, secret, SIGNATURE_TOLERANCE_SECONDS, undefined, now);
+  const stamp = Number(/(?:^|,)t=(\d+)/.exec(signature)?.[1]);
+  if (!Number.isFinite(stamp) || stamp - Math.floor(now / 1000) > SIGNATURE_TOLERANCE_SECONDS) throw new Error('Timestamp outside the tolerance zone');
+  return event;
 }

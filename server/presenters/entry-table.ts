@@ -1,5 +1,19 @@
-import { paymentStateOf, type EntryTableRow } from '@shared/schemas/show-day';
+import { paymentStateOf, type EntryTableRow, type PaymentIssueRow, type RefundSent } from '@shared/schemas/show-day';
 import type { Entry } from '../models/entry';
+import type { PaymentIssue } from '../models/payment-issue';
+
+const refundOf = (r: { refundAmount: number | null; refundRef: string | null; refundedAt: Date | null }): RefundSent | null =>
+  r.refundRef && r.refundedAt && r.refundAmount !== null ? { amount: r.refundAmount, at: r.refundedAt.toISOString(), ref: r.refundRef } : null;
+
+const presentIssue = (i: PaymentIssue): PaymentIssueRow => ({
+  id: i.id,
+  reason: i.reason,
+  amount: i.amount,
+  currency: i.currency,
+  checkoutId: i.checkoutId,
+  at: i.createdAt.toISOString(),
+  refund: refundOf(i),
+});
 
 /**
  * A row of the organiser's entries table. It carries the entrant's e-mail and phone and the
@@ -21,6 +35,8 @@ export function presentEntryTableRow(e: Entry, places: Map<number, number>): Ent
     feeAmount: e.feeAmount,
     paidAmount: e.paidAmount,
     refundDue: e.refundDue,
+    refund: refundOf({ refundAmount: e.refundedAmount, refundRef: e.refundRef, refundedAt: e.refundedAt }),
+    paymentIssues: (e.paymentIssues ?? []).map(presentIssue),
     currency: e.currency,
     paymentRef: e.paymentRef,
     checkedInAt: e.checkedInAt ? e.checkedInAt.toISOString() : null,

@@ -26,16 +26,44 @@ export type EntryTableQuery = z.infer<typeof EntryTableQuerySchema>;
 export const EntryExportQuerySchema = EntryTableQuerySchema.omit({ page: true, pageSize: true });
 export type EntryExportQuery = z.infer<typeof EntryExportQuerySchema>;
 
-export const PAYMENT_STATES = ['free', 'unpaid', 'paid', 'refund_due'] as const;
+export const PAYMENT_STATES = ['free', 'unpaid', 'paid', 'refund_due', 'refunded'] as const;
 export type PaymentState = (typeof PAYMENT_STATES)[number];
-export const PAYMENT_STATE_LABELS: Record<PaymentState, string> = { free: 'Free', unpaid: 'Unpaid', paid: 'Paid', refund_due: 'Refund due' };
+export const PAYMENT_STATE_LABELS: Record<PaymentState, string> = { free: 'Free', unpaid: 'Unpaid', paid: 'Paid', refund_due: 'Refund due', refunded: 'Refunded' };
 
-/** Pure: what a person reads in the payment column. */
-export function paymentStateOf(e: { feeAmount: number; paidAt: string | Date | null; refundDue: number | null; status: string }): PaymentState {
-  if (e.refundDue && e.refundDue > 0) return 'refund_due';
+/** Pure: what a person reads in the payment column. A refund the payment service sent is done, not due. */
+export function paymentStateOf(e: { feeAmount: number; paidAt: string | Date | null; refundDue: number | null; refundedAt?: string | Date | null; status: string }): PaymentState {
+  if (e.refundDue && e.refundDue > 0) return e.refundedAt ? 'refunded' : 'refund_due';
   if (e.paidAt) return 'paid';
   return e.feeAmount === 0 ? 'free' : 'unpaid';
 }
+
+/** Why a payment that reached an entry did not simply pay its fee. */
+export const PAYMENT_ISSUE_REASONS = ['wrong_amount', 'wrong_currency', 'foreign_checkout', 'paid_twice'] as const;
+export type PaymentIssueReason = (typeof PAYMENT_ISSUE_REASONS)[number];
+export const PAYMENT_ISSUE_LABELS: Record<PaymentIssueReason, string> = {
+  wrong_amount: 'Paid an amount other than the fee',
+  wrong_currency: 'Paid in another currency',
+  foreign_checkout: 'Paid through a checkout not opened for this entry',
+  paid_twice: 'Paid again after it was already paid: refunded in full',
+};
+/** The short label of the entries table's payment cell. */
+export const PAYMENT_ISSUE_SHORT_LABEL = 'Check payment';
+
+/** A refund the payment service sent: how much, when, and its reference (one per payment, ever). */
+export const RefundSentSchema = z.object({ amount: z.number(), at: z.string(), ref: z.string() });
+export type RefundSent = z.infer<typeof RefundSentSchema>;
+
+export const PaymentIssueRowSchema = z.object({
+  id: z.number(),
+  reason: z.enum(PAYMENT_ISSUE_REASONS),
+  /** What the payment service took, in minor units of its currency (which may not be the fee's). */
+  amount: z.number(),
+  currency: z.string(),
+  checkoutId: z.string(),
+  at: z.string(),
+  refund: RefundSentSchema.nullable(),
+});
+export type PaymentIssueRow = z.infer<typeof PaymentIssueRowSchema>;
 
 export const EntryTableRowSchema = z.object({
   id: z.number(),
@@ -51,6 +79,10 @@ export const EntryTableRowSchema = z.object({
   feeAmount: z.number(),
   paidAmount: z.number().nullable(),
   refundDue: z.number().nullable(),
+  /** The entry's refund once the payment service sent it; null while due (or for cash, the organiser's to hand back). */
+  refund: RefundSentSchema.nullable(),
+  /** Payments of this entry that need the organiser's attention, oldest first. */
+  paymentIssues: z.array(PaymentIssueRowSchema),
   currency: z.string(),
   paymentRef: z.string().nullable(),
   checkedInAt: z.string().nullable(),
@@ -145,6 +177,8 @@ export const AUDIT_ACTION_LABELS: Record<string, string> = {
   check_in_undone: 'Check-in undone',
   checkout_opened: 'Went to pay online',
   refund_sent: 'Refund sent by the payment service',
+  payment_needs_attention: 'A payment needs attention',
+  checkout_expired: 'Online checkout closed',
   logo_changed: 'Logo changed',
   logo_removed: 'Logo removed',
   result_rules_changed: 'Result rules changed',

@@ -9,6 +9,7 @@ import { writeAudit } from '../audit/audit';
 import { mailEntryReceived, mailPaymentConfirmed } from './entry-mail';
 import { hasRoom, offerFreedPlaces } from './waitlist';
 import { withTransaction } from '../../db/transaction';
+import { expireCheckoutPaidElsewhere } from './entry-payments';
 
 type Person = { id: number };
 
@@ -53,6 +54,9 @@ export async function recordManualPayment(entry: Entry, event: Event, note: stri
   await entry.update({ status: 'confirmed', paymentRef: `manual:${randomUUID()}`, paidAt: now, paidAmount: entry.feeAmount }, { transaction });
   await writeAudit({ eventId: event.id, entryId: entry.id, actorId: person.id, action: 'marked_paid', before, after: { status: 'confirmed', paymentRef: entry.paymentRef, paidAmount: entry.paidAmount, note } }, transaction);
   await mailPaymentConfirmed(entry, event, transaction);
+  // The online checkout, if one is open, must not take the fee a second time: closed once this commits,
+  // without holding up the answer (the gate works on when the payment service does not).
+  if (entry.checkoutId) transaction.afterCommit(() => void expireCheckoutPaidElsewhere(entry));
 }
 
 export async function markEntryPaid(entryId: number, note: string, person: Person, now = new Date(), outer?: Transaction): Promise<Entry> {

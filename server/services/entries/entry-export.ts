@@ -1,7 +1,7 @@
 import { stringify } from 'csv-stringify/sync';
 import { ENTRY_STATUS_LABELS } from '@shared/constants';
 import { currencyDecimals } from '@shared/calc/money';
-import { PAYMENT_STATE_LABELS, type EntryTableRow } from '@shared/schemas/show-day';
+import { PAYMENT_ISSUE_LABELS, PAYMENT_STATE_LABELS, type EntryTableRow } from '@shared/schemas/show-day';
 
 const major = (minor: number | null, currency: string) => (minor === null ? null : minor / 10 ** currencyDecimals(currency));
 
@@ -27,6 +27,10 @@ export function entriesCsv(rows: EntryTableRow[]): string {
       fee: major(r.feeAmount, r.currency),
       paid: major(r.paidAmount, r.currency),
       refundDue: major(r.refundDue, r.currency),
+      refunded: r.refund ? major(r.refund.amount, r.currency) : null,
+      refundedAt: r.refund?.at ?? '',
+      refundRef: r.refund?.ref ?? '',
+      attention: r.paymentIssues.map((i) => `${PAYMENT_ISSUE_LABELS[i.reason]} (${major(i.amount, i.currency)} ${i.currency}${i.refund ? ', refunded' : ''})`).join('; '),
       checkedInAt: r.checkedInAt ?? '',
       waitingPlace: r.waitingPosition,
       vin: r.privateFields.vin ?? '',
@@ -50,6 +54,10 @@ export function entriesCsv(rows: EntryTableRow[]): string {
         { key: 'fee', header: 'Fee' },
         { key: 'paid', header: 'Paid' },
         { key: 'refundDue', header: 'Refund due' },
+        { key: 'refunded', header: 'Refunded' },
+        { key: 'refundedAt', header: 'Refunded at (UTC)' },
+        { key: 'refundRef', header: 'Refund reference' },
+        { key: 'attention', header: 'Payment needs attention' },
         { key: 'checkedInAt', header: 'Checked in at (UTC)' },
         { key: 'waitingPlace', header: 'Waiting-list place' },
         { key: 'vin', header: 'VIN' },

@@ -50,8 +50,8 @@ export async function mailPaymentConfirmed(entry: Entry, event: Event, transacti
   await queueMail({ to: p.to, ...mail }, { transaction, dedupeKey: `paid:${entry.id}:${entry.paymentRef}` });
 }
 
-export async function mailRefundSent(entry: Entry, event: Event, amountMinor: number, transaction: Transaction) {
+export async function mailRefundSent(entry: Entry, event: Event, amountMinor: number, transaction: Transaction, dedupeKey = `refund:${entry.id}`) {
   const p = await parts(entry, transaction);
   const mail = refundSentEmail({ ...p, showName: event.name, amount: formatMoney(amountMinor, entry.currency), link: myEntriesLink() });
-  await queueMail({ to: p.to, ...mail }, { transaction, dedupeKey: `refund:${entry.id}` });
+  await queueMail({ to: p.to, ...mail }, { transaction, dedupeKey });
 }

@@ -4,6 +4,7 @@ import { Build } from '../../models/build';
 import { Entry } from '../../models/entry';
 import { EventClass } from '../../models/event-class';
 import { User } from '../../models/user';
+import { attachPaymentIssues } from './payment-issues';
 
 const includes = [
   { model: Build, as: 'build', attributes: ['id', 'title', 'code', 'vin', 'plate', 'ownerPhone', 'ownerAddress'] },
@@ -62,6 +63,7 @@ export async function listEntryTable(eventId: number, q: EntryTableQuery) {
     Entry.findAll({ where, include: includes, order: orderFor(q.sort, q.dir), limit: q.pageSize, offset: (q.page - 1) * q.pageSize, subQuery: false }),
     waitingPlaces(eventId),
   ]);
+  await attachPaymentIssues(rows);
   return { rows, total, places };
 }
 
@@ -71,6 +73,7 @@ export async function listEntriesForExport(eventId: number, q: EntryExportQuery)
     Entry.findAll({ where: whereFor(eventId, q), include: includes, order: orderFor(q.sort, q.dir), subQuery: false }),
     waitingPlaces(eventId),
   ]);
+  await attachPaymentIssues(rows);
   return { rows, places };
 }
 

@@ -1,7 +1,11 @@
 import { describe, expect, it, vi } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '@server/db/sequelize';
-import { paymentsClient } from '@server/payments/client';
+import { config } from '@server/config';
+import { paymentsClient, resetPaymentsClient } from '@server/payments/client';
+import { PaymentIssue } from '@server/models/payment-issue';
+import { sendEntryRefund } from '@server/services/entries/entry-refunds';
+import { EntryTablePageSchema } from '@shared/schemas/show-day';
 import { AuditLine } from '@server/models/audit-line';
 import { Entry } from '@server/models/entry';
 import { Event } from '@server/models/event';
@@ -141,5 +145,84 @@ describe('paying an entry fee online', () => {
     const entry = (await Entry.findByPk(entryId))!;
     expect(entry).toMatchObject({ status: 'withdrawn', paidAmount: 2500, refundDue: 2500 });
     expect(refundsOf(entryId).map((r) => r.amount)).toEqual([2500]);
+  });
+
+  it('expires the open checkout when the organiser marks the entry paid by hand, so it cannot take the fee again', async () => {
+    const { owner, organiser, entryId } = await paidShowEntry();
+    const checkout = await owner.client.post(`/api/entries/${entryId}/checkout`);
+    const sessionId = (await Entry.findByPk(entryId))!.checkoutId!;
+    expect(env.fake.store.sessions.get(sessionId)!.status).toBe('open');
+    expect((await organiser.client.post(`/api/entries/${entryId}/mark-paid`, { note: 'Cash at the club night' })).status).toBe(200);
+    await vi.waitFor(async () => expect(await AuditLine.count({ where: { entryId, action: 'checkout_expired' } })).toBe(1));
+    expect(env.fake.store.sessions.get(sessionId)!.status).toBe('expired');
+    expect((await pressPay(checkout.body.url)).status).toBe(409); // the page takes no money now
+  });
+
+  it('records and refunds in full a payment that lands on an entry already paid in cash (the checkout could not be closed)', async () => {
+    const { owner, organiser, eventId, entryId } = await paidShowEntry();
+    const checkout = await owner.client.post(`/api/entries/${entryId}/checkout`);
+    // The payment service is down while the organiser takes cash: marking paid still works, the checkout stays open.
+    const saved = { timeoutMs: config.payments.timeoutMs, networkRetries: config.payments.networkRetries };
+    Object.assign(config.payments, { timeoutMs: 200, networkRetries: 0 });
+    resetPaymentsClient();
+    env.fake.control.state = 'down';
+    const refusedBefore = env.fake.control.refused;
+    const expireAttempts = () => env.fake.control.refused - refusedBefore;
+    try {
+      expect((await organiser.client.post(`/api/entries/${entryId}/mark-paid`, { note: 'Cash at the office' })).status).toBe(200);
+      // The attempt to close the checkout reached the fake and was dropped; the session is still open.
+      await vi.waitFor(() => expect(expireAttempts()).toBeGreaterThan(0));
+      expect(env.fake.store.sessions.get((await Entry.findByPk(entryId))!.checkoutId!)!.status).toBe('open');
+    } finally {
+      env.fake.control.state = 'up';
+      Object.assign(config.payments, saved);
+      resetPaymentsClient();
+    }
+    const cashRef = (await Entry.findByPk(entryId))!.paymentRef;
+    expect(cashRef).toMatch(/^manual:/);
+
+    expect((await pressPay(checkout.body.url)).status).toBe(303); // the entrant's tab was still open
+    await vi.waitFor(async () => expect((await PaymentIssue.findOne({ where: { entryId } }))?.refundRef).toMatch(/^re_/), { timeout: 30_000 });
+    const issue = (await PaymentIssue.findOne({ where: { entryId } }))!;
+    expect(issue).toMatchObject({ reason: 'paid_twice', amount: 2500, currency: 'EUR', refundAmount: 2500 });
+    expect(refundsOf(entryId).map((r) => r.amount)).toEqual([2500]);
+    // The webhook was taken at once: no 409s retried for days.
+    const deliveries = env.fake.webhooks.deliveries.filter((d) => d.type === 'checkout.session.completed' && d.payload.includes(issue.checkoutId));
+    expect(deliveries.map((d) => d.status)).toEqual([200]);
+    expect(await Entry.findByPk(entryId)).toMatchObject({ status: 'confirmed', paymentRef: cashRef, paidAmount: 2500 });
+    expect(await AuditLine.count({ where: { entryId, action: 'payment_needs_attention' } })).toBe(1);
+    expect(await AuditLine.count({ where: { entryId, action: 'refund_sent' } })).toBe(1);
+    expect((await waitForMailAbout(owner.email, /Refund sent/)).text).toMatch(/€25\.00/);
+    expect((await waitForMailAbout(organiser.email, /needs your attention/)).text).toMatch(/refunded in full automatically/);
+
+    const table = EntryTablePageSchema.parse((await organiser.client.get(`/api/events/${eventId}/entry-table`)).body);
+    expect(table.rows.find((r) => r.id === entryId)).toMatchObject({ payment: 'paid', paymentIssues: [{ reason: 'paid_twice', amount: 2500, refund: { amount: 2500, ref: issue.refundRef } }] });
+  });
+
+  it('marks a refund done with its amount, date and reference, in the table and the CSV, and never sends it twice', async () => {
+    const { owner, organiser, eventId, entryId } = await paidShowEntry();
+    const checkout = await owner.client.post(`/api/entries/${entryId}/checkout`);
+    await pressPay(checkout.body.url);
+    await vi.waitFor(async () => expect((await Entry.findByPk(entryId))!.paidAt).not.toBeNull(), { timeout: 15_000 });
+    expect((await owner.client.post(`/api/entries/${entryId}/withdraw`)).status).toBe(200);
+    await vi.waitFor(async () => expect((await Entry.findByPk(entryId))!.refundRef).toMatch(/^re_/), { timeout: 30_000 });
+    const entry = (await Entry.findByPk(entryId))!;
+
+    const row = EntryTablePageSchema.parse((await organiser.client.get(`/api/events/${eventId}/entry-table`)).body).rows[0]!;
+    expect(row).toMatchObject({ payment: 'refunded', refund: { amount: 2500, ref: entry.refundRef, at: entry.refundedAt!.toISOString() } });
+    const csv = (await organiser.client.get(`/api/events/${eventId}/entries.csv`)).text;
+    const [header, line] = csv.replace(/^\uFEFF/, '').trim().split('\n');
+    const cell = (name: string) => line!.split(',')[header!.split(',').indexOf(name)];
+    expect(cell('Payment')).toBe('Refunded');
+    expect(cell('Refunded')).toBe('25');
+    expect(cell('Refund reference')).toBe(entry.refundRef);
+
+    // The job delivered again (a worker retry) sends nothing more: one refund, one audit line.
+    await sendEntryRefund({ entryId, amountMinor: 2500, checkoutId: entry.paymentRef!.slice('checkout:'.length) });
+    expect(refundsOf(entryId)).toHaveLength(1);
+    expect(await AuditLine.count({ where: { entryId, action: 'refund_sent' } })).toBe(1);
+    expect((await Entry.findByPk(entryId))!.refundRef).toBe(entry.refundRef);
+    // The database refuses a refund larger than what was paid, whatever asks.
+    await expect(Entry.update({ refundedAmount: 2501 }, { where: { id: entryId } })).rejects.toThrow(/entries_refunded_amount/);
   });
 });

@@ -194,7 +194,7 @@ describe('CSV export', () => {
     const bytes = res.body as Buffer;
     expect([...bytes.subarray(0, 3)]).toEqual([0xef, 0xbb, 0xbf]);
     const lines = bytes.subarray(3).toString('utf8').trim().split('\n');
-    expect(lines[0]).toBe('Number,Build,Card code,Entrant,E-mail,Phone,Class,Status,Payment,Currency,Fee,Paid,Refund due,Checked in at (UTC),Waiting-list place,VIN,Plate');
+    expect(lines[0]).toBe('Number,Build,Card code,Entrant,E-mail,Phone,Class,Status,Payment,Currency,Fee,Paid,Refund due,Refunded,Refunded at (UTC),Refund reference,Payment needs attention,Checked in at (UTC),Waiting-list place,VIN,Plate');
     expect(lines[1]).toMatch(/^1,"'=HYPERLINK\(""http:\/\/x\.test"",""click""\)",/);
     expect(lines[1]).toContain(`,${a.owner.email},'+1 555 0199,Hot rods,Confirmed,Paid,EUR,25,25,,`);
     expect(lines[2]).toMatch(/^2,"Coupé ""Brûlé"", 1932",/);

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { loadConfig, PASSWORD_HASH_DEFAULTS } from '@server/config';
 import { hashPassword, verifyPassword } from '@server/auth/passwords';
 
-const PRODUCTION = { NODE_ENV: 'production', SESSION_SECRET: 'x'.repeat(32), PUBLIC_BASE_URL: 'https://cards.example.test' };
+const PRODUCTION = { NODE_ENV: 'production', SESSION_SECRET: 'x'.repeat(32), PUBLIC_BASE_URL: 'https://cards.example.test', PAYMENTS_ONLINE: 'false' };
 
 // The production cost is argon2's own default, RFC 9106 section 4's second recommended option
 // (argon2id, 64 MiB, 3 passes, 4 lanes); tests hash at the cheapest cost so that signing in stays fast.

@@ -8,10 +8,12 @@ import { createCheckout, refund, retrieveCheckout } from '@server/payments/check
 import { paymentsClient } from '@server/payments/client';
 import { registerPaymentHandler, type PaymentNotice } from '@server/payments/handlers';
 import { signPayload } from '@server/payments/fake/webhooks';
-import { FAKE_WEBHOOK_SECRET } from '@server/config';
+import { config } from '@server/config';
 import { ErrorResponseSchema } from '@shared/errors';
 import { testApp } from '../../support/api-client';
 import { useFakePayments } from '../../support/payments';
+
+const FAKE_WEBHOOK_SECRET = config.payments.webhookSecret; // random per start of the process
 
 const env = useFakePayments();
 

@@ -3,7 +3,7 @@ import { Link, useParams } from 'react-router-dom';
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { ENTRY_STATUSES, ENTRY_STATUS_LABELS } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
-import { PAYMENT_STATE_LABELS, type EntryTableQuery, type EntryTableRow, type EntryTableSort } from '@shared/schemas/show-day';
+import { PAYMENT_ISSUE_SHORT_LABEL, PAYMENT_STATE_LABELS, type EntryTableQuery, type EntryTableRow, type EntryTableSort } from '@shared/schemas/show-day';
 import { useShow } from '../api/get-show';
 import { entryTableParams, useEntryTable } from '../api/list-entry-table';
 import { PageHeader } from '@client/components/ui/page-header';
@@ -55,7 +55,8 @@ export function EntriesPage() {
         cell: (c) => {
           const r = c.row.original;
           const label = PAYMENT_STATE_LABELS[c.getValue()];
-          return c.getValue() === 'refund_due' ? `${label} ${formatMoney(r.refundDue ?? 0, r.currency)}` : label;
+          const text = c.getValue() === 'refund_due' ? `${label} ${formatMoney(r.refundDue ?? 0, r.currency)}` : label;
+          return r.paymentIssues.length ? <>{text} <strong className="text-danger">· {PAYMENT_ISSUE_SHORT_LABEL}</strong></> : text;
         },
       }),
       column.accessor('checkedInAt', { header: 'Arrived', enableSorting: false, cell: (c) => (c.getValue() ? new Date(c.getValue()!).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' }) : '') }),

@@ -1,8 +1,8 @@
-import { useState } from 'react';
+import { Fragment, useState } from 'react';
 import { ENTRY_STATUS_LABELS } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
 import type { EventClass } from '@shared/schemas/show-classes';
-import { auditActionLabel, PAYMENT_STATE_LABELS, type EntryTableRow } from '@shared/schemas/show-day';
+import { auditActionLabel, PAYMENT_ISSUE_LABELS, PAYMENT_STATE_LABELS, type EntryTableRow } from '@shared/schemas/show-day';
 import { useActOnEntry, type EntryActionInput } from '../api/act-on-entry';
 import { useEntryAudit } from '../api/get-entry-audit';
 import { Button } from '@client/components/ui/button';
@@ -44,7 +44,19 @@ export function EntryDetail({ eventId, row, classes, onClose }: { eventId: numbe
         <dt className="text-graphite">VIN</dt><dd>{row.privateFields.vin ?? '—'}</dd>
         <dt className="text-graphite">Plate</dt><dd>{row.privateFields.plate ?? '—'}</dd>
         <dt className="text-graphite">Status</dt><dd>{ENTRY_STATUS_LABELS[row.status]}</dd>
-        <dt className="text-graphite">Payment</dt><dd>{PAYMENT_STATE_LABELS[row.payment]} · fee {formatMoney(row.feeAmount, row.currency)}{row.refundDue ? ` · refund due ${formatMoney(row.refundDue, row.currency)}` : ''}</dd>
+        <dt className="text-graphite">Payment</dt><dd>{PAYMENT_STATE_LABELS[row.payment]} · fee {formatMoney(row.feeAmount, row.currency)}{row.refundDue && !row.refund ? ` · refund due ${formatMoney(row.refundDue, row.currency)}` : ''}</dd>
+        {row.refund ? (
+          <>
+            <dt className="text-graphite">Refund</dt>
+            <dd>{formatMoney(row.refund.amount, row.currency)} sent on {new Date(row.refund.at).toLocaleDateString()} (ref. {row.refund.ref}). It cannot be sent twice.</dd>
+          </>
+        ) : null}
+        {row.paymentIssues.map((i) => (
+          <Fragment key={i.id}>
+            <dt className="font-semibold text-danger">Check payment</dt>
+            <dd>{PAYMENT_ISSUE_LABELS[i.reason]}: {formatMoney(i.amount, i.currency)} on {new Date(i.at).toLocaleDateString()}{i.refund ? `, refunded (ref. ${i.refund.ref})` : ''}.</dd>
+          </Fragment>
+        ))}
       </dl>
       {act.error ? <Notice tone="danger"><p>{act.error.message}</p></Notice> : null}
       {open ? (
