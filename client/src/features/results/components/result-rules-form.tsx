@@ -4,7 +4,7 @@ import { PRINT_PAPERS, PRINT_PAPER_LABELS, ResultRulesUpdateSchema, type PrintPa
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
 import { SelectField } from '@client/components/ui/select-field';
-import { useSaveResultRules } from '../api/result-rules';
+import { useSaveResultRules } from '../api/save-result-rules';
 
 /** Trimming drops the single highest and lowest sheet once a car has this many finished sheets. */
 const TRIM_FROM = 5;

@@ -5,7 +5,7 @@ import { Button } from '@client/components/ui/button';
 import { TextField } from '@client/components/ui/text-field';
 import { Notice } from '@client/components/ui/notice';
 import { ApiError } from '@client/lib/api';
-import { useAddTieBreak } from '../api/tie-breaks';
+import { useAddTieBreak } from '../api/add-tie-break';
 
 type Tie = ResultsReview['ties'][number];
 

@@ -9,7 +9,7 @@ import { SelectField } from '@client/components/ui/select-field';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
 import { useBuilds } from '@client/features/builds/api/list-builds';
 import { usePublicShow } from '../api/get-public-show';
-import { useRegisterEntry } from '../api/my-entries';
+import { useRegisterEntry } from '../api/register-entry';
 import { fieldErrors, showTime } from './show-dates';
 
 /** An owner enters one of their published builds in a class of an open show. */

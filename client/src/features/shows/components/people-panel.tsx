@@ -9,13 +9,16 @@ import { Panel } from '@client/components/ui/panel';
 import { SelectField } from '@client/components/ui/select-field';
 import { TextField } from '@client/components/ui/text-field';
 import { LoadingState } from '@client/components/ui/states';
-import { useInvite, usePeople, useRemoveMember, useRevokeInvitation } from '../api/show-people';
+import { useInvitePerson } from '../api/invite-person';
+import { useShowPeople } from '../api/list-show-people';
+import { useRemoveMember } from '../api/remove-member';
+import { useRevokeInvitation } from '../api/revoke-invitation';
 import { fieldErrors, showDay } from './show-dates';
 
 /** Organisers, judges and gate staff of the show; invitations by e-mail (a link that works once). */
 export function PeoplePanel({ show }: { show: EventDetail }) {
-  const people = usePeople(show.id);
-  const invite = useInvite(show.id);
+  const people = useShowPeople(show.id);
+  const invite = useInvitePerson(show.id);
   const revoke = useRevokeInvitation(show.id);
   const remove = useRemoveMember(show.id);
   const [email, setEmail] = useState('');
