@@ -70,3 +70,26 @@ describe('every query of the client', () => {
     }
   });
 });
+
+describe('the show side’s api files', () => {
+  const sources = import.meta.glob('../../client/src/features/{shows,show-day,judging,results}/**/*.{ts,tsx}', { query: '?raw', import: 'default', eager: true }) as Record<string, string>;
+  const apiFiles = Object.entries(sources).filter(([file]) => /\/api\/[^/]+\.ts$/.test(file));
+
+  it('hold one endpoint each: at most one hook and one query-options function per file', () => {
+    expect(apiFiles.length).toBeGreaterThan(40);
+    for (const [file, text] of apiFiles) {
+      const hooks = text.match(/export (?:const|function) use[A-Z]\w*/g) ?? [];
+      const options = text.match(/export const \w+QueryOptions\b/g) ?? [];
+      expect(hooks.length, `${file}: ${hooks.join(', ')}`).toBeLessThanOrEqual(1);
+      expect(options.length, `${file}: ${options.join(', ')}`).toBeLessThanOrEqual(1);
+    }
+  });
+
+  it('type no key inline: every key comes from a feature’s key factory', () => {
+    for (const [file, text] of Object.entries(sources)) {
+      if (file.endsWith('-keys.ts')) continue;
+      expect(text, file).not.toMatch(/queryKey:\s*\[/);
+      expect(text, file).not.toMatch(/(?:invalidateQueries|setQueryData|getQueryData|removeQueries|cancelQueries)\(\s*(?:\{\s*queryKey:\s*)?\[/);
+    }
+  });
+});

@@ -32,3 +32,8 @@ export function fieldMessages<F extends string>(error: { issues: ReadonlyArray<{
   }
   return out;
 }
+
+/** The names of the server's field errors that sit under these top-level fields (rows of a list: `criteria.2.name`). */
+export function serverFieldsUnder(err: unknown, topLevel: readonly string[]): string[] {
+  return err instanceof ApiError ? Object.keys(err.fields).filter((f) => topLevel.includes(f.split('.')[0]!)) : [];
+}

@@ -1,9 +1,6 @@
 import { Link } from 'react-router-dom';
-import { useQuery } from '@tanstack/react-query';
-import type { EventSummary } from '@shared/schemas/show';
-import { api } from '@client/lib/api';
 import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/states';
-import { judgingKeys } from '../api/judging-keys';
+import { useJudgingShows } from '../api/list-judging-shows';
 
 /** The shows this person is judging now; one tap opens their cars. */
 export function JudgeHomePage() {
@@ -16,7 +13,7 @@ export function JudgeHomePage() {
 }
 
 function ShowsToJudge() {
-  const { data, error, isPending, refetch } = useQuery({ queryKey: judgingKeys.myShows(), queryFn: () => api<{ events: EventSummary[] }>('/api/judging') });
+  const { data, error, isPending, refetch } = useJudgingShows();
   if (isPending) return <LoadingState />;
   if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
   if (!data.events.length) return <EmptyState title="Nothing to judge now">Shows you judge appear here while they are being judged.</EmptyState>;

@@ -3,14 +3,19 @@ import { Panel } from '@client/components/ui/panel';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
-import { useAssignJudge, useCloseJudging, useJudges, useProgress } from '../api/judging-progress';
+import { useAssignJudge } from '../api/assign-judge';
+import { useCloseJudging } from '../api/close-judging';
+import { useJudgingProgress } from '../api/get-judging-progress';
+import { useJudges } from '../api/list-judges';
+import { useReopenJudging } from '../api/reopen-judging';
 
 /** The organiser's judging: each judge's classes, progress per class and per judge, and closing judging. */
 export function JudgingPanel({ show }: { show: EventDetail }) {
   const judges = useJudges(show.id);
-  const progress = useProgress(show.id);
+  const progress = useJudgingProgress(show.id);
   const assign = useAssignJudge(show.id);
   const close = useCloseJudging(show.id);
+  const reopen = useReopenJudging(show.id);
   if (judges.isPending || progress.isPending) return <Panel title="Judging"><LoadingState /></Panel>;
   if (judges.error || progress.error) return <Panel title="Judging"><ErrorState error={judges.error ?? progress.error} /></Panel>;
   const p = progress.data.progress;
@@ -20,7 +25,7 @@ export function JudgingPanel({ show }: { show: EventDetail }) {
       title="Judging"
       actions={
         judging ? (
-          <Button variant={p.judgingOpen ? 'danger' : 'secondary'} busy={close.isPending} onClick={() => close.mutate(p.judgingOpen)}>
+          <Button variant={p.judgingOpen ? 'danger' : 'secondary'} busy={close.isPending || reopen.isPending} onClick={() => (p.judgingOpen ? close.mutate() : reopen.mutate())}>
             {p.judgingOpen ? 'Close judging' : 'Reopen judging'}
           </Button>
         ) : null

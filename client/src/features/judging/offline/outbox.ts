@@ -1,6 +1,7 @@
-import { api, ApiError } from '@client/lib/api';
+import { ApiError } from '@client/lib/api';
 import type { NoteItem, ScoreItem } from '@shared/schemas/judging';
 import { SCORE_ITEMS_PER_REQUEST_MAX } from '@shared/judging/sheet-state';
+import { sendScores } from '../api/send-scores';
 import { lineKey, readLines, writeLines, type LocalLine } from './sheet-store';
 
 /**
@@ -57,7 +58,7 @@ export async function flush(eventId: number): Promise<void> {
       const notes = pending.filter((l): l is Extract<LocalLine, { kind: 'note' }> => l.kind === 'note').map((l) => l.item);
       let outcome: { state: 'sent' | 'refused'; message?: string };
       try {
-        await api(`/api/events/${eventId}/scores`, { method: 'POST', body: { scores, notes } });
+        await sendScores(eventId, { scores, notes });
         outcome = { state: 'sent' };
       } catch (err) {
         if (!(err instanceof ApiError) || err.code === 'NETWORK' || err.status >= 500 || err.status === 429 || err.status === 401) return; // try again later

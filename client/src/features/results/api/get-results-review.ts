@@ -6,7 +6,6 @@ import { resultsKeys } from './results-keys';
 
 export type ResultsReviewAnswer = { review: ResultsReview; tieBreaks: ManualTieBreakView[]; rules: ShowResultRules; published: boolean };
 
-export const resultsReviewQueryKey = resultsKeys.review;
 export const getResultsReview = (eventId: number) => api<ResultsReviewAnswer>(`/api/events/${eventId}/results/review`);
-export const resultsReviewQueryOptions = (eventId: number) => queryOptions({ queryKey: resultsReviewQueryKey(eventId), queryFn: () => getResultsReview(eventId) });
+export const resultsReviewQueryOptions = (eventId: number) => queryOptions({ queryKey: resultsKeys.review(eventId), queryFn: () => getResultsReview(eventId) });
 export const useResultsReview = (eventId: number) => useQuery(resultsReviewQueryOptions(eventId));

@@ -8,7 +8,7 @@ import { Panel } from '@client/components/ui/panel';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
 import { useTakeStep } from '@client/features/shows/api/take-step';
 import { useResultsReview } from '../api/get-results-review';
-import { useRemoveTieBreak } from '../api/tie-breaks';
+import { useRemoveTieBreak } from '../api/remove-tie-break';
 import { ResultRulesForm } from './result-rules-form';
 import { ReviewTables } from './results-review';
 import { TieOrderForm } from './tie-order-form';

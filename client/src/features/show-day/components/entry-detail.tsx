@@ -1,10 +1,16 @@
 import { Fragment, useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { ENTRY_STATUS_LABELS } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
 import type { EventClass } from '@shared/schemas/show-classes';
-import { auditActionLabel, PAYMENT_ISSUE_LABELS, PAYMENT_STATE_LABELS, type EntryTableRow } from '@shared/schemas/show-day';
-import { useActOnEntry, type EntryActionInput } from '../api/act-on-entry';
+import { auditActionLabel, ChangeClassSchema, MarkPaidSchema, PAYMENT_ISSUE_LABELS, PAYMENT_STATE_LABELS, type ChangeClassInput, type EntryTableRow, type MarkPaidInput } from '@shared/schemas/show-day';
+import { applyServerErrors } from '@client/lib/form-errors';
+import { useChangeEntryClass } from '../api/change-entry-class';
 import { useEntryAudit } from '../api/get-entry-audit';
+import { useMarkEntryPaid } from '../api/mark-entry-paid';
+import { useMoveEntryUp } from '../api/move-entry-up';
+import { useWithdrawListedEntry } from '../api/withdraw-listed-entry';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
 
@@ -19,15 +25,61 @@ function changeText(before: unknown, after: unknown): string {
     .join('; ');
 }
 
+/** Moves the entry to another class of the show; the button wakes only when another class is picked. */
+function ChangeClassForm({ eventId, row, classes, onError }: { eventId: number; row: EntryTableRow; classes: EventClass[]; onError: (message: string) => void }) {
+  const change = useChangeEntryClass(eventId);
+  const { register, control, handleSubmit, setError, formState: { errors } } = useForm<ChangeClassInput>({ resolver: zodResolver(ChangeClassSchema), defaultValues: { classId: row.classId } });
+  const picked = useWatch({ control, name: 'classId' });
+  const onSubmit = handleSubmit(({ classId }) => {
+    onError('');
+    change.mutate({ entryId: row.id, classId }, { onError: (err) => onError(applyServerErrors(err, setError, ['classId'])) });
+  });
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex items-end gap-2">
+      <label className="flex flex-1 flex-col gap-1">
+        <span className="text-sm font-semibold">Class</span>
+        <select aria-label="Move to class" aria-invalid={errors.classId ? true : undefined} {...register('classId', { valueAsNumber: true })} className="min-h-11 border border-rule bg-white px-2">
+          {classes.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
+        </select>
+        {errors.classId ? <span role="alert" className="text-sm text-danger">{errors.classId.message}</span> : null}
+      </label>
+      <Button type="submit" variant="secondary" disabled={Number(picked) === row.classId} busy={change.isPending}>Change class</Button>
+    </form>
+  );
+}
+
+/** Marks an unpaid entry paid by hand (cash, a transfer), with a note saying how. */
+function MarkPaidForm({ eventId, row, onError }: { eventId: number; row: EntryTableRow; onError: (message: string) => void }) {
+  const markPaid = useMarkEntryPaid(eventId);
+  const { register, handleSubmit, setError, formState: { errors } } = useForm<MarkPaidInput>({ resolver: zodResolver(MarkPaidSchema), defaultValues: { note: '' } });
+  const onSubmit = handleSubmit(({ note }) => {
+    onError('');
+    markPaid.mutate({ entryId: row.id, note }, { onError: (err) => onError(applyServerErrors(err, setError, ['note'])) });
+  });
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex items-end gap-2">
+      <label className="flex flex-1 flex-col gap-1">
+        <span className="text-sm font-semibold">How was it paid?</span>
+        <input aria-label="Payment note" aria-invalid={errors.note ? true : undefined} {...register('note')} placeholder="Cash at the gate, bank transfer…" className="min-h-11 border border-rule bg-white px-3" />
+        {errors.note ? <span role="alert" className="text-sm text-danger">{errors.note.message}</span> : null}
+      </label>
+      <Button type="submit" busy={markPaid.isPending}>Mark paid</Button>
+    </form>
+  );
+}
+
 /** One entry opened from the table: the entrant's contact, the build's private fields, the actions and the history. */
 export function EntryDetail({ eventId, row, classes, onClose }: { eventId: number; row: EntryTableRow; classes: EventClass[]; onClose: () => void }) {
-  const act = useActOnEntry(eventId);
+  const moveUp = useMoveEntryUp(eventId);
+  const withdraw = useWithdrawListedEntry(eventId);
   const audit = useEntryAudit(row.id);
-  const [classId, setClassId] = useState(String(row.classId));
-  const [note, setNote] = useState('');
-  const run = (input: EntryActionInput, question?: string) => {
-    if (question && !window.confirm(question)) return;
-    act.mutate(input);
+  // An error that names no field of a form (or comes from a button without one) shows at the top.
+  const [formError, setFormError] = useState('');
+  const buttonError = moveUp.error ?? withdraw.error;
+  const confirmThen = (question: string, act: () => void) => {
+    if (!window.confirm(question)) return;
+    setFormError('');
+    act();
   };
   const open = row.status !== 'withdrawn';
 
@@ -58,29 +110,13 @@ export function EntryDetail({ eventId, row, classes, onClose }: { eventId: numbe
           </Fragment>
         ))}
       </dl>
-      {act.error ? <Notice tone="danger"><p>{act.error.message}</p></Notice> : null}
+      {formError || buttonError ? <Notice tone="danger"><p>{formError || buttonError?.message}</p></Notice> : null}
       {open ? (
         <div className="mt-4 space-y-4">
-          <div className="flex items-end gap-2">
-            <label className="flex flex-1 flex-col gap-1">
-              <span className="text-sm font-semibold">Class</span>
-              <select aria-label="Move to class" value={classId} onChange={(e) => setClassId(e.target.value)} className="min-h-11 border border-rule bg-white px-2">
-                {classes.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
-              </select>
-            </label>
-            <Button variant="secondary" disabled={Number(classId) === row.classId} busy={act.isPending} onClick={() => run({ kind: 'class', entryId: row.id, classId: Number(classId) })}>Change class</Button>
-          </div>
-          {row.payment === 'unpaid' && row.status === 'awaiting_payment' ? (
-            <div className="flex items-end gap-2">
-              <label className="flex flex-1 flex-col gap-1">
-                <span className="text-sm font-semibold">How was it paid?</span>
-                <input aria-label="Payment note" value={note} onChange={(e) => setNote(e.target.value)} placeholder="Cash at the gate, bank transfer…" className="min-h-11 border border-rule bg-white px-3" />
-              </label>
-              <Button busy={act.isPending} onClick={() => run({ kind: 'mark-paid', entryId: row.id, note })}>Mark paid</Button>
-            </div>
-          ) : null}
-          {row.status === 'waiting_list' ? <Button busy={act.isPending} onClick={() => run({ kind: 'move-up', entryId: row.id }, `Give ${row.buildTitle} a place now, ahead of the waiting list's order and above capacity if the class is full?`)}>Move up from the waiting list</Button> : null}
-          <Button variant="danger" busy={act.isPending} onClick={() => run({ kind: 'withdraw', entryId: row.id }, `Withdraw ${row.buildTitle}? The show's refund rule decides what is paid back, and the entrant is told by e-mail.`)}>Withdraw</Button>
+          <ChangeClassForm eventId={eventId} row={row} classes={classes} onError={setFormError} />
+          {row.payment === 'unpaid' && row.status === 'awaiting_payment' ? <MarkPaidForm eventId={eventId} row={row} onError={setFormError} /> : null}
+          {row.status === 'waiting_list' ? <Button busy={moveUp.isPending} onClick={() => confirmThen(`Give ${row.buildTitle} a place now, ahead of the waiting list's order and above capacity if the class is full?`, () => moveUp.mutate({ entryId: row.id }))}>Move up from the waiting list</Button> : null}
+          <Button variant="danger" busy={withdraw.isPending} onClick={() => confirmThen(`Withdraw ${row.buildTitle}? The show's refund rule decides what is paid back, and the entrant is told by e-mail.`, () => withdraw.mutate({ entryId: row.id }))}>Withdraw</Button>
         </div>
       ) : null}
       <h3 className="mt-6 font-display text-lg uppercase">History</h3>

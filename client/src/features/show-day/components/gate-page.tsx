@@ -3,7 +3,10 @@ import { useParams } from 'react-router-dom';
 import { formatMoney } from '@shared/calc/money';
 import { CHECK_IN_UNDO_SECONDS, PAYMENT_STATE_LABELS, type GateCard } from '@shared/schemas/show-day';
 import { useShow } from '../api/get-show';
-import { useCheckIn, useGateCounts, useLookUpCard, useUndoCheckIn } from '../api/gate';
+import { useCheckInAtGate } from '../api/check-in-at-gate';
+import { useGateCounts } from '../api/get-gate-counts';
+import { useLookUpGateCard } from '../api/look-up-gate-card';
+import { useUndoCheckIn } from '../api/undo-check-in';
 import { useQrScanner } from './use-qr-scanner';
 import { LoadingState, ErrorState } from '@client/components/ui/states';
 
@@ -30,7 +33,7 @@ function Counts({ eventId }: { eventId: number }) {
 
 /** The car that came up: photo, number, title, class, payment and the problem in words, then one big button. */
 function CarCard({ eventId, card, onChange, justChecked }: { eventId: number; card: GateCard; onChange: (c: GateCard, checked: boolean) => void; justChecked: boolean }) {
-  const checkIn = useCheckIn(eventId);
+  const checkIn = useCheckInAtGate(eventId);
   const undo = useUndoCheckIn(eventId);
   const [secondsLeft, setSecondsLeft] = useState(0);
   const e = card.entry;
@@ -82,7 +85,7 @@ function CarCard({ eventId, card, onChange, justChecked }: { eventId: number; ca
 export function GatePage() {
   const eventId = Number(useParams().id);
   const show = useShow(eventId);
-  const lookUp = useLookUpCard(eventId);
+  const lookUp = useLookUpGateCard(eventId);
   const [card, setCard] = useState<GateCard | null>(null);
   const [justChecked, setJustChecked] = useState(false);
   const [camera, setCamera] = useState(false);

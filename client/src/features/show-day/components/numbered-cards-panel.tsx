@@ -4,7 +4,8 @@ import { countOf, formatDateTime } from '@shared/words';
 import { Panel } from '@client/components/ui/panel';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
-import { useLatestCardPrint, useStartCardPrint } from '../api/card-prints';
+import { useLatestCardPrint } from '../api/get-latest-card-print';
+import { useStartCardPrint } from '../api/start-card-print';
 import { useSendReminders } from '../api/send-reminders';
 
 type ClassOption = { id: number; name: string };

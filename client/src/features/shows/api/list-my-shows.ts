@@ -3,7 +3,6 @@ import type { EventSummary } from '@shared/schemas/show';
 import { api } from '@client/lib/api';
 import { showKeys } from './show-keys';
 
-export const myShowsQueryKey = showKeys.mine();
 export const listMyShows = () => api<{ events: EventSummary[] }>('/api/events');
-export const myShowsQueryOptions = () => queryOptions({ queryKey: myShowsQueryKey, queryFn: listMyShows });
+export const myShowsQueryOptions = () => queryOptions({ queryKey: showKeys.mine(), queryFn: listMyShows });
 export const useMyShows = () => useQuery(myShowsQueryOptions());

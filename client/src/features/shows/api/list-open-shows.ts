@@ -3,7 +3,6 @@ import type { EventSummary } from '@shared/schemas/show';
 import { api } from '@client/lib/api';
 import { showKeys } from './show-keys';
 
-export const openShowsQueryKey = showKeys.open();
 export const listOpenShows = () => api<{ events: EventSummary[] }>('/api/public/events');
-export const openShowsQueryOptions = () => queryOptions({ queryKey: openShowsQueryKey, queryFn: listOpenShows });
+export const openShowsQueryOptions = () => queryOptions({ queryKey: showKeys.open(), queryFn: listOpenShows });
 export const useOpenShows = () => useQuery(openShowsQueryOptions());

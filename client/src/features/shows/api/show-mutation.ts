@@ -1,6 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { EventDetail } from '@shared/schemas/show';
-import { showQueryKey } from './get-show';
 import { showKeys } from './show-keys';
 
 /** A change to a show whose answer is the whole show: put straight into the cache. */
@@ -9,7 +8,7 @@ export function useShowMutation<I>(id: number, send: (input: I) => Promise<{ eve
   return useMutation({
     mutationFn: send,
     onSuccess: (data) => {
-      qc.setQueryData(showQueryKey(id), data);
+      qc.setQueryData(showKeys.detail(id), data);
       void qc.invalidateQueries({ queryKey: showKeys.mine() });
     },
   });

@@ -1,33 +1,49 @@
-import { useState, type FormEvent } from 'react';
-import { ClassInputSchema } from '@shared/schemas/show-classes';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { ClassInputSchema, type ClassInput } from '@shared/schemas/show-classes';
 import { type EventDetail } from '@shared/schemas/show';
-import { fieldsFromIssues } from '@shared/errors';
+import { applyServerErrors } from '@client/lib/form-errors';
+import { numberOrNull, resolverFor } from '@client/lib/form-resolver';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
 import { Panel } from '@client/components/ui/panel';
 import { TextField } from '@client/components/ui/text-field';
-import { useDeleteClass, useSaveClass } from '../api/save-class';
-import { fieldErrors } from './show-dates';
+import { useCreateClass } from '../api/create-class';
+import { useDeleteClass } from '../api/delete-class';
+import { useUpdateClass } from '../api/update-class';
+
+/** The boxes as typed: capacity is text, empty for no limit. */
+type NewClassValues = { name: string; capacity: string; description: string };
+const EMPTY: NewClassValues = { name: '', capacity: '', description: '' };
+const classResolver = resolverFor(ClassInputSchema, (v: NewClassValues) => ({ name: v.name, description: v.description, capacity: numberOrNull(v.capacity) }));
+
+function NewClassForm({ showId }: { showId: number }) {
+  const create = useCreateClass(showId);
+  const [formError, setFormError] = useState('');
+  const { register, handleSubmit, reset, setError, formState: { errors } } = useForm<NewClassValues, unknown, ClassInput>({ resolver: classResolver, defaultValues: EMPTY });
+  const onSubmit = handleSubmit((input) => {
+    setFormError('');
+    create.mutate(input, { onSuccess: () => reset(EMPTY), onError: (err) => setFormError(applyServerErrors(err, setError, ['name', 'capacity', 'description'])) });
+  });
+  return (
+    <form onSubmit={onSubmit} noValidate className="mt-4 grid gap-3 md:grid-cols-[2fr_1fr_auto] md:items-end">
+      {formError ? <div className="md:col-span-3"><Notice tone="danger">{formError}</Notice></div> : null}
+      <TextField label="New class" {...register('name')} error={errors.name?.message} />
+      <TextField label="Capacity" inputMode="numeric" hint="Empty: no limit" {...register('capacity')} error={errors.capacity?.message} />
+      <Button type="submit" busy={create.isPending}>
+        Add class
+      </Button>
+      <TextField label="Description (optional)" {...register('description')} error={errors.description?.message} className="md:col-span-3" />
+    </form>
+  );
+}
 
 /** The show's classes in order; organisers add, rename, reorder and remove them (a class with entries stays). */
 export function ClassesPanel({ show }: { show: EventDetail }) {
-  const save = useSaveClass(show.id);
+  const update = useUpdateClass(show.id);
   const remove = useDeleteClass(show.id);
-  const [name, setName] = useState('');
-  const [capacity, setCapacity] = useState('');
-  const [description, setDescription] = useState('');
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const editable = show.abilities.manage && show.status !== 'archived';
-
-  const add = (e: FormEvent) => {
-    e.preventDefault();
-    const parsed = ClassInputSchema.safeParse({ name, description, capacity: capacity ? Number(capacity) : null });
-    if (!parsed.success) return setErrors(fieldsFromIssues(parsed.error.issues));
-    setErrors({});
-    save.mutate({ input: parsed.data }, { onSuccess: () => (setName(''), setCapacity(''), setDescription('')) });
-  };
-  const move = (id: number, to: number) => save.mutate({ classId: id, input: { position: to } });
-  const all = { ...fieldErrors(save.error), ...errors };
+  const move = (id: number, to: number) => update.mutate({ classId: id, input: { position: to } });
 
   return (
     <Panel title="Classes">
@@ -55,17 +71,9 @@ export function ClassesPanel({ show }: { show: EventDetail }) {
           </li>
         ))}
       </ol>
+      {update.isError ? <Notice tone="danger">{update.error.message}</Notice> : null}
       {remove.isError ? <Notice tone="danger">{remove.error.message}</Notice> : null}
-      {editable ? (
-        <form onSubmit={add} noValidate className="mt-4 grid gap-3 md:grid-cols-[2fr_1fr_auto] md:items-end">
-          <TextField label="New class" value={name} onChange={(e) => setName(e.target.value)} error={all.name} />
-          <TextField label="Capacity" inputMode="numeric" hint="Empty: no limit" value={capacity} onChange={(e) => setCapacity(e.target.value)} error={all.capacity} />
-          <Button type="submit" busy={save.isPending}>
-            Add class
-          </Button>
-          <TextField label="Description (optional)" value={description} onChange={(e) => setDescription(e.target.value)} error={all.description} className="md:col-span-3" />
-        </form>
-      ) : null}
+      {editable ? <NewClassForm showId={show.id} /> : null}
     </Panel>
   );
 }

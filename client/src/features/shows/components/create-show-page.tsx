@@ -9,7 +9,7 @@ export function CreateShowPage() {
   return (
     <div>
       <PageHeader title="New show">It starts as a draft: nobody sees it until you open entries.</PageHeader>
-      <ShowSettingsForm submitLabel="Create the show" busy={create.isPending} serverError={create.error} onSubmit={(input) => create.mutate(input, { onSuccess: ({ event }) => navigate(`/shows/${event.id}`) })} />
+      <ShowSettingsForm submitLabel="Create the show" busy={create.isPending} onSubmit={(input) => create.mutateAsync(input).then(({ event }) => navigate(`/shows/${event.id}`))} />
     </div>
   );
 }

@@ -1,7 +1,12 @@
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
 import { Link, useNavigate, useParams } from 'react-router-dom';
-import { EntryCreateSchema } from '@shared/schemas/entry';
-import { fieldsFromIssues } from '@shared/errors';
+import { EntryCreateSchema, type EntryCreateInput } from '@shared/schemas/entry';
+import type { PublicEvent } from '@shared/schemas/public-event';
+import type { BuildSummary } from '@shared/schemas/build';
+import { ApiError } from '@client/lib/api';
+import { applyServerErrors } from '@client/lib/form-errors';
+import { resolverFor } from '@client/lib/form-resolver';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
 import { PageHeader } from '@client/components/ui/page-header';
@@ -9,33 +14,54 @@ import { SelectField } from '@client/components/ui/select-field';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
 import { useBuilds } from '@client/features/builds/api/list-builds';
 import { usePublicShow } from '../api/get-public-show';
-import { useRegisterEntry } from '../api/my-entries';
-import { fieldErrors, showTime } from './show-dates';
+import { useRegisterEntry } from '../api/register-entry';
+import { showTime } from './show-dates';
+
+/** The two choices as picked: option values are text until the schema reads them as ids. */
+type EntryValues = { buildId: string; classId: string };
+const entryResolver = resolverFor(EntryCreateSchema, (v: EntryValues) => ({ buildId: Number(v.buildId), classId: Number(v.classId) }));
+
+function EntryForm({ event: e, published }: { event: PublicEvent; published: BuildSummary[] }) {
+  const entry = useRegisterEntry(e.id);
+  const navigate = useNavigate();
+  const [formError, setFormError] = useState('');
+  const { register, control, handleSubmit, setError, formState: { errors } } = useForm<EntryValues, unknown, EntryCreateInput>({ resolver: entryResolver, defaultValues: { buildId: '', classId: '' } });
+  const classId = useWatch({ control, name: 'classId' });
+  const submit = handleSubmit((input) => {
+    setFormError('');
+    entry.mutate(input, {
+      onSuccess: () => navigate('/entries'),
+      // A show that stopped taking entries names the show (eventId), which is no box of this form: say it on top.
+      onError: (err) => setFormError((err instanceof ApiError ? err.fields.eventId : undefined) ?? applyServerErrors(err, setError, ['buildId', 'classId'])),
+    });
+  });
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-4">
+      <SelectField label="Your car" placeholder="Pick a published build" {...register('buildId')} options={published.map((b) => ({ value: String(b.id), label: b.title }))} error={errors.buildId?.message} />
+      <SelectField label="Class" placeholder="Pick a class" {...register('classId')} options={e.classes.map((c) => ({ value: String(c.id), label: c.name }))} error={errors.classId?.message} hint={e.classes.find((c) => String(c.id) === classId)?.description} />
+      <p className="text-graphite">
+        {e.entryFee > 0 ? `The entry gets its number at once and is confirmed when the fee of ${e.feeText} is paid.` : 'The show is free: the entry is confirmed at once.'} If the class or the show is full, the entry goes on the waiting list and you get an e-mail when a place frees.
+      </p>
+      {formError ? <Notice tone="danger">{formError}</Notice> : null}
+      <div>
+        <Button type="submit" busy={entry.isPending} disabled={!e.takingEntries}>
+          Enter the car
+        </Button>
+      </div>
+    </form>
+  );
+}
 
 /** An owner enters one of their published builds in a class of an open show. */
 export function EnterShowPage() {
   const slug = useParams().slug ?? '';
   const show = usePublicShow(slug);
   const builds = useBuilds();
-  const register = useRegisterEntry(show.data?.event.id ?? 0);
-  const navigate = useNavigate();
-  const [buildId, setBuildId] = useState('');
-  const [classId, setClassId] = useState('');
-  const [errors, setErrors] = useState<Record<string, string>>({});
   if (show.isPending || builds.isPending) return <LoadingState />;
   if (show.error) return <ErrorState error={show.error} />;
   if (builds.error) return <ErrorState error={builds.error} />;
   const e = show.data.event;
   const published = builds.data.builds.filter((b) => b.published);
-  const all = { ...fieldErrors(register.error), ...errors };
-
-  const submit = (ev: FormEvent) => {
-    ev.preventDefault();
-    const parsed = EntryCreateSchema.safeParse({ buildId: Number(buildId), classId: Number(classId) });
-    if (!parsed.success) return setErrors(fieldsFromIssues(parsed.error.issues));
-    setErrors({});
-    register.mutate(parsed.data, { onSuccess: () => navigate('/entries') });
-  };
 
   return (
     <div className="max-w-2xl">
@@ -48,20 +74,7 @@ export function EnterShowPage() {
           Only a published build sheet can be entered. <Link to="/builds" className="underline">Publish one of your builds</Link> first.
         </Notice>
       ) : (
-        <form onSubmit={submit} noValidate className="flex flex-col gap-4">
-          <SelectField label="Your car" placeholder="Pick a published build" value={buildId} onChange={(x) => setBuildId(x.target.value)} options={published.map((b) => ({ value: String(b.id), label: b.title }))} error={all.buildId} />
-          <SelectField label="Class" placeholder="Pick a class" value={classId} onChange={(x) => setClassId(x.target.value)} options={e.classes.map((c) => ({ value: String(c.id), label: c.name }))} error={all.classId} hint={e.classes.find((c) => String(c.id) === classId)?.description} />
-          <p className="text-graphite">
-            {e.entryFee > 0 ? `The entry gets its number at once and is confirmed when the fee of ${e.feeText} is paid.` : 'The show is free: the entry is confirmed at once.'} If the class or the show is full, the entry goes on the waiting list and you get an e-mail when a place frees.
-          </p>
-          {register.isError && !Object.keys(fieldErrors(register.error)).length ? <Notice tone="danger">{register.error.message}</Notice> : null}
-          {register.isError && fieldErrors(register.error).eventId ? <Notice tone="danger">{fieldErrors(register.error).eventId}</Notice> : null}
-          <div>
-            <Button type="submit" busy={register.isPending} disabled={!e.takingEntries}>
-              Enter the car
-            </Button>
-          </div>
-        </form>
+        <EntryForm event={e} published={published} />
       )}
     </div>
   );

@@ -5,7 +5,8 @@ import { Notice } from '@client/components/ui/notice';
 import { PageHeader } from '@client/components/ui/page-header';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
 import { useSession } from '@client/features/session/api/get-session';
-import { useAcceptInvitation, useInvitation } from '../api/invitation';
+import { useAcceptInvitation } from '../api/accept-invitation';
+import { useInvitation } from '../api/get-invitation';
 
 /** Where an invitation link lands: signed in, accept; otherwise sign in or make an account, then come back. */
 export function InvitationPage() {

@@ -1,26 +1,28 @@
 import { useState } from 'react';
+import { useFieldArray, useForm, type Path } from 'react-hook-form';
 import { sheetEditable } from '@shared/event-lifecycle';
-import { JudgingSheetSchema } from '@shared/schemas/show-classes';
+import { JudgingSheetSchema, type JudgingSheetInput } from '@shared/schemas/show-classes';
 import { type EventDetail } from '@shared/schemas/show';
-import { fieldsFromIssues } from '@shared/errors';
+import { applyServerErrors, serverFieldsUnder } from '@client/lib/form-errors';
+import { numberOrNull, resolverFor } from '@client/lib/form-resolver';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
 import { Panel } from '@client/components/ui/panel';
 import { TextField } from '@client/components/ui/text-field';
 import { useSaveJudgingSheet } from '../api/save-judging-sheet';
-import { fieldErrors } from './show-dates';
 
+/** A criterion as typed: numbers are text until the sheet is checked. */
 type Row = { name: string; maxPoints: string; weight: string; tieBreakOrder: string };
+type SheetValues = { criteria: Row[] };
 const toRows = (show: EventDetail): Row[] => show.criteria.map((c) => ({ name: c.name, maxPoints: String(c.maxPoints), weight: String(c.weight), tieBreakOrder: c.tieBreakOrder ? String(c.tieBreakOrder) : '' }));
+// An empty points or weight box is no number at all (the schema says so), not zero.
+const sheetResolver = resolverFor(JudgingSheetSchema, (v: SheetValues) => ({
+  criteria: v.criteria.map((r) => ({ name: r.name, maxPoints: numberOrNull(r.maxPoints) ?? undefined, weight: numberOrNull(r.weight) ?? undefined, tieBreakOrder: numberOrNull(r.tieBreakOrder) })),
+}));
 
 /** The judging sheet: criteria with points, weight and tie-break place; saved whole, fixed once judging starts. */
 export function JudgingSheetPanel({ show }: { show: EventDetail }) {
-  const save = useSaveJudgingSheet(show.id);
-  const [rows, setRows] = useState<Row[]>(() => toRows(show));
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const editable = show.abilities.manage && sheetEditable(show.status);
-  const all = { ...fieldErrors(save.error), ...errors };
-  const set = (i: number, k: keyof Row, v: string) => setRows((r) => r.map((row, j) => (j === i ? { ...row, [k]: v } : row)));
   const maxTotal = show.criteria.reduce((t, c) => t + c.maxPoints * c.weight, 0);
 
   if (!editable) {
@@ -44,41 +46,53 @@ export function JudgingSheetPanel({ show }: { show: EventDetail }) {
     );
   }
 
-  const submit = () => {
-    const parsed = JudgingSheetSchema.safeParse({
-      criteria: rows.map((r) => ({ name: r.name, maxPoints: Number(r.maxPoints), weight: Number(r.weight), tieBreakOrder: r.tieBreakOrder ? Number(r.tieBreakOrder) : null })),
+  return <SheetEditor show={show} />;
+}
+
+/** The organiser's editor of the sheet, saved whole. */
+function SheetEditor({ show }: { show: EventDetail }) {
+  const save = useSaveJudgingSheet(show.id);
+  const [formError, setFormError] = useState('');
+  const { register, control, handleSubmit, reset, setError, formState: { errors } } = useForm<SheetValues, unknown, JudgingSheetInput>({ resolver: sheetResolver, defaultValues: { criteria: toRows(show) } });
+  const rows = useFieldArray({ control, name: 'criteria' });
+  const submit = handleSubmit((input) => {
+    setFormError('');
+    save.mutate(input, {
+      onSuccess: ({ event }) => reset({ criteria: toRows(event) }),
+      onError: (err) => setFormError(applyServerErrors(err, setError, serverFieldsUnder(err, ['criteria']) as Path<SheetValues>[])),
     });
-    if (!parsed.success) return setErrors(fieldsFromIssues(parsed.error.issues));
-    setErrors({});
-    save.mutate(parsed.data, { onSuccess: ({ event }) => setRows(toRows(event)) });
-  };
+  });
+  const rowError = (i: number, k: keyof Row) => errors.criteria?.[i]?.[k]?.message;
 
   return (
     <Panel title="Judging sheet">
       <p className="mb-3 text-graphite">Each criterion is scored from 0 to its points, times its weight. Ties are broken by the criteria with a tie-break place, 1 first. The sheet is fixed once judging starts.</p>
+      <form onSubmit={submit} noValidate>
       <ol className="flex flex-col gap-3">
-        {rows.map((r, i) => (
-          <li key={i} className="grid gap-2 border-b border-rule pb-3 sm:grid-cols-[2fr_1fr_1fr_1fr_auto] sm:items-end">
-            <TextField label={`Criterion ${i + 1}`} value={r.name} onChange={(e) => set(i, 'name', e.target.value)} error={all[`criteria.${i}.name`]} />
-            <TextField label="Points" inputMode="numeric" value={r.maxPoints} onChange={(e) => set(i, 'maxPoints', e.target.value)} error={all[`criteria.${i}.maxPoints`]} />
-            <TextField label="Weight" inputMode="decimal" value={r.weight} onChange={(e) => set(i, 'weight', e.target.value)} error={all[`criteria.${i}.weight`]} />
-            <TextField label="Tie-break place" inputMode="numeric" value={r.tieBreakOrder} onChange={(e) => set(i, 'tieBreakOrder', e.target.value)} error={all[`criteria.${i}.tieBreakOrder`]} />
-            <Button type="button" variant="quiet" onClick={() => setRows((rs) => rs.filter((_, j) => j !== i))} aria-label={`Remove criterion ${i + 1}`}>
+        {rows.fields.map((field, i) => (
+          <li key={field.id} className="grid gap-2 border-b border-rule pb-3 sm:grid-cols-[2fr_1fr_1fr_1fr_auto] sm:items-end">
+            <TextField label={`Criterion ${i + 1}`} {...register(`criteria.${i}.name`)} error={rowError(i, 'name')} />
+            <TextField label="Points" inputMode="numeric" {...register(`criteria.${i}.maxPoints`)} error={rowError(i, 'maxPoints')} />
+            <TextField label="Weight" inputMode="decimal" {...register(`criteria.${i}.weight`)} error={rowError(i, 'weight')} />
+            <TextField label="Tie-break place" inputMode="numeric" {...register(`criteria.${i}.tieBreakOrder`)} error={rowError(i, 'tieBreakOrder')} />
+            <Button type="button" variant="quiet" onClick={() => rows.remove(i)} aria-label={`Remove criterion ${i + 1}`}>
               Remove
             </Button>
           </li>
         ))}
       </ol>
       <div className="mt-3 flex flex-wrap gap-2">
-        <Button type="button" variant="secondary" onClick={() => setRows((rs) => [...rs, { name: '', maxPoints: '10', weight: '1', tieBreakOrder: '' }])}>
+        <Button type="button" variant="secondary" onClick={() => rows.append({ name: '', maxPoints: '10', weight: '1', tieBreakOrder: '' })}>
           Add a criterion
         </Button>
-        <Button type="button" busy={save.isPending} onClick={submit}>
+        <Button type="submit" busy={save.isPending}>
           Save the sheet
         </Button>
       </div>
+      </form>
       {save.isSuccess ? <Notice tone="ok">Saved.</Notice> : null}
-      {save.isError && !Object.keys(fieldErrors(save.error)).length ? <Notice tone="danger">{save.error.message}</Notice> : null}
+      {errors.criteria?.message ? <Notice tone="danger">{errors.criteria.message}</Notice> : null}
+      {formError ? <Notice tone="danger">{formError}</Notice> : null}
     </Panel>
   );
 }

@@ -5,7 +5,8 @@ import { Button } from '@client/components/ui/button';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { Notice } from '@client/components/ui/notice';
 import { Panel } from '@client/components/ui/panel';
-import { useRemoveShowLogo, useUploadShowLogo } from '../api/show-logo';
+import { useRemoveShowLogo } from '../api/remove-show-logo';
+import { useUploadShowLogo } from '../api/upload-show-logo';
 
 /** The show's logo: on its public page and its screens. Organisers change or remove it. */
 export function LogoPanel({ show }: { show: EventDetail }) {

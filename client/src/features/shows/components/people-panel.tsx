@@ -1,36 +1,52 @@
-import { useState, type FormEvent } from 'react';
-import { EVENT_ROLES, EVENT_ROLE_LABELS, type EventRole } from '@shared/constants';
-import { InvitationCreateSchema } from '@shared/schemas/show-people';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { EVENT_ROLES, EVENT_ROLE_LABELS } from '@shared/constants';
+import { InvitationCreateSchema, type InvitationCreateInput } from '@shared/schemas/show-people';
 import { type EventDetail } from '@shared/schemas/show';
-import { fieldsFromIssues } from '@shared/errors';
+import { applyServerErrors } from '@client/lib/form-errors';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
 import { Panel } from '@client/components/ui/panel';
 import { SelectField } from '@client/components/ui/select-field';
 import { TextField } from '@client/components/ui/text-field';
 import { LoadingState } from '@client/components/ui/states';
-import { useInvite, usePeople, useRemoveMember, useRevokeInvitation } from '../api/show-people';
-import { fieldErrors, showDay } from './show-dates';
+import { useInvitePerson } from '../api/invite-person';
+import { useShowPeople } from '../api/list-show-people';
+import { useRemoveMember } from '../api/remove-member';
+import { useRevokeInvitation } from '../api/revoke-invitation';
+import { showDay } from './show-dates';
+
+/** Invites one person by e-mail to a role; the role stays picked for the next invitation. */
+function InvitationForm({ showId }: { showId: number }) {
+  const invite = useInvitePerson(showId);
+  const [formError, setFormError] = useState('');
+  const { register, handleSubmit, resetField, setError, formState: { errors } } = useForm<InvitationCreateInput>({ resolver: zodResolver(InvitationCreateSchema), defaultValues: { email: '', role: 'judge' } });
+  const send = handleSubmit((input) => {
+    setFormError('');
+    invite.mutate(input, { onSuccess: () => resetField('email'), onError: (err) => setFormError(applyServerErrors(err, setError, ['email', 'role'])) });
+  });
+  return (
+    <>
+      <form onSubmit={send} noValidate className="mt-4 grid gap-3 sm:grid-cols-[2fr_1fr_auto] sm:items-end">
+        <TextField label="Invite by e-mail" type="email" {...register('email')} error={errors.email?.message} />
+        <SelectField label="As" {...register('role')} options={EVENT_ROLES.map((r) => ({ value: r, label: EVENT_ROLE_LABELS[r] }))} error={errors.role?.message} />
+        <Button type="submit" busy={invite.isPending}>
+          Send the invitation
+        </Button>
+      </form>
+      {formError ? <Notice tone="danger">{formError}</Notice> : null}
+      {invite.isSuccess ? <Notice tone="ok">Sent. The link works once.</Notice> : null}
+    </>
+  );
+}
 
 /** Organisers, judges and gate staff of the show; invitations by e-mail (a link that works once). */
 export function PeoplePanel({ show }: { show: EventDetail }) {
-  const people = usePeople(show.id);
-  const invite = useInvite(show.id);
+  const people = useShowPeople(show.id);
   const revoke = useRevokeInvitation(show.id);
   const remove = useRemoveMember(show.id);
-  const [email, setEmail] = useState('');
-  const [role, setRole] = useState<EventRole>('judge');
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const all = { ...fieldErrors(invite.error), ...errors };
   const organisers = people.data?.members.filter((m) => m.role === 'organiser').length ?? 0;
-
-  const send = (e: FormEvent) => {
-    e.preventDefault();
-    const parsed = InvitationCreateSchema.safeParse({ email, role });
-    if (!parsed.success) return setErrors(fieldsFromIssues(parsed.error.issues));
-    setErrors({});
-    invite.mutate(parsed.data, { onSuccess: () => setEmail('') });
-  };
 
   return (
     <Panel title="People">
@@ -65,14 +81,7 @@ export function PeoplePanel({ show }: { show: EventDetail }) {
           </ul>
         </>
       ) : null}
-      <form onSubmit={send} noValidate className="mt-4 grid gap-3 sm:grid-cols-[2fr_1fr_auto] sm:items-end">
-        <TextField label="Invite by e-mail" type="email" value={email} onChange={(e) => setEmail(e.target.value)} error={all.email} />
-        <SelectField label="As" value={role} onChange={(e) => setRole(e.target.value as EventRole)} options={EVENT_ROLES.map((r) => ({ value: r, label: EVENT_ROLE_LABELS[r] }))} error={all.role} />
-        <Button type="submit" busy={invite.isPending}>
-          Send the invitation
-        </Button>
-      </form>
-      {invite.isSuccess ? <Notice tone="ok">Sent. The link works once.</Notice> : null}
+      <InvitationForm showId={show.id} />
     </Panel>
   );
 }

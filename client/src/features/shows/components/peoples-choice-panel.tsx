@@ -7,14 +7,21 @@ import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { Notice } from '@client/components/ui/notice';
 import { Panel } from '@client/components/ui/panel';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
-import { usePeoplesChoice, useSetVotingWindow, useVoidAddress } from '../api/peoples-choice';
+import { useCloseVoting } from '../api/close-voting';
+import { usePeoplesChoice } from '../api/get-peoples-choice';
+import { useOpenVoting } from '../api/open-voting';
+import { useVoidAddress } from '../api/void-address';
 
 const short = (hash: string) => hash.slice(0, ADDRESS_HASH_SHOWN);
 
 /** The organiser's people's choice: open and close voting, the votes per car, and voiding one address's votes. */
 export function PeoplesChoicePanel({ show }: { show: EventDetail }) {
   const query = usePeoplesChoice(show.id);
-  const windowChange = useSetVotingWindow(show.id);
+  const openVoting = useOpenVoting(show.id);
+  const closeVoting = useCloseVoting(show.id);
+  // One window, two endpoints: pressing one forgets the other's old error.
+  const windowBusy = openVoting.isPending || closeVoting.isPending;
+  const windowError = openVoting.error ?? closeVoting.error;
   const voidAddress = useVoidAddress(show.id);
   const [toVoid, setToVoid] = useState<{ addressHash: string; votes: number } | null>(null);
   if (query.isPending) return <Panel title="People’s choice"><LoadingState /></Panel>;
@@ -28,11 +35,11 @@ export function PeoplesChoicePanel({ show }: { show: EventDetail }) {
       title="People’s choice"
       actions={
         pc.open ? (
-          <Button variant="danger" busy={windowChange.isPending} onClick={() => windowChange.mutate(false)}>
+          <Button variant="danger" busy={windowBusy} onClick={() => (openVoting.reset(), closeVoting.mutate())}>
             Close voting
           </Button>
         ) : pc.mayOpen ? (
-          <Button busy={windowChange.isPending} onClick={() => windowChange.mutate(true)}>
+          <Button busy={windowBusy} onClick={() => (closeVoting.reset(), openVoting.mutate())}>
             {pc.openedAt ? 'Reopen voting' : 'Open voting'}
           </Button>
         ) : null
@@ -46,7 +53,7 @@ export function PeoplesChoicePanel({ show }: { show: EventDetail }) {
         ) : (
           <p className="text-graphite">Voting can be opened on show day and while the show is being judged.</p>
         )}
-        {windowChange.error ? <Notice tone="danger">{windowChange.error.message}</Notice> : null}
+        {windowError ? <Notice tone="danger">{windowError.message}</Notice> : null}
         {voidAddress.isSuccess ? <Notice tone="ok">{countOf(voidAddress.data.voided, 'vote')} voided.</Notice> : null}
         {voidAddress.error ? <Notice tone="danger">{voidAddress.error.message}</Notice> : null}
 

@@ -5,7 +5,3 @@ export const showTime = (iso: string, timeZone: string) =>
   formatInZone(iso, timeZone, { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
 
 export const showDay = (iso: string, timeZone: string) => formatInZone(iso, timeZone, { weekday: 'short', day: 'numeric', month: 'long', year: 'numeric' });
-
-/** The server's field errors, when the error carries them. */
-export const fieldErrors = (error: unknown): Record<string, string> =>
-  error && typeof error === 'object' && 'fields' in error ? ((error as { fields: Record<string, string> }).fields ?? {}) : {};

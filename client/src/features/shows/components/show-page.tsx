@@ -58,7 +58,7 @@ export function ShowPage() {
       {a.manage ? (
         <Panel title="Settings">
           {update.isSuccess ? <Notice tone="ok">Saved.</Notice> : null}
-          <ShowSettingsForm key={show.id} show={show} submitLabel="Save settings" busy={update.isPending} serverError={update.error} onSubmit={(input) => update.mutate(input)} />
+          <ShowSettingsForm key={show.id} show={show} submitLabel="Save settings" busy={update.isPending} onSubmit={(input) => update.mutateAsync(input)} />
         </Panel>
       ) : null}
       <p>

@@ -1,20 +1,41 @@
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
+import { useForm, type FieldErrors, type Resolver } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { EventCreateSchema, type EventCreateInput, type EventDetail } from '@shared/schemas/show';
 import { currencyDecimals, isKnownCurrency, parseMoney } from '@shared/calc/money';
 import { instantToWallTime, isValidTimeZone, wallTimeToInstant } from '@shared/calc/time-zone';
-import { fieldsFromIssues } from '@shared/errors';
+import { applyServerErrors } from '@client/lib/form-errors';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
 import { TextField } from '@client/components/ui/text-field';
 import { TextAreaField } from '@client/components/ui/text-area-field';
-import { fieldErrors } from './show-dates';
 
 const ZONES: string[] = (Intl as { supportedValuesOf?: (k: string) => string[] }).supportedValuesOf?.('timeZone') ?? [];
 const DATE_FIELDS = ['startsAt', 'endsAt', 'registrationOpensAt', 'registrationClosesAt'] as const;
 
-type Draft = Record<string, string>;
+/**
+ * The boxes as typed, named as the schema's fields so that its errors (and the server's) land under
+ * them: times are wall times on the show's clock, the fee has decimals, numbers are text.
+ */
+type SettingsValues = {
+  name: string;
+  slug: string;
+  venueName: string;
+  venueAddress: string;
+  timeZone: string;
+  startsAt: string;
+  endsAt: string;
+  registrationOpensAt: string;
+  registrationClosesAt: string;
+  capacity: string;
+  entryFee: string;
+  currency: string;
+  refundRule: { fullRefundUntil: string; afterwardsPercent: string };
+  description: string;
+};
+const FIELD_NAMES = ['name', 'slug', 'venueName', 'venueAddress', 'timeZone', ...DATE_FIELDS, 'capacity', 'entryFee', 'currency', 'refundRule.fullRefundUntil', 'refundRule.afterwardsPercent', 'description'] as const;
 
-function draftFrom(show?: EventDetail): Draft {
+function valuesFrom(show?: EventDetail): SettingsValues {
   const tz = show?.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone;
   const wall = (iso: string | null | undefined) => (iso ? instantToWallTime(iso, tz) : '');
   const decimals = currencyDecimals(show?.currency ?? 'USD');
@@ -29,89 +50,89 @@ function draftFrom(show?: EventDetail): Draft {
     registrationOpensAt: wall(show?.registrationOpensAt),
     registrationClosesAt: wall(show?.registrationClosesAt),
     capacity: show?.capacity ? String(show.capacity) : '',
-    fee: show ? (show.entryFee / 10 ** decimals).toFixed(decimals) : '0',
+    entryFee: show ? (show.entryFee / 10 ** decimals).toFixed(decimals) : '0',
     currency: show?.currency ?? 'USD',
-    fullRefundUntil: wall(show?.refundRule.fullRefundUntil),
-    afterwardsPercent: String(show?.refundRule.afterwardsPercent ?? 0),
+    refundRule: { fullRefundUntil: wall(show?.refundRule.fullRefundUntil), afterwardsPercent: String(show?.refundRule.afterwardsPercent ?? 0) },
     description: show?.description ?? '',
   };
 }
 
-/** Turns what was typed (wall times in the show's zone, a fee with decimals) into the API's input, or field errors. */
-function toInput(d: Draft): { input?: EventCreateInput; errors: Record<string, string> } {
-  const errors: Record<string, string> = {};
-  const zoneOk = isValidTimeZone(d.timeZone!);
-  const instant = (field: string, optional = false) => {
-    const v = d[field] ?? '';
-    if (!v) {
-      if (!optional) errors[field] = 'Pick a date and time.';
-      return optional ? null : '';
-    }
-    return zoneOk ? wallTimeToInstant(v, d.timeZone!) : v;
-  };
-  const currency = d.currency!.trim().toUpperCase();
-  const fee = isKnownCurrency(currency) ? parseMoney(d.fee ?? '', currency) : 0;
-  if (fee === null) errors.entryFee = `Type the fee as an amount with at most ${currencyDecimals(currency)} decimals.`;
-  const raw = {
-    name: d.name,
-    slug: d.slug,
-    venueName: d.venueName,
-    venueAddress: d.venueAddress,
-    timeZone: d.timeZone,
-    ...Object.fromEntries(DATE_FIELDS.map((f) => [f, instant(f)])),
-    capacity: d.capacity ? Number(d.capacity) : null,
+/**
+ * What was typed → the API's input (wall times to instants in the show's zone, the fee to minor units),
+ * with the problems only the conversion can see: an empty date, a fee that is not an amount.
+ */
+function toInput(v: SettingsValues): { input: Record<string, unknown>; problems: Partial<Record<keyof SettingsValues, string>> } {
+  const problems: Partial<Record<keyof SettingsValues, string>> = {};
+  const zoneOk = isValidTimeZone(v.timeZone);
+  const instant = (wall: string) => (zoneOk ? wallTimeToInstant(wall, v.timeZone) : wall);
+  for (const field of DATE_FIELDS) if (!v[field]) problems[field] = 'Pick a date and time.';
+  const currency = v.currency.trim().toUpperCase();
+  const fee = isKnownCurrency(currency) ? parseMoney(v.entryFee, currency) : 0;
+  if (fee === null) problems.entryFee = `Type the fee as an amount with at most ${currencyDecimals(currency)} decimals.`;
+  const input = {
+    name: v.name,
+    slug: v.slug,
+    venueName: v.venueName,
+    venueAddress: v.venueAddress,
+    timeZone: v.timeZone,
+    ...Object.fromEntries(DATE_FIELDS.map((f) => [f, v[f] ? instant(v[f]) : ''])),
+    capacity: v.capacity ? Number(v.capacity) : null,
     entryFee: fee ?? 0,
     currency,
-    refundRule: { fullRefundUntil: instant('fullRefundUntil', true), afterwardsPercent: Number(d.afterwardsPercent || 0) },
-    description: d.description,
+    refundRule: { fullRefundUntil: v.refundRule.fullRefundUntil ? instant(v.refundRule.fullRefundUntil) : null, afterwardsPercent: Number(v.refundRule.afterwardsPercent || 0) },
+    description: v.description,
   };
-  const parsed = EventCreateSchema.safeParse(raw);
-  if (!parsed.success) Object.assign(errors, fieldsFromIssues(parsed.error.issues));
-  return Object.keys(errors).length ? { errors } : { input: parsed.data, errors };
+  return { input, problems };
 }
 
-/** The show's settings, for a new show and for changes; times are typed on the show's own clock. */
-export function ShowSettingsForm({ show, submitLabel, busy, serverError, onSubmit }: { show?: EventDetail; submitLabel: string; busy: boolean; serverError: unknown; onSubmit: (input: EventCreateInput) => void }) {
-  const [draft, setDraft] = useState<Draft>(() => draftFrom(show));
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const all = { ...fieldErrors(serverError), ...errors };
-  const err = (f: string) => all[f] ?? all[`refundRule.${f}`];
-  const bind = (f: string) => ({ value: draft[f] ?? '', onChange: (e: { target: { value: string } }) => setDraft((d) => ({ ...d, [f]: e.target.value })), error: err(f === 'fee' ? 'entryFee' : f) });
+const checkInput = zodResolver(EventCreateSchema as never) as unknown as Resolver<SettingsValues, unknown, EventCreateInput>;
 
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    const { input, errors: found } = toInput(draft);
-    setErrors(found);
-    if (input) onSubmit(input);
-  };
+/** The shared schema checks the converted input; the conversion's own problems win on their fields. */
+const settingsResolver: Resolver<SettingsValues, unknown, EventCreateInput> = async (values, context, options) => {
+  const { input, problems } = toInput(values);
+  const checked = await checkInput(input as unknown as SettingsValues, context, options);
+  if (!Object.keys(problems).length) return checked;
+  const errors: FieldErrors<SettingsValues> = { ...checked.errors };
+  for (const [field, message] of Object.entries(problems)) errors[field as keyof SettingsValues] = { type: 'conversion', message } as never;
+  return { values: {}, errors };
+};
+
+/** The show's settings, for a new show and for changes; times are typed on the show's own clock. */
+export function ShowSettingsForm({ show, submitLabel, busy, onSubmit }: { show?: EventDetail; submitLabel: string; busy: boolean; onSubmit: (input: EventCreateInput) => Promise<unknown> }) {
+  const [formError, setFormError] = useState('');
+  const { register, handleSubmit, setError, formState: { errors } } = useForm<SettingsValues, unknown, EventCreateInput>({ resolver: settingsResolver, defaultValues: valuesFrom(show) });
+  const submit = handleSubmit(async (input) => {
+    setFormError('');
+    await onSubmit(input).catch((err: unknown) => setFormError(applyServerErrors(err, setError, FIELD_NAMES)));
+  });
 
   return (
     <form onSubmit={submit} noValidate className="grid gap-4 md:grid-cols-2">
-      <TextField label="Name" {...bind('name')} className="md:col-span-2" />
-      <TextField label="Address of the public page" hint="/e/ followed by this: lowercase letters, digits, hyphens." {...bind('slug')} />
-      <TextField label="Time zone (IANA name)" hint="All times below are on this clock, e.g. America/Chicago." list="time-zones" {...bind('timeZone')} />
+      <TextField label="Name" {...register('name')} error={errors.name?.message} className="md:col-span-2" />
+      <TextField label="Address of the public page" hint="/e/ followed by this: lowercase letters, digits, hyphens." {...register('slug')} error={errors.slug?.message} />
+      <TextField label="Time zone (IANA name)" hint="All times below are on this clock, e.g. America/Chicago." list="time-zones" {...register('timeZone')} error={errors.timeZone?.message} />
       <datalist id="time-zones">
         {ZONES.map((z) => (
           <option key={z} value={z} />
         ))}
       </datalist>
-      <TextField label="Venue" {...bind('venueName')} />
-      <TextField label="Venue address" {...bind('venueAddress')} />
-      <TextField type="datetime-local" label="Show starts" {...bind('startsAt')} />
-      <TextField type="datetime-local" label="Show ends" {...bind('endsAt')} />
-      <TextField type="datetime-local" label="Entries open" {...bind('registrationOpensAt')} />
-      <TextField type="datetime-local" label="Entries close" hint="Before the show starts." {...bind('registrationClosesAt')} />
-      <TextField inputMode="numeric" label="Capacity of the show" hint="Empty for no limit; classes can have their own." {...bind('capacity')} />
+      <TextField label="Venue" {...register('venueName')} error={errors.venueName?.message} />
+      <TextField label="Venue address" {...register('venueAddress')} error={errors.venueAddress?.message} />
+      <TextField type="datetime-local" label="Show starts" {...register('startsAt')} error={errors.startsAt?.message} />
+      <TextField type="datetime-local" label="Show ends" {...register('endsAt')} error={errors.endsAt?.message} />
+      <TextField type="datetime-local" label="Entries open" {...register('registrationOpensAt')} error={errors.registrationOpensAt?.message} />
+      <TextField type="datetime-local" label="Entries close" hint="Before the show starts." {...register('registrationClosesAt')} error={errors.registrationClosesAt?.message} />
+      <TextField inputMode="numeric" label="Capacity of the show" hint="Empty for no limit; classes can have their own." {...register('capacity')} error={errors.capacity?.message} />
       <div className="grid grid-cols-[1fr_7rem] gap-2">
-        <TextField inputMode="decimal" label="Entry fee" hint="0 for a free show." {...bind('fee')} />
-        <TextField label="Currency" hint="ISO 4217" maxLength={3} {...bind('currency')} />
+        <TextField inputMode="decimal" label="Entry fee" hint="0 for a free show." {...register('entryFee')} error={errors.entryFee?.message} />
+        <TextField label="Currency" hint="ISO 4217" maxLength={3} {...register('currency')} error={errors.currency?.message} />
       </div>
-      <TextField type="datetime-local" label="Full refund until" hint="Empty: no full-refund period." {...bind('fullRefundUntil')} />
-      <TextField inputMode="numeric" label="Refund after that date (%)" hint="0 for none." {...bind('afterwardsPercent')} />
-      <TextAreaField label="Description" rows={5} {...bind('description')} className="md:col-span-2" />
-      {serverError && !Object.keys(fieldErrors(serverError)).length ? (
+      <TextField type="datetime-local" label="Full refund until" hint="Empty: no full-refund period." {...register('refundRule.fullRefundUntil')} error={errors.refundRule?.fullRefundUntil?.message} />
+      <TextField inputMode="numeric" label="Refund after that date (%)" hint="0 for none." {...register('refundRule.afterwardsPercent')} error={errors.refundRule?.afterwardsPercent?.message} />
+      <TextAreaField label="Description" rows={5} {...register('description')} error={errors.description?.message} className="md:col-span-2" />
+      {formError ? (
         <div className="md:col-span-2">
-          <Notice tone="danger">{(serverError as Error).message}</Notice>
+          <Notice tone="danger">{formError}</Notice>
         </div>
       ) : null}
       <div className="md:col-span-2">

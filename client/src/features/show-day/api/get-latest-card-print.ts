@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { CardPrint } from '@shared/schemas/card-print';
 import { api } from '@client/lib/api';
 import { showDayKeys } from './show-day-keys';
@@ -21,15 +21,3 @@ export const latestCardPrintQueryOptions = (eventId: number, classId: number | n
   });
 
 export const useLatestCardPrint = (eventId: number, classId: number | null) => useQuery(latestCardPrintQueryOptions(eventId, classId));
-
-export const startCardPrint = (eventId: number, classId: number | null) =>
-  api<{ print: CardPrint }>(`/api/events/${eventId}/card-prints`, { method: 'POST', body: { classId } }).then((r) => r.print);
-
-/** Starts a print (or gets the one already running) and shows it at once; polling takes over from there. */
-export function useStartCardPrint(eventId: number) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (classId: number | null) => startCardPrint(eventId, classId),
-    onSuccess: (print, classId) => qc.setQueryData(latestCardPrintQueryOptions(eventId, classId).queryKey, print),
-  });
-}
