@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { shortText } from './text';
 import { SCORE_ITEMS_PER_REQUEST_MAX } from '../judging/sheet-state';
 
 // The judge's phone reads these without zod (they are in the code it keeps offline): they live in judging/sheet-state.ts.
@@ -41,7 +42,7 @@ export const ScoreItemSchema = z.object({
   entryId: id('Car'),
   criterionId: id('Criterion'),
   points: z.number({ error: 'Points must be a whole number.' }).int({ error: 'Points must be a whole number.' }).min(0, { error: 'Points cannot be below 0.' }),
-  comment: z.string().trim().max(SCORE_COMMENT_MAX, { error: `A comment must be at most ${SCORE_COMMENT_MAX} characters.` }).default(''),
+  comment: shortText('Comment', SCORE_COMMENT_MAX).default(''),
 });
 export type ScoreItem = z.infer<typeof ScoreItemSchema>;
 
@@ -49,7 +50,7 @@ export const NoteItemSchema = z.object({
   clientId,
   deviceTime,
   entryId: id('Car'),
-  comment: z.string().trim().max(SHEET_NOTE_MAX, { error: `A comment must be at most ${SHEET_NOTE_MAX} characters.` }),
+  comment: shortText('Comment', SHEET_NOTE_MAX),
 });
 export type NoteItem = z.infer<typeof NoteItemSchema>;
 

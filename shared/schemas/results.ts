@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { shortText } from './text';
 import { ShowResultRulesSchema } from './judging';
 
 export const PRINT_PAPERS = ['letter', 'a4'] as const;
@@ -17,11 +18,7 @@ export const TieBreakCreateSchema = z.object({
     .min(2, { error: 'Order at least two tied cars.' })
     .max(50)
     .refine((ids) => new Set(ids).size === ids.length, { error: 'Each car appears once.' }),
-  reason: z
-    .string({ error: 'Say why the cars are in this order.' })
-    .trim()
-    .min(3, { error: 'Say why the cars are in this order.' })
-    .max(TIE_BREAK_REASON_MAX, { error: `A reason must be at most ${TIE_BREAK_REASON_MAX} characters.` }),
+  reason: shortText('Reason', TIE_BREAK_REASON_MAX).min(3, { error: 'Say why the cars are in this order.' }),
 });
 export type TieBreakCreateInput = z.infer<typeof TieBreakCreateSchema>;
 

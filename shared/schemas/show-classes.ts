@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { CLASSES_PER_EVENT_MAX, EVENT_CAPACITY_MAX, CRITERIA_PER_EVENT_MAX, CRITERION_MAX_POINTS_MAX } from '../constants';
-import { optionalText, requiredText } from './text';
+import { optionalText, requiredLine } from './text';
 
 
 // A show's classes and its judging sheet (the criteria every car is scored on).
@@ -14,7 +14,7 @@ export const CapacitySchema = z
   .nullable();
 
 export const ClassInputSchema = z.object({
-  name: requiredText('Class name', 80),
+  name: requiredLine('Class name', 80),
   description: optionalText('Description', 1000).default(''),
   position: z.number().int().min(0).max(CLASSES_PER_EVENT_MAX).optional(),
   capacity: CapacitySchema.default(null),
@@ -29,7 +29,7 @@ export const ClassUpdateSchema = z.object({
 export type ClassUpdateInput = z.infer<typeof ClassUpdateSchema>;
 
 export const CriterionInputSchema = z.object({
-  name: requiredText('Criterion', 80),
+  name: requiredLine('Criterion', 80),
   maxPoints: z.number({ error: 'Max points must be a whole number.' }).int({ error: 'Max points must be a whole number.' }).min(1, { error: 'At least 1 point.' }).max(CRITERION_MAX_POINTS_MAX),
   weight: z.number({ error: 'Weight must be a number.' }).gt(0, { error: 'Weight must be above 0.' }).max(100, { error: 'Weight must be at most 100.' }),
   tieBreakOrder: z.number().int().min(1).max(CRITERIA_PER_EVENT_MAX).nullable().default(null),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { lineText, shortText } from './text';
 import { ENTRY_STATUSES } from '../constants';
 import { IdSchema } from './params';
 import { EntryStatusSchema } from './entry';
@@ -19,7 +20,7 @@ export const EntryTableQuerySchema = z.object({
   dir: z.enum(['asc', 'desc'], { error: 'Direction is asc or desc.' }).default('asc'),
   classId: optionalId,
   status: z.preprocess((v) => (v === '' ? undefined : v), z.enum(ENTRY_STATUSES, { error: 'Unknown status.' }).optional()),
-  q: z.string().trim().max(ENTRY_SEARCH_MAX_LENGTH, { error: `Search is at most ${ENTRY_SEARCH_MAX_LENGTH} characters.` }).optional(),
+  q: lineText('Search', ENTRY_SEARCH_MAX_LENGTH).optional(),
 });
 export type EntryTableQuery = z.infer<typeof EntryTableQuerySchema>;
 /** The CSV export takes the same filters and sort, without paging. */
@@ -100,7 +101,7 @@ export type EntryTablePage = z.infer<typeof EntryTablePageSchema>;
 export const ChangeClassSchema = z.object({ classId: z.number({ error: 'Pick a class.' }).int().positive({ error: 'Pick a class.' }) });
 export type ChangeClassInput = z.infer<typeof ChangeClassSchema>;
 export const MarkPaidSchema = z.object({
-  note: z.string({ error: 'Say how it was paid (a note).' }).trim().min(1, { error: 'Say how it was paid (a note).' }).max(PAYMENT_NOTE_MAX_LENGTH, { error: `The note is at most ${PAYMENT_NOTE_MAX_LENGTH} characters.` }),
+  note: shortText('Payment note', PAYMENT_NOTE_MAX_LENGTH).min(1, { error: 'Say how it was paid (a note).' }),
 });
 export type MarkPaidInput = z.infer<typeof MarkPaidSchema>;
 
@@ -109,7 +110,7 @@ export type MarkPaidInput = z.infer<typeof MarkPaidSchema>;
 /** What was scanned or typed: a card's QR (its /c/<code> URL or the bare code) or an entry number. */
 export const GateLookupQuerySchema = z
   .object({
-    code: z.string().trim().max(300, { error: 'That code is too long to be a card.' }).optional(),
+    code: lineText('Code', 300).optional(),
     number: z.coerce.number({ error: 'Entry number is a whole number.' }).int({ error: 'Entry number is a whole number.' }).positive({ error: 'Entry number is a whole number.' }).max(99999).optional(),
   })
   .refine((v) => v.code !== undefined || v.number !== undefined, { error: 'Scan a card or type an entry number.', path: ['number'] });

@@ -3,7 +3,7 @@ import { EVENT_FEE_MAX_MINOR, EVENT_NAME_MAX_LENGTH, EVENT_ROLES, EVENT_SLUG_MAX
 import { EVENT_ACTION_NAMES } from '../event-lifecycle';
 import { isKnownCurrency } from '../calc/money';
 import { isValidTimeZone } from '../calc/time-zone';
-import { optionalText, requiredText } from './text';
+import { optionalText, requiredLine } from './text';
 import { CapacitySchema, CriterionSchema, EventClassSchema } from './show-classes';
 
 // A show's own fields, its lifecycle steps and how the API answers with a show.
@@ -31,9 +31,9 @@ export const RefundRuleSchema = z.object({
 });
 
 const eventShape = {
-  name: requiredText('Name', EVENT_NAME_MAX_LENGTH),
+  name: requiredLine('Name', EVENT_NAME_MAX_LENGTH),
   slug: EventSlugSchema,
-  venueName: requiredText('Venue', 200),
+  venueName: requiredLine('Venue', 200),
   venueAddress: optionalText('Venue address', 400).default(''),
   timeZone: TimeZoneSchema,
   startsAt: instant('Start'),

@@ -30,8 +30,21 @@ export const shortText = (label: string, max = 200) =>
     .trim()
     .max(max, { error: `${label} must be at most ${max} characters.` });
 
-/** A trimmed text field that must not be empty, e.g. `requiredText('Venue', 200)`. */
+/** A trimmed text field that may hold several lines and must not be empty, e.g. a payment note. */
 export const requiredText = (label: string, max = 200) => shortText(label, max).min(1, { error: `${label} is required.` });
 
-/** A trimmed text field that may be empty. */
+/** A trimmed text field that may hold several lines and may be empty, e.g. a description. */
 export const optionalText = (label: string, max = 200) => shortText(label, max);
+
+/**
+ * One line of text (a name, a title, a search): a line break or tab pasted into it becomes one
+ * space, since a name printed on a card or a certificate has no second line.
+ */
+export const lineText = (label: string, max = 200) =>
+  text(label)
+    .overwrite((v) => v.replace(/[\t\n]+/g, ' '))
+    .trim()
+    .max(max, { error: `${label} must be at most ${max} characters.` });
+
+/** One line of text that must not be empty, e.g. `requiredLine('Venue', 200)`. */
+export const requiredLine = (label: string, max = 200) => lineText(label, max).min(1, { error: `${label} is required.` });

@@ -8,6 +8,7 @@ import { AccountUpdateSchema, PasswordResetConfirmSchema, PasswordResetRequestSc
 import { apiClient, type ApiClient } from '../../support/api-client';
 import { createUser, uniqueEmail } from '../../support/factories';
 import { smallPng } from '../../support/images';
+import { textPaths, withValueAt } from '../../support/zod-text-paths';
 
 // Every text field of every write route, fed arbitrary Unicode with NUL, other control characters
 // and lone surrogates mixed in: the answer is never a 5xx, and a 4xx leaves the stored data as it was.
@@ -15,40 +16,6 @@ import { smallPng } from '../../support/images';
 
 // A few runs per field keep the suite quick; PROPERTY_RUNS=100 npm test -- tests/server/api/text-fields.property.test.ts digs deeper.
 const RUNS = Number(process.env.PROPERTY_RUNS ?? 4);
-
-/** Paths of every string leaf of a zod schema ("lines.0.value" for the first row of a list). */
-function textPaths(schema: z.ZodType, prefix: string[] = []): string[][] {
-  const def = (schema as unknown as { _zod: { def: Record<string, unknown> & { type: string } } })._zod.def;
-  const inner = (key: string) => textPaths(def[key] as z.ZodType, prefix);
-  switch (def.type) {
-    case 'string':
-      return [prefix];
-    case 'object':
-      return Object.entries(def.shape as Record<string, z.ZodType>).flatMap(([k, s]) => textPaths(s, [...prefix, k]));
-    case 'array':
-      return textPaths(def.element as z.ZodType, [...prefix, '0']);
-    case 'optional':
-    case 'nullable':
-    case 'default':
-    case 'prefault':
-    case 'nonoptional':
-    case 'readonly':
-    case 'catch':
-      return inner('innerType');
-    case 'pipe':
-      return inner('in');
-    default:
-      return [];
-  }
-}
-
-function withValueAt(base: object, path: string[], value: string): object {
-  const copy = structuredClone(base) as Record<string, unknown>;
-  let at = copy;
-  for (const key of path.slice(0, -1)) at = (at[key] ??= {}) as Record<string, unknown>;
-  at[path[path.length - 1]!] = value;
-  return copy;
-}
 
 const char = (from: number, to: number) => fc.integer({ min: from, max: to }).map((c) => String.fromCharCode(c));
 const piece = fc.oneof(
