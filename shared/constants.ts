@@ -37,6 +37,16 @@ export const EVENT_STATUS_LABELS: Record<EventStatus, string> = {
 /** Statuses after which the show is over: its entries no longer hold a build. */
 export const EVENT_OVER_STATUSES: readonly EventStatus[] = ['results_published', 'archived'];
 
+/**
+ * A build's private fields a show may ask for on its entry form (it always sees the entrant's name,
+ * e-mail and phone, which running a show needs); the entrant agrees to share them when entering.
+ */
+export const ASKABLE_PRIVATE_FIELDS = ['plate', 'vin', 'address'] as const;
+export type AskablePrivateField = (typeof ASKABLE_PRIVATE_FIELDS)[number];
+export const ASKABLE_PRIVATE_FIELD_LABELS: Record<AskablePrivateField, string> = { plate: 'Plate', vin: 'VIN', address: 'Address' };
+/** The same in running text: "your plate and VIN". */
+export const ASKABLE_PRIVATE_FIELD_WORDS: Record<AskablePrivateField, string> = { plate: 'plate', vin: 'VIN', address: 'address' };
+
 export const ENTRY_STATUSES = ['awaiting_payment', 'confirmed', 'waiting_list', 'checked_in', 'withdrawn'] as const;
 export type EntryStatus = (typeof ENTRY_STATUSES)[number];
 export const ENTRY_STATUS_LABELS: Record<EntryStatus, string> = {

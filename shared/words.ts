@@ -30,3 +30,9 @@ export function megabytes(bytes: number): string {
   const value = bytes / (1024 * 1024);
   return `${formatNumber(value, { decimals: Number.isInteger(value) ? 0 : 1 })} MB`;
 }
+
+/** "plate", "plate and VIN", "plate, VIN and address": a short list in running English. */
+export function listInWords(items: readonly string[]): string {
+  if (items.length <= 1) return items[0] ?? '';
+  return `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
+}

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import type { EntryStatus } from '@shared/constants';
+import type { AskablePrivateField, EntryStatus } from '@shared/constants';
 import type { Build } from './build';
 import type { Event } from './event';
 import type { EventClass } from './event-class';
@@ -33,6 +33,8 @@ export class Entry extends Model<InferAttributes<Entry>, InferCreationAttributes
   declare waitlistedAt: CreationOptional<Date | null>;
   declare offerExpiresAt: CreationOptional<Date | null>;
   declare checkedInAt: CreationOptional<Date | null>;
+  /** The private build fields the entrant agreed to share with the show's organisers when entering. */
+  declare sharedFields: CreationOptional<AskablePrivateField[]>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -68,6 +70,7 @@ export class Entry extends Model<InferAttributes<Entry>, InferCreationAttributes
         waitlistedAt: { type: DataTypes.DATE, allowNull: true },
         offerExpiresAt: { type: DataTypes.DATE, allowNull: true },
         checkedInAt: { type: DataTypes.DATE, allowNull: true },
+        sharedFields: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false, defaultValue: [] },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import type { EventStatus } from '@shared/constants';
+import type { AskablePrivateField, EventStatus } from '@shared/constants';
 import type { RefundRule } from '@shared/calc/refund';
 import { DEFAULT_RESULT_RULES, type ShowResultRules } from '@shared/schemas/judging';
 import type { EventClass } from './event-class';
@@ -25,6 +25,7 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
   declare currency: string;
   declare refundRule: RefundRule;
   declare description: string;
+  declare asksFor: CreationOptional<AskablePrivateField[]>;
   declare lastEntryNumber: CreationOptional<number>;
   declare createdBy: number | null;
   declare judgingClosedAt: CreationOptional<Date | null>;
@@ -57,6 +58,7 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
         entryFee: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         currency: { type: DataTypes.STRING(3), allowNull: false },
         refundRule: { type: DataTypes.JSONB, allowNull: false },
+        asksFor: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false, defaultValue: [] },
         description: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         lastEntryNumber: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdBy: { type: DataTypes.INTEGER, allowNull: true },

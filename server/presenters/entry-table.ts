@@ -1,6 +1,8 @@
 import { paymentStateOf, type EntryTableRow, type PaymentIssueRow, type RefundSent } from '@shared/schemas/show-day';
 import type { Entry } from '../models/entry';
 import type { PaymentIssue } from '../models/payment-issue';
+import type { Actor } from '../policies/actor';
+import { entrantFieldsVisibleTo, type EntrantField } from '../policies/private-fields';
 
 const refundOf = (r: { refundAmount: number | null; refundRef: string | null; refundedAt: Date | null }): RefundSent | null =>
   r.refundRef && r.refundedAt && r.refundAmount !== null ? { amount: r.refundAmount, at: r.refundedAt.toISOString(), ref: r.refundRef } : null;
@@ -16,11 +18,12 @@ const presentIssue = (i: PaymentIssue): PaymentIssueRow => ({
 });
 
 /**
- * A row of the organiser's entries table. It carries the entrant's e-mail and phone and the
- * build's private fields: only the entries-table routes, which the policy opens to the show's
- * organisers alone, use it.
+ * A row of the organiser's entries table. Of the entrant's contact details and the build's private
+ * fields it carries only what the private-field policy lets this person see (null for the rest).
  */
-export function presentEntryTableRow(e: Entry, places: Map<number, number>): EntryTableRow {
+export function presentEntryTableRow(e: Entry, places: Map<number, number>, actor: Actor): EntryTableRow {
+  const sees = entrantFieldsVisibleTo(actor, e);
+  const only = <T>(field: EntrantField, value: T) => (sees.has(field) ? value : null);
   return {
     id: e.id,
     number: e.number,
@@ -42,7 +45,8 @@ export function presentEntryTableRow(e: Entry, places: Map<number, number>): Ent
     checkedInAt: e.checkedInAt ? e.checkedInAt.toISOString() : null,
     waitingPosition: places.get(e.id) ?? null,
     createdAt: e.createdAt.toISOString(),
-    contact: { email: e.owner?.email ?? '', phone: e.build?.ownerPhone ?? null },
-    privateFields: { vin: e.build?.vin ?? null, plate: e.build?.plate ?? null, address: e.build?.ownerAddress ?? null },
+    contact: { email: only('email', e.owner?.email ?? null) ?? '', phone: only('phone', e.build?.ownerPhone ?? null) },
+    privateFields: { vin: only('vin', e.build?.vin ?? null), plate: only('plate', e.build?.plate ?? null), address: only('address', e.build?.ownerAddress ?? null) },
+    sharedFields: [...e.sharedFields],
   };
 }

@@ -35,6 +35,7 @@ export function presentEventSummary(e: Event, myRoles: EventRole[] = []): EventS
     registrationClosesAt: e.registrationClosesAt.toISOString(),
     entryFee: e.entryFee,
     currency: e.currency,
+    asksFor: [...e.asksFor],
     myRoles,
     publicUrl: eventPublicUrl(e.slug),
     logo: presentEventLogo(e.logo),

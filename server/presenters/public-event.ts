@@ -20,6 +20,7 @@ export function presentPublicEvent(event: Event, entries: Entry[], results: Resu
     status: event.status,
     statusLabel: EVENT_STATUS_LABELS[event.status as EventStatus],
     logo: presentEventLogo(event.logo),
+    asksFor: [...event.asksFor],
     takingEntries: event.status === 'registration_open' && event.registrationOpensAt <= now && now < event.registrationClosesAt,
     peoplesChoiceOpen: votingOpen(event),
     venueName: event.venueName,

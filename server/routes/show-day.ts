@@ -8,6 +8,7 @@ import { entriesCsv } from '../services/entries/entry-export';
 import { changeEntryClass, markEntryPaid, moveUpFromWaitingList } from '../services/entries/entry-actions';
 import { gateCheckIn, gateCounts, gateLookup, undoCheckIn } from '../services/show-day/gate';
 import { presentEntryTableRow } from '../presenters/entry-table';
+import type { Actor } from '../policies/actor';
 import { presentGateCard, presentGateCounts } from '../presenters/gate';
 import { presentAuditLine } from '../presenters/event';
 import { loadEntryFor, loadEventFor } from './load-for';
@@ -17,46 +18,46 @@ export const showDayRouter = Router();
 
 showDayRouter.get('/events/:id/entry-table', requireUser, async (req, res) => {
   const query = parseQuery(req, EntryTableQuerySchema);
-  const { event } = await loadEventFor(req, 'viewEntries');
+  const { event, actor } = await loadEventFor(req, 'viewEntries');
   const { rows, total, places } = await listEntryTable(event.id, query);
-  res.json({ rows: rows.map((r) => presentEntryTableRow(r, places)), total, page: query.page, pageSize: query.pageSize, pageCount: Math.max(1, Math.ceil(total / query.pageSize)) });
+  res.json({ rows: rows.map((r) => presentEntryTableRow(r, places, actor)), total, page: query.page, pageSize: query.pageSize, pageCount: Math.max(1, Math.ceil(total / query.pageSize)) });
 });
 
 showDayRouter.get('/events/:id/entries.csv', requireUser, async (req, res) => {
   const query = parseQuery(req, EntryExportQuerySchema);
-  const { event } = await loadEventFor(req, 'viewEntries');
+  const { event, actor } = await loadEventFor(req, 'viewEntries');
   const { rows, places } = await listEntriesForExport(event.id, query);
   res.set('Content-Type', 'text/csv; charset=utf-8');
   res.set('Content-Disposition', `attachment; filename="${event.slug}-entries.csv"`);
   res.set('Cache-Control', 'private, no-store');
-  res.send(entriesCsv(rows.map((r) => presentEntryTableRow(r, places))));
+  res.send(entriesCsv(rows.map((r) => presentEntryTableRow(r, places, actor))));
 });
 
-async function respondWithRow(res: import('express').Response, eventId: number, entryId: number) {
+async function respondWithRow(res: import('express').Response, actor: Actor, eventId: number, entryId: number) {
   const { rows, places } = await listEntriesForExport(eventId, { sort: 'number', dir: 'asc' });
   const row = rows.find((r) => r.id === entryId)!;
   const lines = await listAudit(eventId, entryId);
-  res.json({ entry: presentEntryTableRow(row, places), audit: lines.map(presentAuditLine) });
+  res.json({ entry: presentEntryTableRow(row, places, actor), audit: lines.map(presentAuditLine) });
 }
 
 showDayRouter.post('/entries/:id/class', requireUser, async (req, res) => {
   const { classId } = parseBody(req, ChangeClassSchema);
-  const { entry } = await loadEntryFor(req, 'manage');
+  const { entry, actor } = await loadEntryFor(req, 'manage');
   await changeEntryClass(entry.id, classId, currentUser(req));
-  await respondWithRow(res, entry.eventId, entry.id);
+  await respondWithRow(res, actor, entry.eventId, entry.id);
 });
 
 showDayRouter.post('/entries/:id/mark-paid', requireUser, async (req, res) => {
   const { note } = parseBody(req, MarkPaidSchema);
-  const { entry } = await loadEntryFor(req, 'manage');
+  const { entry, actor } = await loadEntryFor(req, 'manage');
   await markEntryPaid(entry.id, note, currentUser(req));
-  await respondWithRow(res, entry.eventId, entry.id);
+  await respondWithRow(res, actor, entry.eventId, entry.id);
 });
 
 showDayRouter.post('/entries/:id/move-up', requireUser, async (req, res) => {
-  const { entry } = await loadEntryFor(req, 'manage');
+  const { entry, actor } = await loadEntryFor(req, 'manage');
   await moveUpFromWaitingList(entry.id, currentUser(req));
-  await respondWithRow(res, entry.eventId, entry.id);
+  await respondWithRow(res, actor, entry.eventId, entry.id);
 });
 
 /** One entry's history for the organiser (who, when, before → after). */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ENTRY_STATUSES } from '../constants';
+import { ASKABLE_PRIVATE_FIELDS, ENTRY_STATUSES } from '../constants';
 import { EventSummarySchema } from './show';
 
 // An owner's entry of a build in a show, and the show's history lines about entries.
@@ -7,6 +7,8 @@ import { EventSummarySchema } from './show';
 export const EntryCreateSchema = z.object({
   buildId: z.number({ error: 'Pick one of your builds.' }).int().positive({ error: 'Pick one of your builds.' }),
   classId: z.number({ error: 'Pick a class.' }).int().positive({ error: 'Pick a class.' }),
+  /** The private fields the entrant agrees to share with the show's organisers (those the show asks for). */
+  shares: z.array(z.enum(ASKABLE_PRIVATE_FIELDS, { error: 'Share the plate, the VIN or the address.' })).max(ASKABLE_PRIVATE_FIELDS.length).default([]),
 });
 export type EntryCreateInput = z.infer<typeof EntryCreateSchema>;
 

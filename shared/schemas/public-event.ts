@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { ASKABLE_PRIVATE_FIELDS } from '../constants';
 import { EVENT_STATUSES } from '../constants';
 import { EventLogoOutSchema } from './show';
 import { PublicResultsSchema } from './results';
@@ -14,6 +15,8 @@ export const PublicEventSchema = z.object({
   statusLabel: z.string(),
   logo: EventLogoOutSchema.nullable(),
   takingEntries: z.boolean(),
+  /** Private fields the entry form asks for beyond name, e-mail and phone (what is asked, never anyone's answer). */
+  asksFor: z.array(z.enum(ASKABLE_PRIVATE_FIELDS)),
   /** People's choice voting is open: each car's page has the vote. */
   peoplesChoiceOpen: z.boolean(),
   venueName: z.string(),

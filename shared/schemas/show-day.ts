@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { lineText, shortText } from './text';
-import { ENTRY_STATUSES } from '../constants';
+import { ASKABLE_PRIVATE_FIELDS, ENTRY_STATUSES } from '../constants';
 import { IdSchema } from './params';
 import { EntryStatusSchema } from './entry';
 
@@ -93,6 +93,8 @@ export const EntryTableRowSchema = z.object({
   contact: z.object({ email: z.string(), phone: z.string().nullable() }),
   /** The build's private fields, organisers only. */
   privateFields: z.object({ vin: z.string().nullable(), plate: z.string().nullable(), address: z.string().nullable() }),
+  /** What the entrant agreed to share when entering (the fields the show asked for then). */
+  sharedFields: z.array(z.enum(ASKABLE_PRIVATE_FIELDS)),
 });
 export type EntryTableRow = z.infer<typeof EntryTableRowSchema>;
 export const EntryTablePageSchema = z.object({ rows: z.array(EntryTableRowSchema), total: z.number(), page: z.number(), pageSize: z.number(), pageCount: z.number() });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { EVENT_FEE_MAX_MINOR, EVENT_NAME_MAX_LENGTH, EVENT_ROLES, EVENT_SLUG_MAX_LENGTH, EVENT_STATUSES, EVENT_TEXT_MAX_LENGTH } from '../constants';
+import { ASKABLE_PRIVATE_FIELDS, EVENT_FEE_MAX_MINOR, EVENT_NAME_MAX_LENGTH, EVENT_ROLES, EVENT_SLUG_MAX_LENGTH, EVENT_STATUSES, EVENT_TEXT_MAX_LENGTH } from '../constants';
 import { EVENT_ACTION_NAMES } from '../event-lifecycle';
 import { isKnownCurrency } from '../calc/money';
 import { isValidTimeZone } from '../calc/time-zone';
@@ -7,6 +7,12 @@ import { optionalText, requiredLine } from './text';
 import { CapacitySchema, CriterionSchema, EventClassSchema } from './show-classes';
 
 // A show's own fields, its lifecycle steps and how the API answers with a show.
+
+/** The private fields a show asks for on its entry form, each once. */
+export const AsksForSchema = z
+  .array(z.enum(ASKABLE_PRIVATE_FIELDS, { error: 'A show may ask for the plate, the VIN or the address.' }))
+  .max(ASKABLE_PRIVATE_FIELDS.length)
+  .refine((v) => new Set(v).size === v.length, { error: 'Ask for each field once.' });
 
 const instant = (label: string) => z.iso.datetime({ offset: true, error: `${label} must be a date and time with its offset (ISO 8601).` });
 
@@ -49,6 +55,7 @@ const eventShape = {
   currency: CurrencySchema,
   refundRule: RefundRuleSchema.default({ fullRefundUntil: null, afterwardsPercent: 0 }),
   description: optionalText('Description', EVENT_TEXT_MAX_LENGTH).default(''),
+  asksFor: AsksForSchema.default([]),
 };
 export const EventFieldsSchema = z.object(eventShape);
 export type EventFields = z.infer<typeof EventFieldsSchema>;
@@ -91,6 +98,7 @@ export const EventUpdateSchema = z.object({
   currency: eventShape.currency,
   refundRule: RefundRuleSchema,
   description: optionalText('Description', EVENT_TEXT_MAX_LENGTH),
+  asksFor: AsksForSchema,
 }).partial();
 export type EventUpdateInput = z.infer<typeof EventUpdateSchema>;
 
@@ -140,6 +148,7 @@ export const EventSummarySchema = z.object({
   registrationClosesAt: z.string(),
   entryFee: z.number(),
   currency: z.string(),
+  asksFor: z.array(z.enum(ASKABLE_PRIVATE_FIELDS)),
   myRoles: z.array(z.enum(EVENT_ROLES)),
   publicUrl: z.string(),
   logo: EventLogoOutSchema.nullable(),

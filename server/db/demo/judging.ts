@@ -53,6 +53,7 @@ export async function seedJudgingShow(organiser: User): Promise<void> {
   const day = (offset: number) => new Date(Date.now() + offset * 86400_000).toISOString().slice(0, 10);
   const show = await createEvent(organiser, {
     ...DEMO_JUDGING_SHOW,
+    asksFor: [],
     // Entered while the dates were ahead; moved to today once the show is on (below).
     startsAt: wallTimeToInstant(`${day(2)}T08:00`, tz),
     endsAt: wallTimeToInstant(`${day(2)}T20:00`, tz),
@@ -73,7 +74,7 @@ export async function seedJudgingShow(organiser: User): Promise<void> {
   const entries: Entry[] = [];
   for (const [email, title, c] of CARS) {
     const build = (await Build.findOne({ where: { title } }))!;
-    entries.push(await registerEntry(await person(email), show.id, { buildId: build.id, classId: classes[c]!.id }));
+    entries.push(await registerEntry(await person(email), show.id, { buildId: build.id, classId: classes[c]!.id, shares: [] }));
   }
   await takeLifecycleStep(show.id, organiser, 'close_registration');
   await takeLifecycleStep(show.id, organiser, 'open_gate');

@@ -50,6 +50,7 @@ export async function seedShowDay(): Promise<void> {
   // Made as a show still taking entries, then walked to show day, then dated today on its own clock.
   const show = await createEvent(organiser, {
     ...DEMO_SHOW_DAY_SHOW,
+    asksFor: ['plate'], // the show's insurer wants each car's plate: entrants agree when entering
     startsAt: new Date(now + 2 * DAY).toISOString(),
     endsAt: new Date(now + 2 * DAY + 10 * 3600_000).toISOString(),
     registrationOpensAt: new Date(now - DAY).toISOString(),
@@ -66,7 +67,7 @@ export async function seedShowDay(): Promise<void> {
   for (const [email, title, cls, state] of ENTRANTS) {
     const build = await Build.findOne({ where: { title } });
     if (!build) continue;
-    const entry = await registerEntry(await person(email), show.id, { buildId: build.id, classId: classes[cls]!.id });
+    const entry = await registerEntry(await person(email), show.id, { buildId: build.id, classId: classes[cls]!.id, shares: ['plate'] });
     if (state !== 'unpaid') await confirmEntryPayment(entry.id, `demo_pay_cinder_${entry.id}`);
     if (state === 'in') arrived.push(entry.number!);
   }

@@ -49,6 +49,7 @@ async function seedShows() {
   // The show taking entries.
   const open = await createEvent(organiser, {
     ...DEMO_OPEN_SHOW,
+    asksFor: [],
     startsAt: at(30, '08:00', DEMO_OPEN_SHOW.timeZone),
     endsAt: at(31, '17:00', DEMO_OPEN_SHOW.timeZone),
     registrationOpensAt: at(-10, '09:00', DEMO_OPEN_SHOW.timeZone),
@@ -61,7 +62,7 @@ async function seedShows() {
   await addPeople(open.id, organiser.id);
   await takeLifecycleStep(open.id, organiser, 'open_registration');
   const [early, postwar, trucks] = classes as [(typeof classes)[0], (typeof classes)[0], (typeof classes)[0], (typeof classes)[0]];
-  const enter = async (ownerEmail: string, title: string, classId: number) => registerEntry(await person(ownerEmail), open.id, { buildId: (await build(title)).id, classId });
+  const enter = async (ownerEmail: string, title: string, classId: number) => registerEntry(await person(ownerEmail), open.id, { buildId: (await build(title)).id, classId, shares: [] });
   const fastback = await enter('owner@placard.test', '1967 Fastback', postwar.id);
   await confirmEntryPayment(fastback.id, 'demo_pay_fastback');
   await enter('owner@placard.test', '1932 Highboy Roadster', early.id); // awaiting payment
@@ -81,6 +82,7 @@ async function seedShows() {
   // The finished show: entered while open, then walked through show day and judging to the end.
   const done = await createEvent(organiser, {
     ...DEMO_FINISHED_SHOW,
+    asksFor: [],
     startsAt: new Date(now + 2 * DAY).toISOString(),
     endsAt: new Date(now + 2 * DAY + 9 * 3600_000).toISOString(),
     registrationOpensAt: new Date(now - DAY).toISOString(),
@@ -101,7 +103,7 @@ async function seedShows() {
     ['june.okafor@placard.test', '1963 Split-Window Coupe', 1],
     ['reuben.salas@placard.test', '1972 Short-Bed Pickup', 2],
   ] as const) {
-    const e = await registerEntry(await person(email), done.id, { buildId: (await build(title)).id, classId: doneClasses[i]!.id });
+    const e = await registerEntry(await person(email), done.id, { buildId: (await build(title)).id, classId: doneClasses[i]!.id, shares: [] });
     await confirmEntryPayment(e.id, `demo_pay_spring_${e.id}`);
     entered.push(e);
   }

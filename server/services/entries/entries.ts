@@ -1,3 +1,5 @@
+import { ASKABLE_PRIVATE_FIELD_WORDS } from '@shared/constants';
+import { listInWords } from '@shared/words';
 import { Op, type Transaction } from 'sequelize';
 import { EVENT_OVER_STATUSES, ENTRY_PLACE_STATUSES, type EntryStatus } from '@shared/constants';
 import { refundDue } from '@shared/calc/refund';
@@ -49,6 +51,8 @@ export async function registerEntry(person: Person, eventId: number, input: Entr
     if (!build) throw new ValidationError({ buildId: 'No such build.' });
     if (build.ownerId !== person.id) throw new ForbiddenError('You can only enter your own builds.');
     if (!build.published) throw new ValidationError({ buildId: 'Publish the build sheet before entering it in a show.' });
+    const notAgreed = event.asksFor.filter((field) => !input.shares.includes(field));
+    if (notAgreed.length) throw new ValidationError({ shares: `This show asks for your ${listInWords(notAgreed.map((f) => ASKABLE_PRIVATE_FIELD_WORDS[f]))} on its entry form: agree to share it with the organisers to enter.` });
     const existing = await Entry.findOne({ where: { eventId, buildId: build.id }, transaction });
     if (existing) throw new ConflictError('This build is already entered in this show.', { buildId: existing.status === 'withdrawn' ? 'This build was entered and withdrawn; a build enters a show once.' : 'Already entered in this show.' });
 
@@ -65,6 +69,7 @@ export async function registerEntry(person: Person, eventId: number, input: Entr
         feeAmount: event.entryFee,
         currency: event.currency,
         waitlistedAt: room ? null : now,
+        sharedFields: [...event.asksFor],
       },
       { transaction },
     );

@@ -3,14 +3,14 @@ import { AuditLine } from '@server/models/audit-line';
 import { Entry } from '@server/models/entry';
 import { Event } from '@server/models/event';
 import { confirmEntryPayment } from '@server/services/entries/entries';
-import { showWithClasses } from '../../support/event-factory';
+import { ownerWithBuild, showWithClasses } from '../../support/event-factory';
 import { enter, memberOf } from '../../support/show-day-factory';
 
 const DAY = 86400_000;
 type Row = { id: number; number: number | null; buildTitle: string; className: string; status: string; payment: string; waitingPosition: number | null; contact: { email: string; phone: string | null }; privateFields: { vin: string | null } };
 
 describe('the entries table', () => {
-  it('pages, sorts, filters and searches on the server; the organiser sees contact and private fields', async () => {
+  it('pages, sorts, filters and searches on the server; the organiser sees the contact, and no private field the show did not ask for', async () => {
     const { organiser, eventId, classIds } = await showWithClasses({ classes: [{ name: 'Hot rods', capacity: 3 }, { name: 'Customs' }] });
     const titles = ['Zephyr coupe', 'Amber roadster', 'Midnight wagon', 'Copper sedan'];
     const entered = [];
@@ -31,7 +31,7 @@ describe('the entries table', () => {
     const zephyr = first.body.rows[0] as Row;
     expect(zephyr.payment).toBe('paid');
     expect(zephyr.contact).toEqual({ email: entered[0]!.owner.email, phone: '+49 555 0100' });
-    expect(zephyr.privateFields.vin).toBe('VIN-SECRET-1');
+    expect(zephyr.privateFields).toEqual({ vin: null, plate: null, address: null });
     expect((first.body.rows[4] as Row).waitingPosition).toBe(1);
 
     const byTitle = await organiser.client.get(`/api/events/${eventId}/entry-table?sort=title&dir=desc&pageSize=25`);
@@ -79,6 +79,48 @@ describe('the entries table', () => {
     }
     const { apiClient } = await import('../../support/api-client');
     expect((await (await apiClient()).get(`/api/events/${eventId}/entry-table`)).status).toBe(401);
+  });
+});
+
+describe('which private fields the organisers see', () => {
+  const secrets = { ownerPhone: '+49 555 0199', vin: 'VIN-PRIVATE-7', plate: 'PLT 777', ownerAddress: '7 Hidden Lane' };
+
+  it('is name, e-mail and phone; the plate, VIN or address only where the show asked for it and the entrant agreed', async () => {
+    const { organiser, eventId, classIds } = await showWithClasses({ settings: { asksFor: ['plate'] } });
+    const owner = await ownerWithBuild('Plated roadster');
+    await owner.build.update(secrets);
+    // The show asks for the plate: entering without agreeing is refused, naming the box, and enters nothing.
+    const refused = await owner.client.post(`/api/events/${eventId}/entries`, { buildId: owner.build.id, classId: classIds[0] });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.fields.shares).toMatch(/asks for your plate/);
+    expect(await Entry.count({ where: { eventId } })).toBe(0);
+    const entered = await owner.client.post(`/api/events/${eventId}/entries`, { buildId: owner.build.id, classId: classIds[0], shares: ['plate'] });
+    expect(entered.status).toBe(201);
+
+    const row = (await organiser.client.get(`/api/events/${eventId}/entry-table`)).body.rows[0];
+    expect(row.contact).toEqual({ email: owner.email, phone: '+49 555 0199' });
+    expect(row.privateFields).toEqual({ plate: 'PLT 777', vin: null, address: null });
+    expect(row.sharedFields).toEqual(['plate']);
+    const csv = (await organiser.client.get(`/api/events/${eventId}/entries.csv`)).text;
+    expect(csv).toContain('PLT 777');
+    expect(csv).not.toContain('VIN-PRIVATE-7');
+    expect(csv).not.toContain('7 Hidden Lane');
+
+    // Asking for more later does not reach an entry made before: the entrant agreed to the plate only.
+    expect((await organiser.client.patch(`/api/events/${eventId}`, { asksFor: ['plate', 'vin', 'address'] })).status).toBe(200);
+    expect((await organiser.client.get(`/api/events/${eventId}/entry-table`)).body.rows[0].privateFields).toEqual({ plate: 'PLT 777', vin: null, address: null });
+  });
+
+  it('is none of them where the show asks for nothing, and the show says what it asks on its public page', async () => {
+    const { organiser, eventId, classIds } = await showWithClasses();
+    const { entry } = await enter(eventId, classIds[0]!, 'Quiet coupe', secrets);
+    const { rows } = (await organiser.client.get(`/api/events/${eventId}/entry-table`)).body;
+    expect(rows.find((r: Row) => r.id === entry.id).privateFields).toEqual({ vin: null, plate: null, address: null });
+    const csv = (await organiser.client.get(`/api/events/${eventId}/entries.csv`)).text;
+    for (const secret of ['VIN-PRIVATE-7', 'PLT 777', '7 Hidden Lane']) expect(csv).not.toContain(secret);
+    const slug = (await Event.findByPk(eventId))!.slug;
+    const pub = await organiser.client.get(`/api/public/events/${slug}`);
+    expect(pub.body.event.asksFor).toEqual([]);
   });
 });
 

@@ -1,7 +1,7 @@
 import { Fragment, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { ENTRY_STATUS_LABELS } from '@shared/constants';
+import { ASKABLE_PRIVATE_FIELD_LABELS, ASKABLE_PRIVATE_FIELDS, ENTRY_STATUS_LABELS } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
 import type { EventClass } from '@shared/schemas/show-classes';
 import { auditActionLabel, ChangeClassSchema, MarkPaidSchema, PAYMENT_ISSUE_LABELS, PAYMENT_STATE_LABELS, type ChangeClassInput, type EntryTableRow, type MarkPaidInput } from '@shared/schemas/show-day';
@@ -93,8 +93,12 @@ export function EntryDetail({ eventId, row, classes, onClose }: { eventId: numbe
         <dt className="text-graphite">Entrant</dt><dd>{row.ownerName}</dd>
         <dt className="text-graphite">E-mail</dt><dd><a className="underline" href={`mailto:${row.contact.email}`}>{row.contact.email}</a></dd>
         <dt className="text-graphite">Phone</dt><dd>{row.contact.phone ?? '—'}</dd>
-        <dt className="text-graphite">VIN</dt><dd>{row.privateFields.vin ?? '—'}</dd>
-        <dt className="text-graphite">Plate</dt><dd>{row.privateFields.plate ?? '—'}</dd>
+        {ASKABLE_PRIVATE_FIELDS.map((field) => (
+          <Fragment key={field}>
+            <dt className="text-graphite">{ASKABLE_PRIVATE_FIELD_LABELS[field]}</dt>
+            <dd>{row.sharedFields.includes(field) ? (row.privateFields[field] ?? '—') : <span className="text-graphite">Not asked for at entry</span>}</dd>
+          </Fragment>
+        ))}
         <dt className="text-graphite">Status</dt><dd>{ENTRY_STATUS_LABELS[row.status]}</dd>
         <dt className="text-graphite">Payment</dt><dd>{PAYMENT_STATE_LABELS[row.payment]} · fee {formatMoney(row.feeAmount, row.currency)}{row.refundDue && !row.refund ? ` · refund due ${formatMoney(row.refundDue, row.currency)}` : ''}</dd>
         {row.refund ? (

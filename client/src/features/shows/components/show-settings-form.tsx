@@ -1,3 +1,4 @@
+import { ASKABLE_PRIVATE_FIELD_LABELS, ASKABLE_PRIVATE_FIELDS, type AskablePrivateField } from '@shared/constants';
 import { useState } from 'react';
 import { useForm, type FieldErrors, type Resolver } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
@@ -32,8 +33,9 @@ type SettingsValues = {
   currency: string;
   refundRule: { fullRefundUntil: string; afterwardsPercent: string };
   description: string;
+  asksFor: AskablePrivateField[];
 };
-const FIELD_NAMES = ['name', 'slug', 'venueName', 'venueAddress', 'timeZone', ...DATE_FIELDS, 'capacity', 'entryFee', 'currency', 'refundRule.fullRefundUntil', 'refundRule.afterwardsPercent', 'description'] as const;
+const FIELD_NAMES = ['name', 'slug', 'venueName', 'venueAddress', 'timeZone', ...DATE_FIELDS, 'capacity', 'entryFee', 'currency', 'refundRule.fullRefundUntil', 'refundRule.afterwardsPercent', 'description', 'asksFor'] as const;
 
 function valuesFrom(show?: EventDetail): SettingsValues {
   const tz = show?.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone;
@@ -54,6 +56,7 @@ function valuesFrom(show?: EventDetail): SettingsValues {
     currency: show?.currency ?? 'USD',
     refundRule: { fullRefundUntil: wall(show?.refundRule.fullRefundUntil), afterwardsPercent: String(show?.refundRule.afterwardsPercent ?? 0) },
     description: show?.description ?? '',
+    asksFor: show?.asksFor ?? [],
   };
 }
 
@@ -81,6 +84,7 @@ function toInput(v: SettingsValues): { input: Record<string, unknown>; problems:
     currency,
     refundRule: { fullRefundUntil: v.refundRule.fullRefundUntil ? instant(v.refundRule.fullRefundUntil) : null, afterwardsPercent: Number(v.refundRule.afterwardsPercent || 0) },
     description: v.description,
+    asksFor: Array.isArray(v.asksFor) ? v.asksFor : [],
   };
   return { input, problems };
 }
@@ -130,6 +134,19 @@ export function ShowSettingsForm({ show, submitLabel, busy, onSubmit }: { show?:
       <TextField type="datetime-local" label="Full refund until" hint="Empty: no full-refund period." {...register('refundRule.fullRefundUntil')} error={errors.refundRule?.fullRefundUntil?.message} />
       <TextField inputMode="numeric" label="Refund after that date (%)" hint="0 for none." {...register('refundRule.afterwardsPercent')} error={errors.refundRule?.afterwardsPercent?.message} />
       <TextAreaField label="Description" rows={5} {...register('description')} error={errors.description?.message} className="md:col-span-2" />
+      <fieldset className="md:col-span-2">
+        <legend className="text-sm font-semibold">Also ask entrants for</legend>
+        <p className="text-sm text-graphite">You always see each entrant’s name, e-mail and phone. Tick what the show needs beyond that (an insurer may want plates); entrants agree to share it when they enter, and only the show’s organisers see it.</p>
+        <div className="mt-2 flex flex-wrap gap-4">
+          {ASKABLE_PRIVATE_FIELDS.map((field) => (
+            <label key={field} className="flex min-h-11 items-center gap-2">
+              <input type="checkbox" className="h-5 w-5 accent-ink" value={field} {...register('asksFor')} />
+              {ASKABLE_PRIVATE_FIELD_LABELS[field]}
+            </label>
+          ))}
+        </div>
+        {errors.asksFor?.message ? <p role="alert" className="mt-1 text-sm text-danger">{errors.asksFor.message}</p> : null}
+      </fieldset>
       {formError ? (
         <div className="md:col-span-2">
           <Notice tone="danger">{formError}</Notice>
