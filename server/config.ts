@@ -43,6 +43,8 @@ const EnvSchema = z.object({
   JOB_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(2),
   MAIL_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).max(3600).default(10),
   MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).max(50).default(14),
+  /** A message the mail server may have kept (its answer after the message was lost) is sent again only after this, doubling. */
+  MAIL_LOST_ACK_RETRY_SECONDS: z.coerce.number().int().min(1).max(86_400).default(900),
   STRIPE_SECRET_KEY: z.string().optional().transform((v) => v || undefined),
   STRIPE_WEBHOOK_SECRET: z.string().optional().transform((v) => v || undefined),
   PAYMENTS_FAKE_PORT: z.coerce.number().int().min(0).max(65535).default(12111),
@@ -164,6 +166,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     /** Mail that fails is retried after about delay × 2^n seconds (with jitter), up to the limit, then kept aside. */
     mailRetryDelaySeconds: e.MAIL_RETRY_DELAY_SECONDS,
     mailRetryLimit: e.MAIL_RETRY_LIMIT,
+    mailLostAckRetrySeconds: e.MAIL_LOST_ACK_RETRY_SECONDS,
     payments: paymentsConfig(e, production),
     /** argon2id's cost for new password hashes (stored hashes carry their own). */
     passwordHash: { memoryKiB: e.PASSWORD_HASH_MEMORY_KIB ?? hashBase.memoryKiB, passes: e.PASSWORD_HASH_PASSES ?? hashBase.passes, lanes: hashBase.lanes },

@@ -34,6 +34,8 @@ export type JobQueueOptions = {
   pollSeconds: number;
   mailRetryDelaySeconds: number;
   mailRetryLimit: number;
+  /** First wait before sending again a message whose acknowledgement was lost (doubled each time); default 15 minutes. */
+  mailLostAckRetrySeconds?: number;
 };
 
 /**
@@ -125,9 +127,10 @@ export class JobQueue {
    * every process, this one included, hear of it on commit through their wake listener (a notification
    * sent in a transaction is delivered when it commits).
    */
-  async send(name: string, data: object, transaction?: Transaction): Promise<string> {
+  async send(name: string, data: object, transaction?: Transaction, options: { startAfterSeconds?: number } = {}): Promise<string> {
     const boss = await this.start();
-    const id = await boss.send(name, data, transaction ? { db: inTransaction(transaction) } : {});
+    const timing = options.startAfterSeconds ? { startAfter: options.startAfterSeconds } : {};
+    const id = await boss.send(name, data, transaction ? { ...timing, db: inTransaction(transaction) } : timing);
     if (!id) throw new Error(`job queue: ${name} refused the job (is the queue created?)`);
     await sequelize.query('SELECT pg_notify($1, $2)', { bind: [JOB_WAKE_CHANNEL, name], transaction, type: QueryTypes.SELECT }).catch((err: unknown) => {
       // The job is stored; a worker's poll finds it even if the wake-up is lost.
@@ -172,6 +175,7 @@ export function jobQueue(): JobQueue {
     pollSeconds: config.jobPollSeconds,
     mailRetryDelaySeconds: config.mailRetryDelaySeconds,
     mailRetryLimit: config.mailRetryLimit,
+    mailLostAckRetrySeconds: config.mailLostAckRetrySeconds,
   });
   return shared;
 }

@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { z } from 'zod';
 import type { OutgoingMail } from './mailer';
 
@@ -10,13 +11,20 @@ export const MailJobSchema = z.object({
   subject: z.string(),
   text: z.string(),
   html: z.string().optional(),
+  messageId: z.string().optional(),
+  /** How many times the server's answer to the whole message was lost (each retry waits longer). */
+  lostAcks: z.number().int().min(0).optional(),
   attachments: z.array(z.object({ filename: z.string(), contentType: z.string(), contentBase64: z.string() })).optional(),
 });
 export type MailJob = z.infer<typeof MailJobSchema>;
 
-export function encodeMail(mail: OutgoingMail): MailJob {
+/** A Message-ID of our own for one notice (RFC 5322 shape); the part after @ names the sender's domain. */
+export const newMessageId = (from: string) => `<${randomUUID()}@${/@([^>\s]+)/.exec(from)?.[1] ?? 'placard.invalid'}>`;
+
+export function encodeMail(mail: OutgoingMail, from: string): MailJob {
   return {
     to: mail.to,
+    messageId: mail.messageId ?? newMessageId(from),
     subject: mail.subject,
     text: mail.text,
     ...(mail.html !== undefined ? { html: mail.html } : {}),
@@ -33,6 +41,7 @@ export function decodeMail(data: unknown): OutgoingMail {
     subject: job.subject,
     text: job.text,
     ...(job.html !== undefined ? { html: job.html } : {}),
+    ...(job.messageId !== undefined ? { messageId: job.messageId } : {}),
     ...(job.attachments ? { attachments: job.attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, content: Buffer.from(a.contentBase64, 'base64') })) } : {}),
   };
 }

@@ -9,6 +9,8 @@ export type OutgoingMail = {
   html?: string;
   /** Files sent with the mail, e.g. the entrant's card as a PDF. */
   attachments?: ReadonlyArray<{ filename: string; contentType: string; content: Buffer }>;
+  /** Given once when the notice is queued and kept across every retry: one notice, one message. */
+  messageId?: string;
 };
 
 export type MailSender = (mail: OutgoingMail) => Promise<void>;

@@ -1,4 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
+import { config } from '../config';
 import { sequelize } from '../db/sequelize';
 import { jobQueue, MAIL_QUEUE, type JobQueue } from '../jobs/queue';
 import { encodeMail } from './mail-job';
@@ -35,7 +36,7 @@ export async function enqueueMail(queue: JobQueue, mail: QueuedMail, options: Qu
       });
       if (fresh.length === 0) return false;
     }
-    await queue.send(MAIL_QUEUE, encodeMail(mail), transaction);
+    await queue.send(MAIL_QUEUE, encodeMail(mail, config.mailFrom), transaction);
     return true;
   };
   return options.transaction ? write(options.transaction) : sequelize.transaction(write);

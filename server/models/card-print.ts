@@ -16,6 +16,9 @@ export class CardPrint extends Model<InferAttributes<CardPrint>, InferCreationAt
   declare error: CreationOptional<string | null>;
   declare startedBy: number;
   declare finishedAt: CreationOptional<Date | null>;
+  /** The last beat of the worker run holding a running print, and that run's token. */
+  declare heartbeatAt: CreationOptional<Date | null>;
+  declare workerToken: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -36,6 +39,8 @@ export class CardPrint extends Model<InferAttributes<CardPrint>, InferCreationAt
         error: { type: DataTypes.STRING(500), allowNull: true },
         startedBy: { type: DataTypes.INTEGER, allowNull: false },
         finishedAt: { type: DataTypes.DATE, allowNull: true },
+        heartbeatAt: { type: DataTypes.DATE, allowNull: true },
+        workerToken: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
-/** One judge's points for one line of the sheet of one car; the newest by the judge's device time wins. */
+/** One judge's points for one line of the sheet of one car; the server decides which value is newest (services/judging/scores.ts). */
 export class Score extends Model<InferAttributes<Score>, InferCreationAttributes<Score>> {
   declare id: CreationOptional<number>;
   declare eventId: number;
@@ -11,6 +11,8 @@ export class Score extends Model<InferAttributes<Score>, InferCreationAttributes
   declare comment: string;
   declare deviceTime: Date;
   declare clientId: string;
+  /** The phone the stored value came from (null: sent by a phone that gave no id). */
+  declare deviceId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -26,6 +28,7 @@ export class Score extends Model<InferAttributes<Score>, InferCreationAttributes
         comment: { type: DataTypes.STRING(1000), allowNull: false, defaultValue: '' },
         deviceTime: { type: DataTypes.DATE, allowNull: false },
         clientId: { type: DataTypes.UUID, allowNull: false },
+        deviceId: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

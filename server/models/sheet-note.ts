@@ -9,6 +9,8 @@ export class SheetNote extends Model<InferAttributes<SheetNote>, InferCreationAt
   declare comment: string;
   declare deviceTime: Date;
   declare clientId: string;
+  /** The phone the stored value came from (null: sent by a phone that gave no id). */
+  declare deviceId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -22,6 +24,7 @@ export class SheetNote extends Model<InferAttributes<SheetNote>, InferCreationAt
         comment: { type: DataTypes.STRING(2000), allowNull: false, defaultValue: '' },
         deviceTime: { type: DataTypes.DATE, allowNull: false },
         clientId: { type: DataTypes.UUID, allowNull: false },
+        deviceId: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

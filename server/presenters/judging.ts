@@ -31,8 +31,8 @@ export function presentJudgeView(data: { event: Event; criteria: Criterion[]; ca
     event: { id: event.id, name: event.name, slug: event.slug, status: event.status, judgingOpen: closedReason === null, closedReason },
     criteria: data.criteria.map((c) => ({ id: c.id, name: c.name, maxPoints: c.maxPoints, weight: Number(c.weight), position: c.position })),
     cars: data.cars.map(({ entry, build }) => presentJudgeCar(entry, build)),
-    scores: data.scores.map((s) => ({ entryId: s.entryId, criterionId: s.criterionId, points: s.points, comment: s.comment, deviceTime: s.deviceTime.toISOString(), clientId: s.clientId })),
-    notes: data.notes.map((n) => ({ entryId: n.entryId, comment: n.comment, deviceTime: n.deviceTime.toISOString(), clientId: n.clientId })),
+    scores: data.scores.map((s) => ({ entryId: s.entryId, criterionId: s.criterionId, points: s.points, comment: s.comment, deviceTime: s.deviceTime.toISOString(), clientId: s.clientId, deviceId: s.deviceId })),
+    notes: data.notes.map((n) => ({ entryId: n.entryId, comment: n.comment, deviceTime: n.deviceTime.toISOString(), clientId: n.clientId, deviceId: n.deviceId })),
   };
 }
 

@@ -20,6 +20,11 @@ export const CardPrintLatestQuerySchema = z.object({ classId: IdSchema.optional(
 
 export const CardPrintParamsSchema = z.object({ id: IdSchema, printId: IdSchema });
 
+/** A running print whose worker has not beaten for this long lost its worker: the organiser may start it again. */
+export const CARD_PRINT_STALE_SECONDS = 30;
+export const printStalled = (status: CardPrintStatus, heartbeatAt: Date | null, now = new Date()) =>
+  status === 'running' && (!heartbeatAt || now.getTime() - heartbeatAt.getTime() > CARD_PRINT_STALE_SECONDS * 1000);
+
 export type CardPrint = {
   id: number;
   eventId: number;
@@ -36,4 +41,6 @@ export type CardPrint = {
   /** Set when the PDF is ready. */
   downloadUrl: string | null;
   error: string | null;
+  /** Running, but its worker stopped: printing again resumes it. */
+  stalled: boolean;
 };

@@ -34,11 +34,14 @@ export type JudgeClassesInput = z.infer<typeof JudgeClassesSchema>;
 
 const clientId = z.uuid({ error: 'Each score needs the id its device gave it (a UUID).' });
 const deviceTime = z.iso.datetime({ offset: true, error: 'Device time must be a date and time with its offset (ISO 8601).' });
+/** The phone's own count of the lines it wrote: orders that phone's queue, whatever its clock says. */
+const sequence = z.number().int().min(0).max(Number.MAX_SAFE_INTEGER).optional();
 const id = (label: string) => z.number({ error: `${label} is required.` }).int().positive({ error: `${label} is required.` });
 
 export const ScoreItemSchema = z.object({
   clientId,
   deviceTime,
+  sequence,
   entryId: id('Car'),
   criterionId: id('Criterion'),
   points: z.number({ error: 'Points must be a whole number.' }).int({ error: 'Points must be a whole number.' }).min(0, { error: 'Points cannot be below 0.' }),
@@ -49,22 +52,32 @@ export type ScoreItem = z.infer<typeof ScoreItemSchema>;
 export const NoteItemSchema = z.object({
   clientId,
   deviceTime,
+  sequence,
   entryId: id('Car'),
   comment: shortText('Comment', SHEET_NOTE_MAX),
 });
 export type NoteItem = z.infer<typeof NoteItemSchema>;
 
-/** What a judge's phone sends: scores and car comments, each stamped with device time and id. */
+/**
+ * What a judge's phone sends: scores and car comments, each stamped with its id, the phone's sequence
+ * and device time, and the phone's own id (`deviceId`). Sends without a phone id (older phones, the
+ * demo seeders) are ordered among themselves by device time, as before.
+ */
 export const ScoreSubmitSchema = z
   .object({
+    deviceId: z.uuid({ error: 'The phone’s id must be a UUID.' }).optional(),
     scores: z.array(ScoreItemSchema).max(SCORE_ITEMS_PER_REQUEST_MAX).default([]),
     notes: z.array(NoteItemSchema).max(SCORE_ITEMS_PER_REQUEST_MAX).default([]),
   })
   .refine((v) => v.scores.length + v.notes.length > 0, { path: ['scores'], error: 'Nothing to send.' });
 export type ScoreSubmitInput = z.infer<typeof ScoreSubmitSchema>;
 
-/** For each item sent: whether it became the stored value (false = an older or repeated one, ignored). */
-export const ScoreSubmitResultSchema = z.object({ applied: z.array(z.object({ clientId: z.string(), applied: z.boolean() })) });
+/**
+ * For each item sent: whether it became the stored value (false = an older or repeated one, ignored), and
+ * `replacedByOtherDevice` when the line now holds a value the same judge sent later from another phone.
+ */
+export const ScoreSubmitResultSchema = z.object({ applied: z.array(z.object({ clientId: z.string(), applied: z.boolean(), replacedByOtherDevice: z.literal(true).optional() })) });
+export type ScoreApplied = z.infer<typeof ScoreSubmitResultSchema>['applied'][number];
 
 
 /** Entries that are judged: those holding a paid or free place (checked in or not); waiting, unpaid and withdrawn ones are not. */
@@ -82,8 +95,9 @@ export type JudgeCar = {
   cover: { url: string; width: number; height: number } | null;
   figures: JudgeFigure[];
 };
-export type MyScore = { entryId: number; criterionId: number; points: number; comment: string; deviceTime: string; clientId: string };
-export type MyNote = { entryId: number; comment: string; deviceTime: string; clientId: string };
+/** `deviceId`: the phone the stored value came from, so a phone can tell a value another phone of the judge replaced. */
+export type MyScore = { entryId: number; criterionId: number; points: number; comment: string; deviceTime: string; clientId: string; deviceId: string | null };
+export type MyNote = { entryId: number; comment: string; deviceTime: string; clientId: string; deviceId: string | null };
 export type JudgeView = {
   event: { id: number; name: string; slug: string; status: string; judgingOpen: boolean; closedReason: string | null };
   criteria: Array<{ id: number; name: string; maxPoints: number; weight: number; position: number }>;

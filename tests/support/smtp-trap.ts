@@ -8,7 +8,22 @@ import type { AddressInfo } from 'node:net';
  */
 export class SmtpTrap {
   readonly received: ParsedMail[] = [];
+  /** When each message arrived (ms), in the order of `received`. */
+  readonly arrivedAt: number[] = [];
   private server?: SMTPServer;
+  private lostAcks = new Map<string, number>();
+
+  /**
+   * After keeping a message, answer `code` instead of 250 the first `times` times a Message-ID arrives:
+   * the acknowledgement the sender never gets (the mail server's 421 after the message).
+   */
+  answerAfterMessage(code: number, times = 1): this {
+    this.lostAckCode = code;
+    this.lostAckTimes = times;
+    return this;
+  }
+  private lostAckCode = 0;
+  private lostAckTimes = 0;
   port = 0;
 
   async start(): Promise<this> {
@@ -18,8 +33,16 @@ export class SmtpTrap {
       logger: false,
       onData: (stream, _session, callback) => {
         simpleParser(stream)
-          .then((mail) => this.received.push(mail))
-          .then(() => callback())
+          .then((mail) => {
+            this.received.push(mail);
+            this.arrivedAt.push(Date.now());
+            const id = mail.messageId ?? '';
+            const seen = (this.lostAcks.get(id) ?? 0) + 1;
+            this.lostAcks.set(id, seen);
+            if (this.lostAckCode && seen <= this.lostAckTimes) {
+              callback(Object.assign(new Error('Service closing transmission channel'), { responseCode: this.lostAckCode }));
+            } else callback();
+          })
           .catch((err: Error) => callback(err));
       },
     });

@@ -44,10 +44,17 @@ export async function mailWithdrawn(entry: Entry, event: Event, byOrganiser: boo
   await queueMail({ to: p.to, ...entryWithdrawnEmail({ ...p, showName: event.name, byOrganiser, refund }) }, { transaction, dedupeKey: `withdrawn:${entry.id}` });
 }
 
+/**
+ * One "payment received" per payment. An online payment is named by its reference; money taken by hand
+ * (cash at the gate, marked paid) is one payment per entry: the gate's undo hands the cash back and a
+ * second take is the same payment again, whose fresh reference must not mail the owner twice.
+ */
+const paymentMailKey = (entry: Entry) => (entry.paymentRef?.startsWith('manual:') ? `paid:${entry.id}:manual` : `paid:${entry.id}:${entry.paymentRef}`);
+
 export async function mailPaymentConfirmed(entry: Entry, event: Event, transaction: Transaction) {
   const p = await parts(entry, transaction);
   const mail = paymentConfirmedEmail({ ...p, showName: event.name, number: entry.number, amount: formatMoney(entry.paidAmount ?? entry.feeAmount, entry.currency), link: myEntriesLink() });
-  await queueMail({ to: p.to, ...mail }, { transaction, dedupeKey: `paid:${entry.id}:${entry.paymentRef}` });
+  await queueMail({ to: p.to, ...mail }, { transaction, dedupeKey: paymentMailKey(entry) });
 }
 
 export async function mailRefundSent(entry: Entry, event: Event, amountMinor: number, transaction: Transaction, dedupeKey = `refund:${entry.id}`) {

@@ -1,5 +1,5 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
-import { DEVICE_CLOCK_AHEAD_MAX_MS, JUDGED_ENTRY_STATUSES, type ScoreSubmitInput } from '@shared/schemas/judging';
+import { DEVICE_CLOCK_AHEAD_MAX_MS, JUDGED_ENTRY_STATUSES, type ScoreApplied, type ScoreSubmitInput } from '@shared/schemas/judging';
 import { sequelize } from '../../db/sequelize';
 import { Criterion } from '../../models/criterion';
 import { Entry } from '../../models/entry';
@@ -17,22 +17,37 @@ export function judgingClosedReason(event: Pick<Event, 'status' | 'judgingClosed
   return 'Judging has not started for this show yet.';
 }
 
-// Newest by the judge's device time wins; the device's id breaks a tie in device time so every server picks
-// the same row. A replay (same time, same id) or an older value matches no row and changes nothing.
+/*
+ * One clock: the server's. The same phone's lines are ordered by that phone's own sequence (its clock
+ * orders nothing but its queue), and a line from another phone of the judge wins because the server
+ * received it later: a phone a day fast no longer beats every later correction. Phones that send no
+ * id (older versions, the demo seeders) have a null device and their device time as sequence, so they
+ * keep the old rule among themselves. The client id breaks a tie so every server picks the same row.
+ */
+const LATER_THAN_STORED = (table: string) => `
+    WHERE CASE WHEN ${table}.device_id IS NOT DISTINCT FROM EXCLUDED.device_id
+      THEN (${table}.device_seq, ${table}.client_id) < (EXCLUDED.device_seq, EXCLUDED.client_id)
+      ELSE true END`;
 const UPSERT_SCORE = `
-  INSERT INTO scores (event_id, entry_id, judge_id, criterion_id, points, comment, device_time, client_id, created_at, updated_at)
-  VALUES (:eventId, :entryId, :judgeId, :criterionId, :points, :comment, :deviceTime, :clientId, now(), now())
+  INSERT INTO scores (event_id, entry_id, judge_id, criterion_id, points, comment, device_time, client_id, device_id, device_seq, received_at, created_at, updated_at)
+  VALUES (:eventId, :entryId, :judgeId, :criterionId, :points, :comment, :deviceTime, :clientId, :deviceId, :deviceSeq, now(), now(), now())
   ON CONFLICT (entry_id, judge_id, criterion_id) DO UPDATE
-    SET points = EXCLUDED.points, comment = EXCLUDED.comment, device_time = EXCLUDED.device_time, client_id = EXCLUDED.client_id, updated_at = now()
-    WHERE (scores.device_time, scores.client_id) < (EXCLUDED.device_time, EXCLUDED.client_id)
+    SET points = EXCLUDED.points, comment = EXCLUDED.comment, device_time = EXCLUDED.device_time, client_id = EXCLUDED.client_id,
+        device_id = EXCLUDED.device_id, device_seq = EXCLUDED.device_seq, received_at = now(), updated_at = now()
+    ${LATER_THAN_STORED('scores')}
   RETURNING id`;
 const UPSERT_NOTE = `
-  INSERT INTO sheet_notes (event_id, entry_id, judge_id, comment, device_time, client_id, created_at, updated_at)
-  VALUES (:eventId, :entryId, :judgeId, :comment, :deviceTime, :clientId, now(), now())
+  INSERT INTO sheet_notes (event_id, entry_id, judge_id, comment, device_time, client_id, device_id, device_seq, received_at, created_at, updated_at)
+  VALUES (:eventId, :entryId, :judgeId, :comment, :deviceTime, :clientId, :deviceId, :deviceSeq, now(), now(), now())
   ON CONFLICT (entry_id, judge_id) DO UPDATE
-    SET comment = EXCLUDED.comment, device_time = EXCLUDED.device_time, client_id = EXCLUDED.client_id, updated_at = now()
-    WHERE (sheet_notes.device_time, sheet_notes.client_id) < (EXCLUDED.device_time, EXCLUDED.client_id)
+    SET comment = EXCLUDED.comment, device_time = EXCLUDED.device_time, client_id = EXCLUDED.client_id,
+        device_id = EXCLUDED.device_id, device_seq = EXCLUDED.device_seq, received_at = now(), updated_at = now()
+    ${LATER_THAN_STORED('sheet_notes')}
   RETURNING id`;
+/** Every item id is remembered when first received: a send retried after its answer was lost is a replay, never a newer value. */
+const RECEIPT = 'INSERT INTO score_receipts (client_id, judge_id, received_at) VALUES (:clientId, :judgeId, now()) ON CONFLICT DO NOTHING RETURNING client_id AS id';
+const HOLDER_OF_SCORE = 'SELECT client_id AS "clientId", device_id AS "deviceId" FROM scores WHERE entry_id = :entryId AND judge_id = :judgeId AND criterion_id = :criterionId';
+const HOLDER_OF_NOTE = 'SELECT client_id AS "clientId", device_id AS "deviceId" FROM sheet_notes WHERE entry_id = :entryId AND judge_id = :judgeId';
 
 /**
  * Records a judge's scores and car comments: all of them or none. Every item is checked first
@@ -70,22 +85,28 @@ export async function submitScores(eventId: number, judgeId: number, input: Scor
     if (Object.keys(problems).length) throw new ValidationError(problems, 'Some scores cannot be recorded.');
     if (outsideClasses) throw new AppError(403, 'FORBIDDEN', 'A car in this sheet is in a class you are not judging.');
 
-    const applied: Array<{ clientId: string; applied: boolean }> = [];
+    const deviceId = input.deviceId ?? null;
+    const order = (item: { deviceTime: string; sequence?: number | undefined }) => ({ deviceId, deviceSeq: deviceId ? (item.sequence ?? 0) : new Date(item.deviceTime).getTime() });
+    const applied: ScoreApplied[] = [];
     for (const s of input.scores) {
-      const rows = await upsert(UPSERT_SCORE, { eventId, judgeId, entryId: s.entryId, criterionId: s.criterionId, points: s.points, comment: s.comment, deviceTime: new Date(s.deviceTime), clientId: s.clientId }, transaction);
-      applied.push({ clientId: s.clientId, applied: rows > 0 });
+      const line = { eventId, judgeId, entryId: s.entryId, criterionId: s.criterionId };
+      applied.push(await record(UPSERT_SCORE, HOLDER_OF_SCORE, { ...line, points: s.points, comment: s.comment, deviceTime: new Date(s.deviceTime), clientId: s.clientId, ...order(s) }, transaction));
     }
     for (const n of input.notes) {
-      const rows = await upsert(UPSERT_NOTE, { eventId, judgeId, entryId: n.entryId, comment: n.comment, deviceTime: new Date(n.deviceTime), clientId: n.clientId }, transaction);
-      applied.push({ clientId: n.clientId, applied: rows > 0 });
+      const line = { eventId, judgeId, entryId: n.entryId };
+      applied.push(await record(UPSERT_NOTE, HOLDER_OF_NOTE, { ...line, comment: n.comment, deviceTime: new Date(n.deviceTime), clientId: n.clientId, ...order(n) }, transaction));
     }
     return applied;
   });
 }
 
-async function upsert(sql: string, replacements: Record<string, unknown>, transaction: Transaction): Promise<number> {
-  const rows = await sequelize.query<{ id: number }>(sql, { replacements, type: QueryTypes.SELECT, transaction });
-  return rows.length;
+/** Writes one item unless it is a replay or older than the stored value; a replay says whether another phone's value replaced it. */
+async function record(upsertSql: string, holderSql: string, item: Record<string, unknown> & { clientId: string; deviceId: string | null }, transaction: Transaction): Promise<ScoreApplied> {
+  const query = (sql: string) => sequelize.query<{ id: number }>(sql, { replacements: item, type: QueryTypes.SELECT, transaction });
+  if ((await query(RECEIPT)).length > 0) return { clientId: item.clientId, applied: (await query(upsertSql)).length > 0 };
+  const [holder] = await sequelize.query<{ clientId: string; deviceId: string | null }>(holderSql, { replacements: item, type: QueryTypes.SELECT, transaction });
+  const replaced = holder !== undefined && holder.clientId !== item.clientId && holder.deviceId !== item.deviceId;
+  return { clientId: item.clientId, applied: false, ...(replaced ? { replacedByOtherDevice: true as const } : {}) };
 }
 
 /** Closes judging (scores refused from now on) or opens it again before results are published; an audit line either way. */

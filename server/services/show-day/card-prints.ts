@@ -1,8 +1,8 @@
 import type { Transaction } from 'sequelize';
-import { createHash } from 'node:crypto';
+import { createHash, randomUUID } from 'node:crypto';
 import { Op } from 'sequelize';
 import { PDFDocument } from 'pdf-lib';
-import { CARD_PRINT_ACTIVE, CARD_PRINT_ENTRY_STATUSES } from '@shared/schemas/card-print';
+import { CARD_PRINT_ACTIVE, CARD_PRINT_ENTRY_STATUSES, CARD_PRINT_STALE_SECONDS, printStalled } from '@shared/schemas/card-print';
 import { withTransaction } from '../../db/transaction';
 import { logger } from '../../logger';
 import { CardPrint } from '../../models/card-print';
@@ -21,6 +21,12 @@ export type CardPrintJob = { kind: 'print'; printId: number };
 
 /** Cards missing from the cache are drawn this many to a document (much quicker than one by one), then split into pages. */
 export const RENDER_BATCH = 20;
+/** A running print beats this often; one silent for CARD_PRINT_STALE_SECONDS (shared) lost its worker and may be taken over. */
+export const CARD_PRINT_HEARTBEAT_MS = 5_000;
+const isStalled = (print: CardPrint) => printStalled(print.status, print.heartbeatAt);
+
+/** Thrown inside a run that lost its hold on the print (another worker took it over): it stops writing. */
+class PrintTakenOver extends Error {}
 
 const withPeople = [
   { model: User, as: 'starter', attributes: ['id', 'name'] },
@@ -52,7 +58,14 @@ export async function startCardPrint(event: Event, classId: number | null, perso
     // Two organisers starting at once take turns here, so the second finds the first one's print.
     await Event.findByPk(event.id, { lock: transaction.LOCK.UPDATE, transaction });
     const running = await CardPrint.findOne({ where: { eventId: event.id, classId, status: { [Op.in]: [...CARD_PRINT_ACTIVE] } }, transaction });
-    if (running) return { id: running.id, created: false };
+    if (running && !isStalled(running)) return { id: running.id, created: false };
+    if (running) {
+      // Its worker died mid-print: queue it again. The cards drawn so far are cached, so it resumes
+      // where it stopped, and nothing is served until the whole file is stored.
+      await running.update({ status: 'queued', workerToken: null }, { transaction });
+      await queue.send(CARD_QUEUE, { kind: 'print', printId: running.id } satisfies CardPrintJob, transaction);
+      return { id: running.id, created: true };
+    }
     const total = await Entry.count({ where: confirmedWhere(event.id, classId), transaction });
     if (total === 0) {
       throw new ConflictError(classId ? 'This class has no confirmed entries yet: there are no cards to print.' : 'This show has no confirmed entries yet: there are no cards to print.', { classId: 'No confirmed entries.' });
@@ -118,42 +131,61 @@ async function joinPages(pdfs: Buffer[], title: string): Promise<Buffer> {
  * Progress (done / total) is written as it goes, for the organiser's progress bar.
  */
 export async function runCardPrint(printId: number): Promise<void> {
-  const print = await CardPrint.findByPk(printId);
-  if (!print || print.status === 'done' || print.status === 'failed') return;
+  const token = randomUUID();
+  // Take the print: queued, or running with a silent worker. A print another live run holds is left alone.
+  const [, claimed] = await CardPrint.update(
+    { status: 'running', workerToken: token, heartbeatAt: new Date() },
+    { where: { id: printId, [Op.or]: [{ status: 'queued' }, { status: 'running', heartbeatAt: { [Op.or]: [null, { [Op.lt]: new Date(Date.now() - CARD_PRINT_STALE_SECONDS * 1000) }] } }] }, returning: true },
+  );
+  const print = claimed[0];
+  if (!print) return;
+  // Writes only while this run still holds the print.
+  const write = async (values: Partial<CardPrint>) => {
+    const [n] = await CardPrint.update({ ...values, heartbeatAt: new Date() }, { where: { id: printId, workerToken: token } });
+    if (n === 0) throw new PrintTakenOver();
+  };
+  const beat = setInterval(() => void write({}).catch(() => undefined), CARD_PRINT_HEARTBEAT_MS);
   try {
-    const event = (await Event.findByPk(print.eventId, { attributes: ['id', 'name'] }))!;
-    const cards = await numberedCardsOf(event, print.classId);
-    if (cards.length === 0) throw new Error('No confirmed entries are left to print.');
-    await print.update({ status: 'running', total: cards.length, done: 0, rendered: 0, error: null });
-    const setKey = cardSetKey(createHash('sha256').update(cards.map((c) => c.hash).join('\n')).digest('hex'));
-    if (await storage.exists(setKey)) {
-      await print.update({ status: 'done', done: cards.length, fileKey: setKey, finishedAt: new Date() });
-      return;
-    }
-    const pages: Array<Buffer | null> = await Promise.all(cards.map((c) => readStoredFile(cardCacheKey(c.hash))));
-    const missing = cards.map((c, i) => ({ card: c, i })).filter(({ i }) => !pages[i]);
-    let done = cards.length - missing.length;
-    let rendered = 0;
-    await print.update({ done });
-    for (let at = 0; at < missing.length; at += RENDER_BATCH) {
-      const batch = missing.slice(at, at + RENDER_BATCH);
-      const drawn = await splitPages(await renderNumberedCards(batch.map((m) => m.card.content), event.name));
-      await Promise.all(batch.map(({ card, i }, n) => {
-        pages[i] = drawn[n]!;
-        return storage.put(cardCacheKey(card.hash), drawn[n]!, 'application/pdf');
-      }));
-      done += batch.length;
-      rendered += batch.length;
-      await print.update({ done, rendered });
-    }
-    const joined = await joinPages(pages as Buffer[], `${event.name}: numbered cards`);
-    await storage.put(setKey, joined, 'application/pdf');
-    await print.update({ status: 'done', fileKey: setKey, finishedAt: new Date() });
+    await renderPrint(print, write);
   } catch (err) {
+    if (err instanceof PrintTakenOver) return;
     logger.error({ err, printId }, 'card print failed');
     const message = err instanceof Error ? err.message.slice(0, 480) : 'The print failed.';
-    await print.update({ status: 'failed', error: message, finishedAt: new Date() });
+    await write({ status: 'failed', error: message, finishedAt: new Date() }).catch(() => undefined);
+  } finally {
+    clearInterval(beat);
   }
+}
+
+async function renderPrint(print: CardPrint, write: (values: Partial<CardPrint>) => Promise<void>): Promise<void> {
+  const event = (await Event.findByPk(print.eventId, { attributes: ['id', 'name'] }))!;
+  const cards = await numberedCardsOf(event, print.classId);
+  if (cards.length === 0) throw new Error('No confirmed entries are left to print.');
+  await write({ total: cards.length, done: 0, rendered: 0, error: null });
+  const setKey = cardSetKey(createHash('sha256').update(cards.map((c) => c.hash).join('\n')).digest('hex'));
+  if (await storage.exists(setKey)) {
+    await write({ status: 'done', done: cards.length, fileKey: setKey, finishedAt: new Date() });
+    return;
+  }
+  const pages: Array<Buffer | null> = await Promise.all(cards.map((c) => readStoredFile(cardCacheKey(c.hash))));
+  const missing = cards.map((c, i) => ({ card: c, i })).filter(({ i }) => !pages[i]);
+  let done = cards.length - missing.length;
+  let rendered = 0;
+  await write({ done });
+  for (let at = 0; at < missing.length; at += RENDER_BATCH) {
+    const batch = missing.slice(at, at + RENDER_BATCH);
+    const drawn = await splitPages(await renderNumberedCards(batch.map((m) => m.card.content), event.name));
+    await Promise.all(batch.map(({ card, i }, n) => {
+      pages[i] = drawn[n]!;
+      return storage.put(cardCacheKey(card.hash), drawn[n]!, 'application/pdf');
+    }));
+    done += batch.length;
+    rendered += batch.length;
+    await write({ done, rendered });
+  }
+  const joined = await joinPages(pages as Buffer[], `${event.name}: numbered cards`);
+  await storage.put(setKey, joined, 'application/pdf');
+  await write({ status: 'done', fileKey: setKey, finishedAt: new Date() });
 }
 
 export type { NumberedCard };

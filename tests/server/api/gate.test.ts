@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { QueryTypes } from 'sequelize';
+import { sequelize } from '@server/db/sequelize';
 import { AuditLine } from '@server/models/audit-line';
 import { Entry } from '@server/models/entry';
 import { confirmEntryPayment } from '@server/services/entries/entries';
@@ -105,6 +107,20 @@ describe('the gate', () => {
     expect(late.status).toBe(409);
     expect(late.body.error.message).toMatch(/60 seconds/);
     expect((await Entry.findByPk(s.paid.entry.id))!.status).toBe('checked_in');
+  });
+
+  it('mails one “payment received” per payment when cash is taken, undone and taken again', async () => {
+    const s = await showDay();
+    const paymentMails = async () =>
+      (await sequelize.query<{ n: number }>("SELECT count(*)::int AS n FROM pgboss.job WHERE name = 'mail' AND data->>'to' = $1 AND data->>'subject' LIKE 'Payment received%'", { bind: [s.unpaid.owner.user.email], type: QueryTypes.SELECT }))[0]!.n;
+    const before = await paymentMails(); // the owner's other car was paid online
+    expect((await s.gate.client.post(`/api/events/${s.eventId}/gate/check-in`, { number: 2, takeCash: true })).status).toBe(200);
+    expect(await paymentMails()).toBe(before + 1);
+    expect((await s.gate.client.post(`/api/events/${s.eventId}/gate/undo`, { entryId: s.unpaid.entry.id })).status).toBe(200);
+    const again = await s.gate.client.post(`/api/events/${s.eventId}/gate/check-in`, { number: 2, takeCash: true });
+    expect(again.body.card.entry).toMatchObject({ status: 'checked_in', payment: 'paid' });
+    // The mail job is written in the check-in's transaction: once it answered, a second one would be there.
+    expect(await paymentMails()).toBe(before + 1);
   });
 
   it('counts arrived / expected per class', async () => {

@@ -194,6 +194,56 @@ describe('newest wins, replays change nothing', () => {
   });
 });
 
+describe('one clock: the server orders a judge’s phones', () => {
+  const dayFast = () => new Date(Date.now() + 24 * 3600_000 - 60_000); // just inside the day a phone may be ahead
+
+  it('lets a later honest correction from a second phone win over a phone a day fast, and tells the replaced phone', async () => {
+    const show = await showInJudging({ carsPerClass: 1 });
+    const judge = await judgeOf(show.eventId);
+    await show.organiser.client.put(`/api/events/${show.eventId}/judges/${judge.user.id}/classes`, { allClasses: true });
+    const car = show.entries[0]!;
+    const paint = show.criteria[0]!;
+    const [phoneA, phoneB] = [crypto.randomUUID(), crypto.randomUUID()];
+    const send = (deviceId: string, scores: object[]) => judge.client.post(`/api/events/${show.eventId}/scores`, { deviceId, scores });
+
+    const fast = { ...scoreItem(car.id, paint.id, 3, dayFast(), 'first look'), sequence: 1 };
+    expect((await send(phoneA, [fast])).body.applied).toEqual([{ clientId: fast.clientId, applied: true }]);
+    const honest = { ...scoreItem(car.id, paint.id, 8, new Date(), 'after a second walk round'), sequence: 1 };
+    expect((await send(phoneB, [honest])).body.applied).toEqual([{ clientId: honest.clientId, applied: true }]);
+    expect((await Score.findAll({ where: { eventId: show.eventId } })).map((r) => [r.points, r.clientId])).toEqual([[8, honest.clientId]]);
+
+    // Phone A sends its line again (its answer was lost): nothing changes, and it is told another phone replaced it.
+    expect((await send(phoneA, [fast])).body.applied).toEqual([{ clientId: fast.clientId, applied: false, replacedByOtherDevice: true }]);
+    const mine = (await judge.client.get(`/api/events/${show.eventId}/judging/mine`)).body;
+    expect(mine.scores.map((s: { points: number; deviceId: string }) => [s.points, s.deviceId])).toEqual([[8, phoneB]]);
+
+    // A later tap on phone A (its clock still a day fast, or now set right) is newer again: the server received it last.
+    const fixed = { ...scoreItem(car.id, paint.id, 6, new Date()), sequence: 2 };
+    expect((await send(phoneA, [fixed])).body.applied).toEqual([{ clientId: fixed.clientId, applied: true }]);
+    expect((await Score.findAll({ where: { eventId: show.eventId } })).map((r) => r.points)).toEqual([6]);
+  });
+
+  it('orders one phone’s own queue by its sequence, not its clock, for scores and comments alike', async () => {
+    const show = await showInJudging({ carsPerClass: 1 });
+    const judge = await judgeOf(show.eventId);
+    await show.organiser.client.put(`/api/events/${show.eventId}/judges/${judge.user.id}/classes`, { allClasses: true });
+    const car = show.entries[0]!;
+    const phone = crypto.randomUUID();
+    const send = (body: object) => judge.client.post(`/api/events/${show.eventId}/scores`, { deviceId: phone, ...body });
+    // Tap 1 was made while the clock was a day fast; tap 2 after it was set right, so its time is earlier.
+    const first = { ...scoreItem(car.id, show.criteria[0]!.id, 4, dayFast()), sequence: 1 };
+    const second = { ...scoreItem(car.id, show.criteria[0]!.id, 9, new Date()), sequence: 2 };
+    expect((await send({ scores: [second] })).body.applied[0].applied).toBe(true);
+    expect((await send({ scores: [first] })).body.applied).toEqual([{ clientId: first.clientId, applied: false }]);
+    expect((await Score.findAll({ where: { eventId: show.eventId } })).map((r) => r.points)).toEqual([9]);
+
+    const note = (comment: string, sequence: number, at: Date) => ({ clientId: crypto.randomUUID(), deviceTime: at.toISOString(), sequence, entryId: car.id, comment });
+    await send({ notes: [note('set right, later', 4, minutesAgo(1))] });
+    await send({ notes: [note('day fast, earlier', 3, dayFast())] });
+    expect((await SheetNote.findAll({ where: { eventId: show.eventId } })).map((n) => n.comment)).toEqual(['set right, later']);
+  });
+});
+
 describe('progress and closing judging', () => {
   it('shows per class how many cars have how many sheets, per judge what is left, and refuses scores after closing with a message', async () => {
     const show = await showInJudging();

@@ -4,17 +4,19 @@ import { api, ApiError } from '@client/lib/api';
 import { readView, saveView } from '../offline/sheet-store';
 import { judgingKeys } from './judging-keys';
 
-export type JudgeViewResult = { view: JudgeView; fromDevice: boolean };
+/** `fetchedAt`: this phone's clock when the server's copy was read (compared with when its lines were answered). */
+export type JudgeViewResult = { view: JudgeView; fromDevice: boolean; fetchedAt: number };
 
 /** The judge's cars and sheet: from the server when there is a signal (and kept on the device), else the device's copy. */
 export async function getJudgeView(eventId: number): Promise<JudgeViewResult> {
   try {
     const view = await api<JudgeView>(`/api/events/${eventId}/judging/mine`);
-    await saveView(eventId, view);
-    return { view, fromDevice: false };
+    const fetchedAt = Date.now();
+    await saveView(eventId, view, fetchedAt);
+    return { view, fromDevice: false, fetchedAt };
   } catch (err) {
     const kept = err instanceof ApiError && err.code === 'NETWORK' ? await readView(eventId) : undefined;
-    if (kept) return { view: kept, fromDevice: true };
+    if (kept) return { ...kept, fromDevice: true };
     throw err;
   }
 }

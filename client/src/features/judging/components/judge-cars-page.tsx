@@ -3,6 +3,7 @@ import { SHEET_STATE_LABELS, type SheetState } from '@shared/judging/sheet-state
 import { ErrorState, LoadingState, EmptyState } from '@client/components/ui/states';
 import { useJudgeView } from '../api/get-judge-view';
 import { carSheet } from '../offline/sheet-merge';
+import { deviceId } from '../offline/device';
 import { useLocalLines } from '../offline/use-local-lines';
 import { SendStatus } from './send-status';
 
@@ -20,7 +21,7 @@ export function JudgeCarsPage() {
   if (isPending || !lines) return <LoadingState label="Opening your cars…" />;
   if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
   const { view, fromDevice } = data;
-  const sheets = view.cars.map((car) => ({ car, sheet: carSheet(view, lines, car.entryId) }));
+  const sheets = view.cars.map((car) => ({ car, sheet: carSheet(view, lines, car.entryId, { deviceId: deviceId(), fetchedAt: data.fetchedAt }) }));
   const unsent = sheets.reduce((n, s) => n + s.sheet.unsent, 0);
   const refused = [...new Set(sheets.flatMap((s) => s.sheet.refused))];
   return (

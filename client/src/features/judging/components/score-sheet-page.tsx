@@ -4,6 +4,7 @@ import { SHEET_STATE_LABELS } from '@shared/judging/sheet-state';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
 import { useJudgeView } from '../api/get-judge-view';
 import { carSheet } from '../offline/sheet-merge';
+import { deviceId } from '../offline/device';
 import { recordNote, recordScore } from '../offline/outbox';
 import { useLocalLines } from '../offline/use-local-lines';
 import { PointInput } from './point-input';
@@ -22,7 +23,7 @@ export function ScoreSheetPage() {
   const index = view.cars.findIndex((c) => c.entryId === entryId);
   const car = view.cars[index];
   if (!car) return <ErrorState error={new Error('This car is not on your list.')} />;
-  const sheet = carSheet(view, lines, entryId);
+  const sheet = carSheet(view, lines, entryId, { deviceId: deviceId(), fetchedAt: data.fetchedAt });
   const open = view.event.judgingOpen;
   const prev = view.cars[index - 1];
   const next = view.cars[index + 1];
@@ -67,6 +68,11 @@ export function ScoreSheetPage() {
                   {line.state === 'pending' ? <strong className="ml-2 text-caution">not sent</strong> : null}
                 </span>
               </div>
+              {line.state === 'replaced' ? (
+                <p role="status" className="border-l-4 border-caution bg-white px-3 py-2 font-semibold">
+                  {line.message}
+                </p>
+              ) : null}
               <PointInput label={c.name} max={c.maxPoints} value={line.points} disabled={!open} onChange={(p) => void recordScore(eventId, entryId, c.id, p, line.comment)} />
               <CommentBox
                 label={`Comment on ${c.name.toLowerCase()}`}
@@ -80,6 +86,11 @@ export function ScoreSheetPage() {
         })}
       </ol>
       <div className="border-t-2 border-ink pt-3">
+        {sheet.note.state === 'replaced' ? (
+          <p role="status" className="mb-2 border-l-4 border-caution bg-white px-3 py-2 font-semibold">
+            {sheet.note.message}
+          </p>
+        ) : null}
         <CommentBox label="Comment on the whole car" saved={sheet.note.comment} disabled={!open} onSave={(text) => void recordNote(eventId, entryId, text)} rows={4} />
       </div>
       <nav className="fixed inset-x-0 bottom-0 flex gap-2 border-t-2 border-ink bg-paper p-2" aria-label="Previous and next car">

@@ -3,12 +3,14 @@ import type { NoteItem, ScoreItem } from '@shared/schemas/judging';
 import { SCORE_ITEMS_PER_REQUEST_MAX } from '@shared/judging/sheet-state';
 import { sendScores } from '../api/send-scores';
 import { lineKey, readLines, writeLines, type LocalLine } from './sheet-store';
+import { deviceId, nextSequence, REPLACED_ON_OTHER_PHONE } from './device';
 
 /**
- * The outbox: lines in state "pending" are sent by this loop, oldest first, whenever there is a
- * connection (on start, on the browser's `online` event, after each tap and every few seconds).
- * The server keeps the newest by device time and ignores a replay, so sending a line twice is
- * harmless: a line becomes "sent" only after the server answered, never before.
+ * The outbox: lines in state "pending" are sent by this loop, in this phone's order (its sequence),
+ * whenever there is a connection (on start, on the browser's `online` event, after each tap and every
+ * few seconds). The server orders the judge's lines itself and ignores a replay, so sending a line twice
+ * is harmless: a line becomes "sent" only after the server answered, never before; "replaced" when the
+ * server says another phone of the judge changed it later.
  */
 type Listener = () => void;
 const listeners = new Set<Listener>();
@@ -24,9 +26,10 @@ export const subscribe = (l: Listener) => {
 export const outboxVersion = () => version;
 
 const newId = () => crypto.randomUUID();
+const stamp = () => ({ clientId: newId(), deviceTime: new Date().toISOString(), sequence: nextSequence() });
 
 export async function recordScore(eventId: number, entryId: number, criterionId: number, points: number, comment: string) {
-  const item: ScoreItem = { clientId: newId(), deviceTime: new Date().toISOString(), entryId, criterionId, points, comment };
+  const item: ScoreItem = { ...stamp(), entryId, criterionId, points, comment };
   const key = lineKey(entryId, criterionId);
   await writeLines(eventId, (lines) => ({ ...lines, [key]: { key, kind: 'score', eventId, item, state: 'pending' } }));
   changed();
@@ -34,7 +37,7 @@ export async function recordScore(eventId: number, entryId: number, criterionId:
 }
 
 export async function recordNote(eventId: number, entryId: number, comment: string) {
-  const item: NoteItem = { clientId: newId(), deviceTime: new Date().toISOString(), entryId, comment };
+  const item: NoteItem = { ...stamp(), entryId, comment };
   const key = lineKey(entryId, 'note');
   await writeLines(eventId, (lines) => ({ ...lines, [key]: { key, kind: 'note', eventId, item, state: 'pending' } }));
   changed();
@@ -51,23 +54,26 @@ export async function flush(eventId: number): Promise<void> {
     for (;;) {
       const pending = Object.values(await readLines(eventId))
         .filter((l) => l.state === 'pending')
-        .sort((a, b) => a.item.deviceTime.localeCompare(b.item.deviceTime))
+        .sort((a, b) => (a.item.sequence ?? 0) - (b.item.sequence ?? 0) || a.item.deviceTime.localeCompare(b.item.deviceTime))
         .slice(0, SCORE_ITEMS_PER_REQUEST_MAX);
       if (!pending.length) return;
       const scores = pending.filter((l): l is Extract<LocalLine, { kind: 'score' }> => l.kind === 'score').map((l) => l.item);
       const notes = pending.filter((l): l is Extract<LocalLine, { kind: 'note' }> => l.kind === 'note').map((l) => l.item);
-      let outcome: { state: 'sent' | 'refused'; message?: string };
+      let outcome: (clientId: string) => Pick<LocalLine, 'state' | 'message' | 'answeredAt'>;
       try {
-        await sendScores(eventId, { scores, notes });
-        outcome = { state: 'sent' };
+        const { applied } = await sendScores(eventId, { deviceId: deviceId(), scores, notes });
+        const replaced = new Set(applied.filter((a) => a.replacedByOtherDevice).map((a) => a.clientId));
+        const answeredAt = Date.now();
+        outcome = (id) => (replaced.has(id) ? { state: 'replaced', message: REPLACED_ON_OTHER_PHONE, answeredAt } : { state: 'sent', answeredAt });
       } catch (err) {
         if (!(err instanceof ApiError) || err.code === 'NETWORK' || err.status >= 500 || err.status === 429 || err.status === 401) return; // try again later
-        outcome = { state: 'refused', message: err.message };
+        const refusal = { state: 'refused' as const, message: err.message };
+        outcome = () => refusal;
       }
       const ids = new Set(pending.map((l) => l.item.clientId));
       // Only the lines sent are marked: a tap made while the request was out stays pending.
       await writeLines(eventId, (lines) => {
-        for (const [k, l] of Object.entries(lines)) if (ids.has(l.item.clientId)) lines[k] = { ...l, ...outcome } as LocalLine;
+        for (const [k, l] of Object.entries(lines)) if (ids.has(l.item.clientId)) lines[k] = { ...l, ...outcome(l.item.clientId) } as LocalLine;
         return lines;
       });
       changed();

@@ -6,10 +6,10 @@ import type { JudgeView, NoteItem, ScoreItem } from '@shared/schemas/judging';
  * dead battery between a tap and a signal loses nothing. Each line is one record keyed by
  * car and criterion (or the car's comment); `state` says whether the server has it.
  */
-export type LineState = 'pending' | 'sent' | 'refused';
-export type LocalLine =
-  | { key: string; kind: 'score'; eventId: number; item: ScoreItem; state: LineState; message?: string }
-  | { key: string; kind: 'note'; eventId: number; item: NoteItem; state: LineState; message?: string };
+export type LineState = 'pending' | 'sent' | 'refused' | 'replaced';
+/** `answeredAt`: this phone's clock when the server answered, compared only with this phone's clock (when the view was fetched). */
+type LineBase = { key: string; eventId: number; state: LineState; message?: string; answeredAt?: number };
+export type LocalLine = (LineBase & { kind: 'score'; item: ScoreItem }) | (LineBase & { kind: 'note'; item: NoteItem });
 /** A comment typed before the line has points waits here; it goes out with the points. */
 export type CommentDraft = { key: string; comment: string };
 
@@ -17,7 +17,7 @@ const store = createStore('placard-judging', 'sheets');
 const linesKey = (eventId: number) => `lines:${eventId}`;
 const viewKey = (eventId: number) => `view:${eventId}`;
 
-export const lineKey = (entryId: number, criterionId: number | 'note') => `${entryId}:${criterionId}`;
+export { lineKey } from './line-key';
 
 export async function readLines(eventId: number): Promise<Record<string, LocalLine>> {
   return (await get<Record<string, LocalLine>>(linesKey(eventId), store)) ?? {};
@@ -29,5 +29,11 @@ export async function writeLines(eventId: number, change: (lines: Record<string,
 }
 
 /** The last copy of the judge's cars and sheet fetched from the server, for opening the screens with no signal. */
-export const saveView = (eventId: number, view: JudgeView) => set(viewKey(eventId), view, store);
-export const readView = (eventId: number) => get<JudgeView>(viewKey(eventId), store);
+export async function saveView(eventId: number, view: JudgeView, fetchedAt: number) {
+  await set(viewKey(eventId), view, store);
+  await set(`${viewKey(eventId)}:at`, fetchedAt, store);
+}
+export async function readView(eventId: number): Promise<{ view: JudgeView; fetchedAt: number } | undefined> {
+  const view = await get<JudgeView>(viewKey(eventId), store);
+  return view ? { view, fetchedAt: (await get<number>(`${viewKey(eventId)}:at`, store)) ?? 0 } : undefined;
+}

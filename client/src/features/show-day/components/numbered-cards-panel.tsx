@@ -17,6 +17,11 @@ function Progress({ print }: { print: CardPrint }) {
       <div role="progressbar" aria-label="Cards done" aria-valuemin={0} aria-valuemax={print.total} aria-valuenow={print.done} className="h-4 w-full border border-ink bg-white">
         <div className="h-full bg-signal transition-[width]" style={{ width: `${share}%` }} />
       </div>
+      {print.stalled ? (
+        <p role="alert" className="font-semibold">
+          This print stopped at {print.done} of {print.total}: the computer drawing it was lost. Print again to carry on.
+        </p>
+      ) : null}
       <p className="tabular-nums">
         {print.status === 'queued' ? 'Waiting to start: ' : 'Drawing cards: '}
         {print.done} of {countOf(print.total, 'card')}
@@ -50,7 +55,8 @@ export function NumberedCardsPanel({ eventId, classes }: { eventId: number; clas
   const start = useStartCardPrint(eventId);
   const reminders = useSendReminders(eventId);
   const print = latest.data ?? null;
-  const working = print?.status === 'queued' || print?.status === 'running';
+  // A print whose worker was lost (stalled) can be started again: it resumes from the cards already drawn.
+  const working = (print?.status === 'queued' || print?.status === 'running') && !print.stalled;
 
   return (
     <Panel title="Numbered cards" className="mb-4">
