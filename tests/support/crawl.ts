@@ -21,6 +21,10 @@ function watchForErrors(page: Page): string[] {
   page.on('console', (msg) => {
     if (msg.type() === 'error') errors.push(`console error: ${msg.text()}`);
   });
+  // The console names the status but not the address: say which request the product made and was refused.
+  page.on('response', (res) => {
+    if (res.status() >= 400) errors.push(`refused: ${res.request().method()} ${new URL(res.url()).pathname} answered ${res.status()}`);
+  });
   return errors;
 }
 
