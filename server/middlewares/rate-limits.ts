@@ -84,6 +84,33 @@ export const passwordResetLimiter = limiter('reset', {
   message: 'Too many reset requests. Try again in an hour.',
 });
 
+/**
+ * Reset requests per address whatever the e-mail: the limiter above counts each e-mail on its own, so one
+ * address could still mail a link to every account it can name.
+ */
+export const passwordResetAddressLimiter = limiter('reset-address', {
+  windowMs: 60 * 60 * 1000,
+  limit: config.passwordResetAddressRateLimitPerHour,
+  key: ip,
+  message: 'Too many reset requests from this network. Try again in an hour.',
+});
+
+/** Invitation pages read per address (the landing page reads one on each visit). */
+export const invitationPreviewLimiter = limiter('invitation-preview', {
+  windowMs: config.invitationRateWindowMs,
+  limit: config.invitationRateLimit,
+  key: ip,
+  message: 'Too many invitation links opened from this network. Wait a few minutes and try again.',
+});
+
+/** Invitation acceptances per address, refused ones included. */
+export const invitationAcceptLimiter = limiter('invitation-accept', {
+  windowMs: config.invitationRateWindowMs,
+  limit: config.invitationRateLimit,
+  key: ip,
+  message: 'Too many attempts to accept an invitation. Wait a few minutes and try again.',
+});
+
 /** Reset confirmations per address: each one that holds a live token spends a password hash. */
 export const passwordResetConfirmLimiter = limiter('reset-confirm', {
   windowMs: 60 * 60 * 1000,
