@@ -38,6 +38,8 @@ const EnvSchema = z.object({
   API_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
   VOTE_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
   VOTE_RATE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(10),
+  VOTE_NEW_VOTER_LIMIT: z.coerce.number().int().min(1).default(10),
+  VOTE_NEW_VOTER_WINDOW_MINUTES: z.coerce.number().int().min(1).default(10),
   PHOTO_UPLOADS_PER_WINDOW: z.coerce.number().int().min(1).default(120),
   PHOTO_REQUEST_MEGAPIXELS: z.coerce.number().int().min(1).default(100),
   PHOTO_MEGAPIXELS_PER_WINDOW: z.coerce.number().int().min(1).default(1500),
@@ -162,6 +164,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     /** People's choice vote attempts per address per window (a show's Wi-Fi puts many visitors on one address). */
     voteRateLimit: e.VOTE_RATE_LIMIT,
     voteRateWindowMs: e.VOTE_RATE_WINDOW_MINUTES * 60 * 1000,
+    /** Counted votes (each a new voter) per address per window: slows one machine clearing its cookies to a third of the attempts limit. */
+    voteNewVoterLimit: e.VOTE_NEW_VOTER_LIMIT,
+    voteNewVoterWindowMs: e.VOTE_NEW_VOTER_WINDOW_MINUTES * 60 * 1000,
     /** Upload requests per person per window (the editor sends one photo per request). */
     photoUploadsPerWindow: e.PHOTO_UPLOADS_PER_WINDOW,
     /** Decoded megapixels of all files in one upload request together. */

@@ -24,10 +24,11 @@ const person = (req: Request) => (req.user ? `user:${(req.user as { id: number }
 
 function limiter(
   name: string,
-  opts: { windowMs: number; limit: number; key: (req: Request) => string; message: string; skipSuccessfulRequests?: boolean; store?: PostgresRateLimitStore },
+  opts: { windowMs: number; limit: number; key: (req: Request) => string; message: string; skipSuccessfulRequests?: boolean; skipFailedRequests?: boolean; store?: PostgresRateLimitStore },
 ): RateLimitRequestHandler {
   return rateLimit({
     skipSuccessfulRequests: opts.skipSuccessfulRequests ?? false,
+    skipFailedRequests: opts.skipFailedRequests ?? false,
     windowMs: opts.windowMs,
     limit: opts.limit,
     identifier: name,
@@ -178,4 +179,17 @@ export const voteLimiter = limiter('vote', {
   limit: config.voteRateLimit,
   key: ip,
   message: 'Too many votes from this network. Wait a while and try again.',
+});
+
+/**
+ * Counted votes per address: only a vote that counted (a 303) stays on the count, so this slows bursts of new
+ * voters (one machine clearing its cookies) well below the attempts limit above, while refusals cost nothing
+ * here. The organiser sees such bursts and voids one on its own (`voteBursts`).
+ */
+export const voteNewVoterLimiter = limiter('vote-new-voter', {
+  windowMs: config.voteNewVoterWindowMs,
+  limit: config.voteNewVoterLimit,
+  key: ip,
+  message: 'Many new voters from this network in a few minutes. Wait a while and try again.',
+  skipFailedRequests: true,
 });
