@@ -20,6 +20,7 @@ const EnvSchema = z.object({
   PGPORT: z.coerce.number().int().min(1024).max(65535).default(54329),
   DB_NAME: z.string().regex(/^[a-z_][a-z0-9_]*$/).default('placard'),
   DB_CONNECT_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(3000),
+  DB_STATEMENT_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(10_000),
   SESSION_SECRET: z.string().min(16).optional(),
   SESSION_MAX_AGE_DAYS: z.coerce.number().int().min(1).max(365).default(30),
   TRUST_PROXY: bool.default(false),
@@ -31,9 +32,14 @@ const EnvSchema = z.object({
   SIGNIN_RATE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   SIGNIN_ADDRESS_RATE_LIMIT: z.coerce.number().int().min(1).default(100),
   SIGNUP_RATE_LIMIT_PER_HOUR: z.coerce.number().int().min(1).default(30),
+  PASSWORD_RESET_ADDRESS_RATE_LIMIT_PER_HOUR: z.coerce.number().int().min(1).default(20),
+  INVITATION_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
+  INVITATION_RATE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   API_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
   VOTE_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
   VOTE_RATE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(10),
+  VOTE_NEW_VOTER_LIMIT: z.coerce.number().int().min(1).default(10),
+  VOTE_NEW_VOTER_WINDOW_MINUTES: z.coerce.number().int().min(1).default(10),
   PHOTO_UPLOADS_PER_WINDOW: z.coerce.number().int().min(1).default(120),
   PHOTO_REQUEST_MEGAPIXELS: z.coerce.number().int().min(1).default(100),
   PHOTO_MEGAPIXELS_PER_WINDOW: z.coerce.number().int().min(1).default(1500),
@@ -132,6 +138,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     dbName: e.DB_NAME,
     /** How long a new database connection, or a free one from a pool, is waited for before the request fails with 503. */
     dbConnectTimeoutMs: e.DB_CONNECT_TIMEOUT_MS,
+    /**
+     * How long one statement of a request may run: PostgreSQL cancels it then (`statement_timeout`), and the
+     * client gives up a moment later if the server does not answer at all (`query_timeout`). Migrations and
+     * seeding run without it (`maintenanceSequelize`).
+     */
+    dbStatementTimeoutMs: e.DB_STATEMENT_TIMEOUT_MS,
     sessionSecret: e.SESSION_SECRET ?? 'placard-development-secret-not-for-production',
     sessionMaxAgeMs: e.SESSION_MAX_AGE_DAYS * 24 * 3600 * 1000,
     secureCookies: publicBaseUrl.startsWith('https://'),
@@ -145,10 +157,18 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     /** Sign-ins per address in the same window whatever the e-mail: one address trying many accounts. */
     signInAddressRateLimit: e.SIGNIN_ADDRESS_RATE_LIMIT,
     signUpRateLimitPerHour: e.SIGNUP_RATE_LIMIT_PER_HOUR,
+    /** Reset requests per address whatever the e-mail: one address asking for many accounts' links. */
+    passwordResetAddressRateLimitPerHour: e.PASSWORD_RESET_ADDRESS_RATE_LIMIT_PER_HOUR,
+    /** Invitation previews, and acceptances, per address per window: a link's token cannot be guessed, and this keeps it so. */
+    invitationRateLimit: e.INVITATION_RATE_LIMIT,
+    invitationRateWindowMs: e.INVITATION_RATE_WINDOW_MINUTES * 60 * 1000,
     apiRateLimitPerMinute: e.API_RATE_LIMIT_PER_MINUTE,
     /** People's choice vote attempts per address per window (a show's Wi-Fi puts many visitors on one address). */
     voteRateLimit: e.VOTE_RATE_LIMIT,
     voteRateWindowMs: e.VOTE_RATE_WINDOW_MINUTES * 60 * 1000,
+    /** Counted votes (each a new voter) per address per window: slows one machine clearing its cookies to a third of the attempts limit. */
+    voteNewVoterLimit: e.VOTE_NEW_VOTER_LIMIT,
+    voteNewVoterWindowMs: e.VOTE_NEW_VOTER_WINDOW_MINUTES * 60 * 1000,
     /** Upload requests per person per window (the editor sends one photo per request). */
     photoUploadsPerWindow: e.PHOTO_UPLOADS_PER_WINDOW,
     /** Decoded megapixels of all files in one upload request together. */

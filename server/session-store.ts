@@ -9,7 +9,10 @@ const PgStore = connectPgSimple(session);
 export const sessionPool = new pg.Pool({
   connectionString: config.databaseUrl,
   max: 5,
+  // The same bounds as Sequelize's pool: the wait for a connection, and each statement (server, then client).
   connectionTimeoutMillis: config.dbConnectTimeoutMs,
+  statement_timeout: config.dbStatementTimeoutMs,
+  query_timeout: config.dbStatementTimeoutMs + 1000,
   idleTimeoutMillis: 10_000,
 });
 // An idle client whose server went away (restart, killed postmaster) makes the pool emit 'error';

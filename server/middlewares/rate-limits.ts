@@ -24,10 +24,11 @@ const person = (req: Request) => (req.user ? `user:${(req.user as { id: number }
 
 function limiter(
   name: string,
-  opts: { windowMs: number; limit: number; key: (req: Request) => string; message: string; skipSuccessfulRequests?: boolean; store?: PostgresRateLimitStore },
+  opts: { windowMs: number; limit: number; key: (req: Request) => string; message: string; skipSuccessfulRequests?: boolean; skipFailedRequests?: boolean; store?: PostgresRateLimitStore },
 ): RateLimitRequestHandler {
   return rateLimit({
     skipSuccessfulRequests: opts.skipSuccessfulRequests ?? false,
+    skipFailedRequests: opts.skipFailedRequests ?? false,
     windowMs: opts.windowMs,
     limit: opts.limit,
     identifier: name,
@@ -82,6 +83,33 @@ export const passwordResetLimiter = limiter('reset', {
   limit: 5,
   key: (req) => `${ip(req)}|${emailOf(req)}`,
   message: 'Too many reset requests. Try again in an hour.',
+});
+
+/**
+ * Reset requests per address whatever the e-mail: the limiter above counts each e-mail on its own, so one
+ * address could still mail a link to every account it can name.
+ */
+export const passwordResetAddressLimiter = limiter('reset-address', {
+  windowMs: 60 * 60 * 1000,
+  limit: config.passwordResetAddressRateLimitPerHour,
+  key: ip,
+  message: 'Too many reset requests from this network. Try again in an hour.',
+});
+
+/** Invitation pages read per address (the landing page reads one on each visit). */
+export const invitationPreviewLimiter = limiter('invitation-preview', {
+  windowMs: config.invitationRateWindowMs,
+  limit: config.invitationRateLimit,
+  key: ip,
+  message: 'Too many invitation links opened from this network. Wait a few minutes and try again.',
+});
+
+/** Invitation acceptances per address, refused ones included. */
+export const invitationAcceptLimiter = limiter('invitation-accept', {
+  windowMs: config.invitationRateWindowMs,
+  limit: config.invitationRateLimit,
+  key: ip,
+  message: 'Too many attempts to accept an invitation. Wait a few minutes and try again.',
 });
 
 /** Reset confirmations per address: each one that holds a live token spends a password hash. */
@@ -151,4 +179,17 @@ export const voteLimiter = limiter('vote', {
   limit: config.voteRateLimit,
   key: ip,
   message: 'Too many votes from this network. Wait a while and try again.',
+});
+
+/**
+ * Counted votes per address: only a vote that counted (a 303) stays on the count, so this slows bursts of new
+ * voters (one machine clearing its cookies) well below the attempts limit above, while refusals cost nothing
+ * here. The organiser sees such bursts and voids one on its own (`voteBursts`).
+ */
+export const voteNewVoterLimiter = limiter('vote-new-voter', {
+  windowMs: config.voteNewVoterWindowMs,
+  limit: config.voteNewVoterLimit,
+  key: ip,
+  message: 'Many new voters from this network in a few minutes. Wait a while and try again.',
+  skipFailedRequests: true,
 });

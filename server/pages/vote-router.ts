@@ -1,6 +1,6 @@
 import express, { Router, type ErrorRequestHandler, type Response } from 'express';
 import { BuildCodeSchema } from '@shared/schemas/build';
-import { voteLimiter } from '../middlewares/rate-limits';
+import { voteLimiter, voteNewVoterLimiter } from '../middlewares/rate-limits';
 import { castVote } from '../services/results/peoples-choice';
 import { isDatabaseUnavailable } from '../services/platform/database-unavailable';
 import { existingVoter, formTokenMatches, fromOurOrigin, readVoterCookie } from './voter';
@@ -17,6 +17,7 @@ function refuse(res: Response, reason: VoteRefusal, backUrl: string, votedNumber
 votePagesRouter.post(
   '/c/:code/vote',
   voteLimiter, // before anything is read, so refused votes count too
+  voteNewVoterLimiter, // counts only votes that counted: one address's burst of new voters
   express.urlencoded({ extended: false, limit: '2kb', parameterLimit: 5 }),
   readVoterCookie,
   async (req, res) => {

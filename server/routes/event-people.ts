@@ -9,6 +9,7 @@ import { authorize } from '../policies/authorize';
 import { mayTakePartInShows } from '../policies/event';
 import { acceptInvitation, inviteToEvent, listMembers, listOpenInvitations, previewInvitation, removeMember, revokeInvitation } from '../services/shows/event-people';
 import { presentInvitation, presentMember, presentMembership } from '../presenters/event';
+import { invitationAcceptLimiter, invitationPreviewLimiter } from '../middlewares/rate-limits';
 import { loadEventFor } from './load-for';
 
 export const eventPeopleRouter = Router();
@@ -46,12 +47,12 @@ eventPeopleRouter.delete('/events/:id/members/:userId/:role', requireUser, async
 });
 
 /** The invitee's landing page reads this whether or not they are signed in. */
-eventPeopleRouter.get('/invitations/:token', async (req, res) => {
+eventPeopleRouter.get('/invitations/:token', invitationPreviewLimiter, async (req, res) => {
   const { token } = parseParams(req, InvitationTokenSchema);
   res.json({ invitation: await previewInvitation(token) });
 });
 
-eventPeopleRouter.post('/invitations/:token/accept', requireUser, async (req, res) => {
+eventPeopleRouter.post('/invitations/:token/accept', invitationAcceptLimiter, requireUser, async (req, res) => {
   const { token } = parseParams(req, InvitationTokenSchema);
   const user = currentUser(req);
   authorize(mayTakePartInShows(user), user, 'Confirm your e-mail address before taking a role in a show.');

@@ -19,7 +19,13 @@ export const NameSchema = text('Name')
   .min(1, { error: 'Name is required.' })
   .max(NAME_MAX_LENGTH, { error: `Name must be at most ${NAME_MAX_LENGTH} characters.` });
 
-export const SignUpSchema = z.object({ email: EmailSchema, name: NameSchema, password: PasswordSchema });
+/** The token of the invitation link the person came from: its mail proves the invited address, so an account with that address is confirmed at once. */
+export const SignUpSchema = z.object({
+  email: EmailSchema,
+  name: NameSchema,
+  password: PasswordSchema,
+  invitationToken: z.string({ error: 'The invitation link is not valid.' }).regex(/^[A-Za-z0-9_-]{20,100}$/, { error: 'The invitation link is not valid.' }).optional(),
+});
 export type SignUpInput = z.infer<typeof SignUpSchema>;
 
 export const SignInSchema = z.object({
@@ -50,7 +56,8 @@ export const PasswordResetConfirmSchema = z.object({
 export type PasswordResetConfirmInput = z.infer<typeof PasswordResetConfirmSchema>;
 
 /** Sign-up answers the same whether or not the address has an account: the mail tells the person which. */
-export const SignUpResponseSchema = z.object({ message: z.string(), demoMode: z.boolean() });
+/** `session` is set when sign-up from an invitation made a confirmed account and signed it in. */
+export const SignUpResponseSchema = z.object({ message: z.string(), demoMode: z.boolean(), session: z.lazy(() => SessionResponseSchema).nullable() });
 export type SignUpResponse = z.infer<typeof SignUpResponseSchema>;
 
 export const EmailVerificationConfirmSchema = z.object({

@@ -61,6 +61,11 @@ describe('people’s choice on a phone with JavaScript turned off', () => {
     await panel.getByRole('row', { name: /First car/ }).waitFor();
     expect(await panel.getByRole('row', { name: /First car/ }).innerText()).toMatch(/^1\s+First car\s*leading\s+Hot rods\s+1$/i);
     expect(await panel.getByText(/^1 vote counted/).count()).toBe(1);
+    // The panel says what the limits stop and what they cannot; one vote is no burst.
+    const bursts = panel.locator('section', { has: org.getByRole('heading', { name: 'Bursts of new voters' }) });
+    expect(await bursts.getByText('No bursts so far.').count()).toBe(1);
+    expect(await bursts.getByText(/at most 10 counted votes every 10 minutes/).count()).toBe(1);
+    expect(await bursts.getByText(/changes network .* counts as a new address/).count()).toBe(1);
     await panel.scrollIntoViewIfNeeded();
     await keepScreenshot(panel, 'peoples-choice-organiser.png');
 

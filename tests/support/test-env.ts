@@ -15,6 +15,8 @@ export const TEST_ENV = {
   // Every test signs in from 127.0.0.1: the per-address limits would trip on the suite itself.
   SIGNIN_ADDRESS_RATE_LIMIT: '100000',
   SIGNUP_RATE_LIMIT_PER_HOUR: '100000',
+  PASSWORD_RESET_ADDRESS_RATE_LIMIT_PER_HOUR: '100000',
+  INVITATION_RATE_LIMIT: '100000',
   API_RATE_LIMIT_PER_MINUTE: '100000',
   PUBLIC_BASE_URL: 'http://127.0.0.1:3999',
   LOG_LEVEL: 'silent',

@@ -14,7 +14,7 @@ import { sendVerificationMail } from './email-verification';
  * confirmation link; one that already has an account gets a mail saying so (at most one an hour, so
  * sign-up cannot flood someone's inbox). Resolves with the new account, or null.
  */
-export async function signUp(input: SignUpInput, publicBaseUrl: string, outer?: Transaction): Promise<User | null> {
+export async function signUp(input: SignUpInput, publicBaseUrl: string, opts: { addressProven?: boolean } = {}, outer?: Transaction): Promise<User | null> {
   const passwordHash = await hashPassword(input.password);
   try {
     return await withTransaction(outer, async (transaction) => {
@@ -23,13 +23,14 @@ export async function signUp(input: SignUpInput, publicBaseUrl: string, outer?: 
         await mailAccountExists(existing, publicBaseUrl, transaction);
         return null;
       }
-      const user = await User.create({ email: input.email, name: input.name, passwordHash, emailVerifiedAt: null }, { transaction });
-      await sendVerificationMail(user, publicBaseUrl, transaction);
+      // An address already proven (the person came from a mail sent to it) needs no second mail.
+      const user = await User.create({ email: input.email, name: input.name, passwordHash, emailVerifiedAt: opts.addressProven ? new Date() : null }, { transaction });
+      if (!opts.addressProven) await sendVerificationMail(user, publicBaseUrl, transaction);
       return user;
     });
   } catch (err) {
     // Two sign-ups with one address at once: the second finds the first's account on a second look.
-    if (err instanceof UniqueConstraintError) return signUp(input, publicBaseUrl);
+    if (err instanceof UniqueConstraintError) return signUp(input, publicBaseUrl, opts);
     throw err;
   }
 }

@@ -2,11 +2,12 @@ import { ConnectionError } from 'sequelize';
 
 // Node socket errors and PostgreSQL SQLSTATEs that mean "the database cannot be reached right now",
 // as opposed to "this query is wrong". Class 08 is "connection exception"; 57P01–57P03 are a server
-// shutting down or starting up; 53300 is too many connections (PostgreSQL's errcodes appendix).
+// shutting down or starting up; 53300 is too many connections; 57014 is a statement cancelled, here by
+// statement_timeout: the database is too busy or stuck to answer in time (PostgreSQL's errcodes appendix).
 const SOCKET_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', 'ENOTFOUND', 'EHOSTUNREACH', 'EAI_AGAIN', 'ENETUNREACH']);
-const SQLSTATES = new Set(['57P01', '57P02', '57P03', '53300']);
+const SQLSTATES = new Set(['57P01', '57P02', '57P03', '53300', '57014']);
 // pg and pg-pool say these in words only (no code).
-const MESSAGES = [/connection terminated/i, /timeout exceeded when trying to connect/i, /not queryable/i, /connection.*(?:closed|ended)/i];
+const MESSAGES = [/connection terminated/i, /timeout exceeded when trying to connect/i, /not queryable/i, /connection.*(?:closed|ended)/i, /query read timeout/i];
 
 /** True when an error (or what it wraps: Sequelize's `parent`/`original`, a `cause`) says the database is unreachable. */
 export function isDatabaseUnavailable(err: unknown, depth = 0): boolean {

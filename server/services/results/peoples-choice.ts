@@ -1,7 +1,8 @@
 import { createHmac } from 'node:crypto';
-import { QueryTypes, type Transaction } from 'sequelize';
+import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { peoplesChoice } from '@shared/calc/results';
-import { VOTING_STATUSES, votingOpen } from '@shared/schemas/peoples-choice';
+import { voteBursts } from '@shared/calc/vote-bursts';
+import { VOTE_BURST_SHOWN, VOTING_STATUSES, votingOpen, type VotingLimits } from '@shared/schemas/peoples-choice';
 import { sequelize } from '../../db/sequelize';
 import { config } from '../../config';
 import { ConflictError, NotFoundError } from '../../errors';
@@ -102,11 +103,51 @@ export function loadAddresses(eventId: number) {
   );
 }
 
+/** Bursts of new voters from one address in the show (see `voteBursts`), newest first. */
+export async function loadBursts(eventId: number) {
+  const votes = await sequelize.query<{ addressHash: string; at: Date; voided: boolean }>(
+    `SELECT address_hash AS "addressHash", created_at AS at, voided_at IS NOT NULL AS voided FROM votes WHERE event_id = :eventId`,
+    { replacements: { eventId }, type: QueryTypes.SELECT },
+  );
+  return voteBursts(votes, { windowMs: VOTE_BURST_SHOWN.windowMinutes * 60_000, minVotes: VOTE_BURST_SHOWN.minVotes });
+}
+
+/** The limits in force, for the panel to say what they stop and what they cannot. */
+export const votingLimits = (): VotingLimits => ({
+  attempts: config.voteRateLimit,
+  attemptsWindowMinutes: config.voteRateWindowMs / 60_000,
+  newVoters: config.voteNewVoterLimit,
+  newVotersWindowMinutes: config.voteNewVoterWindowMs / 60_000,
+  burstFrom: VOTE_BURST_SHOWN.minVotes,
+  burstWindowMinutes: VOTE_BURST_SHOWN.windowMinutes,
+});
+
 /** Everything the organiser's panel shows. */
 export async function loadPeoplesChoice(eventId: number) {
   const event = await findEvent(eventId);
-  const [tally, addresses] = await Promise.all([loadTally(eventId), loadAddresses(eventId)]);
-  return { event, tally, addresses, leaders: peoplesChoice(tally).entryIds };
+  const [tally, addresses, bursts] = await Promise.all([loadTally(eventId), loadAddresses(eventId), loadBursts(eventId)]);
+  return { event, tally, addresses, bursts, leaders: peoplesChoice(tally).entryIds, limits: votingLimits() };
+}
+
+/**
+ * Voids the counted votes of one burst: that address's votes from its first to its last vote (the times as
+ * the panel got them, to the millisecond; stored times carry microseconds, hence the end's extra millisecond).
+ * The address's votes outside the burst keep counting, so honest visitors on the same network are not voided.
+ */
+export async function voidVoteBurst(eventId: number, burst: { addressHash: string; from: Date; to: Date }, person: { id: number }, outer?: Transaction): Promise<number> {
+  return withTransaction(outer, async (transaction) => {
+    await findEvent(eventId, transaction);
+    const until = new Date(burst.to.getTime() + 1);
+    const [count] = await Vote.update(
+      { voidedAt: new Date(), voidedBy: person.id },
+      { where: { eventId, addressHash: burst.addressHash, voidedAt: null, createdAt: { [Op.gte]: burst.from, [Op.lt]: until } }, transaction },
+    );
+    if (count > 0) {
+      const after = { addressHash: burst.addressHash, from: burst.from.toISOString(), to: burst.to.toISOString(), votes: count };
+      await writeAudit({ eventId, actorId: person.id, action: 'peoples_choice_burst_voided', after }, transaction);
+    }
+    return count;
+  });
 }
 
 /** Voids every counted vote from one address in the show (ballot stuffing from one network); the audit line says how many. */

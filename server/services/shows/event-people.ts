@@ -8,11 +8,15 @@ import { EventInvitation } from '../../models/event-invitation';
 import { EventMembership } from '../../models/event-membership';
 import { User } from '../../models/user';
 import { queueMail } from '../../mail/outbox';
-import { ConflictError, NotFoundError, ValidationError } from '../../errors';
+import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../../errors';
 import { writeAudit } from '../audit/audit';
 import { withTransaction } from '../../db/transaction';
 
 type Person = { id: number; name: string };
+
+/** Never names the invited address: the link may be in a stranger's hands. */
+export const INVITATION_FOR_ANOTHER_ADDRESS =
+  'This invitation was sent to a different e-mail address than the one of this account. Sign in with the account of the invited address, or ask the organiser to invite the address of this account.';
 const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 
 export function listMembers(eventId: number) {
@@ -67,13 +71,28 @@ export async function previewInvitation(token: string) {
   return { eventName: inv.event.name, eventSlug: inv.event.slug, role: inv.role, expiresAt: inv.expiresAt.toISOString(), state: stateOf(inv) };
 }
 
-/** The signed-in person takes the role; the link is spent. */
-export async function acceptInvitation(token: string, person: { id: number }, outer?: Transaction) {
+/**
+ * The address an open invitation was sent to, else null. Holding the link proves that address: the mail
+ * went there. Sign-up reads it to confirm a new account with that address at once.
+ */
+export async function openInvitationAddress(token: string): Promise<string | null> {
+  const inv = await EventInvitation.findOne({ where: { tokenHash: sha256(token) }, attributes: ['email', 'acceptedAt', 'revokedAt', 'expiresAt'] });
+  return inv && stateOf(inv) === 'open' ? inv.email : null;
+}
+
+const sameAddress = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLowerCase();
+
+/**
+ * The signed-in person takes the role; the link is spent. Only the account whose confirmed address is the
+ * invited one may: a link forwarded to someone else is refused, and stays open for the invited person.
+ */
+export async function acceptInvitation(token: string, person: { id: number; email: string; emailVerified: boolean }, outer?: Transaction) {
   return withTransaction(outer, async (transaction) => {
     const inv = await EventInvitation.findOne({ where: { tokenHash: sha256(token) }, lock: transaction.LOCK.UPDATE, transaction });
     if (!inv) throw new NotFoundError('This invitation link is not valid.');
     const state = stateOf(inv);
     if (state !== 'open') throw new ValidationError({ token: state === 'used' ? 'This invitation was already used.' : state === 'expired' ? 'This invitation has expired; ask for a new one.' : 'This invitation was withdrawn.' }, 'This invitation cannot be used.');
+    if (!person.emailVerified || !sameAddress(person.email, inv.email)) throw new ForbiddenError(INVITATION_FOR_ANOTHER_ADDRESS);
     await inv.update({ acceptedAt: new Date(), acceptedBy: person.id }, { transaction });
     const [membership] = await EventMembership.findOrCreate({ where: { eventId: inv.eventId, userId: person.id, role: inv.role }, transaction });
     await writeAudit({ eventId: inv.eventId, actorId: person.id, action: 'invitation_accepted', after: { invitationId: inv.id, role: inv.role, userId: person.id } }, transaction);

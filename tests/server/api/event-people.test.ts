@@ -1,14 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { EventInvitation } from '@server/models/event-invitation';
+import { EmailVerificationToken } from '@server/models/email-verification-token';
+import { User } from '@server/models/user';
 import { apiClient } from '../../support/api-client';
 import { ownerWithBuild, showWithClasses, signedIn } from '../../support/event-factory';
 import { waitForMail, waitForMailAbout } from '../../support/mailbox';
-import { uniqueEmail } from '../../support/factories';
+import { createUser, uniqueEmail } from '../../support/factories';
 
 const linkToken = (text: string) => /\/invitations\/([A-Za-z0-9_-]+)/.exec(text)![1]!;
 
 describe('people of a show: invitations', () => {
-  it('mails a single-use link that attaches the role to whoever accepts it, signed in', async () => {
+  it('mails a single-use link that gives the role to the invited account when it accepts, signed in', async () => {
     const { organiser, eventId } = await showWithClasses({ settings: { name: 'Lakeside <Show>' } });
     const judge = await signedIn({ name: 'Jay Judge' });
     const res = await organiser.client.post(`/api/events/${eventId}/invitations`, { email: judge.email.toUpperCase(), role: 'judge' });
@@ -127,5 +129,85 @@ describe('gate and judge roles do only their thing', () => {
     expect((await gate.client.post(`/api/events/${eventId}/gate/check-in`, { number: 1 })).body.error.message).toMatch(/already checked in/);
     expect((await gate.client.post(`/api/events/${eventId}/gate/check-in`, { number: 99 })).status).toBe(404);
     expect((await gate.client.get(`/api/events/${eventId}`)).body.event.abilities).toMatchObject({ checkIn: true, manage: false, judge: false });
+  });
+});
+
+describe('an invitation belongs to the address it was sent to', () => {
+  it('refuses a forwarded link to another confirmed account, which gains no role, and lets the invited address accept', async () => {
+    const { organiser, eventId } = await showWithClasses({ settings: { name: 'Forwarded Link Show' } });
+    const invitedEmail = uniqueEmail('invited');
+    await organiser.client.post(`/api/events/${eventId}/invitations`, { email: invitedEmail, role: 'organiser' });
+    const token = linkToken((await waitForMail(invitedEmail)).text);
+
+    const forwardedTo = await signedIn({ name: 'Not The Invitee' });
+    const refused = await forwardedTo.client.post(`/api/invitations/${token}/accept`);
+    expect(refused.status).toBe(403);
+    expect(refused.body.error.message).toMatch(/sent to a different e-mail address/);
+    expect(refused.body.error.message).toMatch(/ask the organiser to invite/);
+    expect(JSON.stringify(refused.body)).not.toContain(invitedEmail);
+    expect((await forwardedTo.client.get(`/api/events/${eventId}`)).status).toBe(404);
+    expect((await forwardedTo.client.get(`/api/events/${eventId}/people`)).status).toBe(404);
+    expect((await forwardedTo.client.get(`/api/events/${eventId}/entries`)).status).toBe(404);
+    expect((await forwardedTo.client.get(`/api/invitations/${token}`)).body.invitation.state).toBe('open');
+
+    const { email, password } = await createUser({ email: invitedEmail, name: 'The Invitee' });
+    const invitee = await apiClient();
+    expect((await invitee.signIn(email, password)).status).toBe(200);
+    const accepted = await invitee.post(`/api/invitations/${token}/accept`);
+    expect(accepted.status).toBe(200);
+    expect(accepted.body).toEqual({ eventId, role: 'organiser' });
+    expect((await invitee.get(`/api/events/${eventId}/people`)).status).toBe(200);
+    expect((await forwardedTo.client.get(`/api/events/${eventId}`)).status).toBe(404);
+  });
+
+  it('refuses the invited address while it is unconfirmed, with the confirmation message', async () => {
+    const { organiser, eventId } = await showWithClasses();
+    const { email, password } = await createUser({ emailVerified: false });
+    await organiser.client.post(`/api/events/${eventId}/invitations`, { email, role: 'judge' });
+    const token = linkToken((await waitForMail(email)).text);
+    const client = await apiClient();
+    await client.signIn(email, password);
+    const refused = await client.post(`/api/invitations/${token}/accept`);
+    expect(refused.status).toBe(403);
+    expect(refused.body.error.message).toMatch(/Confirm your e-mail/);
+  });
+
+  it('confirms a new account made from the link with the invited address and signs it in, ready to accept at once', async () => {
+    const { organiser, eventId } = await showWithClasses();
+    const email = uniqueEmail('newcomer');
+    await organiser.client.post(`/api/events/${eventId}/invitations`, { email, role: 'judge' });
+    const token = linkToken((await waitForMail(email)).text);
+
+    const newcomer = await apiClient();
+    const made = await newcomer.post('/api/users', { email: email.toUpperCase(), name: 'New Judge', password: 'a long enough password', invitationToken: token });
+    expect(made.status).toBe(201);
+    expect(made.body.session.user).toMatchObject({ name: 'New Judge' });
+    const user = await User.findOne({ where: { email } });
+    expect(user?.emailVerifiedAt).toBeInstanceOf(Date);
+    expect(await EmailVerificationToken.count({ where: { userId: user!.id } })).toBe(0); // no second mail to confirm
+    const accepted = await newcomer.post(`/api/invitations/${token}/accept`);
+    expect(accepted.status).toBe(200);
+    expect(accepted.body).toEqual({ eventId, role: 'judge' });
+  });
+
+  it('makes an ordinary unconfirmed account when the link is used to sign up with another address', async () => {
+    const { organiser, eventId } = await showWithClasses();
+    const invited = uniqueEmail('invited');
+    await organiser.client.post(`/api/events/${eventId}/invitations`, { email: invited, role: 'organiser' });
+    const token = linkToken((await waitForMail(invited)).text);
+
+    const other = uniqueEmail('other');
+    const stranger = await apiClient();
+    const made = await stranger.post('/api/users', { email: other, name: 'Link Holder', password: 'a long enough password', invitationToken: token });
+    expect(made.status).toBe(202);
+    expect(made.body.session).toBeNull();
+    await waitForMailAbout(other, /Confirm your e-mail/);
+    expect((await User.findOne({ where: { email: other } }))?.emailVerifiedAt).toBeNull();
+    expect((await stranger.signIn(other, 'a long enough password')).status).toBe(200);
+    expect((await stranger.post(`/api/invitations/${token}/accept`)).status).toBe(403);
+
+    const badToken = await stranger.post('/api/users', { email: uniqueEmail(), name: 'X', password: 'a long enough password', invitationToken: 'short' });
+    expect(badToken.status).toBe(400);
+    expect(badToken.body.error.fields.invitationToken).toBeDefined();
   });
 });

@@ -7,6 +7,8 @@ import { Vote } from '@server/models/vote';
 import { publicPageCache } from '@server/pages/page-cache';
 import { checkPageVersionOnEveryRequest } from '../../support/page-cache';
 import { peoplesChoiceWinners } from '@server/services/results/peoples-choice';
+import { sequelize } from '@server/db/sequelize';
+import { votingLimitsExplained, type VotingLimits } from '@shared/schemas/peoples-choice';
 import { apiClient } from '../../support/api-client';
 import { listenApp, rawGet } from '../../support/raw-http';
 import { signedIn, showWithClasses } from '../../support/event-factory';
@@ -195,6 +197,67 @@ describe('the rate limit per address', () => {
 
     expect((await visitor(server.baseUrl).viewAndVote(car)).status).toBe(303);
     expect(await show.votesOf(1)).toBe(1);
+  });
+});
+
+describe('bursts of new voters from one address', () => {
+  it('slows a burst, shows it to the organiser, and voids the burst alone: an earlier voter on that address still counts', async () => {
+    const show = await votingShow();
+    const [car1, car2] = show.codes as [string, string];
+    const limits = (await show.tally()).limits as VotingLimits;
+    expect(limits).toEqual({ attempts: 30, attemptsWindowMinutes: 10, newVoters: 10, newVotersWindowMinutes: 10, burstFrom: 5, burstWindowMinutes: 10 });
+    const network = loopbackAddress();
+
+    // An honest visitor on this network voted half an hour before the burst (the stored time moved back, as if so).
+    expect((await visitor(server.baseUrl, network).viewAndVote(car2)).status).toBe(303);
+    const [honest] = await storedVotes(show.eventId);
+    await sequelize.query(`UPDATE votes SET created_at = now() - interval '30 minutes' WHERE id = :id`, { replacements: { id: honest!.id } });
+
+    // One machine clearing its cookies: each time a new visitor. The honest vote used one of the window's counted votes.
+    for (let i = 1; i < limits.newVoters; i++) expect((await visitor(server.baseUrl, network).viewAndVote(car1)).status).toBe(303);
+    const slowed = await visitor(server.baseUrl, network).viewAndVote(car1);
+    expect(slowed.status).toBe(429);
+    expect(slowed.text).toContain('Too many votes from this network');
+    expect((await visitor(server.baseUrl).viewAndVote(car1)).status).toBe(303); // another address is not held back
+    expect(await storedVotes(show.eventId)).toHaveLength(limits.newVoters + 1);
+
+    const seen = await show.tally();
+    expect(seen.bursts).toHaveLength(1);
+    const burst = seen.bursts[0];
+    expect(burst).toMatchObject({ addressHash: honest!.addressHash, votes: limits.newVoters - 1, voided: 0 });
+    expect(Date.parse(burst.to) - Date.parse(burst.from)).toBeLessThan(limits.burstWindowMinutes * 60_000);
+    expect(seen.addresses.find((a: { addressHash: string }) => a.addressHash === honest!.addressHash)).toMatchObject({ votes: limits.newVoters, voided: 0 });
+
+    const wrong = await show.organiser.client.post(`${show.base}/void-burst`, { addressHash: 'nope', from: burst.to, to: burst.from });
+    expect(wrong.status).toBe(400);
+    expect(wrong.body.error.fields).toMatchObject({ addressHash: expect.any(String) });
+    const backwards = await show.organiser.client.post(`${show.base}/void-burst`, { addressHash: burst.addressHash, from: burst.to, to: '2020-01-01T00:00:00.000Z' });
+    expect(backwards.body.error.fields.to).toMatch(/after its start/);
+
+    const voided = await show.organiser.client.post(`${show.base}/void-burst`, { addressHash: burst.addressHash, from: burst.from, to: burst.to });
+    expect(voided.status).toBe(200);
+    expect(voided.body.voided).toBe(limits.newVoters - 1);
+    const after = voided.body.peoplesChoice;
+    expect(after.tally.map((t: { number: number; votes: number }) => [t.number, t.votes]).slice(0, 2)).toEqual([[1, 1], [2, 1]]);
+    expect(after).toMatchObject({ totalVotes: 2, voidedVotes: limits.newVoters - 1 });
+    expect(after.bursts[0]).toMatchObject({ votes: limits.newVoters - 1, voided: limits.newVoters - 1 });
+    expect((await Vote.findByPk(honest!.id))?.voidedAt).toBeNull();
+    const line = await AuditLine.findOne({ where: { eventId: show.eventId, action: 'peoples_choice_burst_voided' } });
+    expect(line?.actorId).toBe(show.organiser.user.id);
+    expect(line?.after).toMatchObject({ addressHash: burst.addressHash, votes: limits.newVoters - 1 });
+
+    const judge = await judgeOf(show.eventId);
+    expect((await judge.client.post(`${show.base}/void-burst`, { addressHash: burst.addressHash, from: burst.from, to: burst.to })).status).toBe(403);
+  });
+
+  it('says on the panel what the limits stop and what they cannot, with the numbers in force', async () => {
+    const show = await votingShow();
+    const words = votingLimitsExplained((await show.tally()).limits);
+    expect(words.stops.join(' ')).toContain('at most 30 vote attempts every 10 minutes');
+    expect(words.stops.join(' ')).toContain('at most 10 counted votes every 10 minutes, however often its cookies are cleared');
+    expect(words.stops.join(' ')).toMatch(/From 5 new voters on one address within 10 minutes.*void on its own/);
+    expect(words.cannotStop.join(' ')).toMatch(/changes network/);
+    expect(words.cannotStop.join(' ')).toMatch(/can be honest/);
   });
 });
 

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Link, useSearchParams } from 'react-router-dom';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { PASSWORD_MIN_LENGTH } from '@shared/constants';
 import { SignUpSchema, type SignUpInput } from '@shared/schemas/user';
 import { useSignUp } from '../api/sign-up';
@@ -15,8 +15,13 @@ import { safeNext } from '../safe-next';
 import { useSession } from '../api/get-session';
 import { AlreadySignedIn } from './already-signed-in';
 
+/** The token of an invitation link the person came from (`next=/invitations/<token>`): its mail proves the address. */
+const invitationTokenIn = (next: string | null) => /^\/invitations\/([A-Za-z0-9_-]{20,100})$/.exec(next ?? '')?.[1];
+
 export function SignUpPage() {
   const [params] = useSearchParams();
+  const navigate = useNavigate();
+  const invitationToken = invitationTokenIn(params.get('next'));
   const signUp = useSignUp();
   const { data: session } = useSession();
   const [formError, setFormError] = useState('');
@@ -25,14 +30,18 @@ export function SignUpPage() {
   const onSubmit = handleSubmit((input) => {
     setFormError('');
     rememberNextAfterSignUp(params.get('next'));
-    signUp.mutate(input, {
+    signUp.mutate(invitationToken ? { ...input, invitationToken } : input, {
+      // From an invitation with the invited address the account is confirmed and signed in: straight back to it.
+      onSuccess: ({ session }) => {
+        if (session) void navigate(safeNext(params.get('next')));
+      },
       onError: (err) => setFormError(applyServerErrors(err, setError, ['email', 'name', 'password'])),
     });
   });
 
   if (session?.user && signUp.isIdle) return <AlreadySignedIn title="Make an account" name={session.user.name} next={safeNext(params.get('next'))} />;
 
-  if (signUp.isSuccess) {
+  if (signUp.isSuccess && !signUp.data.session) {
     return (
       <div className="mx-auto max-w-md">
         <PageHeader title="Check your inbox" />
@@ -54,7 +63,15 @@ export function SignUpPage() {
       <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
         {formError ? <Notice tone="danger">{formError}</Notice> : null}
         <TextField label="Your name" autoComplete="name" {...register('name')} error={errors.name?.message} hint="Shown on your build pages and cards." />
-        <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" {...register('email')} error={errors.email?.message} hint="Never shown to anyone else." />
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="email"
+          inputMode="email"
+          {...register('email')}
+          error={errors.email?.message}
+          hint={invitationToken ? 'Use the address the invitation was sent to: the account is then ready at once. Never shown to anyone else.' : 'Never shown to anyone else.'}
+        />
         <TextField label="Password" type="password" autoComplete="new-password" {...register('password')} error={errors.password?.message} hint={`At least ${PASSWORD_MIN_LENGTH} characters.`} />
         <Button type="submit" busy={signUp.isPending}>
           Make my account

@@ -11,6 +11,7 @@ import { useCloseVoting } from '../api/close-voting';
 import { usePeoplesChoice } from '../api/get-peoples-choice';
 import { useOpenVoting } from '../api/open-voting';
 import { useVoidAddress } from '../api/void-address';
+import { VoteBurstsSection } from './vote-bursts-section';
 
 const short = (hash: string) => hash.slice(0, ADDRESS_HASH_SHOWN);
 
@@ -82,9 +83,11 @@ export function PeoplesChoicePanel({ show }: { show: EventDetail }) {
           </table>
         </section>
 
+        <VoteBurstsSection eventId={show.id} pc={pc} />
+
         <section>
           <h3 className="font-display uppercase">Votes by address</h3>
-          <p className="text-sm text-graphite">Addresses are kept only as a scrambled code, shortened here. Many votes from one code may be one network stuffing the vote, or a busy show Wi-Fi: void them only when you are sure.</p>
+          <p className="text-sm text-graphite">Addresses are kept only as a scrambled code, shortened here. Many votes from one code may be one network stuffing the vote, or a busy show Wi-Fi: voiding an address voids its honest visitors too, so void a burst above when you can.</p>
           {pc.addresses.length === 0 ? <p className="text-graphite">No votes yet.</p> : null}
           <ul className="divide-y divide-rule">
             {pc.addresses.map((a) => (
