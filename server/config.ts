@@ -180,6 +180,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     imageConcurrency: e.IMAGE_CONCURRENCY,
     /** Local-disk storage of uploads; tests get a fresh temporary folder per process unless told otherwise. */
     storageDir: path.resolve(PROJECT_ROOT, e.STORAGE_DIR ?? (e.NODE_ENV === 'test' ? testStorageDir() : '.data/uploads')),
+    // Card work reads and writes that storage: under test, where each process has a folder of its own,
+    // each process also works a card queue of its own, so a print is drawn where its test reads it.
+    cardQueue: e.NODE_ENV === 'test' && !e.STORAGE_DIR ? `cards-${process.pid}` : 'cards',
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     /** How often an idle worker asks the queue for work (a worker in the same process is woken at once). */
     jobPollSeconds: e.JOB_POLL_SECONDS,

@@ -11,12 +11,8 @@ export const MAIL_QUEUE = 'mail';
 export const MAIL_UNDELIVERED_QUEUE = 'mail-undelivered';
 /** Refunds of entry fees paid online, sent to the payment service after a withdrawal commits. */
 export const REFUND_QUEUE = 'entry-refund';
-/**
- * Card work (bulk prints of numbered cards, show reminders with the owner's card). Files go through
- * the storage layer, which in tests is a folder per process: there each test process works its own
- * queue, so a print is rendered where its test reads it back.
- */
-export const CARD_QUEUE = config.env === 'test' ? `cards-${process.pid}` : 'cards';
+/** Card work (bulk prints of numbered cards, show reminders with the owner's card); named by config beside the storage it uses. */
+export const CARD_QUEUE = config.cardQueue;
 /** Every minute, lapsed waiting-list offers pass to the next in line even when nobody opens the show. */
 export const OFFER_SWEEP_QUEUE = 'offer-sweep';
 export const OFFER_SWEEP_CRON = '* * * * *';

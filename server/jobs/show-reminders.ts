@@ -1,10 +1,8 @@
-import { QueryTypes } from 'sequelize';
 import { formatInZone } from '@shared/calc/time-zone';
 import { showReminderEmail } from '@templates/email/show-reminder';
 import { config } from '../config';
-import { sequelize } from '../db/sequelize';
 import { logger } from '../logger';
-import { queueMail } from '../mail/outbox';
+import { mailAlreadyQueued, queueMail } from '../mail/outbox';
 import { Event } from '../models/event';
 import { presentPublicBuild } from '../presenters/public-build';
 import { entryCardBuild, entryCardFileName, entryCardShow, reminderEntries, renderEntryCard } from '../services/entries/entry-card';
@@ -24,8 +22,7 @@ export async function sendShowReminders(eventId: number): Promise<void> {
   for (const entry of await reminderEntries(eventId)) {
     if (!entry.owner?.email) continue;
     // Already reminded (a second press, a retried job): skip before spending a card render on it.
-    const sentBefore = await sequelize.query('SELECT 1 FROM mail_dedupe_keys WHERE key = $1', { bind: [reminderDedupeKey(eventId, entry.id)], type: QueryTypes.SELECT });
-    if (sentBefore.length) continue;
+    if (await mailAlreadyQueued(reminderDedupeKey(eventId, entry.id))) continue;
     const build = await entryCardBuild(entry);
     const show = await entryCardShow(entry);
     const pdf = await renderEntryCard(build, presentPublicBuild(build), show);

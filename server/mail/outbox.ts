@@ -23,6 +23,12 @@ export async function queueMail(mail: QueuedMail, options: QueueMailOptions = {}
   return enqueueMail(jobQueue(), mail, options);
 }
 
+/** True when a notice with this dedupe key was queued before: a caller can skip costly work for it. */
+export async function mailAlreadyQueued(dedupeKey: string): Promise<boolean> {
+  const rows = await sequelize.query('SELECT 1 FROM mail_dedupe_keys WHERE key = $1', { bind: [dedupeKey], type: QueryTypes.SELECT });
+  return rows.length > 0;
+}
+
 /** queueMail() on a given queue (tests run one with its own mail server). */
 export async function enqueueMail(queue: JobQueue, mail: QueuedMail, options: QueueMailOptions = {}): Promise<boolean> {
   await queue.start(); // before any transaction: the first start creates pg-boss's tables on its own connection

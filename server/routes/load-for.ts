@@ -19,6 +19,9 @@ export async function loadEventFor(req: Request, action: EventAction) {
   return { event, actor: actor! };
 }
 
+/** The person as an actor with their roles in this show as they are now (after a change: a new show's creator is its organiser). */
+export const actorFor = (req: Request, eventId: number) => actorInEvent(currentUser(req), eventId);
+
 /** The same for a route about one entry (`:id`): the entry, the actor in its show, the entry policy's answer. */
 export async function loadEntryFor(req: Request, action: EntryAction) {
   const entry = await findEntry(parseParams(req, IdParamSchema).id);

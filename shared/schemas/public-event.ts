@@ -1,7 +1,6 @@
 import { z } from 'zod';
-import { ASKABLE_PRIVATE_FIELDS } from '../constants';
 import { EVENT_STATUSES } from '../constants';
-import { EventLogoOutSchema } from './show';
+import { EventLogoOutSchema, ShowWhenWhereOutSchema } from './show';
 import { PublicResultsSchema } from './results';
 
 /** The public face of a show: nothing about any person (no e-mail, phone, plate, VIN, home address). */
@@ -15,19 +14,10 @@ export const PublicEventSchema = z.object({
   statusLabel: z.string(),
   logo: EventLogoOutSchema.nullable(),
   takingEntries: z.boolean(),
-  /** Private fields the entry form asks for beyond name, e-mail and phone (what is asked, never anyone's answer). */
-  asksFor: z.array(z.enum(ASKABLE_PRIVATE_FIELDS)),
   /** People's choice voting is open: each car's page has the vote. */
   peoplesChoiceOpen: z.boolean(),
-  venueName: z.string(),
+  ...ShowWhenWhereOutSchema.shape,
   venueAddress: z.string(),
-  timeZone: z.string(),
-  startsAt: z.string(),
-  endsAt: z.string(),
-  registrationOpensAt: z.string(),
-  registrationClosesAt: z.string(),
-  entryFee: z.number(),
-  currency: z.string(),
   feeText: z.string(),
   description: z.string(),
   classes: z.array(

@@ -135,11 +135,8 @@ export const EventSchema = EventFieldsSchema.extend({
 });
 export type EventDetail = z.infer<typeof EventSchema>;
 
-export const EventSummarySchema = z.object({
-  id: z.number(),
-  name: z.string(),
-  slug: z.string(),
-  status: EventStatusSchema,
+/** Where and when a show is, what it costs and what its entry form asks for: the same in every answer about a show. */
+export const ShowWhenWhereOutSchema = z.object({
   venueName: z.string(),
   timeZone: z.string(),
   startsAt: z.string(),
@@ -148,7 +145,16 @@ export const EventSummarySchema = z.object({
   registrationClosesAt: z.string(),
   entryFee: z.number(),
   currency: z.string(),
+  /** Private fields the entry form asks for beyond name, e-mail and phone (what is asked, never anyone's answer). */
   asksFor: z.array(z.enum(ASKABLE_PRIVATE_FIELDS)),
+});
+
+export const EventSummarySchema = z.object({
+  id: z.number(),
+  name: z.string(),
+  slug: z.string(),
+  status: EventStatusSchema,
+  ...ShowWhenWhereOutSchema.shape,
   myRoles: z.array(z.enum(EVENT_ROLES)),
   publicUrl: z.string(),
   logo: EventLogoOutSchema.nullable(),
