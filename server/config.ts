@@ -4,7 +4,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
-const PROJECT_ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+export const PROJECT_ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
 const bool = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'])
@@ -45,6 +45,17 @@ const EnvSchema = z.object({
   PHOTO_MEGAPIXELS_PER_WINDOW: z.coerce.number().int().min(1).default(1500),
   IMAGE_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(1),
   STORAGE_DIR: z.string().optional().transform((v) => v || undefined),
+  /** Where uploads, card caches and bulk PDFs live: the local disk, or an S3-compatible bucket. */
+  STORAGE_DRIVER: z.enum(['local', 's3']).default('local'),
+  S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, { error: 'S3_BUCKET must be a bucket name (lowercase letters, digits, dots, hyphens).' }).default('placard'),
+  /** An S3-compatible endpoint (MinIO, a provider's URL); empty for AWS itself by region, or, outside production, the local fake. */
+  S3_ENDPOINT: z.url().optional(),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_ACCESS_KEY_ID: z.string().optional(),
+  S3_SECRET_ACCESS_KEY: z.string().optional(),
+  S3_FORCE_PATH_STYLE: z.stringbool().default(true),
+  /** The local fake S3 (`npm start` with STORAGE_DRIVER=s3 and no S3_ENDPOINT, outside production). */
+  S3_FAKE_PORT: z.coerce.number().int().min(1).max(65535).default(54341),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   JOB_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(2),
   MAIL_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).max(3600).default(10),
@@ -92,6 +103,25 @@ function paymentsConfig(e: PaymentsEnv, production: boolean) {
 }
 
 const testStorageDir = () => path.join(os.tmpdir(), `placard-test-uploads-${process.pid}-${randomBytes(4).toString('hex')}`);
+
+/**
+ * The S3 bucket, when STORAGE_DRIVER=s3. Production names its endpoint (or region) and keys; anywhere
+ * else no endpoint means the local fake on loopback, started by `npm start` and the tests.
+ */
+function objectStorageConfig(e: z.infer<typeof EnvSchema>, production: boolean) {
+  if (e.STORAGE_DRIVER !== 's3') return null;
+  if (production && (!e.S3_ACCESS_KEY_ID || !e.S3_SECRET_ACCESS_KEY)) throw new Error('Invalid environment:\n  S3_ACCESS_KEY_ID, S3_SECRET_ACCESS_KEY: required in production with STORAGE_DRIVER=s3');
+  return {
+    bucket: e.S3_BUCKET,
+    endpoint: e.S3_ENDPOINT ?? null,
+    region: e.S3_REGION,
+    accessKeyId: e.S3_ACCESS_KEY_ID ?? null,
+    secretAccessKey: e.S3_SECRET_ACCESS_KEY ?? null,
+    forcePathStyle: e.S3_FORCE_PATH_STYLE,
+    fake: !production && !e.S3_ENDPOINT,
+    fakePort: e.S3_FAKE_PORT,
+  };
+}
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
   const parsed = EnvSchema.safeParse(env);
@@ -182,7 +212,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     storageDir: path.resolve(PROJECT_ROOT, e.STORAGE_DIR ?? (e.NODE_ENV === 'test' ? testStorageDir() : '.data/uploads')),
     // Card work reads and writes that storage: under test, where each process has a folder of its own,
     // each process also works a card queue of its own, so a print is drawn where its test reads it.
-    cardQueue: e.NODE_ENV === 'test' && !e.STORAGE_DIR ? `cards-${process.pid}` : 'cards',
+    cardQueue: e.NODE_ENV === 'test' && !e.STORAGE_DIR && e.STORAGE_DRIVER === 'local' ? `cards-${process.pid}` : 'cards',
+    objectStorage: objectStorageConfig(e, production),
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     /** How often an idle worker asks the queue for work (a worker in the same process is woken at once). */
     jobPollSeconds: e.JOB_POLL_SECONDS,

@@ -12,6 +12,7 @@ import { startOfferSweepWorker } from '../jobs/offer-sweep';
 import { startCardWorker } from '../jobs/card-jobs';
 import { pointPaymentsAtFake } from '../payments/client';
 import { startLocalPayments } from '../payments/fake';
+import { startFakeS3IfWanted } from '../storage/index';
 
 keepRunningThroughDatabaseLoss();
 
@@ -21,6 +22,7 @@ const catcherMoved = demoCatcher && demoCatcher.port !== demoCatcher.wantedPort;
 if (catcherMoved) logger.warn(`Port ${demoCatcher.wantedPort} (MAIL_CATCHER_PORT) is taken by another program: this Placard's mail catcher listens on ${demoCatcher.port} instead, and its mail goes there.`);
 const catcher = demoCatcher?.server;
 
+const fakeS3 = await startFakeS3IfWanted();
 const server = await listen();
 // The one-machine default: this process also works the job queue (mail now; more jobs join it).
 await startMailWorker(jobQueue(), createMailSender(demoCatcher?.smtpUrl ?? config.smtpUrl));
@@ -45,10 +47,14 @@ const paymentsLine =
     : config.payments.mode === 'off'
       ? '  Payments: online payment is switched off (PAYMENTS_ONLINE=false): fees are taken in person'
       : `  Payments: the local fake payment service on http://127.0.0.1:${fakePayments?.port ?? config.payments.fakePort} (no STRIPE_SECRET_KEY: no money moves)`;
+const storageLine = config.objectStorage
+  ? `  Files: S3 bucket "${config.objectStorage.bucket}" on ${config.objectStorage.fake ? `the local fake S3, http://127.0.0.1:${fakeS3?.port ?? config.objectStorage.fakePort}` : (config.objectStorage.endpoint ?? `AWS ${config.objectStorage.region}`)}`
+  : `  Files: the local disk, ${config.storageDir}`;
 const lines = [
   '',
   `  Placard is running on ${url}`,
   paymentsLine,
+  storageLine,
   ...(config.demoMode
     ? [
         '',
@@ -70,6 +76,7 @@ async function stop() {
   server.close();
   catcher?.close(() => undefined);
   await fakePayments?.close();
+  await fakeS3?.close();
   await closeConnections();
   process.exit(0);
 }

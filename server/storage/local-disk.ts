@@ -4,9 +4,7 @@ import { randomBytes } from 'node:crypto';
 import path from 'node:path';
 import { assertValidKey, type Storage } from './types';
 
-// The disk keeps no metadata beside the bytes, so the type follows from the key's extension.
-const TYPES: Record<string, string> = { '.webp': 'image/webp', '.jpg': 'image/jpeg', '.png': 'image/png', '.avif': 'image/avif', '.pdf': 'application/pdf' };
-const typeOf = (key: string) => TYPES[path.extname(key)] ?? 'application/octet-stream';
+import { contentTypeOfKey as typeOf } from './content-types';
 
 const missing = (err: unknown) => (err as NodeJS.ErrnoException)?.code === 'ENOENT';
 
