@@ -2,6 +2,9 @@
 import { formatNumber } from './calc/format';
 import { formatInZone } from './calc/time-zone';
 
+/** What the menu, the buttons and the sign-up page call making an account: one name everywhere. */
+export const MAKE_AN_ACCOUNT = 'Make an account';
+
 /** "1 account", "2 accounts", "1,204 builds". `many` for the irregular plurals ("entries"). */
 export function countOf(count: number, one: string, many = `${one}s`): string {
   return `${count.toLocaleString('en-GB')} ${count === 1 ? one : many}`;

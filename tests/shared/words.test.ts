@@ -26,3 +26,12 @@ describe('the waiting list in the organiser’s words', () => {
     expect(waitingListWords({ waitingPosition: null, offerExpiresAt: null }, 'Europe/Berlin')).toBe('');
   });
 });
+
+describe('counts in the show side’s sentences', () => {
+  it('says one car, one judge’s sheet and one finished sheet in the singular', () => {
+    expect(`Up to ${countOf(1, 'car')}`).toBe('Up to 1 car');
+    expect(countOf(1, 'judge’s sheet', 'judges’ sheets')).toBe('1 judge’s sheet');
+    expect(countOf(3, 'judge’s sheet', 'judges’ sheets')).toBe('3 judges’ sheets');
+    expect(`${countOf(1, 'car')} with ${countOf(0, 'finished sheet')}`).toBe('1 car with 0 finished sheets');
+  });
+});
