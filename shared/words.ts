@@ -1,5 +1,9 @@
 // Words and dates a person reads, in one place, so every screen says them the same way.
 import { formatNumber } from './calc/format';
+import { formatInZone } from './calc/time-zone';
+
+/** What the menu, the buttons and the sign-up page call making an account: one name everywhere. */
+export const MAKE_AN_ACCOUNT = 'Make an account';
 
 /** "1 account", "2 accounts", "1,204 builds". `many` for the irregular plurals ("entries"). */
 export function countOf(count: number, one: string, many = `${one}s`): string {
@@ -35,4 +39,16 @@ export function megabytes(bytes: number): string {
 export function listInWords(items: readonly string[]): string {
   if (items.length <= 1) return items[0] ?? '';
   return `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
+}
+
+/**
+ * Where an entry on the waiting list stands, for the organiser: its place in the queue, or, once a
+ * place was offered to it, the offer and its deadline on the show's own clock (what the owner sees too).
+ */
+export function waitingListWords(entry: { waitingPosition: number | null; offerExpiresAt: string | null }, timeZone: string): string {
+  if (entry.offerExpiresAt) {
+    const until = formatInZone(entry.offerExpiresAt, timeZone, { weekday: 'short', day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+    return `Place offered, until ${until}`;
+  }
+  return entry.waitingPosition ? `#${entry.waitingPosition}` : '';
 }

@@ -2,8 +2,8 @@ import { createHash } from 'node:crypto';
 import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
 
 /**
- * A rendered page in the three encodings we send, with the version of the build it shows. `vote` is
- * set while the car's show takes people's choice votes: each response then adds the visitor's own box.
+ * A rendered page in the three encodings we send, with the version of the build it shows. `votes` lists
+ * the car's shows that take people's choice votes now: each response then adds the visitor's own box to each.
  * `mustRevalidate` marks a car on a show whose voting could open or close at any moment.
  */
 export type CachedPage = {
@@ -13,9 +13,12 @@ export type CachedPage = {
   gzip: Buffer;
   br: Buffer;
   checkedAt: number;
-  vote?: { eventId: number; url: string; entryNumber: number };
+  votes?: VoteSlot[];
   mustRevalidate?: boolean;
 };
+
+/** A show on the page that takes votes now: where its box goes, where its form posts, and the car's number there. */
+export type VoteSlot = { eventId: number; url: string; anchor: string; entryNumber: number };
 
 export function compressPage(html: string, version: string): Omit<CachedPage, 'checkedAt'> {
   const identity = Buffer.from(html, 'utf8');

@@ -13,9 +13,10 @@ import { PageHead } from './page-head';
 
 /**
  * What a show adds to the page: the entry, and while the show's people's choice window is open, the
- * place of the visitor's own vote box (filled per response, see `vote-box.tsx`).
+ * place of the visitor's own vote box for that show (filled per response, see `vote-box.tsx`). A car
+ * in several current shows has one of these each.
  */
-export type ShowEntrySlot = { showName: string; showUrl?: string; className?: string; entryNumber?: string; votingMayOpen?: boolean; vote?: { eventId: number; url: string } } | null;
+export type ShowEntrySlot = { showName: string; showSlug?: string; showUrl?: string; className?: string; entryNumber?: string; votingMayOpen?: boolean; vote?: { eventId: number; url: string } };
 
 /** The units a visitor may pick; the choice is remembered for every build they open (see router.ts). */
 const UNIT_CHOICES: Array<[UnitSystem, string, string]> = [
@@ -181,18 +182,29 @@ function WeighIns({ build, units }: { build: PublicBuild; units: UnitSystem }) {
 }
 
 function ShowEntry({ slot }: { slot: ShowEntrySlot }) {
-  if (!slot) return null;
   return (
-    <section id="show-entry" className="show" aria-label="Show entry">
+    <section className="show" aria-label={`Entry in ${slot.showName}`} id={slot.showSlug ? `show-${slot.showSlug}` : undefined}>
       <p className="d">{slot.showUrl ? <a href={slot.showUrl}>{slot.showName}</a> : slot.showName}</p>
       {slot.className ? <p>Class: {slot.className}</p> : null}
       {slot.entryNumber ? <p className="d">Entry {slot.entryNumber}</p> : null}
-      {slot.vote ? <div data-vote-box="" /> : null}
+      {slot.vote ? <div data-vote-box={String(slot.vote.eventId)} /> : null}
     </section>
   );
 }
 
-function Page({ build, units, show, preview }: { build: PublicBuild; units: UnitSystem; show: ShowEntrySlot; preview: 'draft' | 'published' | null }) {
+/** Every current show the car is in, each with its own number, class and vote. */
+function ShowEntries({ slots }: { slots: ShowEntrySlot[] }) {
+  if (slots.length === 0) return null;
+  return (
+    <div id="show-entry">
+      {slots.map((slot) => (
+        <ShowEntry key={slot.showSlug ?? slot.showName} slot={slot} />
+      ))}
+    </div>
+  );
+}
+
+function Page({ build, units, shows, preview }: { build: PublicBuild; units: UnitSystem; shows: ShowEntrySlot[]; preview: 'draft' | 'published' | null }) {
   const { heading, kicker } = headlineOf(build);
   const photo = cover(build);
   const figures = computeKeyFigures(build);
@@ -243,7 +255,7 @@ function Page({ build, units, show, preview }: { build: PublicBuild; units: Unit
             {heading}
           </h1>
           {byline ? <p className="by">{byline}</p> : null}
-          <ShowEntry slot={show} />
+          <ShowEntries slots={shows} />
           <Figures figures={figures} units={units} />
           {engine ? <p className="eng">{engine}</p> : null}
           {build.story.trim() ? (
@@ -303,8 +315,8 @@ function Page({ build, units, show, preview }: { build: PublicBuild; units: Unit
 
 /** The whole public page as a string: complete HTML with its style inlined and no script. */
 /** `preview` marks the owner's own look at the page (a draft included), never cached or indexed. */
-export function renderPublicBuildPage(build: PublicBuild, units: UnitSystem, show: ShowEntrySlot = null, preview: 'draft' | 'published' | null = null): string {
-  return `<!doctype html>${renderToStaticMarkup(<Page build={build} units={units} show={show} preview={preview} />)}`;
+export function renderPublicBuildPage(build: PublicBuild, units: UnitSystem, shows: ShowEntrySlot[] = [], preview: 'draft' | 'published' | null = null): string {
+  return `<!doctype html>${renderToStaticMarkup(<Page build={build} units={units} shows={shows} preview={preview} />)}`;
 }
 
 /** One plain page for every code that is not a published build, so a guess learns nothing. */

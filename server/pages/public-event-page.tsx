@@ -16,11 +16,13 @@ ol.entries .n,ol.results .n{font-family:Oswald,"Arial Narrow",sans-serif;font-we
 .cal a,.enter a{display:inline-block;min-height:44px;line-height:44px}
 .muted{color:var(--graphite)}
 ol.results{list-style:none;margin:0;padding:0}
-ol.results li{display:grid;grid-template-columns:4.5rem 3ch 1fr auto;gap:12px;align-items:baseline;border-bottom:1px solid var(--rule);min-height:44px;padding:8px 0}
+ol.results li{display:grid;grid-template-columns:4.5rem 3ch minmax(0,1fr) auto;gap:12px;align-items:baseline;border-bottom:1px solid var(--rule);min-height:44px;padding:8px 0}
 ol.results .p{font-family:Oswald,"Arial Narrow",sans-serif;font-weight:600;text-transform:uppercase}
 ol.results .t{font-variant-numeric:tabular-nums;text-align:right}
 .best{border:2px solid var(--ink);padding:8px 12px;margin:8px 0 16px}
-.best .p{color:var(--signal-ink)}`;
+.best .p{color:var(--signal-ink)}
+/* A long unbroken title breaks inside its column rather than widening the page on a phone. */
+ol.entries li>*,ol.results li>*{min-width:0;overflow-wrap:anywhere}`;
 
 /** Dates in the show's own time zone, with the zone named so a visitor from elsewhere is not misled. */
 function when(e: PublicEvent, iso: string) {

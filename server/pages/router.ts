@@ -5,16 +5,17 @@ import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
 import type { UnitSystem } from '@shared/calc';
 import { loadPublicBuild, publicVersion } from '../services/public/public-builds';
 import { presentPublicBuild } from '../presenters/public-build';
-import { showSlotOfBuild } from '../services/public/public-events';
+import { showSlotsOfBuild } from '../services/public/public-events';
 import { NOT_FOUND_HTML, renderPublicBuildPage } from './public-build-page';
-import { compressPage, publicPageCache, type CachedPage } from './page-cache';
+import { compressPage, publicPageCache, type CachedPage, type VoteSlot } from './page-cache';
 import { encodingFor } from './send-html';
 import { OSWALD_URL } from './page-styles';
 import { config } from '../config';
 import { isDatabaseUnavailable } from '../services/platform/database-unavailable';
 import { votedNumber } from '../services/results/peoples-choice';
 import { formTokenFor, readVoterCookie, voterOf } from './voter';
-import { VOTE_BOX_MARK, renderVoteBox, type VoteBoxState } from './vote-box';
+import { voteBoxMark, renderVoteBox, type VoteBoxState } from './vote-box';
+import { EventSlugSchema } from '@shared/schemas/show';
 
 /** Server-rendered public pages (/c/<code>): complete HTML, no app bundle, no session. */
 export const pagesRouter = Router();
@@ -55,7 +56,7 @@ function notFound(res: Response) {
 }
 
 function send(req: Request, res: Response, page: CachedPage, varyLanguage: boolean) {
-  if (page.vote) return sendWithVoteBox(req, res, page, page.vote, varyLanguage);
+  if (page.votes?.length) return sendWithVoteBoxes(req, res, page, page.votes, varyLanguage);
   res.set({
     ETag: page.etag,
     // On show day and in judging the vote button may appear or go at any moment: browsers check first (a cheap 304).
@@ -75,19 +76,25 @@ function send(req: Request, res: Response, page: CachedPage, varyLanguage: boole
 
 /**
  * While voting is open the shared cached page gets the visitor's own vote box (their form token, or
- * their thanks) on the way out, and the answer is private and never stored: no one's state is cached.
+ * their thanks) on the way out, one per show taking votes, and the answer is private and never stored:
+ * no one's state is cached.
  */
-async function sendWithVoteBox(req: Request, res: Response, page: CachedPage, vote: NonNullable<CachedPage['vote']>, varyLanguage: boolean) {
+async function sendWithVoteBoxes(req: Request, res: Response, page: CachedPage, votes: VoteSlot[], varyLanguage: boolean) {
   const voter = voterOf(req, res);
-  let voted: number | null = null;
-  try {
-    voted = await votedNumber(vote.eventId, voter);
-  } catch (err) {
-    // The database is away: the page still shows, with the button (the vote itself will wait for it).
-    if (!isDatabaseUnavailable(err)) throw err;
+  let text = page.identity.toString('utf8');
+  for (const vote of votes) {
+    let voted: number | null = null;
+    try {
+      voted = await votedNumber(vote.eventId, voter);
+    } catch (err) {
+      // The database is away: the page still shows, with the button (the vote itself will wait for it).
+      if (!isDatabaseUnavailable(err)) throw err;
+    }
+    const box: VoteBoxState =
+      voted === null ? { kind: 'open', anchor: vote.anchor, url: vote.url, formToken: formTokenFor(voter) } : { kind: 'voted', anchor: vote.anchor, thisCar: voted === vote.entryNumber, number: voted };
+    text = text.replace(voteBoxMark(vote.eventId), renderVoteBox(box));
   }
-  const box: VoteBoxState = voted === null ? { kind: 'open', url: vote.url, formToken: formTokenFor(voter) } : { kind: 'voted', thisCar: voted === vote.entryNumber, number: voted };
-  const html = Buffer.from(page.identity.toString('utf8').replace(VOTE_BOX_MARK, renderVoteBox(box)), 'utf8');
+  const html = Buffer.from(text, 'utf8');
   res.set({
     'Cache-Control': 'private, no-store',
     Vary: varyOf(varyLanguage),
@@ -101,10 +108,18 @@ async function sendWithVoteBox(req: Request, res: Response, page: CachedPage, vo
   res.type('html').end(encoding === 'br' ? brotliCompressSync(html, { params: { [zlib.BROTLI_PARAM_QUALITY]: 5 } }) : encoding === 'gzip' ? gzipSync(html, { level: 6 }) : html);
 }
 
+/** The show whose card's QR code was scanned (`?show=<slug>`): its entry leads the page. */
+function showFirstOf(req: Request): string | undefined {
+  const parsed = EventSlugSchema.safeParse(req.query.show);
+  return parsed.success ? parsed.data : undefined;
+}
+
 pagesRouter.get('/c/:code', readVoterCookie, async (req, res) => {
   const code = String(req.params.code).toUpperCase();
   const { units, chosen } = unitsFor(req, res);
-  const key = `${code}|${units}`;
+  const showFirst = showFirstOf(req);
+  // The order of the shows is part of the page; the version (entries and shows included) keeps each order fresh.
+  const key = showFirst ? `${code}|${units}|${showFirst}` : `${code}|${units}`;
   const cached = publicPageCache.get(key);
   const now = Date.now();
   if (cached && now - cached.checkedAt < publicPageCache.revalidateAfterMs) return send(req, res, cached, !chosen);
@@ -129,12 +144,13 @@ pagesRouter.get('/c/:code', readVoterCookie, async (req, res) => {
   const page = await publicPageCache.once(`${key}|${version}`, async () => {
     const build = await loadPublicBuild(code);
     if (!build) return null;
-    const show = await showSlotOfBuild(code);
+    const shows = await showSlotsOfBuild(code, showFirst);
+    const votes = shows.flatMap((s): VoteSlot[] => (s.vote ? [{ ...s.vote, anchor: `vote-${s.showSlug}`, entryNumber: Number(s.entryNumber) }] : []));
     const fresh: CachedPage = {
-      ...compressPage(renderPublicBuildPage(presentPublicBuild(build), units, show), version),
+      ...compressPage(renderPublicBuildPage(presentPublicBuild(build), units, shows), version),
       checkedAt: Date.now(),
-      ...(show?.vote ? { vote: { ...show.vote, entryNumber: Number(show.entryNumber) } } : {}),
-      mustRevalidate: show?.votingMayOpen ?? false,
+      ...(votes.length ? { votes } : {}),
+      mustRevalidate: shows.some((s) => s.votingMayOpen),
     };
     publicPageCache.set(key, fresh);
     return fresh;

@@ -6,14 +6,15 @@ import { OSWALD_URL } from './page-styles';
  * form token, whether they voted). The cached HTML holds this mark where the vote box goes, and each
  * response puts the visitor's box in its place, so no visitor's state is ever in the shared copy.
  */
-export const VOTE_BOX_MARK = '<div data-vote-box=""></div>';
+export const voteBoxMark = (eventId: number) => `<div data-vote-box="${eventId}"></div>`;
 
-export type VoteBoxState = { kind: 'open'; url: string; formToken: string } | { kind: 'voted'; thisCar: boolean; number: number | null };
+/** `anchor` names the box on the page (one per show the car is in), where a counted vote lands the visitor. */
+export type VoteBoxState = { anchor: string } & ({ kind: 'open'; url: string; formToken: string } | { kind: 'voted'; thisCar: boolean; number: number | null });
 
 function VoteBox({ state }: { state: VoteBoxState }) {
   if (state.kind === 'voted') {
     return (
-      <div id="vote" className="vote" role="status">
+      <div id={state.anchor} className="vote" role="status">
         <p className="voted">
           <strong>Thank you for voting.</strong> Your people&apos;s choice vote in this show went to {state.thisCar ? 'this car' : state.number ? `entry ${state.number}` : 'another car'}. One vote per visitor.
         </p>
@@ -21,7 +22,7 @@ function VoteBox({ state }: { state: VoteBoxState }) {
     );
   }
   return (
-    <div id="vote" className="vote">
+    <div id={state.anchor} className="vote">
       <form method="post" action={state.url}>
         <input type="hidden" name="token" value={state.formToken} />
         <button type="submit" className="vbtn">

@@ -1,5 +1,6 @@
 import express, { Router, type ErrorRequestHandler, type Response } from 'express';
 import { BuildCodeSchema } from '@shared/schemas/build';
+import { EventSlugSchema } from '@shared/schemas/show';
 import { voteLimiter, voteNewVoterLimiter } from '../middlewares/rate-limits';
 import { castVote } from '../services/results/peoples-choice';
 import { isDatabaseUnavailable } from '../services/platform/database-unavailable';
@@ -27,10 +28,12 @@ votePagesRouter.post(
     const voter = existingVoter(req);
     const token: unknown = (req.body as Record<string, unknown> | undefined)?.token;
     if (!fromOurOrigin(req) || !voter || !formTokenMatches(voter, token)) return refuse(res, 'stale-form', back);
-    const outcome = await castVote({ code, voterToken: voter, address: req.ip ?? '' });
-    if (!outcome.ok) return refuse(res, outcome.reason, back, outcome.reason === 'twice' ? outcome.votedNumber : null);
-    // Back to the car, where the visitor's own box now thanks them: a fresh page, never a cached one.
-    res.set('Cache-Control', 'no-store').redirect(303, `${back}#vote`);
+    // The show the form belongs to rides in its address (a car can be in two shows, each with its own vote).
+    const show = EventSlugSchema.safeParse(req.query.show);
+    const outcome = await castVote({ code, show: show.success ? show.data : undefined, voterToken: voter, address: req.ip ?? '' });
+    if (!outcome.ok) return refuse(res, outcome.reason, show.success ? `${back}?show=${encodeURIComponent(show.data)}` : back, outcome.reason === 'twice' ? outcome.votedNumber : null);
+    // Back to the car with that show first, where the visitor's own box now thanks them: a fresh page, never a cached one.
+    res.set('Cache-Control', 'no-store').redirect(303, `${back}?show=${encodeURIComponent(outcome.showSlug)}#vote-${outcome.showSlug}`);
   },
 );
 

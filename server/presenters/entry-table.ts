@@ -44,6 +44,7 @@ export function presentEntryTableRow(e: Entry, places: Map<number, number>, acto
     paymentRef: e.paymentRef,
     checkedInAt: e.checkedInAt ? e.checkedInAt.toISOString() : null,
     waitingPosition: places.get(e.id) ?? null,
+    offerExpiresAt: e.status === 'waiting_list' && e.offerExpiresAt ? e.offerExpiresAt.toISOString() : null,
     createdAt: e.createdAt.toISOString(),
     contact: { email: only('email', e.owner?.email ?? null) ?? '', phone: only('phone', e.build?.ownerPhone ?? null) },
     privateFields: { vin: only('vin', e.build?.vin ?? null), plate: only('plate', e.build?.plate ?? null), address: only('address', e.build?.ownerAddress ?? null) },

@@ -18,6 +18,6 @@ buildPreviewRouter.get('/builds/:id/preview', requireUser, async (req, res) => {
   const { units } = parseQuery(req, PreviewQuerySchema);
   const build = await loadFullBuildOrThrow(id);
   authorizeBuild(currentUser(req), 'edit', build);
-  const html = renderPublicBuildPage(presentPublicBuild(build), units, null, build.published ? 'published' : 'draft');
+  const html = renderPublicBuildPage(presentPublicBuild(build), units, [], build.published ? 'published' : 'draft');
   res.set('Cache-Control', 'no-store').type('html').send(html);
 });

@@ -88,6 +88,8 @@ export const EntryTableRowSchema = z.object({
   paymentRef: z.string().nullable(),
   checkedInAt: z.string().nullable(),
   waitingPosition: z.number().nullable(),
+  /** While a freed place is offered to this waiting entry: when the offer lapses (the owner sees the same deadline). */
+  offerExpiresAt: z.string().nullable(),
   createdAt: z.string(),
   /** Only for the show's organisers: needed to reach the entrant on the day. */
   contact: z.object({ email: z.string(), phone: z.string().nullable() }),

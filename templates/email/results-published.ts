@@ -1,3 +1,4 @@
+import { countOf } from '@shared/words';
 import { ordinal, type OwnResults } from '@shared/schemas/results';
 import { notice } from './notice';
 
@@ -21,7 +22,7 @@ export function resultsPublishedEmail(p: { name: string; buildTitle: string; res
     greeting: `Hello ${p.name},`,
     paragraphs: [
       `${r.showName} has published its results. ${p.buildTitle}, number ${r.number}: ${standingWords(r)}`,
-      ...(r.sheetsCounted ? [`Your scores per criterion, the mean of ${r.sheetsCounted} judge${r.sheetsCounted === 1 ? '' : 's'}’ sheets:`, ...lines] : []),
+      ...(r.sheetsCounted ? [`Your scores per criterion, the mean of ${countOf(r.sheetsCounted, 'judge’s sheet', 'judges’ sheets')}:`, ...lines] : []),
       ...comments,
     ],
     link: { label: 'See your entries', url: p.link },

@@ -32,16 +32,16 @@ describe('people’s choice on a phone with JavaScript turned off', () => {
     await keepScreenshot(page.locator('#show-entry'), 'peoples-choice-vote-button.png');
     await keepScreenshot(page, 'peoples-choice-page-phone.png');
 
-    const [posted] = await Promise.all([page.waitForResponse((r) => r.url().endsWith(`/c/${car1}/vote`)), button.click()]);
+    const [posted] = await Promise.all([page.waitForResponse((r) => r.url().includes(`/c/${car1}/vote?show=`)), button.click()]);
     expect(posted.status()).toBe(303);
     await page.getByText('Thank you for voting.').waitFor();
-    expect(page.url()).toBe(`${env.baseUrl}/c/${car1}#vote`);
+    expect(page.url()).toMatch(new RegExp(`^${env.baseUrl}/c/${car1}\\?show=meet-[0-9a-f]{8}#vote-meet-[0-9a-f]{8}$`));
     expect(await page.getByText(/went to this car/).count()).toBe(1);
     expect(await page.getByRole('button', { name: 'Vote for this car' }).count()).toBe(0);
     await keepScreenshot(page.locator('#show-entry'), 'peoples-choice-thanks.png');
 
     // The tab opened before the vote still shows its button; pressing it is refused in words.
-    const [refused] = await Promise.all([otherTab.waitForResponse((r) => r.url().endsWith(`/c/${car2}/vote`)), otherTab.getByRole('button', { name: 'Vote for this car' }).click()]);
+    const [refused] = await Promise.all([otherTab.waitForResponse((r) => r.url().includes(`/c/${car2}/vote?show=`)), otherTab.getByRole('button', { name: 'Vote for this car' }).click()]);
     expect(refused.status()).toBe(409);
     await otherTab.getByRole('heading', { name: 'You have already voted' }).waitFor();
     expect(await otherTab.getByText(/for entry 1\./).count()).toBe(1);

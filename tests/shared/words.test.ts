@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { countOf, formatDate, formatDateTime } from '@shared/words';
+import { countOf, formatDate, formatDateTime, waitingListWords } from '@shared/words';
 
 describe('words a person reads', () => {
   it('counts with the right plural and thousands separators', () => {
@@ -16,5 +16,22 @@ describe('words a person reads', () => {
     expect(formatDateTime(d)).toBe('2026-01-05 09:07');
     expect(formatDate(d.toISOString())).toBe('2026-01-05');
     expect(formatDate('not a date')).toBe('—');
+  });
+});
+
+describe('the waiting list in the organiser’s words', () => {
+  it('shows the place in the queue, or the offered place with its deadline on the show’s clock', () => {
+    expect(waitingListWords({ waitingPosition: 1, offerExpiresAt: null }, 'Europe/Berlin')).toBe('#1');
+    expect(waitingListWords({ waitingPosition: 1, offerExpiresAt: '2027-06-10T16:00:00.000Z' }, 'Europe/Berlin')).toBe('Place offered, until Thu 10 Jun, 18:00');
+    expect(waitingListWords({ waitingPosition: null, offerExpiresAt: null }, 'Europe/Berlin')).toBe('');
+  });
+});
+
+describe('counts in the show side’s sentences', () => {
+  it('says one car, one judge’s sheet and one finished sheet in the singular', () => {
+    expect(`Up to ${countOf(1, 'car')}`).toBe('Up to 1 car');
+    expect(countOf(1, 'judge’s sheet', 'judges’ sheets')).toBe('1 judge’s sheet');
+    expect(countOf(3, 'judge’s sheet', 'judges’ sheets')).toBe('3 judges’ sheets');
+    expect(`${countOf(1, 'car')} with ${countOf(0, 'finished sheet')}`).toBe('1 car with 0 finished sheets');
   });
 });

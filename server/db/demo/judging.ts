@@ -126,6 +126,6 @@ export async function seedJudgingShow(organiser: User): Promise<void> {
   ];
   for (const [i, address] of votes) {
     const code = (await Build.findByPk(entries[i]!.buildId, { attributes: ['code'] }))!.code;
-    await castVote({ code, voterToken: randomBytes(32).toString('base64url'), address });
+    await castVote({ code, show: show.slug, voterToken: randomBytes(32).toString('base64url'), address });
   }
 }

@@ -24,7 +24,7 @@ const DAY = 86400_000;
 
 /**
  * Two invented shows, dated from the day the demo is seeded so the first is always taking entries:
- * one in registration (paid, unpaid, waiting-list and withdrawn entries, a co-organiser, three
+ * one in registration (paid, unpaid, waiting-list (one offered a freed place) and withdrawn entries, a co-organiser, three
  * judges, a gate account, one invitation still open) and one already finished. Entries go through
  * the same services as the API, so the caught mailbox holds the notices of those flows.
  */
@@ -72,6 +72,8 @@ async function seedShows() {
   const pickup = await enter('reuben.salas@placard.test', '1972 Short-Bed Pickup', trucks.id);
   await confirmEntryPayment(pickup.id, 'demo_pay_pickup');
   await enter('ivo.brandt@placard.test', '1957 Wagon', trucks.id); // the class holds one: waiting list
+  // The pickup's owner withdraws: the freed place is offered to the wagon, with a deadline the organiser sees in the table.
+  await withdrawEntry(pickup.id, await person('reuben.salas@placard.test'), false);
   const muscle = await enter('june.okafor@placard.test', '1969 Muscle Coupe', postwar.id);
   await confirmEntryPayment(muscle.id, 'demo_pay_muscle');
   await withdrawEntry(muscle.id, await person('june.okafor@placard.test'), false); // full refund: before the date

@@ -224,8 +224,12 @@ const ON_STATUSES = ['registration_open', 'registration_closed', 'show_day', 'ju
  * The entry that puts a build on a show right now (confirmed or checked in, the earliest show first):
  * the one its public page names, and the one a people's choice vote on that page goes to.
  */
-export function entryOnShowNow(code: string, transaction?: Transaction): Promise<Entry | null> {
-  return Entry.findOne({
+/**
+ * Every show a build is in right now (confirmed or checked in, with a number), soonest first; with
+ * `slug`, only that show's entry. A car may be in two current shows, and each takes its own votes.
+ */
+export function entriesOnShowNow(code: string, opts: { slug?: string; transaction?: Transaction } = {}): Promise<Entry[]> {
+  return Entry.findAll({
     where: { status: { [Op.in]: ['confirmed', 'checked_in'] }, number: { [Op.ne]: null } },
     include: [
       { model: Build, as: 'build', attributes: ['id'], where: { code, published: true } },
@@ -233,11 +237,14 @@ export function entryOnShowNow(code: string, transaction?: Transaction): Promise
         model: Event,
         as: 'event',
         attributes: ['id', 'name', 'slug', 'startsAt', 'status', 'peoplesChoiceOpenedAt', 'peoplesChoiceClosedAt'],
-        where: { status: { [Op.in]: [...ON_STATUSES] } },
+        where: { status: { [Op.in]: [...ON_STATUSES] }, ...(opts.slug ? { slug: opts.slug } : {}) },
       },
       { model: EventClass, as: 'eventClass', attributes: ['name'] },
     ],
-    order: [[{ model: Event, as: 'event' }, 'startsAt', 'ASC']],
-    transaction,
+    order: [
+      [{ model: Event, as: 'event' }, 'startsAt', 'ASC'],
+      [{ model: Event, as: 'event' }, 'id', 'ASC'],
+    ],
+    transaction: opts.transaction,
   });
 }

@@ -1,7 +1,7 @@
 import { VOTING_STATUSES, votingOpen } from '@shared/schemas/peoples-choice';
 import { EventSlugSchema } from '@shared/schemas/show';
 import { findEventBySlug } from '../shows/events';
-import { entryOnShowNow, listPublicEntries } from '../entries/entries';
+import { entriesOnShowNow, listPublicEntries } from '../entries/entries';
 import { loadPublishedResults } from '../results/published-results';
 
 /** Shows are public once they leave draft. */
@@ -17,20 +17,44 @@ export async function loadPublicEvent(slug: string) {
   return { event, entries: await listPublicEntries(event.id), results };
 }
 
-export type ShowSlot = { showName: string; showUrl: string; className?: string; entryNumber: string; votingMayOpen: boolean; vote?: { eventId: number; url: string } };
+export type ShowSlot = {
+  eventId: number;
+  showSlug: string;
+  showName: string;
+  showUrl: string;
+  className?: string;
+  entryNumber: string;
+  votingMayOpen: boolean;
+  vote?: { eventId: number; url: string };
+};
 
-/** The show a build is entered in right now, for its public page, with the vote while the show's window is open. */
-export async function showSlotOfBuild(code: string): Promise<ShowSlot | null> {
-  const entry = await entryOnShowNow(code);
-  if (!entry?.event) return null;
-  const e = entry.event;
-  return {
-    showName: e.name,
-    showUrl: `/e/${e.slug}`,
-    className: entry.eventClass?.name,
-    entryNumber: String(entry.number),
-    // Voting could open at any moment on show day and in judging: browsers must revalidate the page.
-    votingMayOpen: VOTING_STATUSES.includes(e.status),
-    vote: votingOpen(e) ? { eventId: e.id, url: `/c/${code}/vote` } : undefined,
-  };
+/**
+ * Every current show a build is in, for its public page: soonest first, except that `firstSlug` (the show
+ * whose card's QR code was scanned) leads. Each has its number, class and, while that show's window is
+ * open, its own vote.
+ */
+export async function showSlotsOfBuild(code: string, firstSlug?: string): Promise<ShowSlot[]> {
+  const entries = await entriesOnShowNow(code);
+  const slots = entries.flatMap((entry): ShowSlot[] => {
+    const e = entry.event;
+    if (!e) return [];
+    return [
+      {
+        eventId: e.id,
+        showSlug: e.slug,
+        showName: e.name,
+        showUrl: `/e/${e.slug}`,
+        className: entry.eventClass?.name,
+        entryNumber: String(entry.number),
+        // Voting could open at any moment on show day and in judging: browsers must revalidate the page.
+        votingMayOpen: VOTING_STATUSES.includes(e.status),
+        vote: votingOpen(e) ? { eventId: e.id, url: voteUrl(code, e.slug) } : undefined,
+      },
+    ];
+  });
+  const first = slots.findIndex((s) => s.showSlug === firstSlug);
+  return first > 0 ? [slots[first]!, ...slots.slice(0, first), ...slots.slice(first + 1)] : slots;
 }
+
+/** Where a vote for this car in this show is posted: the show rides in the address, so two shows' forms never mix. */
+export const voteUrl = (code: string, slug: string) => `/c/${code}/vote?show=${encodeURIComponent(slug)}`;

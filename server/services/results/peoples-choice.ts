@@ -10,7 +10,7 @@ import { Event } from '../../models/event';
 import { Vote } from '../../models/vote';
 import { findEvent } from '../shows/events';
 import { writeAudit } from '../audit/audit';
-import { entryOnShowNow } from '../entries/entries';
+import { entriesOnShowNow } from '../entries/entries';
 import { withTransaction } from '../../db/transaction';
 
 /**
@@ -42,18 +42,21 @@ export async function setVotingWindow(eventId: number, open: boolean, person: { 
 }
 
 export type VoteOutcome =
-  | { ok: true; eventId: number; entryNumber: number }
+  | { ok: true; eventId: number; showSlug: string; entryNumber: number }
   | { ok: false; reason: 'not-entered' | 'closed' }
   | { ok: false; reason: 'twice'; votedNumber: number | null };
 
 /**
- * One visitor's vote for the car with this public code, in the show its page names. The token and the
+ * One visitor's vote for the car with this public code, in the show named by its address (`show`, the
+ * slug the page's form carries; a car can be in two shows at once, each with its own vote). A form
+ * without one (an older page) votes in the car's first show that is taking votes. The token and the
  * address arrive raw and leave this function only as keyed hashes. Refusals are outcomes, not errors:
  * the page answers each in words.
  */
-export async function castVote(input: { code: string; voterToken: string; address: string }, outer?: Transaction): Promise<VoteOutcome> {
+export async function castVote(input: { code: string; show?: string; voterToken: string; address: string }, outer?: Transaction): Promise<VoteOutcome> {
   return withTransaction(outer, async (transaction) => {
-    const entry = await entryOnShowNow(input.code, transaction);
+    const entries = await entriesOnShowNow(input.code, { slug: input.show, transaction });
+    const entry = entries.find((e) => e.event && votingOpen(e.event)) ?? entries[0];
     if (!entry?.event) return { ok: false, reason: 'not-entered' };
     const event = await Event.findByPk(entry.eventId, { lock: transaction.LOCK.SHARE, transaction });
     if (!event || !votingOpen(event)) return { ok: false, reason: 'closed' };
@@ -64,7 +67,7 @@ export async function castVote(input: { code: string; voterToken: string; addres
       { replacements: { eventId: event.id, entryId: entry.id, voterHash, addressHash: votingHash('address', event.id, input.address) }, type: QueryTypes.SELECT, transaction },
     );
     if (inserted.length === 0) return { ok: false, reason: 'twice', votedNumber: await votedNumber(event.id, input.voterToken, transaction) };
-    return { ok: true, eventId: event.id, entryNumber: entry.number! };
+    return { ok: true, eventId: event.id, showSlug: event.slug, entryNumber: entry.number! };
   });
 }
 

@@ -158,7 +158,7 @@ export async function runCardPrint(printId: number): Promise<void> {
 }
 
 async function renderPrint(print: CardPrint, write: (values: Partial<CardPrint>) => Promise<void>): Promise<void> {
-  const event = (await Event.findByPk(print.eventId, { attributes: ['id', 'name'] }))!;
+  const event = (await Event.findByPk(print.eventId, { attributes: ['id', 'name', 'slug'] }))!;
   const cards = await numberedCardsOf(event, print.classId);
   if (cards.length === 0) throw new Error('No confirmed entries are left to print.');
   await write({ total: cards.length, done: 0, rendered: 0, error: null });

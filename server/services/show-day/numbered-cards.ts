@@ -25,7 +25,7 @@ export type NumberedCard = { entryId: number; number: number; content: NumberedC
 export const numberedCardHash = (content: NumberedCardContent) => createHash('sha256').update(JSON.stringify([NUMBERED_CARD_DESIGN, 'letter', content])).digest('hex');
 
 /** The confirmed entries of a show (or of one class), in number order, as the cards they print. Public fields only. */
-export async function numberedCardsOf(event: { id: number; name: string }, classId: number | null): Promise<NumberedCard[]> {
+export async function numberedCardsOf(event: { id: number; name: string; slug: string }, classId: number | null): Promise<NumberedCard[]> {
   const entries = await Entry.findAll({
     where: { eventId: event.id, status: { [Op.in]: [...CARD_PRINT_ENTRY_STATUSES] }, number: { [Op.ne]: null }, ...(classId ? { classId } : {}) },
     attributes: ['id', 'number'],
@@ -38,14 +38,15 @@ export async function numberedCardsOf(event: { id: number; name: string }, class
   return entries.map((e) => {
     const build = e.build!;
     const { heading, kicker } = headlineOf(build);
-    // The same address as the public build page (`publicBuildUrl`): the QR code opens it.
-    const url = `${config.publicBaseUrl}/c/${build.code}`;
+    // The public build page (`publicBuildUrl`) with this show first: a car may be in two shows, and a
+    // visitor scanning this card is at this one. The printed short address stays the plain page.
+    const url = `${config.publicBaseUrl}/c/${build.code}?show=${encodeURIComponent(event.slug)}`;
     const content: NumberedCardContent = {
       show: { showName: event.name, className: e.eventClass?.name ?? '', entryNumber: String(e.number) },
       heading,
       name: kicker,
       qr: qrMatrix(url),
-      shortUrl: shortUrlOf(url),
+      shortUrl: shortUrlOf(`${config.publicBaseUrl}/c/${build.code}`),
     };
     return { entryId: e.id, number: e.number!, content, hash: numberedCardHash(content) };
   });

@@ -1,3 +1,5 @@
+import { waitingListWords } from '@shared/words';
+import type { EntryTableRow } from '@shared/schemas/show-day';
 import { describe, expect, it, vi } from 'vitest';
 import { Op } from 'sequelize';
 import { AuditLine } from '@server/models/audit-line';
@@ -115,6 +117,14 @@ describe('capacity and the waiting list', () => {
     expect(offered.offerExpiresAt).not.toBeNull();
     expect(new Date(offered.offerExpiresAt).getTime()).toBeGreaterThan(Date.now() + 47 * 3600_000);
     expect(await countMail(third.email)).toBe(1); // only the waiting-list notice
+    // The organiser's table (and the detail it opens) shows the offer with the deadline the owner sees.
+    const rows = (await organiser.client.get(`/api/events/${eventId}/entry-table`)).body.rows as EntryTableRow[];
+    const offeredRow = rows.find((r) => r.id === w1.id)!;
+    expect(offeredRow).toMatchObject({ status: 'waiting_list', offerExpiresAt: offered.offerExpiresAt });
+    expect(waitingListWords(offeredRow, 'Europe/Berlin')).toMatch(/^Place offered, until \w{3} \d{1,2} \w{3}, \d{2}:\d{2}$/);
+    const stillWaiting = rows.find((r) => r.id === w2.id)!;
+    expect(stillWaiting.offerExpiresAt).toBeNull();
+    expect(waitingListWords(stillWaiting, 'Europe/Berlin')).toBe(`#${stillWaiting.waitingPosition}`);
 
     // A newcomer cannot take the offered place.
     const newcomer = await ownerWithBuild();

@@ -1,3 +1,4 @@
+import { MAKE_AN_ACCOUNT } from '@shared/words';
 import { useRef } from 'react';
 import { Link, NavLink, Outlet } from 'react-router-dom';
 import { useScreenHeading } from './use-screen-heading';
@@ -72,7 +73,7 @@ export function AppLayout() {
                   Sign in
                 </NavLink>
                 <NavLink to="/sign-up" className={navClass}>
-                  Sign up
+                  {MAKE_AN_ACCOUNT}
                 </NavLink>
               </>
             )}

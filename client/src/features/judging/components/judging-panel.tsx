@@ -1,3 +1,4 @@
+import { countOf } from '@shared/words';
 import type { EventDetail } from '@shared/schemas/show';
 import { Panel } from '@client/components/ui/panel';
 import { Button } from '@client/components/ui/button';
@@ -70,7 +71,7 @@ export function JudgingPanel({ show }: { show: EventDetail }) {
                 <tr key={c.classId} className="border-b border-rule">
                   <td className="py-1">{c.name}</td>
                   <td>{c.cars}</td>
-                  <td>{c.bySheets.map((b) => `${b.cars} with ${b.sheets}`).join(' · ') || '–'}</td>
+                  <td>{c.bySheets.map((b) => `${countOf(b.cars, 'car')} with ${countOf(b.sheets, 'finished sheet')}`).join(' · ') || '–'}</td>
                 </tr>
               ))}
             </tbody>

@@ -3,6 +3,7 @@ import { Link, useParams } from 'react-router-dom';
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { ENTRY_STATUSES, ENTRY_STATUS_LABELS } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
+import { waitingListWords } from '@shared/words';
 import { PAYMENT_ISSUE_SHORT_LABEL, PAYMENT_STATE_LABELS, type EntryTableQuery, type EntryTableRow, type EntryTableSort } from '@shared/schemas/show-day';
 import { useShow } from '../api/get-show';
 import { entryTableParams, useEntryTable } from '../api/list-entry-table';
@@ -33,6 +34,7 @@ export function EntriesPage() {
     q: filters.q || undefined,
   };
   const table = useEntryTable(eventId, query);
+  const timeZone = show.data?.timeZone ?? 'UTC';
 
   const columns = useMemo(
     () => [
@@ -60,9 +62,9 @@ export function EntriesPage() {
         },
       }),
       column.accessor('checkedInAt', { header: 'Arrived', enableSorting: false, cell: (c) => (c.getValue() ? new Date(c.getValue()!).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' }) : '') }),
-      column.accessor('waitingPosition', { header: 'Waiting', enableSorting: false, cell: (c) => (c.getValue() ? `#${c.getValue()}` : '') }),
+      column.accessor('waitingPosition', { header: 'Waiting', enableSorting: false, cell: (c) => waitingListWords(c.row.original, timeZone) }),
     ],
-    [],
+    [timeZone],
   );
   const rt = useReactTable({
     data: table.data?.rows ?? [],
@@ -159,7 +161,7 @@ export function EntriesPage() {
           </div>
         </>
       ) : null}
-      {open && show.data ? <EntryDetail eventId={eventId} row={open} classes={show.data.classes} onClose={() => setOpenId(null)} /> : null}
+      {open && show.data ? <EntryDetail eventId={eventId} row={open} classes={show.data.classes} timeZone={show.data.timeZone} onClose={() => setOpenId(null)} /> : null}
     </div>
   );
 }

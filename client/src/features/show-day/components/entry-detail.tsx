@@ -3,6 +3,7 @@ import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { ASKABLE_PRIVATE_FIELD_LABELS, ASKABLE_PRIVATE_FIELDS, ENTRY_STATUS_LABELS } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
+import { waitingListWords } from '@shared/words';
 import type { EventClass } from '@shared/schemas/show-classes';
 import { auditActionLabel, ChangeClassSchema, MarkPaidSchema, PAYMENT_ISSUE_LABELS, PAYMENT_STATE_LABELS, type ChangeClassInput, type EntryTableRow, type MarkPaidInput } from '@shared/schemas/show-day';
 import { applyServerErrors } from '@client/lib/form-errors';
@@ -13,6 +14,7 @@ import { useMoveEntryUp } from '../api/move-entry-up';
 import { useWithdrawListedEntry } from '../api/withdraw-listed-entry';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
+import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 
 /** before → after, field by field, in words a person reads. */
 function changeText(before: unknown, after: unknown): string {
@@ -69,17 +71,22 @@ function MarkPaidForm({ eventId, row, onError }: { eventId: number; row: EntryTa
 }
 
 /** One entry opened from the table: the entrant's contact, the build's private fields, the actions and the history. */
-export function EntryDetail({ eventId, row, classes, onClose }: { eventId: number; row: EntryTableRow; classes: EventClass[]; onClose: () => void }) {
+type Question = { title: string; text: string; confirmLabel: string; danger: boolean; act: () => void };
+
+export function EntryDetail({ eventId, row, classes, timeZone, onClose }: { eventId: number; row: EntryTableRow; classes: EventClass[]; timeZone: string; onClose: () => void }) {
   const moveUp = useMoveEntryUp(eventId);
   const withdraw = useWithdrawListedEntry(eventId);
   const audit = useEntryAudit(row.id);
   // An error that names no field of a form (or comes from a button without one) shows at the top.
   const [formError, setFormError] = useState('');
   const buttonError = moveUp.error ?? withdraw.error;
-  const confirmThen = (question: string, act: () => void) => {
-    if (!window.confirm(question)) return;
+  // The product's own dialog asks before a step the entrant is told about, as everywhere else.
+  const [question, setQuestion] = useState<Question | null>(null);
+  const answerYes = () => {
+    if (!question) return;
     setFormError('');
-    act();
+    question.act();
+    setQuestion(null);
   };
   const open = row.status !== 'withdrawn';
 
@@ -100,6 +107,11 @@ export function EntryDetail({ eventId, row, classes, onClose }: { eventId: numbe
           </Fragment>
         ))}
         <dt className="text-graphite">Status</dt><dd>{ENTRY_STATUS_LABELS[row.status]}</dd>
+        {row.status === 'waiting_list' ? (
+          <>
+            <dt className="text-graphite">Waiting list</dt><dd>{waitingListWords(row, timeZone)}</dd>
+          </>
+        ) : null}
         <dt className="text-graphite">Payment</dt><dd>{PAYMENT_STATE_LABELS[row.payment]} · fee {formatMoney(row.feeAmount, row.currency)}{row.refundDue && !row.refund ? ` · refund due ${formatMoney(row.refundDue, row.currency)}` : ''}</dd>
         {row.refund ? (
           <>
@@ -119,10 +131,13 @@ export function EntryDetail({ eventId, row, classes, onClose }: { eventId: numbe
         <div className="mt-4 space-y-4">
           <ChangeClassForm eventId={eventId} row={row} classes={classes} onError={setFormError} />
           {row.payment === 'unpaid' && row.status === 'awaiting_payment' ? <MarkPaidForm eventId={eventId} row={row} onError={setFormError} /> : null}
-          {row.status === 'waiting_list' ? <Button busy={moveUp.isPending} onClick={() => confirmThen(`Give ${row.buildTitle} a place now, ahead of the waiting list's order and above capacity if the class is full?`, () => moveUp.mutate({ entryId: row.id }))}>Move up from the waiting list</Button> : null}
-          <Button variant="danger" busy={withdraw.isPending} onClick={() => confirmThen(`Withdraw ${row.buildTitle}? The show's refund rule decides what is paid back, and the entrant is told by e-mail.`, () => withdraw.mutate({ entryId: row.id }))}>Withdraw</Button>
+          {row.status === 'waiting_list' ? <Button busy={moveUp.isPending} onClick={() => setQuestion({ title: 'Move up from the waiting list?', text: `Give ${row.buildTitle} a place now, ahead of the waiting list's order and above capacity if the class is full?`, confirmLabel: 'Give it a place', danger: false, act: () => moveUp.mutate({ entryId: row.id }) })}>Move up from the waiting list</Button> : null}
+          <Button variant="danger" busy={withdraw.isPending} onClick={() => setQuestion({ title: `Withdraw ${row.buildTitle}?`, text: "The show's refund rule decides what is paid back, and the entrant is told by e-mail.", confirmLabel: 'Withdraw', danger: true, act: () => withdraw.mutate({ entryId: row.id }) })}>Withdraw</Button>
         </div>
       ) : null}
+      <ConfirmDialog open={question !== null} title={question?.title ?? ''} confirmLabel={question?.confirmLabel ?? ''} danger={question?.danger ?? true} onConfirm={answerYes} onCancel={() => setQuestion(null)}>
+        <p>{question?.text}</p>
+      </ConfirmDialog>
       <h3 className="mt-6 font-display text-lg uppercase">History</h3>
       <ol className="mt-2 space-y-2 text-sm" aria-label="History">
         {audit.data?.map((line) => (

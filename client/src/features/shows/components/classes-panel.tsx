@@ -1,3 +1,4 @@
+import { countOf } from '@shared/words';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { ClassInputSchema, type ClassInput } from '@shared/schemas/show-classes';
@@ -53,7 +54,7 @@ export function ClassesPanel({ show }: { show: EventDetail }) {
           <li key={c.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
             <div>
               <p className="font-semibold">{c.name}</p>
-              <p className="text-sm text-graphite">{c.capacity ? `Up to ${c.capacity} cars` : 'No limit'}{c.description ? ` · ${c.description}` : ''}</p>
+              <p className="text-sm text-graphite">{c.capacity ? `Up to ${countOf(c.capacity, 'car')}` : 'No limit'}{c.description ? ` · ${c.description}` : ''}</p>
             </div>
             {editable ? (
               <div className="flex gap-1">
