@@ -45,6 +45,10 @@ const EnvSchema = z.object({
   PHOTO_MEGAPIXELS_PER_WINDOW: z.coerce.number().int().min(1).default(1500),
   IMAGE_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(1),
   STORAGE_DIR: z.string().optional().transform((v) => v || undefined),
+  /** Web processes behind Node's cluster module on the one port (`npm start -- --web-processes 2`). */
+  WEB_PROCESSES: z.coerce.number().int().min(1).max(32).default(1),
+  /** Whether `npm start` also works the job queue; false when `npm run worker` processes do (`--no-jobs`). */
+  RUN_JOBS: z.stringbool().default(true),
   /** Where uploads, card caches and bulk PDFs live: the local disk, or an S3-compatible bucket. */
   STORAGE_DRIVER: z.enum(['local', 's3']).default('local'),
   S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, { error: 'S3_BUCKET must be a bucket name (lowercase letters, digits, dots, hyphens).' }).default('placard'),
@@ -214,6 +218,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     // each process also works a card queue of its own, so a print is drawn where its test reads it.
     cardQueue: e.NODE_ENV === 'test' && !e.STORAGE_DIR && e.STORAGE_DRIVER === 'local' ? `cards-${process.pid}` : 'cards',
     objectStorage: objectStorageConfig(e, production),
+    webProcesses: e.WEB_PROCESSES,
+    runJobs: e.RUN_JOBS,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     /** How often an idle worker asks the queue for work (a worker in the same process is woken at once). */
     jobPollSeconds: e.JOB_POLL_SECONDS,

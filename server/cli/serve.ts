@@ -1,15 +1,14 @@
-// Starts the mail catcher (demo mode) and the one Express server, then prints where to go.
+// Starts the mail catcher (demo mode), the local fakes, the job workers and the web server (one
+// process, or several behind Node's cluster module with `--web-processes N`), then prints where to go.
+import cluster from 'node:cluster';
+import { fileURLToPath } from 'node:url';
 import { config } from '../config';
 import { keepRunningThroughDatabaseLoss } from '../process-guard';
 import { DEMO_ACCOUNTS } from '../db/demo-accounts';
-import { closeConnections, listen, logger } from '../index';
+import { listen, logger } from '../index';
 import { startDemoMailCatcher } from '../mail/demo-catcher';
-import { createMailSender } from '../mail/mailer';
-import { jobQueue } from '../jobs/queue';
-import { startMailWorker } from '../jobs/send-mail';
-import { startRefundWorker } from '../jobs/refund-entry';
-import { startOfferSweepWorker } from '../jobs/offer-sweep';
-import { startCardWorker } from '../jobs/card-jobs';
+import { startAllJobWorkers } from '../jobs/all-workers';
+import { stopGracefully } from './graceful-stop';
 import { pointPaymentsAtFake } from '../payments/client';
 import { startLocalPayments } from '../payments/fake';
 import { startFakeS3IfWanted } from '../storage/index';
@@ -22,14 +21,41 @@ const catcherMoved = demoCatcher && demoCatcher.port !== demoCatcher.wantedPort;
 if (catcherMoved) logger.warn(`Port ${demoCatcher.wantedPort} (MAIL_CATCHER_PORT) is taken by another program: this Placard's mail catcher listens on ${demoCatcher.port} instead, and its mail goes there.`);
 const catcher = demoCatcher?.server;
 
+const argAfter = (flag: string) => {
+  const i = process.argv.indexOf(flag);
+  return i >= 0 ? process.argv[i + 1] : undefined;
+};
+const webProcesses = Number(argAfter('--web-processes') ?? config.webProcesses);
+if (!Number.isInteger(webProcesses) || webProcesses < 1 || webProcesses > 32) throw new Error('--web-processes takes a whole number from 1 to 32.');
+const runJobs = config.runJobs && !process.argv.includes('--no-jobs');
+
 const fakeS3 = await startFakeS3IfWanted();
-const server = await listen();
-// The one-machine default: this process also works the job queue (mail now; more jobs join it).
-await startMailWorker(jobQueue(), createMailSender(demoCatcher?.smtpUrl ?? config.smtpUrl));
-await startRefundWorker();
-await startOfferSweepWorker();
-await startCardWorker();
+const server = webProcesses === 1 ? await listen() : undefined;
+if (webProcesses > 1) await startWebProcesses(webProcesses);
+// The one-machine default: this process also works the job queue; `--no-jobs` leaves it to `npm run worker`.
+if (runJobs) await startAllJobWorkers(demoCatcher?.smtpUrl ?? config.smtpUrl);
 const url = `http://${config.host}:${config.port}`;
+
+/** Forks the web processes (each runs cli/web-process.ts) and waits until every one listens. */
+async function startWebProcesses(count: number): Promise<void> {
+  cluster.setupPrimary({ exec: fileURLToPath(new URL('./web-process.ts', import.meta.url)), execArgv: ['--import', 'tsx'] });
+  const env = fakeS3 ? { PLACARD_FAKE_S3_ENDPOINT: fakeS3.endpoint } : {};
+  await Promise.all(
+    Array.from({ length: count }, () => {
+      const child = cluster.fork(env);
+      return new Promise<void>((resolve, reject) => {
+        child.on('message', (m: { listening?: boolean }) => m.listening && resolve());
+        child.once('exit', (code) => reject(new Error(`A web process exited with ${code} before listening.`)));
+      });
+    }),
+  );
+  // One that dies later is replaced, so the port keeps its processes.
+  cluster.on('exit', (child, code, signal) => {
+    if (stopping) return;
+    logger.warn({ pid: child.process.pid, code, signal }, 'a web process stopped: starting another');
+    cluster.fork(env);
+  });
+}
 
 // No payment key: the local fake stands in, posting its webhooks to this server.
 const fakePayments =
@@ -52,7 +78,8 @@ const storageLine = config.objectStorage
   : `  Files: the local disk, ${config.storageDir}`;
 const lines = [
   '',
-  `  Placard is running on ${url}`,
+  `  Placard is running on ${url}${webProcesses > 1 ? ` (${webProcesses} web processes)` : ''}`,
+  ...(runJobs ? [] : ['  Jobs: not worked here (--no-jobs): run `npm run worker` beside it']),
   paymentsLine,
   storageLine,
   ...(config.demoMode
@@ -73,12 +100,16 @@ let stopping = false;
 async function stop() {
   if (stopping) return;
   stopping = true;
-  server.close();
-  catcher?.close(() => undefined);
-  await fakePayments?.close();
-  await fakeS3?.close();
-  await closeConnections();
-  process.exit(0);
+  const children = Object.values(cluster.workers ?? {}).filter((c) => c !== undefined);
+  const childrenGone = Promise.all(children.map((c) => new Promise<void>((resolve) => (c.isDead() ? resolve() : c.once('exit', () => resolve())))));
+  for (const child of children) child.kill('SIGTERM');
+  await stopGracefully(server, 10_000, async () => {
+    await childrenGone; // each finishes its requests in flight first
+
+    catcher?.close(() => undefined);
+    await fakePayments?.close();
+    await fakeS3?.close();
+  });
 }
 process.on('SIGINT', stop);
 process.on('SIGTERM', stop);
