@@ -159,7 +159,7 @@ export function EntriesPage() {
           </div>
         </>
       ) : null}
-      {open && show.data ? <EntryDetail eventId={eventId} row={open} classes={show.data.classes} onClose={() => setOpenId(null)} /> : null}
+      {open && show.data ? <EntryDetail eventId={eventId} row={open} classes={show.data.classes} timeZone={show.data.timeZone} onClose={() => setOpenId(null)} /> : null}
     </div>
   );
 }

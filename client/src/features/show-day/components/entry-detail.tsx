@@ -2,6 +2,8 @@ import { Fragment, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { ASKABLE_PRIVATE_FIELD_LABELS, ASKABLE_PRIVATE_FIELDS, ENTRY_STATUS_LABELS } from '@shared/constants';
+import { auditChangeWords, auditTimeWords } from '@shared/audit-words';
+import { formatInZone } from '@shared/calc/time-zone';
 import { formatMoney } from '@shared/calc/money';
 import type { EventClass } from '@shared/schemas/show-classes';
 import { auditActionLabel, ChangeClassSchema, MarkPaidSchema, PAYMENT_ISSUE_LABELS, PAYMENT_STATE_LABELS, type ChangeClassInput, type EntryTableRow, type MarkPaidInput } from '@shared/schemas/show-day';
@@ -13,17 +15,6 @@ import { useMoveEntryUp } from '../api/move-entry-up';
 import { useWithdrawListedEntry } from '../api/withdraw-listed-entry';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
-
-/** before → after, field by field, in words a person reads. */
-function changeText(before: unknown, after: unknown): string {
-  const b = (before ?? {}) as Record<string, unknown>;
-  const a = (after ?? {}) as Record<string, unknown>;
-  const show = (k: string, v: unknown) => (k === 'status' && typeof v === 'string' && v in ENTRY_STATUS_LABELS ? ENTRY_STATUS_LABELS[v as keyof typeof ENTRY_STATUS_LABELS] : v === null || v === undefined ? '—' : String(v));
-  return Object.keys(a)
-    .filter((k) => !k.endsWith('Id') && k !== 'paymentRef')
-    .map((k) => (k in b ? `${k}: ${show(k, b[k])} → ${show(k, a[k])}` : `${k}: ${show(k, a[k])}`))
-    .join('; ');
-}
 
 /** Moves the entry to another class of the show; the button wakes only when another class is picked. */
 function ChangeClassForm({ eventId, row, classes, onError }: { eventId: number; row: EntryTableRow; classes: EventClass[]; onError: (message: string) => void }) {
@@ -69,7 +60,9 @@ function MarkPaidForm({ eventId, row, onError }: { eventId: number; row: EntryTa
 }
 
 /** One entry opened from the table: the entrant's contact, the build's private fields, the actions and the history. */
-export function EntryDetail({ eventId, row, classes, onClose }: { eventId: number; row: EntryTableRow; classes: EventClass[]; onClose: () => void }) {
+export function EntryDetail({ eventId, row, classes, timeZone, onClose }: { eventId: number; row: EntryTableRow; classes: EventClass[]; timeZone: string; onClose: () => void }) {
+  // Dates read in the show's time zone, the same for every organiser wherever their browser is.
+  const day = (iso: string) => formatInZone(iso, timeZone, { day: 'numeric', month: 'short', year: 'numeric' });
   const moveUp = useMoveEntryUp(eventId);
   const withdraw = useWithdrawListedEntry(eventId);
   const audit = useEntryAudit(row.id);
@@ -104,13 +97,13 @@ export function EntryDetail({ eventId, row, classes, onClose }: { eventId: numbe
         {row.refund ? (
           <>
             <dt className="text-graphite">Refund</dt>
-            <dd>{formatMoney(row.refund.amount, row.currency)} sent on {new Date(row.refund.at).toLocaleDateString()} (ref. {row.refund.ref}). It cannot be sent twice.</dd>
+            <dd>{formatMoney(row.refund.amount, row.currency)} sent on {day(row.refund.at)} (ref. {row.refund.ref}). It cannot be sent twice.</dd>
           </>
         ) : null}
         {row.paymentIssues.map((i) => (
           <Fragment key={i.id}>
             <dt className="font-semibold text-danger">Check payment</dt>
-            <dd>{PAYMENT_ISSUE_LABELS[i.reason]}: {formatMoney(i.amount, i.currency)} on {new Date(i.at).toLocaleDateString()}{i.refund ? `, refunded (ref. ${i.refund.ref})` : ''}.</dd>
+            <dd>{PAYMENT_ISSUE_LABELS[i.reason]}: {formatMoney(i.amount, i.currency)} on {day(i.at)}{i.refund ? `, refunded (ref. ${i.refund.ref})` : ''}.</dd>
           </Fragment>
         ))}
       </dl>
@@ -127,8 +120,8 @@ export function EntryDetail({ eventId, row, classes, onClose }: { eventId: numbe
       <ol className="mt-2 space-y-2 text-sm" aria-label="History">
         {audit.data?.map((line) => (
           <li key={line.id} className="border-b border-rule pb-2">
-            <span className="font-semibold">{auditActionLabel(line.action)}</span> · {line.who ?? 'Placard'} · <time dateTime={line.at}>{new Date(line.at).toLocaleString()}</time>
-            <div className="text-graphite">{changeText(line.before, line.after)}</div>
+            <span className="font-semibold">{auditActionLabel(line.action)}</span> · {line.who ?? 'Placard'} · <time dateTime={line.at}>{auditTimeWords(line.at, timeZone)}</time>
+            <div className="text-graphite">{auditChangeWords(line.before, line.after, { currency: row.currency, timeZone }).join('; ')}</div>
           </li>
         ))}
       </ol>
