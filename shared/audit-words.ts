@@ -42,8 +42,9 @@ export function auditChangeWords(before: unknown, after: unknown, ctx: AuditWord
     .flatMap((k): string[] => {
       if (k in YES_NO_FIELDS) return a[k] === true ? [YES_NO_FIELDS[k] as string] : [];
       const now = valueWords(k, a[k], ctx);
-      if (!(k in b)) return now === '—' ? [] : [`${fieldWords(k)}: ${now}`];
-      const was = valueWords(k, b[k], ctx);
+      const was = k in b ? valueWords(k, b[k], ctx) : '—';
+      // Something set where nothing was reads as the new value alone: "Paid: $30.00".
+      if (was === '—') return now === '—' ? [] : [`${fieldWords(k)}: ${now}`];
       if (was === now) return [];
       return [`${fieldWords(k)}: ${was} → ${now}`];
     });

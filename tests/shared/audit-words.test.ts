@@ -5,7 +5,7 @@ const ctx = { currency: 'USD', timeZone: 'America/Denver' };
 
 describe('an entry history line in words', () => {
   it('names money in the show’s currency and hides ids and references', () => {
-    expect(auditChangeWords({ status: 'awaiting_payment' }, { status: 'confirmed', paymentRef: 'pi_1', paidAmount: 3000 }, ctx)).toEqual(['Status: Awaiting payment → Confirmed', 'Paid: $30.00']);
+    expect(auditChangeWords({ status: 'awaiting_payment', paidAmount: null }, { status: 'confirmed', paymentRef: 'pi_1', paidAmount: 3000 }, ctx)).toEqual(['Status: Awaiting payment → Confirmed', 'Paid: $30.00']);
   });
   it('reads a class change by the classes’ names', () => {
     expect(auditChangeWords({ classId: 1, className: 'Customs' }, { classId: 2, className: 'Hot rods to 1948' }, ctx)).toEqual(['Class: Customs → Hot rods to 1948']);
