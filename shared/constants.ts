@@ -4,6 +4,9 @@ export const PASSWORD_MIN_LENGTH = 10;
 export const PASSWORD_MAX_LENGTH = 200;
 export const NAME_MAX_LENGTH = 80;
 export const EMAIL_MAX_LENGTH = 254;
+/** Hometown and club: public words the owner chooses to show beside their name on results. */
+export const HOMETOWN_MAX_LENGTH = 80;
+export const CLUB_MAX_LENGTH = 80;
 
 /** A password-reset link works once, for this long. */
 export const PASSWORD_RESET_TTL_MINUTES = 60;

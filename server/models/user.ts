@@ -4,6 +4,9 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare id: CreationOptional<number>;
   declare email: string;
   declare name: string;
+  /** Public words the owner chooses to show beside their name on results; null when not given. */
+  declare hometown: CreationOptional<string | null>;
+  declare club: CreationOptional<string | null>;
   declare passwordHash: string;
   declare isSiteAdmin: CreationOptional<boolean>;
   declare mayOrganise: CreationOptional<boolean>;
@@ -26,6 +29,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
         email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
         name: { type: DataTypes.STRING(80), allowNull: false },
+        hometown: { type: DataTypes.STRING(80), allowNull: true },
+        club: { type: DataTypes.STRING(80), allowNull: true },
         passwordHash: { type: DataTypes.STRING(255), allowNull: false },
         isSiteAdmin: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         mayOrganise: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },

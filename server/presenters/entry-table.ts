@@ -1,3 +1,4 @@
+import type { MoneyTotals } from '@shared/schemas/money-totals';
 import { paymentStateOf, type EntryTableRow, type PaymentIssueRow, type RefundSent } from '@shared/schemas/show-day';
 import type { Entry } from '../models/entry';
 import type { PaymentIssue } from '../models/payment-issue';
@@ -30,6 +31,8 @@ export function presentEntryTableRow(e: Entry, places: Map<number, number>, acto
     buildId: e.buildId,
     buildTitle: e.build?.title ?? '',
     buildCode: e.build?.code ?? '',
+    modelYear: e.build?.modelYear ?? null,
+    bodyOrigin: e.build?.bodyOrigin ?? null,
     ownerName: e.owner?.name ?? '',
     classId: e.classId,
     className: e.eventClass?.name ?? '',
@@ -51,3 +54,13 @@ export function presentEntryTableRow(e: Entry, places: Map<number, number>, acto
     sharedFields: [...e.sharedFields],
   };
 }
+
+/** The money totals, field by field. */
+export const presentMoneyTotals = (t: MoneyTotals): MoneyTotals => ({
+  currency: t.currency,
+  byMethod: t.byMethod.map((m) => ({ method: m.method, collected: m.collected, refunded: m.refunded, refundsDue: m.refundsDue })),
+  collected: t.collected,
+  refunded: t.refunded,
+  refundsDue: t.refundsDue,
+  feesDue: t.feesDue,
+});

@@ -3,6 +3,7 @@ import type { ResultLine, ResultsReview } from '@shared/schemas/judging';
 import { decidedByWords, totalShown, type Award, type OwnResults, type AwardView, type ManualTieBreakView, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
 import type { ManualTieBreak } from '../models/manual-tie-break';
 import type { ShowResultRules } from '@shared/schemas/judging';
+import type { ReadOut } from '@shared/schemas/read-out';
 
 type Cars = Map<number, { number: number; title: string; className: string }>;
 
@@ -79,5 +80,17 @@ export function presentOwnResults(r: OwnResults): OwnResults {
     sheetsCounted: r.sheetsCounted,
     criteria: r.criteria.map((c) => ({ name: c.name, maxPoints: c.maxPoints, weight: c.weight, mean: c.mean, judges: [...c.judges] })),
     comments: r.comments ? r.comments.map((c) => ({ criterion: c.criterion, text: c.text })) : null,
+  };
+}
+
+/** The announcer's read-out: places, numbers, titles and the owner's public credit only (never the e-mail or any private field). */
+export function presentReadOut(showName: string, sections: Array<{ kind: ReadOut['sections'][number]['kind']; className: string | null; lines: SnapshotLine[] }>): ReadOut {
+  return {
+    showName,
+    sections: sections.map((s) => ({
+      kind: s.kind,
+      className: s.className,
+      calls: s.lines.map((l) => ({ place: l.place, shared: l.shared, number: l.number, title: l.title, owner: l.owner ? { name: l.owner.name, hometown: l.owner.hometown, club: l.owner.club } : null })),
+    })),
   };
 }

@@ -11,6 +11,8 @@ export function presentCurrentUser(user: User): CurrentUser {
     id: user.id,
     email: user.email,
     name: user.name,
+    hometown: user.hometown ?? '',
+    club: user.club ?? '',
     isSiteAdmin: user.isSiteAdmin,
     mayOrganise: user.mayOrganise,
     emailVerified: user.emailVerified,

@@ -12,9 +12,10 @@ import { addTieBreak, removeTieBreak } from '../services/results/tie-breaks';
 import { loadPublishedResults } from '../services/results/published-results';
 import { loadOwnResults } from '../services/results/own-results';
 import { awardsOf } from '../services/results/awards';
+import { readOutOf } from '../services/results/read-out';
 import { renderCertificates, renderResultsSheet } from '../services/results/result-pdfs';
 import { scoresCsv } from '../services/judging/score-export';
-import { presentAward, presentNewTieBreak, presentOwnResults } from '../presenters/results';
+import { presentAward, presentNewTieBreak, presentOwnResults, presentReadOut } from '../presenters/results';
 
 export const resultsRouter = Router();
 resultsRouter.use(['/events/:id/results', '/entries/:id/results'], requireUser);
@@ -57,6 +58,12 @@ resultsRouter.delete('/events/:id/results/tie-breaks/:tieBreakId', async (req, r
 resultsRouter.get('/events/:id/results/awards', async (req, res) => {
   const { event } = await loadEventFor(req, 'manageResults');
   res.json({ awards: awardsOf(await published(event.id)).map(presentAward) });
+});
+
+/** The announcer's read-out: each class third to first, then best of show and people's choice. */
+resultsRouter.get('/events/:id/results/read-out', async (req, res) => {
+  const { event } = await loadEventFor(req, 'manageResults');
+  res.set('Cache-Control', 'private, no-store').json({ readOut: presentReadOut(event.name, readOutOf(await published(event.id))) });
 });
 
 resultsRouter.get('/events/:id/results/scores.csv', async (req, res) => {

@@ -2,12 +2,13 @@ import { Router } from 'express';
 import { ChangeClassSchema, EntryExportQuerySchema, EntryTableQuerySchema, GateCheckInSchema, GateLookupQuerySchema, GateUndoSchema, MarkPaidSchema } from '@shared/schemas/show-day';
 import { parseBody, parseQuery } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
-import { listAudit } from '../services/audit/audit';
+import { listAudit, manualPaymentNotes } from '../services/audit/audit';
 import { listEntriesForExport, listEntryTable } from '../services/entries/entry-table';
 import { entriesCsv } from '../services/entries/entry-export';
+import { moneyTotals } from '../services/entries/money-totals';
 import { changeEntryClass, markEntryPaid, moveUpFromWaitingList } from '../services/entries/entry-actions';
 import { gateCheckIn, gateCounts, gateLookup, undoCheckIn } from '../services/show-day/gate';
-import { presentEntryTableRow } from '../presenters/entry-table';
+import { presentEntryTableRow, presentMoneyTotals } from '../presenters/entry-table';
 import type { Actor } from '../policies/actor';
 import { presentGateCard, presentGateCounts } from '../presenters/gate';
 import { presentAuditLine } from '../presenters/event';
@@ -23,6 +24,12 @@ showDayRouter.get('/events/:id/entry-table', requireUser, async (req, res) => {
   res.json({ rows: rows.map((r) => presentEntryTableRow(r, places, actor)), total, page: query.page, pageSize: query.pageSize, pageCount: Math.max(1, Math.ceil(total / query.pageSize)) });
 });
 
+/** Money at a glance: collected, refunded and due, by how it was paid. */
+showDayRouter.get('/events/:id/money', requireUser, async (req, res) => {
+  const { event } = await loadEventFor(req, 'viewEntries');
+  res.set('Cache-Control', 'private, no-store').json({ money: presentMoneyTotals(await moneyTotals(event.id, event.currency)) });
+});
+
 showDayRouter.get('/events/:id/entries.csv', requireUser, async (req, res) => {
   const query = parseQuery(req, EntryExportQuerySchema);
   const { event, actor } = await loadEventFor(req, 'viewEntries');
@@ -30,7 +37,7 @@ showDayRouter.get('/events/:id/entries.csv', requireUser, async (req, res) => {
   res.set('Content-Type', 'text/csv; charset=utf-8');
   res.set('Content-Disposition', `attachment; filename="${event.slug}-entries.csv"`);
   res.set('Cache-Control', 'private, no-store');
-  res.send(entriesCsv(rows.map((r) => presentEntryTableRow(r, places, actor))));
+  res.send(entriesCsv(rows.map((r) => presentEntryTableRow(r, places, actor)), { timeZone: event.timeZone, paymentNotes: await manualPaymentNotes(event.id) }));
 });
 
 async function respondWithRow(res: import('express').Response, actor: Actor, eventId: number, entryId: number) {

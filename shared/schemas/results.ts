@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { shortText } from './text';
 import { ShowResultRulesSchema } from './judging';
+import { OwnerCreditSchema } from './owner-credit';
 
 export const PRINT_PAPERS = ['letter', 'a4'] as const;
 export type PrintPaper = (typeof PRINT_PAPERS)[number];
@@ -37,6 +38,8 @@ const SnapshotLineSchema = z.object({
   shared: z.boolean(),
   total: z.number(),
   decidedBy: z.string(),
+  /** The owner's public credit as it stood when published; null in results published before owners were named. */
+  owner: OwnerCreditSchema.nullable().default(null),
 });
 export type SnapshotLine = z.infer<typeof SnapshotLineSchema>;
 

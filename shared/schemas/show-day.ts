@@ -72,6 +72,9 @@ export const EntryTableRowSchema = z.object({
   buildId: z.number(),
   buildTitle: z.string(),
   buildCode: z.string(),
+  /** From the build sheet: the model year and the body's origin (make and model), as the owner wrote them. */
+  modelYear: z.number().nullable(),
+  bodyOrigin: z.string().nullable(),
   ownerName: z.string(),
   classId: z.number(),
   className: z.string(),

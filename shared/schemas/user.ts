@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { text } from './text';
-import { EMAIL_MAX_LENGTH, NAME_MAX_LENGTH, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, PAGE_SIZE_MAX } from '../constants';
+import { lineText, text } from './text';
+import { CLUB_MAX_LENGTH, EMAIL_MAX_LENGTH, HOMETOWN_MAX_LENGTH, NAME_MAX_LENGTH, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, PAGE_SIZE_MAX } from '../constants';
 
 export const EmailSchema = z
   .string({ error: 'E-mail is required.' })
@@ -34,7 +34,15 @@ export const SignInSchema = z.object({
 });
 export type SignInInput = z.infer<typeof SignInSchema>;
 
-export const AccountUpdateSchema = z.object({ name: NameSchema });
+/**
+ * Hometown and club are optional and public: printed beside the owner's name on results and certificates.
+ * Empty means "do not show"; the form sends '' for a cleared field.
+ */
+export const AccountUpdateSchema = z.object({
+  name: NameSchema,
+  hometown: lineText('Hometown', HOMETOWN_MAX_LENGTH).optional(),
+  club: lineText('Club', CLUB_MAX_LENGTH).optional(),
+});
 export type AccountUpdateInput = z.infer<typeof AccountUpdateSchema>;
 
 export const PasswordChangeSchema = z.object({
@@ -81,6 +89,9 @@ export const CurrentUserSchema = z.object({
   id: z.number().int(),
   email: z.string(),
   name: z.string(),
+  /** Public by the owner's choice; '' when not given. */
+  hometown: z.string(),
+  club: z.string(),
   isSiteAdmin: z.boolean(),
   mayOrganise: z.boolean(),
   /** The address is confirmed; until then the person cannot register for shows or accept invitations. */

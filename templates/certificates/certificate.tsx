@@ -21,6 +21,7 @@ const c = StyleSheet.create({
   middle: { alignItems: 'center' },
   to: { fontSize: 11, letterSpacing: 2, color: GRAPHITE, marginTop: 30 },
   title: { fontFamily: DISPLAY, fontWeight: 600, fontSize: 30, lineHeight: 1.15, textAlign: 'center', marginTop: 8 },
+  owner: { fontSize: 14, lineHeight: 1.3, textAlign: 'center', marginTop: 8 },
   number: { fontFamily: DISPLAY, fontWeight: 500, fontSize: 16, marginTop: 6 },
   bottom: { flexDirection: 'row', alignSelf: 'stretch', justifyContent: 'space-between', alignItems: 'flex-end' },
   sign: { width: 180, borderTopWidth: 0.75, borderTopColor: INK, paddingTop: 4, fontSize: 9, color: GRAPHITE },
@@ -48,6 +49,7 @@ function Certificate({ cert, paper }: { cert: CertificateContent; paper: PrintPa
             {cert.shared ? <Text style={c.shared}>{cert.totalLabel === 'JUDGED TOTAL' ? 'A shared place: the judges’ scores could not separate the cars.' : 'Shared: the visitors gave these cars the same number of votes.'}</Text> : null}
             <Text style={c.to}>AWARDED TO</Text>
             <Text style={c.title}>{cert.title}</Text>
+            {cert.owner ? <Text style={c.owner}>{cert.owner}</Text> : null}
             <Text style={c.number}>Number {cert.number}</Text>
           </View>
           <View style={c.bottom}>

@@ -1,5 +1,6 @@
 /** What the results sheet and certificates print: finished words and numbers, no rules (the services decide). */
-export type PrintLine = { place: string; number: number; title: string; total: string; note: string };
+/** `owner` is the owner's public credit in words (name, hometown, club), '' when the results predate it. */
+export type PrintLine = { place: string; number: number; title: string; owner: string; total: string; note: string };
 export type PrintShow = { name: string; when: string; venue: string };
 
 export type ResultsSheetContent = {
@@ -7,6 +8,8 @@ export type ResultsSheetContent = {
   publishedOn: string;
   rulesNote: string;
   bestOfShow: PrintLine[];
+  /** The visitors' award; each line's total reads "41 votes". */
+  peoplesChoice: PrintLine[];
   classes: Array<{ name: string; placings: PrintLine[]; none: string | null }>;
 };
 
@@ -19,6 +22,8 @@ export type CertificateContent = {
   shared: boolean;
   number: number;
   title: string;
+  /** The owner's public credit in words, '' when not known. */
+  owner: string;
   total: string;
   /** What the figure is: the judged total, or the visitors' votes. */
   totalLabel: string;

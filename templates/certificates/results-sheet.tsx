@@ -9,7 +9,7 @@ function Table({ lines }: { lines: PrintLine[] }) {
       <View style={s.head} fixed={false}>
         <Text style={[s.headText, s.cPlace]}>PLACE</Text>
         <Text style={[s.headText, s.cNumber]}>NO.</Text>
-        <Text style={[s.headText, s.cTitle]}>CAR</Text>
+        <Text style={[s.headText, s.cTitle]}>CAR AND OWNER</Text>
         <Text style={[s.headText, s.cTotal]}>TOTAL</Text>
         <Text style={[s.headText, s.cNote]}>DECIDED BY</Text>
       </View>
@@ -17,7 +17,10 @@ function Table({ lines }: { lines: PrintLine[] }) {
         <View key={`${l.place}-${l.number}`} style={s.row} wrap={false}>
           <Text style={[s.figure, s.cPlace]}>{l.place}</Text>
           <Text style={[s.figure, s.cNumber]}>{l.number}</Text>
-          <Text style={s.cTitle}>{l.title}</Text>
+          <View style={s.cTitle}>
+            <Text>{l.title}</Text>
+            {l.owner ? <Text style={s.owner}>{l.owner}</Text> : null}
+          </View>
           <Text style={[s.figure, s.cTotal]}>{l.total}</Text>
           <Text style={s.cNote}>{l.note}</Text>
         </View>
@@ -52,6 +55,12 @@ export function ResultsSheetDocument({ content, paper }: { content: ResultsSheet
             {cls.placings.length ? <Table lines={cls.placings} /> : <Text style={s.muted}>{cls.none}</Text>}
           </View>
         ))}
+        {c.peoplesChoice.length ? (
+          <View wrap={false}>
+            <Text style={s.h2}>PEOPLE’S CHOICE</Text>
+            <Table lines={c.peoplesChoice} />
+          </View>
+        ) : null}
         <Text style={[s.meta, { marginTop: 14 }]}>{c.rulesNote}</Text>
         <View style={s.footer} fixed>
           <Text>

@@ -37,6 +37,7 @@ export const s = StyleSheet.create({
   cTitle: { flex: 1, paddingRight: 8 },
   cTotal: { width: 56, textAlign: 'right', paddingRight: 10 },
   cNote: { width: 150, fontSize: 8.5, color: GRAPHITE },
+  owner: { fontSize: 8.5, color: GRAPHITE, marginTop: 1 },
   figure: { fontFamily: DISPLAY, fontWeight: 500, fontSize: 11 },
   muted: { color: GRAPHITE },
   footer: { position: 'absolute', left: MARGIN, right: MARGIN, bottom: 18, fontSize: 8, color: GRAPHITE, flexDirection: 'row', justifyContent: 'space-between' },

@@ -14,8 +14,14 @@ mkdirSync(out, { recursive: true });
 const long = args.includes('--long');
 
 let n = 0;
+// Invented owners: some give hometown and club, some only a name.
+const owners = [
+  { name: 'Dana Okafor', hometown: 'Millbrook', club: 'Valley Night Cruisers' },
+  { name: 'Ruth Lindqvist', hometown: null, club: null },
+  { name: 'Tomasz Adeyemi', hometown: 'Harrow Creek', club: null },
+];
 const line = (className: string, classId: number, place: number, title: string, total: number, shared = false, decidedBy = 'score'): SnapshotLine => ({
-  entryId: ++n, number: n, title, code: `code${n}`, classId, className, place, shared, total, decidedBy,
+  entryId: ++n, number: n, title, code: `code${n}`, classId, className, place, shared, total, decidedBy, owner: owners[n % owners.length] ?? null,
 });
 const classes = [
   { classId: 1, className: 'Early iron (to 1948)', placings: [line('Early iron (to 1948)', 1, 1, '1932 Highboy Roadster', 118.25), line('Early iron (to 1948)', 1, 2, '1936 Three-Window Coupe', 112.5, false, 'tie broken on Paint and bodywork'), line('Early iron (to 1948)', 1, 3, '1930 Rat Rod Coupe', 112.5)] },

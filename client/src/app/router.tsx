@@ -119,6 +119,7 @@ export const router = createBrowserRouter([
         },
         errorElement: <RouteError />,
       },
+      lazyScreen('/shows/:id/read-out', async () => (await import('@client/features/results/components/read-out-page')).ReadOutPage),
       { path: '*', element: <NotFoundPage /> },
     ],
   },

@@ -42,7 +42,11 @@ async function mailAccountExists(user: User, publicBaseUrl: string, transaction:
 }
 
 export async function updateAccount(user: User, input: AccountUpdateInput): Promise<User> {
-  return user.update({ name: input.name });
+  // Hometown and club change only when sent; '' clears one (nothing is shown).
+  const changes: { name: string; hometown?: string | null; club?: string | null } = { name: input.name };
+  if (input.hometown !== undefined) changes.hometown = input.hometown || null;
+  if (input.club !== undefined) changes.club = input.club || null;
+  return user.update(changes);
 }
 
 /** Changes the password after checking the current one; every other session of the person ends. */

@@ -19,3 +19,14 @@ export function listAudit(eventId: number, entryId?: number, limit = 200) {
     limit,
   });
 }
+
+/** The note an organiser gave when marking each entry paid by hand ("Cash at the gate."), by entry id. */
+export async function manualPaymentNotes(eventId: number): Promise<Map<number, string>> {
+  const lines = await AuditLine.findAll({ where: { eventId, action: 'marked_paid' }, attributes: ['entryId', 'after'], order: [['id', 'ASC']] });
+  const notes = new Map<number, string>();
+  for (const l of lines) {
+    const note = (l.after as { note?: unknown } | null)?.note;
+    if (l.entryId !== null && typeof note === 'string') notes.set(l.entryId, note);
+  }
+  return notes;
+}

@@ -1,6 +1,8 @@
 import { stringify } from 'csv-stringify/sync';
 import { ENTRY_STATUS_LABELS } from '@shared/constants';
 import { currencyDecimals } from '@shared/calc/money';
+import { formatInZone } from '@shared/calc/time-zone';
+import { PAYMENT_METHOD_LABELS, paymentMethodOf } from '@shared/schemas/money-totals';
 import { PAYMENT_ISSUE_LABELS, PAYMENT_STATE_LABELS, type EntryTableRow } from '@shared/schemas/show-day';
 
 const major = (minor: number | null, currency: string) => (minor === null ? null : minor / 10 ** currencyDecimals(currency));
@@ -11,27 +13,39 @@ const major = (minor: number | null, currency: string) => (minor === null ? null
  * = + - @ (or a tab / carriage return) prefixed with a quote by csv-stringify's `escape_formulas`,
  * the guard OWASP's "CSV Injection" page describes.
  */
-export function entriesCsv(rows: EntryTableRow[]): string {
+export function entriesCsv(rows: EntryTableRow[], show: { timeZone: string; paymentNotes: Map<number, string> }): string {
+  // Times a spreadsheet reads as the show lived them: the show's own zone, named in the header.
+  const local = (iso: string | null) => (iso ? formatInZone(iso, show.timeZone, { year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }, 'sv-SE') : '');
+  const method = (r: EntryTableRow) => {
+    const m = r.paidAmount !== null ? paymentMethodOf(r.paymentRef) : null;
+    return m ? PAYMENT_METHOD_LABELS[m] : '';
+  };
   return stringify(
     rows.map((r) => ({
       number: r.number,
       title: r.buildTitle,
       code: r.buildCode,
+      year: r.modelYear,
+      body: r.bodyOrigin ?? '',
       owner: r.ownerName,
       email: r.contact.email,
       phone: r.contact.phone ?? '',
       class: r.className,
       status: ENTRY_STATUS_LABELS[r.status],
       payment: PAYMENT_STATE_LABELS[r.payment],
+      enteredAt: local(r.createdAt),
+      method: method(r),
+      note: show.paymentNotes.get(r.id) ?? '',
+      reference: r.paymentRef ?? '',
       currency: r.currency,
       fee: major(r.feeAmount, r.currency),
       paid: major(r.paidAmount, r.currency),
       refundDue: major(r.refundDue, r.currency),
       refunded: r.refund ? major(r.refund.amount, r.currency) : null,
-      refundedAt: r.refund?.at ?? '',
+      refundedAt: local(r.refund?.at ?? null),
       refundRef: r.refund?.ref ?? '',
       attention: r.paymentIssues.map((i) => `${PAYMENT_ISSUE_LABELS[i.reason]} (${major(i.amount, i.currency)} ${i.currency}${i.refund ? ', refunded' : ''})`).join('; '),
-      checkedInAt: r.checkedInAt ?? '',
+      checkedInAt: local(r.checkedInAt),
       waitingPlace: r.waitingPosition,
       vin: r.privateFields.vin ?? '',
       plate: r.privateFields.plate ?? '',
@@ -44,21 +58,27 @@ export function entriesCsv(rows: EntryTableRow[]): string {
         { key: 'number', header: 'Number' },
         { key: 'title', header: 'Build' },
         { key: 'code', header: 'Card code' },
+        { key: 'year', header: 'Year' },
+        { key: 'body', header: 'Make and model' },
         { key: 'owner', header: 'Entrant' },
         { key: 'email', header: 'E-mail' },
         { key: 'phone', header: 'Phone' },
         { key: 'class', header: 'Class' },
         { key: 'status', header: 'Status' },
         { key: 'payment', header: 'Payment' },
+        { key: 'enteredAt', header: `Entered (${show.timeZone})` },
+        { key: 'method', header: 'Payment method' },
+        { key: 'note', header: 'Payment note' },
+        { key: 'reference', header: 'Payment reference' },
         { key: 'currency', header: 'Currency' },
         { key: 'fee', header: 'Fee' },
         { key: 'paid', header: 'Paid' },
         { key: 'refundDue', header: 'Refund due' },
         { key: 'refunded', header: 'Refunded' },
-        { key: 'refundedAt', header: 'Refunded at (UTC)' },
+        { key: 'refundedAt', header: `Refunded (${show.timeZone})` },
         { key: 'refundRef', header: 'Refund reference' },
         { key: 'attention', header: 'Payment needs attention' },
-        { key: 'checkedInAt', header: 'Checked in at (UTC)' },
+        { key: 'checkedInAt', header: `Checked in (${show.timeZone})` },
         { key: 'waitingPlace', header: 'Waiting-list place' },
         { key: 'vin', header: 'VIN' },
         { key: 'plate', header: 'Plate' },

@@ -7,7 +7,7 @@ import { User } from '../../models/user';
 import { attachPaymentIssues } from './payment-issues';
 
 const includes = [
-  { model: Build, as: 'build', attributes: ['id', 'title', 'code', 'vin', 'plate', 'ownerPhone', 'ownerAddress'] },
+  { model: Build, as: 'build', attributes: ['id', 'title', 'code', 'modelYear', 'bodyOrigin', 'vin', 'plate', 'ownerPhone', 'ownerAddress'] },
   { model: EventClass, as: 'eventClass', attributes: ['id', 'name', 'position'] },
   { model: User, as: 'owner', attributes: ['id', 'name', 'email'] },
 ];

@@ -1,6 +1,7 @@
 import { createElement } from 'react';
 import { renderToBuffer } from '@react-pdf/renderer';
 import { formatInZone } from '@shared/calc/time-zone';
+import { ownerCreditWords } from '@shared/schemas/owner-credit';
 import { ordinal, placeWords, totalShown, type PrintPaper, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
 import { registerCardFonts } from '@templates/cards/fonts';
 import type { CertificateContent, PrintLine, PrintShow, ResultsSheetContent } from '@templates/certificates/content';
@@ -18,7 +19,8 @@ const printShow = (event: ShowFacts): PrintShow => ({
   venue: event.venueName,
 });
 
-const printLine = (l: SnapshotLine): PrintLine => ({ place: placeWords(l.place, l.shared), number: l.number, title: l.title, total: totalShown(l.total), note: l.decidedBy === 'score' ? '' : l.decidedBy });
+const ownerWords = (l: SnapshotLine) => (l.owner ? ownerCreditWords(l.owner) : '');
+const printLine = (l: SnapshotLine): PrintLine => ({ place: placeWords(l.place, l.shared), number: l.number, title: l.title, owner: ownerWords(l), total: totalShown(l.total), note: l.decidedBy === 'score' ? '' : l.decidedBy });
 
 function rulesNote(r: ResultsSnapshot['rules']): string {
   return [
@@ -40,6 +42,7 @@ export async function renderResultsSheet(event: ShowFacts, snapshot: ResultsSnap
     publishedOn: formatInZone(snapshot.publishedAt, event.timeZone, { day: 'numeric', month: 'long', year: 'numeric' }),
     rulesNote: rulesNote(snapshot.rules),
     bestOfShow: snapshot.bestOfShow.map(printLine),
+    peoplesChoice: (snapshot.peoplesChoice?.winners ?? []).map((l) => ({ ...printLine(l), place: placeWords(1, l.shared), total: String(l.total), note: 'visitors’ votes' })),
     classes: snapshot.classes.map((c) => ({ name: c.className, placings: c.placings.map(printLine), none: c.placings.length ? null : 'No car of this class was scored.' })),
   };
   return pdf(createElement(ResultsSheetDocument, { content, paper }));
@@ -59,6 +62,7 @@ export async function renderCertificates(event: ShowFacts, snapshot: ResultsSnap
       shared: w.shared,
       number: w.number,
       title: w.title,
+      owner: ownerWords(w),
       total: a.kind === 'peoples-choice' ? w.decidedBy : totalShown(w.total),
       totalLabel: a.kind === 'peoples-choice' ? 'VISITORS’ VOTES' : 'JUDGED TOTAL',
     })),

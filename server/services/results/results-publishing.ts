@@ -12,7 +12,7 @@ export async function buildSnapshot(eventId: number, transaction?: Transaction):
   const criterionName = new Map(criteria.map((c) => [c.id, c.name]));
   const line = (r: RankedEntry): SnapshotLine => {
     const car = cars.get(r.entryId) as ResultCar;
-    return { entryId: r.entryId, number: car.number, title: car.title, code: car.code, classId: car.classId, className: car.className, place: r.place, shared: r.shared, total: r.total, decidedBy: decidedByWords(r.decidedBy, (id) => criterionName.get(id)) };
+    return { entryId: r.entryId, number: car.number, title: car.title, code: car.code, classId: car.classId, className: car.className, place: r.place, shared: r.shared, total: r.total, decidedBy: decidedByWords(r.decidedBy, (id) => criterionName.get(id)), owner: car.owner };
   };
   const classOrder = [...new Map(entries.map((e) => [e.classId, e.eventClass?.position ?? 0]))].sort((a, b) => a[1] - b[1] || a[0] - b[0]).map(([id]) => id);
   const ranked = new Map<number, RankedEntry>();
@@ -51,7 +51,7 @@ async function peoplesChoiceOf(eventId: number, cars: Map<number, ResultCar>, tr
   const { entryIds, votes } = await peoplesChoiceResult(eventId, transaction);
   const winners = entryIds.flatMap((id) => {
     const car = cars.get(id);
-    return car ? [{ entryId: id, number: car.number, title: car.title, code: car.code, classId: car.classId, className: car.className, place: 1, shared: entryIds.length > 1, total: votes, decidedBy: `${votes} ${votes === 1 ? 'vote' : 'votes'}` }] : [];
+    return car ? [{ entryId: id, number: car.number, title: car.title, code: car.code, classId: car.classId, className: car.className, place: 1, shared: entryIds.length > 1, total: votes, decidedBy: `${votes} ${votes === 1 ? 'vote' : 'votes'}`, owner: car.owner }] : [];
   });
   return winners.length ? { votes, winners } : null;
 }

@@ -236,10 +236,36 @@ describe('CSV export', () => {
     const bytes = res.body as Buffer;
     expect([...bytes.subarray(0, 3)]).toEqual([0xef, 0xbb, 0xbf]);
     const lines = bytes.subarray(3).toString('utf8').trim().split('\n');
-    expect(lines[0]).toBe('Number,Build,Card code,Entrant,E-mail,Phone,Class,Status,Payment,Currency,Fee,Paid,Refund due,Refunded,Refunded at (UTC),Refund reference,Payment needs attention,Checked in at (UTC),Waiting-list place,VIN,Plate');
+    expect(lines[0]).toBe('Number,Build,Card code,Year,Make and model,Entrant,E-mail,Phone,Class,Status,Payment,Entered (Europe/Berlin),Payment method,Payment note,Payment reference,Currency,Fee,Paid,Refund due,Refunded,Refunded (Europe/Berlin),Refund reference,Payment needs attention,Checked in (Europe/Berlin),Waiting-list place,VIN,Plate');
     expect(lines[1]).toMatch(/^1,"'=HYPERLINK\(""http:\/\/x\.test"",""click""\)",/);
-    expect(lines[1]).toContain(`,${a.owner.email},'+1 555 0199,Hot rods,Confirmed,Paid,EUR,25,25,,`);
+    expect(lines[1]).toContain(`,${a.owner.email},'+1 555 0199,Hot rods,Confirmed,Paid,`);
+    expect(lines[1]).toContain(',Online,,ref-a,EUR,25,25,,');
     expect(lines[2]).toMatch(/^2,"Coupé ""Brûlé"", 1932",/);
     expect(lines[3]).toMatch(/^3,'@SUM\(A1\),/);
+  });
+
+  it('gives the build’s year, make and model, when each entry came in, how it was paid with the note and reference, and check-in in the show’s time zone', async () => {
+    const { organiser, eventId, classIds } = await showWithClasses({ classes: [{ name: 'Hot rods' }] });
+    const a = await enter(eventId, classIds[0]!, 'Tudor sedan');
+    await a.owner.build.update({ modelYear: 1937, bodyOrigin: 'Two-door steel sedan body' });
+    expect((await organiser.client.post(`/api/entries/${a.entry.id}/mark-paid`, { note: 'Cash at the club night' })).status).toBe(200);
+    // Checked in at 08:05 UTC on a summer morning: 10:05 in Berlin, the show's zone.
+    await Entry.update({ status: 'checked_in', checkedInAt: new Date('2026-06-13T08:05:00Z'), createdAt: new Date('2026-05-02T21:30:00Z') }, { where: { id: a.entry.id }, silent: true });
+    const res = await organiser.client.get(`/api/events/${eventId}/entries.csv`).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    // One cell per comma outside quotes; a quoted cell loses its quotes and "" becomes ".
+    const cells = (line: string) => [...line.matchAll(/(?:^|,)("(?:[^"]|"")*"|[^,]*)/g)].map((m) => m[1]!.replace(/^"|"$/g, '').replace(/""/g, '"'));
+    const [header, row] = (res.body as Buffer).subarray(3).toString('utf8').trim().split('\n').map(cells);
+    const cell = (name: string) => row![header!.indexOf(name)];
+    expect(cell('Year')).toBe('1937');
+    expect(cell('Make and model')).toBe('Two-door steel sedan body');
+    expect(cell('Entered (Europe/Berlin)')).toBe('2026-05-02 23:30');
+    expect(cell('Payment method')).toBe('By hand (cash, transfer)');
+    expect(cell('Payment note')).toBe('Cash at the club night');
+    expect(cell('Payment reference')).toMatch(/^manual:/);
+    expect(cell('Checked in (Europe/Berlin)')).toBe('2026-06-13 10:05');
   });
 });

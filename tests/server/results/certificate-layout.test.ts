@@ -2,12 +2,15 @@ import { describe, expect, it } from 'vitest';
 import { DEFAULT_RESULT_RULES } from '@shared/schemas/judging';
 import { PRINT_PAPERS, type ResultsSnapshot } from '@shared/schemas/results';
 import { TITLE_MAX } from '@shared/schemas/build';
+import { CLUB_MAX_LENGTH, HOMETOWN_MAX_LENGTH, NAME_MAX_LENGTH } from '@shared/constants';
 import { renderCertificates, renderResultsSheet } from '@server/services/results/result-pdfs';
 import { inside, overlaps, readCardLayouts } from '../../support/pdf';
 
 const longest = 'W'.repeat(12) + ' Long-roof custom wagon with a chopped top and a hand-formed aluminium grille and a name that runs on'.padEnd(TITLE_MAX - 12, ' x').slice(0, TITLE_MAX - 12);
 const className = 'Pickups, panel vans, wagons and everything with a tailgate (any year)';
-const line = (entryId: number, place: number, title: string, shared = false) => ({ entryId, number: 1000 + entryId, title, code: `c${entryId}`, classId: 1, className, place, shared, total: 123.456, decidedBy: 'score' });
+// The owner's credit at its longest: name, hometown and club each at the account's limit, in short words.
+const owner = { name: 'Maximiliana '.padEnd(NAME_MAX_LENGTH, ' Xu'), hometown: 'Upper '.padEnd(HOMETOWN_MAX_LENGTH, ' Wy'), club: 'Society of '.padEnd(CLUB_MAX_LENGTH, ' Mz') };
+const line = (entryId: number, place: number, title: string, shared = false) => ({ entryId, number: 1000 + entryId, title, code: `c${entryId}`, classId: 1, className, place, shared, total: 123.456, decidedBy: 'score', owner });
 const snapshot: ResultsSnapshot = {
   publishedAt: '2026-10-18T16:30:00Z',
   rules: DEFAULT_RESULT_RULES,
@@ -22,7 +25,7 @@ const MARGIN = 36;
 
 describe('certificates and the results sheet at their longest', () => {
   for (const paper of PRINT_PAPERS) {
-    it(`keep every line inside the margins and apart on ${paper}, with a ${TITLE_MAX}-character title and a shared place`, async () => {
+    it(`keep every line inside the margins and apart on ${paper}, with a ${TITLE_MAX}-character title, the longest owner credit and a shared place`, async () => {
       for (const pdf of [await renderCertificates(event, snapshot, paper), await renderResultsSheet(event, snapshot, paper)]) {
         const pages = await readCardLayouts(pdf);
         for (const page of pages) {

@@ -3,6 +3,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { AccountUpdateSchema, PasswordChangeSchema, type AccountUpdateInput, type CurrentUser, type PasswordChangeInput } from '@shared/schemas/user';
 import { PASSWORD_MIN_LENGTH } from '@shared/constants';
+import { OWNER_PUBLIC_WORDS as ownerWords } from '@shared/schemas/owner-credit';
 import { useSession } from '@client/features/session/api/get-session';
 import { useUpdateAccount } from '../api/update-account';
 import { useChangePassword } from '../api/change-password';
@@ -18,20 +19,22 @@ function ProfileForm({ user }: { user: CurrentUser }) {
   const [formError, setFormError] = useState('');
   const { register, handleSubmit, setError, formState: { errors, isDirty }, reset } = useForm<AccountUpdateInput>({
     resolver: zodResolver(AccountUpdateSchema),
-    defaultValues: { name: user.name },
+    defaultValues: { name: user.name, hometown: user.hometown, club: user.club },
   });
   const onSubmit = handleSubmit((input) => {
     setFormError('');
     update.mutate(input, {
-      onSuccess: ({ user: saved }) => reset({ name: saved.name }),
-      onError: (err) => setFormError(applyServerErrors(err, setError, ['name'])),
+      onSuccess: ({ user: saved }) => reset({ name: saved.name, hometown: saved.hometown, club: saved.club }),
+      onError: (err) => setFormError(applyServerErrors(err, setError, ['name', 'hometown', 'club'])),
     });
   });
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       {formError ? <Notice tone="danger">{formError}</Notice> : null}
       {update.isSuccess && !isDirty ? <Notice tone="ok">Saved.</Notice> : null}
-      <TextField label="Your name" autoComplete="name" {...register('name')} error={errors.name?.message} />
+      <TextField label="Your name" autoComplete="name" {...register('name')} error={errors.name?.message} hint={ownerWords.name} />
+      <TextField label="Hometown (optional)" autoComplete="address-level2" {...register('hometown')} error={errors.hometown?.message} hint={ownerWords.hometown} />
+      <TextField label="Club (optional)" autoComplete="off" {...register('club')} error={errors.club?.message} hint={ownerWords.club} />
       <p className="text-sm text-graphite">E-mail: {user.email} (private: never shown on a public page or card)</p>
       <Button type="submit" busy={update.isPending} disabled={!isDirty} className="self-start">
         Save

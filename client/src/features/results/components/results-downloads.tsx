@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { Link } from 'react-router-dom';
 import { PRINT_PAPERS, PRINT_PAPER_LABELS, type PrintPaper } from '@shared/schemas/results';
 import { SelectField } from '@client/components/ui/select-field';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
@@ -25,6 +26,9 @@ export function ResultsDownloads({ eventId, paper: savedPaper }: { eventId: numb
         <a className={linkStyle} href={`${base}/scores.csv`} download>
           Every score (CSV)
         </a>
+        <Link className={linkStyle} to={`/shows/${eventId}/read-out`}>
+          Announcer’s read-out
+        </Link>
       </div>
       {awards.isPending ? <LoadingState /> : awards.error ? <ErrorState error={awards.error} /> : (
         <ul className="divide-y divide-rule">

@@ -12,6 +12,7 @@ import { EmptyState, ErrorState, LoadingState } from '@client/components/ui/stat
 import { Button } from '@client/components/ui/button';
 import { EntryDetail } from './entry-detail';
 import { NumberedCardsPanel } from './numbered-cards-panel';
+import { MoneyTotalsPanel } from './money-totals-panel';
 
 const column = createColumnHelper<EntryTableRow>();
 const PAGE_SIZE = 50;
@@ -93,6 +94,7 @@ export function EntriesPage() {
         Every entry with its payment and arrival. Open a build to change its class, mark it paid, move it up or withdraw it; each change is kept in its history.{' '}
         <Link className="underline" to={`/shows/${eventId}/gate`}>Gate</Link>
       </PageHeader>
+      <MoneyTotalsPanel eventId={eventId} />
       {show.data ? <NumberedCardsPanel eventId={eventId} classes={show.data.classes} /> : null}
       <div className="mb-4 flex flex-wrap items-end gap-3">
         <label className="flex flex-col gap-1">

@@ -2,6 +2,8 @@ import { Fragment, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { ASKABLE_PRIVATE_FIELD_LABELS, ASKABLE_PRIVATE_FIELDS, ENTRY_STATUS_LABELS } from '@shared/constants';
+import { auditChangeWords, auditTimeWords } from '@shared/audit-words';
+import { formatInZone } from '@shared/calc/time-zone';
 import { formatMoney } from '@shared/calc/money';
 import { waitingListWords } from '@shared/words';
 import type { EventClass } from '@shared/schemas/show-classes';
@@ -15,17 +17,6 @@ import { useWithdrawListedEntry } from '../api/withdraw-listed-entry';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/notice';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
-
-/** before → after, field by field, in words a person reads. */
-function changeText(before: unknown, after: unknown): string {
-  const b = (before ?? {}) as Record<string, unknown>;
-  const a = (after ?? {}) as Record<string, unknown>;
-  const show = (k: string, v: unknown) => (k === 'status' && typeof v === 'string' && v in ENTRY_STATUS_LABELS ? ENTRY_STATUS_LABELS[v as keyof typeof ENTRY_STATUS_LABELS] : v === null || v === undefined ? '—' : String(v));
-  return Object.keys(a)
-    .filter((k) => !k.endsWith('Id') && k !== 'paymentRef')
-    .map((k) => (k in b ? `${k}: ${show(k, b[k])} → ${show(k, a[k])}` : `${k}: ${show(k, a[k])}`))
-    .join('; ');
-}
 
 /** Moves the entry to another class of the show; the button wakes only when another class is picked. */
 function ChangeClassForm({ eventId, row, classes, onError }: { eventId: number; row: EntryTableRow; classes: EventClass[]; onError: (message: string) => void }) {
@@ -74,6 +65,8 @@ function MarkPaidForm({ eventId, row, onError }: { eventId: number; row: EntryTa
 type Question = { title: string; text: string; confirmLabel: string; danger: boolean; act: () => void };
 
 export function EntryDetail({ eventId, row, classes, timeZone, onClose }: { eventId: number; row: EntryTableRow; classes: EventClass[]; timeZone: string; onClose: () => void }) {
+  // Dates read in the show's time zone, the same for every organiser wherever their browser is.
+  const day = (iso: string) => formatInZone(iso, timeZone, { day: 'numeric', month: 'short', year: 'numeric' });
   const moveUp = useMoveEntryUp(eventId);
   const withdraw = useWithdrawListedEntry(eventId);
   const audit = useEntryAudit(row.id);
@@ -116,13 +109,13 @@ export function EntryDetail({ eventId, row, classes, timeZone, onClose }: { even
         {row.refund ? (
           <>
             <dt className="text-graphite">Refund</dt>
-            <dd>{formatMoney(row.refund.amount, row.currency)} sent on {new Date(row.refund.at).toLocaleDateString()} (ref. {row.refund.ref}). It cannot be sent twice.</dd>
+            <dd>{formatMoney(row.refund.amount, row.currency)} sent on {day(row.refund.at)} (ref. {row.refund.ref}). It cannot be sent twice.</dd>
           </>
         ) : null}
         {row.paymentIssues.map((i) => (
           <Fragment key={i.id}>
             <dt className="font-semibold text-danger">Check payment</dt>
-            <dd>{PAYMENT_ISSUE_LABELS[i.reason]}: {formatMoney(i.amount, i.currency)} on {new Date(i.at).toLocaleDateString()}{i.refund ? `, refunded (ref. ${i.refund.ref})` : ''}.</dd>
+            <dd>{PAYMENT_ISSUE_LABELS[i.reason]}: {formatMoney(i.amount, i.currency)} on {day(i.at)}{i.refund ? `, refunded (ref. ${i.refund.ref})` : ''}.</dd>
           </Fragment>
         ))}
       </dl>
@@ -142,8 +135,8 @@ export function EntryDetail({ eventId, row, classes, timeZone, onClose }: { even
       <ol className="mt-2 space-y-2 text-sm" aria-label="History">
         {audit.data?.map((line) => (
           <li key={line.id} className="border-b border-rule pb-2">
-            <span className="font-semibold">{auditActionLabel(line.action)}</span> · {line.who ?? 'Placard'} · <time dateTime={line.at}>{new Date(line.at).toLocaleString()}</time>
-            <div className="text-graphite">{changeText(line.before, line.after)}</div>
+            <span className="font-semibold">{auditActionLabel(line.action)}</span> · {line.who ?? 'Placard'} · <time dateTime={line.at}>{auditTimeWords(line.at, timeZone)}</time>
+            <div className="text-graphite">{auditChangeWords(line.before, line.after, { currency: row.currency, timeZone }).join('; ')}</div>
           </li>
         ))}
       </ol>

@@ -53,7 +53,7 @@ export function JudgingSheetPanel({ show }: { show: EventDetail }) {
 function SheetEditor({ show }: { show: EventDetail }) {
   const save = useSaveJudgingSheet(show.id);
   const [formError, setFormError] = useState('');
-  const { register, control, handleSubmit, reset, setError, formState: { errors } } = useForm<SheetValues, unknown, JudgingSheetInput>({ resolver: sheetResolver, defaultValues: { criteria: toRows(show) } });
+  const { register, control, handleSubmit, reset, setError, formState: { errors, isDirty } } = useForm<SheetValues, unknown, JudgingSheetInput>({ resolver: sheetResolver, defaultValues: { criteria: toRows(show) } });
   const rows = useFieldArray({ control, name: 'criteria' });
   const submit = handleSubmit((input) => {
     setFormError('');
@@ -70,8 +70,10 @@ function SheetEditor({ show }: { show: EventDetail }) {
       <form onSubmit={submit} noValidate>
       <ol className="flex flex-col gap-3">
         {rows.fields.map((field, i) => (
-          <li key={field.id} className="grid gap-2 border-b border-rule pb-3 sm:grid-cols-[2fr_1fr_1fr_1fr_auto] sm:items-end">
-            <TextField label={`Criterion ${i + 1}`} {...register(`criteria.${i}.name`)} error={rowError(i, 'name')} />
+          // The name has its own line and the number columns may shrink (minmax(0, …)), so the row's Remove
+          // stays inside the panel however narrow it is: inputs alone would push the last column out.
+          <li key={field.id} className="grid grid-cols-[minmax(0,1fr)_minmax(0,1fr)_minmax(0,1fr)_auto] items-end gap-2 border-b border-rule pb-3">
+            <TextField label={`Criterion ${i + 1}`} className="col-span-4" {...register(`criteria.${i}.name`)} error={rowError(i, 'name')} />
             <TextField label="Points" inputMode="numeric" {...register(`criteria.${i}.maxPoints`)} error={rowError(i, 'maxPoints')} />
             <TextField label="Weight" inputMode="decimal" {...register(`criteria.${i}.weight`)} error={rowError(i, 'weight')} />
             <TextField label="Tie-break place" inputMode="numeric" {...register(`criteria.${i}.tieBreakOrder`)} error={rowError(i, 'tieBreakOrder')} />
@@ -90,7 +92,7 @@ function SheetEditor({ show }: { show: EventDetail }) {
         </Button>
       </div>
       </form>
-      {save.isSuccess ? <Notice tone="ok">Saved.</Notice> : null}
+      {save.isSuccess && !isDirty ? <Notice tone="ok">Saved.</Notice> : null}
       {errors.criteria?.message ? <Notice tone="danger">{errors.criteria.message}</Notice> : null}
       {formError ? <Notice tone="danger">{formError}</Notice> : null}
     </Panel>

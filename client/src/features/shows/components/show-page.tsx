@@ -52,7 +52,8 @@ export function ShowPage() {
       {show.myRoles.includes('gate') || a.checkIn ? <GatePanel show={show} /> : null}
       {a.viewEntries ? <EntriesLinkPanel show={show} /> : null}
       <ClassesPanel show={show} />
-      <JudgingSheetPanel key={show.criteria.map((c) => c.id).join()} show={show} />
+      {/* Keyed by the show only: the editor resets itself from the saved sheet, and keeps its "Saved." */}
+      <JudgingSheetPanel key={show.id} show={show} />
       {a.manage ? <PeoplePanel show={show} /> : null}
       {a.manage ? <LogoPanel show={show} /> : null}
       {a.manage ? (
