@@ -85,11 +85,7 @@ export const JUDGED_ENTRY_STATUSES = ['checked_in'] as const;
 /** Entries holding a paid or free place that the gate has not checked in yet: the judge's list shows them as still expected. */
 export const EXPECTED_ENTRY_STATUSES = ['confirmed'] as const;
 
-/** Why a car that holds a place but has not arrived cannot be scored, in words the phone shows as they are. */
-export function notArrivedReason(numbers: number[]): string {
-  const cars = numbers.length === 1 ? `No. ${numbers[0]} has` : `Nos. ${numbers.join(', ')} have`;
-  return `${cars} not arrived: only cars the gate has checked in are judged, so this was not recorded.`;
-}
+export { notArrivedReason } from '../judging/arrival';
 
 // What leaves the server for the judge's phone and the organiser's progress screen.
 export type JudgeFigure = { label: string; metric: string; imperial: string; provenance: string };

@@ -66,7 +66,7 @@ export async function submitScores(eventId: number, judgeId: number, input: Scor
     const entryIds = [...new Set([...input.scores, ...input.notes].map((i) => i.entryId))];
     const found = await Entry.findAll({ where: { id: { [Op.in]: entryIds }, eventId }, transaction });
     const notArrived = found.filter((e) => (EXPECTED_ENTRY_STATUSES as readonly string[]).includes(e.status));
-    if (notArrived.length) throw new ConflictError(notArrivedReason(notArrived.map((e) => e.number as number)));
+    if (notArrived.length) throw new ConflictError(`${notArrivedReason(notArrived.map((e) => e.number as number))} Nothing in this send was recorded.`);
     const entries = new Map(found.filter((e) => (JUDGED_ENTRY_STATUSES as readonly string[]).includes(e.status)).map((e) => [e.id, e]));
     const classes = await classesOfJudge(eventId, judgeId, transaction);
 

@@ -21,7 +21,7 @@ describe('only cars that arrived are judged', () => {
     // A whole send is refused when it holds a car that has not arrived: nothing of it is recorded.
     const refused = await judge.client.post(`/api/events/${show.eventId}/scores`, { scores: [scoreItem(first!.id, show.criteria[0]!.id, 7), scoreItem(late!.id, show.criteria[0]!.id, 9)] });
     expect(refused.status).toBe(409);
-    expect(refused.body.error.message).toBe('No. 4 has not arrived: only cars the gate has checked in are judged, so this was not recorded.');
+    expect(refused.body.error.message).toBe('No. 4 has not arrived: only cars the gate has checked in are judged. Nothing in this send was recorded.');
     expect((await view()).scores).toEqual([]);
 
     // The car turns up after judging started: gate staff check it in and it joins the judge's list.
