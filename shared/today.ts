@@ -1,6 +1,6 @@
 // The organiser's "Today" dashboard: what to do next, from where the show is and what the day shows.
 
-export type TodayFigures = { status: string; arrived: number; expected: number; unpaid: number; sheetsLeft: number | null };
+export type TodayFigures = { status: string; arrived: number; expected: number; unpaid: number; sheets: { done: number; all: number } | null };
 
 /** The one next thing to do, in the organiser's words. */
 export function todayNextStep(f: TodayFigures): string {
@@ -10,7 +10,9 @@ export function todayNextStep(f: TodayFigures): string {
     return 'Every car is in: start judging.';
   }
   if (f.status === 'judging') {
-    if (f.sheetsLeft) return `${f.sheetsLeft} ${f.sheetsLeft === 1 ? 'sheet' : 'sheets'} still to finish. Late arrivals checked in at the gate join the judges’ lists.`;
+    if (!f.sheets || f.sheets.all === 0) return 'No judge has cars to score yet: give each judge their classes.';
+    const left = f.sheets.all - f.sheets.done;
+    if (left) return `${left} ${left === 1 ? 'sheet' : 'sheets'} still to finish. Late arrivals checked in at the gate join the judges’ lists.`;
     return 'Every sheet is finished: review the results and publish them.';
   }
   return '';

@@ -26,7 +26,7 @@ export function TodayPanel({ show }: { show: EventDetail }) {
       </dl>
       {ready ? (
         <p className="mt-4 border-l-4 border-signal bg-white px-3 py-2 font-semibold" aria-label="Next">
-          {todayNextStep({ status: show.status, arrived, expected, unpaid: unpaidCount, sheetsLeft: sheets ? sheets.all - sheets.done : null })}
+          {todayNextStep({ status: show.status, arrived, expected, unpaid: unpaidCount, sheets })}
         </p>
       ) : null}
       <p className="mt-3 flex flex-wrap gap-4">
