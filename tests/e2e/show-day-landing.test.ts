@@ -68,7 +68,7 @@ describe('each role lands on its day', () => {
     const todayBox = await today.boundingBox();
     const detailsBox = await organiserPage.locator('section', { has: organiserPage.getByRole('heading', { name: 'The show', exact: true }) }).boundingBox();
     expect(todayBox!.y).toBeLessThan(detailsBox!.y);
-    await keepScreenshot(organiserPage, 'show-day-organiser-today.png', { fullPage: true });
+    await keepScreenshot(organiserPage, 'show-day-organiser-today.png');
     await organiserPage.context().close();
 
     const admin = await createUser({ isSiteAdmin: true, name: 'Sam Siteadmin' });
