@@ -26,8 +26,8 @@ export const EVENT_ACTIONS = {
   open_gate: {
     from: ['registration_closed'],
     to: 'show_day',
-    label: 'Open the gate',
-    explains: 'Gate staff can check cars in. Entries stay closed.',
+    label: 'Start show day',
+    explains: 'Check-in begins: gate staff can check cars in. Entries stay closed.',
   },
   start_judging: {
     from: ['show_day'],

@@ -36,7 +36,7 @@ const NEEDS_NO_ROLE: ReadonlySet<EventAction> = new Set(['create', 'register']);
 /**
  * The may-organise flag creates a show; everything else follows the person's role in that show
  * only (an organiser of one show has no say in another, a site admin none in any). Gate staff
- * check in on show day; judges score and see their own sheets while the show is being judged
+ * check in on show day and, for late arrivals, while the show is judged; judges score and see their own sheets while the show is being judged
  * (whether it still takes scores is the scoring service's rule, so the phone gets the reason);
  * the organisers do the rest.
  */
@@ -61,7 +61,8 @@ export function canEvent(actor: Actor | null | undefined, action: EventAction, e
     case 'managePeoplesChoice':
       return organiser;
     case 'checkIn':
-      return (organiser || gate) && event.status === 'show_day';
+      // Judging does not close the gate: a late arrival checked in then joins the judges' lists.
+      return (organiser || gate) && (event.status === 'show_day' || event.status === 'judging');
     case 'score':
       return judge;
     case 'viewOwnSheets':

@@ -25,12 +25,13 @@ export function presentJudgeCar(entry: Entry, build: Build): JudgeCar {
   };
 }
 
-export function presentJudgeView(data: { event: Event; criteria: Criterion[]; cars: Array<{ entry: Entry; build: Build }>; scores: Score[]; notes: SheetNote[] }, closedReason: string | null): JudgeView {
+export function presentJudgeView(data: { event: Event; criteria: Criterion[]; cars: Array<{ entry: Entry; build: Build }>; expected: Array<{ entry: Entry; title: string }>; scores: Score[]; notes: SheetNote[] }, closedReason: string | null): JudgeView {
   const { event } = data;
   return {
     event: { id: event.id, name: event.name, slug: event.slug, status: event.status, judgingOpen: closedReason === null, closedReason },
     criteria: data.criteria.map((c) => ({ id: c.id, name: c.name, maxPoints: c.maxPoints, weight: Number(c.weight), position: c.position })),
     cars: data.cars.map(({ entry, build }) => presentJudgeCar(entry, build)),
+    expected: data.expected.map(({ entry, title }) => ({ entryId: entry.id, number: entry.number as number, className: entry.eventClass?.name ?? '', title })),
     scores: data.scores.map((s) => ({ entryId: s.entryId, criterionId: s.criterionId, points: s.points, comment: s.comment, deviceTime: s.deviceTime.toISOString(), clientId: s.clientId, deviceId: s.deviceId })),
     notes: data.notes.map((n) => ({ entryId: n.entryId, comment: n.comment, deviceTime: n.deviceTime.toISOString(), clientId: n.clientId, deviceId: n.deviceId })),
   };

@@ -1,6 +1,6 @@
 import type { RankedEntry, ShowResults } from '@shared/calc/results';
 import type { ResultLine, ResultsReview } from '@shared/schemas/judging';
-import { decidedByWords, totalShown, type Award, type OwnResults, type AwardView, type ManualTieBreakView, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
+import { decidedByWords, totalShown, type Award, type OwnResults, type AwardView, type ManualTieBreakView, type ResultsSnapshot, type SnapshotLine, type PublishWarning } from '@shared/schemas/results';
 import type { ManualTieBreak } from '../models/manual-tie-break';
 import type { ShowResultRules } from '@shared/schemas/judging';
 import type { ReadOut } from '@shared/schemas/read-out';
@@ -54,12 +54,14 @@ export function presentResultsReviewReply(r: {
   tieBreaks: Array<{ row: ManualTieBreak; by: string }>;
   published: ResultsSnapshot | null;
   rules: ShowResultRules;
+  warnings: PublishWarning[];
 }) {
   return {
     review: r.published ? presentPublishedReview(r.published) : presentResultsReview(r.results, r.cars, r.criteria, r.classNames),
     tieBreaks: r.tieBreaks.map((t) => presentTieBreak(t.row, t.by, r.cars)),
     rules: r.rules,
     published: r.published !== null,
+    warnings: r.warnings.map((w): PublishWarning => ({ kind: w.kind, cars: w.cars.map((c) => ({ entryId: c.entryId, number: c.number, title: c.title, className: c.className })) })),
   };
 }
 

@@ -53,9 +53,9 @@ eventsRouter.patch('/events/:id', async (req, res) => {
 });
 
 eventsRouter.post('/events/:id/lifecycle', async (req, res) => {
-  const { action } = parseBody(req, LifecycleActionSchema);
+  const { action, acknowledgeWarnings } = parseBody(req, LifecycleActionSchema);
   const { event } = await loadEventFor(req, 'manage');
-  await takeLifecycleStep(event.id, currentUser(req), action as LifecycleAction);
+  await takeLifecycleStep(event.id, currentUser(req), action as LifecycleAction, { acknowledgeWarnings });
   await respondWithEvent(req, res, event.id);
 });
 

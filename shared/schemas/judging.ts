@@ -80,8 +80,12 @@ export const ScoreSubmitResultSchema = z.object({ applied: z.array(z.object({ cl
 export type ScoreApplied = z.infer<typeof ScoreSubmitResultSchema>['applied'][number];
 
 
-/** Entries that are judged: those holding a paid or free place (checked in or not); waiting, unpaid and withdrawn ones are not. */
-export const JUDGED_ENTRY_STATUSES = ['confirmed', 'checked_in'] as const;
+/** Entries that are judged: only cars the gate checked in. A car that never arrived is neither scored nor ranked. */
+export const JUDGED_ENTRY_STATUSES = ['checked_in'] as const;
+/** Entries holding a paid or free place that the gate has not checked in yet: the judge's list shows them as still expected. */
+export const EXPECTED_ENTRY_STATUSES = ['confirmed'] as const;
+
+export { notArrivedReason } from '../judging/arrival';
 
 // What leaves the server for the judge's phone and the organiser's progress screen.
 export type JudgeFigure = { label: string; metric: string; imperial: string; provenance: string };
@@ -95,13 +99,17 @@ export type JudgeCar = {
   cover: { url: string; width: number; height: number } | null;
   figures: JudgeFigure[];
 };
+export type ExpectedCar = { entryId: number; number: number; className: string; title: string };
 /** `deviceId`: the phone the stored value came from, so a phone can tell a value another phone of the judge replaced. */
 export type MyScore = { entryId: number; criterionId: number; points: number; comment: string; deviceTime: string; clientId: string; deviceId: string | null };
 export type MyNote = { entryId: number; comment: string; deviceTime: string; clientId: string; deviceId: string | null };
 export type JudgeView = {
   event: { id: number; name: string; slug: string; status: string; judgingOpen: boolean; closedReason: string | null };
   criteria: Array<{ id: number; name: string; maxPoints: number; weight: number; position: number }>;
+  /** The cars that arrived: the ones the judge scores. */
   cars: JudgeCar[];
+  /** The judge's cars the gate has not checked in yet: listed so the judge knows they may still come, never scored. */
+  expected: ExpectedCar[];
   scores: MyScore[];
   notes: MyNote[];
 };

@@ -141,3 +141,26 @@ export function decidedByWords(decidedBy: { kind: 'score' } | { kind: 'criterion
 
 /** An award as the organiser's screen lists it, to print its certificate. */
 export type AwardView = { key: string; name: string; winners: Array<{ number: number; title: string; shared: boolean }> };
+
+/**
+ * What the organiser is warned of before publishing: cars that were scored but never arrived (their
+ * scores count for nothing), and cars that arrived with no finished sheet (they get no place).
+ * Publishing with any of these needs `acknowledgeWarnings: true`.
+ */
+export const PUBLISH_WARNING_KINDS = ['scored_not_arrived', 'no_finished_sheet'] as const;
+export type PublishWarningKind = (typeof PUBLISH_WARNING_KINDS)[number];
+export type PublishWarningCar = { entryId: number; number: number; title: string; className: string };
+export type PublishWarning = { kind: PublishWarningKind; cars: PublishWarningCar[] };
+
+const carList = (cars: PublishWarningCar[]) => cars.map((c) => `No. ${c.number}`).join(', ');
+const carCount = (n: number) => (n === 1 ? 'One car' : `${n} cars`);
+
+/** The warning in the organiser's words: what happened and what publishing does about it. */
+export function publishWarningWords(w: PublishWarning): string {
+  const n = w.cars.length;
+  if (w.kind === 'scored_not_arrived') return `${carCount(n)} scored but never checked in at the gate (${carList(w.cars)}): ${n === 1 ? 'its' : 'their'} scores are left out and ${n === 1 ? 'it gets' : 'they get'} no place.`;
+  return `${carCount(n)} arrived with no finished sheet (${carList(w.cars)}): ${n === 1 ? 'it gets' : 'they get'} no place unless a judge finishes a sheet first.`;
+}
+
+/** The refusal when warnings stand and the organiser has not said to publish anyway. */
+export const UNACKNOWLEDGED_WARNINGS_MESSAGE = 'Look at the warnings in the results review first, then publish anyway if they are as they should be.';

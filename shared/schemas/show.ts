@@ -102,7 +102,8 @@ export const EventUpdateSchema = z.object({
 }).partial();
 export type EventUpdateInput = z.infer<typeof EventUpdateSchema>;
 
-export const LifecycleActionSchema = z.object({ action: z.enum(EVENT_ACTION_NAMES as [string, ...string[]], { error: 'Unknown step.' }) });
+/** `acknowledgeWarnings`: publishing results while the review warns of something (the organiser saw the warnings). */
+export const LifecycleActionSchema = z.object({ action: z.enum(EVENT_ACTION_NAMES as [string, ...string[]], { error: 'Unknown step.' }), acknowledgeWarnings: z.boolean().optional() });
 export type LifecycleActionInput = z.infer<typeof LifecycleActionSchema>;
 
 export const EventListQuerySchema = z.object({ open: z.enum(['1']).optional() });

@@ -11,6 +11,7 @@ const view = (points: number, clientId: string, deviceId: string): JudgeView => 
   event: { id: 1, name: 'Show', slug: 'show', status: 'judging', judgingOpen: true, closedReason: null },
   criteria: [{ id: 7, name: 'Paint', maxPoints: 10, weight: 1, position: 0 }],
   cars: [],
+  expected: [],
   scores: [{ entryId: 3, criterionId: 7, points, comment: '', deviceTime: new Date().toISOString(), clientId, deviceId }],
   notes: [],
 });

@@ -6,7 +6,8 @@ import { DEFAULT_PASSWORD } from './factories';
 export type WalkedShow = { id: number; slug: string };
 
 /** What a walk found: every screen reached (by its path) and anything that broke on the way. */
-export type Walk = { reached: string[]; problems: string[] };
+/** `landedOn`: where sign-in with no `next` took the person (each role lands on its day). */
+export type Walk = { landedOn: string; reached: string[]; problems: string[] };
 
 /** The in-app links of the show side that a walk follows (files, the public pages and sign-out are left alone). */
 const SHOW_SIDE = /^\/(shows|judge|entries|enter|invitations)(\/|$)/;
@@ -71,7 +72,10 @@ export async function walkShowSide(page: Page, baseUrl: string, email: string, o
   await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-  await page.locator('nav').getByRole('link', { name: 'Shows', exact: true }).click();
+  const landedOn = new URL(page.url()).pathname;
+  // The judge's phone screens have no site menu: from there the walk opens the shows by address.
+  if (landedOn.startsWith('/judge')) await page.goto(`${baseUrl}/shows`);
+  else await page.locator('nav').getByRole('link', { name: 'Shows', exact: true }).click();
   await page.waitForURL(`${baseUrl}/shows`);
 
   const check = async (where: string) => {
@@ -97,5 +101,5 @@ export async function walkShowSide(page: Page, baseUrl: string, email: string, o
     }
   };
   await visit('/shows', 0);
-  return { reached, problems };
+  return { landedOn, reached, problems };
 }

@@ -36,9 +36,10 @@ export async function quickJudgeOf(eventId: number, name: string) {
 
 /**
  * A free show being judged: two classes, the three-line sheet above, `carsPerClass` confirmed
- * entries in each class (numbers in class order), and no judges yet.
+ * entries in each class (numbers in class order), and no judges yet. Every car is checked in at the
+ * gate before judging starts (only cars that arrived are judged), except the last `notArrived` cars.
  */
-export async function showInJudging(opts: { carsPerClass?: number } = {}) {
+export async function showInJudging(opts: { carsPerClass?: number; notArrived?: number } = {}) {
   const show = await showWithClasses({ settings: { entryFee: 0 } });
   const { organiser, eventId, classIds } = show;
   expect((await organiser.client.put(`/api/events/${eventId}/criteria`, { criteria: SHEET })).status).toBe(200);
@@ -52,13 +53,23 @@ export async function showInJudging(opts: { carsPerClass?: number } = {}) {
       entries.push({ id: res.body.entry.id, number: res.body.entry.number, classId });
     }
   }
-  for (const action of ['close_registration', 'open_gate', 'start_judging']) {
+  const step = async (action: string) => {
     const res = await organiser.client.post(`/api/events/${eventId}/lifecycle`, { action });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
-  }
+  };
+  await step('close_registration');
+  await step('open_gate');
+  for (const entry of entries.slice(0, entries.length - (opts.notArrived ?? 0))) await checkIn(organiser.client, eventId, entry.number);
+  await step('start_judging');
   const detail = (await organiser.client.get(`/api/events/${eventId}`)).body.event;
   const criteria = detail.criteria as Array<{ id: number; name: string; maxPoints: number }>;
   return { ...show, owner, entries, criteria };
+}
+
+/** The gate checks a car in by its number, as gate staff or an organiser would. */
+export async function checkIn(client: Awaited<ReturnType<typeof apiClient>>, eventId: number, number: number) {
+  const res = await client.post(`/api/events/${eventId}/gate/check-in`, { number, takeCash: false });
+  expect(res.status, JSON.stringify(res.body)).toBe(200);
 }
 
 export type ShowInJudging = Awaited<ReturnType<typeof showInJudging>>;

@@ -1,7 +1,7 @@
 import { expect } from 'vitest';
 import { EventMembership } from '@server/models/event-membership';
 import { ownerWithBuild, showWithClasses, signedIn, type Owner } from './event-factory';
-import { SHEET, scoreItem } from './judging-factory';
+import { SHEET, checkIn, scoreItem } from './judging-factory';
 
 /**
  * A free show in judging with two classes and a car per owner (so each entrant has their own mailbox):
@@ -21,7 +21,12 @@ export async function judgedShow(cars: { hotRods: string[]; customs: string[] },
       entries.push({ id: res.body.entry.id, number: res.body.entry.number, classId: classIds[i]!, title, code: owner.build.code, owner });
     }
   }
-  for (const action of ['close_registration', 'open_gate', 'start_judging']) expect((await organiser.client.post(`/api/events/${eventId}/lifecycle`, { action })).status).toBe(200);
+  const step = async (action: string) => expect((await organiser.client.post(`/api/events/${eventId}/lifecycle`, { action })).status).toBe(200);
+  await step('close_registration');
+  await step('open_gate');
+  // Only cars that arrived are judged: every car is checked in before judging starts.
+  for (const entry of entries) await checkIn(organiser.client, eventId, entry.number);
+  await step('start_judging');
   const criteria = (await organiser.client.get(`/api/events/${eventId}`)).body.event.criteria as Array<{ id: number; name: string }>;
   const judges: Array<Awaited<ReturnType<typeof signedIn>>> = [];
   for (const name of ['Ada Marsh', 'Bo Lindqvist']) {
@@ -37,5 +42,5 @@ export async function judgedShow(cars: { hotRods: string[]; customs: string[] },
     const res = await judges[judge]!.client.post(`/api/events/${eventId}/scores`, { scores: items });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
   };
-  return { ...show, entries, criteria, judges, car, score, publish: () => organiser.client.post(`/api/events/${eventId}/lifecycle`, { action: 'publish_results' }) };
+  return { ...show, entries, criteria, judges, car, score, publish: (acknowledgeWarnings?: boolean) => organiser.client.post(`/api/events/${eventId}/lifecycle`, { action: 'publish_results', acknowledgeWarnings }) };
 }

@@ -50,13 +50,25 @@ export function describeShowSideWalk(device: string, options: BrowserContextOpti
   describe('the show side, walked by every role through its own links', () => {
     it(`breaks no screen on a ${device}`, async () => {
       const walks: string[] = [];
+      const landings: Record<string, string> = {};
       for (const person of people) {
         const context = await env.browser.newContext(options);
-        const { reached, problems } = await walkShowSide(await context.newPage(), env.baseUrl, person.email, { shows });
+        const { landedOn, reached, problems } = await walkShowSide(await context.newPage(), env.baseUrl, person.email, { shows });
         await context.close();
         expect(problems, `${person.role} on a ${device}`).toEqual([]);
+        landings[person.role] = landedOn;
         walks.push(`${person.role}: ${reached.join(' ')}`);
       }
+      // Each role lands on its day: the organisers on the show's Today, the gate on the scanner, the judge on their cars.
+      const [onTheDay, judged] = shows as [WalkedShow, WalkedShow];
+      expect(landings).toEqual({
+        organiser: `/shows/${onTheDay.id}`,
+        'co-organiser': `/shows/${onTheDay.id}`,
+        gate: `/shows/${onTheDay.id}/gate`,
+        judge: `/judge/${judged.id}`,
+        owner: '/builds',
+        'site admin': '/admin/accounts',
+      });
       // The walks reached the screens of each role's day, not only the list of shows.
       const of = (role: string) => walks.find((w) => w.startsWith(`${role}:`)) ?? '';
       expect(of('organiser')).toMatch(/\/shows\/\d+ .*\/shows\/\d+\/entries/);

@@ -42,7 +42,8 @@ const CARS = [
 ] as const;
 
 /**
- * Walks the show from entries to judging today: three judges with their classes, some sheets finished,
+ * Walks the show from entries to judging today: the pickup checked in late (after judging started) and the
+ * wagon still expected, three judges with their classes, some sheets finished,
  * one half done and some not started, and a few visitors' votes (three from one address, for the
  * organiser's "void" to act on). Addresses are from the documentation ranges (RFC 5737), never real.
  */
@@ -79,8 +80,9 @@ export async function seedJudgingShow(organiser: User): Promise<void> {
   await takeLifecycleStep(show.id, organiser, 'close_registration');
   await takeLifecycleStep(show.id, organiser, 'open_gate');
   const gate = await person('gate@placard.test');
-  for (const e of entries.slice(0, 6)) await gateCheckIn(show, e.number!, false, gate); // the wagon never arrived
+  for (const e of entries.slice(0, 5)) await gateCheckIn(show, e.number!, false, gate); // the wagon never arrived
   await takeLifecycleStep(show.id, organiser, 'start_judging');
+  await gateCheckIn(show, entries[5]!.number!, false, gate); // the pickup came late: it joins the judges' lists
   // On now, whatever the hour the demo is loaded: started two hours ago (on the hour), ends in ten.
   const hour = Math.floor(Date.now() / 3600_000) * 3600_000;
   await Event.update(

@@ -1,5 +1,5 @@
 import { Op, type Transaction } from 'sequelize';
-import { JUDGED_ENTRY_STATUSES, sheetState, type SheetState } from '@shared/schemas/judging';
+import { EXPECTED_ENTRY_STATUSES, JUDGED_ENTRY_STATUSES, sheetState, type SheetState } from '@shared/schemas/judging';
 import { Criterion } from '../../models/criterion';
 import { Entry } from '../../models/entry';
 import { EventClass } from '../../models/event-class';
@@ -10,20 +10,26 @@ import { loadFullBuild } from '../builds/builds';
 import { classesOfJudge, judgesClass, listJudges } from './judge-assignments';
 import { EventMembership } from '../../models/event-membership';
 import { Event } from '../../models/event';
+import { Build } from '../../models/build';
 
-/** Every judged car of the show, in number order, with its class. */
-export async function judgedEntries(eventId: number, transaction?: Transaction) {
-  return Entry.findAll({
+const entriesWithStatus = (eventId: number, statuses: readonly string[], transaction?: Transaction) =>
+  Entry.findAll({
     transaction,
-    where: { eventId, status: { [Op.in]: [...JUDGED_ENTRY_STATUSES] }, number: { [Op.ne]: null } },
+    where: { eventId, status: { [Op.in]: [...statuses] }, number: { [Op.ne]: null } },
     include: [{ model: EventClass, as: 'eventClass', attributes: ['id', 'name', 'position'] }],
     order: [['number', 'ASC']],
   });
-}
+
+/** Every judged car of the show (the cars that arrived), in number order, with its class. */
+export const judgedEntries = (eventId: number, transaction?: Transaction) => entriesWithStatus(eventId, JUDGED_ENTRY_STATUSES, transaction);
+
+/** Cars holding a place that the gate has not checked in yet, in number order. */
+export const expectedEntries = (eventId: number, transaction?: Transaction) => entriesWithStatus(eventId, EXPECTED_ENTRY_STATUSES, transaction);
 
 /**
- * What one judge's phone needs: the show, its sheet, the judge's cars (only their classes) with
- * each build's public face, and this judge's own scores and comments: never another judge's.
+ * What one judge's phone needs: the show, its sheet, the judge's cars that arrived (only their classes)
+ * with each build's public face, the ones still expected at the gate, and this judge's own scores and
+ * comments: never another judge's. A late arrival joins the list on the phone's next read.
  */
 export async function loadJudgeView(eventId: number, judgeId: number) {
   const event = await findEvent(eventId);
@@ -31,10 +37,13 @@ export async function loadJudgeView(eventId: number, judgeId: number) {
   const classes = await classesOfJudge(eventId, judgeId);
   const entries = (await judgedEntries(eventId)).filter((e) => judgesClass(classes, e.classId));
   const builds = await Promise.all(entries.map((e) => loadFullBuild({ id: e.buildId })));
+  const stillExpected = (await expectedEntries(eventId)).filter((e) => judgesClass(classes, e.classId));
+  const expectedBuilds = stillExpected.length ? await Build.findAll({ where: { id: { [Op.in]: stillExpected.map((e) => e.buildId) } }, attributes: ['id', 'title'] }) : [];
+  const titleOf = new Map(expectedBuilds.map((b) => [b.id, b.title]));
   const ids = entries.map((e) => e.id);
   const scores = ids.length ? await Score.findAll({ where: { eventId, judgeId, entryId: { [Op.in]: ids } } }) : [];
   const notes = ids.length ? await SheetNote.findAll({ where: { eventId, judgeId, entryId: { [Op.in]: ids } } }) : [];
-  return { event, criteria, assignedClasses: classes, cars: entries.map((entry, i) => ({ entry, build: builds[i]! })), scores, notes };
+  return { event, criteria, assignedClasses: classes, cars: entries.map((entry, i) => ({ entry, build: builds[i]! })), expected: stillExpected.map((entry) => ({ entry, title: titleOf.get(entry.buildId) ?? '' })), scores, notes };
 }
 
 /** The shows this person judges that are being judged now, for their start screen. */

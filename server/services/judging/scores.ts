@@ -1,5 +1,5 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
-import { DEVICE_CLOCK_AHEAD_MAX_MS, JUDGED_ENTRY_STATUSES, type ScoreApplied, type ScoreSubmitInput } from '@shared/schemas/judging';
+import { DEVICE_CLOCK_AHEAD_MAX_MS, EXPECTED_ENTRY_STATUSES, JUDGED_ENTRY_STATUSES, notArrivedReason, type ScoreApplied, type ScoreSubmitInput } from '@shared/schemas/judging';
 import { sequelize } from '../../db/sequelize';
 import { Criterion } from '../../models/criterion';
 import { Entry } from '../../models/entry';
@@ -64,7 +64,10 @@ export async function submitScores(eventId: number, judgeId: number, input: Scor
 
     const criteria = new Map((await Criterion.findAll({ where: { eventId }, transaction })).map((c) => [c.id, c]));
     const entryIds = [...new Set([...input.scores, ...input.notes].map((i) => i.entryId))];
-    const entries = new Map((await Entry.findAll({ where: { id: { [Op.in]: entryIds }, eventId, status: { [Op.in]: [...JUDGED_ENTRY_STATUSES] } }, transaction })).map((e) => [e.id, e]));
+    const found = await Entry.findAll({ where: { id: { [Op.in]: entryIds }, eventId }, transaction });
+    const notArrived = found.filter((e) => (EXPECTED_ENTRY_STATUSES as readonly string[]).includes(e.status));
+    if (notArrived.length) throw new ConflictError(`${notArrivedReason(notArrived.map((e) => e.number as number))} Nothing in this send was recorded.`);
+    const entries = new Map(found.filter((e) => (JUDGED_ENTRY_STATUSES as readonly string[]).includes(e.status)).map((e) => [e.id, e]));
     const classes = await classesOfJudge(eventId, judgeId, transaction);
 
     const problems: Record<string, string> = {};

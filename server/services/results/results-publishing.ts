@@ -1,6 +1,8 @@
 import type { Transaction } from 'sequelize';
 import type { RankedEntry } from '@shared/calc/results';
-import { decidedByWords, ResultsSnapshotSchema, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
+import { ConflictError } from '../../errors';
+import { publishWarnings } from './publish-warnings';
+import { decidedByWords, publishWarningWords, UNACKNOWLEDGED_WARNINGS_MESSAGE, ResultsSnapshotSchema, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
 import { PublishedResults } from '../../models/published-results';
 import { computeShowResults, type ResultCar } from './results';
 import { mailResultsToEntrants } from './results-mail';
@@ -59,8 +61,11 @@ async function peoplesChoiceOf(eventId: number, cars: Map<number, ResultCar>, tr
 /**
  * Publishing, inside the lifecycle step's transaction (the show row is locked, so no score slips in):
  * the results are stored as they are and every entrant's e-mail is queued; both exist only if the step commits.
+ * While the review warns of anything (`publishWarnings`), the organiser must say to publish anyway.
  */
-export async function publishResults(eventId: number, person: { id: number }, transaction: Transaction): Promise<void> {
+export async function publishResults(eventId: number, person: { id: number }, transaction: Transaction, options: { acknowledgeWarnings?: boolean | undefined } = {}): Promise<void> {
+  const warnings = await publishWarnings(eventId, transaction);
+  if (warnings.length && !options.acknowledgeWarnings) throw new ConflictError(UNACKNOWLEDGED_WARNINGS_MESSAGE, { acknowledgeWarnings: warnings.map(publishWarningWords).join(' ') });
   const snapshot = await buildSnapshot(eventId, transaction);
   await PublishedResults.upsert({ eventId, results: snapshot, publishedBy: person.id, publishedAt: new Date(snapshot.publishedAt) }, { transaction });
   await mailResultsToEntrants(eventId, snapshot, transaction);

@@ -1,6 +1,7 @@
 import type { ShowResults } from '@shared/calc/results';
 import type { ShowResultRules } from '@shared/schemas/judging';
-import type { ResultsSnapshot } from '@shared/schemas/results';
+import type { PublishWarning, ResultsSnapshot } from '@shared/schemas/results';
+import { publishWarnings } from './publish-warnings';
 import type { Event } from '../../models/event';
 import { loadEventDetail } from '../shows/events';
 import { computeShowResults, rulesOf } from './results';
@@ -15,6 +16,8 @@ export type ResultsReviewData = {
   tieBreaks: Awaited<ReturnType<typeof listTieBreaks>>;
   published: ResultsSnapshot | null;
   rules: ShowResultRules;
+  /** What publishing now would leave out; none once published. */
+  warnings: PublishWarning[];
 };
 
 /**
@@ -34,5 +37,6 @@ export async function loadResultsReview(event: Event): Promise<ResultsReviewData
     tieBreaks,
     published,
     rules: published ? published.rules : rulesOf(event),
+    warnings: published ? [] : await publishWarnings(event.id),
   };
 }

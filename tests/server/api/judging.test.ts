@@ -282,7 +282,7 @@ describe('progress and closing judging', () => {
     const show = await showInJudging({ carsPerClass: 1 });
     const judge = await judgeOf(show.eventId);
     await show.organiser.client.put(`/api/events/${show.eventId}/judges/${judge.user.id}/classes`, { allClasses: true });
-    expect((await show.organiser.client.post(`/api/events/${show.eventId}/lifecycle`, { action: 'publish_results' })).status).toBe(200);
+    expect((await show.organiser.client.post(`/api/events/${show.eventId}/lifecycle`, { action: 'publish_results', acknowledgeWarnings: true })).status).toBe(200);
     const late = await judge.client.post(`/api/events/${show.eventId}/scores`, { scores: [scoreItem(show.entries[0]!.id, show.criteria[0]!.id, 3)] });
     expect(late.status).toBe(409);
     expect(late.body.error.message).toMatch(/Results are published/);

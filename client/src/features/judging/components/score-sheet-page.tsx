@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { SHEET_STATE_LABELS } from '@shared/judging/sheet-state';
+import { notArrivedReason } from '@shared/judging/arrival';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
 import { useJudgeView } from '../api/get-judge-view';
 import { carSheet } from '../offline/sheet-merge';
@@ -22,7 +23,10 @@ export function ScoreSheetPage() {
   const { view } = data;
   const index = view.cars.findIndex((c) => c.entryId === entryId);
   const car = view.cars[index];
-  if (!car) return <ErrorState error={new Error('This car is not on your list.')} />;
+  if (!car) {
+    const expected = view.expected.find((c) => c.entryId === entryId);
+    return <ErrorState error={new Error(expected ? notArrivedReason([expected.number]) : 'This car is not on your list.')} />;
+  }
   const sheet = carSheet(view, lines, entryId, { deviceId: deviceId(), fetchedAt: data.fetchedAt });
   const open = view.event.judgingOpen;
   const prev = view.cars[index - 1];

@@ -13,6 +13,7 @@ import { ResultRulesForm } from './result-rules-form';
 import { ReviewTables } from './results-review';
 import { TieOrderForm } from './tie-order-form';
 import { ResultsDownloads } from './results-downloads';
+import { PublishWarnings } from './publish-warnings';
 
 /** The organiser's results: the rules, the places as they stand, ties to order by hand, publishing, then print and export. */
 export function ResultsPanel({ show }: { show: EventDetail }) {
@@ -22,7 +23,7 @@ export function ResultsPanel({ show }: { show: EventDetail }) {
   const [asking, setAsking] = useState(false);
   if (review.isPending) return <Panel title="Results"><LoadingState /></Panel>;
   if (review.error) return <Panel title="Results"><ErrorState error={review.error} /></Panel>;
-  const { review: r, tieBreaks, rules, published } = review.data;
+  const { review: r, tieBreaks, rules, published, warnings } = review.data;
   const classNames = new Map(r.classes.map((c) => [c.classId, c.className]));
   const judging = show.status === 'judging';
   // Places exist once judges score; before that the panel holds the rules only.
@@ -39,6 +40,7 @@ export function ResultsPanel({ show }: { show: EventDetail }) {
       }
     >
       <div className="flex flex-col gap-6">
+        {!published && judging ? <PublishWarnings warnings={warnings} /> : null}
         {published ? <Notice tone="ok">Published: the places below are on the show’s public page and every entrant has been e-mailed their scores.</Notice> : null}
         {!published && r.ties.length ? (
           <Notice tone="caution">
@@ -80,12 +82,13 @@ export function ResultsPanel({ show }: { show: EventDetail }) {
       <ConfirmDialog
         open={asking}
         title="Publish results?"
-        confirmLabel="Publish results"
+        confirmLabel={warnings.length ? 'Publish anyway' : 'Publish results'}
         danger={false}
         busy={publish.isPending}
         onCancel={() => setAsking(false)}
-        onConfirm={() => publish.mutate('publish_results', { onSettled: () => { setAsking(false); void review.refetch(); } })}
+        onConfirm={() => publish.mutate({ action: 'publish_results', acknowledgeWarnings: warnings.length > 0 }, { onSettled: () => { setAsking(false); void review.refetch(); } })}
       >
+        <PublishWarnings warnings={warnings} />
         <p>{EVENT_ACTIONS.publish_results.explains}</p>
         <p>Every entrant is e-mailed their own place and scores{rules.shareCommentsWithEntrants ? ', with the judges’ comments' : ''}. {r.ties.length ? `${r.ties.length} tie${r.ties.length === 1 ? '' : 's'} will be published as shared places.` : ''}</p>
       </ConfirmDialog>

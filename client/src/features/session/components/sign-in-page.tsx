@@ -45,7 +45,7 @@ export function SignInPage() {
     if (!parsed.success) return showErrors(form, fieldMessages<Field>(parsed.error));
     setErrors({});
     signIn.mutate(parsed.data, {
-      onSuccess: async () => navigate(params.get('next') ? safeNext(params.get('next')) : await landingAfterSignIn(), { replace: true }),
+      onSuccess: async (session) => navigate(params.get('next') ? safeNext(params.get('next')) : await landingAfterSignIn({ isSiteAdmin: session.user?.isSiteAdmin ?? false }), { replace: true }),
       onError: (err) => {
         const { fields, message } = splitServerErrors(err, FIELDS);
         showErrors(form, fields);

@@ -3,16 +3,16 @@ import type { EventDetail } from '@shared/schemas/show';
 import { Panel } from '@client/components/ui/panel';
 import { showTime } from './show-dates';
 
-/** Where gate staff start: the gate screen on show day, otherwise when it opens. */
+/** Where gate staff start: the scanner on show day and during judging (late arrivals), otherwise when it opens. */
 export function GatePanel({ show }: { show: EventDetail }) {
   return (
     <Panel title="Gate">
       {show.abilities.checkIn ? (
         <Link to={`/shows/${show.id}/gate`} className="inline-flex min-h-12 items-center rounded bg-ink px-5 font-display text-lg text-paper">
-          Open the gate
+          Check cars in
         </Link>
       ) : (
-        <p>Check-in opens on show day, when the organiser opens the gate. The show starts {showTime(show.startsAt, show.timeZone)} at {show.venueName}.</p>
+        <p>Check-in opens on show day, when the organiser starts show day. The show starts {showTime(show.startsAt, show.timeZone)} at {show.venueName}.</p>
       )}
     </Panel>
   );

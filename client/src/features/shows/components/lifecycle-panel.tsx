@@ -6,13 +6,19 @@ import { Button } from '@client/components/ui/button';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { Notice } from '@client/components/ui/notice';
 import { Panel } from '@client/components/ui/panel';
+import { useQuery } from '@tanstack/react-query';
 import { useTakeStep } from '../api/take-step';
+import { resultsReviewQueryOptions } from '@client/features/results/api/get-results-review';
+import { PublishWarnings } from '@client/features/results/components/publish-warnings';
 
 /** Where the show is in its life, and the next steps, each explained and confirmed before it happens. */
 export function LifecyclePanel({ show }: { show: EventDetail }) {
   const step = useTakeStep(show.id);
   const [asking, setAsking] = useState<EventAction | null>(null);
   const here = EVENT_STATUSES.indexOf(show.status);
+  // Publishing shows the review's warnings here too, and says "publish anyway" only after showing them.
+  const review = useQuery({ ...resultsReviewQueryOptions(show.id), enabled: show.abilities.manage && show.status === 'judging' });
+  const warnings = review.data?.warnings ?? [];
   return (
     <Panel title="Where the show is">
       <ol className="flex flex-wrap gap-x-1 gap-y-2 text-sm" aria-label="Steps of the show">
@@ -42,9 +48,10 @@ export function LifecyclePanel({ show }: { show: EventDetail }) {
         danger={asking === 'archive'}
         busy={step.isPending}
         onCancel={() => setAsking(null)}
-        onConfirm={() => asking && step.mutate(asking, { onSettled: () => setAsking(null) })}
+        onConfirm={() => asking && step.mutate({ action: asking, acknowledgeWarnings: asking === 'publish_results' && warnings.length > 0 }, { onSettled: () => setAsking(null) })}
       >
         {asking ? <p>{EVENT_ACTIONS[asking].explains}</p> : null}
+        {asking === 'publish_results' ? <PublishWarnings warnings={warnings} /> : null}
       </ConfirmDialog>
     </Panel>
   );

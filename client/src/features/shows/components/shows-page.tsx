@@ -16,14 +16,31 @@ function nextFor(show: EventSummary): string {
   if (show.myRoles.includes('organiser')) {
     if (show.status === 'draft') return 'Finish the settings, classes and judging sheet, then open entries.';
     if (show.status === 'registration_open') return 'Entries are coming in: watch the list and the waiting list.';
-    if (show.status === 'registration_closed') return 'Entries are closed: open the gate on show day.';
+    if (show.status === 'registration_closed') return 'Entries are closed: start show day when the gates open.';
     if (show.status === 'show_day') return 'The gate is open: cars are checking in.';
     if (show.status === 'judging') return 'Judges are scoring; publish the results when they are done.';
     return 'The show is over.';
   }
   if (show.myRoles.includes('judge')) return show.status === 'judging' ? 'Judging is open: score your cars.' : show.status === 'results_published' || show.status === 'archived' ? 'The show is over.' : 'Read the judging sheet before the day; scoring opens when judging starts.';
-  if (show.myRoles.includes('gate')) return show.status === 'show_day' ? 'The gate is open: check cars in by their number.' : ['judging', 'results_published', 'archived'].includes(show.status) ? 'The gate is closed: the cars are in.' : 'Check-in opens on show day.';
+  if (show.myRoles.includes('gate')) {
+    if (show.status === 'show_day') return 'The gate is open: check cars in by their number.';
+    if (show.status === 'judging') return 'Judging has started: check late arrivals in; they join the judges’ lists.';
+    return ['results_published', 'archived'].includes(show.status) ? 'The show is over.' : 'Check-in opens on show day.';
+  }
   return '';
+}
+
+/** Shows on the field today first, then those to come, then those over: the day's work is at the top. */
+const STATUS_ORDER: Record<string, number> = { show_day: 0, judging: 0, registration_closed: 1, registration_open: 1, draft: 2, results_published: 3, archived: 4 };
+const byDay = (a: EventSummary, b: EventSummary) => (STATUS_ORDER[a.status] ?? 5) - (STATUS_ORDER[b.status] ?? 5) || a.startsAt.localeCompare(b.startsAt);
+
+/** The card's button: the role's work today where there is some, the show page otherwise. */
+function actionFor(show: EventSummary): { to: string; label: string } {
+  const onTheDay = show.status === 'show_day' || show.status === 'judging';
+  if (onTheDay && show.myRoles.includes('organiser')) return { to: `/shows/${show.id}`, label: 'Today' };
+  if (onTheDay && show.myRoles.includes('gate')) return { to: `/shows/${show.id}/gate`, label: 'Check cars in' };
+  if (show.status === 'judging' && show.myRoles.includes('judge')) return { to: `/judge/${show.id}`, label: 'Score your cars' };
+  return { to: `/shows/${show.id}`, label: 'Open' };
 }
 
 export function ShowsPage() {
@@ -47,7 +64,7 @@ export function ShowsPage() {
           <EmptyState title="No shows yet">{canCreate ? 'Create one, or accept an invitation from an organiser.' : 'An organiser can invite you to judge or work the gate.'}</EmptyState>
         ) : (
           <ul className="grid gap-3 md:grid-cols-2">
-            {mine.data.events.map((s) => (
+            {[...mine.data.events].sort(byDay).map((s) => (
               <li key={s.id} className="border border-rule bg-white/60 p-4">
                 <p className="text-sm uppercase tracking-wide text-signal">{s.myRoles.map((r) => EVENT_ROLE_LABELS[r]).join(' · ')} · {EVENT_STATUS_LABELS[s.status]}</p>
                 <h3 className="font-display text-xl uppercase">
@@ -57,8 +74,8 @@ export function ShowsPage() {
                 </h3>
                 <p className="text-graphite">{showDay(s.startsAt, s.timeZone)} · {s.venueName}</p>
                 <p className="mt-2">{nextFor(s)}</p>
-                <Link to={`/shows/${s.id}`} className={`${linkButton} mt-3`}>
-                  Open
+                <Link to={actionFor(s).to} className={`${linkButton} mt-3`}>
+                  {actionFor(s).label}
                 </Link>
               </li>
             ))}
