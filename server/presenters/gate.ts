@@ -64,6 +64,7 @@ export function presentGateRosterEntry(entry: Entry): GateRosterEntry {
     number: entry.number,
     buildCode: entry.build?.code ?? '',
     title: entry.build?.title ?? '',
+    classId: entry.classId,
     className: entry.eventClass?.name ?? '',
     status: entry.status,
     payment: paymentStateOf(entry),

@@ -165,6 +165,7 @@ export const GateRosterEntrySchema = z.object({
   number: z.number().nullable(),
   buildCode: z.string(),
   title: z.string(),
+  classId: z.number(),
   className: z.string(),
   status: EntryStatusSchema,
   payment: z.enum(PAYMENT_STATES),
@@ -215,8 +216,9 @@ export type GateSyncResult = z.infer<typeof GateSyncResultSchema>;
 export const WalkUpSchema = z.object({
   title: requiredLine('The car', 120),
   entrantName: requiredLine('The entrant’s name', 120),
-  email: z.preprocess((v) => (v === '' ? undefined : v), EmailSchema.optional()),
-  classId: z.coerce.number({ error: 'Pick a class.' }).int().positive({ error: 'Pick a class.' }),
+  /** Optional: an empty box is no address. */
+  email: z.union([z.literal(''), EmailSchema]).optional(),
+  classId: z.number({ error: 'Pick a class.' }).int().positive({ error: 'Pick a class.' }),
 });
 export type WalkUpInput = z.infer<typeof WalkUpSchema>;
 

@@ -50,7 +50,7 @@ export async function enterWalkUp(eventId: number, input: WalkUpInput, person: P
         paidAmount: paid ? event.entryFee : null,
         checkedInAt: now,
         walkUpName: input.entrantName,
-        walkUpEmail: input.email ?? null,
+        walkUpEmail: input.email || null,
       },
       { transaction },
     );

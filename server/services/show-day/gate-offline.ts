@@ -16,7 +16,7 @@ type Person = { id: number };
 export function gateRoster(eventId: number): Promise<Entry[]> {
   return Entry.findAll({
     where: { eventId, number: { [Op.ne]: null } },
-    attributes: ['id', 'number', 'status', 'feeAmount', 'currency', 'paidAt', 'refundDue', 'refundedAt', 'checkedInAt'],
+    attributes: ['id', 'number', 'classId', 'status', 'feeAmount', 'currency', 'paidAt', 'refundDue', 'refundedAt', 'checkedInAt'],
     include: [
       { model: Build, as: 'build', attributes: ['code', 'title'] },
       { model: EventClass, as: 'eventClass', attributes: ['name'] },
