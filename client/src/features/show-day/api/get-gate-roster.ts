@@ -23,4 +23,5 @@ export const gateRosterQueryOptions = (eventId: number) =>
     networkMode: 'always',
   });
 
-export const useGateRoster = (eventId: number) => useQuery(gateRosterQueryOptions(eventId));
+/** `enabled`: only where the gate is open (or the show could not be read, e.g. with no signal), so a closed gate asks nothing. */
+export const useGateRoster = (eventId: number, enabled: boolean) => useQuery({ ...gateRosterQueryOptions(eventId), enabled });

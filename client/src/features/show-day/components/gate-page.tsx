@@ -104,7 +104,7 @@ export function GatePage() {
   const eventId = Number(useParams().id);
   const online = useOnline();
   const show = useShow(eventId);
-  const roster = useGateRoster(eventId);
+  const roster = useGateRoster(eventId, show.data ? show.data.abilities.checkIn : show.isError);
   const queue = useGateQueue(eventId);
   const lookUp = useLookUpGateCard(eventId);
   const counts = useGateCounts(eventId);
@@ -141,7 +141,7 @@ export function GatePage() {
   const { videoRef, error: cameraError } = useQrScanner(camera, onCode);
 
   const name = show.data?.name ?? roster.data?.show.name;
-  if (!name && (show.isPending || roster.isPending)) return <LoadingState />;
+  if (!name && (show.isPending || (roster.isPending && roster.fetchStatus !== 'idle'))) return <LoadingState />;
   if (!name) return <ErrorState error={show.error ?? roster.error} />;
   const open = show.data?.abilities.checkIn ?? roster.data?.show.checkIn ?? false;
   const lookUpError = lookUp.error instanceof ApiError && lookUp.error.code === 'NETWORK' ? null : lookUp.error;
