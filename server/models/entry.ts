@@ -33,6 +33,9 @@ export class Entry extends Model<InferAttributes<Entry>, InferCreationAttributes
   declare waitlistedAt: CreationOptional<Date | null>;
   declare offerExpiresAt: CreationOptional<Date | null>;
   declare checkedInAt: CreationOptional<Date | null>;
+  /** A walk-up entered at the gate: the entrant's name and e-mail as given there (the account is the organiser's). Private. */
+  declare walkUpName: CreationOptional<string | null>;
+  declare walkUpEmail: CreationOptional<string | null>;
   /** The private build fields the entrant agreed to share with the show's organisers when entering. */
   declare sharedFields: CreationOptional<AskablePrivateField[]>;
   declare createdAt: CreationOptional<Date>;
@@ -70,6 +73,8 @@ export class Entry extends Model<InferAttributes<Entry>, InferCreationAttributes
         waitlistedAt: { type: DataTypes.DATE, allowNull: true },
         offerExpiresAt: { type: DataTypes.DATE, allowNull: true },
         checkedInAt: { type: DataTypes.DATE, allowNull: true },
+        walkUpName: { type: DataTypes.TEXT, allowNull: true },
+        walkUpEmail: { type: DataTypes.TEXT, allowNull: true },
         sharedFields: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false, defaultValue: [] },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -25,8 +25,9 @@ import { Vote } from './vote';
 import { ManualTieBreak } from './manual-tie-break';
 import { PublishedResults } from './published-results';
 import { PaymentIssue } from './payment-issue';
+import { GateCheckIn } from './gate-check-in';
 
-for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote, ManualTieBreak, PublishedResults, PaymentIssue]) {
+for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote, ManualTieBreak, PublishedResults, PaymentIssue, GateCheckIn]) {
   model.initModel(sequelize);
 }
 

@@ -1,6 +1,7 @@
 import { Router } from 'express';
-import { ChangeClassSchema, EntryExportQuerySchema, EntryTableQuerySchema, GateCheckInSchema, GateLookupQuerySchema, GateUndoSchema, MarkPaidSchema } from '@shared/schemas/show-day';
-import { parseBody, parseQuery } from '../middlewares/validate';
+import { ChangeClassSchema, EntryExportQuerySchema, EntryTableQuerySchema, GateCardParamsSchema, GateCheckInSchema, GateLookupQuerySchema, GateSyncSchema, GateUndoSchema, MarkPaidSchema, WalkUpSchema } from '@shared/schemas/show-day';
+import { parseBody, parseParams, parseQuery } from '../middlewares/validate';
+import { cardRenderLimiter } from '../middlewares/rate-limits';
 import { currentUser, requireUser } from '../middlewares/authenticate';
 import { listAudit, manualPaymentNotes } from '../services/audit/audit';
 import { listEntriesForExport, listEntryTable } from '../services/entries/entry-table';
@@ -8,9 +9,13 @@ import { entriesCsv } from '../services/entries/entry-export';
 import { moneyTotals } from '../services/entries/money-totals';
 import { changeEntryClass, markEntryPaid, moveUpFromWaitingList } from '../services/entries/entry-actions';
 import { gateCheckIn, gateCounts, gateLookup, undoCheckIn } from '../services/show-day/gate';
+import { applyQueuedCheckIns, gateRoster } from '../services/show-day/gate-offline';
+import { cachedNumberedCard, numberedCardsOf } from '../services/show-day/numbered-cards';
+import { enterWalkUp } from '../services/entries/walk-ups';
+import { NotFoundError } from '../errors';
 import { presentEntryTableRow, presentMoneyTotals } from '../presenters/entry-table';
 import type { Actor } from '../policies/actor';
-import { presentGateCard, presentGateCounts } from '../presenters/gate';
+import { presentGateCard, presentGateCounts, presentGateRoster, presentGateSyncResult } from '../presenters/gate';
 import { presentAuditLine } from '../presenters/event';
 import { loadEntryFor, loadEventFor } from './load-for';
 
@@ -97,4 +102,38 @@ showDayRouter.post('/events/:id/gate/undo', requireUser, async (req, res) => {
 showDayRouter.get('/events/:id/gate/counts', requireUser, async (req, res) => {
   const { event } = await loadEventFor(req, 'checkIn');
   res.json(presentGateCounts(await gateCounts(event.id)));
+});
+
+/** The show's entries as the gate's phone keeps them, for checking in with no signal. */
+showDayRouter.get('/events/:id/gate/roster', requireUser, async (req, res) => {
+  const { event } = await loadEventFor(req, 'checkIn');
+  res.set('Cache-Control', 'private, no-store');
+  res.json(presentGateRoster(event, true, await gateRoster(event.id), new Date()));
+});
+
+/** Check-ins a phone queued with no signal: each applied once (by its id), each answered. */
+showDayRouter.post('/events/:id/gate/sync', requireUser, async (req, res) => {
+  const { deviceId, checkIns } = parseBody(req, GateSyncSchema);
+  const { event } = await loadEventFor(req, 'checkIn');
+  const applied = await applyQueuedCheckIns(event, deviceId, checkIns, currentUser(req));
+  res.json({ results: applied.map((a) => presentGateSyncResult(a, event)) });
+});
+
+/** A walk-up: entered, numbered, paid in cash and checked in at the gate. */
+showDayRouter.post('/events/:id/gate/walk-ups', requireUser, async (req, res) => {
+  const input = parseBody(req, WalkUpSchema);
+  const { event } = await loadEventFor(req, 'checkIn');
+  const entry = await enterWalkUp(event.id, input, currentUser(req));
+  res.status(201).json({ card: presentGateCard(await gateLookup(event, { number: entry.number! }), event) });
+});
+
+/** One entry's numbered card, to print at the gate (a walk-up's, or a replacement). */
+showDayRouter.get('/events/:id/gate/cards/:number', requireUser, cardRenderLimiter, async (req, res) => {
+  const { number } = parseParams(req, GateCardParamsSchema);
+  const { event } = await loadEventFor(req, 'checkIn');
+  const found = await gateLookup(event, { number });
+  const [card] = found.entry ? await numberedCardsOf(event, null, found.entry.id) : [];
+  if (!card) throw new NotFoundError(`Entry ${number} has no card yet: it needs a place and its fee paid.`);
+  const { pdf } = await cachedNumberedCard(card);
+  res.type('application/pdf').set('Content-Disposition', `inline; filename="${event.slug}-entry-${number}.pdf"`).set('Cache-Control', 'private, no-store').send(pdf);
 });

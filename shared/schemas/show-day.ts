@@ -1,8 +1,9 @@
 import { z } from 'zod';
-import { lineText, shortText } from './text';
+import { lineText, requiredLine, shortText } from './text';
 import { ASKABLE_PRIVATE_FIELDS, ENTRY_STATUSES } from '../constants';
 import { IdSchema } from './params';
 import { EntryStatusSchema } from './entry';
+import { EmailSchema } from './user';
 
 /** The organiser's entries table: one page at a time, sorted and filtered on the server. */
 export const ENTRY_TABLE_SORTS = ['number', 'title', 'owner', 'class', 'status', 'created'] as const;
@@ -128,6 +129,8 @@ export const GateCheckInSchema = z.object({
   takeCash: z.boolean().default(false),
 });
 export type GateCheckInInput = z.infer<typeof GateCheckInSchema>;
+/** `/events/:id/gate/cards/:number`: the show and the entry number whose card to print. */
+export const GateCardParamsSchema = z.object({ id: IdSchema, number: z.coerce.number().int().positive().max(99999) });
 export const GateUndoSchema = z.object({ entryId: z.number({ error: 'Which entry?' }).int().positive() });
 
 /** Undo a check-in within this long (seconds). */
@@ -160,6 +163,69 @@ export const GateCardSchema = z.object({
   canTakeCash: z.boolean(),
 });
 export type GateCard = z.infer<typeof GateCardSchema>;
+
+/** The gate's copy of the show, kept on the phone so it checks cars in with no signal. Public fields of each entry only. */
+export const GateRosterEntrySchema = z.object({
+  id: z.number(),
+  number: z.number().nullable(),
+  buildCode: z.string(),
+  title: z.string(),
+  classId: z.number(),
+  className: z.string(),
+  status: EntryStatusSchema,
+  payment: z.enum(PAYMENT_STATES),
+  feeAmount: z.number(),
+  currency: z.string(),
+  checkedInAt: z.string().nullable(),
+});
+export type GateRosterEntry = z.infer<typeof GateRosterEntrySchema>;
+export const GateRosterSchema = z.object({
+  show: z.object({ id: z.number(), name: z.string(), slug: z.string(), timeZone: z.string(), checkIn: z.boolean() }),
+  entries: z.array(GateRosterEntrySchema),
+  fetchedAt: z.string(),
+});
+export type GateRoster = z.infer<typeof GateRosterSchema>;
+
+/** At most this many queued check-ins go in one request (a phone sends the rest next). */
+export const GATE_SYNC_MAX = 100;
+/** One check-in a gate phone made with no signal: its own id for it, its count, the number, cash or not, and the phone's clock. */
+export const GateQueuedCheckInSchema = z.object({
+  clientId: z.uuid({ error: 'Each check-in needs its id.' }),
+  sequence: z.number().int().positive(),
+  number: z.number().int().positive().max(99999),
+  takeCash: z.boolean(),
+  at: z.iso.datetime({ offset: true, error: 'The phone’s time is an ISO date.' }),
+});
+export type GateQueuedCheckIn = z.infer<typeof GateQueuedCheckInSchema>;
+export const GateSyncSchema = z.object({
+  deviceId: z.uuid({ error: 'The phone’s id is missing.' }),
+  checkIns: z.array(GateQueuedCheckInSchema).min(1).max(GATE_SYNC_MAX),
+});
+export type GateSyncInput = z.infer<typeof GateSyncSchema>;
+export const GATE_SYNC_OUTCOMES = ['checked_in', 'already_checked_in', 'refused'] as const;
+/** What became of one queued check-in: applied, found checked in already (by another gate: both times), or refused with the reason. */
+export const GateSyncResultSchema = z.object({
+  clientId: z.string(),
+  number: z.number(),
+  outcome: z.enum(GATE_SYNC_OUTCOMES),
+  /** When the server has the car checked in (the first gate's time when two gates did it). */
+  checkedInAt: z.string().nullable(),
+  /** This phone's time for its own check-in. */
+  at: z.string(),
+  cashTaken: z.boolean(),
+  message: z.string().nullable(),
+});
+export type GateSyncResult = z.infer<typeof GateSyncResultSchema>;
+
+/** A walk-up: a car that was not entered, entered at the gate and paid in cash on the spot. */
+export const WalkUpSchema = z.object({
+  title: requiredLine('The car', 120),
+  entrantName: requiredLine('The entrant’s name', 120),
+  /** Optional: an empty box is no address. */
+  email: z.union([z.literal(''), EmailSchema]).optional(),
+  classId: z.number({ error: 'Pick a class.' }).int().positive({ error: 'Pick a class.' }),
+});
+export type WalkUpInput = z.infer<typeof WalkUpSchema>;
 
 export const GateCountsSchema = z.object({
   classes: z.array(z.object({ classId: z.number(), name: z.string(), arrived: z.number(), expected: z.number() })),

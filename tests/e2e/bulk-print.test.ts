@@ -71,7 +71,7 @@ describe('numbered cards in bulk, from the organiser’s entries page', () => {
     expect(count).toBe(CARDS);
     expect(texts.map(numberOnPage)).toEqual(expected.map((e) => e.number));
     texts.forEach((t, i) => expect(t.replace(/\s+/g, ' ')).toContain(expected[i]!.title.toUpperCase()));
-    expect(readQr(rasterize(pdf, 100))?.data).toBe(`http://127.0.0.1:3999/c/${expected[0]!.code}`);
+    expect(readQr(rasterize(pdf, 100))?.data).toBe(`http://127.0.0.1:3999/c/${expected[0]!.code}?show=${s.slug}&no=${expected[0]!.number}`);
     pdfToPngs(file, 'bulk-print-page');
 
     // A reload (or a second organiser) sees the same finished print, not a new one.

@@ -69,15 +69,15 @@ describe('a car in two current shows, on a phone', () => {
 
     // The numbered card of the later show carries that show in its QR address; opened, the page leads with it.
     const card = (await numberedCardsOf({ id: later.eventId, name: 'Lantern Yard Evening', slug: later.slug }, null)).find((c) => c.number === laterNumber)!;
-    const scanned = `/c/${code}?show=${later.slug}`;
+    const scanned = `/c/${code}?show=${later.slug}&no=${laterNumber}`;
     expect(card.content.qr).toEqual(qrMatrix(`${config.publicBaseUrl}${scanned}`));
     const judgedCard = (await numberedCardsOf({ id: judged.eventId, name: 'Autumn Field Meet', slug: judged.slug }, null)).find((c) => c.number === 1)!;
-    expect(judgedCard.content.qr).toEqual(qrMatrix(`${config.publicBaseUrl}/c/${code}?show=${judged.slug}`));
+    expect(judgedCard.content.qr).toEqual(qrMatrix(`${config.publicBaseUrl}/c/${code}?show=${judged.slug}&no=1`));
     const fresh = await env.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true });
     const scannedPage = await fresh.newPage();
     await scannedPage.goto(`${env.baseUrl}${scanned}`);
     expect(await scannedPage.locator('#show-entry section').first().getAttribute('aria-label')).toBe('Entry in Lantern Yard Evening');
-    await scannedPage.goto(`${env.baseUrl}/c/${code}?show=${judged.slug}`);
+    await scannedPage.goto(`${env.baseUrl}/c/${code}?show=${judged.slug}&no=1`);
     expect(await scannedPage.locator('#show-entry section').first().getAttribute('aria-label')).toBe('Entry in Autumn Field Meet');
     await fresh.close();
     await phone.close();

@@ -21,7 +21,7 @@ describe('the organiser watches judging', () => {
     const panel = page.locator('section', { has: page.getByRole('heading', { name: 'Judging', exact: true }) });
     await panel.getByRole('row', { name: /Pat Marker/ }).waitFor();
     expect(await panel.getByRole('row', { name: /Pat Marker/ }).innerText()).toMatch(/1 \/ 2\s+0\s+1\s+2/);
-    expect(await panel.getByRole('row', { name: /Hot rods/ }).innerText()).toMatch(/1 with 0 · 1 with 1/);
+    expect(await panel.getByRole('row', { name: /Hot rods/ }).innerText()).toMatch(/1 car with 0 finished sheets · 1 car with 1 finished sheet/);
     await keepScreenshot(page, 'judging-progress-organiser.png', { fullPage: true });
 
     await panel.getByRole('button', { name: 'Close judging' }).click();

@@ -10,7 +10,7 @@ export type WalkedShow = { id: number; slug: string };
 export type Walk = { landedOn: string; reached: string[]; problems: string[] };
 
 /** The in-app links of the show side that a walk follows (files, the public pages and sign-out are left alone). */
-const SHOW_SIDE = /^\/(shows|judge|entries|enter|invitations)(\/|$)/;
+const SHOW_SIDE = /^\/(shows|judge|gate|entries|enter|invitations)(\/|$)/;
 
 /**
  * Records, for the life of the page, every script error and console error, so a walk can tell which

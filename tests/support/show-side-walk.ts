@@ -72,9 +72,9 @@ export function describeShowSideWalk(device: string, options: BrowserContextOpti
       // The walks reached the screens of each role's day, not only the list of shows.
       const of = (role: string) => walks.find((w) => w.startsWith(`${role}:`)) ?? '';
       expect(of('organiser')).toMatch(/\/shows\/\d+ .*\/shows\/\d+\/entries/);
-      expect(of('organiser')).toMatch(/\/shows\/\d+\/gate/);
+      expect(of('organiser')).toMatch(/\/gate\/\d+/);
       expect(of('co-organiser')).toMatch(/\/shows\/\d+\/entries/);
-      expect(of('gate')).toMatch(/\/shows\/\d+\/gate/);
+      expect(of('gate')).toMatch(/\/gate\/\d+/);
       expect(of('judge')).toMatch(/\/judge\/\d+/);
     });
   });

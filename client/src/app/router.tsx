@@ -1,5 +1,5 @@
 import type { ComponentType } from 'react';
-import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { createBrowserRouter, Navigate, useParams, type RouteObject } from 'react-router-dom';
 import { AppLayout } from '@client/components/layouts/app-layout';
 import { RequireUser } from '@client/components/layouts/require-user';
 import { ServerPage } from './server-page';
@@ -11,6 +11,11 @@ import { JudgeLayout } from '@client/features/judging/components/judge-layout';
 import { JudgeHomePage } from '@client/features/judging/components/judge-home-page';
 import { JudgeCarsPage } from '@client/features/judging/components/judge-cars-page';
 import { ScoreSheetPage } from '@client/features/judging/components/score-sheet-page';
+import { GatePage } from '@client/features/show-day/components/gate-page';
+
+function RedirectToGate() {
+  return <Navigate replace to={`/gate/${useParams().id}`} />;
+}
 
 /**
  * A screen whose code is fetched the first time it is opened, so sign-in and the home page carry only
@@ -40,6 +45,8 @@ export const router = createBrowserRouter([
       { path: ':eventId/cars/:entryId', element: <ScoreSheetPage />, errorElement: <RouteError /> },
     ],
   },
+  // The gate, like the judge's screens: in the main bundle and outside the app layout, so it reloads with no signal.
+  { path: '/gate/:id', element: <main id="main" className="min-h-screen bg-paper px-3 pb-24 pt-3 text-ink"><GatePage /></main>, errorElement: <RouteError /> },
   {
     element: <AppLayout />,
     errorElement: <RouteError />,
@@ -111,14 +118,8 @@ export const router = createBrowserRouter([
         },
         errorElement: <RouteError />,
       },
-      {
-        path: '/shows/:id/gate',
-        lazy: async () => {
-          const { GatePage } = await import('@client/features/show-day/components/gate-page');
-          return { element: <RequireUser><GatePage /></RequireUser> };
-        },
-        errorElement: <RouteError />,
-      },
+      // The gate moved outside the app layout (below); old links still arrive.
+      { path: '/shows/:id/gate', element: <RedirectToGate />, errorElement: <RouteError /> },
       lazyScreen('/shows/:id/read-out', async () => (await import('@client/features/results/components/read-out-page')).ReadOutPage),
       { path: '*', element: <NotFoundPage /> },
     ],

@@ -62,7 +62,7 @@ export type CoverImage = NonNullable<CardContent['cover']>;
 export { availableFigures } from '@shared/build-sheet/key-figures';
 
 /** The words and figures of a card, from the public face of the build only (never the model). */
-export function cardContent(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null } = {}): CardContent {
+export function cardContent(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null; qrUrl?: string } = {}): CardContent {
   const units = settings.units;
   const { heading, kicker: name } = headlineOf(build);
   const style = build.style && build.style in BUILD_STYLE_LABELS ? BUILD_STYLE_LABELS[build.style as keyof typeof BUILD_STYLE_LABELS] : null;
@@ -85,7 +85,8 @@ export function cardContent(build: PublicBuild, settings: CardSettings, opts: { 
     credits: build.credits,
     story: build.story ?? '',
     caution: views.some((v) => v.caution) ? ENGINEERING_CAUTION : null,
-    qr: qrMatrix(build.url),
+    // A show's card marks its QR with the show and number (`numberedCardAddress`); the printed address stays the plain one.
+    qr: qrMatrix(opts.qrUrl ?? build.url),
     shortUrl: shortUrlOf(build.url),
     cover: opts.cover ?? null,
     show: opts.show ?? null,
@@ -114,7 +115,7 @@ export async function loadCoverImage(build: PublicBuild, settings: CardSettings)
 }
 
 /** One card, one page, as a PDF, and what did not fit on it (the designer tells the owner). */
-export async function renderCard(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null } = {}): Promise<{ pdf: Buffer; leftOff: CardLeftOff[] }> {
+export async function renderCard(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null; qrUrl?: string } = {}): Promise<{ pdf: Buffer; leftOff: CardLeftOff[] }> {
   registerCardFonts();
   const content = cardContent(build, settings, opts);
   const { page, leftOff } = layoutCard(content, settings.design, settings.paper, settings.orientation);

@@ -26,7 +26,7 @@ const lockEvent = async (eventId: number, transaction: Transaction) => {
 };
 
 /** The next entry number, taken while the show's row is locked: no gaps, no twins. */
-async function takeNumber(event: Event, transaction: Transaction): Promise<number> {
+export async function takeNumber(event: Event, transaction: Transaction): Promise<number> {
   const number = event.lastEntryNumber + 1;
   await event.update({ lastEntryNumber: number }, { transaction });
   return number;

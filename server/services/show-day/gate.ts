@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { Op } from 'sequelize';
 import { CHECK_IN_UNDO_SECONDS, type GateCounts, type GateProblem } from '@shared/schemas/show-day';
-import { buildCodeFromScan, gateProblemMessage } from '@shared/gate';
+import { cardOfAnotherShow, gateProblemMessage, gateProblemOf, gateScanOf } from '@shared/gate';
 import { formatInZone } from '@shared/calc/time-zone';
 import { sequelize } from '../../db/sequelize';
 import { withTransaction } from '../../db/transaction';
@@ -22,33 +22,31 @@ const entryInclude = [
   { model: EventClass, as: 'eventClass', attributes: ['id', 'name'] },
 ];
 
-/** Why the gate may not simply check this entry in, or null when it may. */
-export function gateProblemOf(entry: Entry): GateProblem | null {
-  if (entry.status === 'checked_in') return 'already_checked_in';
-  if (entry.status === 'withdrawn') return 'withdrawn';
-  if (entry.status === 'waiting_list') return 'waiting_list';
-  if (entry.status === 'awaiting_payment') return 'unpaid';
-  return null;
-}
-
 const timeAt = (d: Date, event: Event) => formatInZone(d.toISOString(), event.timeZone, { hour: '2-digit', minute: '2-digit' });
 
-/** What the gate found: an entry of this show (with its car and class), or nothing and why. */
-export type GateFinding = { entry: Entry; problem: GateProblem | null } | { entry: null; problem: GateProblem; otherShowName?: string };
+/** What the gate found: an entry of this show (with its car and class), or nothing and why (another show's card: its name, and the car's number here if it has one). */
+export type GateFinding = { entry: Entry; problem: GateProblem | null } | { entry: null; problem: GateProblem; otherShowName?: string; numberHere?: number | null };
 
 const found = (entry: Entry): GateFinding => ({ entry, problem: gateProblemOf(entry) });
 
-/** A scanned card or a typed number, looked up in this show only. A build not entered here offers nothing but the message. */
+/**
+ * A scanned card or a typed number, looked up in this show only. A numbered card of another show is
+ * refused by that show's name even when the car is entered here too (its card here has its own number);
+ * a build not entered here offers nothing but the message.
+ */
 export async function gateLookup(event: Event, what: { code?: string; number?: number }): Promise<GateFinding> {
   if (what.number !== undefined) {
     const entry = await Entry.findOne({ where: { eventId: event.id, number: what.number }, include: entryInclude });
     if (!entry) throw new NotFoundError(`No entry number ${what.number} in this show.`);
     return found(entry);
   }
-  const code = buildCodeFromScan(what.code ?? '');
-  const build = code ? await Build.findOne({ where: { code }, attributes: ['id'] }) : null;
-  if (!build) return { entry: null, problem: 'unknown_code' };
+  const scan = gateScanOf(what.code ?? '');
+  const build = scan ? await Build.findOne({ where: { code: scan.code }, attributes: ['id'] }) : null;
+  if (!scan || !build) return { entry: null, problem: 'unknown_code' };
   const entry = await Entry.findOne({ where: { eventId: event.id, buildId: build.id }, include: entryInclude });
+  const cardShow = scan.showSlug !== null && scan.showSlug !== event.slug ? await Event.findOne({ where: { slug: scan.showSlug }, attributes: ['name'] }) : null;
+  const numberHere = entry && entry.status !== 'withdrawn' ? entry.number : null;
+  if (cardOfAnotherShow(scan, event, numberHere, cardShow !== null)) return { entry: null, problem: 'other_show', otherShowName: cardShow?.name ?? '', numberHere };
   if (entry) return found(entry);
   const elsewhere = await Entry.findOne({
     where: { buildId: build.id, status: { [Op.ne]: 'withdrawn' } },

@@ -4,6 +4,7 @@ import { Op } from 'sequelize';
 import { renderToBuffer } from '@react-pdf/renderer';
 import { CARD_PRINT_ENTRY_STATUSES } from '@shared/schemas/card-print';
 import { headlineOf } from '@shared/build-sheet/headline';
+import { numberedCardAddress } from '@shared/gate';
 import { layoutNumberedCard, NumberedCardsDocument, NUMBERED_CARD_DESIGN, type NumberedCardContent } from '@templates/cards/numbered-card';
 import { registerCardFonts } from '@templates/cards/fonts';
 import { config } from '../../config';
@@ -25,9 +26,9 @@ export type NumberedCard = { entryId: number; number: number; content: NumberedC
 export const numberedCardHash = (content: NumberedCardContent) => createHash('sha256').update(JSON.stringify([NUMBERED_CARD_DESIGN, 'letter', content])).digest('hex');
 
 /** The confirmed entries of a show (or of one class), in number order, as the cards they print. Public fields only. */
-export async function numberedCardsOf(event: { id: number; name: string; slug: string }, classId: number | null): Promise<NumberedCard[]> {
+export async function numberedCardsOf(event: { id: number; name: string; slug: string }, classId: number | null, entryId?: number): Promise<NumberedCard[]> {
   const entries = await Entry.findAll({
-    where: { eventId: event.id, status: { [Op.in]: [...CARD_PRINT_ENTRY_STATUSES] }, number: { [Op.ne]: null }, ...(classId ? { classId } : {}) },
+    where: { eventId: event.id, status: { [Op.in]: [...CARD_PRINT_ENTRY_STATUSES] }, number: { [Op.ne]: null }, ...(classId ? { classId } : {}), ...(entryId ? { id: entryId } : {}) },
     attributes: ['id', 'number'],
     include: [
       { model: Build, as: 'build', attributes: ['title', 'modelYear', 'bodyOrigin', 'code'] },
@@ -38,15 +39,15 @@ export async function numberedCardsOf(event: { id: number; name: string; slug: s
   return entries.map((e) => {
     const build = e.build!;
     const { heading, kicker } = headlineOf(build);
-    // The public build page (`publicBuildUrl`) with this show first: a car may be in two shows, and a
-    // visitor scanning this card is at this one. The printed short address stays the plain page.
-    const url = `${config.publicBaseUrl}/c/${build.code}?show=${encodeURIComponent(event.slug)}`;
+    // The QR code opens the public build page with this show first (a car may be in two shows), marked with
+    // the show and the number so a gate tells a card of another show from its own; the printed short address stays the plain page.
+    const url = `${config.publicBaseUrl}/c/${build.code}`;
     const content: NumberedCardContent = {
       show: { showName: event.name, className: e.eventClass?.name ?? '', entryNumber: String(e.number) },
       heading,
       name: kicker,
-      qr: qrMatrix(url),
-      shortUrl: shortUrlOf(`${config.publicBaseUrl}/c/${build.code}`),
+      qr: qrMatrix(numberedCardAddress(config.publicBaseUrl, build.code, event.slug, e.number!)),
+      shortUrl: shortUrlOf(url),
     };
     return { entryId: e.id, number: e.number!, content, hash: numberedCardHash(content) };
   });

@@ -110,9 +110,9 @@ describe('bulk numbered cards', () => {
     });
     expect(texts.join(' ')).not.toMatch(/UNPAID SEDAN|WITHDRAWN WAGON|example\.test/i);
 
-    // The first page's QR code, as a phone reads the printed page: the car's page with this show first.
+    // The first page's QR code, as a phone reads the printed page: the car's page with this show first, marked with its number.
     const qr = readQr(rasterize(file.body as Buffer, 100));
-    expect(qr?.data).toBe(`http://127.0.0.1:3999/c/${expected[0]!.code}?show=${s.slug}`);
+    expect(qr?.data).toBe(`http://127.0.0.1:3999/c/${expected[0]!.code}?show=${s.slug}&no=${expected[0]!.number}`);
   });
 
   it('prints one class alone, in number order', async () => {

@@ -92,7 +92,7 @@ export function EntriesPage() {
     <div>
       <PageHeader title={`Entries${show.data ? ` · ${show.data.name}` : ''}`}>
         Every entry with its payment and arrival. Open a build to change its class, mark it paid, move it up or withdraw it; each change is kept in its history.{' '}
-        <Link className="underline" to={`/shows/${eventId}/gate`}>Gate</Link>
+        <Link className="underline" to={`/gate/${eventId}`}>Gate</Link>
       </PageHeader>
       <MoneyTotalsPanel eventId={eventId} />
       {show.data ? <NumberedCardsPanel eventId={eventId} classes={show.data.classes} /> : null}

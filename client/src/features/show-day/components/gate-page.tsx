@@ -5,7 +5,16 @@ import { CHECK_IN_UNDO_SECONDS, PAYMENT_STATE_LABELS, type GateCard } from '@sha
 import { useShow } from '../api/get-show';
 import { useCheckInAtGate } from '../api/check-in-at-gate';
 import { useGateCounts } from '../api/get-gate-counts';
-import { useLookUpGateCard } from '../api/look-up-gate-card';
+import { useLookUpGateCard, type GateCardQuery } from '../api/look-up-gate-card';
+import { useGateRoster } from '../api/get-gate-roster';
+import { queueCheckIn } from '../offline/gate-outbox';
+import { lookUpOnPhone } from '../offline/local-lookup';
+import { useGateQueue } from '../offline/use-gate-queue';
+import { readQueue } from '../offline/gate-store';
+import { GateOutboxPanel } from './gate-outbox-panel';
+import { WalkUpForm } from './walk-up-form';
+import { ApiError } from '@client/lib/api';
+import { useOnline } from '@client/features/judging/components/use-online';
 import { useUndoCheckIn } from '../api/undo-check-in';
 import { useQrScanner } from './use-qr-scanner';
 import { LoadingState, ErrorState } from '@client/components/ui/states';
@@ -34,6 +43,14 @@ function Counts({ eventId }: { eventId: number }) {
 /** The car that came up: photo, number, title, class, payment and the problem in words, then one big button. */
 function CarCard({ eventId, card, onChange, justChecked }: { eventId: number; card: GateCard; onChange: (c: GateCard, checked: boolean) => void; justChecked: boolean }) {
   const checkIn = useCheckInAtGate(eventId);
+  const [onPhone, setOnPhone] = useState(false);
+  // With no signal (or when the request cannot get out) the check-in is queued on the phone and sent later.
+  const check = (takeCash: boolean) => {
+    const e = card.entry!;
+    const queue = () => void queueCheckIn(eventId, e.number!, takeCash, e.title).then(() => setOnPhone(true));
+    if (!navigator.onLine) return queue();
+    checkIn.mutate({ number: e.number!, takeCash }, { onSuccess: (c) => onChange(c, true), onError: (err) => (err instanceof ApiError && err.code === 'NETWORK' ? queue() : undefined) });
+  };
   const undo = useUndoCheckIn(eventId);
   const [secondsLeft, setSecondsLeft] = useState(0);
   const e = card.entry;
@@ -45,7 +62,7 @@ function CarCard({ eventId, card, onChange, justChecked }: { eventId: number; ca
     return () => clearInterval(t);
   }, [justChecked, e?.checkedInAt]);
 
-  const error = checkIn.error ?? undo.error;
+  const error = (checkIn.error instanceof ApiError && checkIn.error.code === 'NETWORK' ? null : checkIn.error) ?? undo.error;
   return (
     <section aria-label="Scanned car" aria-live="polite" className="mt-4 border-2 border-ink bg-white">
       {e?.cover ? <img src={e.cover.src} width={e.cover.width} height={e.cover.height} alt="" className="aspect-[3/2] w-full object-cover" /> : null}
@@ -59,15 +76,16 @@ function CarCard({ eventId, card, onChange, justChecked }: { eventId: number; ca
           </>
         ) : null}
         {justChecked ? <p role="status" className="mt-3 border-l-8 border-ok bg-ok/10 p-3 text-2xl font-semibold">Checked in.</p> : null}
-        {card.message && !justChecked ? <p role="alert" className="mt-3 border-l-8 border-danger bg-danger/10 p-3 text-xl font-semibold">{card.message}</p> : null}
+        {onPhone ? <p role="status" className="mt-3 border-l-8 border-ok bg-ok/10 p-3 text-2xl font-semibold">Checked in on this phone. It goes to the server when the signal returns.</p> : null}
+        {card.message && !justChecked && !onPhone ? <p role="alert" className="mt-3 border-l-8 border-danger bg-danger/10 p-3 text-xl font-semibold">{card.message}</p> : null}
         {error ? <p role="alert" className="mt-3 border-l-8 border-danger p-3 text-xl">{error.message}</p> : null}
-        {e && card.canCheckIn ? (
-          <button type="button" className={`${big} mt-3 border-ink bg-ink text-paper`} disabled={checkIn.isPending} onClick={() => checkIn.mutate({ number: e.number!, takeCash: false }, { onSuccess: (c) => onChange(c, true) })}>
+        {e && card.canCheckIn && !onPhone ? (
+          <button type="button" className={`${big} mt-3 border-ink bg-ink text-paper`} disabled={checkIn.isPending} onClick={() => check(false)}>
             Check in
           </button>
         ) : null}
-        {e && card.canTakeCash ? (
-          <button type="button" className={`${big} mt-3 border-ink bg-ink text-paper`} disabled={checkIn.isPending} onClick={() => checkIn.mutate({ number: e.number!, takeCash: true }, { onSuccess: (c) => onChange(c, true) })}>
+        {e && card.canTakeCash && !onPhone ? (
+          <button type="button" className={`${big} mt-3 border-ink bg-ink text-paper`} disabled={checkIn.isPending} onClick={() => check(true)}>
             Take {formatMoney(e.feeAmount, e.currency)} cash and check in
           </button>
         ) : null}
@@ -81,28 +99,58 @@ function CarCard({ eventId, card, onChange, justChecked }: { eventId: number; ca
   );
 }
 
-/** Gate check-in on a phone: scan the card's QR code or type the number. */
+/** Gate check-in on a phone: scan the card's QR code or type the number; with no signal, from the phone's copy of the show. */
 export function GatePage() {
   const eventId = Number(useParams().id);
+  const online = useOnline();
   const show = useShow(eventId);
+  const roster = useGateRoster(eventId, show.data ? show.data.abilities.checkIn : show.isError);
+  const queue = useGateQueue(eventId);
   const lookUp = useLookUpGateCard(eventId);
+  const counts = useGateCounts(eventId);
   const [card, setCard] = useState<GateCard | null>(null);
+  const [notFound, setNotFound] = useState<string | null>(null);
   const [justChecked, setJustChecked] = useState(false);
   const [camera, setCamera] = useState(false);
   const [typed, setTyped] = useState('');
   const found = (c: GateCard) => {
     setCard(c);
+    setNotFound(null);
     setJustChecked(false);
   };
-  const onCode = useCallback((text: string) => lookUp.mutate({ code: text }, { onSuccess: found }), [lookUp]);
+  const find = useCallback(
+    (what: GateCardQuery) => {
+      const onPhone = async () => {
+        if (!roster.data) return setNotFound('No signal, and this phone has no copy of the show yet.');
+        const local = lookUpOnPhone(roster.data, await readQueue(eventId), what);
+        if ('notFound' in local) {
+          setCard(null);
+          setNotFound(local.notFound);
+        } else found(local);
+      };
+      if (!navigator.onLine) return void onPhone();
+      lookUp.mutate(what, { onSuccess: found, onError: (err) => (err instanceof ApiError && err.code === 'NETWORK' ? void onPhone() : setNotFound(null)) });
+    },
+    [lookUp, roster.data, eventId],
+  );
+  const onCode = useCallback((text: string) => find({ code: text }), [find]);
+  useEffect(() => {
+    // Scoped to /gate: keeps this screen's shell on the phone so it reloads with no signal.
+    if ('serviceWorker' in navigator && import.meta.env.PROD) void navigator.serviceWorker.register('/gate-sw.js', { scope: '/gate' });
+  }, []);
   const { videoRef, error: cameraError } = useQrScanner(camera, onCode);
 
-  if (show.isPending) return <LoadingState />;
-  if (show.error) return <ErrorState error={show.error} />;
-  const open = show.data.abilities.checkIn;
+  const name = show.data?.name ?? roster.data?.show.name;
+  if (!name && (show.isPending || (roster.isPending && roster.fetchStatus !== 'idle'))) return <LoadingState />;
+  if (!name) return <ErrorState error={show.error ?? roster.error} />;
+  const open = show.data?.abilities.checkIn ?? roster.data?.show.checkIn ?? false;
+  const lookUpError = lookUp.error instanceof ApiError && lookUp.error.code === 'NETWORK' ? null : lookUp.error;
   return (
     <div className="mx-auto max-w-md text-lg">
-      <h1 className="font-display text-3xl uppercase">Gate · {show.data.name}</h1>
+      <div className="flex items-baseline justify-between gap-2">
+        <h1 className="font-display text-3xl uppercase">Gate · {name}</h1>
+        <span role="status" className={`shrink-0 font-display text-sm uppercase tracking-wide ${online ? 'text-ok' : 'text-danger'}`}>{online ? 'Online' : 'No signal'}</span>
+      </div>
       {!open ? <p role="alert" className="mt-3 border-l-8 border-caution p-3">The gate opens on show day; an organiser opens it from the show's steps.</p> : null}
       {open ? (
         <>
@@ -118,17 +166,18 @@ export function GatePage() {
             onSubmit={(ev) => {
               ev.preventDefault();
               const n = Number(typed);
-              if (Number.isInteger(n) && n > 0) lookUp.mutate({ number: n }, { onSuccess: found });
+              if (Number.isInteger(n) && n > 0) find({ number: n });
             }}
           >
             <input inputMode="numeric" pattern="[0-9]*" aria-label="Entry number" placeholder="Entry number" value={typed} onChange={(e) => setTyped(e.target.value.replace(/\D/g, ''))} className="min-h-12 min-w-0 flex-1 border-2 border-ink bg-white px-3 text-2xl tabular-nums" />
             <button type="submit" className="min-h-12 min-w-24 shrink-0 border-2 border-ink bg-ink px-4 font-display text-xl uppercase text-paper">Find</button>
           </form>
           {lookUp.isPending ? <LoadingState label="Looking up…" /> : null}
-          {lookUp.error ? <p role="alert" className="mt-3 border-l-8 border-danger p-3 text-xl font-semibold">{lookUp.error.message}</p> : null}
-          {card && !lookUp.isPending && !lookUp.error ? (
+          {lookUpError ? <p role="alert" className="mt-3 border-l-8 border-danger p-3 text-xl font-semibold">{lookUpError.message}</p> : null}
+          {notFound ? <p role="alert" className="mt-3 border-l-8 border-danger p-3 text-xl font-semibold">{notFound}</p> : null}
+          {card && !lookUp.isPending && !lookUpError ? (
             <CarCard
-              key={`${card.entry?.id ?? 'none'}-${card.problem}`}
+              key={`${card.entry?.id ?? 'none'}-${card.problem}-${card.entry?.checkedInAt ?? ''}`}
               eventId={eventId}
               card={card}
               justChecked={justChecked}
@@ -138,7 +187,9 @@ export function GatePage() {
               }}
             />
           ) : null}
-          <Counts eventId={eventId} />
+          <GateOutboxPanel queue={queue} />
+          {online && counts.data ? <WalkUpForm eventId={eventId} classes={counts.data.classes} fee={show.data && show.data.entryFee > 0 ? { amount: show.data.entryFee, currency: show.data.currency } : null} onEntered={(c) => { setCard(c); setJustChecked(true); setNotFound(null); }} /> : null}
+          {online ? <Counts eventId={eventId} /> : null}
         </>
       ) : null}
     </div>

@@ -8,7 +8,7 @@ export function GatePanel({ show }: { show: EventDetail }) {
   return (
     <Panel title="Gate">
       {show.abilities.checkIn ? (
-        <Link to={`/shows/${show.id}/gate`} className="inline-flex min-h-12 items-center rounded bg-ink px-5 font-display text-lg text-paper">
+        <Link to={`/gate/${show.id}`} className="inline-flex min-h-12 items-center rounded bg-ink px-5 font-display text-lg text-paper">
           Check cars in
         </Link>
       ) : (
