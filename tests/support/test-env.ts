@@ -19,7 +19,8 @@ export const TEST_ENV = {
   INVITATION_RATE_LIMIT: '100000',
   API_RATE_LIMIT_PER_MINUTE: '100000',
   PUBLIC_BASE_URL: 'http://127.0.0.1:3999',
-  LOG_LEVEL: 'silent',
+  // Quiet unless asked: PLACARD_TEST_LOG_LEVEL=error shows what a 500 in a test was.
+  LOG_LEVEL: process.env.PLACARD_TEST_LOG_LEVEL ?? 'silent',
   // Test files queue mail and the global setup's worker sends it: poll often, retry soon.
   JOB_POLL_SECONDS: '0.5',
   MAIL_RETRY_DELAY_SECONDS: '1',
