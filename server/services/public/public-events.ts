@@ -3,16 +3,20 @@ import { EventSlugSchema } from '@shared/schemas/show';
 import { findEventBySlug } from '../shows/events';
 import { entriesOnShowNow, listPublicEntries } from '../entries/entries';
 import { loadPublishedResults } from '../results/published-results';
+import { placesLeftByClass } from '../entries/waitlist';
 
 /** Shows are public once they leave draft. */
 const PUBLIC_STATUSES = ['registration_open', 'registration_closed', 'show_day', 'judging', 'results_published', 'archived'] as const;
 
-/** The show, its public entry list and its published results, or null for a draft or unknown address. */
+/** The show (each class with its places left), its public entry list and its published results, or null for a draft or unknown address. */
 export async function loadPublicEvent(slug: string) {
   const parsed = EventSlugSchema.safeParse(slug);
   if (!parsed.success) return null;
   const event = await findEventBySlug(parsed.data);
   if (!event || !(PUBLIC_STATUSES as readonly string[]).includes(event.status)) return null;
+  const classes = event.classes ?? [];
+  const left = await placesLeftByClass(event, classes);
+  for (const c of classes) c.placesLeft = left.get(c.id) ?? null;
   const results = event.status === 'results_published' || event.status === 'archived' ? await loadPublishedResults(event.id) : null;
   return { event, entries: await listPublicEntries(event.id), results };
 }
