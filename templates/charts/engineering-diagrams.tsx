@@ -25,25 +25,27 @@ export function FrontViewSketch({ input, centres, tyreDiameterMm = 650, tyreWidt
   const X = (x: number) => x - minX;
   const Y = (y: number) => maxY - y;
   const rc = centres.rollCentreHeightMm;
-  const line = (a: Point, b: Point, colour: string, width = 6, dash?: string) => <line x1={X(a.x)} y1={Y(a.y)} x2={X(b.x)} y2={Y(b.y)} stroke={colour} strokeWidth={width} strokeDasharray={dash} strokeLinecap="round" />;
+  const line = (a: Point, b: Point, colour: string, width = 3, dash?: string) => <line x1={X(a.x)} y1={Y(a.y)} x2={X(b.x)} y2={Y(b.y)} stroke={colour} strokeWidth={width * unit} strokeDasharray={dash} strokeLinecap="round" />;
   const label = Math.max(w, h) / 28;
+  // Strokes in drawing units: a sketch ~2 m wide drawn 300 px wide needs thick lines to show at all.
+  const unit = Math.max(w, h) / 300;
   return (
     <svg viewBox={`0 0 ${f0(w)} ${f0(h)}`} role="img" aria-label={`Front view of the front suspension: ${icShown ? 'instant centre and ' : ''}roll centre${rc !== null ? ` at ${f0(rc)} mm` : ''}`} data-testid="front-view-sketch" style={{ width: '100%', height: 'auto', maxHeight: 320 }}>
-      {line({ x: minX, y: 0 }, { x: maxX, y: 0 }, GRAPHITE, 2)}
-      {line({ x: 0, y: minY }, { x: 0, y: maxY }, GRAPHITE, 2, '12 10')}
-      <rect x={X(cp.x - tyreWidthMm / 2)} y={Y(tyreDiameterMm)} width={tyreWidthMm} height={tyreDiameterMm} rx={tyreWidthMm / 4} fill="none" stroke={INK} strokeWidth={4} />
+      {line({ x: minX, y: 0 }, { x: maxX, y: 0 }, GRAPHITE, 1)}
+      {line({ x: 0, y: minY }, { x: 0, y: maxY }, GRAPHITE, 1, '12 10')}
+      <rect x={X(cp.x - tyreWidthMm / 2)} y={Y(tyreDiameterMm)} width={tyreWidthMm} height={tyreDiameterMm} rx={tyreWidthMm / 4} fill="none" stroke={INK} strokeWidth={2 * unit} />
       {icShown ? (
         <>
-          {line(input.upper.outer, icShown, GRAPHITE, 2, '8 8')}
-          {line(input.lower.outer, icShown, GRAPHITE, 2, '8 8')}
-          {line(cp, icShown, SIGNAL, 2, '4 6')}
+          {line(input.upper.outer, icShown, GRAPHITE, 1, '8 8')}
+          {line(input.lower.outer, icShown, GRAPHITE, 1, '8 8')}
+          {line(cp, icShown, SIGNAL, 1, '4 6')}
           <circle cx={X(icShown.x)} cy={Y(icShown.y)} r={label / 2} fill={GRAPHITE} />
           <text x={X(icShown.x)} y={Y(icShown.y) - label} fontSize={label} fill={GRAPHITE} textAnchor="middle">IC</text>
         </>
       ) : null}
-      {line(input.upper.inner, input.upper.outer, INK)}
+      {line(input.upper.inner, input.upper.outer, INK, 3)}
       {line(input.lower.inner, input.lower.outer, INK)}
-      {line(input.upper.outer, input.lower.outer, INK, 4)}
+      {line(input.upper.outer, input.lower.outer, INK, 2)}
       {rc !== null ? (
         <>
           <circle cx={X(0)} cy={Y(rc)} r={label / 2} fill={SIGNAL} />

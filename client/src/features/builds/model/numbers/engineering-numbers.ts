@@ -12,7 +12,7 @@ export function brakeNumbers(input: NumbersInput): NumberGroup {
   const notes: string[] = [];
   if (b.status === 'ok') {
     const v = b.value;
-    const bar = (p: number) => ({ value: show('pressure', p, 'bar', input.system, 1), other: show('pressure', p, 'bar', other(input.system)) });
+    const bar = (p: number) => ({ value: show('pressure', p, 'bar', input.system), other: show('pressure', p, 'bar', other(input.system)) });
     const nm = (t: number) => ({ value: show('torque', t, 'Nm', input.system), other: show('torque', t, 'Nm', other(input.system)) });
     rows.push({ label: 'Front line pressure', ...bar(v.front.linePressureBar), estimate: true });
     rows.push({ label: 'Rear line pressure', ...bar(v.rear.linePressureBar), estimate: true });
