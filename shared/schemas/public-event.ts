@@ -25,7 +25,8 @@ export const PublicEventSchema = z.object({
       id: z.number(),
       name: z.string(),
       description: z.string(),
-      entries: z.array(z.object({ number: z.number(), title: z.string(), url: z.string() })),
+      // `arrived`: checked in at the gate (present only then), so visitors on the field know the car is there.
+      entries: z.array(z.object({ number: z.number(), title: z.string(), url: z.string(), arrived: z.literal(true).optional() })),
     }),
   ),
   /** Published results (places, numbers, titles, rounded totals), or null before they are out. */

@@ -48,7 +48,10 @@ async function serve(): Promise<void> {
   const build = await createFullBuild(user.id);
   const { listen, closeConnections } = await import('@server/index');
   // Tests that must see every request consult the database ask for it (0: no second of trust).
-  if (process.env.PAGE_REVALIDATE_MS) (await import('@server/pages/page-cache')).publicPageCache.revalidateAfterMs = Number(process.env.PAGE_REVALIDATE_MS);
+  if (process.env.PAGE_REVALIDATE_MS) {
+    const trust = Number(process.env.PAGE_REVALIDATE_MS);
+    Object.assign((await import('@server/pages/page-cache')).publicPageCache, { revalidateAfterMs: trust, trustWhileListeningMs: trust });
+  }
   const server = await listen(0, '127.0.0.1');
   // The job queue's own pool lives through the same outages as the server's (as under npm start).
   await (await import('@server/jobs/send-mail')).startMailWorker();
