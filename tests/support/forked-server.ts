@@ -13,7 +13,8 @@ export async function forkServer(env: Record<string, string>): Promise<ForkedSer
   let output = '';
   const child = fork(fileURLToPath(import.meta.url), ['--serve'], {
     execArgv: ['--import', 'tsx'],
-    env: { ...process.env, NODE_ENV: 'test', DEMO_MODE: 'false', LOG_LEVEL: 'warn', API_RATE_LIMIT_PER_MINUTE: '1000000', ...env },
+    // The runtime tsconfig (as under npm start): JSX pages render with React's automatic runtime.
+    env: { ...process.env, TSX_TSCONFIG_PATH: 'server/tsconfig.runtime.json', NODE_ENV: 'test', DEMO_MODE: 'false', LOG_LEVEL: 'warn', API_RATE_LIMIT_PER_MINUTE: '1000000', ...env },
     stdio: ['ignore', 'pipe', 'pipe', 'ipc'],
   });
   child.stdout!.on('data', (c: Buffer) => (output += c.toString()));
