@@ -42,7 +42,7 @@ export function presentPublicEvent(event: Event, entries: Entry[], results: Resu
       placesLeft: c.placesLeft ?? null,
       entries: entries
         .filter((e) => e.classId === c.id && e.number !== null && e.build)
-        .map((e) => ({ number: e.number!, title: e.build!.title, url: `${config.publicBaseUrl}/c/${e.build!.code}` })),
+        .map((e) => ({ number: e.number!, title: e.build!.title, url: `${config.publicBaseUrl}/c/${e.build!.code}`, ...(e.status === 'checked_in' ? { arrived: true as const } : {}) })),
     })),
     results: results ? presentPublicResults(results) : null,
   };

@@ -29,7 +29,8 @@ export const PublicEventSchema = z.object({
       description: z.string(),
       /** Places left, open offers counted as taken; null when neither the class nor the show sets a limit. */
       placesLeft: z.number().int().nullable(),
-      entries: z.array(z.object({ number: z.number(), title: z.string(), url: z.string() })),
+      // `arrived`: checked in at the gate (present only then), so visitors on the field know the car is there.
+      entries: z.array(z.object({ number: z.number(), title: z.string(), url: z.string(), arrived: z.literal(true).optional() })),
     }),
   ),
   /** Published results (places, numbers, titles, rounded totals), or null before they are out. */

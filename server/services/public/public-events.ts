@@ -1,3 +1,5 @@
+import { QueryTypes } from 'sequelize';
+import { sequelize } from '../../db/sequelize';
 import { VOTING_STATUSES, votingOpen } from '@shared/schemas/peoples-choice';
 import { EventSlugSchema } from '@shared/schemas/show';
 import { findEventBySlug } from '../shows/events';
@@ -62,3 +64,13 @@ export async function showSlotsOfBuild(code: string, firstSlug?: string): Promis
 
 /** Where a vote for this car in this show is posted: the show rides in the address, so two shows' forms never mix. */
 export const voteUrl = (code: string, slug: string) => `/c/${code}/vote?show=${encodeURIComponent(slug)}`;
+
+/** The next moment a show starts or stops taking entries by the clock alone (the home page lists those taking them now). */
+export async function nextRegistrationChange(now = new Date()): Promise<Date | null> {
+  const rows = await sequelize.query<{ at: Date | null }>(
+    `SELECT min(t) AS at FROM events, LATERAL (VALUES (registration_opens_at), (registration_closes_at)) v(t)
+      WHERE status = 'registration_open' AND t > :now`,
+    { replacements: { now }, type: QueryTypes.SELECT },
+  );
+  return rows[0]?.at ?? null;
+}
