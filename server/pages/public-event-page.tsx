@@ -17,6 +17,7 @@ ol.entries .n,ol.results .n{font-family:Oswald,"Arial Narrow",sans-serif;font-we
 .cal a,.enter a{display:inline-block;min-height:44px;line-height:44px}
 .muted{color:var(--graphite)}
 .places{margin:4px 0 8px;font-weight:600}
+ol.entries li>a{flex:1 1 0}
 .here{margin-left:auto;font-size:.8rem;text-transform:uppercase;letter-spacing:.06em;color:var(--graphite);white-space:nowrap}
 ol.results{list-style:none;margin:0;padding:0}
 ol.results li{display:grid;grid-template-columns:4.5rem 3ch minmax(0,1fr) auto;gap:12px;align-items:baseline;border-bottom:1px solid var(--rule);min-height:44px;padding:8px 0}

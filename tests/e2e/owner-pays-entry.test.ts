@@ -49,7 +49,7 @@ describe('an owner entering a paid show', () => {
 
     await page.goto(`${env.baseUrl}/enter/${slug}`);
     await page.getByLabel('Your car').selectOption({ label: 'Sectioned sedan delivery' });
-    await page.getByLabel('Class').selectOption({ label: 'Early iron' });
+    await page.getByLabel('Class').selectOption({ label: 'Early iron (No limit on places)' }); // each class says its places left
     await page.getByRole('button', { name: 'Enter the car' }).click();
     await page.waitForURL(`${env.baseUrl}/entries`);
     await page.getByText('Pay the entry fee of $30.00 to confirm number 1.').waitFor();
