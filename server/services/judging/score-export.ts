@@ -1,4 +1,4 @@
-import { stringify } from 'csv-stringify/sync';
+import { spreadsheetCsv } from '../../spreadsheet-csv';
 import { Build } from '../../models/build';
 import { Criterion } from '../../models/criterion';
 import { Entry } from '../../models/entry';
@@ -45,22 +45,17 @@ export async function scoresCsv(eventId: number): Promise<string> {
       comment: s.comment,
       deviceTime: s.deviceTime.toISOString(),
     }));
-  return stringify(rows, {
-    bom: true,
-    header: true,
-    escape_formulas: true,
-    columns: [
-      { key: 'number', header: 'Number' },
-      { key: 'title', header: 'Car' },
-      { key: 'class', header: 'Class' },
-      { key: 'judge', header: 'Judge' },
-      { key: 'criterion', header: 'Criterion' },
-      { key: 'points', header: 'Points' },
-      { key: 'maxPoints', header: 'Max points' },
-      { key: 'weight', header: 'Weight' },
-      { key: 'finished', header: 'Sheet finished' },
-      { key: 'comment', header: 'Comment' },
-      { key: 'deviceTime', header: 'Scored at (UTC, judge’s device)' },
-    ],
+  return spreadsheetCsv(rows, {
+    number: 'Number',
+    title: 'Car',
+    class: 'Class',
+    judge: 'Judge',
+    criterion: 'Criterion',
+    points: 'Points',
+    maxPoints: 'Max points',
+    weight: 'Weight',
+    finished: 'Sheet finished',
+    comment: 'Comment',
+    deviceTime: 'Scored at (UTC, judge’s device)',
   });
 }

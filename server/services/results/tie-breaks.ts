@@ -7,6 +7,7 @@ import { ConflictError, NotFoundError, ValidationError } from '../../errors';
 import { writeAudit } from '../audit/audit';
 import { computeShowResults } from './results';
 import { withTransaction } from '../../db/transaction';
+import { oneOfShow } from '../../db/one-of-show';
 
 type Person = { id: number };
 
@@ -40,8 +41,7 @@ export async function addTieBreak(eventId: number, person: Person, input: TieBre
 export async function removeTieBreak(eventId: number, tieBreakId: number, person: Person, outer?: Transaction) {
   await withTransaction(outer, async (transaction) => {
     await lockUnpublished(eventId, transaction);
-    const row = await ManualTieBreak.findOne({ where: { id: tieBreakId, eventId }, transaction });
-    if (!row) throw new NotFoundError('No such tie-break in this show.');
+    const row = await oneOfShow(ManualTieBreak, tieBreakId, eventId, 'tie-break', transaction);
     await row.destroy({ transaction });
     await writeAudit({ eventId, actorId: person.id, action: 'tie_order_removed', before: { entryIds: row.entryIds, reason: row.reason } }, transaction);
   });

@@ -9,6 +9,7 @@ import { ConflictError, NotFoundError } from '../../errors';
 import { writeAudit } from '../audit/audit';
 import { offerFreedPlaces } from '../entries/waitlist';
 import { withTransaction } from '../../db/transaction';
+import { oneOfShow } from '../../db/one-of-show';
 
 type Person = { id: number };
 
@@ -33,8 +34,7 @@ export async function addClass(eventId: number, person: Person, input: ClassInpu
 export async function updateClass(eventId: number, classId: number, person: Person, input: ClassUpdateInput, outer?: Transaction) {
   return withTransaction(outer, async (transaction) => {
     await lockEditable(eventId, transaction);
-    const cls = await EventClass.findOne({ where: { id: classId, eventId }, transaction });
-    if (!cls) throw new NotFoundError('No such class in this show.');
+    const cls = await oneOfShow(EventClass, classId, eventId, 'class', transaction);
     const before = { name: cls.name, description: cls.description, position: cls.position, capacity: cls.capacity };
     const { position, ...rest } = input;
     await cls.update(rest, { transaction });
@@ -54,8 +54,7 @@ export async function updateClass(eventId: number, classId: number, person: Pers
 export async function deleteClass(eventId: number, classId: number, person: Person, outer?: Transaction) {
   await withTransaction(outer, async (transaction) => {
     await lockEditable(eventId, transaction);
-    const cls = await EventClass.findOne({ where: { id: classId, eventId }, transaction });
-    if (!cls) throw new NotFoundError('No such class in this show.');
+    const cls = await oneOfShow(EventClass, classId, eventId, 'class', transaction);
     if ((await Entry.count({ where: { classId }, transaction })) > 0) throw new ConflictError('This class has entries; it cannot be removed.', { classId: 'Has entries.' });
     await cls.destroy({ transaction });
     await writeAudit({ eventId, actorId: person.id, action: 'class_removed', before: { id: classId, name: cls.name } }, transaction);
