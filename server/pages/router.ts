@@ -6,6 +6,8 @@ import type { UnitSystem } from '@shared/calc';
 import { loadPublicBuild, publicVersion } from '../services/public/public-builds';
 import { presentPublicBuild } from '../presenters/public-build';
 import { showSlotsOfBuild } from '../services/public/public-events';
+import { loadPublicLogAndAnswers } from '../services/public/public-build-log';
+import { presentBuildOverTime } from '../presenters/build-log';
 import { NOT_FOUND_HTML, renderPublicBuildPage } from './public-build-page';
 import { compressPage, publicPageCache, type CachedPage, type VoteSlot } from './page-cache';
 import { encodingFor } from './send-html';
@@ -145,9 +147,10 @@ pagesRouter.get('/c/:code', readVoterCookie, async (req, res) => {
     const build = await loadPublicBuild(code);
     if (!build) return null;
     const shows = await showSlotsOfBuild(code, showFirst);
+    const overTime = presentBuildOverTime(await loadPublicLogAndAnswers(build.id));
     const votes = shows.flatMap((s): VoteSlot[] => (s.vote ? [{ ...s.vote, anchor: `vote-${s.showSlug}`, entryNumber: Number(s.entryNumber) }] : []));
     const fresh: CachedPage = {
-      ...compressPage(renderPublicBuildPage(presentPublicBuild(build), units, shows), version),
+      ...compressPage(renderPublicBuildPage(presentPublicBuild(build), units, shows, null, overTime), version),
       checkedAt: Date.now(),
       ...(votes.length ? { votes } : {}),
       mustRevalidate: shows.some((s) => s.votingMayOpen),
