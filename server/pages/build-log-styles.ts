@@ -10,6 +10,7 @@ ol.log h3{margin:0;font-size:1.1rem}
 .more{display:inline-block;min-height:44px;line-height:44px;font-weight:600}
 dl.qa{margin:0}
 dl.qa dt{font-weight:700;margin:0;padding-top:10px;border-top:1px solid var(--rule)}
+dl.qa div:first-child dt{border-top:0;padding-top:4px}
 dl.qa dd{margin:4px 0 10px}
 .often{color:var(--graphite);font-size:.875rem;font-weight:400}
 .ask label{display:block;font-weight:600;margin:0 0 4px}
