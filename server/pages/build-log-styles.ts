@@ -3,6 +3,7 @@ export const BUILD_LOG_CSS = `
 .lt p{margin:0 0 10px}
 ol.log{list-style:none;margin:0;padding:0}
 ol.log>li{border-top:1px solid var(--rule);padding:10px 0}
+ol.log>li:first-child{border-top:0;padding-top:4px}
 ol.log h3{margin:0;font-size:1.1rem}
 .when{margin:0;color:var(--graphite);font-size:.875rem}
 .lph{list-style:none;margin:8px 0;padding:0;display:grid;grid-template-columns:repeat(auto-fill,minmax(140px,1fr));gap:6px}

@@ -4,8 +4,11 @@ import { createUser, DEFAULT_PASSWORD } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 import { createLogPost } from '@server/services/builds/build-log';
 import { createAnsweredQuestion } from '@server/services/builds/build-questions';
+import { checkPageVersionOnEveryRequest } from '../support/page-cache';
 
 const env = useBrowserAndServer();
+// The visitor's reload must see the answer just given, not the page trusted for its usual second.
+checkPageVersionOnEveryRequest();
 
 describe('a visitor asks on a phone without script; the owner answers in the editor', () => {
   it('the question waits in the owner’s inbox, is answered there, and shows on the page', async () => {
