@@ -109,7 +109,10 @@ export function QuestionsSection({ code, answers }: { code: string; answers: Pub
             <div key={i}>
               <dt>
                 {a.question}
-                {a.askedCount > 1 ? <span className="often"> · asked {countOf(a.askedCount, 'time')}</span> : null}
+                {a.askedCount > 1 ? <span className="often">
+                    {' · '}
+                    <span className="nw">asked {countOf(a.askedCount, 'time')}</span>
+                  </span> : null}
               </dt>
               <dd>
                 <LightText text={a.answer} />

@@ -14,6 +14,7 @@ dl.qa dt{font-weight:700;margin:0;padding-top:10px;border-top:1px solid var(--ru
 dl.qa div:first-child dt{border-top:0;padding-top:4px}
 dl.qa dd{margin:4px 0 10px}
 .often{color:var(--graphite);font-size:.875rem;font-weight:400}
+.ask{margin-top:16px}
 .ask label{display:block;font-weight:600;margin:0 0 4px}
 .ask textarea{display:block;width:100%;min-height:96px;font:inherit;padding:8px;border:1px solid var(--graphite);background:#fff;color:var(--ink)}
 .ask button{margin-top:8px;min-height:48px;padding:8px 20px;border:0;background:var(--ink);color:var(--paper);font:600 1.1rem/1.1 Oswald,"Arial Narrow",sans-serif;text-transform:uppercase;letter-spacing:.04em;cursor:pointer}
