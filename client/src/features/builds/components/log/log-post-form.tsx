@@ -30,12 +30,13 @@ const toInput = (v: Values) => {
   };
 };
 
-const valuesOf = (post: OwnLogPost | null): Values => ({
+// A photo deleted since the post was written is dropped here, so it cannot hold the save back unseen.
+const valuesOf = (post: OwnLogPost | null, photoIds: number[]): Values => ({
   postedOn: post?.postedOn ?? new Date().toISOString().slice(0, 10),
   title: post?.title ?? '',
   body: post?.body ?? '',
   status: post?.status ?? 'draft',
-  photoIds: (post?.photoIds ?? []).map(String),
+  photoIds: (post?.photoIds ?? []).filter((id) => photoIds.includes(id)).map(String),
   measurement: post?.dynoRunId ? `dyno:${post.dynoRunId}` : post?.weighInId ? `weigh-in:${post.weighInId}` : '',
 });
 
@@ -46,7 +47,7 @@ export function LogPostForm({ build, post, onDone }: { build: OwnerBuild; post: 
   const [formError, setFormError] = useState('');
   const { register, handleSubmit, setError, formState: { errors } } = useForm<Values, unknown, ReturnType<typeof LogPostCreateSchema.parse>>({
     resolver: resolverFor(LogPostCreateSchema, toInput),
-    defaultValues: valuesOf(post),
+    defaultValues: valuesOf(post, build.photos.map((p) => p.id)),
   });
   const fields = ['postedOn', 'title', 'body', 'status', 'photoIds', 'dynoRunId', 'weighInId'];
   const onSubmit = handleSubmit((input) => {
