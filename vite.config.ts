@@ -23,8 +23,8 @@ const alias = {
  * - slow: database restarts, forked servers and the card-layout corpus, last, with patient limits.
  */
 const PURE_SERVER_TESTS = ['tests/server/config.test.ts', 'tests/server/env-example.test.ts', 'tests/server/payments/config.test.ts', 'tests/server/policies/**', 'tests/server/pages/page-contrast.test.ts', 'tests/server/auth/**'];
-const ISOLATED_TESTS = ['tests/server/api/password-reset-timing.test.ts', 'tests/server/api/database-wait-bound.test.ts', 'tests/server/api/address-limits.test.ts', 'tests/server/api/health-down.test.ts', 'tests/server/mail/**', 'tests/server/payments/handler-wiring.test.ts'];
-const SLOW_TESTS = ['tests/server/resilience/**', 'tests/server/cards/layout-*.test.ts', 'tests/server/results/certificate-layout.test.ts'];
+const ISOLATED_TESTS = ['tests/server/api/password-reset-timing.test.ts', 'tests/server/api/database-wait-bound.test.ts', 'tests/server/api/address-limits.test.ts', 'tests/server/api/health-down.test.ts', 'tests/server/api/readiness.test.ts', 'tests/server/mail/**', 'tests/server/payments/handler-wiring.test.ts'];
+const SLOW_TESTS = ['tests/server/resilience/**', 'tests/server/scale/**', 'tests/server/cards/layout-*.test.ts', 'tests/server/results/certificate-layout.test.ts'];
 const BROWSER_TESTS = ['tests/e2e/**'];
 
 function testConfig() {

@@ -1,4 +1,5 @@
 import session from 'express-session';
+import type { RequestHandler } from 'express';
 import connectPgSimple from 'connect-pg-simple';
 import pg from 'pg';
 import { config } from './config';
@@ -20,7 +21,7 @@ export const sessionPool = new pg.Pool({
 sessionPool.on('error', (err) => logger.warn({ err }, 'session store: a database connection was lost'));
 
 /** Sessions live in PostgreSQL (table made by a migration), so any server process can serve any request. */
-export const sessionMiddleware = session({
+const sessionWithoutRenewal = session({
   name: SESSION_COOKIE,
   secret: config.sessionSecret,
   store: new PgStore({
@@ -29,9 +30,33 @@ export const sessionMiddleware = session({
     createTableIfMissing: false,
     pruneSessionInterval: 15 * 60,
     errorLog: (...args: unknown[]) => logger.warn({ detail: args.map(String).join(' ') }, 'session store: pruning failed'),
+    // No expiry UPDATE on every request (a write queued behind visitors): renewWhenHalfSpent renews instead.
+    disableTouch: true,
   }),
   resave: false,
   saveUninitialized: false,
-  rolling: true,
+  rolling: false,
   cookie: { httpOnly: true, sameSite: 'lax', secure: config.secureCookies, maxAge: config.sessionMaxAgeMs, path: '/' },
 });
+
+declare module 'express-session' {
+  interface SessionData {
+    /** When the session's life was last renewed (renewWhenHalfSpent). */
+    renewedAt?: number;
+  }
+}
+
+/**
+ * A session in use keeps going: once less than half its life is left, the next request renews it
+ * (one write and a fresh cookie). Every other request only reads the session.
+ */
+const renewWhenHalfSpent: RequestHandler = (req, _res, next) => {
+  const left = req.session?.cookie.maxAge;
+  if (req.session && typeof left === 'number' && left < config.sessionMaxAgeMs / 2 && Object.keys(req.session).some((k) => k !== 'cookie')) {
+    req.session.cookie.maxAge = config.sessionMaxAgeMs;
+    req.session.renewedAt = Date.now(); // a change to the session, so express-session saves it and sends the cookie
+  }
+  next();
+};
+
+export const sessionMiddleware = [sessionWithoutRenewal, renewWhenHalfSpent];

@@ -1,5 +1,6 @@
 import type { Server } from 'node:http';
 import { closeConnections, logger } from '../index';
+import { startDraining } from '../services/platform/health';
 
 let stopping = false;
 
@@ -10,6 +11,7 @@ let stopping = false;
 export async function stopGracefully(server: Server | undefined, graceMs = 10_000, before: () => Promise<void> = async () => undefined): Promise<void> {
   if (stopping) return;
   stopping = true;
+  startDraining();
   if (server) {
     const closed = new Promise<void>((resolve) => server.close(() => resolve()));
     server.closeIdleConnections();

@@ -1,4 +1,4 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 
 /** A class of a show (name, order, optional capacity). */
 export class EventClass extends Model<InferAttributes<EventClass>, InferCreationAttributes<EventClass>> {
@@ -10,6 +10,8 @@ export class EventClass extends Model<InferAttributes<EventClass>, InferCreation
   declare capacity: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+  /** Not stored: places left (null = no limit), filled by `loadPublicEvent` for the public show page and its JSON. */
+  declare placesLeft?: NonAttribute<number | null>;
 
   static initModel(sequelize: Sequelize) {
     EventClass.init(

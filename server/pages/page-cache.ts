@@ -1,29 +1,34 @@
 import { createHash } from 'node:crypto';
 import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
+import { EVERY_PAGE } from './page-dependencies';
+import type { PagePieces } from './page-pieces';
 
 /**
- * A rendered page in the three encodings we send, with the version of the build it shows. `votes` lists
- * the car's shows that take people's choice votes now: each response then adds the visitor's own box to each.
- * `mustRevalidate` marks a car on a show whose voting could open or close at any moment.
+ * A rendered public page in the three encodings we send. `tags` say what it shows (page-dependencies.ts):
+ * a change to any of them drops it. `version` (car pages) is the fallback check against the database;
+ * `expiresAt` is a moment the page changes by the clock alone (entries open). `votes` lists the car's
+ * shows that take people's choice votes now: each response then fills the visitor's own box into `pieces`.
  */
 export type CachedPage = {
-  version: string;
   etag: string;
   identity: Buffer;
   gzip: Buffer;
   br: Buffer;
+  tags: readonly string[];
   checkedAt: number;
+  version?: string;
+  expiresAt?: number;
   votes?: VoteSlot[];
+  pieces?: PagePieces;
   mustRevalidate?: boolean;
 };
 
 /** A show on the page that takes votes now: where its box goes, where its form posts, and the car's number there. */
 export type VoteSlot = { eventId: number; url: string; anchor: string; entryNumber: number };
 
-export function compressPage(html: string, version: string): Omit<CachedPage, 'checkedAt'> {
+export function compressPage(html: string): Pick<CachedPage, 'etag' | 'identity' | 'gzip' | 'br'> {
   const identity = Buffer.from(html, 'utf8');
   return {
-    version,
     // Weak: the same page is sent in three encodings under one validator.
     etag: `W/"${createHash('sha1').update(identity).digest('base64url').slice(0, 22)}"`,
     identity,
@@ -33,19 +38,36 @@ export function compressPage(html: string, version: string): Omit<CachedPage, 'c
 }
 
 /**
- * In-process LRU of rendered public pages, keyed by code and unit system. Each entry carries the
- * build's version (see publicVersion), so any server process can check it is current with one
- * cheap query; under a crowd an entry checked in the last `revalidateAfterMs` is served as is.
+ * In-process LRU of rendered public pages. While this process hears the database's page-change
+ * notifications (page-listener.ts) an entry is trusted for `trustWhileListeningMs` and dropped at once
+ * when a change names one of its tags; without them (not started, or reconnecting) it is trusted for
+ * `revalidateAfterMs` only. Either way a page past its trust is checked again (car pages: one cheap
+ * version query) or re-rendered, so a lost notification cannot leave a page stale for long.
  */
 export class PageCache {
   private entries = new Map<string, CachedPage>();
+  private keysByTag = new Map<string, Set<string>>();
   private pending = new Map<string, Promise<CachedPage | null>>();
+  /** Counts invalidations; with the count at each tag's last one, a render that raced a change to what it shows is not trusted. */
+  private changes = 0;
+  private tagChangedAt = new Map<string, number>();
+  private forgottenBefore = 0;
+  /** Set by the page listener while its LISTEN connection is up. */
+  listening = false;
 
   constructor(
     public maxEntries = 500,
-    /** How long a checked entry is trusted without asking the database again. */
+    /** How long a checked entry is trusted with no notifications to tell of a change. */
     public revalidateAfterMs = 1000,
+    /** How long a checked entry is trusted while notifications arrive: the fallback for a lost one. */
+    public trustWhileListeningMs = 60_000,
   ) {}
+
+  /** Whether a page may be sent without asking the database anything. */
+  isFresh(page: CachedPage, now = Date.now()): boolean {
+    const trust = this.listening ? this.trustWhileListeningMs : this.revalidateAfterMs;
+    return now - page.checkedAt < trust && (page.expiresAt === undefined || now < page.expiresAt);
+  }
 
   get(key: string): CachedPage | undefined {
     const hit = this.entries.get(key);
@@ -56,18 +78,60 @@ export class PageCache {
     return hit;
   }
 
-  set(key: string, page: CachedPage): void {
-    this.entries.delete(key);
+  /** The number of invalidations so far: take it before loading what a page shows, hand it to set(). */
+  get changeCount(): number {
+    return this.changes;
+  }
+
+  /** Stores a page rendered from data read after `changeCountBefore`; one that raced a change is kept but checked on its next request. */
+  set(key: string, page: CachedPage, changeCountBefore = this.changes): void {
+    if (this.changedSince(page.tags, changeCountBefore)) page.checkedAt = 0;
+    this.delete(key);
     this.entries.set(key, page);
-    while (this.entries.size > this.maxEntries) this.entries.delete(this.entries.keys().next().value!);
+    for (const tag of page.tags) {
+      let keys = this.keysByTag.get(tag);
+      if (!keys) this.keysByTag.set(tag, (keys = new Set()));
+      keys.add(key);
+    }
+    while (this.entries.size > this.maxEntries) this.delete(this.entries.keys().next().value!);
+  }
+
+  private changedSince(tags: readonly string[], count: number): boolean {
+    if (count === this.changes) return false;
+    if (count < this.forgottenBefore) return true;
+    return tags.some((tag) => (this.tagChangedAt.get(tag) ?? -1) >= count);
   }
 
   delete(key: string): void {
+    const page = this.entries.get(key);
+    if (!page) return;
     this.entries.delete(key);
+    for (const tag of page.tags) {
+      const keys = this.keysByTag.get(tag);
+      keys?.delete(key);
+      if (keys?.size === 0) this.keysByTag.delete(tag);
+    }
+  }
+
+  /** Drops every page holding any of these tags (EVERY_PAGE: all of them). */
+  invalidate(tags: Iterable<string>): void {
+    if (this.tagChangedAt.size > 50_000) {
+      this.tagChangedAt.clear();
+      this.forgottenBefore = this.changes;
+    }
+    const at = this.changes++;
+    for (const tag of tags) {
+      if (tag === EVERY_PAGE) return this.clear();
+      this.tagChangedAt.set(tag, at);
+      for (const key of [...(this.keysByTag.get(tag) ?? [])]) this.delete(key);
+    }
   }
 
   clear(): void {
+    this.forgottenBefore = ++this.changes;
+    this.tagChangedAt.clear();
     this.entries.clear();
+    this.keysByTag.clear();
   }
 
   get size() {

@@ -1,6 +1,7 @@
 import { renderToStaticMarkup } from 'react-dom/server';
 import { formatInZone } from '@shared/calc/time-zone';
 import type { PublicEvent } from '@shared/schemas/public-event';
+import { placesLeftWords, refundRuleWords } from '@shared/entry-terms-words';
 import { placeWords, type PublicResultLine, type PublicResults } from '@shared/schemas/results';
 import { PAGE_CSS } from './page-styles';
 import { PageHead } from './page-head';
@@ -15,6 +16,8 @@ ol.entries li{display:flex;gap:12px;align-items:baseline;border-bottom:1px solid
 ol.entries .n,ol.results .n{font-family:Oswald,"Arial Narrow",sans-serif;font-weight:600;font-size:1.3rem;min-width:3ch;text-align:right;font-variant-numeric:tabular-nums}
 .cal a,.enter a{display:inline-block;min-height:44px;line-height:44px}
 .muted{color:var(--graphite)}
+.places{margin:4px 0 8px;font-weight:600}
+.here{margin-left:auto;font-size:.8rem;text-transform:uppercase;letter-spacing:.06em;color:var(--graphite);white-space:nowrap}
 ol.results{list-style:none;margin:0;padding:0}
 ol.results li{display:grid;grid-template-columns:4.5rem 3ch minmax(0,1fr) auto;gap:12px;align-items:baseline;border-bottom:1px solid var(--rule);min-height:44px;padding:8px 0}
 ol.results .p{font-family:Oswald,"Arial Narrow",sans-serif;font-weight:600;text-transform:uppercase}
@@ -108,6 +111,8 @@ function Page({ e }: { e: PublicEvent }) {
             </dd>
             <dt>Entry fee</dt>
             <dd>{e.feeText}</dd>
+            <dt>Refunds</dt>
+            <dd>{refundRuleWords(e.refundRule, e.timeZone, e.entryFee)}</dd>
           </dl>
           <p className="cal">
             <a href={e.calendarUrl}>Add to your calendar (.ics)</a>
@@ -149,12 +154,14 @@ function Page({ e }: { e: PublicEvent }) {
               <section key={c.id} aria-label={c.name}>
                 <h3 className="d">{c.name}</h3>
                 {c.description ? <p className="muted">{c.description}</p> : null}
+                <p className="places">{placesLeftWords(c.placesLeft)}</p>
                 {c.entries.length ? (
                   <ol className="entries">
                     {c.entries.map((x) => (
                       <li key={x.number}>
                         <span className="n">{x.number}</span>
                         <a href={x.url}>{x.title}</a>
+                        {x.arrived ? <span className="here">On the field</span> : null}
                       </li>
                     ))}
                   </ol>

@@ -1,7 +1,7 @@
 import { Router, type Request, type Response } from 'express';
 import { createRequire } from 'node:module';
 import { readFileSync } from 'node:fs';
-import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
+import { brotliCompressSync, constants as zlib } from 'node:zlib';
 import type { UnitSystem } from '@shared/calc';
 import { loadPublicBuild, publicVersion } from '../services/public/public-builds';
 import { presentPublicBuild } from '../presenters/public-build';
@@ -9,14 +9,15 @@ import { showSlotsOfBuild } from '../services/public/public-events';
 import { loadPublicLogAndAnswers } from '../services/public/public-build-log';
 import { presentBuildOverTime } from '../presenters/build-log';
 import { NOT_FOUND_HTML, renderPublicBuildPage } from './public-build-page';
-import { compressPage, publicPageCache, type CachedPage, type VoteSlot } from './page-cache';
+import type { CachedPage, VoteSlot } from './page-cache';
+import { cachedPage, sendCached } from './cached-page';
+import { joinGzip, joinPlain, type PagePieces } from './page-pieces';
+import { pageTags } from './page-dependencies';
 import { encodingFor } from './send-html';
 import { OSWALD_URL } from './page-styles';
 import { config } from '../config';
-import { isDatabaseUnavailable } from '../services/platform/database-unavailable';
-import { votedNumber } from '../services/results/peoples-choice';
-import { formTokenFor, readVoterCookie, voterOf } from './voter';
-import { voteBoxMark, renderVoteBox, type VoteBoxState } from './vote-box';
+import { formTokenFor, readVoterCookie, voterOf, votesCast } from './voter';
+import { voteBoxMark, renderVoteBox } from './vote-box';
 import { EventSlugSchema } from '@shared/schemas/show';
 
 /** Server-rendered public pages (/c/<code>): complete HTML, no app bundle, no session. */
@@ -58,45 +59,52 @@ function notFound(res: Response) {
 }
 
 function send(req: Request, res: Response, page: CachedPage, varyLanguage: boolean) {
-  if (page.votes?.length) return sendWithVoteBoxes(req, res, page, page.votes, varyLanguage);
-  res.set({
-    ETag: page.etag,
+  if (page.votes?.length && page.pieces) return sendWithVoteBoxes(req, res, page, page.votes, page.pieces, varyLanguage);
+  sendCached(req, res, page, {
     // On show day and in judging the vote button may appear or go at any moment: browsers check first (a cheap 304).
     // An answer that sets the units cookie is for this browser only.
-    'Cache-Control': `${res.getHeader('set-cookie') ? 'private' : 'public'}, ${page.mustRevalidate ? 'no-cache' : 'max-age=30, stale-while-revalidate=300'}`,
-    Vary: varyOf(varyLanguage),
+    cacheControl: `${res.getHeader('set-cookie') ? 'private' : 'public'}, ${page.mustRevalidate ? 'no-cache' : 'max-age=30, stale-while-revalidate=300'}`,
+    vary: varyOf(varyLanguage),
   });
-  // req.fresh compares If-None-Match with the ETag just set (weakly, as RFC 9110 asks for GET).
-  if (req.fresh) {
-    res.status(304).end();
-    return;
+}
+
+const TOKEN_HOLE = '__visitor_form_token__';
+const openBoxes = new WeakMap<VoteSlot, string>();
+const votedBoxes = new Map<string, string>();
+
+/** The open box of a slot, rendered once with a hole for the visitor's form token. */
+function openBox(slot: VoteSlot, formToken: string): string {
+  let html = openBoxes.get(slot);
+  if (html === undefined) openBoxes.set(slot, (html = renderVoteBox({ kind: 'open', anchor: slot.anchor, url: slot.url, formToken: TOKEN_HOLE })));
+  return html.replace(TOKEN_HOLE, formToken);
+}
+
+/** The thanks box, rendered once per anchor and vote (a few per show). */
+function votedBox(slot: VoteSlot, number: number): string {
+  const key = `${slot.anchor}|${number}|${number === slot.entryNumber}`;
+  let html = votedBoxes.get(key);
+  if (html === undefined) {
+    if (votedBoxes.size > 5000) votedBoxes.clear();
+    votedBoxes.set(key, (html = renderVoteBox({ kind: 'voted', anchor: slot.anchor, thisCar: number === slot.entryNumber, number })));
   }
-  const encoding = encodingFor(req);
-  if (encoding !== 'identity') res.set('Content-Encoding', encoding);
-  res.type('html').end(encoding === 'br' ? page.br : encoding === 'gzip' ? page.gzip : page.identity);
+  return html;
 }
 
 /**
  * While voting is open the shared cached page gets the visitor's own vote box (their form token, or
- * their thanks) on the way out, one per show taking votes, and the answer is private and never stored:
- * no one's state is cached.
+ * their thanks, read from their signed cookies) in each hole on the way out: no query, no page render
+ * and no recompression per response. The answer is private and never stored: no one's state is cached.
  */
-async function sendWithVoteBoxes(req: Request, res: Response, page: CachedPage, votes: VoteSlot[], varyLanguage: boolean) {
+function sendWithVoteBoxes(req: Request, res: Response, page: CachedPage, votes: VoteSlot[], pieces: PagePieces, varyLanguage: boolean) {
   const voter = voterOf(req, res);
-  let text = page.identity.toString('utf8');
-  for (const vote of votes) {
-    let voted: number | null = null;
-    try {
-      voted = await votedNumber(vote.eventId, voter);
-    } catch (err) {
-      // The database is away: the page still shows, with the button (the vote itself will wait for it).
-      if (!isDatabaseUnavailable(err)) throw err;
-    }
-    const box: VoteBoxState =
-      voted === null ? { kind: 'open', anchor: vote.anchor, url: vote.url, formToken: formTokenFor(voter) } : { kind: 'voted', anchor: vote.anchor, thisCar: voted === vote.entryNumber, number: voted };
-    text = text.replace(voteBoxMark(vote.eventId), renderVoteBox(box));
-  }
-  const html = Buffer.from(text, 'utf8');
+  const cast = votesCast(req);
+  const boxes = new Map(
+    votes.map((slot) => {
+      const voted = cast.get(slot.eventId);
+      return [voteBoxMark(slot.eventId), voted === undefined ? openBox(slot, formTokenFor(voter)) : votedBox(slot, voted)] as const;
+    }),
+  );
+  const fill = (mark: string) => boxes.get(mark) ?? '';
   res.set({
     'Cache-Control': 'private, no-store',
     Vary: varyOf(varyLanguage),
@@ -105,9 +113,12 @@ async function sendWithVoteBoxes(req: Request, res: Response, page: CachedPage, 
     'Referrer-Policy': 'same-origin',
   });
   const encoding = encodingFor(req);
-  if (encoding !== 'identity') res.set('Content-Encoding', encoding);
-  // Compressed per response at a quick level: a page is a few tens of kilobytes.
-  res.type('html').end(encoding === 'br' ? brotliCompressSync(html, { params: { [zlib.BROTLI_PARAM_QUALITY]: 5 } }) : encoding === 'gzip' ? gzipSync(html, { level: 6 }) : html);
+  res.type('html');
+  // gzip joins the page's parts compressed once with the boxes; a browser that takes only brotli gets it made now.
+  if (encoding !== 'identity' && req.acceptsEncodings('gzip')) return void res.set('Content-Encoding', 'gzip').end(joinGzip(pieces, fill));
+  const html = joinPlain(pieces, fill);
+  if (encoding === 'br') return void res.set('Content-Encoding', 'br').end(brotliCompressSync(html, { params: { [zlib.BROTLI_PARAM_QUALITY]: 5 } }));
+  res.end(html);
 }
 
 /** The show whose card's QR code was scanned (`?show=<slug>`): its entry leads the page. */
@@ -120,43 +131,24 @@ pagesRouter.get('/c/:code', readVoterCookie, async (req, res) => {
   const code = String(req.params.code).toUpperCase();
   const { units, chosen } = unitsFor(req, res);
   const showFirst = showFirstOf(req);
-  // The order of the shows is part of the page; the version (entries and shows included) keeps each order fresh.
+  // The order of the shows is part of the page; the tags (entries and shows included) keep each order fresh.
   const key = showFirst ? `${code}|${units}|${showFirst}` : `${code}|${units}`;
-  const cached = publicPageCache.get(key);
-  const now = Date.now();
-  if (cached && now - cached.checkedAt < publicPageCache.revalidateAfterMs) return send(req, res, cached, !chosen);
-
-  let version: string | null;
-  try {
-    version = await publicVersion(code);
-  } catch (err) {
-    // The database is away: a page we already rendered is still the build as last published.
-    if (!cached || !isDatabaseUnavailable(err)) throw err;
-    req.log.warn({ err }, 'database unavailable: public page served from the cache');
-    return send(req, res, cached, !chosen);
-  }
-  if (!version) {
-    publicPageCache.delete(key);
-    return notFound(res);
-  }
-  if (cached && cached.version === version) {
-    cached.checkedAt = now;
-    return send(req, res, cached, !chosen);
-  }
-  const page = await publicPageCache.once(`${key}|${version}`, async () => {
-    const build = await loadPublicBuild(code);
-    if (!build) return null;
-    const shows = await showSlotsOfBuild(code, showFirst);
-    const overTime = presentBuildOverTime(await loadPublicLogAndAnswers(build.id));
-    const votes = shows.flatMap((s): VoteSlot[] => (s.vote ? [{ ...s.vote, anchor: `vote-${s.showSlug}`, entryNumber: Number(s.entryNumber) }] : []));
-    const fresh: CachedPage = {
-      ...compressPage(renderPublicBuildPage(presentPublicBuild(build), units, shows, null, overTime), version),
-      checkedAt: Date.now(),
-      ...(votes.length ? { votes } : {}),
-      mustRevalidate: shows.some((s) => s.votingMayOpen),
-    };
-    publicPageCache.set(key, fresh);
-    return fresh;
+  const page = await cachedPage(req, key, {
+    version: () => publicVersion(code),
+    render: async () => {
+      const version = await publicVersion(code);
+      const build = version ? await loadPublicBuild(code) : null;
+      if (!version || !build) return null;
+      const shows = await showSlotsOfBuild(code, showFirst);
+      const overTime = presentBuildOverTime(await loadPublicLogAndAnswers(build.id));
+      return {
+        html: renderPublicBuildPage(presentPublicBuild(build), units, shows, null, overTime),
+        tags: pageTags.build(build.id, build.ownerId, shows.map((s) => s.eventId)),
+        version,
+        votes: shows.flatMap((s): VoteSlot[] => (s.vote ? [{ ...s.vote, anchor: `vote-${s.showSlug}`, entryNumber: Number(s.entryNumber) }] : [])),
+        mustRevalidate: shows.some((s) => s.votingMayOpen),
+      };
+    },
   });
   if (!page) return notFound(res);
   send(req, res, page, !chosen);

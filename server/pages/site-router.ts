@@ -6,15 +6,28 @@ import { presentPublicBuildTile } from '../presenters/public-build';
 import { presentEventSummary } from '../presenters/event';
 import { renderBadSearchPage, renderBuildListPage, renderHomePage } from './site-pages';
 import { sendHtml } from './send-html';
+import { cachedPage, sendCached } from './cached-page';
+import { pageTags } from './page-dependencies';
+import { nextRegistrationChange } from '../services/public/public-events';
 
 /** The home page (/) and every published build (/c): server HTML for anyone, no session, briefly cached. */
 export const sitePagesRouter = Router();
 const CACHE = 'public, max-age=60, stale-while-revalidate=600';
 const RECENT_ON_HOME = 8;
 
+// Rendered once per change (pageTags.home) and sent from the page cache: the same bytes for every visitor.
 sitePagesRouter.get('/', async (req, res) => {
-  const [recent, shows] = await Promise.all([listRecentPublicBuilds(RECENT_ON_HOME), listOpenEvents()]);
-  sendHtml(req, res, renderHomePage(recent.map(presentPublicBuildTile), shows.map((e) => presentEventSummary(e))), CACHE);
+  const page = await cachedPage(req, 'home', {
+    render: async () => {
+      const [recent, shows, next] = await Promise.all([listRecentPublicBuilds(RECENT_ON_HOME), listOpenEvents(), nextRegistrationChange()]);
+      return {
+        html: renderHomePage(recent.map(presentPublicBuildTile), shows.map((e) => presentEventSummary(e))),
+        tags: pageTags.home(),
+        ...(next ? { expiresAt: next.getTime() } : {}),
+      };
+    },
+  });
+  sendCached(req, res, page!, { cacheControl: CACHE, vary: 'Accept-Encoding' });
 });
 
 sitePagesRouter.get('/c', async (req, res) => {

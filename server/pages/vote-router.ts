@@ -4,7 +4,7 @@ import { EventSlugSchema } from '@shared/schemas/show';
 import { voteLimiter, voteNewVoterLimiter } from '../middlewares/rate-limits';
 import { castVote } from '../services/results/peoples-choice';
 import { isDatabaseUnavailable } from '../services/platform/database-unavailable';
-import { existingVoter, formTokenMatches, fromOurOrigin, readVoterCookie } from './voter';
+import { existingVoter, formTokenMatches, fromOurOrigin, readVoterCookie, rememberVote } from './voter';
 import { renderVoteRefusal, type VoteRefusal } from './vote-box';
 
 /** People's choice votes: a plain form POST from the public build page, no account, no script. */
@@ -31,7 +31,9 @@ votePagesRouter.post(
     // The show the form belongs to rides in its address (a car can be in two shows, each with its own vote).
     const show = EventSlugSchema.safeParse(req.query.show);
     const outcome = await castVote({ code, show: show.success ? show.data : undefined, voterToken: voter, address: req.ip ?? '' });
+    if (!outcome.ok && outcome.reason === 'twice' && outcome.votedNumber !== null) rememberVote(req, res, outcome.eventId, outcome.votedNumber);
     if (!outcome.ok) return refuse(res, outcome.reason, show.success ? `${back}?show=${encodeURIComponent(show.data)}` : back, outcome.reason === 'twice' ? outcome.votedNumber : null);
+    rememberVote(req, res, outcome.eventId, outcome.entryNumber);
     // Back to the car with that show first, where the visitor's own box now thanks them: a fresh page, never a cached one.
     res.set('Cache-Control', 'no-store').redirect(303, `${back}?show=${encodeURIComponent(outcome.showSlug)}#vote-${outcome.showSlug}`);
   },

@@ -64,3 +64,31 @@ export function fromOurOrigin(req: Request): boolean {
   const site = req.get('sec-fetch-site');
   return site === undefined || site === 'same-origin' || site === 'none';
 }
+
+/**
+ * The visitor's own record of the votes they cast (show id → the number they voted for), in a signed
+ * cookie beside their token: the cached page shows their thanks without asking the database. The
+ * votes table stays the judge of a second vote; a visitor whose cookie is gone just sees the button,
+ * and pressing it tells them they already voted.
+ */
+export const VOTED_COOKIE = 'placard.voted';
+const MOST_REMEMBERED = 20;
+
+export function votesCast(req: Request): Map<number, number> {
+  const value: unknown = (req.signedCookies as Record<string, unknown> | undefined)?.[VOTED_COOKIE];
+  const cast = new Map<number, number>();
+  if (typeof value !== 'string') return cast;
+  for (const pair of value.split('.')) {
+    const [show, number] = pair.split('-').map(Number);
+    if (Number.isSafeInteger(show) && Number.isSafeInteger(number)) cast.set(show!, number!);
+  }
+  return cast;
+}
+
+export function rememberVote(req: Request, res: Response, eventId: number, number: number): void {
+  const cast = votesCast(req);
+  cast.delete(eventId);
+  cast.set(eventId, number);
+  const kept = [...cast].slice(-MOST_REMEMBERED).map(([show, n]) => `${show}-${n}`);
+  res.cookie(VOTED_COOKIE, kept.join('.'), { signed: true, httpOnly: true, sameSite: 'lax', secure: config.secureCookies, path: '/c', maxAge: COOKIE_DAYS * 86400_000 });
+}

@@ -33,7 +33,8 @@ export function presentEntryTableRow(e: Entry, places: Map<number, number>, acto
     buildCode: e.build?.code ?? '',
     modelYear: e.build?.modelYear ?? null,
     bodyOrigin: e.build?.bodyOrigin ?? null,
-    ownerName: e.owner?.name ?? '',
+    // A walk-up's car is held by the show's creator: the entrant is the person named at the gate.
+    ownerName: e.walkUpName ?? e.owner?.name ?? '',
     classId: e.classId,
     className: e.eventClass?.name ?? '',
     status: e.status,
@@ -49,7 +50,7 @@ export function presentEntryTableRow(e: Entry, places: Map<number, number>, acto
     waitingPosition: places.get(e.id) ?? null,
     offerExpiresAt: e.status === 'waiting_list' && e.offerExpiresAt ? e.offerExpiresAt.toISOString() : null,
     createdAt: e.createdAt.toISOString(),
-    contact: { email: only('email', e.owner?.email ?? null) ?? '', phone: only('phone', e.build?.ownerPhone ?? null) },
+    contact: { email: only('email', e.walkUpName !== null ? e.walkUpEmail : (e.owner?.email ?? null)) ?? '', phone: only('phone', e.build?.ownerPhone ?? null) },
     privateFields: { vin: only('vin', e.build?.vin ?? null), plate: only('plate', e.build?.plate ?? null), address: only('address', e.build?.ownerAddress ?? null) },
     sharedFields: [...e.sharedFields],
   };

@@ -33,14 +33,16 @@ export function presentPublicEvent(event: Event, entries: Entry[], results: Resu
     entryFee: event.entryFee,
     currency: event.currency,
     feeText: event.entryFee === 0 ? 'Free' : formatMoney(event.entryFee, event.currency),
+    refundRule: { fullRefundUntil: event.refundRule.fullRefundUntil, afterwardsPercent: event.refundRule.afterwardsPercent },
     description: event.description,
     classes: (event.classes ?? []).map((c) => ({
       id: c.id,
       name: c.name,
       description: c.description,
+      placesLeft: c.placesLeft ?? null,
       entries: entries
         .filter((e) => e.classId === c.id && e.number !== null && e.build)
-        .map((e) => ({ number: e.number!, title: e.build!.title, url: `${config.publicBaseUrl}/c/${e.build!.code}` })),
+        .map((e) => ({ number: e.number!, title: e.build!.title, url: `${config.publicBaseUrl}/c/${e.build!.code}`, ...(e.status === 'checked_in' ? { arrived: true as const } : {}) })),
     })),
     results: results ? presentPublicResults(results) : null,
   };

@@ -15,3 +15,7 @@ export * from './tubes';
 export * from './corner-weights';
 export * from './spec-check-rules';
 export * from './safety';
+export * from './brakes';
+export * from './front-geometry';
+export * from './cg-height';
+export * from './quarter-mile';

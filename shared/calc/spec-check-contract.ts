@@ -2,13 +2,14 @@
 // onto SpecCheckInput, and the warnings go to the editor and the server alike.
 import type { Figure } from './figure';
 
-export type SpecSection = 'engine' | 'drivetrain' | 'wheels' | 'chassis' | 'performance';
+export type SpecSection = 'engine' | 'drivetrain' | 'wheels' | 'chassis' | 'brakes' | 'performance';
 
 export const SPEC_SECTIONS: readonly SpecSection[] = [
   'engine',
   'drivetrain',
   'wheels',
   'chassis',
+  'brakes',
   'performance',
 ];
 
@@ -21,7 +22,14 @@ export type SpecWarningCode =
   | 'measured_without_date'
   | 'power_to_weight_implausible'
   | 'tyre_code_unreadable'
-  | 'figure_unreadable';
+  | 'figure_unreadable'
+  | 'brake_split_outside_window'
+  | 'master_cylinder_too_small'
+  | 'master_cylinder_too_large'
+  | 'roll_centre_below_ground'
+  | 'roll_centre_above_wheel_centre'
+  | 'camber_gain_wrong_sign'
+  | 'quarter_mile_beyond_power';
 
 export interface SpecWarning {
   code: SpecWarningCode;

@@ -68,6 +68,9 @@ export const DrivetrainSectionSchema = z.object({
   limitedSlip: z.enum(LIMITED_SLIP_TYPES, { error: 'Choose a differential type.' }).optional(),
   /** The top speed the owner claims; the spec check compares it with what the gearing reaches at the rev limit. */
   topSpeed: figureSchema('speed', { label: 'Top speed', min: 20, max: 600, unit: 'km/h' }).optional(),
+  /** A time slip: the spec check compares the elapsed time with what power and weight allow. */
+  quarterMileEt: boundedNumber('Quarter-mile elapsed time (seconds)', 4, 30).optional(),
+  quarterMileTrap: figureSchema('speed', { label: 'Quarter-mile trap speed', min: 30, max: 500, unit: 'km/h' }).optional(),
 });
 
 // Chassis and suspension
@@ -103,7 +106,46 @@ export const MM_RANGES = {
   cgHeight: { label: 'Centre of gravity height', min: 100, max: 1500 } satisfies MmRange,
   bellCrankSpringArm: { label: 'Bell-crank spring arm', min: 10, max: 500 } satisfies MmRange,
   bellCrankPushrodArm: { label: 'Bell-crank pushrod arm', min: 10, max: 500 } satisfies MmRange,
+  pivotX: (point: FrontPivot): MmRange => ({ label: `${FRONT_PIVOTS[point]}: x`, min: 0, max: 1500 }),
+  pivotY: (point: FrontPivot): MmRange => ({ label: `${FRONT_PIVOTS[point]}: y`, min: 0, max: 1200 }),
+  contactPatchX: { label: 'Tyre contact patch: x (half the track)', min: 300, max: 1300 } satisfies MmRange,
+  wheelCentreHeight: { label: 'Loaded wheel centre height', min: 150, max: 700 } satisfies MmRange,
+  tiltRaise: { label: 'Height the axle was raised', min: 20, max: 1500 } satisfies MmRange,
+  masterBore: { label: 'Master cylinder bore', min: 10, max: 50 } satisfies MmRange,
+  rearMasterBore: { label: 'Rear master cylinder bore', min: 10, max: 50 } satisfies MmRange,
+  pistonDiameter: (end: 'Front' | 'Rear'): MmRange => ({ label: `${end} caliper piston diameter`, min: 10, max: 90 }),
+  padHeight: (end: 'Front' | 'Rear'): MmRange => ({ label: `${end} pad radial height`, min: 10, max: 120 }),
 };
+
+/** The front double wishbone's pivots, front view: x outward from the centreline, y up from the ground. */
+export const FRONT_PIVOTS = {
+  upperInner: 'Upper arm, inner pivot',
+  upperOuter: 'Upper arm, ball joint',
+  lowerInner: 'Lower arm, inner pivot',
+  lowerOuter: 'Lower arm, ball joint',
+} as const;
+export type FrontPivot = keyof typeof FRONT_PIVOTS;
+const pivotPoint = (point: FrontPivot) => z.object({ x: plainMm(MM_RANGES.pivotX(point)).optional(), y: plainMm(MM_RANGES.pivotY(point)).optional() });
+/** Every value optional, as with the four-link: the numbers wait until all of it is there. */
+export const FrontGeometrySchema = z.object({
+  upperInner: pivotPoint('upperInner').optional(),
+  upperOuter: pivotPoint('upperOuter').optional(),
+  lowerInner: pivotPoint('lowerInner').optional(),
+  lowerOuter: pivotPoint('lowerOuter').optional(),
+  contactPatchXMm: plainMm(MM_RANGES.contactPatchX).optional(),
+  wheelCentreHeightMm: plainMm(MM_RANGES.wheelCentreHeight).optional(),
+});
+
+/** A tilt weigh-in for the centre-of-gravity height: level, then one axle raised. */
+export const CgTiltSchema = z.object({
+  raisedAxle: z.enum(['front', 'rear'], { error: 'Choose which axle was raised.' }).optional(),
+  raisedHeightMm: plainMm(MM_RANGES.tiltRaise).optional(),
+  wheelCentreHeightMm: plainMm(MM_RANGES.wheelCentreHeight).optional(),
+  unit: z.enum(['kg', 'lb'], { error: 'Unit must be kg or lb.' }).optional(),
+  totalWeight: boundedNumber('Total weight', 100, 10_000).optional(),
+  lowerAxleLevel: boundedNumber('Axle on the scales, level', 20, 10_000).optional(),
+  lowerAxleRaised: boundedNumber('Axle on the scales, other raised', 20, 10_000).optional(),
+});
 
 const linkPoint = (point: FourLinkPoint) => z.object({ x: plainMm(MM_RANGES.linkX(point)).optional(), y: plainMm(MM_RANGES.linkY(point)).optional() });
 /**
@@ -135,6 +177,7 @@ const suspensionEnd = (end: 'Front' | 'Rear') =>
     antiRollBar: shortText(`${end} anti-roll bar`, 200).optional(),
     description: shortText(`${end} suspension description`, 300).optional(),
     fourLink: FourLinkSchema.optional(),
+    geometry: FrontGeometrySchema.optional(),
   });
 
 export const ChassisSectionSchema = z.object({
@@ -147,22 +190,51 @@ export const ChassisSectionSchema = z.object({
   trackRear: lengthMm('Rear track', 900, 2500).optional(),
   front: suspensionEnd('Front').optional(),
   rear: suspensionEnd('Rear').optional(),
+  cgTilt: CgTiltSchema.optional(),
+  /** The owner's choice to show roll centre, camber gain and CG height on the public page. */
+  showFigures: z.boolean().optional(),
 });
 
 // Brakes
 export const BRAKE_TYPES = ['disc', 'drum', 'none'] as const;
-export const BrakeEndSchema = z.object({
+export const CALIPER_KINDS = ['opposed', 'floating'] as const;
+export const RADIUS_MODELS = ['mean', 'uniform-pressure'] as const;
+const brakeEnd = (end: 'Front' | 'Rear') => ({
+  caliperKind: z.enum(CALIPER_KINDS, { error: 'Choose opposed (fixed) or floating.' }).optional(),
+  pistonDiameterMm: plainMm(MM_RANGES.pistonDiameter(end)).optional(),
+  padHeightMm: plainMm(MM_RANGES.padHeight(end)).optional(),
+  padMu: boundedNumber(`${end} pad friction coefficient`, 0.1, 1).optional(),
+});
+/** Pedal to master cylinder: what turns the driver's foot into line pressure. */
+export const BrakeHydraulicsSchema = z.object({
+  pedalRatio: boundedNumber('Pedal ratio', 1.5, 12).optional(),
+  pedalForce: figureSchema('force', { label: 'Pedal force', min: 50, max: 2000, unit: 'N' }).optional(),
+  boosterAssist: boundedNumber('Booster assist ratio', 1, 10).optional(),
+  /** The one master cylinder, or the front one behind a balance bar when a rear bore is given. */
+  masterBoreMm: plainMm(MM_RANGES.masterBore).optional(),
+  rearMasterBoreMm: plainMm(MM_RANGES.rearMasterBore).optional(),
+  balanceFrontPercent: boundedNumber('Balance bar, front share', 20, 80).optional(),
+  valveKnee: figureSchema('pressure', { label: 'Proportioning valve knee', min: 1, max: 150, unit: 'bar' }).optional(),
+  valveSlope: boundedNumber('Proportioning valve slope', 0.1, 1).optional(),
+  radiusModel: z.enum(RADIUS_MODELS, { error: 'Choose mean radius or uniform pressure.' }).optional(),
+});
+const brakeEndSchema = (end: 'Front' | 'Rear') => z.object({
   type: z.enum(BRAKE_TYPES, { error: 'Choose disc, drum or none.' }).optional(),
   rotorDiameter: lengthMm('Rotor or drum diameter', 150, 500).optional(),
   rotorThickness: lengthMm('Rotor thickness', 5, 60).optional(),
   caliperPistons: boundedNumber('Caliper pistons', 1, 12, { int: true }).optional(),
   caliper: shortText('Caliper', 200).optional(),
   pad: shortText('Pads', 120).optional(),
+  ...brakeEnd(end),
 });
+export const BrakeEndSchema = brakeEndSchema('Front');
 export const BrakesSectionSchema = z.object({
   ...common,
-  front: BrakeEndSchema.optional(),
-  rear: BrakeEndSchema.optional(),
+  front: brakeEndSchema('Front').optional(),
+  rear: brakeEndSchema('Rear').optional(),
+  hydraulics: BrakeHydraulicsSchema.optional(),
+  /** The owner's choice to show the brake split on the public page. */
+  showFigures: z.boolean().optional(),
   masterCylinder: shortText('Master cylinder', 200).optional(),
   booster: shortText('Booster', 200).optional(),
   parkingBrake: shortText('Parking brake', 200).optional(),

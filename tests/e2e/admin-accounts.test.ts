@@ -14,7 +14,7 @@ async function signInAs(browser: Browser, baseUrl: string, who: { email: string;
   await page.getByLabel('E-mail').fill(who.email);
   await page.getByLabel('Password').fill(who.password);
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(/\/(account|builds)$/);
+  await page.waitForURL(/\/(account|builds|admin\/accounts)$/);
   return page;
 }
 

@@ -42,7 +42,7 @@ describe('a newcomer in the browser', () => {
     await desk.getByLabel('E-mail').fill(admin.email);
     await desk.getByLabel('Password').fill(admin.password);
     await desk.getByRole('button', { name: 'Sign in' }).click();
-    await desk.waitForURL(`${env.baseUrl}/builds`);
+    await desk.waitForURL(`${env.baseUrl}/admin/accounts`); // the site admin lands on the accounts
     await desk.getByRole('link', { name: 'Caught mail' }).click();
     await desk.getByRole('link', { name: new RegExp(`Confirm your e-mail address for Placard.*${email}`) }).click();
     const link = desk.getByRole('link', { name: /verify-email\?token=/ });

@@ -97,7 +97,7 @@ describe('numbered cards in bulk, from the organiser’s entries page', () => {
     expect(text).toContain('STONEBRIDGE SUMMER NATIONALS');
     expect(text).toContain(third.className);
     expect(numberOnPage(text)).toBe(third.number);
-    expect(readQr(rasterize(card, 100))?.data).toBe(`http://127.0.0.1:3999/c/${third.code}`);
+    expect(readQr(rasterize(card, 100))?.data).toBe(`http://127.0.0.1:3999/c/${third.code}?show=${s.slug}&no=${third.number}`); // marked for the gate
     pdfToPngs(cardFile, 'owner-entry-card', 1);
     await owner.close();
   });

@@ -23,7 +23,7 @@ describe('the gate on a phone with no signal', () => {
     const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true });
     const page = await context.newPage();
     await signInInBrowser(page, env.baseUrl, gate.email, DEFAULT_PASSWORD, `/shows/${eventId}`);
-    await page.getByRole('link', { name: 'Open the gate' }).click();
+    await page.getByRole('link', { name: 'Check cars in' }).click();
     await page.waitForURL(`**/gate/${eventId}`);
     await page.getByRole('heading', { name: /Gate · Autumn Field Meet/ }).waitFor();
     await expect.poll(() => page.evaluate(async () => (await navigator.serviceWorker.getRegistration('/gate'))?.active?.state)).toBe('activated');

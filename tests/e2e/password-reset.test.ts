@@ -24,7 +24,7 @@ describe('a forgotten password, in demo mode', () => {
     await desk.getByLabel('E-mail').fill(admin.email);
     await desk.getByLabel('Password').fill(admin.password);
     await desk.getByRole('button', { name: 'Sign in' }).click();
-    await desk.waitForURL(`${env.baseUrl}/builds`);
+    await desk.waitForURL(`${env.baseUrl}/admin/accounts`); // the site admin lands on the accounts
     await desk.getByRole('link', { name: 'Caught mail' }).click();
     await desk.getByRole('link', { name: new RegExp(`Reset your Placard password.*${forgetful.email}`) }).click();
     const link = desk.getByRole('link', { name: /reset-password\?token=/ });

@@ -53,7 +53,7 @@ describe('each role lands on its day', () => {
 
     const gate = await memberOf(show.eventId, 'gate');
     const gatePage = await signInOnPhone(gate.email);
-    expect(new URL(gatePage.url()).pathname).toBe(`/shows/${show.eventId}/gate`);
+    expect(new URL(gatePage.url()).pathname).toBe(`/gate/${show.eventId}`);
     await gatePage.getByRole('heading', { name: /^Gate ·/ }).waitFor();
     await keepScreenshot(gatePage, 'show-day-gate-landing.png');
     await gatePage.context().close();

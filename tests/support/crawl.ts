@@ -73,8 +73,8 @@ export async function walkShowSide(page: Page, baseUrl: string, email: string, o
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
   const landedOn = new URL(page.url()).pathname;
-  // The judge's phone screens have no site menu: from there the walk opens the shows by address.
-  if (landedOn.startsWith('/judge')) await page.goto(`${baseUrl}/shows`);
+  // The judge's and the gate's phone screens have no site menu: from there the walk opens the shows by address.
+  if (landedOn.startsWith('/judge') || landedOn.startsWith('/gate')) await page.goto(`${baseUrl}/shows`);
   else await page.locator('nav').getByRole('link', { name: 'Shows', exact: true }).click();
   await page.waitForURL(`${baseUrl}/shows`);
 

@@ -13,7 +13,8 @@ export async function forkServer(env: Record<string, string>): Promise<ForkedSer
   let output = '';
   const child = fork(fileURLToPath(import.meta.url), ['--serve'], {
     execArgv: ['--import', 'tsx'],
-    env: { ...process.env, NODE_ENV: 'test', DEMO_MODE: 'false', LOG_LEVEL: 'warn', API_RATE_LIMIT_PER_MINUTE: '1000000', ...env },
+    // The runtime tsconfig (as under npm start): JSX pages render with React's automatic runtime.
+    env: { ...process.env, TSX_TSCONFIG_PATH: 'server/tsconfig.runtime.json', NODE_ENV: 'test', DEMO_MODE: 'false', LOG_LEVEL: 'warn', API_RATE_LIMIT_PER_MINUTE: '1000000', ...env },
     stdio: ['ignore', 'pipe', 'pipe', 'ipc'],
   });
   child.stdout!.on('data', (c: Buffer) => (output += c.toString()));
@@ -48,7 +49,10 @@ async function serve(): Promise<void> {
   const build = await createFullBuild(user.id);
   const { listen, closeConnections } = await import('@server/index');
   // Tests that must see every request consult the database ask for it (0: no second of trust).
-  if (process.env.PAGE_REVALIDATE_MS) (await import('@server/pages/page-cache')).publicPageCache.revalidateAfterMs = Number(process.env.PAGE_REVALIDATE_MS);
+  if (process.env.PAGE_REVALIDATE_MS) {
+    const trust = Number(process.env.PAGE_REVALIDATE_MS);
+    Object.assign((await import('@server/pages/page-cache')).publicPageCache, { revalidateAfterMs: trust, trustWhileListeningMs: trust });
+  }
   const server = await listen(0, '127.0.0.1');
   // The job queue's own pool lives through the same outages as the server's (as under npm start).
   await (await import('@server/jobs/send-mail')).startMailWorker();

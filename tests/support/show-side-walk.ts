@@ -64,7 +64,7 @@ export function describeShowSideWalk(device: string, options: BrowserContextOpti
       expect(landings).toEqual({
         organiser: `/shows/${onTheDay.id}`,
         'co-organiser': `/shows/${onTheDay.id}`,
-        gate: `/shows/${onTheDay.id}/gate`,
+        gate: `/gate/${onTheDay.id}`,
         judge: `/judge/${judged.id}`,
         owner: '/builds',
         'site admin': '/admin/accounts',

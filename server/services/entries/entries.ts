@@ -202,7 +202,7 @@ export function listPublicEntries(eventId: number) {
   return Entry.findAll({
     where: { eventId, status: { [Op.in]: ['confirmed', 'checked_in'] }, number: { [Op.ne]: null } },
     include: [{ model: Build, as: 'build', attributes: ['id', 'title', 'code', 'published'], where: { published: true } }],
-    attributes: ['id', 'classId', 'number', 'status'],
+    attributes: ['id', 'classId', 'buildId', 'number', 'status'],
     order: [['number', 'ASC']],
   });
 }

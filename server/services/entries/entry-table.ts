@@ -1,4 +1,4 @@
-import { Op, type Order, type WhereOptions } from 'sequelize';
+import { Op, literal, type Order, type WhereOptions } from 'sequelize';
 import type { EntryExportQuery, EntryTableQuery } from '@shared/schemas/show-day';
 import { Build } from '../../models/build';
 import { Entry } from '../../models/entry';
@@ -20,7 +20,8 @@ function orderFor(sort: EntryTableQuery['sort'], dir: 'asc' | 'desc'): Order {
     case 'title':
       return [[{ model: Build, as: 'build' }, 'title', d], ['id', 'ASC']];
     case 'owner':
-      return [[{ model: User, as: 'owner' }, 'name', d], ['id', 'ASC']];
+      // The entrant's name: a walk-up's own, else the owner's.
+      return [[literal('COALESCE("Entry"."walk_up_name", "owner"."name")'), d], ['id', 'ASC']];
     case 'class':
       return [[{ model: EventClass, as: 'eventClass' }, 'position', d], ['number', 'ASC NULLS LAST'], ['id', 'ASC']];
     case 'status':
@@ -43,7 +44,13 @@ function whereFor(eventId: number, q: EntryExportQuery): WhereOptions {
     if (/^\d{1,6}$/.test(text)) where.number = Number(text);
     else {
       const like = `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-      where[Op.or] = [{ '$build.title$': { [Op.iLike]: like } }, { '$owner.name$': { [Op.iLike]: like } }, { '$owner.email$': { [Op.iLike]: like } }];
+      where[Op.or] = [
+        { '$build.title$': { [Op.iLike]: like } },
+        { '$owner.name$': { [Op.iLike]: like }, walkUpName: null },
+        { '$owner.email$': { [Op.iLike]: like }, walkUpName: null },
+        { walkUpName: { [Op.iLike]: like } },
+        { walkUpEmail: { [Op.iLike]: like } },
+      ];
     }
   }
   return where as WhereOptions;

@@ -8,15 +8,28 @@ import { writeAudit } from '../audit/audit';
 import { mailOffer } from './entry-mail';
 
 /** Entries holding a place: those with a place, and waiting-list entries with an offer still open. */
+const holdingAPlace = (now: Date) => ({ [Op.or]: [{ status: { [Op.in]: [...ENTRY_PLACE_STATUSES] } }, { status: 'waiting_list', offerExpiresAt: { [Op.gt]: now } }] });
+
 export function placesTaken(eventId: number, classId: number | null, now: Date, transaction: Transaction) {
-  return Entry.count({
-    where: {
-      eventId,
-      ...(classId ? { classId } : {}),
-      [Op.or]: [{ status: { [Op.in]: [...ENTRY_PLACE_STATUSES] } }, { status: 'waiting_list', offerExpiresAt: { [Op.gt]: now } }],
-    },
-    transaction,
-  });
+  return Entry.count({ where: { eventId, ...(classId ? { classId } : {}), ...holdingAPlace(now) }, transaction });
+}
+
+/**
+ * Places left in each class, as `hasRoom` counts them (open offers hold a place): the smaller of the
+ * class's room and the show's; null where neither the class nor the show sets a limit.
+ */
+export async function placesLeftByClass(event: Pick<Event, 'id' | 'capacity'>, classes: readonly Pick<EventClass, 'id' | 'capacity'>[], now = new Date()): Promise<Map<number, number | null>> {
+  const counts = (await Entry.count({ where: { eventId: event.id, ...holdingAPlace(now) }, group: ['classId'] })) as unknown as { classId: number; count: number }[];
+  const takenIn = new Map(counts.map((c) => [Number(c.classId), Number(c.count)]));
+  const showTaken = counts.reduce((sum, c) => sum + Number(c.count), 0);
+  const showLeft = event.capacity === null ? null : Math.max(0, event.capacity - showTaken);
+  return new Map(
+    classes.map((c) => {
+      const classLeft = c.capacity === null ? null : Math.max(0, c.capacity - (takenIn.get(c.id) ?? 0));
+      const left = classLeft === null ? showLeft : showLeft === null ? classLeft : Math.min(classLeft, showLeft);
+      return [c.id, left];
+    }),
+  );
 }
 
 /** Is there a free place in this class of this show? (The show's row is locked by the caller.) */

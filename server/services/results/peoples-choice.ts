@@ -44,7 +44,7 @@ export async function setVotingWindow(eventId: number, open: boolean, person: { 
 export type VoteOutcome =
   | { ok: true; eventId: number; showSlug: string; entryNumber: number }
   | { ok: false; reason: 'not-entered' | 'closed' }
-  | { ok: false; reason: 'twice'; votedNumber: number | null };
+  | { ok: false; reason: 'twice'; eventId: number; votedNumber: number | null };
 
 /**
  * One visitor's vote for the car with this public code, in the show named by its address (`show`, the
@@ -66,7 +66,7 @@ export async function castVote(input: { code: string; show?: string; voterToken:
        ON CONFLICT (event_id, voter_hash) DO NOTHING RETURNING id`,
       { replacements: { eventId: event.id, entryId: entry.id, voterHash, addressHash: votingHash('address', event.id, input.address) }, type: QueryTypes.SELECT, transaction },
     );
-    if (inserted.length === 0) return { ok: false, reason: 'twice', votedNumber: await votedNumber(event.id, input.voterToken, transaction) };
+    if (inserted.length === 0) return { ok: false, reason: 'twice', eventId: event.id, votedNumber: await votedNumber(event.id, input.voterToken, transaction) };
     return { ok: true, eventId: event.id, showSlug: event.slug, entryNumber: entry.number! };
   });
 }

@@ -1,7 +1,7 @@
 import { Op, type Transaction } from 'sequelize';
 import { computeResults, type ResultInput, type ResultSheet, type ShowResults } from '@shared/calc/results';
 import { DEFAULT_RESULT_RULES, ShowResultRulesSchema, type ShowResultRules } from '@shared/schemas/judging';
-import type { OwnerCredit } from '@shared/schemas/owner-credit';
+import { entryCredit, type OwnerCredit } from '@shared/schemas/owner-credit';
 import { Build } from '../../models/build';
 import { User } from '../../models/user';
 import { Criterion } from '../../models/criterion';
@@ -59,13 +59,13 @@ export async function computeShowResults(eventId: number, transaction?: Transact
   const results: ShowResults = loaded.input.criteria.length ? computeResults(loaded.input) : { classes: [], bestOfShow: [], ties: [] };
   const builds = loaded.entries.length ? await Build.findAll({ where: { id: { [Op.in]: loaded.entries.map((e) => e.buildId) } }, attributes: ['id', 'title', 'code'], transaction }) : [];
   const buildById = new Map(builds.map((b) => [b.id, b]));
-  // Only the owner's public words are read: display name, and hometown and club where given.
+  // Only the owner's public words are read: display name, and hometown and club where given (a walk-up: the name taken at the gate).
   const owners = loaded.entries.length ? await User.findAll({ where: { id: { [Op.in]: [...new Set(loaded.entries.map((e) => e.ownerId))] } }, attributes: ['id', 'name', 'hometown', 'club'], transaction }) : [];
   const ownerById = new Map(owners.map((u): [number, OwnerCredit] => [u.id, { name: u.name, hometown: u.hometown ?? null, club: u.club ?? null }]));
   const cars = new Map<number, ResultCar>(
     loaded.entries.map((e) => {
       const b = buildById.get(e.buildId);
-      return [e.id, { entryId: e.id, number: e.number as number, title: b?.title ?? '', code: b?.code ?? '', classId: e.classId, className: e.eventClass?.name ?? '', ownerId: e.ownerId, owner: ownerById.get(e.ownerId) ?? { name: '', hometown: null, club: null } }];
+      return [e.id, { entryId: e.id, number: e.number as number, title: b?.title ?? '', code: b?.code ?? '', classId: e.classId, className: e.eventClass?.name ?? '', ownerId: e.ownerId, owner: entryCredit(e.walkUpName, ownerById.get(e.ownerId) ?? { name: '', hometown: null, club: null }) }];
     }),
   );
   return { ...loaded, results, cars };

@@ -170,7 +170,7 @@ describe('the owner’s card for an entry, and the show reminder that attaches i
     expect(text).toContain('LAKESIDE CRUISE NIGHT');
     expect(text).toContain('Customs');
     expect(numberOnPage(text)).toBe(entry.number);
-    expect(readQr(rasterize(res.body as Buffer, 100))?.data).toBe(`http://127.0.0.1:3999/c/${entry.code}`);
+    expect(readQr(rasterize(res.body as Buffer, 100))?.data).toBe(`http://127.0.0.1:3999/c/${entry.code}?show=${s.slug}&no=${entry.number}`); // marked for the gate
 
     const stranger = await signedIn();
     expect((await stranger.client.get(`/api/entries/${entry.id}/card.pdf`)).status).toBe(404);

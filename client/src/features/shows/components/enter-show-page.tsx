@@ -16,6 +16,7 @@ import { ErrorState, LoadingState } from '@client/components/ui/states';
 import { useBuilds } from '@client/features/builds/api/list-builds';
 import { usePublicShow } from '../api/get-public-show';
 import { useRegisterEntry } from '../api/register-entry';
+import { placesLeftWords, refundRuleWords } from '@shared/entry-terms-words';
 import { showTime } from './show-dates';
 
 /** The two choices as picked: option values are text until the schema reads them as ids. */
@@ -42,7 +43,7 @@ function EntryForm({ event: e, published }: { event: PublicEvent; published: Bui
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4">
       <SelectField label="Your car" placeholder="Pick a published build" {...register('buildId')} options={published.map((b) => ({ value: String(b.id), label: b.title }))} error={errors.buildId?.message} />
-      <SelectField label="Class" placeholder="Pick a class" {...register('classId')} options={e.classes.map((c) => ({ value: String(c.id), label: c.name }))} error={errors.classId?.message} hint={e.classes.find((c) => String(c.id) === classId)?.description} />
+      <SelectField label="Class" placeholder="Pick a class" {...register('classId')} options={e.classes.map((c) => ({ value: String(c.id), label: `${c.name} (${placesLeftWords(c.placesLeft)})` }))} error={errors.classId?.message} hint={e.classes.find((c) => String(c.id) === classId)?.description} />
       {e.asksFor.length ? (
         <fieldset>
           <legend className="text-sm font-semibold">This show asks for more than your name, e-mail and phone</legend>
@@ -58,6 +59,9 @@ function EntryForm({ event: e, published }: { event: PublicEvent; published: Bui
       ) : null}
       <p className="text-graphite">
         {e.entryFee > 0 ? `The entry gets its number at once and is confirmed when the fee of ${e.feeText} is paid.` : 'The show is free: the entry is confirmed at once.'} If the class or the show is full, the entry goes on the waiting list and you get an e-mail when a place frees.
+      </p>
+      <p>
+        <strong>Refunds:</strong> {refundRuleWords(e.refundRule, e.timeZone, e.entryFee)}
       </p>
       {formError ? <Notice tone="danger">{formError}</Notice> : null}
       <div>

@@ -38,7 +38,7 @@ const byDay = (a: EventSummary, b: EventSummary) => (STATUS_ORDER[a.status] ?? 5
 function actionFor(show: EventSummary): { to: string; label: string } {
   const onTheDay = show.status === 'show_day' || show.status === 'judging';
   if (onTheDay && show.myRoles.includes('organiser')) return { to: `/shows/${show.id}`, label: 'Today' };
-  if (onTheDay && show.myRoles.includes('gate')) return { to: `/shows/${show.id}/gate`, label: 'Check cars in' };
+  if (onTheDay && show.myRoles.includes('gate')) return { to: `/gate/${show.id}`, label: 'Check cars in' };
   if (show.status === 'judging' && show.myRoles.includes('judge')) return { to: `/judge/${show.id}`, label: 'Score your cars' };
   return { to: `/shows/${show.id}`, label: 'Open' };
 }

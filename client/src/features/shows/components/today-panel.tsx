@@ -30,7 +30,7 @@ export function TodayPanel({ show }: { show: EventDetail }) {
         </p>
       ) : null}
       <p className="mt-3 flex flex-wrap gap-4">
-        <Link to={`/shows/${show.id}/gate`} className="underline">Check cars in</Link>
+        <Link to={`/gate/${show.id}`} className="underline">Check cars in</Link>
         <Link to={`/shows/${show.id}/entries`} className="underline">Entries</Link>
       </p>
     </Panel>

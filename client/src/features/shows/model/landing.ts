@@ -15,7 +15,7 @@ export function landingFor(shows: EventSummary[], person: { isSiteAdmin: boolean
   const organising = holding('organiser');
   if (organising) return `/shows/${organising.id}`;
   const gate = holding('gate');
-  if (gate) return `/shows/${gate.id}/gate`;
+  if (gate) return `/gate/${gate.id}`;
   const judging = holding('judge', 'judging');
   if (judging) return `/judge/${judging.id}`;
   if (person.isSiteAdmin) return '/admin/accounts';

@@ -2,6 +2,7 @@ import { useId, useState } from 'react';
 import { useNumbers } from './numbers-context';
 import { UnitSystemSwitch } from '../unit-system-switch';
 import { NumberGroupView } from './number-group-view';
+import { GroupDiagrams } from './group-diagrams';
 import { groupWarnings } from '../../model/numbers/warning-names';
 import type { NumberGroup } from '../../model/numbers/types';
 
@@ -86,6 +87,7 @@ export function NumbersPanel() {
         {groups.filter((g) => g.rows.length).map((g) => (
           <div key={g.id}>
             <NumberGroupView group={g} showHint={false} />
+            <GroupDiagrams id={g.id} />
             {g.id === 'gearing' && g.rows.length ? <CruiseInput /> : null}
           </div>
         ))}
@@ -110,6 +112,7 @@ export function SectionNumbers({ section }: { section: NumberGroup['section'] })
         {mine.map((g) => (
           <div key={g.id}>
             <NumberGroupView group={g} />
+            <GroupDiagrams id={g.id} />
             {g.id === 'gearing' && g.rows.length ? <CruiseInput /> : null}
           </div>
         ))}

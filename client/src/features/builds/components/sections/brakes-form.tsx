@@ -1,4 +1,6 @@
-import { BRAKE_TYPES, BrakesSectionSchema, type BrakesSection } from '@shared/schemas/build-sections';
+import { BRAKE_TYPES, BrakesSectionSchema, CALIPER_KINDS, MM_RANGES, RADIUS_MODELS, type BrakesSection } from '@shared/schemas/build-sections';
+import { LengthMmField } from '../editor/length-mm-field';
+import { SectionNumbers } from '../numbers/numbers-panel';
 import type { OwnerBuild } from '@shared/schemas/build';
 import { BRAKE_TYPE_LABELS } from '@shared/build-sheet/choice-labels';
 import { useSaveSection } from '../../api/save-section';
@@ -7,8 +9,10 @@ import { MADE_BY_BLANKS, withBlanks } from '../editor/form-values';
 import { FieldGroup, SectionForm } from '../editor/section-form';
 import { Choice, FigureField, MadeByFields, NumberField, TextInput } from '../editor/fields';
 
-const END_TEXT = ['type', 'caliper', 'pad'];
-const TEXT = [...END_TEXT.map((k) => `front.${k}`), ...END_TEXT.map((k) => `rear.${k}`), 'masterCylinder', 'booster', 'parkingBrake', ...MADE_BY_BLANKS];
+const END_TEXT = ['type', 'caliper', 'pad', 'caliperKind'];
+const TEXT = [...END_TEXT.map((k) => `front.${k}`), ...END_TEXT.map((k) => `rear.${k}`), 'masterCylinder', 'booster', 'parkingBrake', 'hydraulics.radiusModel', ...MADE_BY_BLANKS];
+const CALIPER_LABELS = { opposed: 'Opposed (fixed)', floating: 'Floating (sliding)' };
+const RADIUS_LABELS = { mean: 'Mean radius (uniform wear, default)', 'uniform-pressure': 'Uniform pressure' };
 const fromBuild = (b: OwnerBuild) => withBlanks<BrakesSection>(b.sections.brakes, TEXT);
 const FIELDS = Object.keys(BrakesSectionSchema.shape);
 
@@ -18,7 +22,7 @@ export function BrakesForm({ build }: { build: OwnerBuild }) {
   const { register, control, formState: { errors } } = form;
   const f = { register, errors, form: 'brakes' as const };
   return (
-    <SectionForm id="brakes" title="Brakes" caution {...panel}>
+    <SectionForm id="brakes" title="Brakes" caution {...panel} below={<SectionNumbers section="brakes" />}>
       {(['front', 'rear'] as const).map((end) => (
         <FieldGroup key={end} title={end === 'front' ? 'Front brakes' : 'Rear brakes'}>
           <Choice {...f} name={`${end}.type`} label="Type" options={BRAKE_TYPES} labels={BRAKE_TYPE_LABELS} />
@@ -27,6 +31,10 @@ export function BrakesForm({ build }: { build: OwnerBuild }) {
           <FigureField control={control} form="brakes" name={`${end}.rotorThickness`} label="Rotor thickness" kind="length" />
           <TextInput {...f} name={`${end}.caliper`} label="Calipers" />
           <TextInput {...f} name={`${end}.pad`} label="Pads" />
+          <Choice {...f} name={`${end}.caliperKind`} label="Caliper kind" options={CALIPER_KINDS} labels={CALIPER_LABELS} />
+          <LengthMmField control={control} name={`${end}.pistonDiameterMm`} range={MM_RANGES.pistonDiameter(end === 'front' ? 'Front' : 'Rear')} />
+          <LengthMmField control={control} name={`${end}.padHeightMm`} range={MM_RANGES.padHeight(end === 'front' ? 'Front' : 'Rear')} />
+          <NumberField {...f} name={`${end}.padMu`} label="Pad friction coefficient (μ)" hint="Street pads are about 0.35 to 0.45." />
         </FieldGroup>
       ))}
       <div className="grid gap-4 sm:grid-cols-2">
@@ -34,6 +42,17 @@ export function BrakesForm({ build }: { build: OwnerBuild }) {
         <TextInput {...f} name="booster" label="Booster" />
         <TextInput {...f} name="parkingBrake" label="Parking brake" />
       </div>
+      <FieldGroup title="Pedal and master cylinder">
+        <NumberField {...f} name="hydraulics.pedalRatio" label="Pedal ratio" hint="Pivot to pad ÷ pivot to pushrod." />
+        <FigureField control={control} form="brakes" name="hydraulics.pedalForce" label="Pedal force" kind="force" />
+        <NumberField {...f} name="hydraulics.boosterAssist" label="Booster assist ratio" hint="1 or empty with no booster." />
+        <LengthMmField control={control} name="hydraulics.masterBoreMm" range={MM_RANGES.masterBore} />
+        <LengthMmField control={control} name="hydraulics.rearMasterBoreMm" range={MM_RANGES.rearMasterBore} />
+        <NumberField {...f} name="hydraulics.balanceFrontPercent" label="Balance bar, front share (%)" hint="With two master cylinders; 50 is centred." />
+        <FigureField control={control} form="brakes" name="hydraulics.valveKnee" label="Proportioning valve knee" kind="pressure" />
+        <NumberField {...f} name="hydraulics.valveSlope" label="Proportioning valve slope" />
+        <Choice {...f} name="hydraulics.radiusModel" label="Effective radius" options={RADIUS_MODELS} labels={RADIUS_LABELS} placeholder="Mean radius (default)" />
+      </FieldGroup>
       <MadeByFields register={register} errors={errors} control={control} />
     </SectionForm>
   );

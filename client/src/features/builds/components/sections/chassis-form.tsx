@@ -7,11 +7,11 @@ import { MADE_BY_BLANKS, withBlanks } from '../editor/form-values';
 import { SectionForm } from '../editor/section-form';
 import { Choice, FigureField, MadeByFields, TextInput } from '../editor/fields';
 import { SectionNumbers } from '../numbers/numbers-panel';
-import { FourLinkFields, SuspensionEndFields } from './suspension-end-fields';
+import { CgTiltFields, FourLinkFields, FrontGeometryFields, SuspensionEndFields } from './suspension-end-fields';
 import { TubesFields } from './tubes-fields';
 
 const END_TEXT = ['type', 'springType', 'dampers', 'antiRollBar', 'description'];
-const TEXT = ['frame', 'frameDescription', ...END_TEXT.map((k) => `front.${k}`), ...END_TEXT.map((k) => `rear.${k}`), ...MADE_BY_BLANKS];
+const TEXT = ['frame', 'frameDescription', 'cgTilt.raisedAxle', 'cgTilt.unit', ...END_TEXT.map((k) => `front.${k}`), ...END_TEXT.map((k) => `rear.${k}`), ...MADE_BY_BLANKS];
 const fromBuild = (b: OwnerBuild) => {
   const values = withBlanks<ChassisSection>(b.sections.chassis, TEXT);
   return { ...values, tubes: (values.tubes ?? []).map((t) => ({ ...t, material: t.material ?? '' })) };
@@ -35,7 +35,9 @@ export function ChassisForm({ build }: { build: OwnerBuild }) {
       <TubesFields register={register} errors={errors} control={control} />
       <SuspensionEndFields end="front" register={register} errors={errors} control={control} />
       <SuspensionEndFields end="rear" register={register} errors={errors} control={control} />
+      <FrontGeometryFields register={register} errors={errors} control={control} />
       <FourLinkFields register={register} errors={errors} control={control} />
+      <CgTiltFields register={register} errors={errors} control={control} />
       <MadeByFields register={register} errors={errors} control={control} />
     </SectionForm>
   );

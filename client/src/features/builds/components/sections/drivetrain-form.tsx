@@ -36,6 +36,8 @@ export function DrivetrainForm({ build }: { build: OwnerBuild }) {
         <TextInput {...f} name="clutch" label="Clutch" />
         <TextInput {...f} name="driveshaft" label="Driveshaft" />
         <FigureField control={control} form="drivetrain" name="topSpeed" label="Top speed" kind="speed" />
+        <NumberField {...f} name="quarterMileEt" label="Quarter mile, elapsed time (s)" hint="From a time slip." />
+        <FigureField control={control} form="drivetrain" name="quarterMileTrap" label="Quarter mile, trap speed" kind="speed" />
       </div>
       <MadeByFields register={register} errors={errors} control={control} />
     </SectionForm>

@@ -1,5 +1,5 @@
 import type { Control, FieldErrors, UseFormRegister } from 'react-hook-form';
-import { FOUR_LINK_POINTS, MM_RANGES, SPRING_TYPES, SUSPENSION_TYPES, type ChassisSection, type FourLinkPoint } from '@shared/schemas/build-sections';
+import { FOUR_LINK_POINTS, FRONT_PIVOTS, MM_RANGES, type FrontPivot, SPRING_TYPES, SUSPENSION_TYPES, type ChassisSection, type FourLinkPoint } from '@shared/schemas/build-sections';
 import { SPRING_LABELS, SUSPENSION_LABELS } from '@shared/build-sheet/choice-labels';
 import { Choice, FigureField, NumberField, TextInput } from '../editor/fields';
 import { FieldGroup } from '../editor/section-form';
@@ -40,6 +40,39 @@ export function FourLinkFields({ control }: Omit<Props, 'end'>) {
         </div>
       ))}
       <LengthMmField control={control} name="rear.fourLink.cgHeightMm" range={MM_RANGES.cgHeight} />
+    </FieldGroup>
+  );
+}
+
+/** Front view of the front double wishbone (kept in mm): x outward from the centreline, y up from the ground. */
+export function FrontGeometryFields({ control }: Omit<Props, 'end'>) {
+  return (
+    <FieldGroup title="Front double wishbone (front view)">
+      <p className="text-sm text-graphite sm:col-span-2">x: outward from the car’s centreline; y: up from the ground, at ride height. For the roll centre and camber curve.</p>
+      {(Object.keys(FRONT_PIVOTS) as FrontPivot[]).map((point) => (
+        <div key={point} className="grid grid-cols-2 gap-2 sm:col-span-2">
+          <LengthMmField control={control} name={`front.geometry.${point}.x`} range={MM_RANGES.pivotX(point)} />
+          <LengthMmField control={control} name={`front.geometry.${point}.y`} range={MM_RANGES.pivotY(point)} />
+        </div>
+      ))}
+      <LengthMmField control={control} name="front.geometry.contactPatchXMm" range={MM_RANGES.contactPatchX} />
+      <LengthMmField control={control} name="front.geometry.wheelCentreHeightMm" range={MM_RANGES.wheelCentreHeight} />
+    </FieldGroup>
+  );
+}
+
+/** A tilt weigh-in: weigh level, raise one axle, weigh the other again. */
+export function CgTiltFields({ register, errors, control }: Omit<Props, 'end'>) {
+  const f = { register, errors, form: 'chassis' as const };
+  return (
+    <FieldGroup title="Tilt weigh-in (centre-of-gravity height)">
+      <Choice {...f} name="cgTilt.raisedAxle" label="Axle raised" options={['front', 'rear']} labels={{ front: 'Front', rear: 'Rear' }} />
+      <Choice {...f} name="cgTilt.unit" label="Weights in" options={['kg', 'lb']} labels={{ kg: 'kg', lb: 'lb' }} />
+      <NumberField {...f} name="cgTilt.totalWeight" label="Total weight" />
+      <NumberField {...f} name="cgTilt.lowerAxleLevel" label="Axle on the scales, car level" />
+      <NumberField {...f} name="cgTilt.lowerAxleRaised" label="Axle on the scales, other axle raised" />
+      <LengthMmField control={control} name="cgTilt.raisedHeightMm" range={MM_RANGES.tiltRaise} />
+      <LengthMmField control={control} name="cgTilt.wheelCentreHeightMm" range={MM_RANGES.wheelCentreHeight} />
     </FieldGroup>
   );
 }

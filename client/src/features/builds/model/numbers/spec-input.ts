@@ -1,9 +1,10 @@
 import { specCheck, type Figure, type SpecCheckInput, type SpecWarning } from '@shared/calc';
 import type { Sections } from '@shared/schemas/build-sections';
+import { engineeringChecks } from '@shared/build-sheet/engineering-checks';
 import type { FigureInput } from '@shared/schemas/figure';
 import type { FormKey } from '../form-keys';
 
-export type Overview = { weight?: FigureInput | null };
+export type Overview = { weight?: FigureInput | null; frontWeightPercent?: number };
 
 const inches = (value: number | undefined): Figure | undefined => (value === undefined ? undefined : { value, unit: 'in', provenance: 'estimated' });
 
@@ -64,7 +65,8 @@ export function specWarnings(sections: Sections, overview: Overview): PlacedWarn
   const everywhere = specCheck({ ...sections, overview: { weight: overview.weight ?? undefined } } as unknown as SpecCheckInput).filter((w) => w.code === 'measured_without_date');
   const seen = new Set<string>();
   const placed: PlacedWarning[] = [];
-  for (const w of [...main, ...everywhere]) {
+  const engineering = engineeringChecks(sections, { weight: overview.weight, frontWeightPercent: overview.frontWeightPercent });
+  for (const w of [...main, ...engineering, ...everywhere]) {
     const p = place(w);
     if (!p) continue;
     const key = `${p.code}:${p.form}.${p.path}`;

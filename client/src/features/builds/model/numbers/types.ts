@@ -10,13 +10,13 @@ import type { FigureInput } from '@shared/schemas/figure';
  */
 export type NumberRow = { label: string; value: string; other?: string; estimate?: boolean; provenance?: 'estimated' | 'target' };
 
-export type NumberGroupId = 'engine' | 'power' | 'gearing' | 'tyres' | 'spacing' | 'suspension' | 'antiSquat' | 'tubes' | 'corners';
+export type NumberGroupId = 'engine' | 'power' | 'gearing' | 'tyres' | 'spacing' | 'suspension' | 'antiSquat' | 'tubes' | 'corners' | 'brakes' | 'frontGeometry' | 'cgHeight' | 'quarterMile';
 
 export type NumberGroup = {
   id: NumberGroupId;
   title: string;
   /** Which editor section it belongs under on a phone. */
-  section: 'engine' | 'drivetrain' | 'chassis' | 'wheels' | 'weighIns' | 'overview';
+  section: 'engine' | 'drivetrain' | 'chassis' | 'brakes' | 'wheels' | 'weighIns' | 'overview';
   rows: NumberRow[];
   /** What is missing, when nothing can be worked out yet. */
   hint?: string;

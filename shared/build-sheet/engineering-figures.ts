@@ -1,0 +1,133 @@
+// The second round of the numbers, read off the build sheet once for every screen: the brake
+// chain and split, the front double wishbone in front view, the CG height from a tilt weigh-in and
+// the quarter-mile estimate, each as a result, as what is still missing, or as why it cannot be
+// worked out. The editor's numbers panel, its diagrams and the public page all read this.
+import {
+  brakeSystem,
+  camberCurve,
+  CalcInputError,
+  cgHeightFromTilt,
+  figureValueIn,
+  frontViewCentres,
+  quarterMileEstimate,
+  type BrakeSystemInput,
+  type BrakeSystemResult,
+  type CamberCurve,
+  type CgHeightResult,
+  type FrontGeometryInput,
+  type FrontViewCentres,
+  type QuarterMileEstimate,
+  type QuantityKind,
+  type UnitOf,
+} from '../calc';
+import type { BrakesSection, ChassisSection, Sections } from '../schemas/build-sections';
+import type { FigureInput } from '../schemas/figure';
+
+export type Worked<T> = { status: 'ok'; value: T } | { status: 'missing'; hint: string } | { status: 'refused'; field: string; reason: string };
+
+const refused = (err: unknown): Worked<never> => {
+  if (err instanceof CalcInputError) return { status: 'refused', field: err.field, reason: err.reason };
+  throw err;
+};
+
+function valueIn<K extends QuantityKind>(kind: K, figure: FigureInput | undefined, unit: UnitOf<K>): number | undefined {
+  if (!figure || !Number.isFinite(figure.value)) return undefined;
+  try {
+    return figureValueIn(kind, figure, unit);
+  } catch (err) {
+    if (err instanceof CalcInputError) return undefined;
+    throw err;
+  }
+}
+
+/** Pedal force used when the owner gives none: about 100 lbf, a firm stop (common practice). */
+export const DEFAULT_PEDAL_FORCE_N = 445;
+
+export type BrakeFigures = BrakeSystemResult & { input: BrakeSystemInput; pedalForceAssumed: boolean };
+
+export function brakeFigures(brakes: BrakesSection | undefined): Worked<BrakeFigures> {
+  const h = brakes?.hydraulics;
+  const end = (e: BrakesSection['front']) => {
+    const rotor = valueIn('length', e?.rotorDiameter, 'mm');
+    if (!e?.caliperKind || !e.pistonDiameterMm || !e.padHeightMm || !e.padMu || rotor === undefined) return undefined;
+    const count = e.caliperPistons ?? (e.caliperKind === 'opposed' ? 2 : 1);
+    // Opposed calipers count pistons on both sides: half push each pad.
+    const perSide = e.caliperKind === 'opposed' ? Math.max(1, Math.floor(count / 2)) : count;
+    const diameters = Array.from({ length: perSide }, () => e.pistonDiameterMm as number);
+    return {
+      caliper: e.caliperKind === 'opposed' ? { kind: 'opposed' as const, pistonDiametersPerSideMm: diameters } : { kind: 'floating' as const, pistonDiametersMm: diameters },
+      padMu: e.padMu,
+      rotorDiameterMm: rotor,
+      padHeightMm: e.padHeightMm,
+    };
+  };
+  const front = end(brakes?.front);
+  const rear = end(brakes?.rear);
+  if (!h?.pedalRatio || !h.masterBoreMm || !front || !rear) {
+    return { status: 'missing', hint: 'Enter the pedal ratio, the master cylinder bore and, for each axle, the caliper type, piston diameter, pad height, pad friction and rotor diameter for the brake split.' };
+  }
+  const pedalForce = valueIn('force', h.pedalForce, 'N');
+  const knee = valueIn('pressure', h.valveKnee, 'bar');
+  const input: BrakeSystemInput = {
+    pedalForceN: pedalForce ?? DEFAULT_PEDAL_FORCE_N,
+    pedalRatio: h.pedalRatio,
+    boosterAssist: h.boosterAssist,
+    master: h.rearMasterBoreMm ? { kind: 'dual', frontBoreMm: h.masterBoreMm, rearBoreMm: h.rearMasterBoreMm, frontShare: (h.balanceFrontPercent ?? 50) / 100 } : { kind: 'single', boreMm: h.masterBoreMm },
+    ...(knee !== undefined && h.valveSlope ? { valve: { kneeBar: knee, slope: h.valveSlope } } : {}),
+    front,
+    rear,
+    radiusModel: h.radiusModel,
+  };
+  try {
+    return { status: 'ok', value: { ...brakeSystem(input), input, pedalForceAssumed: pedalForce === undefined } };
+  } catch (err) {
+    return refused(err);
+  }
+}
+
+export type FrontGeometryFigures = { input: FrontGeometryInput; centres: FrontViewCentres; curve: CamberCurve; wheelCentreHeightMm?: number };
+
+export function frontGeometryFigures(chassis: ChassisSection | undefined): Worked<FrontGeometryFigures> {
+  const g = chassis?.front?.geometry;
+  const point = (p?: { x?: number; y?: number }) => (p?.x !== undefined && p.y !== undefined ? { x: p.x, y: p.y } : undefined);
+  const [upperInner, upperOuter, lowerInner, lowerOuter] = [g?.upperInner, g?.upperOuter, g?.lowerInner, g?.lowerOuter].map(point);
+  if (!upperInner || !upperOuter || !lowerInner || !lowerOuter || g?.contactPatchXMm === undefined) {
+    return { status: 'missing', hint: 'Enter the four front pivot points and the contact patch for the roll centre and camber curve.' };
+  }
+  const input: FrontGeometryInput = { upper: { inner: upperInner, outer: upperOuter }, lower: { inner: lowerInner, outer: lowerOuter }, contactPatch: { x: g.contactPatchXMm, y: 0 } };
+  try {
+    return { status: 'ok', value: { input, centres: frontViewCentres(input), curve: camberCurve(input), wheelCentreHeightMm: g.wheelCentreHeightMm } };
+  } catch (err) {
+    return refused(err);
+  }
+}
+
+export type CgFigures = CgHeightResult & { unit: 'mm' };
+
+export function cgHeightFigures(chassis: ChassisSection | undefined): Worked<CgFigures> {
+  const t = chassis?.cgTilt;
+  const wheelbase = valueIn('length', chassis?.wheelbase, 'mm');
+  if (!t?.raisedHeightMm || !t.wheelCentreHeightMm || !t.totalWeight || !t.lowerAxleLevel || !t.lowerAxleRaised || wheelbase === undefined) {
+    return { status: 'missing', hint: 'Enter the wheelbase and a tilt weigh-in (total weight, the axle on the scales level and raised, the raise and the wheel centre height) for the CG height.' };
+  }
+  try {
+    const r = cgHeightFromTilt({ totalWeight: t.totalWeight, wheelbase, wheelCentreHeight: t.wheelCentreHeightMm, raisedHeight: t.raisedHeightMm, lowerAxleWeightLevel: t.lowerAxleLevel, lowerAxleWeightRaised: t.lowerAxleRaised });
+    return { status: 'ok', value: { ...r, unit: 'mm' } };
+  } catch (err) {
+    return refused(err);
+  }
+}
+
+export function quarterMileFigures(sections: Sections, weight: FigureInput | null | undefined): Worked<QuarterMileEstimate & { at: 'flywheel' | 'wheel' }> {
+  const engine = sections.engine;
+  const flywheel = valueIn('power', engine?.flywheelPower, 'kW');
+  const wheel = valueIn('power', engine?.wheelPower, 'kW');
+  const kg = valueIn('mass', weight ?? undefined, 'kg');
+  const kw = flywheel ?? wheel;
+  if (kw === undefined || kg === undefined) return { status: 'missing', hint: 'Enter the power and the car’s weight for a quarter-mile estimate.' };
+  try {
+    return { status: 'ok', value: { ...quarterMileEstimate({ power: { value: kw, unit: 'kW' }, weight: { value: kg, unit: 'kg' } }), at: flywheel !== undefined ? 'flywheel' : 'wheel' } };
+  } catch (err) {
+    return refused(err);
+  }
+}
