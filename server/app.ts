@@ -23,6 +23,8 @@ import { emailVerificationsRouter } from './routes/email-verifications';
 import { adminRouter } from './routes/admin';
 import { buildsRouter } from './routes/builds';
 import { buildRecordsRouter } from './routes/build-records';
+import { buildLogRouter } from './routes/build-log';
+import { buildQuestionsRouter } from './routes/build-questions';
 import { PHOTO_UPLOAD_PATH, photosRouter } from './routes/photos';
 import { cardsRouter } from './routes/cards';
 import { buildPreviewRouter } from './routes/build-preview';
@@ -43,6 +45,7 @@ import { EVENT_LOGO_PATH, eventLogoRouter } from './routes/event-logo';
 import { cardPrintsRouter } from './routes/card-prints';
 import { peoplesChoiceRouter } from './routes/peoples-choice';
 import { votePagesRouter } from './pages/vote-router';
+import { buildLogPagesRouter } from './pages/build-log-router';
 import { resultsRouter } from './routes/results';
 
 const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
@@ -63,7 +66,7 @@ function apiRouter() {
   api.use(passport.session());
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
-  api.use(buildsRouter, buildRecordsRouter, photosRouter, cardsRouter, buildPreviewRouter);
+  api.use(buildsRouter, buildRecordsRouter, buildLogRouter, buildQuestionsRouter, photosRouter, cardsRouter, buildPreviewRouter);
   api.use(eventsRouter, eventLogoRouter, eventPeopleRouter, entriesRouter, showDayRouter, judgingRouter, cardPrintsRouter, peoplesChoiceRouter, resultsRouter);
   api.use(apiNotFound);
   return api;
@@ -116,6 +119,7 @@ export function createApp(): Express {
   app.use('/api', apiRouter());
   app.use(mediaRouter); // uploaded photos under /media
   app.use(votePagesRouter); // people's choice votes from the public build page (form POSTs, no session)
+  app.use(buildLogPagesRouter); // a build's log page, its Atom feed and visitors' questions (form POSTs, no session)
   app.use(sitePagesRouter); // the home page and the list of published builds, server HTML
   app.use(pagesRouter); // public pages such as /c/<code>, complete HTML without the app bundle
   app.use(eventPagesRouter); // public show pages /e/<slug> and their calendar files

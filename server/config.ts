@@ -40,6 +40,8 @@ const EnvSchema = z.object({
   VOTE_RATE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(10),
   VOTE_NEW_VOTER_LIMIT: z.coerce.number().int().min(1).default(10),
   VOTE_NEW_VOTER_WINDOW_MINUTES: z.coerce.number().int().min(1).default(10),
+  QUESTION_RATE_LIMIT: z.coerce.number().int().min(1).default(5),
+  QUESTION_RATE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(60),
   PHOTO_UPLOADS_PER_WINDOW: z.coerce.number().int().min(1).default(120),
   PHOTO_REQUEST_MEGAPIXELS: z.coerce.number().int().min(1).default(100),
   PHOTO_MEGAPIXELS_PER_WINDOW: z.coerce.number().int().min(1).default(1500),
@@ -203,6 +205,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     /** Counted votes (each a new voter) per address per window: slows one machine clearing its cookies to a third of the attempts limit. */
     voteNewVoterLimit: e.VOTE_NEW_VOTER_LIMIT,
     voteNewVoterWindowMs: e.VOTE_NEW_VOTER_WINDOW_MINUTES * 60 * 1000,
+    /** Visitors' questions per address per window, refused ones included: a person asks a few, a robot many. */
+    questionRateLimit: e.QUESTION_RATE_LIMIT,
+    questionRateWindowMs: e.QUESTION_RATE_WINDOW_MINUTES * 60 * 1000,
     /** Upload requests per person per window (the editor sends one photo per request). */
     photoUploadsPerWindow: e.PHOTO_UPLOADS_PER_WINDOW,
     /** Decoded megapixels of all files in one upload request together. */

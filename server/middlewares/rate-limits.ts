@@ -193,3 +193,14 @@ export const voteNewVoterLimiter = limiter('vote-new-voter', {
   message: 'Many new voters from this network in a few minutes. Wait a while and try again.',
   skipFailedRequests: true,
 });
+
+/**
+ * Visitors' questions per address, refused ones included (before the body is read). A person at a show
+ * asks one or two; a show's Wi-Fi shares an address, so the limit is per hour rather than per day.
+ */
+export const questionLimiter = limiter('question', {
+  windowMs: config.questionRateWindowMs,
+  limit: config.questionRateLimit,
+  key: ip,
+  message: 'Many questions from this network. Wait a while and try again.',
+});

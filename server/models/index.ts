@@ -26,8 +26,10 @@ import { ManualTieBreak } from './manual-tie-break';
 import { PublishedResults } from './published-results';
 import { PaymentIssue } from './payment-issue';
 import { GateCheckIn } from './gate-check-in';
+import { BuildLogPost } from './build-log-post';
+import { BuildQuestion } from './build-question';
 
-for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote, ManualTieBreak, PublishedResults, PaymentIssue, GateCheckIn]) {
+for (const model of [User, PasswordResetToken, EmailVerificationToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote, ManualTieBreak, PublishedResults, PaymentIssue, GateCheckIn, BuildLogPost, BuildQuestion]) {
   model.initModel(sequelize);
 }
 
@@ -48,6 +50,10 @@ Build.hasMany(WeighIn, { foreignKey: 'buildId', as: 'weighIns', onDelete: 'CASCA
 WeighIn.belongsTo(Build, { foreignKey: 'buildId' });
 Build.hasMany(FigureChange, { foreignKey: 'buildId', as: 'figureChanges', onDelete: 'CASCADE' });
 FigureChange.belongsTo(Build, { foreignKey: 'buildId' });
+Build.hasMany(BuildLogPost, { foreignKey: 'buildId', as: 'logPosts', onDelete: 'CASCADE' });
+BuildLogPost.belongsTo(Build, { foreignKey: 'buildId' });
+Build.hasMany(BuildQuestion, { foreignKey: 'buildId', as: 'questions', onDelete: 'CASCADE' });
+BuildQuestion.belongsTo(Build, { foreignKey: 'buildId' });
 
 Event.hasMany(EventClass, { foreignKey: 'eventId', as: 'classes', onDelete: 'CASCADE' });
 EventClass.belongsTo(Event, { foreignKey: 'eventId' });
@@ -68,4 +74,4 @@ CardPrint.belongsTo(EventClass, { foreignKey: 'classId', as: 'eventClass' });
 Vote.belongsTo(Entry, { foreignKey: 'entryId', as: 'entry' });
 
 export { Event, EventClass, Criterion, EventMembership, EventInvitation, Entry, AuditLine, JudgeAssignment, Score, SheetNote, CardPrint, Vote, ManualTieBreak, PublishedResults };
-export { sequelize, User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode };
+export { sequelize, User, PasswordResetToken, CaughtMail, Build, BuildSection, Photo, DynoRun, WeighIn, FigureChange, RetiredBuildCode, BuildLogPost, BuildQuestion };

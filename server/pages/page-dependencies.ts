@@ -19,6 +19,8 @@ export const PAGE_SOURCES = {
   photos: ['build:build_id'],
   dyno_runs: ['build:build_id'],
   weigh_ins: ['build:build_id'],
+  build_log_posts: ['build:build_id'],
+  build_questions: ['build:build_id'],
   users: ['user:id', 'users'],
   events: ['event:id', 'events'],
   event_classes: ['event:event_id'],

@@ -10,6 +10,9 @@ import { DISPLACEMENT_ROW, engineLine, sectionViews, type SectionView } from '@s
 import { DynoChart } from '@templates/charts/dyno-chart';
 import { PAGE_CSS } from './page-styles';
 import { PageHead } from './page-head';
+import { BUILD_LOG_CSS } from './build-log-styles';
+import type { BuildOverTime } from '@shared/schemas/build-log';
+import { LogSection, QuestionsSection } from './build-log-sections';
 
 /**
  * What a show adds to the page: the entry, and while the show's people's choice window is open, the
@@ -204,7 +207,7 @@ function ShowEntries({ slots }: { slots: ShowEntrySlot[] }) {
   );
 }
 
-function Page({ build, units, shows, preview }: { build: PublicBuild; units: UnitSystem; shows: ShowEntrySlot[]; preview: 'draft' | 'published' | null }) {
+function Page({ build, units, shows, preview, overTime }: { build: PublicBuild; units: UnitSystem; shows: ShowEntrySlot[]; preview: 'draft' | 'published' | null; overTime: BuildOverTime | null }) {
   const { heading, kicker } = headlineOf(build);
   const photo = cover(build);
   const figures = computeKeyFigures(build);
@@ -225,7 +228,7 @@ function Page({ build, units, shows, preview }: { build: PublicBuild; units: Uni
   const gallery = build.photos.filter((p) => p !== photo);
   return (
     <html lang="en">
-      <PageHead title={`${title} · Placard`} shareTitle={title} description={description} css={PAGE_CSS} url={build.url} image={og ? { url: og.jpeg, width: og.width, height: og.height } : null} noindex={Boolean(preview)} />
+      <PageHead title={`${title} · Placard`} shareTitle={title} description={description} css={overTime ? PAGE_CSS + BUILD_LOG_CSS : PAGE_CSS} url={build.url} image={og ? { url: og.jpeg, width: og.width, height: og.height } : null} noindex={Boolean(preview)} />
       <body>
         <header className="bar">
           <a className="brand" href="/">
@@ -269,11 +272,13 @@ function Page({ build, units, shows, preview }: { build: PublicBuild; units: Uni
                 ))}
             </section>
           ) : null}
+          {overTime ? <QuestionsSection code={build.code} answers={overTime.answers} /> : null}
           {views.map((v) => (
             <Section key={v.kind} view={v} />
           ))}
           <Dyno build={build} units={units} />
           <WeighIns build={build} units={units} />
+          {overTime ? <LogSection code={build.code} overTime={overTime} /> : null}
           {gallery.length ? (
             <section id="photos" aria-labelledby="h-photos">
               <h2 id="h-photos">Photos</h2>
@@ -315,8 +320,9 @@ function Page({ build, units, shows, preview }: { build: PublicBuild; units: Uni
 
 /** The whole public page as a string: complete HTML with its style inlined and no script. */
 /** `preview` marks the owner's own look at the page (a draft included), never cached or indexed. */
-export function renderPublicBuildPage(build: PublicBuild, units: UnitSystem, shows: ShowEntrySlot[] = [], preview: 'draft' | 'published' | null = null): string {
-  return `<!doctype html>${renderToStaticMarkup(<Page build={build} units={units} shows={shows} preview={preview} />)}`;
+/** `overTime` adds the build log and the questions (left out, the page is the build sheet alone). */
+export function renderPublicBuildPage(build: PublicBuild, units: UnitSystem, shows: ShowEntrySlot[] = [], preview: 'draft' | 'published' | null = null, overTime: BuildOverTime | null = null): string {
+  return `<!doctype html>${renderToStaticMarkup(<Page build={build} units={units} shows={shows} preview={preview} overTime={overTime} />)}`;
 }
 
 /** One plain page for every code that is not a published build, so a guess learns nothing. */

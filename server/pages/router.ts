@@ -6,6 +6,8 @@ import type { UnitSystem } from '@shared/calc';
 import { loadPublicBuild, publicVersion } from '../services/public/public-builds';
 import { presentPublicBuild } from '../presenters/public-build';
 import { showSlotsOfBuild } from '../services/public/public-events';
+import { loadPublicLogAndAnswers } from '../services/public/public-build-log';
+import { presentBuildOverTime } from '../presenters/build-log';
 import { NOT_FOUND_HTML, renderPublicBuildPage } from './public-build-page';
 import type { CachedPage, VoteSlot } from './page-cache';
 import { cachedPage, sendCached } from './cached-page';
@@ -138,8 +140,9 @@ pagesRouter.get('/c/:code', readVoterCookie, async (req, res) => {
       const build = version ? await loadPublicBuild(code) : null;
       if (!version || !build) return null;
       const shows = await showSlotsOfBuild(code, showFirst);
+      const overTime = presentBuildOverTime(await loadPublicLogAndAnswers(build.id));
       return {
-        html: renderPublicBuildPage(presentPublicBuild(build), units, shows),
+        html: renderPublicBuildPage(presentPublicBuild(build), units, shows, null, overTime),
         tags: pageTags.build(build.id, build.ownerId, shows.map((s) => s.eventId)),
         version,
         votes: shows.flatMap((s): VoteSlot[] => (s.vote ? [{ ...s.vote, anchor: `vote-${s.showSlug}`, entryNumber: Number(s.entryNumber) }] : [])),

@@ -6,7 +6,7 @@ import { publicBuildUrl } from './build';
 import { presentPublicBuild } from './public-build';
 
 /** What the card designer opens with: the settings, and the build as a card can print it (its public face only). */
-export function presentCardSettings(build: Build, settings: CardSettings): CardSettingsResponse {
+export function presentCardSettings(build: Build, settings: CardSettings, highlights: CardSettingsResponse['highlights']): CardSettingsResponse {
   const face = presentPublicBuild(build);
   return {
     settings,
@@ -20,5 +20,6 @@ export function presentCardSettings(build: Build, settings: CardSettings): CardS
       sections: SECTION_KINDS.filter((kind) => face.sections[kind]),
       figures: availableFigures(face),
     },
+    highlights: highlights.map((h) => ({ kind: h.kind, id: h.id, label: h.label })),
   };
 }

@@ -7,6 +7,8 @@ import { authorizeBuild } from '../policies/build';
 import { loadFullBuildOrThrow } from '../services/builds/builds';
 import { presentPublicBuild } from '../presenters/public-build';
 import { renderPublicBuildPage } from '../pages/public-build-page';
+import { loadPublicLogAndAnswers } from '../services/public/public-build-log';
+import { presentBuildOverTime } from '../presenters/build-log';
 
 export const buildPreviewRouter = Router();
 
@@ -18,6 +20,8 @@ buildPreviewRouter.get('/builds/:id/preview', requireUser, async (req, res) => {
   const { units } = parseQuery(req, PreviewQuerySchema);
   const build = await loadFullBuildOrThrow(id);
   authorizeBuild(currentUser(req), 'edit', build);
-  const html = renderPublicBuildPage(presentPublicBuild(build), units, [], build.published ? 'published' : 'draft');
+  // The published posts and the answered questions, as visitors will see them (drafts and the inbox stay out).
+  const overTime = presentBuildOverTime(await loadPublicLogAndAnswers(build.id));
+  const html = renderPublicBuildPage(presentPublicBuild(build), units, [], build.published ? 'published' : 'draft', overTime);
   res.set('Cache-Control', 'no-store').type('html').send(html);
 });

@@ -11,6 +11,7 @@ import { loadCoverImage, qrPng, qrSvg, renderCard, saveCardSettings, savedCardSe
 import { publicBuildUrl } from '../presenters/build';
 import { presentPublicBuild } from '../presenters/public-build';
 import { presentCardSettings } from '../presenters/card-settings';
+import { cardHighlightChoices, cardHighlightWords, checkCardHighlight } from '../services/builds/card-highlight';
 
 /** The owner's windshield cards and QR codes (mounted under /api, after session and CSRF). */
 export const cardsRouter = Router();
@@ -21,7 +22,7 @@ cardsRouter.get('/builds/:id/card-settings', requireUser, async (req, res) => {
   const { id } = parseParams(req, IdParamSchema);
   const build = await loadFullBuildOrThrow(id);
   authorizeBuild(currentUser(req), 'edit', build);
-  res.json(presentCardSettings(build, savedCardSettings(build)));
+  res.json(presentCardSettings(build, savedCardSettings(build), await cardHighlightChoices(build.id)));
 });
 
 cardsRouter.put('/builds/:id/card-settings', requireUser, async (req, res) => {
@@ -29,6 +30,7 @@ cardsRouter.put('/builds/:id/card-settings', requireUser, async (req, res) => {
   const settings = parseBody(req, CardSettingsReplaceSchema);
   const build = await findBuild(id);
   authorizeBuild(currentUser(req), 'edit', build);
+  await checkCardHighlight(build.id, settings.highlight);
   await saveCardSettings(build, settings);
   res.json({ settings });
 });
@@ -41,7 +43,11 @@ cardsRouter.get('/builds/:id/card.pdf', requireUser, cardRenderLimiter, async (r
   const settings = settingsFromQuery(savedCardSettings(build), query);
   // The card is drawn from the public face only, so nothing private can reach the paper.
   const publicBuild = presentPublicBuild(build);
-  const { pdf, leftOff } = await renderCard(publicBuild, settings, { show: showFromQuery(query), cover: await loadCoverImage(publicBuild, settings) });
+  const { pdf, leftOff } = await renderCard(publicBuild, settings, {
+    show: showFromQuery(query),
+    cover: await loadCoverImage(publicBuild, settings),
+    highlight: await cardHighlightWords(build.id, settings.highlight),
+  });
   const file = `placard-${build.code}-${settings.design}-${settings.paper}-${settings.orientation}.pdf`;
   res
     .type('application/pdf')

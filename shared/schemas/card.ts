@@ -72,6 +72,14 @@ export const CARD_ENTRY_NUMBER_MAX = 9999;
 export const CARD_SHOW_NAME_MAX = 80;
 export const CARD_CLASS_NAME_MAX = 60;
 
+/** One answered question or one published log post the owner chooses to print on the card. */
+export const CARD_HIGHLIGHT_KINDS = ['question', 'log'] as const;
+export const CardHighlightSchema = z.object({
+  kind: z.enum(CARD_HIGHLIGHT_KINDS, { error: 'Highlight is a question or a log post.' }),
+  id: z.number({ error: 'Choose the question or post.' }).int().positive().max(2_147_483_647),
+});
+export type CardHighlight = z.infer<typeof CardHighlightSchema>;
+
 export const CardSettingsSchema = z.object({
   design: z.enum(CARD_DESIGNS, { error: `Design must be one of ${CARD_DESIGNS.join(', ')}.` }).default('poster'),
   paper: z.enum(PAPERS, { error: `Paper must be one of ${PAPERS.join(', ')}.` }).default('letter'),
@@ -86,6 +94,8 @@ export const CardSettingsSchema = z.object({
     // All of them: a card prints the ones the build has, so a sparse build still shows what it has.
     .default([...CARD_FIGURES]),
   units: z.enum(UNIT_SYSTEMS, { error: 'Units must be metric or imperial.' }).default('imperial'),
+  /** Left out or null: none (settings saved before highlights existed have no such key). */
+  highlight: CardHighlightSchema.nullable().optional(),
 });
 export type CardSettings = z.infer<typeof CardSettingsSchema>;
 export type CardSettingsInput = z.input<typeof CardSettingsSchema>;
@@ -116,6 +126,8 @@ export const CardQuerySchema = z.object({
   figures: csv(z.enum(CARD_FIGURES, { error: `Figures must be among ${CARD_FIGURES.join(', ')}.` })).optional(),
   units: CardSettingsSchema.shape.units.removeDefault().optional(),
   download: z.enum(['0', '1']).optional(),
+  /** The highlight to print: `question:<id>`, `log:<id>` or `none`; left out, the saved one. */
+  highlight: z.string().regex(/^(none|(question|log):[1-9][0-9]{0,9})$/, { error: 'Highlight is none, question:<id> or log:<id>.' }).optional(),
   ...CardShowSchema.shape,
 });
 export type CardQuery = z.infer<typeof CardQuerySchema>;
@@ -126,7 +138,12 @@ export type CardSettingsResponse = {
   saved: boolean;
   /** sections: the ones the build has filled in; figures: the headline figures it can print. */
   build: { id: number; code: string; title: string; published: boolean; publicUrl: string; sections: SectionKind[]; figures: CardFigureKey[] };
+  /** What the card may carry as its highlight: the answered questions and the published log posts, in words. */
+  highlights: Array<CardHighlight & { label: string }>;
 };
+
+/** The label printed before a highlight on the card. */
+export const CARD_HIGHLIGHT_LABELS: Record<CardHighlight['kind'], string> = { question: 'ASKED OFTEN', log: 'FROM THE BUILD LOG' };
 
 /** The response header of a card PDF naming what did not fit (JSON array of CardLeftOff, URI-encoded). */
 export const CARD_LEFT_OFF_HEADER = 'X-Card-Left-Off';

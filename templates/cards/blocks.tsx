@@ -384,6 +384,23 @@ export function creditsBlock({ content, k, leg }: Ctx): BlockSpec | undefined {
   };
 }
 
+/** The owner's chosen highlight: its label in the signal colour, the question or post title, then the words; cut like the story when short of room. */
+export function highlightBlock({ content, k, leg }: Ctx): BlockSpec | undefined {
+  const h = content.highlight;
+  if (!h) return undefined;
+  const words = h.text.replace(/\s+/g, ' ').trim();
+  const item = { label: 'highlight', lines: para([{ text: `${h.label}  `, face: 'display-600', color: SIGNAL, letterSpacing: 0.8 }, { text: `${h.heading} `, face: 'text-700' }, { text: words, face: 'text-400' }]) };
+  const block = flowBlock('Highlight', [item], lineSizes(leg, k, 1.25), { color: INK });
+  if (!block) return undefined;
+  return {
+    ...block,
+    lay(step, width, maxHeight) {
+      const laid = block.lay(step, width, maxHeight);
+      return laid && laid.leftOff?.length ? { ...laid, leftOff: [{ block: 'Highlight', detail: 'cut short' }] } : laid;
+    },
+  };
+}
+
 export function storyBlock({ content, k, leg }: Ctx): BlockSpec | undefined {
   const story = content.story?.trim();
   if (!story) return undefined;

@@ -1,4 +1,4 @@
-import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock } from './blocks';
+import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock, highlightBlock } from './blocks';
 import { only, type DesignFn } from './design';
 import { column } from './layout';
 
@@ -21,23 +21,24 @@ export const compactDesign: DesignFn = (ctx, box) => {
     figures: figuresBlock(ctx, { maxCols: box.landscape ? 3 : 1, growTo: 1.8 }),
     engine: engineBlock(big),
     sections: sectionLinesBlock(big),
+    highlight: highlightBlock(ctx),
     credits: creditsBlock(ctx),
     story: storyBlock(ctx),
     photo: photoBlock(ctx, undefined, { spareOnly: true }),
     more: moreBlock(ctx),
     footer: footerBlock(ctx),
   });
-  const priority = ['footer', 'title', 'entry', 'qr', 'figures', 'engine', 'sections', 'credits', 'story', 'photo'] as const;
+  const priority = ['footer', 'title', 'entry', 'qr', 'figures', 'engine', 'sections', 'highlight', 'credits', 'story', 'photo'] as const;
   if (!box.landscape) {
     return {
       blocks,
       priority: [...priority],
-      geo: column(['entry', 'title', { row: [column(['figures'], sideW, g), column(['qr'], qrW, g)], gap: g * 1.5 }, 'engine', 'sections', 'credits', 'story', 'photo', 'more', 'footer'], cw, g),
+      geo: column(['entry', 'title', { row: [column(['figures'], sideW, g), column(['qr'], qrW, g)], gap: g * 1.5 }, 'engine', 'sections', 'highlight', 'credits', 'story', 'photo', 'more', 'footer'], cw, g),
     };
   }
   return {
     blocks,
     priority: [...priority],
-    geo: column([{ row: [column(['title', 'figures', 'engine', 'sections', 'credits', 'story', 'photo', 'more'], sideW, g), column(['entry', 'qr'], qrW, g)], gap: g * 1.5 }, 'footer'], cw, g),
+    geo: column([{ row: [column(['title', 'figures', 'engine', 'sections', 'highlight', 'credits', 'story', 'photo', 'more'], sideW, g), column(['entry', 'qr'], qrW, g)], gap: g * 1.5 }, 'footer'], cw, g),
   };
 };

@@ -25,7 +25,11 @@ export type CardContent = {
   shortUrl: string;
   cover: { data: Buffer; format: 'jpg' | 'png'; width: number; height: number } | null;
   show: CardShow | null;
+  /** One answered question or log post the owner chose to print, in words: "ASKED OFTEN" with the question and answer, or a post's date and title with its words. */
+  highlight?: CardHighlightWords | null;
 };
+
+export type CardHighlightWords = { label: string; heading: string; text: string };
 
 export type CardFigure = { label: string; value: string; unit: string; mark: string; note: string };
 export type CardSection = { kind: SectionKind; label: string; summary: string; rows: Array<{ label: string; value: string }>; madeBy: string | null };

@@ -1,4 +1,4 @@
-import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionRowsBlock, storyBlock, titleBlock } from './blocks';
+import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionRowsBlock, storyBlock, titleBlock, highlightBlock } from './blocks';
 import { only, type DesignFn } from './design';
 import { column, fitBlocks, type BlockId, type Geo } from './layout';
 
@@ -21,6 +21,7 @@ export const dataSheetDesign: DesignFn = (ctx, box) => {
     // The engine's own rows say all the engine line says (and more): one of them, not both.
     engine: ctx.content.sections.some((s) => s.kind === 'engine' && s.rows.length) ? undefined : engineBlock(ctx),
     sections: sectionRowsBlock(ctx, box.landscape ? 3 : 2),
+    highlight: highlightBlock(ctx),
     credits: creditsBlock(ctx),
     // Without a photo the dark panel with the year takes what the rows leave, so a sparse sheet is not half blank.
     photo: photoBlock(ctx, [0.25, 0.15]),
@@ -28,7 +29,7 @@ export const dataSheetDesign: DesignFn = (ctx, box) => {
     more: moreBlock(ctx),
     footer: footerBlock(ctx),
   });
-  const priority: BlockId[] = ['footer', 'title', 'entry', 'qr', 'figures', 'engine', 'sections', 'credits', 'photo', 'story'];
+  const priority: BlockId[] = ['footer', 'title', 'entry', 'qr', 'figures', 'engine', 'sections', 'highlight', 'credits', 'photo', 'story'];
   // The head: title and show beside the code, the figures below. A long title (and a long show name)
   // can make that head so tall that the figures fall off the card; then the figures move up beside
   // the code, with the title across the page above when that keeps more. The head that keeps the
@@ -40,7 +41,7 @@ export const dataSheetDesign: DesignFn = (ctx, box) => {
     ['title', beside(['entry', 'figures'])],
     ['title', 'entry', beside(['figures'])],
   ];
-  const geoWith = (head: Array<BlockId | Geo>): Geo => column([...head, 'engine', 'sections', 'credits', 'story', 'photo', 'more', 'footer'], cw, g);
+  const geoWith = (head: Array<BlockId | Geo>): Geo => column([...head, 'engine', 'sections', 'highlight', 'credits', 'story', 'photo', 'more', 'footer'], cw, g);
   // How many blocks, most important first, a head keeps whole.
   const kept = (geo: Geo) => {
     const lostLabels = new Set(fitBlocks(geo, blocks, priority, ctx.contentHeight).leftOff.map((l) => l.block));

@@ -1,4 +1,4 @@
-import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock } from './blocks';
+import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock, highlightBlock } from './blocks';
 import { only, type DesignFn } from './design';
 import { column } from './layout';
 
@@ -20,18 +20,19 @@ export const posterDesign: DesignFn = (ctx, box) => {
     photo: photoBlock(ctx),
     engine: engineBlock(ctx),
     sections: sectionLinesBlock(ctx),
+    highlight: highlightBlock(ctx),
     credits: creditsBlock(ctx),
     story: storyBlock(ctx),
     more: moreBlock(ctx),
     footer: footerBlock(ctx),
   });
-  const priority = ['footer', 'title', 'entry', 'qr', 'figures', 'photo', 'engine', 'sections', 'credits', 'story'] as const;
+  const priority = ['footer', 'title', 'entry', 'qr', 'figures', 'photo', 'engine', 'sections', 'highlight', 'credits', 'story'] as const;
   if (!box.landscape) {
     const leftW = cw - qrW - g;
     return {
       blocks,
       priority: [...priority],
-      geo: column(['entry', 'photo', 'title', { row: [column(['figures', 'engine', 'sections', 'credits', 'story', 'more'], leftW, g), column(['qr'], qrW, g)], gap: g }, 'footer'], cw, g),
+      geo: column(['entry', 'photo', 'title', { row: [column(['figures', 'engine', 'sections', 'highlight', 'credits', 'story', 'more'], leftW, g), column(['qr'], qrW, g)], gap: g }, 'footer'], cw, g),
     };
   }
   const leftW = Math.max(qrW, Math.round(cw * 0.4));
@@ -39,6 +40,6 @@ export const posterDesign: DesignFn = (ctx, box) => {
   return {
     blocks,
     priority: [...priority],
-    geo: column([{ row: [column(['entry', 'photo', 'qr'], leftW, g), column(['title', 'figures', 'engine', 'sections', 'credits', 'story', 'more'], rightW, g)], gap: g * 1.5 }, 'footer'], cw, g),
+    geo: column([{ row: [column(['entry', 'photo', 'qr'], leftW, g), column(['title', 'figures', 'engine', 'sections', 'highlight', 'credits', 'story', 'more'], rightW, g)], gap: g * 1.5 }, 'footer'], cw, g),
   };
 };

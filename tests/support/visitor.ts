@@ -49,6 +49,15 @@ export function visitor(baseUrl: string, address = loopbackAddress()) {
           body: token === undefined ? '' : new URLSearchParams({ token }).toString(),
         }),
       ),
+    /** Sends the public page's question form as a browser would: form-encoded fields, from this visitor's address. */
+    ask: async (code: string, fields: Record<string, string>) =>
+      keep(
+        await send('POST', `${baseUrl}/c/${code}/questions`, {
+          localAddress: address,
+          headers: { 'content-type': 'application/x-www-form-urlencoded', origin: baseUrl, cookie: cookieHeader() },
+          body: new URLSearchParams(fields).toString(),
+        }),
+      ),
     /** Views the car's page and votes with the form it holds, as a person pressing the button would. */
     async viewAndVote(code: string) {
       const page = await this.view(code);

@@ -6,7 +6,7 @@ import { BUILD_STYLE_LABELS, type PublicBuild } from '@shared/schemas/build';
 import { ENGINEERING_CAUTION } from '@shared/calc';
 import { CARD_FIGURES, DEFAULT_CARD_SETTINGS, CardSettingsSchema, type CardLeftOff, type CardQuery, type CardSettings, type CardShow } from '@shared/schemas/card';
 import { CardDocument, layoutCard } from '@templates/cards/card-document';
-import type { CardContent } from '@templates/cards/content';
+import type { CardContent, CardHighlightWords } from '@templates/cards/content';
 import { registerCardFonts } from '@templates/cards/fonts';
 import type { Build } from '../../models/build';
 import { storage } from '../../storage/index';
@@ -43,8 +43,17 @@ export async function saveCardSettings(build: Build, settings: CardSettings): Pr
   await build.update({ cardSettings: settings });
 }
 
+/** `question:12` → that highlight; `none` → no highlight (null); left out → undefined, the saved one. */
+function highlightFromQuery(value: string | undefined): CardSettings['highlight'] | undefined {
+  if (value === undefined) return undefined;
+  if (value === 'none') return null;
+  const [kind, id] = value.split(':');
+  return { kind: kind === 'log' ? 'log' : 'question', id: Number(id) };
+}
+
 /** Query over saved settings over defaults. */
 export function settingsFromQuery(saved: CardSettings, q: CardQuery): CardSettings {
+  const highlight = highlightFromQuery(q.highlight);
   return {
     design: q.design ?? saved.design,
     paper: q.paper ?? saved.paper,
@@ -52,6 +61,7 @@ export function settingsFromQuery(saved: CardSettings, q: CardQuery): CardSettin
     sections: q.sections ?? saved.sections,
     figures: q.figures ?? saved.figures,
     units: q.units ?? saved.units,
+    highlight: highlight === undefined ? (saved.highlight ?? null) : highlight,
   };
 }
 
@@ -62,7 +72,7 @@ export type CoverImage = NonNullable<CardContent['cover']>;
 export { availableFigures } from '@shared/build-sheet/key-figures';
 
 /** The words and figures of a card, from the public face of the build only (never the model). */
-export function cardContent(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null; qrUrl?: string } = {}): CardContent {
+export function cardContent(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null; qrUrl?: string; highlight?: CardHighlightWords | null } = {}): CardContent {
   const units = settings.units;
   const { heading, kicker: name } = headlineOf(build);
   const style = build.style && build.style in BUILD_STYLE_LABELS ? BUILD_STYLE_LABELS[build.style as keyof typeof BUILD_STYLE_LABELS] : null;
@@ -90,6 +100,7 @@ export function cardContent(build: PublicBuild, settings: CardSettings, opts: { 
     shortUrl: shortUrlOf(build.url),
     cover: opts.cover ?? null,
     show: opts.show ?? null,
+    highlight: opts.highlight ?? null,
   };
 }
 
@@ -115,7 +126,7 @@ export async function loadCoverImage(build: PublicBuild, settings: CardSettings)
 }
 
 /** One card, one page, as a PDF, and what did not fit on it (the designer tells the owner). */
-export async function renderCard(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null; qrUrl?: string } = {}): Promise<{ pdf: Buffer; leftOff: CardLeftOff[] }> {
+export async function renderCard(build: PublicBuild, settings: CardSettings, opts: { show?: CardShow | null; cover?: CoverImage | null; qrUrl?: string; highlight?: CardHighlightWords | null } = {}): Promise<{ pdf: Buffer; leftOff: CardLeftOff[] }> {
   registerCardFonts();
   const content = cardContent(build, settings, opts);
   const { page, leftOff } = layoutCard(content, settings.design, settings.paper, settings.orientation);

@@ -15,13 +15,16 @@ export async function publicVersion(code: string): Promise<string | null> {
   if (!BuildCodeSchema.safeParse(code).success) return null;
   const rows = await sequelize.query<{ published: boolean; disabled_at: Date | null; version: string }>(
     `SELECT b.published, u.disabled_at,
-            concat_ws(':', extract(epoch FROM greatest(b.updated_at, u.updated_at, s.at, p.at, d.at, w.at, en.at))::text, s.n, p.n, d.n, w.n, en.n) AS version
+            concat_ws(':', extract(epoch FROM greatest(b.updated_at, u.updated_at, s.at, p.at, d.at, w.at, en.at, lp.at, qa.at))::text, s.n, p.n, d.n, w.n, en.n, lp.n, qa.n) AS version
        FROM builds b
        JOIN users u ON u.id = b.owner_id
        CROSS JOIN LATERAL (SELECT max(updated_at) AS at, count(*) AS n FROM build_sections WHERE build_id = b.id) s
        CROSS JOIN LATERAL (SELECT max(updated_at) AS at, count(*) AS n FROM photos WHERE build_id = b.id) p
        CROSS JOIN LATERAL (SELECT max(updated_at) AS at, count(*) AS n FROM dyno_runs WHERE build_id = b.id) d
        CROSS JOIN LATERAL (SELECT max(updated_at) AS at, count(*) AS n FROM weigh_ins WHERE build_id = b.id) w
+       -- The published log posts and the answered questions are on the page (a draft or a waiting question is not).
+       CROSS JOIN LATERAL (SELECT max(updated_at) AS at, count(*) AS n FROM build_log_posts WHERE build_id = b.id AND status = 'published') lp
+       CROSS JOIN LATERAL (SELECT max(updated_at) AS at, count(*) AS n FROM build_questions WHERE build_id = b.id AND answer IS NOT NULL) qa
        -- The show the car is entered in is on the page: its entry, class and show change the page too.
        CROSS JOIN LATERAL (SELECT max(greatest(x.updated_at, ev.updated_at, c.updated_at)) AS at, count(*) AS n
                              FROM entries x JOIN events ev ON ev.id = x.event_id JOIN event_classes c ON c.id = x.class_id

@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { CARD_FIGURE_LABELS, CARD_QR_MODULE_MIN_PT, DEFAULT_CARD_SETTINGS, ORIENTATIONS, PAPERS, paperClass, CARD_LEGIBILITY, type CardDesign, type CardLeftOff, type CardShow, type Orientation, type Paper } from '@shared/schemas/card';
+import { CARD_FIGURE_LABELS, CARD_HIGHLIGHT_LABELS, CARD_QR_MODULE_MIN_PT, DEFAULT_CARD_SETTINGS, ORIENTATIONS, PAPERS, paperClass, CARD_LEGIBILITY, type CardDesign, type CardLeftOff, type CardShow, type Orientation, type Paper } from '@shared/schemas/card';
 import { SECTION_KINDS } from '@shared/schemas/build-sections';
 import { ENGINEERING_CAUTION } from '@shared/calc';
 import type { PublicBuild } from '@shared/schemas/build';
 import { cardContent, qrMatrix, renderCard, type CoverImage } from '@server/services/builds/cards';
+import type { CardHighlightWords } from '@templates/cards/content';
 import { pageBox } from '@templates/cards/theme';
 import { capShare } from '@templates/cards/measure';
 import { QR_QUIET } from '@templates/cards/parts';
@@ -18,7 +19,11 @@ import { registerCardFonts } from '@templates/cards/fonts';
 // The verification of every card layout: each design on every paper and orientation, for a corpus of
 // builds, read back from the PDF with pdf.js. One file per design, so the three run side by side.
 
-type Case = { name: string; build: PublicBuild; show: CardShow | null; cover: CoverImage | null; paper: Paper; orientation: Orientation; alone?: boolean };
+type Case = { name: string; build: PublicBuild; show: CardShow | null; cover: CoverImage | null; paper: Paper; orientation: Orientation; alone?: boolean; highlight?: CardHighlightWords };
+
+// The owner's chosen highlight: a usual answer on the full build, one at its longest on the longest build.
+const USUAL_HIGHLIGHT: CardHighlightWords = { label: CARD_HIGHLIGHT_LABELS.question, heading: 'Is it drivable?', text: 'Driven to every show it enters, on its own wheels, and home again the same way.' };
+const LONGEST_HIGHLIGHT: CardHighlightWords = { label: CARD_HIGHLIGHT_LABELS.log, heading: `2026-11-20 · ${'Longest post title '.repeat(7).slice(0, 120)}.`, text: 'A very long post about the winter work. '.repeat(150).slice(0, 6000) };
 const ALL = PAPERS.flatMap((paper) => ORIENTATIONS.map((orientation) => ({ paper, orientation })));
 const EXACT_PT: Record<Paper, [number, number]> = { letter: [612, 792], tabloid: [792, 1224], a4: [595.2756, 841.8898], a3: [841.8898, 1190.5512] };
 const norm = (s: string) => s.replace(/\s+/g, '').toUpperCase();
@@ -27,12 +32,12 @@ function corpus(demo: DemoCardBuild[]): Case[] {
   const every = (name: string, build: PublicBuild, show: CardShow | null, cover: CoverImage | null = null): Case[] => ALL.map((c) => ({ name, build, show, cover, ...c }));
   const [complete, ...others] = demo;
   return [
-    ...every('full build, entry 1047', typicalPublicBuild(), ENTRY_SHOWS[2]!, null).map((c) => ({ ...c, alone: c.paper === 'letter' || c.paper === 'a3' })),
+    ...every('full build with a highlight, entry 1047', typicalPublicBuild(), ENTRY_SHOWS[2]!, null).map((c) => ({ ...c, highlight: USUAL_HIGHLIGHT, alone: c.paper === 'letter' || c.paper === 'a3' })),
     ...every('demo complete build with its photo, entry 47', complete!.build, ENTRY_SHOWS[1]!, complete!.cover),
     ...every('empty build', emptyPublicBuild(), null),
     ...every('sparse build, entry 7', sparsePublicBuild(), ENTRY_SHOWS[0]!),
     ...every('120-character title, entry 9999', longTitlePublicBuild(), ENTRY_SHOWS[3]!),
-    ...every('notes and credits at their longest, longest show name', longestPublicBuild(), LONGEST_SHOW),
+    ...every('notes, credits and highlight at their longest, longest show name', longestPublicBuild(), LONGEST_SHOW).map((c) => ({ ...c, highlight: LONGEST_HIGHLIGHT })),
     // The other demo builds, each on one paper, so every paper and orientation sees some of them.
     ...others.flatMap((d, i) => [ALL[i % 8]!].map((c) => ({ name: `demo ${d.name}`, build: d.build, show: i % 2 ? ENTRY_SHOWS[i % 4]! : null, cover: d.cover, ...c }))),
   ];
@@ -55,7 +60,7 @@ const SCAN_AROUND_PT = 5 * (72 / 25.4);
  */
 async function renderAll(design: CardDesign, cases: Case[]): Promise<Rendered[]> {
   registerCardFonts();
-  const laid = cases.map((c) => layoutCard(cardContent(c.build, settingsOf(design, c), { show: c.show, cover: c.cover }), design, c.paper, c.orientation));
+  const laid = cases.map((c) => layoutCard(cardContent(c.build, settingsOf(design, c), { show: c.show, cover: c.cover, highlight: c.highlight }), design, c.paper, c.orientation));
   const doc = createElement(CardDocument, { page: createElement(Fragment, null, ...laid.map((l, i) => cloneElement(l.page, { key: i }))), title: `${design} corpus` });
   const all = await renderToBuffer(doc as Parameters<typeof renderToBuffer>[0]);
   const layouts = await readCardLayouts(all);
@@ -63,7 +68,7 @@ async function renderAll(design: CardDesign, cases: Case[]): Promise<Rendered[]>
   return Promise.all(
     cases.map(async (c, i) => {
       if (!c.alone) return { pdf: null, layout: { ...layouts[i]!, pages: 1 }, leftOff: laid[i]!.leftOff, scan: scans[i]! };
-      const { pdf, leftOff } = await renderCard(c.build, settingsOf(design, c), { show: c.show, cover: c.cover });
+      const { pdf, leftOff } = await renderCard(c.build, settingsOf(design, c), { show: c.show, cover: c.cover, highlight: c.highlight });
       return { pdf, layout: await readCardLayout(pdf), leftOff, scan: rasterize(pdf, SCAN_DPI) };
     }),
   );
@@ -74,7 +79,7 @@ const settingsOf = (design: CardDesign, c: Case) => ({ ...DEFAULT_CARD_SETTINGS,
 function check(design: CardDesign, c: Case, { pdf, layout, leftOff, scan }: Rendered) {
   const label = `${design} ${c.paper} ${c.orientation}, ${c.name}`;
   const settings = settingsOf(design, c);
-  const content = cardContent(c.build, settings, { show: c.show });
+  const content = cardContent(c.build, settings, { show: c.show, highlight: c.highlight });
   const box = pageBox(c.paper, c.orientation);
   const leg = CARD_LEGIBILITY[paperClass(c.paper)];
 
@@ -141,6 +146,8 @@ function check(design: CardDesign, c: Case, { pdf, layout, leftOff, scan }: Rend
   const all = norm(texts.map((t) => t.str).join(''));
   if (!all.includes(norm(content.shortUrl))) fail('no short URL');
   if (leftOff.length && !all.includes(norm('More on the phone:'))) fail('no "more on the phone" line');
+  // The owner's chosen highlight is printed, or named as what did not fit.
+  if (content.highlight && !all.includes(norm(content.highlight.label)) && !leftOff.some((l) => l.block === 'Highlight')) fail('the highlight is neither printed nor named as left off');
   expect(problems).toEqual([]);
 
   if (pdf) {

@@ -96,3 +96,19 @@ describe('a change to a show reaches its cached public pages at once', () => {
     expect(publicPageCache.size).toBeGreaterThan(0);
   });
 });
+
+describe('a change to the build over time reaches the car’s cached page at once', () => {
+  it('a post published and a question answered appear; a draft does not', async () => {
+    const owner = await ownerWithBuild('Quiet sedan');
+    const base = `/api/builds/${owner.build.id}`;
+    expect(await cachedText(`/c/${owner.build.code}`)).not.toContain('Build log');
+    const draft = (await owner.client.post(`${base}/log`, { postedOn: '2025-05-01', title: 'Seats out', body: 'Old foam gone.' })).body.post;
+    expect(await cachedText(`/c/${owner.build.code}`)).not.toContain('Seats out');
+    await owner.client.patch(`${base}/log/${draft.id}`, { status: 'published' });
+    await expect.poll(() => textOf(`/c/${owner.build.code}`), soon).toContain('Seats out');
+
+    expect(await cachedText(`/c/${owner.build.code}`)).not.toContain('Why so quiet?');
+    await owner.client.post(`${base}/questions`, { question: 'Why so quiet?', answer: 'A long exhaust.' });
+    await expect.poll(() => textOf(`/c/${owner.build.code}`), soon).toContain('Why so quiet?');
+  });
+});

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { PAGE_CSS } from '@server/pages/page-styles';
 import { EVENT_CSS } from '@server/pages/public-event-page';
 import { SITE_CSS } from '@server/pages/site-pages';
+import { BUILD_LOG_CSS } from '@server/pages/build-log-styles';
 
 // Every text colour of the visitor's pages against what it sits on, by the contrast ratio of
 // WCAG 2.2 (W3C Recommendation, definitions "contrast ratio" and "relative luminance"):
@@ -24,7 +25,7 @@ const ratio = (a: Rgb, b: Rgb) => {
 };
 const over = (top: { rgb: Rgb; alpha: number }, under: Rgb): Rgb => top.rgb.map((c, i) => c * top.alpha + under[i]! * (1 - top.alpha)) as Rgb;
 
-const css = [PAGE_CSS, EVENT_CSS, SITE_CSS].join('\n');
+const css = [PAGE_CSS, EVENT_CSS, SITE_CSS, BUILD_LOG_CSS].join('\n');
 const root = Object.fromEntries([...css.matchAll(/(--[\w-]+):(#[0-9a-fA-F]{3,8})/g)].map((m) => [m[1], m[2]]));
 const colour = (v: string) => (v.startsWith('var(') ? root[v.slice(4, -1)] : v);
 const paper = hex(root['--paper']!).rgb;

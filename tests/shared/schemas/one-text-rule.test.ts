@@ -24,7 +24,7 @@ for (const source of Object.values(serverSources)) {
 
 // Schemas a route defines for itself, by name, so a new local schema with text in it is noticed
 // rather than skipped: ids, enums and paths only, or (photo captions) the shared rule itself.
-const LOCAL_WITHOUT_TEXT = new Set(['RecordParams', 'ClassParamsSchema', 'TieBreakParamsSchema', 'SectionParamsSchema', 'MemberParamsSchema', 'JudgeParamsSchema', 'InvitationParamsSchema', 'BuildParams', 'AuditQuerySchema', 'PhotoParamsSchema', 'PreviewQuerySchema', 'PhotoUploadFieldsSchema']);
+const LOCAL_WITHOUT_TEXT = new Set(['RecordParams', 'ClassParamsSchema', 'TieBreakParamsSchema', 'SectionParamsSchema', 'MemberParamsSchema', 'JudgeParamsSchema', 'InvitationParamsSchema', 'BuildParams', 'AuditQuerySchema', 'PhotoParamsSchema', 'PreviewQuerySchema', 'PhotoUploadFieldsSchema', 'PostParams', 'QuestionParams']);
 /** A route's `replaceBody(X)` refuses unknown keys and otherwise is X; a section's schema comes from SECTION_SCHEMAS. */
 const WRAPS: Record<string, string[]> = {
   PrivateReplaceSchema: ['BuildPrivateSchema'],

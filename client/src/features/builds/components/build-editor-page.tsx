@@ -25,6 +25,8 @@ import { PhotosPanel } from './photos/photos-panel';
 import { DynoPanel } from './records/dyno-panel';
 import { WeighInsPanel } from './records/weigh-ins-panel';
 import { HistoryPanel } from './records/history-list';
+import { LogPanel } from './log/log-panel';
+import { QuestionsPanel } from './questions/questions-panel';
 
 function Editor({ build }: { build: OwnerBuild }) {
   const [stores] = useState(createEditorStores);
@@ -49,6 +51,8 @@ function Editor({ build }: { build: OwnerBuild }) {
             <PhotosPanel build={build} />
             <DynoPanel build={build} />
             <WeighInsPanel build={build} />
+            <LogPanel build={build} />
+            <QuestionsPanel build={build} />
             <HistoryPanel build={build} />
             <PrivateForm build={build} />
           </div>

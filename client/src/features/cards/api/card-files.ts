@@ -11,6 +11,7 @@ export function cardPdfUrl(buildId: number, s: CardSettings, show: CardShow = {}
     sections: s.sections.join(','),
     figures: s.figures.join(','),
     units: s.units,
+    highlight: s.highlight ? `${s.highlight.kind}:${s.highlight.id}` : 'none',
   });
   if (show.showName) params.set('showName', show.showName);
   if (show.className) params.set('className', show.className);

@@ -122,6 +122,30 @@ function Designer({ buildId, data }: { buildId: number; data: CardSettingsRespon
                 />
               ))}
             </Choices>
+            {data.highlights.length ? (
+              <div className="flex flex-col gap-1">
+                <label htmlFor="card-highlight" className="text-sm font-semibold">
+                  Also print
+                </label>
+                <select
+                  id="card-highlight"
+                  className="min-h-11 w-full border border-rule bg-white px-2 text-base"
+                  value={settings.highlight ? `${settings.highlight.kind}:${settings.highlight.id}` : ''}
+                  onChange={(e) => {
+                    const [kind, id] = e.target.value.split(':');
+                    update({ highlight: kind ? { kind: kind === 'log' ? 'log' : 'question', id: Number(id) } : null });
+                  }}
+                >
+                  <option value="">Nothing more</option>
+                  {data.highlights.map((h) => (
+                    <option key={`${h.kind}:${h.id}`} value={`${h.kind}:${h.id}`}>
+                      {h.label}
+                    </option>
+                  ))}
+                </select>
+                <p className="text-sm text-graphite">One answered question or log post, printed under the sections when there is room.</p>
+              </div>
+            ) : null}
             <Choices legend="Units" row>
               <Radio name="units" value="imperial" checked={settings.units === 'imperial'} onChange={() => update({ units: 'imperial' })} label="Imperial" />
               <Radio name="units" value="metric" checked={settings.units === 'metric'} onChange={() => update({ units: 'metric' })} label="Metric" />

@@ -14,6 +14,8 @@ export const EDITOR_SECTIONS = [
   ['photos', 'Photos'],
   ['dyno', 'Dyno runs'],
   ['weighIns', 'Weigh-ins'],
+  ['log', 'Build log'],
+  ['questions', 'Questions'],
   ['history', 'History'],
   ['private', 'Private details'],
 ] as const;
