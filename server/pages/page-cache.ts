@@ -127,6 +127,17 @@ export class PageCache {
     }
   }
 
+  /**
+   * Every page may be out of date (changes were made while notifications were not heard): each is
+   * checked or rendered again on its next request, but kept meanwhile, so a database that goes away
+   * again still leaves visitors the page as last published.
+   */
+  suspectAll(): void {
+    this.forgottenBefore = ++this.changes;
+    this.tagChangedAt.clear();
+    for (const page of this.entries.values()) page.checkedAt = 0;
+  }
+
   clear(): void {
     this.forgottenBefore = ++this.changes;
     this.tagChangedAt.clear();

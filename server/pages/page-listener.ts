@@ -4,8 +4,8 @@ import { publicPageCache, type PageCache } from './page-cache';
 /**
  * What the page cache does with the database's page-change notifications (a ChannelListener made
  * where the server is assembled): drop the cached pages showing each named tag. While the listener is
- * away the cache trusts a page for a second only; when it is back every page is dropped, since the
- * changes made meanwhile were not heard.
+ * away the cache trusts a page for a second only; when it is back every page is checked again before
+ * it is trusted (the changes made meanwhile were not heard), yet kept for a database that goes away again.
  */
 export function pageChangeHandlers(cache: PageCache = publicPageCache) {
   return {
@@ -13,7 +13,7 @@ export function pageChangeHandlers(cache: PageCache = publicPageCache) {
     name: 'placard-page-changes',
     onMessage: (payload: string) => cache.invalidate(payload ? payload.split(' ') : [EVERY_PAGE]),
     onListening: () => {
-      cache.invalidate([EVERY_PAGE]);
+      cache.suspectAll();
       cache.listening = true;
     },
     onLost: () => {
