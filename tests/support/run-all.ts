@@ -1,9 +1,9 @@
 // `npm test`: what a fresh machine lacks (PostgreSQL, Debian's chromium), a current client build,
-// then every test project (unit, api, isolated, browser, slow) against the test database, with lint
-// and typecheck (the layer rules live there) running beside them, both cached between runs.
-// Exits non-zero on any failure of any of them, and prints the time each took.
-// `npm test -- <files>` (or `--project <name>`) runs just those and skips lint and typecheck;
-// PLACARD_CHECKS=1 runs them there too. `npm run test:quick` is the unit and api projects.
+// then every test project (unit, api, isolated, browser, slow) against the test database.
+// Exits non-zero on any failure, and prints the time each project took. Lint and typecheck (the layer
+// rules live there) are `npm run check`, which CI runs after the tests; PLACARD_CHECKS=1 runs them
+// beside the tests as well. `npm test -- <files>` (or `--project <name>`) runs just those;
+// `npm run test:quick` is the unit and api projects.
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
@@ -60,8 +60,8 @@ function runTests(args: string[]): Promise<Outcome> {
 
 const runStarted = Date.now();
 const args = process.argv.slice(2);
-const targeted = args.some((a) => !a.startsWith('-') || a.startsWith('--project'));
-const withChecks = !targeted || process.env.PLACARD_CHECKS === '1';
+// Lint and typecheck run in CI after the tests (`.ci/run`, `npm run check`); PLACARD_CHECKS=1 runs them here too.
+const withChecks = process.env.PLACARD_CHECKS === '1';
 
 ensureTools();
 await ensureDatabase();

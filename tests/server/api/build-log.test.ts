@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-// fast-xml-parser 3 is installed (by s3rver); the feed is read back by it, not by our own code.
+// The feed is read back by a general-purpose XML parser (fast-xml-parser, a dev dependency), not by our own code.
 import { parse as parseXml, validate as validateXml } from 'fast-xml-parser';
 import { apiClient, type ApiClient } from '../../support/api-client';
 import { createUser } from '../../support/factories';
