@@ -81,13 +81,28 @@ export class JobQueue {
     await this.boss.updateQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...mail }); // settings changed in config apply to the existing queue
     // A refund retries for a day: the payment service's idempotency key makes a retry after a lost answer safe.
     await this.boss.createQueue(REFUND_QUEUE, { name: REFUND_QUEUE, retryLimit: 20, retryDelay: 30, retryBackoff: true, expireInSeconds: 5 * 60 });
-    // A print of hundreds of cards takes a minute at most; a lost worker's job is tried again after this.
-    const cards = { retryLimit: 2, retryDelay: 5, expireInSeconds: 15 * 60 };
-    await this.boss.createQueue(CARD_QUEUE, { name: CARD_QUEUE, ...cards });
     // Timed work is a scheduled job, not a timer in one process: whichever process keeps time sends it, any worker runs it.
     await this.boss.createQueue(OFFER_SWEEP_QUEUE, { name: OFFER_SWEEP_QUEUE, retryLimit: 0, expireInSeconds: 60 });
     await this.boss.schedule(OFFER_SWEEP_QUEUE, OFFER_SWEEP_CRON, {}, { tz: 'UTC' });
     return this.boss;
+  }
+
+  private cardQueue?: Promise<void>;
+
+  /**
+   * The card queue, made on first use by a process that prints or works cards. Under test each process
+   * has a queue of its own (config.cardQueue), and making a queue attaches a table to pg-boss's job
+   * table, which waits on every process queuing a job at that moment: a process that never prints
+   * never makes one. Call it before a transaction that sends a card job.
+   */
+  async prepareCardQueue(): Promise<void> {
+    await this.start();
+    // A print of hundreds of cards takes a minute at most; a lost worker's job is tried again after this.
+    this.cardQueue ??= this.boss.createQueue(CARD_QUEUE, { name: CARD_QUEUE, retryLimit: 2, retryDelay: 5, expireInSeconds: 15 * 60 }).catch((err: unknown) => {
+      this.cardQueue = undefined;
+      throw err;
+    });
+    await this.cardQueue;
   }
 
   /**
@@ -97,6 +112,7 @@ export class JobQueue {
    */
   async work<T extends object>(name: string, handler: (job: PgBoss.Job<T>) => Promise<void>, { concurrency = 1 } = {}): Promise<void> {
     const boss = await this.start();
+    if (name === CARD_QUEUE) await this.prepareCardQueue();
     // Each loop works one job at a time; several loops take turns on the queue (a job is fetched by one only).
     for (let i = 0; i < concurrency; i++) {
       const id: string = await boss.work<T>(name, { batchSize: 1, pollingIntervalSeconds: this.options.pollSeconds }, async ([job]) => {
@@ -125,6 +141,7 @@ export class JobQueue {
    */
   async send(name: string, data: object, transaction?: Transaction, options: { startAfterSeconds?: number } = {}): Promise<string> {
     const boss = await this.start();
+    if (name === CARD_QUEUE) await this.prepareCardQueue();
     const timing = options.startAfterSeconds ? { startAfter: options.startAfterSeconds } : {};
     const id = await boss.send(name, data, transaction ? { ...timing, db: inTransaction(transaction) } : timing);
     if (!id) throw new Error(`job queue: ${name} refused the job (is the queue created?)`);

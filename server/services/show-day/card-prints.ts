@@ -53,7 +53,7 @@ const confirmedWhere = (eventId: number, classId: number | null) => ({
 export async function startCardPrint(event: Event, classId: number | null, person: { id: number }, outer?: Transaction): Promise<{ print: CardPrint; created: boolean }> {
   if (classId) await classOfShow(event.id, classId);
   const queue = jobQueue();
-  await queue.start(); // before the transaction: the first start creates pg-boss's tables on its own connection
+  await queue.prepareCardQueue(); // before the transaction: the first start makes pg-boss's tables, and the card queue, on its own connection
   const { id, created } = await withTransaction(outer, async (transaction) => {
     // Two organisers starting at once take turns here, so the second finds the first one's print.
     await Event.findByPk(event.id, { lock: transaction.LOCK.UPDATE, transaction });
