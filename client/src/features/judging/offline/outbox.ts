@@ -1,4 +1,4 @@
-import { ApiError } from '@client/lib/api';
+import { refusedForGood, startOfflineSendLoop } from '@client/lib/offline-send-loop';
 import type { NoteItem, ScoreItem } from '@shared/schemas/judging';
 import { SCORE_ITEMS_PER_REQUEST_MAX } from '@shared/judging/sheet-state';
 import { sendScores } from '../api/send-scores';
@@ -66,7 +66,7 @@ export async function flush(eventId: number): Promise<void> {
         const answeredAt = Date.now();
         outcome = (id) => (replaced.has(id) ? { state: 'replaced', message: REPLACED_ON_OTHER_PHONE, answeredAt } : { state: 'sent', answeredAt });
       } catch (err) {
-        if (!(err instanceof ApiError) || err.code === 'NETWORK' || err.status >= 500 || err.status === 429 || err.status === 401) return; // try again later
+        if (!refusedForGood(err)) return; // try again later
         const refusal = { state: 'refused' as const, message: err.message };
         outcome = () => refusal;
       }
@@ -84,13 +84,4 @@ export async function flush(eventId: number): Promise<void> {
 }
 
 /** Starts the send loop for a show; returns the function that stops it. */
-export function startSendLoop(eventId: number, everyMs = 5000): () => void {
-  const kick = () => void flush(eventId);
-  kick();
-  window.addEventListener('online', kick);
-  const timer = window.setInterval(kick, everyMs);
-  return () => {
-    window.removeEventListener('online', kick);
-    window.clearInterval(timer);
-  };
-}
+export const startSendLoop = (eventId: number, everyMs = 5000): (() => void) => startOfflineSendLoop(() => flush(eventId), everyMs);

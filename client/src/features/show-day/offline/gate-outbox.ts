@@ -1,4 +1,4 @@
-import { ApiError } from '@client/lib/api';
+import { refusedForGood, startOfflineSendLoop } from '@client/lib/offline-send-loop';
 import { GATE_SYNC_MAX } from '@shared/schemas/show-day';
 import { sendGateCheckIns } from '../api/send-gate-check-ins';
 import { gateDeviceId, nextGateSequence } from './gate-device';
@@ -48,7 +48,7 @@ export async function flushGateOutbox(eventId: number): Promise<void> {
           return { state, message: r.message ?? undefined };
         };
       } catch (err) {
-        if (!(err instanceof ApiError) || err.code === 'NETWORK' || err.status >= 500 || err.status === 429 || err.status === 401) return; // later
+        if (!refusedForGood(err)) return; // later
         const refusal = { state: 'refused' as const, message: err.message };
         outcome = () => refusal;
       }
@@ -64,13 +64,4 @@ export async function flushGateOutbox(eventId: number): Promise<void> {
   }
 }
 
-export function startGateSendLoop(eventId: number, everyMs = 5000): () => void {
-  const kick = () => void flushGateOutbox(eventId);
-  kick();
-  window.addEventListener('online', kick);
-  const timer = window.setInterval(kick, everyMs);
-  return () => {
-    window.removeEventListener('online', kick);
-    window.clearInterval(timer);
-  };
-}
+export const startGateSendLoop = (eventId: number, everyMs = 5000): (() => void) => startOfflineSendLoop(() => flushGateOutbox(eventId), everyMs);
