@@ -4,10 +4,11 @@ import type { CardContent } from './content';
 import type { BlockSpec, Laid } from './layout';
 import { lineWidth, setLines, sizeForCap, textWidth, withEllipsis, type Line, type Span } from './measure';
 import { Lines, QrCode, QR_QUIET } from './parts';
-import { GRAPHITE, INK, RULE, SIGNAL, WHITE } from './theme';
+import { GRAPHITE, INK, PANEL_YEAR, RULE, SIGNAL, WHITE } from './theme';
 
 /** What every block builder needs: the words, the type scale of the paper and its legibility floor. */
-export type Ctx = { content: CardContent; k: number; leg: Legibility; contentHeight: number };
+/** `entryNumberScale`: the least scale of the entry number, so an owner's card for an entry prints it as large as the show's numbered card does. */
+export type Ctx = { content: CardContent; k: number; leg: Legibility; contentHeight: number; entryNumberScale?: number };
 
 const DISPLAY_LH = 1.12; // capitals only: no descenders to make room for
 const TEXT_LH = 1.3;
@@ -75,7 +76,9 @@ export function layEntryBlock(show: CardShow, width: number, opts: { k: number; 
   const { k, leg } = opts;
   const pad = 10 * k;
   const inner = width - 2 * pad;
-  const numberSize = sizeForCap(leg.entryCapPt, 'display-700') * (opts.numberScale ?? 1);
+  // Never wider than the block: four digits at most fill it (a narrow column gets a smaller number, never an overflow).
+  const widest = ((inner - 2) * 0.97) / textWidth('8888', 'display-700', 1);
+  const numberSize = Math.min(sizeForCap(leg.entryCapPt, 'display-700') * (opts.numberScale ?? 1), Math.max(sizeForCap(leg.entryCapPt, 'display-700'), widest));
   // Room for four digits whatever the number, so a show's cards line up.
   const numberW = show.entryNumber ? Math.max(textWidth('8888', 'display-700', numberSize), textWidth(show.entryNumber, 'display-700', numberSize)) / 0.97 + 2 : 0;
   const labelSize = Math.max(9, 9 * k);
@@ -117,10 +120,22 @@ export function layEntryBlock(show: CardShow, width: number, opts: { k: number; 
   };
 }
 
+/**
+ * Whether the entry block needs the page's whole width: its number prints larger than the usual steps
+ * (as large as the numbered card's) and a column of `columnWidth` would make it smaller.
+ */
+export function entryAcross(ctx: Ctx, columnWidth = 0): boolean {
+  if (!ctx.content.show?.entryNumber || (ctx.entryNumberScale ?? 1) <= 1.25) return false;
+  const size = sizeForCap(ctx.leg.entryCapPt, 'display-700') * ctx.entryNumberScale!;
+  const needed = Math.max(textWidth('8888', 'display-700', size), textWidth(ctx.content.show.entryNumber, 'display-700', size)) / 0.97 + 2 + 2 * 10 * ctx.k;
+  return columnWidth < needed;
+}
+
 export function entryBlock(ctx: Ctx): BlockSpec | undefined {
   const show = ctx.content.show;
   if (!show || !(show.showName || show.className || show.entryNumber)) return undefined;
-  const scales = [1.25, 1.12, 1];
+  const least = ctx.entryNumberScale ?? 1;
+  const scales = [...new Set([1.25, 1.12, 1].map((s) => Math.max(s, least)))];
   return { label: 'Show entry', steps: scales.length, keep: true, lay: (step, width) => layEntryBlock(show, width, { k: ctx.k, leg: ctx.leg, numberScale: scales[step] }) };
 }
 
@@ -449,8 +464,8 @@ export function photoBlock({ content, contentHeight }: Ctx, shares = [0.42, 0.32
           )
         ) : (
           <View style={{ width: w, height: h, backgroundColor: INK, justifyContent: 'flex-end', padding: Math.min(18, h / 6) }}>
-            {/* Decoration, dark on dark: set in a lighter face than the title's so it never reads (to a PDF reader either) as a second title. */}
-            {year ? <Lines lines={setLines([{ text: year, face: 'display-600' }], Math.min(h * 0.55, (w - 40) / (textWidth(year, 'display-600', 1) * 1.05)), w - 36, 1.05)} color="#2E2C29" /> : null}
+            {/* Muted but legible; set in a lighter face than the title's so it never reads (to a PDF reader either) as a second title. */}
+            {year ? <Lines lines={setLines([{ text: year, face: 'display-600' }], Math.min(h * 0.55, (w - 40) / (textWidth(year, 'display-600', 1) * 1.05)), w - 36, 1.05)} color={PANEL_YEAR} /> : null}
           </View>
         ),
     }),

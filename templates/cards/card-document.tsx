@@ -5,6 +5,7 @@ import type { CardContent } from './content';
 import { fitBlocks, place, type Fitted, type Placed } from './layout';
 import type { DesignFn } from './design';
 import { posterDesign } from './poster';
+import { numberedCardNumberCapPt, numberedContentOf } from './numbered-card';
 import { dataSheetDesign } from './data-sheet';
 import { compactDesign } from './compact';
 import { pageBox, INK, WHITE } from './theme';
@@ -38,7 +39,10 @@ function draw(node: Placed, fitted: Fitted, key?: number): ReactElement {
 export function layoutCard(content: CardContent, design: CardDesign, paper: Paper, orientation: Orientation): { page: ReactElement; leftOff: CardLeftOff[] } {
   const box = pageBox(paper, orientation);
   const ch = box.height - 2 * box.margin;
-  const d = DESIGNS[design]({ content, k: box.k, leg: box.leg, contentHeight: ch }, box);
+  // A card for a show entry prints its number at least as large as the show's numbered card does.
+  const numbered = numberedContentOf(content);
+  const entryNumberScale = numbered ? numberedCardNumberCapPt(numbered) / box.leg.entryCapPt : undefined;
+  const d = DESIGNS[design]({ content, k: box.k, leg: box.leg, contentHeight: ch, entryNumberScale }, box);
   const fitted = fitBlocks(d.geo, d.blocks, d.priority, ch);
   const placed = place(d.geo, ch, fitted, d.blocks);
   const page = (

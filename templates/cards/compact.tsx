@@ -1,4 +1,4 @@
-import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock, highlightBlock } from './blocks';
+import { creditsBlock, engineBlock, entryAcross, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock, highlightBlock } from './blocks';
 import { only, type DesignFn } from './design';
 import { column } from './layout';
 
@@ -36,9 +36,11 @@ export const compactDesign: DesignFn = (ctx, box) => {
       geo: column(['entry', 'title', { row: [column(['figures'], sideW, g), column(['qr'], qrW, g)], gap: g * 1.5 }, 'engine', 'sections', 'highlight', 'credits', 'story', 'photo', 'more', 'footer'], cw, g),
     };
   }
+  // A card for a show entry prints its number as large as the show's numbered card: across the page, on top.
+  const across = entryAcross(ctx, qrW);
   return {
     blocks,
     priority: [...priority],
-    geo: column([{ row: [column(['title', 'figures', 'engine', 'sections', 'highlight', 'credits', 'story', 'photo', 'more'], sideW, g), column(['entry', 'qr'], qrW, g)], gap: g * 1.5 }, 'footer'], cw, g),
+    geo: column([...(across ? ['entry' as const] : []), { row: [column(['title', 'figures', 'engine', 'sections', 'highlight', 'credits', 'story', 'photo', 'more'], sideW, g), column(across ? ['qr'] : ['entry', 'qr'], qrW, g)], gap: g * 1.5 }, 'footer'], cw, g),
   };
 };

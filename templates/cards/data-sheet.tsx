@@ -1,4 +1,4 @@
-import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionRowsBlock, storyBlock, titleBlock, highlightBlock } from './blocks';
+import { creditsBlock, engineBlock, entryAcross, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionRowsBlock, storyBlock, titleBlock, highlightBlock } from './blocks';
 import { only, type DesignFn } from './design';
 import { column, fitBlocks, type BlockId, type Geo } from './layout';
 
@@ -35,12 +35,19 @@ export const dataSheetDesign: DesignFn = (ctx, box) => {
   // the code, with the title across the page above when that keeps more. The head that keeps the
   // most important blocks whole wins; ties keep the usual one.
   const beside = (ids: BlockId[]): Geo => ({ row: [column(ids, headW, g), column(['qr'], qrW, g)], gap: g * 1.5 });
-  const heads: Array<Array<BlockId | Geo>> = [
-    [beside(['title', 'entry']), 'figures'],
-    [beside(['title', 'entry', 'figures'])],
-    ['title', beside(['entry', 'figures'])],
-    ['title', 'entry', beside(['figures'])],
-  ];
+  // A card for a show entry prints its number as large as the show's numbered card: across the page, on top.
+  const heads: Array<Array<BlockId | Geo>> = entryAcross(ctx, headW)
+    ? [
+        ['entry', beside(['title']), 'figures'],
+        ['entry', beside(['title', 'figures'])],
+        ['entry', 'title', beside(['figures'])],
+      ]
+    : [
+        [beside(['title', 'entry']), 'figures'],
+        [beside(['title', 'entry', 'figures'])],
+        ['title', beside(['entry', 'figures'])],
+        ['title', 'entry', beside(['figures'])],
+      ];
   const geoWith = (head: Array<BlockId | Geo>): Geo => column([...head, 'engine', 'sections', 'highlight', 'credits', 'story', 'photo', 'more', 'footer'], cw, g);
   // How many blocks, most important first, a head keeps whole.
   const kept = (geo: Geo) => {

@@ -96,12 +96,8 @@ function ctxOf(content: NumberedCardContent, box: ReturnType<typeof pageBox>, co
   return { content: card, k: box.k, leg: box.leg, contentHeight };
 }
 
-/**
- * Lays the page out by measuring: the footer and the smallest QR code are kept, then the number
- * takes the largest scale that leaves room for the title at its floor, then the QR code and the
- * title grow into what is left, in that order.
- */
-export function layoutNumberedCard(content: NumberedCardContent, paper: Paper = 'letter', orientation: Orientation = 'portrait'): ReactElement {
+/** The measured parts of a numbered card that decide how large its number prints. */
+function measureNumberedCard(content: NumberedCardContent, paper: Paper, orientation: Orientation) {
   const box = pageBox(paper, orientation);
   const width = box.width - 2 * box.margin;
   const ch = box.height - 2 * box.margin;
@@ -112,16 +108,36 @@ export function layoutNumberedCard(content: NumberedCardContent, paper: Paper = 
   const title = titleBlock(ctx);
   const titleMin = title.lay(title.steps - 1, width)!;
   const fixed = (entry: Laid, qr: Laid, t: Laid) => entry.height + qr.height + t.height + footer.height + 3 * gap;
-
   const smallestQr = qrAt(QR_SCALES.length - 1);
-  let entry = layEntryBlock(content.show, width, { k: box.k, leg: box.leg, numberScale: 1 });
-  for (const scale of NUMBER_SCALES) {
-    const laid = layEntryBlock(content.show, width, { k: box.k, leg: box.leg, numberScale: scale });
-    if (fixed(laid, smallestQr, titleMin) <= ch) {
-      entry = laid;
-      break;
-    }
-  }
+  // The number takes the largest scale that leaves room for the title at its floor and the smallest QR code.
+  const numberScale = NUMBER_SCALES.find((scale) => fixed(layEntryBlock(content.show, width, { k: box.k, leg: box.leg, numberScale: scale }), smallestQr, titleMin) <= ch) ?? 1;
+  return { box, width, ch, gap, footer, qrAt, title, titleMin, fixed, smallestQr, numberScale };
+}
+
+/** What a numbered card for this owner's card would print (its show block, headline and QR code). */
+export const numberedContentOf = (content: CardContent): NumberedCardContent | null => {
+  const { show } = content;
+  if (!show?.entryNumber) return null;
+  return { show: { showName: show.showName ?? '', className: show.className ?? '', entryNumber: show.entryNumber }, heading: content.heading, name: content.name, qr: content.qr, shortUrl: content.shortUrl };
+};
+
+/**
+ * The cap height, in points, of the entry number on this content's numbered card as the show prints
+ * it (Letter, portrait): the owner's own card for the entry prints its number at least this large.
+ */
+export function numberedCardNumberCapPt(content: NumberedCardContent): number {
+  const { box, numberScale } = measureNumberedCard(content, 'letter', 'portrait');
+  return box.leg.entryCapPt * numberScale;
+}
+
+/**
+ * Lays the page out by measuring: the footer and the smallest QR code are kept, then the number
+ * takes the largest scale that leaves room for the title at its floor, then the QR code and the
+ * title grow into what is left, in that order.
+ */
+export function layoutNumberedCard(content: NumberedCardContent, paper: Paper = 'letter', orientation: Orientation = 'portrait'): ReactElement {
+  const { box, width, ch, gap, footer, qrAt, title, titleMin, fixed, smallestQr, numberScale } = measureNumberedCard(content, paper, orientation);
+  const entry = layEntryBlock(content.show, width, { k: box.k, leg: box.leg, numberScale });
   let qr = smallestQr;
   for (let i = 0; i < QR_SCALES.length; i++) {
     const laid = qrAt(i);

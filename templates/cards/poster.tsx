@@ -1,4 +1,4 @@
-import { creditsBlock, engineBlock, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock, highlightBlock } from './blocks';
+import { creditsBlock, engineBlock, entryAcross, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionLinesBlock, storyBlock, titleBlock, highlightBlock } from './blocks';
 import { only, type DesignFn } from './design';
 import { column } from './layout';
 
@@ -40,6 +40,9 @@ export const posterDesign: DesignFn = (ctx, box) => {
   return {
     blocks,
     priority: [...priority],
-    geo: column([{ row: [column(['entry', 'photo', 'qr'], leftW, g), column(['title', 'figures', 'engine', 'sections', 'highlight', 'credits', 'story', 'more'], rightW, g)], gap: g * 1.5 }, 'footer'], cw, g),
+    // A card for a show entry prints its number as large as the show's numbered card: across the page, on top.
+    geo: entryAcross(ctx, leftW)
+      ? column(['entry', { row: [column(['photo', 'qr'], leftW, g), column(['title', 'figures', 'engine', 'sections', 'highlight', 'credits', 'story', 'more'], rightW, g)], gap: g * 1.5 }, 'footer'], cw, g)
+      : column([{ row: [column(['entry', 'photo', 'qr'], leftW, g), column(['title', 'figures', 'engine', 'sections', 'highlight', 'credits', 'story', 'more'], rightW, g)], gap: g * 1.5 }, 'footer'], cw, g),
   };
 };

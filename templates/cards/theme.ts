@@ -7,6 +7,8 @@ export const GRAPHITE = '#55524C';
 export const RULE = '#D8D0C0';
 export const SIGNAL = '#D9481C';
 export const WHITE = '#FFFFFF';
+/** The year on the dark panel that stands in for a missing photo: muted, yet 4.6:1 against INK (WCAG 2.1 contrast ratio), so it reads through glass. */
+export const PANEL_YEAR = '#8A857C';
 
 export type PageBox = {
   width: number;

@@ -14,6 +14,7 @@ import { cropPoints, inside, overlaps, pageCount, rasterize, rasterizePages, rea
 import { Fragment, cloneElement, createElement } from 'react';
 import { renderToBuffer } from '@react-pdf/renderer';
 import { CardDocument, layoutCard } from '@templates/cards/card-document';
+import { numberedCardNumberCapPt, numberedContentOf } from '@templates/cards/numbered-card';
 import { registerCardFonts } from '@templates/cards/fonts';
 
 // The verification of every card layout: each design on every paper and orientation, for a corpus of
@@ -130,16 +131,29 @@ function check(design: CardDesign, c: Case, { pdf, layout, leftOff, scan }: Rend
     const number = texts.find((t) => t.str.trim() === c.show!.entryNumber && t.face === 'display-700');
     if (!number) fail('no entry number');
     else if (cap(number) < leg.entryCapPt - 0.01) fail(`entry number cap height ${cap(number).toFixed(1)} pt`);
+    // As large as the show's numbered card prints it, so the gate and the judges read both alike.
+    const numbered = numberedCardNumberCapPt(numberedContentOf(content)!);
+    if (number && cap(number) < numbered - 0.01) fail(`entry number cap height ${cap(number).toFixed(1)} pt, under the numbered card's ${numbered.toFixed(1)} pt`);
   }
   const values = new Set(content.figures.map((f) => f.value));
   const figureItems = texts.filter((t) => t.face === 'display-600' && values.has(t.str.trim()));
-  if (values.size && !figureItems.length) fail('no key figure');
+  // Only an entry's card, whose number prints as large as the numbered card's, may give up its figures, and then says so.
+  const figuresLeftOff = Boolean(c.show?.entryNumber) && leftOff.some((l) => l.block === 'Key figures');
+  if (values.size && !figureItems.length && !figuresLeftOff) fail('no key figure');
   for (const t of figureItems) if (cap(t) < leg.figureCapPt - 0.01) fail(`figure "${t.str}" cap height ${cap(t).toFixed(1)} pt`);
   // Small print allowed only for these: the footer, figure labels and notes, the QR caption, the entry label.
   const small = [ENGINEERING_CAUTION, 'PLACARD', 'ENTRY', 'Scan for the whole build', ...Object.values(CARD_FIGURE_LABELS), ...content.figures.map((f) => f.note), ...content.figures.map((f) => `${f.unit} ${f.mark}`)].map(norm).filter(Boolean);
   for (const t of texts) {
     if (t.size >= leg.linePt - 0.01 || small.some((s) => s.includes(norm(t.str).replace(/…$/, '')))) continue;
     fail(`"${t.str}" at ${t.size.toFixed(1)} pt`);
+  }
+
+  // A card with no photo keeps its year legible on the dark panel: WCAG 2.1's contrast ratio for large text, at least 3:1.
+  const year = content.heading.match(/^\d{4}\b/)?.[0];
+  const panelYear = !c.cover && year ? texts.find((t) => t.face === 'display-600' && t.str.trim() === year) : undefined;
+  if (panelYear) {
+    const ratio = contrastRatio(cropPoints(scan, panelYear, SCAN_DPI, 0));
+    if (ratio < 3) fail(`the year on the photo panel has a contrast of ${ratio.toFixed(2)}:1`);
   }
 
   // What did not fit is named, and the card says where the rest is.
@@ -154,7 +168,20 @@ function check(design: CardDesign, c: Case, { pdf, layout, leftOff, scan }: Rend
     // Rendered alone through the service, as an owner downloads it: one page (its code was scanned above).
     expect(pageCount(pdf), label).toEqual({ tree: 1, objects: 1 });
   }
-  return leftOff;
+  return { leftOff, panelYear: Boolean(panelYear) };
+}
+
+/** WCAG 2.1's contrast ratio between the lightest and darkest pixels (relative luminance of sRGB, §1.4.3's definition). */
+function contrastRatio(img: Pixels): number {
+  const lin = (c: number) => (c / 255 <= 0.03928 ? c / 255 / 12.92 : ((c / 255 + 0.055) / 1.055) ** 2.4);
+  let lo = 1;
+  let hi = 0;
+  for (let i = 0; i < img.data.length; i += 4) {
+    const l = 0.2126 * lin(img.data[i]!) + 0.7152 * lin(img.data[i + 1]!) + 0.0722 * lin(img.data[i + 2]!);
+    lo = Math.min(lo, l);
+    hi = Math.max(hi, l);
+  }
+  return (hi + 0.05) / (lo + 0.05);
 }
 
 /** Renders `design` for the whole corpus and checks every card. */
@@ -164,7 +191,9 @@ export function describeCardLayouts(design: CardDesign) {
       const cases = corpus(await demoCardBuildsInMemory());
       expect(cases.length).toBe(6 * 8 + 11);
       const rendered = await renderAll(design, cases);
-      const leftOffs = cases.map((c, i) => ({ c, leftOff: check(design, c, rendered[i]!) }));
+      const leftOffs = cases.map((c, i) => ({ c, ...check(design, c, rendered[i]!) }));
+      // Some card in the corpus has no photo and shows its year on the dark panel (its contrast was checked).
+      expect(leftOffs.some((l) => l.panelYear)).toBe(true);
       // The longest build cannot fit whole anywhere: it is cut, and says so; the empty one never is.
       expect(leftOffs.filter((l) => l.c.name.startsWith('notes')).every((l) => l.leftOff.length > 0)).toBe(true);
       expect(leftOffs.filter((l) => l.c.name === 'empty build').every((l) => l.leftOff.length === 0)).toBe(true);

@@ -24,20 +24,26 @@ describe('windshield card templates', () => {
   it('prints the title, figures with their provenance in words, section lines, credits, the short URL and the show', async () => {
     const build = typicalPublicBuild({ weight: { value: 1540, unit: 'kg', provenance: 'estimated' }, dynoRuns: [] });
     for (const design of CARD_DESIGNS) {
-      // Tabloid, where all of it fits (nothing left off), so every part must be there.
-      const { pdf, leftOff } = await renderCard(build, { ...settingsFor({ design, paper: 'tabloid', orientation: 'portrait' }), units: 'metric' }, { show: SHOW });
+      // Tabloid, where all of it fits (nothing left off), so every part must be there. The show and class
+      // without a number: an entry's number prints as large as the numbered card's, and takes room (below).
+      const { pdf, leftOff } = await renderCard(build, { ...settingsFor({ design, paper: 'tabloid', orientation: 'portrait' }), units: 'metric' }, { show: { showName: SHOW.showName, className: SHOW.className } });
       expect(leftOff, design).toEqual([]);
       const text = (await pdfText(pdf)).replace(/\s+/g, ' ');
       expect(text).toMatch(/1969\s*NIGHT\s*SHIFT/); // the owner's title, with the model year
       expect(text).toMatch(/FASTBACK\s*COUPE/i); // the body line
       expect(text).toMatch(/est\./i); // 650 hp est. flywheel power, in words
       expect(text).toContain('127.0.0.1:3999/c/K7P2M9Q');
-      expect(text).toContain('117');
       expect(text).toMatch(/RIVERSIDE\s*AUTUMN\s*RUN/);
       expect(text).toContain('Restomod, 1960–1975');
       expect(text).toMatch(/1,540\s*kg/);
       if (design !== 'compact') expect(text).toContain('Kestrel Lane Paint');
       expect(text).toMatch(/ENGINE|Engine/);
+      // With the entry's number: the number and the show print, and whatever gave way is named.
+      const entry = await renderCard(build, { ...settingsFor({ design, paper: 'tabloid', orientation: 'portrait' }), units: 'metric' }, { show: SHOW });
+      const entryText = (await pdfText(entry.pdf)).replace(/\s+/g, ' ');
+      expect(entryText).toContain('117');
+      expect(entryText).toMatch(/RIVERSIDE\s*AUTUMN\s*RUN/);
+      if (entry.leftOff.length) expect(entryText).toContain('More on the phone');
     }
   });
 
