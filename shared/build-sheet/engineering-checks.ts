@@ -12,13 +12,13 @@ export const QUARTER_MILE_MARGIN = 0.15;
 
 const f1 = (n: number) => formatNumber(n, { decimals: 1 });
 
-export function engineeringChecks(sections: Sections, input: { weight?: FigureInput | null; frontWeightPercent?: number }): SpecWarning[] {
+export function engineeringChecks(sections: Sections, input: { weight?: FigureInput | null; frontWeightPercent?: number; weighIns?: Parameters<typeof cgHeightFigures>[1] }): SpecWarning[] {
   const out: SpecWarning[] = [];
   const warn = (w: SpecWarning) => out.push(w);
 
   const brakes = brakeFigures(sections.brakes);
   if (brakes.status === 'ok' && input.frontWeightPercent !== undefined) {
-    const cg = cgHeightFigures(sections.chassis);
+    const cg = cgHeightFigures(sections.chassis, input.weighIns);
     const wheelbase = sections.chassis?.wheelbase;
     const stat = input.frontWeightPercent;
     // At 1 g the front axle carries its static share plus h/L of the weight; without h, allow 35 points.

@@ -351,8 +351,10 @@ export function sectionLinesBlock({ content, k, leg }: Ctx, cols = 1): BlockSpec
 
 /** Every section as a heading and its label / value rows, poured into columns like a data sheet. */
 export function sectionRowsBlock({ content, k, leg }: Ctx, cols: number): BlockSpec | undefined {
-  const items = content.sections
-    .filter((s) => s.rows.length || s.madeBy)
+  const sections = content.sections.filter((s) => s.rows.length || s.madeBy);
+  // The worked-out figures the owner chose, after the sections, marked as estimates; the caution is in the footer.
+  const worked = content.engineering?.length ? [{ label: 'Worked out (estimates)', rows: content.engineering, madeBy: null }] : [];
+  const items = [...sections, ...worked]
     .map((s) => ({
       label: s.label,
       lines: (size: number, width: number) => [

@@ -50,11 +50,12 @@ export function frontGeometryNumbers(input: NumbersInput): NumberGroup {
 }
 
 export function cgNumbers(input: NumbersInput): NumberGroup {
-  const c = cgHeightFigures(input.sections.chassis);
+  const c = cgHeightFigures(input.sections.chassis, input.weighIns);
   const rows: NumberRow[] = [];
   if (c.status === 'ok') {
     rows.push({ label: 'Centre-of-gravity height', ...len(c.value.cgHeight, input), estimate: true });
     rows.push({ label: 'Tilt angle', value: `${formatNumber(c.value.tiltDeg, { decimals: 1 })}°` });
+    rows.push({ label: 'From', value: c.value.from.kind === 'weigh-in' ? `the tilted weigh-in of ${c.value.from.date}` : 'the tilt figures kept with the chassis' });
   }
   return { id: 'cgHeight', title: 'Centre of gravity', section: 'chassis', rows, caution: true, ...said(c, rows), ...(rows.length ? { notes: ['h = r + L·ΔW ÷ (W·tan θ), θ = asin(raise ÷ wheelbase).'] } : {}) };
 }
