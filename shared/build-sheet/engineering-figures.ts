@@ -53,7 +53,9 @@ export type BrakeFigures = BrakeSystemResult & { input: BrakeSystemInput; pedalF
  */
 export function pistonDiameters(e: BrakesSection['front']): number[] | undefined {
   if (!e) return undefined;
-  if (e.pistonDiametersMm?.length) return e.pistonDiametersMm;
+  // A box the owner is still typing in (empty, or not a number yet) is not a piston.
+  const sizes = (e.pistonDiametersMm ?? []).filter((d) => typeof d === 'number' && Number.isFinite(d));
+  if (sizes.length) return sizes;
   if (!e.pistonDiameterMm || !e.caliperKind) return undefined;
   const count = e.caliperPistons ?? (e.caliperKind === 'opposed' ? 2 : 1);
   const perSide = e.caliperKind === 'opposed' ? Math.max(1, Math.floor(count / 2)) : count;

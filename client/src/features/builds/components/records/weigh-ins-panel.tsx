@@ -61,7 +61,7 @@ export function WeighInsPanel({ build }: { build: OwnerBuild }) {
     <EditorSection id="weighIns" title="Weigh-ins">
       <div className="flex flex-col gap-4">
         {message ? <Notice tone={message.tone}>{message.text}</Notice> : null}
-        {list.length === 0 ? <p className="text-sm text-graphite">No weigh-ins yet. Four corner scales give the weight and its splits.</p> : null}
+        {list.length === 0 ? <p className="text-sm text-graphite">No weigh-ins yet. Four corner scales give the weight and its splits; a tilted reading adds the centre-of-gravity height.</p> : null}
         <ul className="flex flex-col gap-3">
           {list.map((w) => (
             <li key={w.id} className="border border-rule p-3">
@@ -72,6 +72,11 @@ export function WeighInsPanel({ build }: { build: OwnerBuild }) {
               <div className="mt-2">
                 <Corners w={w} />
               </div>
+              {w.tilt ? (
+                <p className="mt-2 text-sm">
+                  Tilted: {w.tilt.raisedAxle} axle raised {formatNumber(w.tilt.raisedHeightMm)} mm; the {w.tilt.raisedAxle === 'front' ? 'rear' : 'front'} scales then read {formatNumber(w.tilt.leftRaised)} + {formatNumber(w.tilt.rightRaised)} {w.unit}; wheel centres {formatNumber(w.tilt.wheelCentreHeightMm)} mm up.
+                </p>
+              ) : null}
               <div className="mt-2 flex flex-wrap gap-2">
                 <Button
                   type="button"
