@@ -24,10 +24,46 @@ import type { BrakesSection, ChassisSection, Sections } from '../schemas/build-s
 import type { FigureInput } from '../schemas/figure';
 import type { WeighInCreateInput } from '../schemas/build';
 
-export type Worked<T> = { status: 'ok'; value: T } | { status: 'missing'; hint: string } | { status: 'refused'; field: string; reason: string };
+/** `refused`: the computation's own field name, and the same in the owner's words (`label`) for the message. */
+export type Worked<T> = { status: 'ok'; value: T } | { status: 'missing'; hint: string } | { status: 'refused'; field: string; label: string; reason: string };
+
+// The computations' input names as the owner knows the boxes. Each name is looked up without its
+// front./rear. prefix and list index; the end is put back in front ("front pad radial height").
+const FIELD_WORDS: Record<string, string> = {
+  padHeightMm: 'pad radial height',
+  rotorDiameterMm: 'rotor diameter',
+  pistonDiametersPerSideMm: 'piston diameter',
+  pistonDiametersMm: 'piston diameter',
+  padMu: 'pad friction coefficient',
+  masterBoreMm: 'master cylinder bore',
+  frontMasterBoreMm: 'master cylinder bore',
+  rearMasterBoreMm: 'rear master cylinder bore',
+  balanceFrontShare: 'balance bar front share',
+  valveSlope: 'proportioning valve slope',
+  valveKneeBar: 'proportioning valve knee',
+  pedalRatio: 'pedal ratio',
+  boosterAssist: 'booster assist ratio',
+  raisedHeight: 'height the axle was raised',
+  wheelbase: 'wheelbase',
+  wheelCentreHeight: 'wheel centre height',
+  totalWeight: 'total weight',
+  lowerAxleWeightLevel: 'axle on the scales, level',
+  lowerAxleWeightRaised: 'axle on the scales, tilted',
+  upper: 'upper arm',
+  lower: 'lower arm',
+  'upper.outer': 'upper ball joint',
+  'contactPatch.x': 'tyre contact patch',
+};
+
+export function fieldWords(field: string): string {
+  const m = /^(front|rear)\.(.+)$/.exec(field);
+  const end = m ? `${m[1]} ` : '';
+  const name = (m ? m[2]! : field).replace(/\[\d+\]$/, '');
+  return `${end}${FIELD_WORDS[name] ?? name}`;
+}
 
 const refused = (err: unknown): Worked<never> => {
-  if (err instanceof CalcInputError) return { status: 'refused', field: err.field, reason: err.reason };
+  if (err instanceof CalcInputError) return { status: 'refused', field: err.field, label: fieldWords(err.field), reason: err.reason };
   throw err;
 };
 

@@ -3,7 +3,7 @@ import { brakeFigures, cgHeightFigures, frontGeometryFigures, quarterMileFigures
 import { show } from './read';
 import { other, type NumberGroup, type NumberRow, type NumbersInput } from './types';
 
-const said = <T,>(w: Worked<T>, rows: NumberRow[]) => (w.status === 'refused' ? { notes: [`Cannot work this out: ${w.field} ${w.reason}.`] } : w.status === 'missing' && !rows.length ? { hint: w.hint } : {});
+const said = <T,>(w: Worked<T>, rows: NumberRow[]) => (w.status === 'refused' ? { notes: [`Cannot work this out: the ${w.label} ${w.reason}.`] } : w.status === 'missing' && !rows.length ? { hint: w.hint } : {});
 const len = (mm: number, input: NumbersInput) => ({ value: show('length', mm, 'mm', input.system), other: show('length', mm, 'mm', other(input.system)) });
 
 export function brakeNumbers(input: NumbersInput): NumberGroup {
