@@ -86,7 +86,8 @@ describe('the worked-out figures an owner chooses to show', () => {
     // The caution beside the figures, and the two sketches they come from.
     expect(worked).toMatch(/<p class="care">Estimates for presentation, not engineering approval/);
     expect(worked).toContain('data-testid="brake-split-bar"');
-    expect(worked).toContain('data-testid="front-view-sketch"');
+    // A sketch the browser can draw: a plain-number viewBox (no thousands separators).
+    expect(worked).toMatch(/<svg viewBox="0 0 \d+ \d+" role="img" aria-label="Front view of the front suspension: instant centre and roll centre at 102 mm" data-testid="front-view-sketch"/);
     expect(html).not.toMatch(/VIN-ENGINEERING|PLATE-ENG|NaN|Infinity/);
 
     const card = await cardText(api, build.id);

@@ -11,6 +11,9 @@ import { EditorSection } from '../editor/section-form';
 import { attempt } from '../../model/numbers/read';
 import { WeighInForm } from './weigh-in-form';
 
+/** A scale reading with the decimals it was given (up to two). */
+const asTyped = (v: number) => formatNumber(v, { decimals: Number.isInteger(v) ? 0 : Number.isInteger(Math.round(v * 1000) / 100) ? 1 : 2 });
+
 const newestFirst = (a: WeighIn, b: WeighIn) => (a.date < b.date ? 1 : a.date > b.date ? -1 : b.id - a.id);
 
 /** The total in the other unit system, e.g. "≈ 3,411 lb" beside kilograms. */
@@ -74,7 +77,7 @@ export function WeighInsPanel({ build }: { build: OwnerBuild }) {
               </div>
               {w.tilt ? (
                 <p className="mt-2 text-sm">
-                  Tilted: {w.tilt.raisedAxle} axle raised {formatNumber(w.tilt.raisedHeightMm)} mm; the {w.tilt.raisedAxle === 'front' ? 'rear' : 'front'} scales then read {formatNumber(w.tilt.leftRaised)} + {formatNumber(w.tilt.rightRaised)} {w.unit}; wheel centres {formatNumber(w.tilt.wheelCentreHeightMm)} mm up.
+                  Tilted: {w.tilt.raisedAxle} axle raised {formatNumber(w.tilt.raisedHeightMm)} mm; the {w.tilt.raisedAxle === 'front' ? 'rear' : 'front'} scales then read {asTyped(w.tilt.leftRaised)} + {asTyped(w.tilt.rightRaised)} {w.unit}; wheel centres {formatNumber(w.tilt.wheelCentreHeightMm)} mm up.
                 </p>
               ) : null}
               <div className="mt-2 flex flex-wrap gap-2">
