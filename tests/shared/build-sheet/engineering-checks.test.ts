@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { engineeringChecks, MASTER_TRAVEL_WINDOW } from '@shared/build-sheet/engineering-checks';
-import { cgHeightFigures, pistonDiameters } from '@shared/build-sheet/engineering-figures';
+import { brakeFigures, cgHeightFigures, pistonDiameters } from '@shared/build-sheet/engineering-figures';
 import { shownEngineering } from '@shared/build-sheet/engineering-shown';
 import type { BrakesSection, ChassisSection, Sections } from '@shared/schemas/build-sections';
 import type { SpecWarning } from '@shared/calc';
@@ -160,6 +160,14 @@ describe('pistons and the figures an owner shows', () => {
     // Six pistons, opposed: three push each pad.
     expect(pistonDiameters({ caliperKind: 'opposed', caliperPistons: 6, pistonDiameterMm: 38 })).toEqual([38, 38, 38]);
     expect(pistonDiameters({ caliperKind: 'floating', caliperPistons: 2, pistonDiameterMm: 45 })).toEqual([45, 45]);
+  });
+
+  it('a computation that refuses its input names the box in the owner’s words, never NaN', () => {
+    // The numbers panel works from unsaved boxes too, before the schema has refused them.
+    const tall = brakeFigures({ ...BRAKES, front: { ...BRAKES.front, padHeightMm: 170 } });
+    expect(tall).toEqual({ status: 'refused', field: 'front.padHeightMm', label: 'front pad radial height', reason: 'must be less than the rotor’s radius (half its diameter)' });
+    const raised = cgHeightFigures({ wheelbase: est(1500, 'mm') }, [{ ...tiltFor(500, 2500), tilt: { ...tiltFor(500, 2500).tilt, raisedHeightMm: 1500 } }]);
+    expect(raised).toMatchObject({ status: 'refused', label: 'height the axle was raised', reason: 'must be smaller than the wheelbase' });
   });
 
   it('shows nothing the owner did not choose, and the chosen figures in words with the caution', () => {
