@@ -7,7 +7,8 @@ import { precompressFolder } from './precompress';
 
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const BUILT = path.join(ROOT, 'dist/client/index.html');
-const SOURCES = ['client', 'shared', 'vite.config.ts', 'server/cli/precompress.ts'];
+// templates/charts: the dyno chart and the engineering sketches are drawn by the browser too.
+const SOURCES = ['client', 'shared', 'templates/charts', 'vite.config.ts', 'server/cli/precompress.ts'];
 // npm install rewrites the lock file even when nothing changed, so dependencies are compared by content.
 const LOCK = path.join(ROOT, 'package-lock.json');
 const LOCK_STAMP = path.join(ROOT, 'dist/client/.lock-sha256');

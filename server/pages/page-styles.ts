@@ -38,6 +38,7 @@ dl.spec dt{color:var(--graphite);padding-right:12px}
 dl.spec dd{font-variant-numeric:tabular-nums}
 .made,.why{margin:8px 0 0;color:var(--graphite)}
 .why{font-style:italic}
+.sketch{margin:12px 0 0;max-width:420px}.sketch svg{display:block;background:#fff;border:1px solid var(--rule)}.sketch figcaption{font-size:.875rem;color:var(--graphite)}
 .care{margin:8px 0 0;padding:8px 10px;border-left:3px solid var(--signal);background:#fff8;font-size:.875rem;color:var(--graphite)}
 .dyno svg{width:100%;height:auto;display:block;background:#fff;border:1px solid var(--rule)}
 .dyno p{font-size:.875rem;color:var(--graphite);margin:6px 0 0}

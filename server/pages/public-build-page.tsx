@@ -8,6 +8,8 @@ import { FUEL_LEVEL_LABELS, PROVENANCE_MARKS, inText } from '@shared/build-sheet
 import { headlineOf } from '@shared/build-sheet/headline';
 import { DISPLACEMENT_ROW, engineLine, sectionViews, type SectionView } from '@shared/build-sheet/spec-lines';
 import { DynoChart } from '@templates/charts/dyno-chart';
+import { BrakeSplitBar, FrontViewSketch } from '@templates/charts/engineering-diagrams';
+import { shownEngineering } from '@shared/build-sheet/engineering-shown';
 import { PAGE_CSS } from './page-styles';
 import { PageHead } from './page-head';
 import { BUILD_LOG_CSS } from './build-log-styles';
@@ -148,6 +150,34 @@ function Dyno({ build, units }: { build: PublicBuild; units: UnitSystem }) {
   );
 }
 
+/** The worked-out figures the owner chose to show, each an estimate, with the caution beside them and the two sketches they come from. */
+function WorkedOut({ build, units }: { build: PublicBuild; units: UnitSystem }) {
+  const shown = shownEngineering(build, units);
+  if (!shown) return null;
+  return (
+    <section id="worked-out" aria-labelledby="h-worked">
+      <h2 id="h-worked">Worked out</h2>
+      <dl className="spec">
+        {shown.figures.map((f) => (
+          <Row key={f.key} label={f.label} value={f.value} />
+        ))}
+      </dl>
+      {shown.brakes ? (
+        <figure className="sketch">
+          <BrakeSplitBar frontPercent={shown.brakes.frontPercent} />
+        </figure>
+      ) : null}
+      {shown.geometry ? (
+        <figure className="sketch">
+          <FrontViewSketch input={shown.geometry.input} centres={shown.geometry.centres} />
+          <figcaption>Front view of the right-hand front corner: the arms, the tyre and the roll centre (RC).</figcaption>
+        </figure>
+      ) : null}
+      <p className="care">{shown.caution}</p>
+    </section>
+  );
+}
+
 function computeUnit(kind: 'power' | 'torque', value: number, from: string, to: string) {
   return formatQuantity({ value: convert(kind, value, from as never, to as never), unit: to as Unit });
 }
@@ -276,6 +306,7 @@ function Page({ build, units, shows, preview, overTime }: { build: PublicBuild; 
           {views.map((v) => (
             <Section key={v.kind} view={v} />
           ))}
+          <WorkedOut build={build} units={units} />
           <Dyno build={build} units={units} />
           <WeighIns build={build} units={units} />
           {overTime ? <LogSection code={build.code} overTime={overTime} /> : null}

@@ -4,6 +4,7 @@ import type { PublicBuildResponse } from '@shared/schemas/card';
 import { publicSections, publicWeight } from '@shared/schemas/public-build-sections';
 import { computeKeyFigures } from '@shared/build-sheet/key-figures';
 import { engineLine } from '@shared/build-sheet/spec-lines';
+import { shownEngineering } from '@shared/build-sheet/engineering-shown';
 import type { Build } from '../models/build';
 import { presentPhoto } from './photo';
 import { publicBuildUrl } from './build';
@@ -52,6 +53,7 @@ export function presentPublicBuild(build: Build): PublicBuild {
       withDriver: w.withDriver,
       fuelLevel: w.fuelLevel,
       note: w.note,
+      ...(w.tilt ? { tilt: { raisedAxle: w.tilt.raisedAxle, raisedHeightMm: w.tilt.raisedHeightMm, wheelCentreHeightMm: w.tilt.wheelCentreHeightMm, leftRaised: w.tilt.leftRaised, rightRaised: w.tilt.rightRaised } } : {}),
     })),
     updatedAt: build.updatedAt.toISOString(),
   };
@@ -61,7 +63,10 @@ export function presentPublicBuild(build: Build): PublicBuild {
 export function presentPublicBuildResponse(b: PublicBuild): PublicBuildResponse {
   const e = b.sections.engine;
   const line = e ? { metric: engineLine(e, 'metric'), imperial: engineLine(e, 'imperial') } : null;
-  return { build: { ...b, keyFigures: computeKeyFigures(b), engineLine: line && (line.metric || line.imperial) ? line : null } };
+  const metric = shownEngineering(b, 'metric');
+  const imperial = shownEngineering(b, 'imperial');
+  const engineering = metric && imperial ? { metric: metric.figures, imperial: imperial.figures, caution: metric.caution } : null;
+  return { build: { ...b, keyFigures: computeKeyFigures(b), engineLine: line && (line.metric || line.imperial) ? line : null, engineering } };
 }
 
 /** A published build as a tile: title, year, style, cover and its public address; nothing else. */

@@ -22,11 +22,48 @@ import {
 } from '../calc';
 import type { BrakesSection, ChassisSection, Sections } from '../schemas/build-sections';
 import type { FigureInput } from '../schemas/figure';
+import type { WeighInCreateInput } from '../schemas/build';
 
-export type Worked<T> = { status: 'ok'; value: T } | { status: 'missing'; hint: string } | { status: 'refused'; field: string; reason: string };
+/** `refused`: the computation's own field name, and the same in the owner's words (`label`) for the message. */
+export type Worked<T> = { status: 'ok'; value: T } | { status: 'missing'; hint: string } | { status: 'refused'; field: string; label: string; reason: string };
+
+// The computations' input names as the owner knows the boxes. Each name is looked up without its
+// front./rear. prefix and list index; the end is put back in front ("front pad radial height").
+const FIELD_WORDS: Record<string, string> = {
+  padHeightMm: 'pad radial height',
+  rotorDiameterMm: 'rotor diameter',
+  pistonDiametersPerSideMm: 'piston diameter',
+  pistonDiametersMm: 'piston diameter',
+  padMu: 'pad friction coefficient',
+  masterBoreMm: 'master cylinder bore',
+  frontMasterBoreMm: 'master cylinder bore',
+  rearMasterBoreMm: 'rear master cylinder bore',
+  balanceFrontShare: 'balance bar front share',
+  valveSlope: 'proportioning valve slope',
+  valveKneeBar: 'proportioning valve knee',
+  pedalRatio: 'pedal ratio',
+  boosterAssist: 'booster assist ratio',
+  raisedHeight: 'height the axle was raised',
+  wheelbase: 'wheelbase',
+  wheelCentreHeight: 'wheel centre height',
+  totalWeight: 'total weight',
+  lowerAxleWeightLevel: 'axle on the scales, level',
+  lowerAxleWeightRaised: 'axle on the scales, tilted',
+  upper: 'upper arm',
+  lower: 'lower arm',
+  'upper.outer': 'upper ball joint',
+  'contactPatch.x': 'tyre contact patch',
+};
+
+export function fieldWords(field: string): string {
+  const m = /^(front|rear)\.(.+)$/.exec(field);
+  const end = m ? `${m[1]} ` : '';
+  const name = (m ? m[2]! : field).replace(/\[\d+\]$/, '');
+  return `${end}${FIELD_WORDS[name] ?? name}`;
+}
 
 const refused = (err: unknown): Worked<never> => {
-  if (err instanceof CalcInputError) return { status: 'refused', field: err.field, reason: err.reason };
+  if (err instanceof CalcInputError) return { status: 'refused', field: err.field, label: fieldWords(err.field), reason: err.reason };
   throw err;
 };
 
@@ -45,15 +82,28 @@ export const DEFAULT_PEDAL_FORCE_N = 445;
 
 export type BrakeFigures = BrakeSystemResult & { input: BrakeSystemInput; pedalForceAssumed: boolean };
 
+/**
+ * Each piston pushing one pad: the per-piston sizes when given (one side of an opposed caliper, or
+ * all of a floating one), else the one size kept before them, repeated for the pistons counted
+ * (an opposed caliper's count is both sides: half push each pad).
+ */
+export function pistonDiameters(e: BrakesSection['front']): number[] | undefined {
+  if (!e) return undefined;
+  // A box the owner is still typing in (empty, or not a number yet) is not a piston.
+  const sizes = (e.pistonDiametersMm ?? []).filter((d) => typeof d === 'number' && Number.isFinite(d));
+  if (sizes.length) return sizes;
+  if (!e.pistonDiameterMm || !e.caliperKind) return undefined;
+  const count = e.caliperPistons ?? (e.caliperKind === 'opposed' ? 2 : 1);
+  const perSide = e.caliperKind === 'opposed' ? Math.max(1, Math.floor(count / 2)) : count;
+  return Array.from({ length: perSide }, () => e.pistonDiameterMm as number);
+}
+
 export function brakeFigures(brakes: BrakesSection | undefined): Worked<BrakeFigures> {
   const h = brakes?.hydraulics;
   const end = (e: BrakesSection['front']) => {
     const rotor = valueIn('length', e?.rotorDiameter, 'mm');
-    if (!e?.caliperKind || !e.pistonDiameterMm || !e.padHeightMm || !e.padMu || rotor === undefined) return undefined;
-    const count = e.caliperPistons ?? (e.caliperKind === 'opposed' ? 2 : 1);
-    // Opposed calipers count pistons on both sides: half push each pad.
-    const perSide = e.caliperKind === 'opposed' ? Math.max(1, Math.floor(count / 2)) : count;
-    const diameters = Array.from({ length: perSide }, () => e.pistonDiameterMm as number);
+    const diameters = pistonDiameters(e);
+    if (!e?.caliperKind || !diameters || !e.padHeightMm || !e.padMu || rotor === undefined) return undefined;
     return {
       caliper: e.caliperKind === 'opposed' ? { kind: 'opposed' as const, pistonDiametersPerSideMm: diameters } : { kind: 'floating' as const, pistonDiametersMm: diameters },
       padMu: e.padMu,
@@ -64,7 +114,7 @@ export function brakeFigures(brakes: BrakesSection | undefined): Worked<BrakeFig
   const front = end(brakes?.front);
   const rear = end(brakes?.rear);
   if (!h?.pedalRatio || !h.masterBoreMm || !front || !rear) {
-    return { status: 'missing', hint: 'Enter the pedal ratio, the master cylinder bore and, for each axle, the caliper type, piston diameter, pad height, pad friction and rotor diameter for the brake split.' };
+    return { status: 'missing', hint: 'Enter the pedal ratio, the master cylinder bore and, for each axle, the caliper kind, piston diameters, pad height, pad friction and rotor diameter for the brake split.' };
   }
   const pedalForce = valueIn('force', h.pedalForce, 'N');
   const knee = valueIn('pressure', h.valveKnee, 'bar');
@@ -102,17 +152,32 @@ export function frontGeometryFigures(chassis: ChassisSection | undefined): Worke
   }
 }
 
-export type CgFigures = CgHeightResult & { unit: 'mm' };
+export type CgFigures = CgHeightResult & { unit: 'mm'; from: { kind: 'weigh-in'; date: string } | { kind: 'chassis' } };
 
-export function cgHeightFigures(chassis: ChassisSection | undefined): Worked<CgFigures> {
-  const t = chassis?.cgTilt;
+type TiltedWeighIn = Pick<WeighInCreateInput, 'date' | 'leftFront' | 'rightFront' | 'leftRear' | 'rightRear' | 'tilt'>;
+
+/**
+ * The CG height from the newest weigh-in with a tilted reading (the weigh-ins panel), or else from
+ * the tilt figures an earlier version kept in the chassis section. The wheelbase is the chassis's.
+ */
+export function cgHeightFigures(chassis: ChassisSection | undefined, weighIns: readonly TiltedWeighIn[] = []): Worked<CgFigures> {
   const wheelbase = valueIn('length', chassis?.wheelbase, 'mm');
-  if (!t?.raisedHeightMm || !t.wheelCentreHeightMm || !t.totalWeight || !t.lowerAxleLevel || !t.lowerAxleRaised || wheelbase === undefined) {
-    return { status: 'missing', hint: 'Enter the wheelbase and a tilt weigh-in (total weight, the axle on the scales level and raised, the raise and the wheel centre height) for the CG height.' };
-  }
+  const tilted = [...weighIns].filter((w) => w.tilt).sort((a, b) => (a.date < b.date ? 1 : a.date > b.date ? -1 : 0))[0];
+  const t = chassis?.cgTilt;
+  const missing = { status: 'missing' as const, hint: 'Enter the wheelbase (Chassis) and a weigh-in with a tilted reading (Weigh-ins: one axle raised, the other axle’s scales read again) for the CG height.' };
+  if (wheelbase === undefined) return missing;
   try {
+    if (tilted?.tilt) {
+      const w = tilted;
+      const tilt = tilted.tilt;
+      const total = w.leftFront + w.rightFront + w.leftRear + w.rightRear;
+      const level = tilt.raisedAxle === 'front' ? w.leftRear + w.rightRear : w.leftFront + w.rightFront;
+      const r = cgHeightFromTilt({ totalWeight: total, wheelbase, wheelCentreHeight: tilt.wheelCentreHeightMm, raisedHeight: tilt.raisedHeightMm, lowerAxleWeightLevel: level, lowerAxleWeightRaised: tilt.leftRaised + tilt.rightRaised });
+      return { status: 'ok', value: { ...r, unit: 'mm', from: { kind: 'weigh-in', date: w.date } } };
+    }
+    if (!t?.raisedHeightMm || !t.wheelCentreHeightMm || !t.totalWeight || !t.lowerAxleLevel || !t.lowerAxleRaised) return missing;
     const r = cgHeightFromTilt({ totalWeight: t.totalWeight, wheelbase, wheelCentreHeight: t.wheelCentreHeightMm, raisedHeight: t.raisedHeightMm, lowerAxleWeightLevel: t.lowerAxleLevel, lowerAxleWeightRaised: t.lowerAxleRaised });
-    return { status: 'ok', value: { ...r, unit: 'mm' } };
+    return { status: 'ok', value: { ...r, unit: 'mm', from: { kind: 'chassis' } } };
   } catch (err) {
     return refused(err);
   }

@@ -29,7 +29,8 @@ export type SpecWarningCode =
   | 'roll_centre_below_ground'
   | 'roll_centre_above_wheel_centre'
   | 'camber_gain_wrong_sign'
-  | 'quarter_mile_beyond_power';
+  | 'quarter_mile_beyond_power'
+  | 'quarter_mile_trap_beyond_power';
 
 export interface SpecWarning {
   code: SpecWarningCode;

@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import { tryParseTyreCode } from '../calc/tyres';
+import { UNITS, convert, type UnitOf } from '../calc/units';
+import { formatNumber } from '../calc/format';
 import { boundedNumber, figureSchema, plainMm, shortText, type MmRange } from './figure';
 import { text } from './text';
 
@@ -114,6 +116,8 @@ export const MM_RANGES = {
   masterBore: { label: 'Master cylinder bore', min: 10, max: 50 } satisfies MmRange,
   rearMasterBore: { label: 'Rear master cylinder bore', min: 10, max: 50 } satisfies MmRange,
   pistonDiameter: (end: 'Front' | 'Rear'): MmRange => ({ label: `${end} caliper piston diameter`, min: 10, max: 90 }),
+  /** One box per piston in the editor: piston 1, 2, 3 of one side (opposed) or of the caliper (floating). */
+  pistonNumber: (end: 'Front' | 'Rear', n: number): MmRange => ({ label: `${end} piston ${n} diameter`, min: 10, max: 90 }),
   padHeight: (end: 'Front' | 'Rear'): MmRange => ({ label: `${end} pad radial height`, min: 10, max: 120 }),
 };
 
@@ -199,8 +203,17 @@ export const ChassisSectionSchema = z.object({
 export const BRAKE_TYPES = ['disc', 'drum', 'none'] as const;
 export const CALIPER_KINDS = ['opposed', 'floating'] as const;
 export const RADIUS_MODELS = ['mean', 'uniform-pressure'] as const;
+/** Pistons of one side of an opposed caliper, or of a floating caliper: staggered sizes are common. */
+export const MAX_PISTONS_PER_SIDE = 3;
 const brakeEnd = (end: 'Front' | 'Rear') => ({
   caliperKind: z.enum(CALIPER_KINDS, { error: 'Choose opposed (fixed) or floating.' }).optional(),
+  /** Each piston's diameter: one side of an opposed caliper (the other side mirrors it), or every piston of a floating one. */
+  pistonDiametersMm: z
+    .array(plainMm(MM_RANGES.pistonDiameter(end)), { error: `${end} piston diameters must be a list of numbers.` })
+    .min(1, { error: `Give at least one ${end.toLowerCase()} piston diameter.` })
+    .max(MAX_PISTONS_PER_SIDE, { error: `At most ${MAX_PISTONS_PER_SIDE} ${end.toLowerCase()} pistons per side.` })
+    .optional(),
+  /** Kept from before the per-piston sizes: every piston the same size (read when `pistonDiametersMm` is absent). */
   pistonDiameterMm: plainMm(MM_RANGES.pistonDiameter(end)).optional(),
   padHeightMm: plainMm(MM_RANGES.padHeight(end)).optional(),
   padMu: boundedNumber(`${end} pad friction coefficient`, 0.1, 1).optional(),
@@ -218,15 +231,25 @@ export const BrakeHydraulicsSchema = z.object({
   valveSlope: boundedNumber('Proportioning valve slope', 0.1, 1).optional(),
   radiusModel: z.enum(RADIUS_MODELS, { error: 'Choose mean radius or uniform pressure.' }).optional(),
 });
-const brakeEndSchema = (end: 'Front' | 'Rear') => z.object({
-  type: z.enum(BRAKE_TYPES, { error: 'Choose disc, drum or none.' }).optional(),
-  rotorDiameter: lengthMm('Rotor or drum diameter', 150, 500).optional(),
-  rotorThickness: lengthMm('Rotor thickness', 5, 60).optional(),
-  caliperPistons: boundedNumber('Caliper pistons', 1, 12, { int: true }).optional(),
-  caliper: shortText('Caliper', 200).optional(),
-  pad: shortText('Pads', 120).optional(),
-  ...brakeEnd(end),
-});
+const brakeEndSchema = (end: 'Front' | 'Rear') =>
+  z
+    .object({
+      type: z.enum(BRAKE_TYPES, { error: 'Choose disc, drum or none.' }).optional(),
+      rotorDiameter: lengthMm('Rotor or drum diameter', 150, 500).optional(),
+      rotorThickness: lengthMm('Rotor thickness', 5, 60).optional(),
+      caliperPistons: boundedNumber('Caliper pistons', 1, 12, { int: true }).optional(),
+      caliper: shortText('Caliper', 200).optional(),
+      pad: shortText('Pads', 120).optional(),
+      ...brakeEnd(end),
+    })
+    .superRefine((b, ctx) => {
+      // A pad taller than the rotor's radius would reach past its centre: no effective radius.
+      if (b.padHeightMm === undefined || !b.rotorDiameter || !Number.isFinite(b.rotorDiameter.value) || !(b.rotorDiameter.unit in UNITS.length)) return;
+      const radius = convert('length', b.rotorDiameter.value, b.rotorDiameter.unit as UnitOf<'length'>, 'mm') / 2;
+      if (radius > 0 && b.padHeightMm >= radius) {
+        ctx.addIssue({ code: 'custom', path: ['padHeightMm'], message: `${end} pad radial height must be less than the rotor’s radius (${formatNumber(radius, { decimals: 1 })} mm, half its diameter).` });
+      }
+    });
 export const BrakeEndSchema = brakeEndSchema('Front');
 export const BrakesSectionSchema = z.object({
   ...common,

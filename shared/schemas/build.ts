@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { boundedNumber, figureSchema, shortText, type FigureInput } from './figure';
+import { boundedNumber, figureSchema, plainMm, shortText, type FigureInput } from './figure';
+import { MM_RANGES } from './build-sections';
 import type { Sections, SectionKind } from './build-sections';
 import { dynoCurveFromCsv } from './dyno-csv';
 import { curvePeaks, DYNO_PEAK_LIMITS, DYNO_POINT_LIMITS, type CurvePeaks } from '../calc/dyno';
@@ -162,17 +163,41 @@ export type DynoRunFormInput = z.input<typeof DynoRunCreateSchema>;
 
 // Weigh-ins
 export const FUEL_LEVELS = ['empty', 'quarter', 'half', 'three-quarters', 'full'] as const;
-export const WeighInCreateSchema = z.object({
-  date: calendarDate('Date'),
-  unit: z.enum(['kg', 'lb'], { error: 'Unit must be kg or lb.' }),
-  leftFront: boundedNumber('Left front', 10, 5000),
-  rightFront: boundedNumber('Right front', 10, 5000),
-  leftRear: boundedNumber('Left rear', 10, 5000),
-  rightRear: boundedNumber('Right rear', 10, 5000),
-  withDriver: z.boolean({ error: 'Say whether the driver was in the car.' }),
-  fuelLevel: z.enum(FUEL_LEVELS, { error: 'Choose a fuel level.' }),
-  note: shortText('Note', 500).optional(),
+/**
+ * The tilted reading of a weigh-in, for the centre-of-gravity height: one axle raised by
+ * `raisedHeightMm` (at its wheel centres), the two scales still under the other axle read again,
+ * in the weigh-in's unit. The level reading is the weigh-in's own corners.
+ */
+export const WeighInTiltSchema = z.object({
+  raisedAxle: z.enum(['front', 'rear'], { error: 'Choose which axle was raised.' }),
+  raisedHeightMm: plainMm(MM_RANGES.tiltRaise),
+  wheelCentreHeightMm: plainMm(MM_RANGES.wheelCentreHeight),
+  leftRaised: boundedNumber('Left scale, other axle raised', 10, 5000),
+  rightRaised: boundedNumber('Right scale, other axle raised', 10, 5000),
 });
+export type WeighInTilt = z.infer<typeof WeighInTiltSchema>;
+
+export const WeighInCreateSchema = z
+  .object({
+    date: calendarDate('Date'),
+    unit: z.enum(['kg', 'lb'], { error: 'Unit must be kg or lb.' }),
+    leftFront: boundedNumber('Left front', 10, 5000),
+    rightFront: boundedNumber('Right front', 10, 5000),
+    leftRear: boundedNumber('Left rear', 10, 5000),
+    rightRear: boundedNumber('Right rear', 10, 5000),
+    withDriver: z.boolean({ error: 'Say whether the driver was in the car.' }),
+    fuelLevel: z.enum(FUEL_LEVELS, { error: 'Choose a fuel level.' }),
+    note: shortText('Note', 500).optional(),
+    tilt: WeighInTiltSchema.optional(),
+  })
+  .superRefine((w, ctx) => {
+    const t = w.tilt;
+    if (!t) return;
+    const total = w.leftFront + w.rightFront + w.leftRear + w.rightRear;
+    if (t.leftRaised + t.rightRaised > total) {
+      ctx.addIssue({ code: 'custom', path: ['tilt', 'leftRaised'], message: `The two scales under the ${t.raisedAxle === 'front' ? 'rear' : 'front'} axle cannot read more together than the whole car (${total} ${w.unit}).` });
+    }
+  });
 export type WeighInCreateInput = z.infer<typeof WeighInCreateSchema>;
 export type WeighIn = WeighInCreateInput & { id: number; createdAt: string };
 

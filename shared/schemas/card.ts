@@ -3,6 +3,7 @@ import { SECTION_KINDS, type SectionKind } from './build-sections';
 import type { PROVENANCES } from './figure';
 import type { PublicBuild } from './build';
 import { shortText } from './text';
+import type { ShownEngineeringFigure } from '../build-sheet/engineering-shown';
 
 /** Our three windshield-card designs. */
 export const CARD_DESIGNS = ['poster', 'data-sheet', 'compact'] as const;
@@ -166,4 +167,6 @@ export type KeyFigure = {
 };
 
 /** The JSON twin of the public page: the public build plus the computed headline figures. */
-export type PublicBuildResponse = { build: PublicBuild & { keyFigures: KeyFigure[]; engineLine: { metric: string; imperial: string } | null } };
+/** The worked-out figures the owner chose to show (brake split, roll centre, camber gain, CG height), in words, with the caution. */
+export type PublicEngineering = { metric: ShownEngineeringFigure[]; imperial: ShownEngineeringFigure[]; caution: string };
+export type PublicBuildResponse = { build: PublicBuild & { keyFigures: KeyFigure[]; engineLine: { metric: string; imperial: string } | null; engineering: PublicEngineering | null } };

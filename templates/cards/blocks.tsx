@@ -379,6 +379,24 @@ export function sectionRowsBlock({ content, k, leg }: Ctx, cols: number): BlockS
   return flowBlock('Sections', items, lineSizes(leg, k, 1.25), { cols, colGap: 14 * k, itemGap: 0.8 });
 }
 
+/**
+ * The worked-out figures the owner chose to show (brake split, roll centre, camber gain, CG height), as
+ * rows like a section's, each marked est.; the engineering caution is the footer's. A block of its own,
+ * so the owner's choice is not the first thing a long sheet cuts.
+ */
+export function engineeringBlock({ content, k, leg }: Ctx): BlockSpec | undefined {
+  const rows = content.engineering ?? [];
+  if (!rows.length) return undefined;
+  const item = {
+    label: 'Worked out',
+    lines: (size: number, width: number) => [
+      ...setLines([{ text: 'WORKED OUT (ESTIMATES)', face: 'display-600', color: SIGNAL, letterSpacing: 1 }], size * 1.05, width, 1.3),
+      ...rows.flatMap((r) => setLines([{ text: r.label, face: 'text-400', color: GRAPHITE }, { text: `  ${r.value}`, face: 'text-600' }], size, width, 1.25)),
+    ],
+  };
+  return flowBlock('Worked out', [item], lineSizes(leg, k, 1.25), { colGap: 14 * k });
+}
+
 export function creditsBlock({ content, k, leg }: Ctx): BlockSpec | undefined {
   if (!content.credits.length) return undefined;
   const items = content.credits.map((c, i) => ({

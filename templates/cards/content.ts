@@ -18,6 +18,8 @@ export type CardContent = {
   credits: Array<{ role: string; name: string }>;
   /** The owner's story, paragraphs split by blank lines: printed last, when there is room. */
   story: string;
+  /** The worked-out figures the owner chose to show (brake split, roll centre, camber gain, CG height), in words; the data sheet prints them. */
+  engineering?: Array<{ label: string; value: string }>;
   /** Chassis, brake and suspension figures carry it. */
   caution: string | null;
   qr: { size: number; dark: boolean[] };

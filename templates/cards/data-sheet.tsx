@@ -1,4 +1,4 @@
-import { creditsBlock, engineBlock, entryAcross, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionRowsBlock, storyBlock, titleBlock, highlightBlock } from './blocks';
+import { creditsBlock, engineBlock, engineeringBlock, entryAcross, entryBlock, figuresBlock, footerBlock, moreBlock, photoBlock, qrBlock, qrBlockSide, sectionRowsBlock, storyBlock, titleBlock, highlightBlock } from './blocks';
 import { only, type DesignFn } from './design';
 import { column, fitBlocks, type BlockId, type Geo } from './layout';
 
@@ -20,6 +20,7 @@ export const dataSheetDesign: DesignFn = (ctx, box) => {
     figures: figuresBlock(ctx, { growTo: 1.3 }),
     // The engine's own rows say all the engine line says (and more): one of them, not both.
     engine: ctx.content.sections.some((s) => s.kind === 'engine' && s.rows.length) ? undefined : engineBlock(ctx),
+    engineering: engineeringBlock(ctx),
     sections: sectionRowsBlock(ctx, box.landscape ? 3 : 2),
     highlight: highlightBlock(ctx),
     credits: creditsBlock(ctx),
@@ -29,7 +30,8 @@ export const dataSheetDesign: DesignFn = (ctx, box) => {
     more: moreBlock(ctx),
     footer: footerBlock(ctx),
   });
-  const priority: BlockId[] = ['footer', 'title', 'entry', 'qr', 'figures', 'engine', 'sections', 'highlight', 'credits', 'photo', 'story'];
+  // The worked-out figures the owner chose come before the section rows, which cut cleanly at any line.
+  const priority: BlockId[] = ['footer', 'title', 'entry', 'qr', 'figures', 'engine', 'engineering', 'sections', 'highlight', 'credits', 'photo', 'story'];
   // The head: title and show beside the code, the figures below. A long title (and a long show name)
   // can make that head so tall that the figures fall off the card; then the figures move up beside
   // the code, with the title across the page above when that keeps more. The head that keeps the
@@ -48,7 +50,7 @@ export const dataSheetDesign: DesignFn = (ctx, box) => {
         ['title', beside(['entry', 'figures'])],
         ['title', 'entry', beside(['figures'])],
       ];
-  const geoWith = (head: Array<BlockId | Geo>): Geo => column([...head, 'engine', 'sections', 'highlight', 'credits', 'story', 'photo', 'more', 'footer'], cw, g);
+  const geoWith = (head: Array<BlockId | Geo>): Geo => column([...head, 'engine', 'engineering', 'sections', 'highlight', 'credits', 'story', 'photo', 'more', 'footer'], cw, g);
   // How many blocks, most important first, a head keeps whole.
   const kept = (geo: Geo) => {
     const lostLabels = new Set(fitBlocks(geo, blocks, priority, ctx.contentHeight).leftOff.map((l) => l.block));

@@ -5,7 +5,7 @@ import type { CardLeftOff } from '@shared/schemas/card';
 // (drawn with react-pdf's flex layout, every block in a box of its measured height), and fitted by
 // a declared priority order. Nothing is positioned absolutely, so nothing can overlap.
 
-export type BlockId = 'entry' | 'title' | 'qr' | 'figures' | 'photo' | 'engine' | 'sections' | 'credits' | 'highlight' | 'story' | 'more' | 'footer';
+export type BlockId = 'entry' | 'title' | 'qr' | 'figures' | 'photo' | 'engine' | 'engineering' | 'sections' | 'credits' | 'highlight' | 'story' | 'more' | 'footer';
 
 /** A block laid out at one size: its height and how to draw it in a box of a given size. */
 export type Laid = { height: number; draw: (width: number, height: number) => ReactElement; leftOff?: CardLeftOff[] };

@@ -30,7 +30,7 @@ export function FrontViewSketch({ input, centres, tyreDiameterMm = 650, tyreWidt
   // Strokes in drawing units: a sketch ~2 m wide drawn 300 px wide needs thick lines to show at all.
   const unit = Math.max(w, h) / 300;
   return (
-    <svg viewBox={`0 0 ${f0(w)} ${f0(h)}`} role="img" aria-label={`Front view of the front suspension: ${icShown ? 'instant centre and ' : ''}roll centre${rc !== null ? ` at ${f0(rc)} mm` : ''}`} data-testid="front-view-sketch" style={{ width: '100%', height: 'auto', maxHeight: 320 }}>
+    <svg viewBox={`0 0 ${Math.ceil(w)} ${Math.ceil(h)}`} role="img" aria-label={`Front view of the front suspension: ${icShown ? 'instant centre and ' : ''}roll centre${rc !== null ? ` at ${f0(rc)} mm` : ''}`} data-testid="front-view-sketch" style={{ width: '100%', height: 'auto', maxHeight: 320 }}>
       {line({ x: minX, y: 0 }, { x: maxX, y: 0 }, GRAPHITE, 1)}
       {line({ x: 0, y: minY }, { x: 0, y: maxY }, GRAPHITE, 1, '12 10')}
       <rect x={X(cp.x - tyreWidthMm / 2)} y={Y(tyreDiameterMm)} width={tyreWidthMm} height={tyreDiameterMm} rx={tyreWidthMm / 4} fill="none" stroke={INK} strokeWidth={2 * unit} />
@@ -74,9 +74,11 @@ export function CamberCurveChart({ curve }: { curve: CamberCurve }) {
       <path d={d} fill="none" stroke={SIGNAL} strokeWidth={2.5} />
       <text x={pad.l} y={H - 8} fontSize={11} fill={GRAPHITE}>−{formatNumber(maxC, { decimals: 1 })}° (top in)</text>
       <text x={W - pad.r} y={H - 8} fontSize={11} fill={GRAPHITE} textAnchor="end">+{formatNumber(maxC, { decimals: 1 })}°</text>
-      <text x={4} y={Y(maxT) + 4} fontSize={11} fill={GRAPHITE}>bump</text>
-      <text x={4} y={Y(-maxT)} fontSize={11} fill={GRAPHITE}>droop</text>
-      <text x={4} y={Y(0) - 4} fontSize={11} fill={GRAPHITE}>{f0(maxT)} mm</text>
+      <text x={4} y={Y(maxT) + 4} fontSize={11} fill={GRAPHITE}>+{f0(maxT)} mm</text>
+      <text x={4} y={Y(maxT) + 17} fontSize={11} fill={GRAPHITE}>bump</text>
+      <text x={4} y={Y(-maxT) - 13} fontSize={11} fill={GRAPHITE}>droop</text>
+      <text x={4} y={Y(-maxT)} fontSize={11} fill={GRAPHITE}>−{f0(maxT)} mm</text>
+      <text x={4} y={Y(0) - 4} fontSize={11} fill={GRAPHITE}>ride</text>
     </svg>
   );
 }

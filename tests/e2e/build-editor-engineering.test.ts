@@ -3,6 +3,7 @@ import type { Locator } from 'playwright-core';
 import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
+import { findBuild, setPublished } from '@server/services/builds/builds';
 
 const env = useBrowserAndServer();
 
@@ -11,7 +12,7 @@ async function fill(form: Locator, entries: Array<[string, string]>) {
 }
 
 describe('brake and front-geometry numbers in the build editor', () => {
-  it('an owner enters a front double wishbone and a brake setup and sees the figures and the three diagrams', async () => {
+  it('an owner enters a front double wishbone, a brake setup and a tilted weigh-in, sees the figures and the three diagrams, and shows them to visitors', async () => {
     const { user, email, password } = await createUser({ name: 'Ilse Marrow' });
     const build = await createBuild(user.id, { title: 'The Quarry Roadster' });
     const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
@@ -51,10 +52,12 @@ describe('brake and front-geometry numbers in the build editor', () => {
     };
     await rotor('Front', '330');
     await rotor('Rear', '300');
+    // Piston sizes one by one: the opposed front caliper's one side, the floating rear's only piston.
     await fill(brakes, [
-      ['Front caliper piston diameter', '38'],
+      ['Front piston 1 diameter', '38'],
+      ['Front piston 2 diameter', '38'],
       ['Front pad radial height', '50'],
-      ['Rear caliper piston diameter', '38'],
+      ['Rear piston 1 diameter', '38'],
       ['Rear pad radial height', '40'],
       ['Pedal ratio', '6'],
       ['Master cylinder bore', '22.2'],
@@ -67,9 +70,47 @@ describe('brake and front-geometry numbers in the build editor', () => {
     expect(await brakeGroup.getByText(/Estimates for presentation/).count()).toBe(1);
 
     await keepScreenshot(panel, 'build-editor-engineering-panel-desktop.png');
+
+    // A tilted reading in the weigh-ins panel gives the CG height: 1,000 kg, front raised 300 mm on a
+    // 2,500 mm wheelbase, the rear scales 8.12 kg heavier: 468 mm (as tests/server/api/engineering-figures.test.ts).
+    await chassis.getByLabel('Wheelbase', { exact: true }).fill('2500');
+    await page.getByRole('button', { name: 'Add a weigh-in' }).click();
+    const weighIn = page.getByRole('form', { name: 'Add a weigh-in' });
+    await fill(weighIn, [['LF · Left front', '250'], ['RF · Right front', '250'], ['LR · Left rear', '250'], ['RR · Right rear', '250']]);
+    await weighIn.getByLabel('Add a tilted reading (for the centre-of-gravity height)').check();
+    await weighIn.getByLabel('Axle raised', { exact: true }).selectOption('front');
+    await fill(weighIn, [['Height the axle was raised', '300'], ['Left rear scale, tilted (kg)', '254.06'], ['Right rear scale, tilted (kg)', '254.06'], ['Loaded wheel centre height', '300']]);
+    await keepScreenshot(weighIn, 'build-editor-engineering-tilt-desktop.png');
+    await weighIn.getByRole('button', { name: 'Add the weigh-in' }).click();
+    await expect.poll(() => page.getByText(/Tilted: front axle raised 300 mm; the rear scales then read 254\.06 \+ 254\.06 kg/).count()).toBe(1);
+    const cg = panel.locator('[data-numbers-group="cgHeight"]');
+    await expect.poll(() => cg.getByRole('row', { name: /Centre-of-gravity height/ }).textContent()).toMatch(/468\smm/);
+
+    // The owner chooses to show the figures; visitors then read them on the public page, with the caution.
+    await brakes.getByLabel(/^Show the brake split on the public page/).check();
+    await chassis.getByLabel(/^Show the front roll-centre height, camber gain and centre-of-gravity height/).check();
+    await expect.poll(() => page.getByTestId('save-summary').locator('visible=true').textContent()).toBe('All changes saved');
+    await setPublished(await findBuild(build.id), true);
+    const visitor = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
+    const publicPage = await visitor.newPage();
+    await publicPage.goto(`${env.baseUrl}/c/${build.code}?units=metric`);
+    const worked = publicPage.locator('#worked-out');
+    await expect.poll(() => worked.locator('dl').textContent()).toBe('Brake split71\u00a0% front / 29\u00a0% rear est.Front roll-centre height102\u00a0mm est.Front camber gain−0.85° per 25\u00a0mm of bump est.Centre-of-gravity height468\u00a0mm est.');
+    expect(await worked.locator('.care').textContent()).toMatch(/^Estimates for presentation, not engineering approval/);
+    expect(await worked.getByTestId('brake-split-bar').count()).toBe(1);
+    // The sketch is drawn: its arms have a size on screen.
+    const sketchBox = await worked.getByTestId('front-view-sketch').locator('line').first().boundingBox();
+    expect(sketchBox?.width).toBeGreaterThan(100);
+    await keepScreenshot(worked, 'public-build-worked-out-desktop.png');
+    await publicPage.setViewportSize({ width: 390, height: 844 });
+    await keepScreenshot(worked, 'public-build-worked-out-phone.png');
+    await visitor.close();
+
     await page.setViewportSize({ width: 390, height: 844 });
     await page.getByTestId('section-numbers-chassis').scrollIntoViewIfNeeded();
     await keepScreenshot(page.getByTestId('section-numbers-chassis'), 'build-editor-engineering-chassis-phone.png');
+    await page.getByTestId('section-numbers-brakes').scrollIntoViewIfNeeded();
+    await keepScreenshot(page.getByTestId('section-numbers-brakes'), 'build-editor-engineering-brakes-phone.png');
     await context.close();
   }, 120_000);
 });

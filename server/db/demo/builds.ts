@@ -73,17 +73,25 @@ export const DEMO_BUILDS: DemoBuild[] = [
         frame: 'modified', frameDescription: 'Factory unibody with welded-in subframe connectors and a six-point bolt-in bar',
         tubes: [{ use: 'Subframe connectors', shape: 'rectangular', material: 'Mild steel', outside: est(76.2, 'mm'), height: est(50.8, 'mm'), wall: est(3.05, 'mm') }],
         wheelbase: meas(2743, 'mm', '2025-08-20'), trackFront: est(1530, 'mm'), trackRear: est(1520, 'mm'),
-        front: { type: 'double-wishbone', springType: 'coil-over', springRate: est(650, 'lb/in'), motionRatio: 0.72, cornerSprungMass: est(370, 'kg'), dampers: 'Double-adjustable monotube', antiRollBar: '1.25 in hollow, adjustable' },
+        front: {
+          type: 'double-wishbone', springType: 'coil-over', springRate: est(650, 'lb/in'), motionRatio: 0.72, cornerSprungMass: est(370, 'kg'), dampers: 'Double-adjustable monotube', antiRollBar: '1.25 in hollow, adjustable',
+          // Measured off the car at ride height (invented): roll centre about 106 mm up, −0.83° per 25 mm of bump.
+          geometry: { upperInner: { x: 430, y: 450 }, upperOuter: { x: 680, y: 480 }, lowerInner: { x: 310, y: 190 }, lowerOuter: { x: 710, y: 170 }, contactPatchXMm: 765, wheelCentreHeightMm: 318 },
+        },
         rear: {
           type: 'four-link', springType: 'coil-over', springRate: est(225, 'lb/in'), motionRatio: 0.9, cornerSprungMass: est(330, 'kg'), dampers: 'Single-adjustable monotube', antiRollBar: 'Splined 1 in bar',
           fourLink: { upperFront: { x: 560, y: 400 }, upperRear: { x: 0, y: 440 }, lowerFront: { x: 620, y: 250 }, lowerRear: { x: 0, y: 230 }, cgHeightMm: 480 },
         },
         madeBy: { kind: 'owner' }, note: 'Most of the four years went here.',
+        showFigures: true,
       },
       brakes: {
-        front: { type: 'disc', rotorDiameter: meas(355, 'mm', '2025-09-01'), rotorThickness: est(32, 'mm'), caliperPistons: 6, caliper: 'Six-piston forged monoblock', pad: 'Street/track compound' },
-        rear: { type: 'disc', rotorDiameter: est(330, 'mm'), rotorThickness: est(25, 'mm'), caliperPistons: 4, caliper: 'Four-piston with a drum-in-hat parking brake' },
+        front: { type: 'disc', rotorDiameter: meas(355, 'mm', '2025-09-01'), rotorThickness: est(32, 'mm'), caliperPistons: 6, caliper: 'Six-piston forged monoblock', pad: 'Street/track compound', caliperKind: 'opposed', pistonDiametersMm: [30, 34, 38], padHeightMm: 52, padMu: 0.45 },
+        rear: { type: 'disc', rotorDiameter: est(330, 'mm'), rotorThickness: est(25, 'mm'), caliperPistons: 4, caliper: 'Four-piston with a drum-in-hat parking brake', caliperKind: 'opposed', pistonDiametersMm: [30, 34], padHeightMm: 44, padMu: 0.4 },
         masterCylinder: '1 in bore, aluminium', booster: 'Vacuum, 8 in dual diaphragm', parkingBrake: 'Drum-in-hat, cable',
+        // About 67 % of the torque in front, against 52 % of the weight (invented figures).
+        hydraulics: { pedalRatio: 4.5, pedalForce: est(300, 'N'), boosterAssist: 3, masterBoreMm: 25.4 },
+        showFigures: true,
         madeBy: { kind: 'new' },
       },
       wheels: {
@@ -121,7 +129,8 @@ export const DEMO_BUILDS: DemoBuild[] = [
         curve: earlierCurve, note: 'Before the smaller pulley.',
       },
     ],
-    weighIns: [{ date: '2026-06-01', unit: 'kg', leftFront: 412, rightFront: 398, leftRear: 366, rightRear: 371, withDriver: false, fuelLevel: 'half', note: 'Club scales, no driver.' }],
+    // The front raised 350 mm on blocks, the rear scales read again: a centre of gravity about 483 mm up.
+    weighIns: [{ date: '2026-06-01', unit: 'kg', leftFront: 412, rightFront: 398, leftRear: 366, rightRear: 371, withDriver: false, fuelLevel: 'half', note: 'Club scales, no driver.', tilt: { raisedAxle: 'front', raisedHeightMm: 350, wheelCentreHeightMm: 318, leftRaised: 372, rightRaised: 377 } }],
   },
   {
     ownerEmail: 'owner@placard.test',
@@ -191,8 +200,21 @@ export const DEMO_BUILDS: DemoBuild[] = [
     story: 'The family hauler turned into a comfortable cruiser with air conditioning and disc brakes all round.', weight: meas(1690, 'kg', '2025-07-12'),
     sections: {
       engine: { layout: 'V', cylinders: 8, displacement: est(6.2, 'L'), aspiration: 'natural', flywheelPower: est(430, 'hp') },
-      brakes: { front: { type: 'disc', rotorDiameter: est(13, 'in'), caliperPistons: 4 }, rear: { type: 'disc', rotorDiameter: est(12, 'in'), caliperPistons: 2 } },
+      chassis: {
+        frame: 'factory', wheelbase: est(2921, 'mm'), trackFront: est(1490, 'mm'),
+        front: { type: 'double-wishbone', springType: 'coil', geometry: { upperInner: { x: 400, y: 470 }, upperOuter: { x: 640, y: 490 }, lowerInner: { x: 280, y: 200 }, lowerOuter: { x: 690, y: 175 }, contactPatchXMm: 745, wheelCentreHeightMm: 335 } },
+        showFigures: true,
+      },
+      brakes: {
+        front: { type: 'disc', rotorDiameter: est(13, 'in'), caliperPistons: 4, caliperKind: 'opposed', pistonDiametersMm: [42, 42], padHeightMm: 50, padMu: 0.4 },
+        rear: { type: 'disc', rotorDiameter: est(12, 'in'), caliperPistons: 2, caliperKind: 'floating', pistonDiametersMm: [38, 38], padHeightMm: 42, padMu: 0.38 },
+        masterCylinder: '1 1/8 in bore, cast iron', booster: 'Vacuum, 9 in single diaphragm',
+        // A proportioning valve trims the rear: about 64 % of the torque in front (invented figures).
+        hydraulics: { pedalRatio: 4, pedalForce: est(300, 'N'), boosterAssist: 3.5, masterBoreMm: 28.6, valveKnee: est(40, 'bar'), valveSlope: 0.43 },
+        showFigures: true,
+      },
     },
+    weighIns: [{ date: '2025-07-12', unit: 'kg', leftFront: 468, rightFront: 462, leftRear: 382, rightRear: 378, withDriver: false, fuelLevel: 'full', note: 'Weighed level, then with the front on 300 mm blocks.', tilt: { raisedAxle: 'front', raisedHeightMm: 300, wheelCentreHeightMm: 335, leftRaised: 388, rightRaised: 385.5 } }],
     credits: [], drawings: [{ drawing: { body: '#2E7D4F', sky: '#EFE7D6', ground: '#8A8478', roof: 'wagon', stance: 12 }, caption: 'Ready for the road trip' }],
   },
   {

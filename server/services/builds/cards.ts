@@ -15,6 +15,7 @@ import { computeKeyFigures } from '@shared/build-sheet/key-figures';
 import { PROVENANCE_MARKS } from '@shared/build-sheet/choice-labels';
 import { headlineOf } from '@shared/build-sheet/headline';
 import { engineLine, sectionViews } from '@shared/build-sheet/spec-lines';
+import { shownEngineering } from '@shared/build-sheet/engineering-shown';
 
 /** Medium error correction (about 15% of the code can be lost to glare or a scuff) and a short URL: a low version, big modules. */
 export const QR_ERROR_CORRECTION = 'M' as const;
@@ -85,6 +86,8 @@ export function cardContent(build: PublicBuild, settings: CardSettings, opts: { 
       return { label: f.label, value, unit, mark: PROVENANCE_MARKS[f.provenance], note };
     });
   const views = sectionViews(build.sections, units, settings.sections);
+  // The worked-out figures of the sections printed on this card: the brake split with the brakes, the rest with the chassis.
+  const engineering = (shownEngineering(build, units)?.figures ?? []).filter((f) => settings.sections.includes(f.key === 'brakeSplit' ? 'brakes' : 'chassis')).map(({ label, value }) => ({ label, value }));
   return {
     heading,
     name,
@@ -94,7 +97,8 @@ export function cardContent(build: PublicBuild, settings: CardSettings, opts: { 
     sections: views.map((v) => ({ kind: v.kind, label: v.label, summary: v.summary || v.madeBy || v.note || '', rows: v.rows, madeBy: v.madeBy })),
     credits: build.credits,
     story: build.story ?? '',
-    caution: views.some((v) => v.caution) ? ENGINEERING_CAUTION : null,
+    engineering,
+    caution: views.some((v) => v.caution) || engineering.length ? ENGINEERING_CAUTION : null,
     // A show's card marks its QR with the show and number (`numberedCardAddress`); the printed address stays the plain one.
     qr: qrMatrix(opts.qrUrl ?? build.url),
     shortUrl: shortUrlOf(build.url),

@@ -1,7 +1,9 @@
 import { useState } from 'react';
-import { useForm, useWatch } from 'react-hook-form';
+import { useForm, useWatch, type Control, type FieldErrors, type UseFormRegister } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { FUEL_LEVELS, WeighInCreateSchema, type OwnerBuild, type WeighInCreateInput } from '@shared/schemas/build';
+import { MM_RANGES } from '@shared/schemas/build-sections';
+import { LengthMmField } from '../editor/length-mm-field';
 import { cornerWeights, formatNumber, formatPercent } from '@shared/calc';
 import { FUEL_LEVEL_LABELS } from '@shared/build-sheet/choice-labels';
 import { Button } from '@client/components/ui/button';
@@ -36,18 +38,39 @@ function LiveSplits({ values, unit }: { values: Partial<Values>; unit: string })
   );
 }
 
+/**
+ * The tilted reading: with the car weighed level (the corners above), one axle is raised on blocks
+ * and the two scales still under the other axle are read again.
+ */
+function TiltFields({ register, control, errors, axleOnScales, unit }: { register: UseFormRegister<Values>; control: Control<Values>; errors: FieldErrors<Values>; axleOnScales: 'front' | 'rear'; unit: string }) {
+  return (
+    <fieldset className="grid gap-4 border border-rule p-3 sm:grid-cols-2">
+      <legend className="px-1 font-display text-sm uppercase tracking-wide">Tilted reading</legend>
+      <p className="text-sm text-graphite sm:col-span-2">Raise one axle (measure the rise at its wheel centres), leave the other axle’s wheels on their scales and read those two scales again.</p>
+      <SelectField label="Axle raised" options={[{ value: 'front', label: 'Front' }, { value: 'rear', label: 'Rear' }]} {...register('tilt.raisedAxle')} error={errorAt(errors, 'tilt.raisedAxle')} />
+      <LengthMmField control={control} name="tilt.raisedHeightMm" range={MM_RANGES.tiltRaise} />
+      <TextField label={`Left ${axleOnScales} scale, tilted (${unit})`} inputMode="decimal" autoComplete="off" {...register('tilt.leftRaised', asNumber as never)} error={errorAt(errors, 'tilt.leftRaised')} />
+      <TextField label={`Right ${axleOnScales} scale, tilted (${unit})`} inputMode="decimal" autoComplete="off" {...register('tilt.rightRaised', asNumber as never)} error={errorAt(errors, 'tilt.rightRaised')} />
+      <LengthMmField control={control} name="tilt.wheelCentreHeightMm" range={MM_RANGES.wheelCentreHeight} />
+    </fieldset>
+  );
+}
+
 export function WeighInForm({ build, onDone }: { build: OwnerBuild; onDone: () => void }) {
   const add = useAddWeighIn(build.id);
   const [formError, setFormError] = useState('');
+  const [tilted, setTilted] = useState(false);
   const { register, control, handleSubmit, setError, formState: { errors, isDirty } } = useForm<Values>({
     resolver: zodResolver(WeighInCreateSchema) as never,
+    // The tilted reading's boxes leave the values when it is switched off, so a level weigh-in sends no tilt.
+    shouldUnregister: true,
     defaultValues: { date: new Date().toISOString().slice(0, 10), unit: 'kg', withDriver: false, fuelLevel: 'full', note: '' },
   });
   const values = useWatch({ control });
   useUnaddedRecord({ key: 'weighIns:new', label: 'Weigh-in', section: 'weighIns', addLabel: 'Add the weigh-in', filled: isDirty });
   const onSubmit = handleSubmit((input) => {
     setFormError('');
-    add.mutate({ ...input, note: input.note?.trim() || undefined }, { onSuccess: onDone, onError: (err) => setFormError(placeServerErrors(err, setError, ['date', 'unit', 'leftFront', 'rightFront', 'leftRear', 'rightRear', 'withDriver', 'fuelLevel', 'note'])) });
+    add.mutate({ ...input, note: input.note?.trim() || undefined }, { onSuccess: onDone, onError: (err) => setFormError(placeServerErrors(err, setError, ['date', 'unit', 'leftFront', 'rightFront', 'leftRear', 'rightRear', 'withDriver', 'fuelLevel', 'note', 'tilt'])) });
   });
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Add a weigh-in" className="flex flex-col gap-4 border border-ink p-3">
@@ -76,6 +99,11 @@ export function WeighInForm({ build, onDone }: { build: OwnerBuild; onDone: () =
         </label>
         <TextField label="Note" className="sm:col-span-2" {...register('note')} error={errorAt(errors, 'note')} />
       </div>
+      <label className="flex min-h-11 items-center gap-3">
+        <input type="checkbox" className="h-5 w-5 accent-ink" checked={tilted} onChange={(e) => setTilted(e.target.checked)} />
+        <span>Add a tilted reading (for the centre-of-gravity height)</span>
+      </label>
+      {tilted ? <TiltFields register={register} control={control} errors={errors} axleOnScales={values.tilt?.raisedAxle === 'rear' ? 'front' : 'rear'} unit={values.unit ?? 'kg'} /> : null}
       <div className="flex flex-wrap gap-2">
         <Button type="submit" busy={add.isPending}>
           Add the weigh-in

@@ -11,6 +11,9 @@ import { EditorSection } from '../editor/section-form';
 import { attempt } from '../../model/numbers/read';
 import { WeighInForm } from './weigh-in-form';
 
+/** A scale reading with the decimals it was given (up to two). */
+const asTyped = (v: number) => formatNumber(v, { decimals: Number.isInteger(v) ? 0 : Number.isInteger(Math.round(v * 1000) / 100) ? 1 : 2 });
+
 const newestFirst = (a: WeighIn, b: WeighIn) => (a.date < b.date ? 1 : a.date > b.date ? -1 : b.id - a.id);
 
 /** The total in the other unit system, e.g. "≈ 3,411 lb" beside kilograms. */
@@ -61,7 +64,7 @@ export function WeighInsPanel({ build }: { build: OwnerBuild }) {
     <EditorSection id="weighIns" title="Weigh-ins">
       <div className="flex flex-col gap-4">
         {message ? <Notice tone={message.tone}>{message.text}</Notice> : null}
-        {list.length === 0 ? <p className="text-sm text-graphite">No weigh-ins yet. Four corner scales give the weight and its splits.</p> : null}
+        {list.length === 0 ? <p className="text-sm text-graphite">No weigh-ins yet. Four corner scales give the weight and its splits; a tilted reading adds the centre-of-gravity height.</p> : null}
         <ul className="flex flex-col gap-3">
           {list.map((w) => (
             <li key={w.id} className="border border-rule p-3">
@@ -72,6 +75,11 @@ export function WeighInsPanel({ build }: { build: OwnerBuild }) {
               <div className="mt-2">
                 <Corners w={w} />
               </div>
+              {w.tilt ? (
+                <p className="mt-2 text-sm">
+                  Tilted: {w.tilt.raisedAxle} axle raised {formatNumber(w.tilt.raisedHeightMm)} mm; the {w.tilt.raisedAxle === 'front' ? 'rear' : 'front'} scales then read {asTyped(w.tilt.leftRaised)} + {asTyped(w.tilt.rightRaised)} {w.unit}; wheel centres {formatNumber(w.tilt.wheelCentreHeightMm)} mm up.
+                </p>
+              ) : null}
               <div className="mt-2 flex flex-wrap gap-2">
                 <Button
                   type="button"

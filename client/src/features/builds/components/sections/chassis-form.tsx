@@ -14,9 +14,10 @@ const END_TEXT = ['type', 'springType', 'dampers', 'antiRollBar', 'description']
 const TEXT = ['frame', 'frameDescription', 'cgTilt.raisedAxle', 'cgTilt.unit', ...END_TEXT.map((k) => `front.${k}`), ...END_TEXT.map((k) => `rear.${k}`), ...MADE_BY_BLANKS];
 const fromBuild = (b: OwnerBuild) => {
   const values = withBlanks<ChassisSection>(b.sections.chassis, TEXT);
-  return { ...values, tubes: (values.tubes ?? []).map((t) => ({ ...t, material: t.material ?? '' })) };
+  return { ...values, tubes: (values.tubes ?? []).map((t) => ({ ...t, material: t.material ?? '' })), showFigures: values.showFigures ?? false };
 };
 const FIELDS = Object.keys(ChassisSectionSchema.shape);
+const keptTilt = (b: OwnerBuild) => Object.values(b.sections.chassis?.cgTilt ?? {}).some((v) => typeof v === 'number');
 
 export function ChassisForm({ build }: { build: OwnerBuild }) {
   const mutation = useSaveSection(build.id, 'chassis');
@@ -37,7 +38,18 @@ export function ChassisForm({ build }: { build: OwnerBuild }) {
       <SuspensionEndFields end="rear" register={register} errors={errors} control={control} />
       <FrontGeometryFields register={register} errors={errors} control={control} />
       <FourLinkFields register={register} errors={errors} control={control} />
-      <CgTiltFields register={register} errors={errors} control={control} />
+      {/* The tilt weigh-in is taken in Weigh-ins now; a sheet that kept one here still shows and edits it. */}
+      {keptTilt(build) ? (
+        <CgTiltFields register={register} errors={errors} control={control} />
+      ) : (
+        <p className="text-sm text-graphite">
+          For the centre-of-gravity height, add a weigh-in with a tilted reading in <a className="underline" href="#section-weighIns">Weigh-ins</a>.
+        </p>
+      )}
+      <label className="flex min-h-11 items-center gap-3">
+        <input type="checkbox" className="h-5 w-5 accent-ink" {...register('showFigures')} />
+        <span>Show the front roll-centre height, camber gain and centre-of-gravity height on the public page and the data-sheet card (as estimates, with the engineering caution)</span>
+      </label>
       <MadeByFields register={register} errors={errors} control={control} />
     </SectionForm>
   );

@@ -61,11 +61,12 @@ export function FrontGeometryFields({ control }: Omit<Props, 'end'>) {
   );
 }
 
-/** A tilt weigh-in: weigh level, raise one axle, weigh the other again. */
+/** A tilt weigh-in kept with the chassis by an earlier version; new ones are a weigh-in's tilted reading. */
 export function CgTiltFields({ register, errors, control }: Omit<Props, 'end'>) {
   const f = { register, errors, form: 'chassis' as const };
   return (
-    <FieldGroup title="Tilt weigh-in (centre-of-gravity height)">
+    <FieldGroup title="Tilt weigh-in kept with the chassis (centre-of-gravity height)">
+      <p className="text-sm text-graphite sm:col-span-2">A newer weigh-in with a tilted reading (Weigh-ins) takes the place of these figures.</p>
       <Choice {...f} name="cgTilt.raisedAxle" label="Axle raised" options={['front', 'rear']} labels={{ front: 'Front', rear: 'Rear' }} />
       <Choice {...f} name="cgTilt.unit" label="Weights in" options={['kg', 'lb']} labels={{ kg: 'kg', lb: 'lb' }} />
       <NumberField {...f} name="cgTilt.totalWeight" label="Total weight" />

@@ -16,7 +16,7 @@ export function computeNumbers(input: NumbersInput): Numbers {
   const groups = [engineNumbers, powerNumbers, gearingNumbers, tyreNumbers, spacingNumbers, suspensionNumbers, antiSquatNumbers, frontGeometryNumbers, cgNumbers, tubeNumbers, cornerNumbers, brakeNumbers, quarterMileNumbers].map((fn) => fn(input));
   let warnings: PlacedWarning[] = [];
   try {
-    warnings = specWarnings(input.sections, { weight: input.weight, frontWeightPercent: frontWeightPercent(input) });
+    warnings = specWarnings(input.sections, { weight: input.weight, frontWeightPercent: frontWeightPercent(input), weighIns: input.weighIns });
   } catch {
     // The spec check is meant never to throw; if a half-typed value slips through, show no warnings rather than break the editor.
   }

@@ -3,7 +3,7 @@ import { brakeFigures, cgHeightFigures, frontGeometryFigures, quarterMileFigures
 import { show } from './read';
 import { other, type NumberGroup, type NumberRow, type NumbersInput } from './types';
 
-const said = <T,>(w: Worked<T>, rows: NumberRow[]) => (w.status === 'refused' ? { notes: [`Cannot work this out: ${w.field} ${w.reason}.`] } : w.status === 'missing' && !rows.length ? { hint: w.hint } : {});
+const said = <T,>(w: Worked<T>, rows: NumberRow[]) => (w.status === 'refused' ? { notes: [`Cannot work this out: the ${w.label} ${w.reason}.`] } : w.status === 'missing' && !rows.length ? { hint: w.hint } : {});
 const len = (mm: number, input: NumbersInput) => ({ value: show('length', mm, 'mm', input.system), other: show('length', mm, 'mm', other(input.system)) });
 
 export function brakeNumbers(input: NumbersInput): NumberGroup {
@@ -50,11 +50,12 @@ export function frontGeometryNumbers(input: NumbersInput): NumberGroup {
 }
 
 export function cgNumbers(input: NumbersInput): NumberGroup {
-  const c = cgHeightFigures(input.sections.chassis);
+  const c = cgHeightFigures(input.sections.chassis, input.weighIns);
   const rows: NumberRow[] = [];
   if (c.status === 'ok') {
     rows.push({ label: 'Centre-of-gravity height', ...len(c.value.cgHeight, input), estimate: true });
     rows.push({ label: 'Tilt angle', value: `${formatNumber(c.value.tiltDeg, { decimals: 1 })}°` });
+    rows.push({ label: 'From', value: c.value.from.kind === 'weigh-in' ? `the tilted weigh-in of ${c.value.from.date}` : 'the tilt figures kept with the chassis' });
   }
   return { id: 'cgHeight', title: 'Centre of gravity', section: 'chassis', rows, caution: true, ...said(c, rows), ...(rows.length ? { notes: ['h = r + L·ΔW ÷ (W·tan θ), θ = asin(raise ÷ wheelbase).'] } : {}) };
 }

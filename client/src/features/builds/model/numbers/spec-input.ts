@@ -4,7 +4,7 @@ import { engineeringChecks } from '@shared/build-sheet/engineering-checks';
 import type { FigureInput } from '@shared/schemas/figure';
 import type { FormKey } from '../form-keys';
 
-export type Overview = { weight?: FigureInput | null; frontWeightPercent?: number };
+export type Overview = { weight?: FigureInput | null; frontWeightPercent?: number; weighIns?: Parameters<typeof engineeringChecks>[1]['weighIns'] };
 
 const inches = (value: number | undefined): Figure | undefined => (value === undefined ? undefined : { value, unit: 'in', provenance: 'estimated' });
 
@@ -65,7 +65,7 @@ export function specWarnings(sections: Sections, overview: Overview): PlacedWarn
   const everywhere = specCheck({ ...sections, overview: { weight: overview.weight ?? undefined } } as unknown as SpecCheckInput).filter((w) => w.code === 'measured_without_date');
   const seen = new Set<string>();
   const placed: PlacedWarning[] = [];
-  const engineering = engineeringChecks(sections, { weight: overview.weight, frontWeightPercent: overview.frontWeightPercent });
+  const engineering = engineeringChecks(sections, { weight: overview.weight, frontWeightPercent: overview.frontWeightPercent, weighIns: overview.weighIns });
   for (const w of [...main, ...engineering, ...everywhere]) {
     const p = place(w);
     if (!p) continue;
