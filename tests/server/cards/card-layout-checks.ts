@@ -101,7 +101,11 @@ function check(design: CardDesign, c: Case, { pdf, layout, leftOff, scan }: Rend
 
   // The QR code: present, big enough, its quiet zone clear of text and inside the margins.
   const qr = layout.qr;
-  if (!qr) return [`${label}: no QR code`];
+  if (!qr) {
+    fail('no QR code');
+    expect(problems).toEqual([]);
+    return { leftOff, panelYear: false };
+  }
   const side = qr.x1 - qr.x0;
   if (side < leg.qrPt - 0.5) fail(`QR code ${side.toFixed(1)} pt, under ${leg.qrPt.toFixed(1)}`);
   const modules = qrMatrix(c.build.url).size;
