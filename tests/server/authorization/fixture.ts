@@ -11,6 +11,7 @@ import { EventInvitation } from '@server/models/event-invitation';
 import { ManualTieBreak } from '@server/models/manual-tie-break';
 import { EventMembership } from '@server/models/event-membership';
 import { Entry } from '@server/models/entry';
+import { CaughtMail } from '@server/models/caught-mail';
 import { receiveVisitorQuestion } from '@server/services/builds/build-questions';
 
 /**
@@ -120,6 +121,7 @@ export async function buildFixture() {
   // Its session ended with it: as the browser client does on a stale token, it fetches a new one (now signed out).
   await disabled.client.refresh();
   const spareAccount = await createUser({ name: 'Spare Account' });
+  const caughtMail = await CaughtMail.create({ from: 'placard@example.test', to: spareAccount.email, subject: 'A caught mail', text: 'Only the site admin reads this.', html: null });
 
   // ---- Records the routes name: the build's log post, question, photo; the same of another build.
   const logPost = (await buildOwner.client.post(`/api/builds/${build.id}/log`, { postedOn: '2025-09-13', title: 'First fire-up', body: 'It ran.', status: 'published' })).body.post as { id: number };
@@ -240,6 +242,7 @@ export async function buildFixture() {
     bInvitation,
     tieBreak: (who: Caller) => spareOf(tieBreaks, who),
     bTieBreak,
+    caughtMail: Number(caughtMail.id),
     printId: Number(print.body.print.id) as number,
     bPrintId: Number(bPrint.body.print.id) as number,
   };

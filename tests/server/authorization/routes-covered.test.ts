@@ -1,10 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { testApp } from '../../support/api-client';
 import { appRoutes, routeKey } from '../../support/route-table';
-import { PEOPLE_ROWS } from './rows-people';
-import { BUILD_ROWS } from './rows-builds';
-import { SHOW_ROWS } from './rows-shows';
-import { JUDGING_ROWS } from './rows-judging';
+import { CALLERS } from './fixture';
+import { PEOPLE_FOREIGN, PEOPLE_ROWS } from './rows-people';
+import { BUILD_FOREIGN, BUILD_ROWS } from './rows-builds';
+import { SHOW_FOREIGN, SHOW_ROWS } from './rows-shows';
+import { JUDGING_FOREIGN, JUDGING_ROWS } from './rows-judging';
 
 // The authorization matrix has one row per route the app answers, read from Express's own router:
 // a route added without a row (or a row left behind by a route taken away) fails here, by name.
@@ -16,6 +17,9 @@ describe('the authorization matrix', () => {
     expect(routes.filter((r) => !rows.includes(r)), 'routes without a row in tests/server/authorization/rows-*.ts').toEqual([]);
     expect(rows.filter((r) => !routes.includes(r)), 'rows naming no route').toEqual([]);
     expect(rows.filter((r, i) => rows.indexOf(r) !== i), 'routes with two rows').toEqual([]);
+    const foreign = [...PEOPLE_FOREIGN, ...BUILD_FOREIGN, ...SHOW_FOREIGN, ...JUDGING_FOREIGN];
+    expect(foreign.filter((c) => !routes.includes(c.route)), 'foreign-id cells naming no route').toEqual([]);
+    console.log(`authorization matrix: ${routes.length} routes × ${CALLERS.length} callers = ${routes.length * CALLERS.length} cells, and ${foreign.length} foreign-id cells`);
   });
 
   it('reads the routes of a router mounted under a path, and of one mounted bare', async () => {

@@ -45,6 +45,17 @@ export const BUILD_ROWS: Row[] = [
 
 /** The owner of the build, with another owner's records in the path or body. */
 export const BUILD_FOREIGN: ForeignCell[] = [
+  { route: 'POST /api/builds/:id/dyno-runs', as: 'buildOwner', why: "another owner's photo as the dyno sheet", status: 400, path: (f) => b(f, '/dyno-runs'), body: (f) => ({ ...DYNO_RUN, sheetPhotoId: f.foreign.photo }) },
+  {
+    route: 'POST /api/builds/:id/log',
+    as: 'buildOwner',
+    why: "a list of photos with another owner's photo",
+    status: 400,
+    path: (f) => b(f, '/log'),
+    body: (f) => ({ postedOn: '2025-10-02', title: 'Borrowed', body: 'Not mine.', photoIds: [f.photo.id, f.foreign.photo] }),
+  },
+  { route: 'POST /api/builds/:id/log', as: 'buildOwner', why: "another owner's dyno run linked", status: 400, path: (f) => b(f, '/log'), body: (f) => ({ postedOn: '2025-10-02', title: 'Borrowed', body: 'Not mine.', dynoRunId: f.foreign.dynoRunId }) },
+  { route: 'PATCH /api/builds/:id/log/:postId', as: 'buildOwner', why: "a list of photos with another owner's photo", status: 400, path: (f) => b(f, `/log/${f.logPost}`), body: (f) => ({ photoIds: [f.foreign.photo] }) },
   { route: 'DELETE /api/builds/:id/dyno-runs/:recordId', as: 'buildOwner', why: "another owner's dyno run under my build", status: 404, path: (f) => b(f, `/dyno-runs/${f.foreign.dynoRunId}`) },
   { route: 'POST /api/builds/:id/dyno-runs/:recordId/apply', as: 'buildOwner', why: "another owner's dyno run under my build", status: 404, path: (f) => b(f, `/dyno-runs/${f.foreign.dynoRunId}/apply`) },
   { route: 'PATCH /api/builds/:id/log/:postId', as: 'buildOwner', why: "another owner's log post under my build", status: 404, path: (f) => b(f, `/log/${f.foreign.logPost}`), body: () => ({ title: 'Mine now' }) },
