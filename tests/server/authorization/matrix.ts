@@ -10,7 +10,8 @@ import { CALLERS, type Caller, type Fixture } from './fixture';
  * The authorization matrix: who gets which answer from every route. A row names a route and a rule;
  * the rule is a line of the table below, one expected status per caller. `X` is the row's own answer
  * for a caller the rule lets through (200, 201, 204, or the service's 409 when the show's state says no).
- * The statuses are written out here, not computed from the product's policies.
+ * The statuses are written out here, not computed from the product's policies. The disabled account's
+ * session ended when the site admin turned it off, so it is answered as nobody signed in (401).
  */
 const X = 0;
 const RULES = {
@@ -46,7 +47,7 @@ export type Row = {
   route: string;
   rule: Rule;
   ok: Ok;
-  /** The path asked (default: the route's path with `:id` and the usual parameters filled from the fixture). */
+  /** The path asked (default: the route's path with `:id` filled: the build for `buildOwner`, the entry under /api/entries, else show A). */
   path?: (f: Fixture, who: Caller) => string;
   body?: (f: Fixture, who: Caller) => object;
   /** Send the body as a raw string (the payment webhook). */
@@ -56,8 +57,9 @@ export type Row = {
   /** Signs the caller out: after every other row of its file, the `last` ones too. */
   signsOut?: boolean;
   /**
-   * Limited per address (the visitors' forms): each caller sends from a loopback address of its own to a
-   * listening app, with its own cookies, so the limit of one does not answer for the next.
+   * Limited per address (the visitors' forms, confirming a reset or an address): each caller sends from a
+   * loopback address of its own to a listening app, with its own cookies, so neither the limit of one caller
+   * nor other test files' requests from 127.0.0.1 answer for the next.
    */
   ownAddress?: boolean;
   /** Why the row's answers are what they are, where the table alone does not say. */
@@ -107,20 +109,25 @@ const listeningUrl = () => {
 };
 export const closeListening = () => new Promise<void>((resolve) => (listening ? listening.server.close(() => resolve()) : resolve()));
 
-/** A form post as a browser sends it, from an address of its own, with the caller's cookies. */
+/**
+ * A request from a loopback address of its own to a listening app, with the caller's cookies: a form post as
+ * a browser sends it for the server's pages, JSON with the caller's CSRF token for the API.
+ */
 async function sendFromOwnAddress(client: Client, method: string, path: string, body?: object): Promise<Answer> {
   const url = await listeningUrl();
   const jar = (client.raw as unknown as { jar: { getCookies(info: object): { toValueString(): string } } }).jar;
   const cookie = jar.getCookies({ domain: '127.0.0.1', path: '/', secure: false, script: false }).toValueString();
-  const form = new URLSearchParams(Object.entries(body ?? {}).map(([k, v]) => [k, String(v)])).toString();
+  const api = path.startsWith('/api/');
+  const payload = api ? JSON.stringify(body ?? {}) : new URLSearchParams(Object.entries(body ?? {}).map(([k, v]) => [k, String(v)])).toString();
+  const headers = api ? { cookie, 'content-type': 'application/json', 'x-csrf-token': client.csrf } : { cookie, origin: url, 'content-type': 'application/x-www-form-urlencoded' };
   return new Promise((resolve, reject) => {
-    const req = http.request(`${url}${path}`, { method, localAddress: loopbackAddress(), headers: { cookie, origin: url, 'content-type': 'application/x-www-form-urlencoded' } }, (res) => {
+    const req = http.request(`${url}${path}`, { method, localAddress: loopbackAddress(), headers }, (res) => {
       const chunks: Buffer[] = [];
       res.on('data', (c: Buffer) => chunks.push(c));
       res.on('end', () => resolve({ status: res.statusCode ?? 0, text: Buffer.concat(chunks).toString('utf8').slice(0, 200) }));
     });
     req.on('error', reject);
-    req.end(method === 'GET' ? undefined : form);
+    req.end(method === 'GET' ? undefined : payload);
   });
 }
 
