@@ -98,11 +98,24 @@ export class JobQueue {
   async prepareCardQueue(): Promise<void> {
     await this.start();
     // A print of hundreds of cards takes a minute at most; a lost worker's job is tried again after this.
-    this.cardQueue ??= this.boss.createQueue(CARD_QUEUE, { name: CARD_QUEUE, retryLimit: 2, retryDelay: 5, expireInSeconds: 15 * 60 }).catch((err: unknown) => {
+    this.cardQueue ??= this.createQueueAlone(CARD_QUEUE, { retryLimit: 2, retryDelay: 5, expireInSeconds: 15 * 60 }).catch((err: unknown) => {
       this.cardQueue = undefined;
       throw err;
     });
     await this.cardQueue;
+  }
+
+  /**
+   * Makes a queue while no other process makes one: pg-boss's create_queue inserts the queue's row and then
+   * adds foreign keys to that table, so two processes making two queues at the same moment deadlock (and one
+   * answered its organiser's first card print with a 500). A transaction-level advisory lock, held for the making only.
+   */
+  async createQueueAlone(name: string, options: Omit<PgBoss.Queue, 'name'>): Promise<void> {
+    const boss = await this.start();
+    await sequelize.transaction(async (transaction) => {
+      await sequelize.query("SELECT pg_advisory_xact_lock(hashtext('placard:create-queue'))", { transaction });
+      await boss.createQueue(name, { ...options, name });
+    });
   }
 
   /**

@@ -11,7 +11,7 @@ import { Entry } from '../../models/entry';
 import { Event } from '../../models/event';
 import { EventClass } from '../../models/event-class';
 import { User } from '../../models/user';
-import { AppError, ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../../errors';
+import { AppError, ConflictError, NotFoundError, ValidationError } from '../../errors';
 import { writeAudit } from '../audit/audit';
 import { queueEntryRefund } from './entry-refunds';
 import { mailEntryReceived, mailPaymentConfirmed, mailWithdrawn } from './entry-mail';
@@ -48,8 +48,8 @@ export async function registerEntry(person: Person, eventId: number, input: Entr
     const cls = await EventClass.findOne({ where: { id: input.classId, eventId }, transaction });
     if (!cls) throw new ValidationError({ classId: 'This show has no such class.' });
     const build = await Build.findByPk(input.buildId, { attributes: ['id', 'ownerId', 'published', 'title'], transaction });
-    if (!build) throw new ValidationError({ buildId: 'No such build.' });
-    if (build.ownerId !== person.id) throw new ForbiddenError('You can only enter your own builds.');
+    // Someone else's build is answered as a missing one, so build ids cannot be probed through entering.
+    if (!build || build.ownerId !== person.id) throw new ValidationError({ buildId: 'No such build.' });
     if (!build.published) throw new ValidationError({ buildId: 'Publish the build sheet before entering it in a show.' });
     const notAgreed = event.asksFor.filter((field) => !input.shares.includes(field));
     if (notAgreed.length) throw new ValidationError({ shares: `This show asks for your ${listInWords(notAgreed.map((f) => ASKABLE_PRIVATE_FIELD_WORDS[f]))} on its entry form: agree to share it with the organisers to enter.` });

@@ -65,9 +65,11 @@ describe('registration rules', () => {
     expect(draftBuild.body.error.fields.buildId).toMatch(/Publish/);
 
     const stranger = await ownerWithBuild();
+    // Someone else's build is answered as a missing one: ids cannot be probed by entering them.
     const notMine = await owner.client.post(`/api/events/${eventId}/entries`, { buildId: stranger.build.id, classId: classIds[0] });
-    expect(notMine.status).toBe(403);
-    expect(notMine.body.error.message).toMatch(/your own builds/);
+    const noSuch = await owner.client.post(`/api/events/${eventId}/entries`, { buildId: 2_000_000_000, classId: classIds[0] });
+    expect([notMine.status, notMine.body.error.fields]).toEqual([400, { buildId: 'No such build.' }]);
+    expect([noSuch.status, noSuch.body.error.fields]).toEqual([400, { buildId: 'No such build.' }]);
 
     expect((await owner.client.post(`/api/events/${eventId}/entries`, { buildId: owner.build.id, classId: classIds[0] })).status).toBe(201);
     const twice = await owner.client.post(`/api/events/${eventId}/entries`, { buildId: owner.build.id, classId: classIds[1] });
