@@ -53,7 +53,9 @@ const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '
 function apiRouter() {
   const api = express.Router();
   api.use(healthRouter); // before the limiter and the session: probes must stay cheap
-  api.use(apiLimiter); // every other API request, the public JSON included, is metered per address
+  // The public JSON and the webhook have no session: metered per address before them. Every other request
+  // is metered after the session is read, per signed-in person or else per address (apiLimiter counts once).
+  api.use(['/public', '/payments'], apiLimiter);
   api.use(paymentsWebhookRouter); // raw body, no session, no CSRF: the signature is the proof
   api.use(publicApiRouter); // public JSON: no session, cacheable
   api.use((_req, res, next) => {
@@ -64,6 +66,7 @@ function apiRouter() {
   api.use(express.json({ limit: '1mb', verify: noteEmptyBody }), emptyBodyIsNoBody);
   api.use(sessionMiddleware);
   api.use(passport.session());
+  api.use(apiLimiter);
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, buildLogRouter, buildQuestionsRouter, photosRouter, cardsRouter, buildPreviewRouter);
