@@ -78,6 +78,8 @@ function apiRouter() {
 /** The built client: hashed assets cached for a year, and index.html for every client route. */
 function clientRouter() {
   const client = express.Router();
+  // Source maps are not for visitors: the build keeps them out of this folder, and a stray one is refused.
+  client.use((req, res, next) => (req.path.toLowerCase().endsWith('.map') ? void res.status(404).type('text/plain').send('Not found.') : next()));
   // Hashed file names never change: cached for a year; sent as the .br or .gz written at build time.
   client.use(
     '/assets',
@@ -87,7 +89,8 @@ function clientRouter() {
       serveStatic: { immutable: true, maxAge: '365d', fallthrough: false },
     }),
   );
-  client.use(express.static(CLIENT_DIST, { index: false, maxAge: '1h' }));
+  // The rest (the service workers, the icons): an hour, revalidated; the .br or .gz copy when the browser takes it.
+  client.use(expressStaticGzip(CLIENT_DIST, { enableBrotli: true, orderPreference: ['br', 'gz'], index: false, serveStatic: { index: false, maxAge: '1h' } }));
   client.get('/{*splat}', (_req, res) => {
     const index = path.join(CLIENT_DIST, 'index.html');
     if (!existsSync(index)) {
