@@ -33,7 +33,8 @@ ul.classes li{display:flex;flex-wrap:wrap;gap:0 12px;align-items:baseline;border
 ul.classes a{display:inline-block;min-height:44px;line-height:44px;font-weight:600}
 ul.classes a[aria-current]{border-bottom:3px solid var(--signal)}
 form.find{display:flex;flex-wrap:wrap;gap:8px 12px;align-items:end;margin:12px 0 8px}
-form.find label{flex:1 1 12rem;display:flex;flex-direction:column;font-size:.875rem;color:var(--graphite);gap:2px}
+form.find .field{flex:1 1 12rem;display:flex;flex-direction:column;gap:2px}
+form.find label{font-size:.875rem;color:var(--graphite)}
 form.find input,form.find select{min-height:44px;font:inherit;color:var(--ink);background:#fff;border:2px solid var(--ink);padding:0 8px;width:100%}
 form.find button{min-height:44px;font:600 1rem Oswald,"Arial Narrow",sans-serif;text-transform:uppercase;letter-spacing:.04em;background:var(--ink);color:var(--paper);border:2px solid var(--ink);padding:0 16px;cursor:pointer}
 .pager{display:flex;justify-content:space-between;align-items:center;gap:12px;margin-top:16px}
@@ -141,13 +142,13 @@ function Entries({ e, listing }: { e: PublicEvent; listing: PublicEntryListing }
         ))}
       </ul>
       <form className="find" method="get" action={`/e/${e.slug}#entries`} role="search">
-        <label>
-          Find a car by title or number
-          <input type="search" name="q" defaultValue={query.q} maxLength={80} />
-        </label>
-        <label>
-          Class
-          <select name="class" defaultValue={chosen ? String(chosen.id) : ''}>
+        <div className="field">
+          <label htmlFor="find-q">Find a car by title or number</label>
+          <input id="find-q" type="search" name="q" defaultValue={query.q} maxLength={80} />
+        </div>
+        <div className="field">
+          <label htmlFor="find-class">Class</label>
+          <select id="find-class" name="class" defaultValue={chosen ? String(chosen.id) : ''}>
             <option value="">Every class</option>
             {e.classes.map((c) => (
               <option key={c.id} value={c.id}>
@@ -155,7 +156,7 @@ function Entries({ e, listing }: { e: PublicEvent; listing: PublicEntryListing }
               </option>
             ))}
           </select>
-        </label>
+        </div>
         <button type="submit">Find</button>
       </form>
       <p id="entries" className="muted" role="status">

@@ -1,50 +1,14 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { randomBytes } from 'node:crypto';
 import { brotliDecompressSync } from 'node:zlib';
-import { QueryTypes } from 'sequelize';
-import { sequelize } from '@server/db/sequelize';
 import { publicPageCache } from '@server/pages/page-cache';
-import { BUILD_CODE_ALPHABET } from '@shared/schemas/build';
 import { PUBLIC_EVENT_ENTRIES_PER_PAGE } from '@shared/schemas/public-event';
 import { testApp } from '../../support/api-client';
-import { createUser } from '../../support/factories';
-import { showWithClasses } from '../../support/event-factory';
+import { bigShow } from '../../support/big-show';
 import { listenApp, rawGet } from '../../support/raw-http';
 import { checkPageVersionOnEveryRequest } from '../../support/page-cache';
 
 checkPageVersionOnEveryRequest();
-
-/** Codes no other test makes: a random prefix and the car's index in the alphabet of codes. */
-function codes(count: number): string[] {
-  const a = BUILD_CODE_ALPHABET;
-  const prefix = Array.from(randomBytes(3), (b) => a[b % a.length]).join('');
-  return Array.from({ length: count }, (_, i) => prefix + [3, 2, 1, 0].map((p) => a[Math.floor(i / a.length ** p) % a.length]).join(''));
-}
-
-/**
- * A show with `count` confirmed cars in three classes, written in one transaction of two statements (the
- * product's rows, as entering and paying would leave them): car i is number i + 1, in class i mod 3,
- * titled "Field car <number>", every tenth checked in; number 4321 is the one "Teal salt roadster".
- */
-async function bigShow(count: number) {
-  const show = await showWithClasses({ classes: [{ name: 'Hot rods' }, { name: 'Customs' }, { name: 'Trucks' }] });
-  const { user } = await createUser({ name: 'Many Cars' });
-  const titles = Array.from({ length: count }, (_, i) => (i + 1 === 4321 ? 'Teal salt roadster' : `Field car ${i + 1}`));
-  await sequelize.transaction(async (transaction) => {
-    const builds = await sequelize.query<{ id: number }>(
-      `INSERT INTO builds (owner_id, code, title, published, created_at, updated_at) SELECT :owner, c, t, true, now(), now() FROM unnest(ARRAY[:codes]::text[], ARRAY[:titles]::text[]) AS x(c, t) RETURNING id`,
-      { replacements: { owner: user.id, codes: codes(count), titles }, type: QueryTypes.SELECT, transaction },
-    );
-    await sequelize.query(
-      `INSERT INTO entries (event_id, build_id, class_id, owner_id, number, status, fee_amount, currency, paid_at, paid_amount, created_at, updated_at)
-       SELECT :event, b, (ARRAY[:classes]::int[])[(n - 1) % 3 + 1], :owner, n, CASE WHEN n % 10 = 0 THEN 'checked_in' ELSE 'confirmed' END, 2500, 'EUR', now(), 2500, now(), now()
-         FROM unnest(ARRAY[:builds]::int[]) WITH ORDINALITY AS x(b, n)`,
-      { replacements: { event: show.eventId, classes: show.classIds, owner: user.id, builds: builds.map((b) => b.id) }, transaction },
-    );
-  });
-  return show;
-}
 
 /** The numbers listed on a page, in order. */
 const numbersOn = (html: string) => [...html.matchAll(/<span class="n">(\d+)<\/span><a href/g)].map((m) => Number(m[1]));
@@ -93,7 +57,7 @@ describe('the public show page of a big show: paged and searchable without scrip
     const byTitle = await request(testApp()).get(`/e/${big.slug}?q=salt+ROADSTER`);
     expect(numbersOn(byTitle.text)).toEqual([4321]);
     expect(byTitle.text).toContain('1 car match “salt ROADSTER”');
-    expect(byTitle.text).toMatch(/<input type="search" name="q" maxLength="80" value="salt ROADSTER"\/>|value="salt ROADSTER"/);
+    expect(byTitle.text).toMatch(/<input id="find-q" type="search"[^>]* name="q"[^>]* value="salt ROADSTER"\/>/);
 
     const byNumber = await request(testApp()).get(`/e/${big.slug}?q=4321&class=`);
     expect(numbersOn(byNumber.text)).toEqual([4321]);
