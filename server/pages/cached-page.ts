@@ -7,7 +7,7 @@ import { encodingFor } from './send-html';
 import { PublicPagesBusyError, publicDbWork } from '../services/platform/public-db-budget';
 
 /** What a render hands the cache: the page, the tags of what it shows, and when it must be looked at again. */
-export type PageSource = { html: string; tags: string[]; version?: string; expiresAt?: number; votes?: VoteSlot[]; mustRevalidate?: boolean };
+export type PageSource = { html: string; tags: string[]; version?: string; expiresAt?: number; votes?: VoteSlot[]; mustRevalidate?: boolean; /** False: sent but not kept (a page past the last, that anyone could ask for by the thousand). */ keep?: boolean };
 
 export type PageLoader = {
   /** A cheap fingerprint of what the page shows (null: no such page), asked when the cache's trust has run out. */
@@ -58,7 +58,8 @@ export async function cachedPage(req: Request, key: string, load: PageLoader): P
         return null;
       }
       const page = toCached(source);
-      cache.set(key, page, before);
+      if (source.keep === false) cache.delete(key);
+      else cache.set(key, page, before);
       return page;
     });
   } catch (err) {

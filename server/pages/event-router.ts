@@ -32,6 +32,8 @@ async function renderEventPage(slug: string, query: PublicEventPageQuery) {
     // The titles shown are those of this page's cars only: a change to another car's title leaves it be.
     tags: pageTags.event(found.event.id, found.listing.entries.map((x) => x.buildId)),
     expiresAt: nextClockChange(found.event),
+    // Pages past the last and classes of other shows are answered but not kept: the cache holds what exists.
+    keep: !found.listing.unknownClass && (query.page === 1 || found.listing.entries.length > 0),
   };
 }
 

@@ -84,6 +84,8 @@ describe('the public show page of a big show: paged and searchable without scrip
     const beyond = await request(testApp()).get(`/e/${big.slug}?page=500`);
     expect(beyond.status).toBe(200);
     expect(beyond.text).toContain('There is no car on page 500.');
+    // A page past the last is answered but not kept: the cache holds only pages that exist.
+    expect(publicPageCache.get(`e|${big.slug}||500`)).toBeUndefined();
 
     for (const [query, field] of [
       ['page=two', 'page'],
