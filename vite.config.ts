@@ -64,7 +64,7 @@ export default defineConfig(({ mode }) => {
     resolve: { alias },
     // The app bundle is for signed-in screens; visitors' public pages are server HTML and never load it.
     // The manifest (dist/client/.vite/manifest.json) gives `npm run bench` the import graph to weigh each screen's code.
-    build: { outDir: here('./dist/client'), emptyOutDir: true, sourcemap: true, manifest: true, chunkSizeWarningLimit: 800 },
+    build: { outDir: here('./dist/client'), emptyOutDir: true, sourcemap: 'hidden', manifest: true, chunkSizeWarningLimit: 800 },
     server: {
       host: '127.0.0.1',
       port: 5173,

@@ -53,7 +53,9 @@ const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '
 function apiRouter() {
   const api = express.Router();
   api.use(healthRouter); // before the limiter and the session: probes must stay cheap
-  api.use(apiLimiter); // every other API request, the public JSON included, is metered per address
+  // The public JSON and the webhook have no session: metered per address before them. Every other request
+  // is metered after the session is read, per signed-in person or else per address (apiLimiter counts once).
+  api.use(['/public', '/payments'], apiLimiter);
   api.use(paymentsWebhookRouter); // raw body, no session, no CSRF: the signature is the proof
   api.use(publicApiRouter); // public JSON: no session, cacheable
   api.use((_req, res, next) => {
@@ -64,6 +66,7 @@ function apiRouter() {
   api.use(express.json({ limit: '1mb', verify: noteEmptyBody }), emptyBodyIsNoBody);
   api.use(sessionMiddleware);
   api.use(passport.session());
+  api.use(apiLimiter);
   api.use(csrfProtection);
   api.use(sessionRouter, usersRouter, accountRouter, passwordResetsRouter, emailVerificationsRouter, adminRouter);
   api.use(buildsRouter, buildRecordsRouter, buildLogRouter, buildQuestionsRouter, photosRouter, cardsRouter, buildPreviewRouter);
@@ -75,6 +78,8 @@ function apiRouter() {
 /** The built client: hashed assets cached for a year, and index.html for every client route. */
 function clientRouter() {
   const client = express.Router();
+  // Source maps are not for visitors: the build keeps them out of this folder, and a stray one is refused.
+  client.use((req, res, next) => (req.path.toLowerCase().endsWith('.map') ? void res.status(404).type('text/plain').send('Not found.') : next()));
   // Hashed file names never change: cached for a year; sent as the .br or .gz written at build time.
   client.use(
     '/assets',
@@ -84,7 +89,8 @@ function clientRouter() {
       serveStatic: { immutable: true, maxAge: '365d', fallthrough: false },
     }),
   );
-  client.use(express.static(CLIENT_DIST, { index: false, maxAge: '1h' }));
+  // The rest (the service workers, the icons): an hour, revalidated; the .br or .gz copy when the browser takes it.
+  client.use(expressStaticGzip(CLIENT_DIST, { enableBrotli: true, orderPreference: ['br', 'gz'], index: false, serveStatic: { index: false, maxAge: '1h' } }));
   client.get('/{*splat}', (_req, res) => {
     const index = path.join(CLIENT_DIST, 'index.html');
     if (!existsSync(index)) {

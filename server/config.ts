@@ -21,6 +21,14 @@ const EnvSchema = z.object({
   DB_NAME: z.string().regex(/^[a-z_][a-z0-9_]*$/).default('placard'),
   DB_CONNECT_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(3000),
   DB_STATEMENT_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(10_000),
+  /** Connections of each process's database pool, and how many of them visitors' public pages may hold at once. */
+  DB_POOL_MAX: z.coerce.number().int().min(2).max(200).default(10),
+  PUBLIC_DB_CONNECTIONS: z.coerce.number().int().min(1).max(199).default(3),
+  PUBLIC_DB_MAX_WAITING: z.coerce.number().int().min(0).max(100_000).default(1000),
+  /** The public page cache's size per process (rendered pages in three encodings). */
+  PAGE_CACHE_MAX_MB: z.coerce.number().min(1).max(4096).default(64),
+  /** How often each process merges its API request counters into PostgreSQL (shared by every process). */
+  RATE_LIMIT_SYNC_MS: z.coerce.number().int().min(50).max(60_000).default(1000),
   SESSION_SECRET: z.string().min(16).optional(),
   SESSION_MAX_AGE_DAYS: z.coerce.number().int().min(1).max(365).default(30),
   TRUST_PROXY: bool.default(false),
@@ -159,6 +167,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
   if (production && e.PASSWORD_HASH_PASSES !== undefined && e.PASSWORD_HASH_PASSES < 2) {
     throw new Error('Invalid environment:\n  PASSWORD_HASH_PASSES: at least 2 in production');
   }
+  if (e.PUBLIC_DB_CONNECTIONS >= e.DB_POOL_MAX) {
+    throw new Error(`Invalid environment:\n  PUBLIC_DB_CONNECTIONS: must be fewer than DB_POOL_MAX (${e.DB_POOL_MAX}), so signed-in work always has a connection`);
+  }
   const hashBase = e.NODE_ENV === 'test' ? TEST_PASSWORD_HASH : PASSWORD_HASH_DEFAULTS;
   const publicBaseUrl = (e.PUBLIC_BASE_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/$/, '');
   return {
@@ -174,6 +185,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     dbName: e.DB_NAME,
     /** How long a new database connection, or a free one from a pool, is waited for before the request fails with 503. */
     dbConnectTimeoutMs: e.DB_CONNECT_TIMEOUT_MS,
+    dbPoolMax: e.DB_POOL_MAX,
+    /** At most this many of the pool's connections serve visitors' public pages at once (`publicDbWork`). */
+    publicDbConnections: e.PUBLIC_DB_CONNECTIONS,
+    publicDbMaxWaiting: e.PUBLIC_DB_MAX_WAITING,
+    pageCacheMaxBytes: Math.round(e.PAGE_CACHE_MAX_MB * 1024 * 1024),
+    rateLimitSyncMs: e.RATE_LIMIT_SYNC_MS,
     /**
      * How long one statement of a request may run: PostgreSQL cancels it then (`statement_timeout`), and the
      * client gives up a moment later if the server does not answer at all (`query_timeout`). Migrations and

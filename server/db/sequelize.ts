@@ -11,7 +11,7 @@ function createSequelize(statementTimeoutMs: number | null) {
     logging: false,
     // `acquire` bounds the whole wait for a connection (a free one from the pool or a new one), so a request
     // never waits longer than DB_CONNECT_TIMEOUT_MS for one, however many requests queue for the pool.
-    pool: { max: 10, min: 0, idle: 10_000, acquire: config.dbConnectTimeoutMs, evict: 1000 },
+    pool: { max: config.dbPoolMax, min: 0, idle: 10_000, acquire: config.dbConnectTimeoutMs, evict: 1000 },
     dialectOptions: { connectionTimeoutMillis: config.dbConnectTimeoutMs, ...statementBounds },
     define: { underscored: true },
   });

@@ -1,10 +1,11 @@
 import { rateLimit, ipKeyGenerator, type RateLimitRequestHandler } from 'express-rate-limit';
 import { createHash } from 'node:crypto';
-import type { Request } from 'express';
+import type { Request, RequestHandler } from 'express';
 import { EMAIL_VERIFICATION_RESENDS_PER_HOUR } from '@shared/constants';
 import { AppError } from '../errors';
 import { config } from '../config';
 import { PostgresRateLimitStore } from './rate-limit-store';
+import { BatchedRateLimitStore } from './rate-limit-batched-store';
 
 const tooMany = (message: string) => () => {
   throw new AppError(429, 'RATE_LIMITED', message);
@@ -24,7 +25,7 @@ const person = (req: Request) => (req.user ? `user:${(req.user as { id: number }
 
 function limiter(
   name: string,
-  opts: { windowMs: number; limit: number; key: (req: Request) => string; message: string; skipSuccessfulRequests?: boolean; skipFailedRequests?: boolean; store?: PostgresRateLimitStore },
+  opts: { windowMs: number; limit: number | (() => number); key: (req: Request) => string; message: string; skipSuccessfulRequests?: boolean; skipFailedRequests?: boolean; store?: PostgresRateLimitStore | BatchedRateLimitStore },
 ): RateLimitRequestHandler {
   return rateLimit({
     skipSuccessfulRequests: opts.skipSuccessfulRequests ?? false,
@@ -160,13 +161,32 @@ export const photoUploadLimiter = limiter('photo-upload', {
   message: 'Too many uploads in a short time. Wait a few minutes and try again.',
 });
 
-/** Every API request per address, the public JSON included. */
-export const apiLimiter = limiter('api', {
+/**
+ * The API request counters: in this process, merged into PostgreSQL once a second (no statement per
+ * request; see BatchedRateLimitStore for what several processes may let through between merges).
+ */
+export const apiRateLimitStore = new BatchedRateLimitStore('api:');
+const apiRequests = limiter('api', {
   windowMs: 60 * 1000,
-  limit: config.apiRateLimitPerMinute,
-  key: ip,
+  // Read per request, so a test may lower it for a while.
+  limit: () => config.apiRateLimitPerMinute,
+  key: person,
   message: 'Too many requests. Slow down a little and try again.',
+  store: apiRateLimitStore,
 });
+const counted = Symbol('api request counted');
+
+/**
+ * Every API request, once: a signed-in person's by their account (judges and the gate on one show Wi-Fi
+ * each have their own budget), anyone else's by address. Mounted before the public JSON (no session
+ * there: by address) and again after the session is read; a request is counted at the first it reaches.
+ */
+export const apiLimiter: RequestHandler = (req, res, next) => {
+  const r = req as Request & { [counted]?: true };
+  if (r[counted]) return next();
+  r[counted] = true;
+  return apiRequests(req, res, next);
+};
 
 /**
  * People's choice vote attempts per address, refused ones included. Each visitor votes once per show,

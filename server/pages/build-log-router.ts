@@ -10,6 +10,7 @@ import { NOT_FOUND_HTML } from './public-build-page';
 import { renderLogPage, renderQuestionOutcome, type QuestionOutcome } from './build-log-pages';
 import { buildLogFeed } from './build-log-feed';
 import { sendHtml } from './send-html';
+import { publicDbWork } from '../services/platform/public-db-budget';
 
 /** The build over time, public side: the "all posts" page, the Atom feed, and a visitor's question (a plain form post). */
 export const buildLogPagesRouter = Router();
@@ -22,17 +23,24 @@ function notFound(res: Response) {
 }
 
 buildLogPagesRouter.get('/c/:code/log', async (req, res) => {
-  const build = await loadPublicBuild(codeOf(req.params.code));
-  if (!build) return notFound(res);
-  const posts = (await loadAllPublicPosts(build.id)).map(presentPublicLogPost);
+  const found = await publicDbWork(async () => {
+    const build = await loadPublicBuild(codeOf(req.params.code));
+    return build && { build, posts: await loadAllPublicPosts(build.id) };
+  });
+  if (!found) return notFound(res);
+  const { build } = found;
+  const posts = found.posts.map(presentPublicLogPost);
   sendHtml(req, res, renderLogPage(presentPublicBuild(build), posts), PUBLIC_CACHE);
 });
 
 buildLogPagesRouter.get('/c/:code/log.atom', async (req, res) => {
-  const build = await loadPublicBuild(codeOf(req.params.code));
-  if (!build) return notFound(res);
-  const pub = presentPublicBuild(build);
-  const posts = (await loadFeedPosts(build.id)).map(presentPublicLogPost);
+  const found = await publicDbWork(async () => {
+    const build = await loadPublicBuild(codeOf(req.params.code));
+    return build && { build, posts: await loadFeedPosts(build.id) };
+  });
+  if (!found) return notFound(res);
+  const pub = presentPublicBuild(found.build);
+  const posts = found.posts.map(presentPublicLogPost);
   res.set('Cache-Control', PUBLIC_CACHE).type('application/atom+xml; charset=utf-8').send(buildLogFeed({ buildUrl: pub.url, title: pub.title, ownerName: pub.ownerName, buildUpdatedAt: pub.updatedAt, posts }));
 });
 

@@ -4,9 +4,10 @@ import { compressPage, publicPageCache, type CachedPage, type VoteSlot } from '.
 import { piecesOf } from './page-pieces';
 import { voteBoxMark } from './vote-box';
 import { encodingFor } from './send-html';
+import { PublicPagesBusyError, publicDbWork } from '../services/platform/public-db-budget';
 
 /** What a render hands the cache: the page, the tags of what it shows, and when it must be looked at again. */
-export type PageSource = { html: string; tags: string[]; version?: string; expiresAt?: number; votes?: VoteSlot[]; mustRevalidate?: boolean };
+export type PageSource = { html: string; tags: string[]; version?: string; expiresAt?: number; votes?: VoteSlot[]; mustRevalidate?: boolean; /** False: sent but not kept (a page past the last, that anyone could ask for by the thousand). */ keep?: boolean };
 
 export type PageLoader = {
   /** A cheap fingerprint of what the page shows (null: no such page), asked when the cache's trust has run out. */
@@ -40,7 +41,7 @@ export async function cachedPage(req: Request, key: string, load: PageLoader): P
   const before = cache.changeCount;
   try {
     if (hit?.version !== undefined && load.version) {
-      const version = await load.version();
+      const version = await publicDbWork(() => load.version!());
       if (!version) {
         cache.delete(key);
         return null;
@@ -51,29 +52,31 @@ export async function cachedPage(req: Request, key: string, load: PageLoader): P
       }
     }
     return await cache.once(`${key}|${before}`, async () => {
-      const source = await load.render();
+      const source = await publicDbWork(() => load.render());
       if (!source) {
         cache.delete(key);
         return null;
       }
       const page = toCached(source);
-      cache.set(key, page, before);
+      if (source.keep === false) cache.delete(key);
+      else cache.set(key, page, before);
       return page;
     });
   } catch (err) {
     // The database is away: a page we already rendered is still the show or build as last published.
-    if (!hit || !isDatabaseUnavailable(err)) throw err;
+    // So is a page whose re-render found the public share of the pool full: the crowd gets what it had.
+    if (!hit || !(isDatabaseUnavailable(err) || err instanceof PublicPagesBusyError)) throw err;
     req.log.warn({ err }, 'database unavailable: public page served from the cache');
     return hit;
   }
 }
 
 /** Sends a cached page without visitor pieces: a 304 for a browser holding it, else the stored bytes in its encoding. */
-export function sendCached(req: Request, res: Response, page: CachedPage, headers: { cacheControl: string; vary: string }): void {
+export function sendCached(req: Request, res: Response, page: CachedPage, headers: { cacheControl: string; vary: string; type?: string }): void {
   res.set({ ETag: page.etag, 'Cache-Control': headers.cacheControl, Vary: headers.vary });
   // req.fresh compares If-None-Match with the ETag just set (weakly, as RFC 9110 asks for GET).
   if (req.fresh) return void res.status(304).end();
   const encoding = encodingFor(req);
   if (encoding !== 'identity') res.set('Content-Encoding', encoding);
-  res.type('html').end(encoding === 'br' ? page.br : encoding === 'gzip' ? page.gzip : page.identity);
+  res.type(headers.type ?? 'html').end(encoding === 'br' ? page.br : encoding === 'gzip' ? page.gzip : page.identity);
 }

@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
 import { EVERY_PAGE } from './page-dependencies';
+import { config } from '../config';
 import type { PagePieces } from './page-pieces';
 
 /**
@@ -37,8 +38,15 @@ export function compressPage(html: string): Pick<CachedPage, 'etag' | 'identity'
   };
 }
 
+/** The memory a page holds: its three encodings and, for a voting car's page, its compressed pieces. */
+function bytesOf(page: CachedPage): number {
+  const sum = (bufs: Buffer[]) => bufs.reduce((n, b) => n + b.length, 0);
+  const pieces = page.pieces ? sum(page.pieces.parts) + sum(page.pieces.deflated) : 0;
+  return page.identity.length + page.gzip.length + page.br.length + pieces + 256;
+}
+
 /**
- * In-process LRU of rendered public pages. While this process hears the database's page-change
+ * In-process LRU of rendered public pages, bounded in count and in bytes. While this process hears the database's page-change
  * notifications (page-listener.ts) an entry is trusted for `trustWhileListeningMs` and dropped at once
  * when a change names one of its tags; without them (not started, or reconnecting) it is trusted for
  * `revalidateAfterMs` only. Either way a page past its trust is checked again (car pages: one cheap
@@ -52,11 +60,14 @@ export class PageCache {
   private changes = 0;
   private tagChangedAt = new Map<string, number>();
   private forgottenBefore = 0;
+  private storedBytes = 0;
   /** Set by the page listener while its LISTEN connection is up. */
   listening = false;
 
   constructor(
     public maxEntries = 500,
+    /** The bytes the pages may hold together (every encoding and piece); the least recently used go first past it. */
+    public maxBytes = 64 * 1024 * 1024,
     /** How long a checked entry is trusted with no notifications to tell of a change. */
     public revalidateAfterMs = 1000,
     /** How long a checked entry is trusted while notifications arrive: the fallback for a lost one. */
@@ -87,13 +98,26 @@ export class PageCache {
   set(key: string, page: CachedPage, changeCountBefore = this.changes): void {
     if (this.changedSince(page.tags, changeCountBefore)) page.checkedAt = 0;
     this.delete(key);
+    // A page bigger than the whole bound is sent but not kept.
+    if (bytesOf(page) > this.maxBytes) return;
     this.entries.set(key, page);
+    this.storedBytes += bytesOf(page);
     for (const tag of page.tags) {
       let keys = this.keysByTag.get(tag);
       if (!keys) this.keysByTag.set(tag, (keys = new Set()));
       keys.add(key);
     }
-    while (this.entries.size > this.maxEntries) this.delete(this.entries.keys().next().value!);
+    while (this.entries.size > this.maxEntries || this.storedBytes > this.maxBytes) this.delete(this.entries.keys().next().value!);
+  }
+
+  /** What the stored pages hold, in bytes. */
+  get bytes(): number {
+    return this.storedBytes;
+  }
+
+  /** The keys stored, least recently used first. */
+  keys(): string[] {
+    return [...this.entries.keys()];
   }
 
   private changedSince(tags: readonly string[], count: number): boolean {
@@ -106,6 +130,7 @@ export class PageCache {
     const page = this.entries.get(key);
     if (!page) return;
     this.entries.delete(key);
+    this.storedBytes -= bytesOf(page);
     for (const tag of page.tags) {
       const keys = this.keysByTag.get(tag);
       keys?.delete(key);
@@ -143,6 +168,7 @@ export class PageCache {
     this.tagChangedAt.clear();
     this.entries.clear();
     this.keysByTag.clear();
+    this.storedBytes = 0;
   }
 
   get size() {
@@ -159,4 +185,4 @@ export class PageCache {
   }
 }
 
-export const publicPageCache = new PageCache();
+export const publicPageCache = new PageCache(500, config.pageCacheMaxBytes);

@@ -9,6 +9,7 @@ import { sendHtml } from './send-html';
 import { cachedPage, sendCached } from './cached-page';
 import { pageTags } from './page-dependencies';
 import { nextRegistrationChange } from '../services/public/public-events';
+import { publicDbWork } from '../services/platform/public-db-budget';
 
 /** The home page (/) and every published build (/c): server HTML for anyone, no session, briefly cached. */
 export const sitePagesRouter = Router();
@@ -19,7 +20,10 @@ const RECENT_ON_HOME = 8;
 sitePagesRouter.get('/', async (req, res) => {
   const page = await cachedPage(req, 'home', {
     render: async () => {
-      const [recent, shows, next] = await Promise.all([listRecentPublicBuilds(RECENT_ON_HOME), listOpenEvents(), nextRegistrationChange()]);
+      // One after another: a public page holds one pooled connection at a time (publicDbWork counts on it).
+      const recent = await listRecentPublicBuilds(RECENT_ON_HOME);
+      const shows = await listOpenEvents();
+      const next = await nextRegistrationChange();
       return {
         html: renderHomePage(recent.map(presentPublicBuildTile), shows.map((e) => presentEventSummary(e))),
         tags: pageTags.home(),
@@ -36,6 +40,6 @@ sitePagesRouter.get('/c', async (req, res) => {
     res.status(400);
     return sendHtml(req, res, renderBadSearchPage(parsed.error.issues.map((i) => i.message)), 'no-cache');
   }
-  const found = await searchPublicBuilds(parsed.data);
+  const found = await publicDbWork(() => searchPublicBuilds(parsed.data));
   sendHtml(req, res, renderBuildListPage({ search: parsed.data, builds: found.builds.map(presentPublicBuildTile), total: found.total, pages: found.pages }), CACHE);
 });

@@ -1,7 +1,7 @@
 import { votingOpen } from '@shared/schemas/peoples-choice';
 import { EVENT_STATUS_LABELS, type EventStatus } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
-import type { PublicEvent } from '@shared/schemas/public-event';
+import type { PublicEntryListing, PublicEvent, PublicEventPageQuery } from '@shared/schemas/public-event';
 import { PublicResultsSchema, totalShown, type PublicResults, type ResultsSnapshot, type SnapshotLine } from '@shared/schemas/results';
 import { config } from '../config';
 import { presentEventLogo } from './event';
@@ -58,4 +58,19 @@ export function presentPublicResults(r: ResultsSnapshot): PublicResults {
     bestOfShow: r.bestOfShow.map(publicLine),
     peoplesChoice: (r.peoplesChoice?.winners ?? []).map((l) => ({ ...publicLine(l), total: l.decidedBy })),
   });
+}
+
+/** One page of the show's list as the page shows it: class, number, title and the car's address; nothing of the owner. */
+export function presentPublicEntryListing(
+  query: PublicEventPageQuery,
+  listing: { perClass: Record<number, number>; total: number; pages: number; unknownClass: boolean; entries: Array<{ classId: number; number: number; status: string; title: string; code: string }> },
+): PublicEntryListing {
+  return {
+    query,
+    perClass: listing.perClass,
+    total: listing.total,
+    pages: listing.pages,
+    unknownClass: listing.unknownClass,
+    entries: listing.entries.map((e) => ({ classId: e.classId, number: e.number, title: e.title, url: `${config.publicBaseUrl}/c/${e.code}`, ...(e.status === 'checked_in' ? { arrived: true as const } : {}) })),
+  };
 }

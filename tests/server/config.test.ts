@@ -22,6 +22,12 @@ describe('config', () => {
     expect(() => loadConfig({ PORT: 'eighty' })).toThrow(/PORT/);
     expect(() => loadConfig({ NODE_ENV: 'production' })).toThrow(/SESSION_SECRET/);
   });
+
+  it('keeps part of the database pool for signed-in work: the public share must be smaller than the pool', () => {
+    expect(loadConfig({})).toMatchObject({ dbPoolMax: 10, publicDbConnections: 3 });
+    expect(() => loadConfig({ DB_POOL_MAX: '4', PUBLIC_DB_CONNECTIONS: '4' })).toThrow(/PUBLIC_DB_CONNECTIONS: must be fewer than DB_POOL_MAX \(4\)/);
+    expect(loadConfig({ DB_POOL_MAX: '20', PUBLIC_DB_CONNECTIONS: '8' })).toMatchObject({ dbPoolMax: 20, publicDbConnections: 8 });
+  });
 });
 
 describe('config: demo mail', () => {

@@ -15,11 +15,10 @@ async function withRecords(posts: BuildLogPost[]): Promise<LogPostWithRecords[]>
   const photoIds = [...new Set(posts.flatMap((p) => p.photoIds))];
   const dynoIds = posts.flatMap((p) => (p.dynoRunId ? [p.dynoRunId] : []));
   const weighInIds = posts.flatMap((p) => (p.weighInId ? [p.weighInId] : []));
-  const [photos, runs, weighIns] = await Promise.all([
-    photoIds.length ? Photo.findAll({ where: { id: { [Op.in]: photoIds } } }) : [],
-    dynoIds.length ? DynoRun.findAll({ where: { id: { [Op.in]: dynoIds } }, attributes: ['id', 'date', 'buildId'] }) : [],
-    weighInIds.length ? WeighIn.findAll({ where: { id: { [Op.in]: weighInIds } }, attributes: ['id', 'date', 'buildId'] }) : [],
-  ]);
+  // One after another: a public page holds one pooled connection at a time (publicDbWork counts on it).
+  const photos = photoIds.length ? await Photo.findAll({ where: { id: { [Op.in]: photoIds } } }) : [];
+  const runs = dynoIds.length ? await DynoRun.findAll({ where: { id: { [Op.in]: dynoIds } }, attributes: ['id', 'date', 'buildId'] }) : [];
+  const weighIns = weighInIds.length ? await WeighIn.findAll({ where: { id: { [Op.in]: weighInIds } }, attributes: ['id', 'date', 'buildId'] }) : [];
   const photoById = new Map(photos.map((p) => [p.id, p]));
   return posts.map((post) => {
     // A photo deleted since, or one of another build, is simply not shown.
@@ -36,7 +35,10 @@ async function withRecords(posts: BuildLogPost[]): Promise<LogPostWithRecords[]>
 
 /** What the public page adds about the build over time: the newest posts, how many there are, and the answered questions. */
 export async function loadPublicLogAndAnswers(buildId: number): Promise<{ posts: LogPostWithRecords[]; postCount: number; answers: BuildQuestion[] }> {
-  const [posts, postCount, answers] = await Promise.all([listPublishedLogPosts(buildId, LOG_POSTS_ON_PAGE), countPublishedLogPosts(buildId), listAnsweredQuestions(buildId)]);
+  // One after another: a public page holds one pooled connection at a time (publicDbWork counts on it).
+  const posts = await listPublishedLogPosts(buildId, LOG_POSTS_ON_PAGE);
+  const postCount = await countPublishedLogPosts(buildId);
+  const answers = await listAnsweredQuestions(buildId);
   return { posts: await withRecords(posts), postCount, answers };
 }
 
