@@ -16,7 +16,7 @@ import { WalkUpForm } from './walk-up-form';
 import { ApiError } from '@client/lib/api';
 import { useOnline } from '@client/features/judging/components/use-online';
 import { useUndoCheckIn } from '../api/undo-check-in';
-import { useQrScanner } from './use-qr-scanner';
+import { useQrScanner, warmQrDecoder } from './use-qr-scanner';
 import { LoadingState, ErrorState } from '@client/components/ui/states';
 
 const big = 'min-h-12 w-full border-2 px-4 py-3 font-display text-xl uppercase tracking-wide disabled:opacity-50';
@@ -137,6 +137,7 @@ export function GatePage() {
   useEffect(() => {
     // Scoped to /gate: keeps this screen's shell on the phone so it reloads with no signal.
     if ('serviceWorker' in navigator && import.meta.env.PROD) void navigator.serviceWorker.register('/gate-sw.js', { scope: '/gate' });
+    warmQrDecoder();
   }, []);
   const { videoRef, error: cameraError } = useQrScanner(camera, onCode);
 

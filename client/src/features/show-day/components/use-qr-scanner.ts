@@ -1,5 +1,4 @@
 import { useEffect, useRef, useState } from 'react';
-import jsQR from 'jsqr';
 
 type Detector = { detect(source: CanvasImageSource): Promise<Array<{ rawValue: string }>> };
 type DetectorCtor = new (opts: { formats: string[] }) => Detector;
@@ -11,6 +10,8 @@ async function makeReader(): Promise<(video: HTMLVideoElement, canvas: HTMLCanva
     const detector = new Native({ formats: ['qr_code'] });
     return async (video) => (await detector.detect(video))[0]?.rawValue ?? null;
   }
+  // The decoder is a chunk of its own, off the gate's first load on a weak signal (see warmQrDecoder).
+  const { default: jsQR } = await import('jsqr');
   return async (video, canvas) => {
     // A 640 px frame is enough for a card held at arm's length and keeps a weak phone quick.
     const scale = Math.min(1, 640 / Math.max(video.videoWidth, video.videoHeight));
@@ -22,6 +23,19 @@ async function makeReader(): Promise<(video: HTMLVideoElement, canvas: HTMLCanva
     const image = ctx.getImageData(0, 0, canvas.width, canvas.height);
     return jsQR(image.data, image.width, image.height, { inversionAttempts: 'dontInvert' })?.data ?? null;
   };
+}
+
+/**
+ * Fetches the fallback decoder once the gate has drawn, so the service worker keeps it for a scan
+ * started later with no signal; until then it costs the first load nothing.
+ */
+export function warmQrDecoder() {
+  const idle = (globalThis as { requestIdleCallback?: (cb: () => void) => number }).requestIdleCallback ?? ((cb: () => void) => setTimeout(cb, 1000));
+  const fetchIt = () => idle(() => void import('jsqr').catch(() => undefined));
+  const workers = 'serviceWorker' in navigator ? navigator.serviceWorker : null;
+  // Through the service worker once it controls the page (it claims it on first install), so the chunk is kept.
+  if (!workers || workers.controller || !import.meta.env.PROD) fetchIt();
+  else workers.addEventListener('controllerchange', fetchIt, { once: true });
 }
 
 /**
