@@ -8,12 +8,12 @@ export type CardJob = CardPrintJob | ShowReminderJob;
 
 /**
  * Works the card queue: bulk prints of numbered cards and show reminders (each with the owner's card).
- * A print watches the queue's hand-back signal: a worker told to stop puts its print back on the queue.
+ * Both watch the queue's hand-back signal: a worker told to stop puts the rest of its job back on the queue.
  */
 export async function startCardWorker(queue: JobQueue = jobQueue()): Promise<void> {
   await queue.work<CardJob>(CARD_QUEUE, async (job, { handBack }) => {
     if (job.data.kind === 'print') await runCardPrint(job.data.printId, handBack);
-    else if (job.data.kind === 'reminders') await sendShowReminders(job.data.eventId);
+    else if (job.data.kind === 'reminders') await sendShowReminders(job.data.eventId, handBack);
     else logger.warn({ jobId: job.id }, 'card queue: unknown job kind');
   });
 }

@@ -46,7 +46,7 @@ export type JobQueueOptions = {
 export type JobContext = { handBack: AbortSignal };
 
 /** After the hand-back signal, how long handlers have to put their work back before pg-boss fails it (its retries then apply). */
-const HAND_BACK_MS = 10_000;
+const HAND_BACK_MS = 5_000;
 
 export class JobQueue {
   readonly boss: PgBoss;

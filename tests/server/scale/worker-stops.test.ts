@@ -22,7 +22,7 @@ import { createUser, DEFAULT_PASSWORD } from '../../support/factories';
 // once (no grace period here). Either way the other worker finishes it from the cards already drawn,
 // and the download route serves nothing until the whole file is stored.
 
-const CARS = 3 * RENDER_BATCH; // three batches: "mid-print" is after the first, with two to go
+const CARS = 4 * RENDER_BATCH; // four batches: "mid-print" is after the first or second, with two to go
 const root = mkdtempSync(path.join(tmpdir(), 'placard-worker-stops-'));
 const env = { STORAGE_DIR: path.join(root, 'store'), CARD_PRINT_STALE_SECONDS: '3', JOB_STOP_GRACE_SECONDS: '0' };
 let web: ForkedServer;
@@ -66,15 +66,18 @@ async function organiserOf(show: Show): Promise<RemoteClient> {
   return client;
 }
 
-/** The print's row once it is mid-print: running, the first batch drawn, more to draw. */
+/**
+ * The print's row once it is mid-print: running, a batch drawn and cached, and at least two batches to
+ * go (so the worker, stopped now, has more to draw: a SIGTERM is heard before its last batch).
+ */
 async function midPrint(printId: number): Promise<CardPrint> {
   let row: CardPrint | null = null;
   await expect
     .poll(async () => {
       row = await CardPrint.findByPk(printId);
-      return row !== null && row.status === 'running' && row.done >= RENDER_BATCH && row.done < row.total;
-    }, { timeout: 20_000, interval: 20 })
-    .toBe(true);
+      return row && { status: row.status, done: row.done, total: row.total };
+    }, { timeout: 30_000, interval: 20 })
+    .toSatisfy((p: { status: string; done: number; total: number } | null) => p !== null && p.status === 'running' && p.done >= RENDER_BATCH && p.done <= p.total - 2 * RENDER_BATCH);
   return row!;
 }
 
@@ -152,6 +155,7 @@ describe('job workers that stop in the middle of a bulk print', () => {
   });
 
   it('a worker stopped with SIGTERM: it hands its print back and exits, and another finishes it at once', async () => {
+    expect(third, 'the third worker was started by the test before').toBeDefined();
     workers.push(await third!);
     const t0 = Date.now();
     const show = shows[1];
