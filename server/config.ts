@@ -68,6 +68,8 @@ const EnvSchema = z.object({
   JOB_STOP_GRACE_SECONDS: z.coerce.number().min(0).max(600).default(20),
   /** A running bulk print whose worker has not beaten for this long lost its worker: another worker takes it over. */
   CARD_PRINT_STALE_SECONDS: z.coerce.number().int().min(2).max(3600).default(30),
+  /** Cards drawn to one document in a bulk print: more is quicker, fewer beats (and saves progress) more often. */
+  CARD_RENDER_BATCH: z.coerce.number().int().min(1).max(200).default(20),
   MAIL_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).max(3600).default(10),
   MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).max(50).default(14),
   /** A message the mail server may have kept (its answer after the message was lost) is sent again only after this, doubling. */
@@ -238,6 +240,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     jobStopGraceMs: e.JOB_STOP_GRACE_SECONDS * 1000,
     /** A print silent this long is taken over by another worker (the sweep in `jobs/card-jobs.ts`); its worker beats well within it. */
     cardPrintStaleSeconds: e.CARD_PRINT_STALE_SECONDS,
+    /** Missing cards of a bulk print are drawn this many to a document, cached, and counted as done. */
+    cardRenderBatch: e.CARD_RENDER_BATCH,
     /** Mail that fails is retried after about delay × 2^n seconds (with jitter), up to the limit, then kept aside. */
     mailRetryDelaySeconds: e.MAIL_RETRY_DELAY_SECONDS,
     mailRetryLimit: e.MAIL_RETRY_LIMIT,

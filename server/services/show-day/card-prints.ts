@@ -21,8 +21,6 @@ import { numberedCardsOf, readStoredFile, renderNumberedCards, type NumberedCard
 /** The job that renders a print; the card queue also carries show reminders (`jobs/card-jobs.ts`). */
 export type CardPrintJob = { kind: 'print'; printId: number };
 
-/** Cards missing from the cache are drawn this many to a document (much quicker than one by one), then split into pages. */
-export const RENDER_BATCH = 20;
 /**
  * A running print beats this often (every 5 s, or a third of the stale threshold if that is shorter); one
  * silent for CARD_PRINT_STALE_SECONDS (config) lost its worker and is taken over (`requeueStalePrints`).
@@ -216,9 +214,12 @@ async function renderPrint(print: CardPrint, write: (values: Partial<CardPrint>)
   let done = cards.length - missing.length;
   let rendered = 0;
   await write({ done });
-  for (let at = 0; at < missing.length; at += RENDER_BATCH) {
+  // Cards missing from the cache are drawn CARD_RENDER_BATCH (20) to a document, much quicker than one by one,
+  // then split into pages; each batch is cached and counted before the next, so a run taken over loses one batch at most.
+  const perBatch = config.cardRenderBatch;
+  for (let at = 0; at < missing.length; at += perBatch) {
     checkpoint();
-    const batch = missing.slice(at, at + RENDER_BATCH);
+    const batch = missing.slice(at, at + perBatch);
     const drawn = await splitPages(await renderNumberedCards(batch.map((m) => m.card.content), event.name));
     await Promise.all(batch.map(({ card, i }, n) => {
       pages[i] = drawn[n]!;

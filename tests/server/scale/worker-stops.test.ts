@@ -8,7 +8,6 @@ import { CardPrint } from '@server/models/card-print';
 import { Entry } from '@server/models/entry';
 import { Event } from '@server/models/event';
 import { randomBuildCode } from '@server/services/builds/build-codes';
-import { RENDER_BATCH } from '@server/services/show-day/card-prints';
 import { forkServer, type ForkedServer } from '../../support/forked-server';
 import { forkWorker, type ForkedWorker } from '../../support/forked-worker';
 import { remoteClient, type RemoteClient } from '../../support/remote-client';
@@ -22,9 +21,11 @@ import { createUser, DEFAULT_PASSWORD } from '../../support/factories';
 // once (no grace period here). Either way the other worker finishes it from the cards already drawn,
 // and the download route serves nothing until the whole file is stored.
 
-const CARS = 4 * RENDER_BATCH; // four batches: "mid-print" is after the first or second, with two to go
+// Small batches: progress is saved (and a beat written) every few cards, and six batches make a print with a middle.
+const BATCH = 4;
+const CARS = 6 * BATCH;
 const root = mkdtempSync(path.join(tmpdir(), 'placard-worker-stops-'));
-const env = { STORAGE_DIR: path.join(root, 'store'), CARD_PRINT_STALE_SECONDS: '3', JOB_STOP_GRACE_SECONDS: '0' };
+const env = { STORAGE_DIR: path.join(root, 'store'), CARD_PRINT_STALE_SECONDS: '3', JOB_STOP_GRACE_SECONDS: '0', CARD_RENDER_BATCH: String(BATCH) };
 let web: ForkedServer;
 let workers: ForkedWorker[] = [];
 let third: Promise<ForkedWorker> | undefined;
@@ -67,7 +68,7 @@ async function organiserOf(show: Show): Promise<RemoteClient> {
 }
 
 /**
- * The print's row once it is mid-print: running, a batch drawn and cached, and at least two batches to
+ * The print's row once it is mid-print: running, a batch drawn and cached, and at least three batches to
  * go (so the worker, stopped now, has more to draw: a SIGTERM is heard before its last batch).
  */
 async function midPrint(printId: number): Promise<CardPrint> {
@@ -77,7 +78,7 @@ async function midPrint(printId: number): Promise<CardPrint> {
       row = await CardPrint.findByPk(printId);
       return row && { status: row.status, done: row.done, total: row.total };
     }, { timeout: 30_000, interval: 20 })
-    .toSatisfy((p: { status: string; done: number; total: number } | null) => p !== null && p.status === 'running' && p.done >= RENDER_BATCH && p.done <= p.total - 2 * RENDER_BATCH);
+    .toSatisfy((p: { status: string; done: number; total: number } | null) => p !== null && p.status === 'running' && p.done >= BATCH && p.done <= p.total - 3 * BATCH);
   return row!;
 }
 
@@ -171,7 +172,7 @@ describe('job workers that stop in the middle of a bulk print', () => {
     const t1 = Date.now();
     stopped.child.kill('SIGTERM');
     expect(await stopped.exited).toEqual({ code: 0, signal: null });
-    expect(stopped.output()).toContain('the card print in hand is back on the queue');
+    expect(stopped.output()).toMatch(/"handedBack":true[^\n]*the card print in hand is back on the queue/);
 
     const { print, pages } = await printFinished(organiser, show, printId);
     const answers = await downloads.stop();
