@@ -35,10 +35,6 @@ export type JobQueueOptions = {
 };
 
 /**
- * pg-boss on the same PostgreSQL, with its queues made. `start()` is idempotent, so any process that
- * sends (a request, a seeder) starts it on first use; the server also works the jobs.
- */
-/**
  * What a handler is told besides its job. `handBack` is aborted when the process is stopping and the
  * grace period is over: a long job watching it puts its work back on the queue for another worker
  * and returns (a short one simply finishes within the grace period).
@@ -48,10 +44,14 @@ export type JobContext = { handBack: AbortSignal };
 /** After the hand-back signal, how long handlers have to put their work back before pg-boss fails it (its retries then apply). */
 const HAND_BACK_MS = 5_000;
 
+/**
+ * pg-boss on the same PostgreSQL, with its queues made. `start()` is idempotent, so any process that
+ * sends (a request, a seeder) starts it on first use; the server also works the jobs.
+ */
 export class JobQueue {
   readonly boss: PgBoss;
   private starting?: Promise<PgBoss>;
-  private stopped?: Promise<void>;
+  private stopInProgress?: Promise<void>;
   private workers: { id: string; name: string }[] = [];
   private listener?: JobWakeListener;
   /** The handlers running now in this process. */
@@ -183,15 +183,15 @@ export class JobQueue {
    * settings send it to another worker. Then closes the pool.
    */
   stop(graceMs = config.jobStopGraceMs): Promise<void> {
-    if (!this.starting) return this.stopped ?? Promise.resolve();
-    this.stopped ??= this.stopWithin(this.starting, graceMs).finally(() => {
+    if (!this.starting) return this.stopInProgress ?? Promise.resolve();
+    this.stopInProgress ??= this.stopWithin(this.starting, graceMs).finally(() => {
       this.starting = undefined;
-      this.stopped = undefined;
+      this.stopInProgress = undefined;
       this.workers = [];
       this.handBack = new AbortController();
       this.stoppingNow = new AbortController();
     });
-    return this.stopped;
+    return this.stopInProgress;
   }
 
   private async stopWithin(starting: Promise<PgBoss>, graceMs: number): Promise<void> {
