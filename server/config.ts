@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { randomBytes } from 'node:crypto';
+import { createHash, randomBytes } from 'node:crypto';
 import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -72,6 +72,12 @@ const EnvSchema = z.object({
   S3_FAKE_PORT: z.coerce.number().int().min(1).max(65535).default(54341),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   JOB_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(2),
+  /** On SIGTERM a job in hand has this long to finish; then it goes back to the queue for another worker. */
+  JOB_STOP_GRACE_SECONDS: z.coerce.number().min(0).max(600).default(20),
+  /** A running bulk print whose worker has not beaten for this long lost its worker: another worker takes it over. */
+  CARD_PRINT_STALE_SECONDS: z.coerce.number().int().min(2).max(3600).default(30),
+  /** Cards drawn to one document in a bulk print: more is quicker, fewer beats (and saves progress) more often. */
+  CARD_RENDER_BATCH: z.coerce.number().int().min(1).max(200).default(20),
   MAIL_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).max(3600).default(10),
   MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).max(50).default(14),
   /** A message the mail server may have kept (its answer after the message was lost) is sent again only after this, doubling. */
@@ -171,6 +177,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     throw new Error(`Invalid environment:\n  PUBLIC_DB_CONNECTIONS: must be fewer than DB_POOL_MAX (${e.DB_POOL_MAX}), so signed-in work always has a connection`);
   }
   const hashBase = e.NODE_ENV === 'test' ? TEST_PASSWORD_HASH : PASSWORD_HASH_DEFAULTS;
+  const storageDir = path.resolve(PROJECT_ROOT, e.STORAGE_DIR ?? (e.NODE_ENV === 'test' ? testStorageDir() : '.data/uploads'));
   const publicBaseUrl = (e.PUBLIC_BASE_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/$/, '');
   return {
     env: e.NODE_ENV,
@@ -235,16 +242,23 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     /** Images one server process decodes and resizes at once (each on one libvips thread). */
     imageConcurrency: e.IMAGE_CONCURRENCY,
     /** Local-disk storage of uploads; tests get a fresh temporary folder per process unless told otherwise. */
-    storageDir: path.resolve(PROJECT_ROOT, e.STORAGE_DIR ?? (e.NODE_ENV === 'test' ? testStorageDir() : '.data/uploads')),
-    // Card work reads and writes that storage: under test, where each process has a folder of its own,
-    // each process also works a card queue of its own, so a print is drawn where its test reads it.
-    cardQueue: e.NODE_ENV === 'test' && !e.STORAGE_DIR && e.STORAGE_DRIVER === 'local' ? `cards-${process.pid}` : 'cards',
+    storageDir,
+    // Card work reads and writes that storage. Under test, where each process has a folder of its own,
+    // processes share a card queue only when they share the storage (a folder, or a bucket), so a print
+    // is drawn where its test reads it; a server and its workers share the one queue.
+    cardQueue: e.NODE_ENV === 'test' ? `cards-${createHash('sha256').update(e.STORAGE_DRIVER === 's3' ? `s3 ${e.S3_ENDPOINT ?? ''} ${e.S3_BUCKET}` : storageDir).digest('hex').slice(0, 12)}` : 'cards',
     objectStorage: objectStorageConfig(e, production),
     webProcesses: e.WEB_PROCESSES,
     runJobs: e.RUN_JOBS,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     /** How often an idle worker asks the queue for work (a worker in the same process is woken at once). */
     jobPollSeconds: e.JOB_POLL_SECONDS,
+    /** SIGTERM: how long a job in hand may run on before it is handed back to the queue (`jobs/queue.ts`, stop). */
+    jobStopGraceMs: e.JOB_STOP_GRACE_SECONDS * 1000,
+    /** A print silent this long is taken over by another worker (the sweep in `jobs/card-jobs.ts`); its worker beats well within it. */
+    cardPrintStaleSeconds: e.CARD_PRINT_STALE_SECONDS,
+    /** Missing cards of a bulk print are drawn this many to a document, cached, and counted as done. */
+    cardRenderBatch: e.CARD_RENDER_BATCH,
     /** Mail that fails is retried after about delay × 2^n seconds (with jitter), up to the limit, then kept aside. */
     mailRetryDelaySeconds: e.MAIL_RETRY_DELAY_SECONDS,
     mailRetryLimit: e.MAIL_RETRY_LIMIT,

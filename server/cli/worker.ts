@@ -21,9 +21,14 @@ let stopping = false;
 async function stop() {
   if (stopping) return;
   stopping = true;
-  // A job in hand finishes, or goes back to the queue for another worker when it cannot in time.
+  // No new job is taken; a job in hand finishes within JOB_STOP_GRACE_SECONDS, or goes back to the
+  // queue for another worker (a bulk print resumes there from the cards already drawn).
+  logger.info({ pid: process.pid, graceMs: config.jobStopGraceMs }, 'job worker stopping');
   await closeConnections();
+  logger.info({ pid: process.pid }, 'job worker stopped');
   process.exit(0);
 }
 process.on('SIGINT', stop);
 process.on('SIGTERM', stop);
+// Started by a parent process with a channel (a supervisor, a test): stop with it.
+process.on('disconnect', stop);

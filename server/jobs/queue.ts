@@ -35,14 +35,29 @@ export type JobQueueOptions = {
 };
 
 /**
+ * What a handler is told besides its job. `handBack` is aborted when the process is stopping and the
+ * grace period is over: a long job watching it puts its work back on the queue for another worker
+ * and returns (a short one simply finishes within the grace period).
+ */
+export type JobContext = { handBack: AbortSignal };
+
+/** After the hand-back signal, how long handlers have to put their work back before pg-boss fails it (its retries then apply). */
+const HAND_BACK_MS = 5_000;
+
+/**
  * pg-boss on the same PostgreSQL, with its queues made. `start()` is idempotent, so any process that
  * sends (a request, a seeder) starts it on first use; the server also works the jobs.
  */
 export class JobQueue {
   readonly boss: PgBoss;
   private starting?: Promise<PgBoss>;
-  private readonly workers: { id: string; name: string }[] = [];
+  private stopInProgress?: Promise<void>;
+  private workers: { id: string; name: string }[] = [];
   private listener?: JobWakeListener;
+  /** The handlers running now in this process. */
+  private readonly inHand = new Set<Promise<void>>();
+  private handBack = new AbortController();
+  private stoppingNow = new AbortController();
 
   constructor(readonly options: JobQueueOptions) {
     this.boss = new PgBoss({
@@ -123,17 +138,20 @@ export class JobQueue {
    * found a job asks again at once (a backlog drains at the speed of its jobs, not one per poll), and
    * a job committed by any process wakes it through PostgreSQL's LISTEN/NOTIFY; the poll is the fallback.
    */
-  async work<T extends object>(name: string, handler: (job: PgBoss.Job<T>) => Promise<void>, { concurrency = 1 } = {}): Promise<void> {
+  async work<T extends object>(name: string, handler: (job: PgBoss.Job<T>, context: JobContext) => Promise<void>, { concurrency = 1 } = {}): Promise<void> {
     const boss = await this.start();
     if (name === CARD_QUEUE) await this.prepareCardQueue();
     // Each loop works one job at a time; several loops take turns on the queue (a job is fetched by one only).
     for (let i = 0; i < concurrency; i++) {
       const id: string = await boss.work<T>(name, { batchSize: 1, pollingIntervalSeconds: this.options.pollSeconds }, async ([job]) => {
         if (!job) return;
+        const run = handler(job, { handBack: this.handBack.signal });
+        this.inHand.add(run);
         try {
-          await handler(job);
+          await run;
         } finally {
-          boss.notifyWorker(id);
+          this.inHand.delete(run);
+          if (!this.stoppingNow.signal.aborted) boss.notifyWorker(id);
         }
       });
       this.workers.push({ id, name });
@@ -166,16 +184,58 @@ export class JobQueue {
     return id;
   }
 
-  /** Stops working and closes the pool; waits for a job in progress (up to the timeout). */
-  async stop(timeoutMs = 10_000): Promise<void> {
-    if (!this.starting) return;
-    const starting = this.starting;
-    this.starting = undefined;
+  /** Aborted as soon as the process starts to stop: timed upkeep of this process's workers ends with it. */
+  get stopping(): AbortSignal {
+    return this.stoppingNow.signal;
+  }
+
+  /**
+   * Stops gracefully: takes no more jobs; lets a job in hand finish within `graceMs`; after that tells
+   * the handlers to hand their job back (a bulk print goes back to the queue, and another worker resumes
+   * it from the cards already drawn); whatever is still running after that pg-boss fails, and its retry
+   * settings send it to another worker. Then closes the pool.
+   */
+  stop(graceMs = config.jobStopGraceMs): Promise<void> {
+    if (!this.starting) return this.stopInProgress ?? Promise.resolve();
+    this.stopInProgress ??= this.stopWithin(this.starting, graceMs).finally(() => {
+      this.starting = undefined;
+      this.stopInProgress = undefined;
+      this.workers = [];
+      this.handBack = new AbortController();
+      this.stoppingNow = new AbortController();
+    });
+    return this.stopInProgress;
+  }
+
+  private async stopWithin(starting: Promise<PgBoss>, graceMs: number): Promise<void> {
+    this.stoppingNow.abort();
     await this.listener?.stop();
     this.listener = undefined;
-    await starting.catch(() => undefined);
-    await this.boss.stop({ graceful: true, timeout: timeoutMs, wait: true }).catch((err: unknown) => logger.error({ err }, 'job queue: stop failed'));
+    if (await starting.then(() => true, () => false)) {
+      for (const w of this.workers) await this.boss.offWork({ id: w.id }).catch((err: unknown) => logger.error({ err }, 'job queue: could not stop a worker'));
+      if (!(await settledWithin(this.inHand, graceMs))) {
+        logger.warn({ jobs: this.inHand.size, graceMs }, 'job queue: stopping; the jobs in hand go back to the queue');
+        this.handBack.abort();
+        await settledWithin(this.inHand, HAND_BACK_MS);
+      }
+    }
+    // Anything still in hand is failed by pg-boss here (and retried per its queue's settings).
+    await this.boss.stop({ graceful: true, timeout: 1_000, wait: true }).catch((err: unknown) => logger.error({ err }, 'job queue: stop failed'));
   }
+}
+
+/** Whether the set emptied within `ms` (a job fetched just as the workers stopped joins it late, and is waited for too). */
+async function settledWithin(running: Set<Promise<void>>, ms: number): Promise<boolean> {
+  const deadline = Date.now() + ms;
+  while (running.size > 0) {
+    const left = deadline - Date.now();
+    if (left <= 0) return false;
+    let timer: NodeJS.Timeout | undefined;
+    const late = new Promise<void>((resolve) => (timer = setTimeout(resolve, left)));
+    await Promise.race([Promise.allSettled([...running]), late]);
+    clearTimeout(timer);
+  }
+  return true;
 }
 
 /** pg-boss's way to write a job through someone else's connection: here, the caller's Sequelize transaction. */

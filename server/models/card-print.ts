@@ -19,6 +19,10 @@ export class CardPrint extends Model<InferAttributes<CardPrint>, InferCreationAt
   /** The last beat of the worker run holding a running print, and that run's token. */
   declare heartbeatAt: CreationOptional<Date | null>;
   declare workerToken: CreationOptional<string | null>;
+  /** The worker process (`host:pid`) holding a running print, or that printed a finished one. */
+  declare heldBy: CreationOptional<string | null>;
+  /** The card queue its jobs go to ('cards'; under test, the queue of the storage the print is drawn into). */
+  declare queue: CreationOptional<string>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -41,6 +45,8 @@ export class CardPrint extends Model<InferAttributes<CardPrint>, InferCreationAt
         finishedAt: { type: DataTypes.DATE, allowNull: true },
         heartbeatAt: { type: DataTypes.DATE, allowNull: true },
         workerToken: { type: DataTypes.UUID, allowNull: true },
+        heldBy: { type: DataTypes.STRING(120), allowNull: true },
+        queue: { type: DataTypes.STRING(60), allowNull: false, defaultValue: 'cards' },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

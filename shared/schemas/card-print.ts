@@ -20,10 +20,12 @@ export const CardPrintLatestQuerySchema = z.object({ classId: IdSchema.optional(
 
 export const CardPrintParamsSchema = z.object({ id: IdSchema, printId: IdSchema });
 
-/** A running print whose worker has not beaten for this long lost its worker: the organiser may start it again. */
-export const CARD_PRINT_STALE_SECONDS = 30;
-export const printStalled = (status: CardPrintStatus, heartbeatAt: Date | null, now = new Date()) =>
-  status === 'running' && (!heartbeatAt || now.getTime() - heartbeatAt.getTime() > CARD_PRINT_STALE_SECONDS * 1000);
+/**
+ * A running print whose worker has not beaten for `staleSeconds` (the server's CARD_PRINT_STALE_SECONDS)
+ * lost its worker: another worker takes it over, and the organiser may start it again.
+ */
+export const printStalled = (status: CardPrintStatus, heartbeatAt: Date | null, staleSeconds: number, now = new Date()) =>
+  status === 'running' && (!heartbeatAt || now.getTime() - heartbeatAt.getTime() > staleSeconds * 1000);
 
 export type CardPrint = {
   id: number;

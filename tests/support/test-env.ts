@@ -24,4 +24,6 @@ export const TEST_ENV = {
   // Test files queue mail and the global setup's worker sends it: poll often, retry soon.
   JOB_POLL_SECONDS: '0.5',
   MAIL_RETRY_DELAY_SECONDS: '1',
+  // A process stopping at the end of a file waits this long at most for a job in hand, then hands it back.
+  JOB_STOP_GRACE_SECONDS: '5',
 } as const;

@@ -1,8 +1,10 @@
-import type { Transaction } from 'sequelize';
+import type { Transaction, WhereOptions } from 'sequelize';
 import { createHash, randomUUID } from 'node:crypto';
+import os from 'node:os';
 import { Op } from 'sequelize';
 import { PDFDocument } from 'pdf-lib';
-import { CARD_PRINT_ACTIVE, CARD_PRINT_ENTRY_STATUSES, CARD_PRINT_STALE_SECONDS, printStalled } from '@shared/schemas/card-print';
+import { CARD_PRINT_ACTIVE, CARD_PRINT_ENTRY_STATUSES, printStalled } from '@shared/schemas/card-print';
+import { config } from '../../config';
 import { withTransaction } from '../../db/transaction';
 import { logger } from '../../logger';
 import { CardPrint } from '../../models/card-print';
@@ -19,14 +21,46 @@ import { numberedCardsOf, readStoredFile, renderNumberedCards, type NumberedCard
 /** The job that renders a print; the card queue also carries show reminders (`jobs/card-jobs.ts`). */
 export type CardPrintJob = { kind: 'print'; printId: number };
 
-/** Cards missing from the cache are drawn this many to a document (much quicker than one by one), then split into pages. */
-export const RENDER_BATCH = 20;
-/** A running print beats this often; one silent for CARD_PRINT_STALE_SECONDS (shared) lost its worker and may be taken over. */
-export const CARD_PRINT_HEARTBEAT_MS = 5_000;
-const isStalled = (print: CardPrint) => printStalled(print.status, print.heartbeatAt);
+/**
+ * A running print beats this often (every 5 s, or a third of the stale threshold if that is shorter); one
+ * silent for CARD_PRINT_STALE_SECONDS (config) lost its worker and is taken over (`requeueStalePrints`).
+ */
+export const cardPrintHeartbeatMs = () => Math.min(5_000, (config.cardPrintStaleSeconds * 1000) / 3);
+const isStalled = (print: CardPrint) => printStalled(print.status, print.heartbeatAt, config.cardPrintStaleSeconds);
+const staleBefore = () => new Date(Date.now() - config.cardPrintStaleSeconds * 1000);
+/** This worker process, as a print it holds names it. */
+const thisWorker = `${os.hostname()}:${process.pid}`.slice(0, 120);
 
 /** Thrown inside a run that lost its hold on the print (another worker took it over): it stops writing. */
 class PrintTakenOver extends Error {}
+/** Thrown inside a run whose process is stopping: the print goes back to the queue, to resume elsewhere. */
+class PrintHandedBack extends Error {}
+
+/**
+ * Puts prints back on the card queue, each with a new job, in one transaction (both or neither): status
+ * queued, no holder. The cards drawn so far are cached, so the next run resumes where this one stopped,
+ * and nothing is served until the whole file is stored. Returns the ids put back.
+ */
+async function requeuePrints(where: WhereOptions<CardPrint>, outer?: Transaction): Promise<number[]> {
+  const queue = jobQueue();
+  await queue.prepareCardQueue(); // before the transaction (see startCardPrint)
+  return withTransaction(outer, async (transaction) => {
+    const [, rows] = await CardPrint.update({ status: 'queued', workerToken: null, heldBy: null, heartbeatAt: null, queue: CARD_QUEUE }, { where, returning: true, transaction });
+    for (const row of rows) await queue.send(CARD_QUEUE, { kind: 'print', printId: row.id } satisfies CardPrintJob, transaction);
+    return rows.map((row) => row.id);
+  });
+}
+
+/**
+ * The sweep of a card worker: running prints of its queue whose worker stopped beating (killed, lost
+ * with its machine) go back on the queue at once, and a live worker resumes them. The update takes each
+ * row once, so sweeps of several workers never queue a print twice.
+ */
+export async function requeueStalePrints(): Promise<number[]> {
+  const ids = await requeuePrints({ status: 'running', queue: CARD_QUEUE, [Op.or]: [{ heartbeatAt: null }, { heartbeatAt: { [Op.lt]: staleBefore() } }] });
+  if (ids.length) logger.warn({ printIds: ids }, 'card prints whose worker stopped are back on the queue');
+  return ids;
+}
 
 const withPeople = [
   { model: User, as: 'starter', attributes: ['id', 'name'] },
@@ -60,17 +94,15 @@ export async function startCardPrint(event: Event, classId: number | null, perso
     const running = await CardPrint.findOne({ where: { eventId: event.id, classId, status: { [Op.in]: [...CARD_PRINT_ACTIVE] } }, transaction });
     if (running && !isStalled(running)) return { id: running.id, created: false };
     if (running) {
-      // Its worker died mid-print: queue it again. The cards drawn so far are cached, so it resumes
-      // where it stopped, and nothing is served until the whole file is stored.
-      await running.update({ status: 'queued', workerToken: null }, { transaction });
-      await queue.send(CARD_QUEUE, { kind: 'print', printId: running.id } satisfies CardPrintJob, transaction);
+      // Its worker died mid-print and no sweep has put it back yet: queue it again now.
+      await requeuePrints({ id: running.id, status: 'running' }, transaction);
       return { id: running.id, created: true };
     }
     const total = await Entry.count({ where: confirmedWhere(event.id, classId), transaction });
     if (total === 0) {
       throw new ConflictError(classId ? 'This class has no confirmed entries yet: there are no cards to print.' : 'This show has no confirmed entries yet: there are no cards to print.', { classId: 'No confirmed entries.' });
     }
-    const print = await CardPrint.create({ eventId: event.id, classId, total, startedBy: person.id }, { transaction });
+    const print = await CardPrint.create({ eventId: event.id, classId, total, startedBy: person.id, queue: CARD_QUEUE }, { transaction });
     const job: CardPrintJob = { kind: 'print', printId: print.id };
     await queue.send(CARD_QUEUE, job, transaction);
     return { id: print.id, created: true };
@@ -128,14 +160,15 @@ async function joinPages(pdfs: Buffer[], title: string): Promise<Buffer> {
  * Renders a print: each card's page comes from the cache when its content and design are unchanged,
  * the rest are drawn (a batch to a document) and cached; the pages are joined in number order. The
  * whole set is cached too, by the list of its cards: an unchanged re-print reuses the finished file.
- * Progress (done / total) is written as it goes, for the organiser's progress bar.
+ * Progress (done / total) is written as it goes, for the organiser's progress bar. When `handBack`
+ * aborts (the worker is stopping), the print goes back to the queue after the batch being drawn.
  */
-export async function runCardPrint(printId: number): Promise<void> {
+export async function runCardPrint(printId: number, handBack?: AbortSignal): Promise<void> {
   const token = randomUUID();
   // Take the print: queued, or running with a silent worker. A print another live run holds is left alone.
   const [, claimed] = await CardPrint.update(
-    { status: 'running', workerToken: token, heartbeatAt: new Date() },
-    { where: { id: printId, [Op.or]: [{ status: 'queued' }, { status: 'running', heartbeatAt: { [Op.or]: [null, { [Op.lt]: new Date(Date.now() - CARD_PRINT_STALE_SECONDS * 1000) }] } }] }, returning: true },
+    { status: 'running', workerToken: token, heldBy: thisWorker, heartbeatAt: new Date() },
+    { where: { id: printId, [Op.or]: [{ status: 'queued' }, { status: 'running', heartbeatAt: { [Op.or]: [null, { [Op.lt]: staleBefore() }] } }] }, returning: true },
   );
   const print = claimed[0];
   if (!print) return;
@@ -144,11 +177,20 @@ export async function runCardPrint(printId: number): Promise<void> {
     const [n] = await CardPrint.update({ ...values, heartbeatAt: new Date() }, { where: { id: printId, workerToken: token } });
     if (n === 0) throw new PrintTakenOver();
   };
-  const beat = setInterval(() => void write({}).catch(() => undefined), CARD_PRINT_HEARTBEAT_MS);
+  const checkpoint = () => {
+    if (handBack?.aborted) throw new PrintHandedBack();
+  };
+  const beat = setInterval(() => void write({}).catch(() => undefined), cardPrintHeartbeatMs());
   try {
-    await renderPrint(print, write);
+    await renderPrint(print, write, checkpoint);
   } catch (err) {
     if (err instanceof PrintTakenOver) return;
+    if (err instanceof PrintHandedBack) {
+      clearInterval(beat);
+      const back = await requeuePrints({ id: printId, workerToken: token });
+      logger.warn({ printId, handedBack: back.length > 0 }, 'stopping: the card print in hand is back on the queue');
+      return;
+    }
     logger.error({ err, printId }, 'card print failed');
     const message = err instanceof Error ? err.message.slice(0, 480) : 'The print failed.';
     await write({ status: 'failed', error: message, finishedAt: new Date() }).catch(() => undefined);
@@ -157,7 +199,7 @@ export async function runCardPrint(printId: number): Promise<void> {
   }
 }
 
-async function renderPrint(print: CardPrint, write: (values: Partial<CardPrint>) => Promise<void>): Promise<void> {
+async function renderPrint(print: CardPrint, write: (values: Partial<CardPrint>) => Promise<void>, checkpoint: () => void): Promise<void> {
   const event = (await Event.findByPk(print.eventId, { attributes: ['id', 'name', 'slug'] }))!;
   const cards = await numberedCardsOf(event, print.classId);
   if (cards.length === 0) throw new Error('No confirmed entries are left to print.');
@@ -172,8 +214,12 @@ async function renderPrint(print: CardPrint, write: (values: Partial<CardPrint>)
   let done = cards.length - missing.length;
   let rendered = 0;
   await write({ done });
-  for (let at = 0; at < missing.length; at += RENDER_BATCH) {
-    const batch = missing.slice(at, at + RENDER_BATCH);
+  // Cards missing from the cache are drawn CARD_RENDER_BATCH (20) to a document, much quicker than one by one,
+  // then split into pages; each batch is cached and counted before the next, so a run taken over loses one batch at most.
+  const perBatch = config.cardRenderBatch;
+  for (let at = 0; at < missing.length; at += perBatch) {
+    checkpoint();
+    const batch = missing.slice(at, at + perBatch);
     const drawn = await splitPages(await renderNumberedCards(batch.map((m) => m.card.content), event.name));
     await Promise.all(batch.map(({ card, i }, n) => {
       pages[i] = drawn[n]!;
@@ -184,6 +230,9 @@ async function renderPrint(print: CardPrint, write: (values: Partial<CardPrint>)
     await write({ done, rendered });
   }
   const joined = await joinPages(pages as Buffer[], `${event.name}: numbered cards`);
+  // The file is stored whole under its final key (the local disk writes a temporary file and renames it;
+  // S3 makes an object visible only once complete), and the print is marked done only after that: the
+  // download route serves nothing before.
   await storage.put(setKey, joined, 'application/pdf');
   await write({ status: 'done', fileKey: setKey, finishedAt: new Date() });
 }

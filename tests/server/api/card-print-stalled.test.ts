@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { randomUUID } from 'node:crypto';
 import { CardPrint } from '@server/models/card-print';
-import { CARD_PRINT_STALE_SECONDS } from '@shared/schemas/card-print';
+import { config } from '@server/config';
 import { cardWorker, download, pagesOf, showWithConfirmedEntries, waitForPrint } from '../../support/card-print-helpers';
 
 describe('a bulk print whose worker was killed mid-print', () => {
@@ -16,7 +16,7 @@ describe('a bulk print whose worker was killed mid-print', () => {
     const whileAlive = await client.post(url, {});
     expect([whileAlive.status, whileAlive.body.print.id, whileAlive.body.print.stalled]).toEqual([200, dead.id, false]);
 
-    await dead.update({ heartbeatAt: new Date(Date.now() - (CARD_PRINT_STALE_SECONDS + 1) * 1000) });
+    await dead.update({ heartbeatAt: new Date(Date.now() - (config.cardPrintStaleSeconds + 1) * 1000) });
     const seen = (await client.get(`${url}/latest`)).body.print;
     expect(seen).toMatchObject({ id: dead.id, status: 'running', done: 2, stalled: true, downloadUrl: null });
     expect((await client.get(`${url}/${dead.id}/cards.pdf`)).status).toBe(409); // nothing partial
