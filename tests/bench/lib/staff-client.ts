@@ -59,12 +59,10 @@ const sleep = (t: number) => new Promise((r) => setTimeout(r, Math.max(0, t)));
 
 async function timed(s: Stream, call: () => Promise<{ status: number }>): Promise<number> {
   const t0 = performance.now();
-  let status = 0;
-  try {
-    status = (await call()).status;
-  } catch {
-    status = 0;
-  }
+  const status = await call().then(
+    (r) => r.status,
+    () => 0, // no answer
+  );
   s.ms.push(performance.now() - t0);
   s.statuses[status] = (s.statuses[status] ?? 0) + 1;
   if (status !== 200) s.errors++;
