@@ -53,7 +53,7 @@ async function main() {
     const twiceCheckIns = arrived.filter((a) => Number(a.audits) > 1).length;
     const unanswered = arrived.filter((a) => !tally.checkedIn.includes(a.number)).length;
 
-    const visitorRow = (name: string, v: Visit): Row => ({ what: name, measured: `p50 ${ms(v.p50)}, p99 ${ms(v.p99)}, ${rate(v.rps)}, ${v.requests.toLocaleString('en-GB')} requests, ${v.errors} errors` });
+    const visitorRow = (name: string, v: Visit): Row => ({ what: name, measured: `p50 ${ms(v.p50)}, p99 ${ms(v.p99)}, ${rate(v.rps)}, ${v.requests.toLocaleString('en-GB')} requests, ${v.errors} errors${v.errors ? ` (${v.errorKinds})` : ''}` });
     const staffRow = (name: string, st: Stream): Row => ({
       what: name,
       measured: `p50 ${ms(percentile(st.ms, 50))}, p99 ${ms(percentile(st.ms, 99))}, ${st.ms.length} requests, ${st.errors} errors${st.errors ? ` (${Object.entries(st.statuses).map(([k, n]) => `${n}× ${k === '0' ? 'no answer' : k}`).join(', ')})` : ''}`,
@@ -76,7 +76,10 @@ async function main() {
         goal: 'all 0',
         met: lostLines + twiceLines + lostCheckIns + twiceCheckIns + unanswered === 0 && tally.posted.length > 0,
       },
-    ], ['Each judge sends one sheet (every line for one car) a second, one send after another, as the phone\'s outbox does; the gate looks each car up by number, then checks it in.']);
+    ], [
+      'Visitors are closed-loop (each of the 200 asks again as soon as it is answered), so they keep the server saturated; a staff request still',
+      'in flight when the phase ends is counted when it returns. Each judge sends one sheet (every line for one car) a second, one send after another, as the phone\'s outbox does; the gate looks each car up by number, then checks it in.',
+    ]);
   } finally {
     await db.end();
     staff.stop();
