@@ -4,7 +4,7 @@
 // pages as static files (express-static-gzip over the very bytes the page route sent, so a
 // "same bytes as a static file" ratio compares like with like, compression included).
 import { fork, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import http from 'node:http';
@@ -164,6 +164,7 @@ async function serve(): Promise<void> {
   const stop = () => {
     server.close();
     server.closeAllConnections();
+    rmSync(dir, { recursive: true, force: true });
     process.exit(0);
   };
   process.on('SIGTERM', stop);
