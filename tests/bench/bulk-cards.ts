@@ -6,7 +6,9 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import os, { tmpdir } from 'node:os';
 import path from 'node:path';
 
-const CARDS = Number(process.env.BENCH_CARDS ?? 300);
+// A plain `npm run bench` (BENCH_ALL) prints 100 cards, its time target scaled to match, so every section fits in a few minutes.
+const CARDS = Number(process.env.BENCH_CARDS ?? (process.env.BENCH_ALL ? 100 : 300));
+const TARGET_S = (15 * CARDS) / 300; // 300 cards under 15 s
 const storageDir = mkdtempSync(path.join(tmpdir(), 'placard-bench-cards-'));
 Object.assign(process.env, { NODE_ENV: 'test', DB_NAME: 'placard_bench_cards', LOG_LEVEL: 'silent', DEMO_MODE: 'false', STORAGE_DIR: storageDir });
 
@@ -67,7 +69,7 @@ for (const r of [cold, warm, oneEdit]) {
 // Wall time depends on what else the machine runs; the CPU time of this process says what the print costs.
 console.log(`  load average while it ran: ${os.loadavg()[0]!.toFixed(1)} on ${os.cpus().length} cores`);
 console.log(`  process peak RSS (maxRSS, setup included): ${maxRssMb.toFixed(0)} MB`);
-console.log(`  targets: ${CARDS} cards under 15 s: ${cold.ms < 15_000 ? 'met' : 'NOT met'}; under 500 MB: ${cold.peakMb < 500 ? 'met' : 'NOT met'}; unchanged re-print under 1 s: ${warm.ms < 1000 ? 'met' : 'NOT met'}`);
+console.log(`  targets: ${CARDS} cards under ${TARGET_S} s: ${cold.ms < TARGET_S * 1000 ? 'met' : 'NOT met'}; under 500 MB: ${cold.peakMb < 500 ? 'met' : 'NOT met'}; unchanged re-print under 1 s: ${warm.ms < 1000 ? 'met' : 'NOT met'}`);
 
 await sequelize.close();
 rmSync(storageDir, { recursive: true, force: true });
