@@ -65,23 +65,17 @@ async function showSideLinks(page: Page, shows: readonly WalkedShow[]): Promise<
  * show-side link on each screen is clicked (depth first, each path once), each screen checked once it
  * has loaded, then the browser's Back button is pressed and the screen before is checked again.
  */
-export async function walkShowSide(page: Page, baseUrl: string, email: string, opts: { shows: readonly WalkedShow[]; maxScreens?: number }): Promise<Walk> {
+export async function walkShowSide(
+  page: Page,
+  baseUrl: string,
+  email: string,
+  opts: { shows: readonly WalkedShow[]; maxScreens?: number; onScreen?: (page: Page) => Promise<string[]> },
+): Promise<Walk> {
   const errors = watchForErrors(page);
   const problems: string[] = [];
   const reached: string[] = [];
   const visited = new Set<string>();
   const maxScreens = opts.maxScreens ?? 30;
-
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-  const landedOn = new URL(page.url()).pathname;
-  // The judge's and the gate's phone screens have no site menu: from there the walk opens the shows by address.
-  if (landedOn.startsWith('/judge') || landedOn.startsWith('/gate')) await page.goto(`${baseUrl}/shows`);
-  else await page.locator('nav').getByRole('link', { name: 'Shows', exact: true }).click();
-  await page.waitForURL(`${baseUrl}/shows`);
 
   const check = async (where: string) => {
     const wrong = await settle(page);
@@ -90,10 +84,27 @@ export async function walkShowSide(page: Page, baseUrl: string, email: string, o
     for (const e of seen) problems.push(`${where}: ${e}`);
   };
 
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+  const landedOn = new URL(page.url()).pathname;
+  // The landing screen is looked at too when each screen is (`onScreen`: the accessibility checks).
+  if (opts.onScreen) {
+    await check(`landing at ${landedOn}`);
+    for (const p of await opts.onScreen(page)) problems.push(p);
+  }
+  // The judge's and the gate's phone screens have no site menu: from there the walk opens the shows by address.
+  if (landedOn.startsWith('/judge') || landedOn.startsWith('/gate')) await page.goto(`${baseUrl}/shows`);
+  else await page.locator('nav').getByRole('link', { name: 'Shows', exact: true }).click();
+  await page.waitForURL(`${baseUrl}/shows`);
+
   const visit = async (path: string, depth: number): Promise<void> => {
     visited.add(path);
     reached.push(path);
     await check(`at ${path}`);
+    if (opts.onScreen) for (const p of await opts.onScreen(page)) problems.push(p);
     if (depth >= 4) return;
     for (const href of await showSideLinks(page, opts.shows)) {
       if (visited.has(href) || reached.length >= maxScreens) continue;
