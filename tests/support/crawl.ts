@@ -60,6 +60,28 @@ async function showSideLinks(page: Page, shows: readonly WalkedShow[]): Promise<
   return [...new Set(hrefs.filter((h) => SHOW_SIDE.test(h) && ours(h)))];
 }
 
+/** Marks the screen's heading before a navigation; returns its words. */
+async function markScreen(page: Page): Promise<string | null> {
+  return page.evaluate(() => {
+    const h = document.querySelector('main h1');
+    h?.setAttribute('data-walked-from', '');
+    return h?.textContent ?? null;
+  });
+}
+
+/**
+ * The address changes before the router has drawn the next screen (it renders in a transition): waits
+ * until the heading is a new one or says something else, so a screen is never judged by the one before.
+ * Two screens of one route with the same words keep their heading element: after 5 s the walk goes on.
+ */
+async function nextScreen(page: Page, before: string | null): Promise<void> {
+  const drawn = (words: string | null) => {
+    const h = document.querySelector('main h1');
+    return h !== null && (!h.hasAttribute('data-walked-from') || h.textContent !== words);
+  };
+  await page.waitForFunction(drawn, before, { timeout: 5_000 }).catch(() => undefined);
+}
+
 /**
  * Signs in through the form and walks the show side as a person would: from the "Shows" link, every
  * show-side link on each screen is clicked (depth first, each path once), each screen checked once it
@@ -108,11 +130,15 @@ export async function walkShowSide(
     if (depth >= 4) return;
     for (const href of await showSideLinks(page, opts.shows)) {
       if (visited.has(href) || reached.length >= maxScreens) continue;
+      let before = await markScreen(page);
       await page.locator(`main a[href="${href}"], nav a[href="${href}"]`).first().click();
       await page.waitForURL((u) => u.pathname + u.search === href);
+      await nextScreen(page, before);
       await visit(href, depth + 1);
+      before = await markScreen(page);
       await page.goBack();
       await page.waitForURL((u) => u.pathname + u.search === path);
+      await nextScreen(page, before);
       await check(`back at ${path} from ${href}`);
     }
   };
