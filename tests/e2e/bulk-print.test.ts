@@ -87,7 +87,7 @@ describe('numbered cards in bulk, from the organiser’s entries page', () => {
     await signIn(ownerPage, s.owner.email);
     await ownerPage.goto(`${env.baseUrl}/entries`);
     const third = expected[2]!;
-    const cardLink = ownerPage.getByRole('link', { name: `Download the card for entry ${third.number}`, exact: true });
+    const cardLink = ownerPage.getByRole('link', { name: `Download the card for No. ${third.number}`, exact: true });
     await cardLink.waitFor();
     await keepScreenshot(ownerPage, 'my-entries-card-link.png', { fullPage: false });
     const [cardDownload] = await Promise.all([ownerPage.waitForEvent('download'), cardLink.click()]);

@@ -60,28 +60,44 @@ async function showSideLinks(page: Page, shows: readonly WalkedShow[]): Promise<
   return [...new Set(hrefs.filter((h) => SHOW_SIDE.test(h) && ours(h)))];
 }
 
+/** Marks the screen's heading before a navigation; returns its words. */
+async function markScreen(page: Page): Promise<string | null> {
+  return page.evaluate(() => {
+    const h = document.querySelector('main h1');
+    h?.setAttribute('data-walked-from', '');
+    return h?.textContent ?? null;
+  });
+}
+
+/**
+ * The address changes before the router has drawn the next screen (it renders in a transition): waits
+ * until the heading is a new one or says something else, so a screen is never judged by the one before.
+ * Two screens of one route with the same words keep their heading element: after 5 s the walk goes on.
+ */
+async function nextScreen(page: Page, before: string | null): Promise<void> {
+  const drawn = (words: string | null) => {
+    const h = document.querySelector('main h1');
+    return h !== null && (!h.hasAttribute('data-walked-from') || h.textContent !== words);
+  };
+  await page.waitForFunction(drawn, before, { timeout: 5_000 }).catch(() => undefined);
+}
+
 /**
  * Signs in through the form and walks the show side as a person would: from the "Shows" link, every
  * show-side link on each screen is clicked (depth first, each path once), each screen checked once it
  * has loaded, then the browser's Back button is pressed and the screen before is checked again.
  */
-export async function walkShowSide(page: Page, baseUrl: string, email: string, opts: { shows: readonly WalkedShow[]; maxScreens?: number }): Promise<Walk> {
+export async function walkShowSide(
+  page: Page,
+  baseUrl: string,
+  email: string,
+  opts: { shows: readonly WalkedShow[]; maxScreens?: number; onScreen?: (page: Page) => Promise<string[]> },
+): Promise<Walk> {
   const errors = watchForErrors(page);
   const problems: string[] = [];
   const reached: string[] = [];
   const visited = new Set<string>();
   const maxScreens = opts.maxScreens ?? 30;
-
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-  const landedOn = new URL(page.url()).pathname;
-  // The judge's and the gate's phone screens have no site menu: from there the walk opens the shows by address.
-  if (landedOn.startsWith('/judge') || landedOn.startsWith('/gate')) await page.goto(`${baseUrl}/shows`);
-  else await page.locator('nav').getByRole('link', { name: 'Shows', exact: true }).click();
-  await page.waitForURL(`${baseUrl}/shows`);
 
   const check = async (where: string) => {
     const wrong = await settle(page);
@@ -90,18 +106,39 @@ export async function walkShowSide(page: Page, baseUrl: string, email: string, o
     for (const e of seen) problems.push(`${where}: ${e}`);
   };
 
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+  const landedOn = new URL(page.url()).pathname;
+  // The landing screen is looked at too when each screen is (`onScreen`: the accessibility checks).
+  if (opts.onScreen) {
+    await check(`landing at ${landedOn}`);
+    for (const p of await opts.onScreen(page)) problems.push(p);
+  }
+  // The judge's and the gate's phone screens have no site menu: from there the walk opens the shows by address.
+  if (landedOn.startsWith('/judge') || landedOn.startsWith('/gate')) await page.goto(`${baseUrl}/shows`);
+  else await page.locator('nav').getByRole('link', { name: 'Shows', exact: true }).click();
+  await page.waitForURL(`${baseUrl}/shows`);
+
   const visit = async (path: string, depth: number): Promise<void> => {
     visited.add(path);
     reached.push(path);
     await check(`at ${path}`);
+    if (opts.onScreen) for (const p of await opts.onScreen(page)) problems.push(p);
     if (depth >= 4) return;
     for (const href of await showSideLinks(page, opts.shows)) {
       if (visited.has(href) || reached.length >= maxScreens) continue;
+      let before = await markScreen(page);
       await page.locator(`main a[href="${href}"], nav a[href="${href}"]`).first().click();
       await page.waitForURL((u) => u.pathname + u.search === href);
+      await nextScreen(page, before);
       await visit(href, depth + 1);
+      before = await markScreen(page);
       await page.goBack();
       await page.waitForURL((u) => u.pathname + u.search === path);
+      await nextScreen(page, before);
       await check(`back at ${path} from ${href}`);
     }
   };

@@ -1,5 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContextOptions } from 'playwright-core';
+import type { BrowserContextOptions, Page } from 'playwright-core';
 import { useBrowserAndServer } from './browser';
 import { walkShowSide, type WalkedShow } from './crawl';
 import { showWithClasses, signedIn } from './event-factory';
@@ -7,6 +7,7 @@ import { enter, memberOf, step } from './show-day-factory';
 import { judgeOf, showInJudging } from './judging-factory';
 import { confirmEntryPayment } from '@server/services/entries/entries';
 import { User } from '@server/models/user';
+import type { AxeLedger } from './axe';
 
 type Person = { role: string; email: string };
 
@@ -15,8 +16,9 @@ type Person = { role: string; email: string };
  * typing an address), forward and back, and nothing breaks on the way: no error boundary, no script or
  * console error. Screens that share a cached answer are reached one after the other here, which is how
  * two shapes under one cache key were found breaking. One file per device, so the two run side by side.
+ * With `axe`, every screen of each role's walk is also checked for accessibility (tests/support/axe.ts).
  */
-export function describeShowSideWalk(device: string, options: BrowserContextOptions): void {
+export function describeShowSideWalk(device: string, options: BrowserContextOptions, axe?: AxeLedger): void {
   const env = useBrowserAndServer();
   const people: Person[] = [];
   const shows: WalkedShow[] = [];
@@ -48,17 +50,23 @@ export function describeShowSideWalk(device: string, options: BrowserContextOpti
   });
 
   describe('the show side, walked by every role through its own links', () => {
-    it(`breaks no screen on a ${device}`, async () => {
+    // Six walks, and with axe a check of each new screen: longer than the project's minute, never stuck (each action has its 20 s).
+    it(`breaks no screen on a ${device}`, { timeout: 150_000 }, async () => {
       const walks: string[] = [];
       const landings: Record<string, string> = {};
+      // Every role walks before the findings are shown, so one run lists them all.
+      const found: string[] = [];
       for (const person of people) {
-        const context = await env.browser.newContext(options);
-        const { landedOn, reached, problems } = await walkShowSide(await context.newPage(), env.baseUrl, person.email, { shows });
+        const context = await env.browser.newContext({ ...options, bypassCSP: axe !== undefined });
+        // A co-organiser sees what the organiser sees: axe looks at those screens once, as the organiser.
+        const onScreen = axe && person.role !== 'co-organiser' ? (page: Page) => axe.check(page, person.role) : undefined;
+        const { landedOn, reached, problems } = await walkShowSide(await context.newPage(), env.baseUrl, person.email, { shows, onScreen });
         await context.close();
-        expect(problems, `${person.role} on a ${device}`).toEqual([]);
+        found.push(...problems.map((p) => `${person.role}: ${p}`));
         landings[person.role] = landedOn;
         walks.push(`${person.role}: ${reached.join(' ')}`);
       }
+      expect(found, `on a ${device}`).toEqual([]);
       // Each role lands on its day: the organisers on the show's Today, the gate on the scanner, the judge on their cars.
       const [onTheDay, judged] = shows as [WalkedShow, WalkedShow];
       expect(landings).toEqual({

@@ -7,7 +7,7 @@ import { useSignOut } from '@client/features/session/api/sign-out';
 import { VerifyEmailBanner } from '@client/features/account/components/verify-email-banner';
 
 const navClass = ({ isActive }: { isActive: boolean }) =>
-  `inline-flex min-h-11 items-center px-2 font-display uppercase tracking-wide hover:text-signal ${isActive ? 'text-signal underline decoration-2 underline-offset-8' : ''}`;
+  `inline-flex min-h-11 items-center px-2 font-display uppercase tracking-wide hover:text-signal-ink ${isActive ? 'text-signal-ink underline decoration-2 underline-offset-8' : ''}`;
 
 /** Header, navigation that follows what the person may do, and the page. */
 export function AppLayout() {
@@ -60,7 +60,7 @@ export function AppLayout() {
                 ) : null}
                 <button
                   type="button"
-                  className="inline-flex min-h-11 items-center px-2 font-display uppercase tracking-wide hover:text-signal"
+                  className="inline-flex min-h-11 items-center px-2 font-display uppercase tracking-wide hover:text-signal-ink"
                   disabled={signOut.isPending}
                   onClick={() => signOut.mutate(undefined, { onSuccess: () => window.location.assign('/') })}
                 >

@@ -6,7 +6,7 @@ const styles: Record<Variant, string> = {
   primary: 'bg-ink text-paper border-ink hover:bg-signal hover:border-signal',
   secondary: 'bg-transparent text-ink border-ink hover:bg-ink hover:text-paper',
   danger: 'bg-danger text-paper border-danger hover:bg-ink hover:border-ink',
-  quiet: 'bg-transparent text-ink border-transparent underline underline-offset-4 hover:text-signal',
+  quiet: 'bg-transparent text-ink border-transparent underline underline-offset-4 hover:text-signal-ink',
 };
 
 /** Square, bordered, at least 44 px tall: easy to hit with a thumb in a field. */

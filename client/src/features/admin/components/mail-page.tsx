@@ -14,7 +14,7 @@ function Linkified({ text }: { text: string }) {
     <pre className="whitespace-pre-wrap break-words font-sans">
       {parts.map((p, i) =>
         /^https?:\/\//.test(p) ? (
-          <a key={i} href={p} className="text-signal underline underline-offset-4">
+          <a key={i} href={p} className="text-signal-ink underline underline-offset-4">
             {p}
           </a>
         ) : (
@@ -62,8 +62,9 @@ export function MailMessagePage() {
       </p>
       {isPending ? <LoadingState /> : null}
       {error ? <ErrorState error={error} onRetry={() => void refetch()} /> : null}
+      {data ? <PageHeader title={data.mail.subject} /> : null}
       {data ? (
-        <Panel title={data.mail.subject}>
+        <Panel title="Message">
           <dl className="mb-4 grid grid-cols-[auto_1fr] gap-x-4 text-sm">
             <dt className="text-graphite">From</dt>
             <dd>{data.mail.from}</dd>

@@ -71,7 +71,7 @@ function NoSuchBuild({ children }: { children: string }) {
   return (
     <div className="flex flex-col items-start gap-3">
       <Notice tone="danger">{children}</Notice>
-      <Link to="/builds" className="inline-flex min-h-11 items-center underline underline-offset-4 hover:text-signal">
+      <Link to="/builds" className="inline-flex min-h-11 items-center underline underline-offset-4 hover:text-signal-ink">
         ← Back to My builds
       </Link>
     </div>

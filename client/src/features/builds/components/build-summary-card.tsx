@@ -33,7 +33,7 @@ export function BuildSummaryCard({ build, system }: { build: BuildSummary; syste
   const meta = [build.modelYear, build.style ? (BUILD_STYLE_LABELS[build.style as keyof typeof BUILD_STYLE_LABELS] ?? build.style) : null].filter(Boolean).join(' · ');
   return (
     <li className="flex flex-col border border-rule bg-white/60">
-      <Link to={`/builds/${build.id}`} className="group flex flex-1 flex-col hover:text-signal">
+      <Link to={`/builds/${build.id}`} className="group flex flex-1 flex-col hover:text-signal-ink">
         <div className="aspect-[3/2] w-full overflow-hidden border-b border-rule bg-rule/40">
           {build.cover ? (
             <PhotoImage photo={build.cover} sizes="(min-width: 1024px) 320px, (min-width: 640px) 45vw, 95vw" alt="" className="h-full w-full object-cover" />

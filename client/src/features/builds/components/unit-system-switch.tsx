@@ -10,7 +10,7 @@ export function UnitSystemSwitch({ system, onChange }: { system: UnitSystem; onC
   return (
     <div role="group" aria-label="Units" className="flex w-fit border border-ink">
       {CHOICES.map(([s, label]) => (
-        <button key={s} type="button" aria-pressed={system === s} onClick={() => onChange(s)} className={`min-h-11 px-3 font-display text-sm uppercase ${system === s ? 'bg-ink text-paper' : 'hover:text-signal'}`}>
+        <button key={s} type="button" aria-pressed={system === s} onClick={() => onChange(s)} className={`min-h-11 px-3 font-display text-sm uppercase ${system === s ? 'bg-ink text-paper' : 'hover:text-signal-ink'}`}>
           {label}
         </button>
       ))}

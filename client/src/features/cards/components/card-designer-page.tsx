@@ -73,7 +73,7 @@ function Designer({ buildId, data }: { buildId: number; data: CardSettingsRespon
   return (
     <div>
       <PageHeader title="Windshield card">
-        <Link to={`/builds/${buildId}`} className="underline underline-offset-4 hover:text-signal">
+        <Link to={`/builds/${buildId}`} className="underline underline-offset-4 hover:text-signal-ink">
           {data.build.title}
         </Link>{' '}
         · the QR code opens <span className="font-mono text-sm">{data.build.publicUrl.replace(/^https?:\/\//, '')}</span>

@@ -8,7 +8,7 @@ function Call({ call, placed }: { call: ReadOutCall; placed: boolean }) {
   const from = [call.owner?.hometown, call.owner?.club].filter(Boolean).join(' · ');
   return (
     <li className="border-b border-rule py-3">
-      {placed ? <p className="font-display text-xl uppercase text-signal">{placeWords(call.place, call.shared)}</p> : null}
+      {placed ? <p className="font-display text-xl uppercase text-signal-ink">{placeWords(call.place, call.shared)}</p> : null}
       <p className="font-display text-3xl leading-tight">
         <span className="tabular-nums">{call.number}</span> · {call.title}
       </p>

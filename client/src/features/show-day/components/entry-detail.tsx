@@ -1,4 +1,4 @@
-import { Fragment, useState } from 'react';
+import { Fragment, useEffect, useRef, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { ASKABLE_PRIVATE_FIELD_LABELS, ASKABLE_PRIVATE_FIELDS, ENTRY_STATUS_LABELS } from '@shared/constants';
@@ -82,9 +82,30 @@ export function EntryDetail({ eventId, row, classes, timeZone, onClose }: { even
     setQuestion(null);
   };
   const open = row.status !== 'withdrawn';
+  // A modal dialog: the keyboard stays inside while it is open (the table behind is inert), Escape
+  // closes it, and the focus goes back to the entry's button it was opened from.
+  const ref = useRef<HTMLDialogElement>(null);
+  useEffect(() => {
+    const dialog = ref.current;
+    const opener = document.activeElement instanceof HTMLElement ? document.activeElement : null;
+    if (dialog && !dialog.open) dialog.showModal();
+    return () => {
+      dialog?.close();
+      opener?.focus();
+    };
+  }, []);
 
   return (
-    <aside role="dialog" aria-label={`Entry ${row.number ?? ''} ${row.buildTitle}`} className="fixed inset-y-0 right-0 z-20 w-full max-w-md overflow-y-auto border-l-2 border-ink bg-paper p-5 shadow-xl">
+    <dialog
+      ref={ref}
+      aria-label={`Entry ${row.number ?? ''} ${row.buildTitle}`}
+      onCancel={(e) => {
+        e.preventDefault();
+        // The question dialog inside cancels itself; React passes its cancel up the tree too.
+        if (e.target === e.currentTarget) onClose();
+      }}
+      className="fixed inset-y-0 right-0 left-auto m-0 h-full max-h-none w-full max-w-md overflow-y-auto border-0 border-l-2 border-ink bg-paper p-5 text-ink shadow-xl backdrop:bg-ink/30"
+    >
       <div className="flex items-start justify-between gap-2">
         <h2 className="font-display text-2xl uppercase">{row.number ? `No. ${row.number} · ` : ''}{row.buildTitle}</h2>
         <Button variant="quiet" onClick={onClose}>Close</Button>
@@ -140,6 +161,6 @@ export function EntryDetail({ eventId, row, classes, timeZone, onClose }: { even
           </li>
         ))}
       </ol>
-    </aside>
+    </dialog>
   );
 }

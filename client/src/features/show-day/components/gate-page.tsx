@@ -157,7 +157,7 @@ export function GatePage() {
         <>
           <div className="mt-3 border-2 border-ink bg-ink">
             {camera ? <video ref={videoRef} muted playsInline aria-label="Camera" className="aspect-square w-full object-cover" /> : null}
-            <button type="button" className={`${big} border-ink ${camera ? 'bg-paper text-ink' : 'bg-signal text-paper'}`} onClick={() => setCamera((c) => !c)}>
+            <button type="button" className={`${big} border-ink ${camera ? 'bg-paper text-ink' : 'bg-signal-ink text-paper'}`} onClick={() => setCamera((c) => !c)}>
               {camera ? 'Stop camera' : 'Scan a card'}
             </button>
           </div>

@@ -16,7 +16,13 @@ export function InvitationPage() {
   const accept = useAcceptInvitation(token);
   const navigate = useNavigate();
   if (invitation.isPending || session.isPending) return <LoadingState />;
-  if (invitation.error) return <ErrorState error={invitation.error} />;
+  if (invitation.error)
+    return (
+      <div className="max-w-xl">
+        <PageHeader title="Invitation" />
+        <ErrorState error={invitation.error} />
+      </div>
+    );
   const inv = invitation.data.invitation;
   const back = encodeURIComponent(`/invitations/${token}`);
   const role = EVENT_ROLE_LABELS[inv.role].toLowerCase();

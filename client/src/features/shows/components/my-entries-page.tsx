@@ -59,7 +59,7 @@ export function MyEntriesPage() {
           <li key={e.id} className="grid gap-2 border border-rule bg-white/60 p-4 sm:grid-cols-[5rem_1fr_auto] sm:items-center">
             <p className="font-display text-4xl" aria-label={e.number ? `Number ${e.number}` : 'No number yet'}>{e.number ?? '—'}</p>
             <div>
-              <p className="text-sm uppercase tracking-wide text-signal">{ENTRY_STATUS_LABELS[e.status]}</p>
+              <p className="text-sm uppercase tracking-wide text-signal-ink">{ENTRY_STATUS_LABELS[e.status]}</p>
               <h2 className="font-display text-xl uppercase">{e.buildTitle}</h2>
               <p className="text-graphite">
                 <a href={e.event.publicUrl} className="underline">{e.event.name}</a> · {e.className} · {showTime(e.event.startsAt, e.event.timeZone)}, {e.event.venueName}
@@ -82,7 +82,7 @@ export function MyEntriesPage() {
                   <a
                     href={entryCardUrl(e.id)}
                     download
-                    aria-label={`Download the card for entry ${e.number}`}
+                    aria-label={`Download the card for No. ${e.number}`}
                     className="inline-flex min-h-11 items-center border-2 border-ink bg-ink px-4 font-display uppercase tracking-wide text-paper hover:bg-paper hover:text-ink"
                   >
                     Card for No. {e.number}

@@ -73,7 +73,7 @@ export function PeoplesChoicePanel({ show }: { show: EventDetail }) {
                   <td className="py-1">{t.number}</td>
                   <td>
                     {t.title}
-                    {leaders.has(t.entryId) ? <span className="ml-2 text-sm font-semibold uppercase text-signal">{pc.leaders.length > 1 ? 'leading, tied' : 'leading'}</span> : null}
+                    {leaders.has(t.entryId) ? <span className="ml-2 text-sm font-semibold uppercase text-signal-ink">{pc.leaders.length > 1 ? 'leading, tied' : 'leading'}</span> : null}
                   </td>
                   <td>{t.className}</td>
                   <td className="text-right">{t.votes}</td>

@@ -66,9 +66,9 @@ export function ShowsPage() {
           <ul className="grid gap-3 md:grid-cols-2">
             {[...mine.data.events].sort(byDay).map((s) => (
               <li key={s.id} className="border border-rule bg-white/60 p-4">
-                <p className="text-sm uppercase tracking-wide text-signal">{s.myRoles.map((r) => EVENT_ROLE_LABELS[r]).join(' · ')} · {EVENT_STATUS_LABELS[s.status]}</p>
+                <p className="text-sm uppercase tracking-wide text-signal-ink">{s.myRoles.map((r) => EVENT_ROLE_LABELS[r]).join(' · ')} · {EVENT_STATUS_LABELS[s.status]}</p>
                 <h3 className="font-display text-xl uppercase">
-                  <Link to={`/shows/${s.id}`} className="hover:text-signal">
+                  <Link to={`/shows/${s.id}`} className="hover:text-signal-ink">
                     {s.name}
                   </Link>
                 </h3>
@@ -104,7 +104,7 @@ export function OpenShowList({ shows, pending, error }: { shows?: EventSummary[]
       {shows.map((s) => (
         <li key={s.id} className="border border-rule bg-white/60 p-4">
           <h3 className="font-display text-xl uppercase">
-            <a href={`/e/${s.slug}`} className="hover:text-signal">
+            <a href={`/e/${s.slug}`} className="hover:text-signal-ink">
               {s.name}
             </a>
           </h3>

@@ -26,7 +26,7 @@ export function EditorHeader({ build }: { build: OwnerBuild }) {
   return (
     <div className="mb-6 border-b border-rule pb-4">
       <p className="text-sm">
-        <Link to="/builds" className="inline-flex min-h-11 items-center underline underline-offset-4 hover:text-signal">
+        <Link to="/builds" className="inline-flex min-h-11 items-center underline underline-offset-4 hover:text-signal-ink">
           ← My builds
         </Link>
       </p>

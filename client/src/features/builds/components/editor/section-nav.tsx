@@ -64,7 +64,7 @@ export function SectionNav() {
                   e.preventDefault();
                   goTo(id);
                 }}
-                className="flex min-h-11 items-center px-3 text-sm hover:text-signal"
+                className="flex min-h-11 items-center px-3 text-sm hover:text-signal-ink"
               >
                 {label}
                 {mark(id) ? <span className="ml-1 text-caution" aria-label="not saved yet">●</span> : null}
