@@ -6,7 +6,7 @@ import { routeInputSchemas } from '@server/middlewares/validate';
 import { testApp } from './api-client';
 import { listenApp } from './raw-http';
 import { caller, rawRequest, type Caller, type RawAnswer } from './hostile-client';
-import { CALLERS, createWorld, type World } from './hostile-world';
+import { CALLERS, createWorld, type Stage, type World } from './hostile-world';
 import { ROUTE_TARGETS, type Group, type RouteTarget } from './hostile-routes';
 import { writeRoutes, fillPath, type AppRoute } from './write-routes';
 import { asReceived, databaseTrapBodies, exampleOf, hostileBodyArbitrary, jsonText, nearValidBodies, refusedFields, related, fieldsOf, TEXT_TRAPS, type HostileBody } from './hostile-input';
@@ -19,10 +19,10 @@ import { asReceived, databaseTrapBodies, exampleOf, hostileBodyArbitrary, jsonTe
 /** Fast-check runs per route (per path variant), on top of the fixed cases. */
 const NUM_RUNS = 8;
 /** Near-valid bodies sent per route (per path variant), taken field by field in turn. */
-const NEAR_VALID_CAP = 16;
+const NEAR_VALID_CAP = 12;
 
-/** Wrong spellings of a path id: the first id of a route gets them all, a second id the first three. */
-const BAD_IDS = ['-1', '2147483648', '%00', '0x1F', '1.5', ' 1', '99999999999999999999', '%'];
+/** Wrong spellings of a path id: the first id of a route gets them all, a second id the first two (the ids share IdSchema). */
+const BAD_IDS = ['-1', '2147483648', '%00', '0x1F', ' 1.5'];
 const BAD_WORDS = ['not-a-choice', '%00', '%ED%A0%80', 'x'.repeat(3000), '%'];
 const MEGABYTE_AND_A_BIT = `{"x":"${'x'.repeat(1_100_000)}"}`;
 
@@ -36,9 +36,16 @@ type Case = {
 
 export type Tally = { routes: number; variants: number; cases: number };
 
-export async function hostileSetup() {
+/** The CPU time this process spent since `start` (the app and the client both run in it), in seconds. */
+export const cpuSecondsSince = (start: NodeJS.CpuUsage) => {
+  const used = process.cpuUsage(start);
+  return (used.user + used.system) / 1e6;
+};
+
+export async function hostileSetup(stage: Stage = 'registration') {
+  const cpuAtStart = process.cpuUsage();
   const server = await listenApp();
-  const [world, scratch] = await Promise.all([createWorld(server.baseUrl), createWorld(server.baseUrl)]);
+  const [world, scratch] = await Promise.all([createWorld(server.baseUrl, stage), createWorld(server.baseUrl, stage)]);
   const tally: Tally = { routes: 0, variants: 0, cases: 0 };
   let turn = 0;
   const callerFor = (w: World, target: RouteTarget): Caller => (target.as === 'rotate' ? w.callers[CALLERS[turn++ % CALLERS.length]!] : w.callers[target.as]);
@@ -145,7 +152,7 @@ export async function hostileSetup() {
     const firstVariant = variantIndex === 0;
     for (const [n, name] of Object.keys(params).entries()) {
       if (!firstVariant) break;
-      const bad = typeof params[name] === 'number' ? [...(n === 0 ? BAD_IDS : BAD_IDS.slice(0, 3)), String(world.ids.nothing)] : BAD_WORDS;
+      const bad = typeof params[name] === 'number' ? [...(n === 0 ? BAD_IDS : BAD_IDS.slice(0, 2)), String(world.ids.nothing)] : BAD_WORDS;
       for (const value of bad) {
         const raw = route.path.replace(/:(\w+)/g, (_m, n: string) => (n === name ? value.replace(/ /g, '%20') : encodeURIComponent(String(params[n]))));
         cases.push({
@@ -172,11 +179,8 @@ export async function hostileSetup() {
     cases.push(
       { label: 'not JSON', path, headers: { 'content-type': 'application/json' }, body: '{"title": "unfinished', check: status(400, 'BAD_REQUEST') },
       { label: 'NaN as a bare JSON value', path, headers: { 'content-type': 'application/json' }, body: '{"x": NaN}', check: status(400, 'BAD_REQUEST') },
-      { label: 'a JSON string, not an object', path, headers: { 'content-type': 'application/json' }, body: '"text"', check: status(400, 'BAD_REQUEST') },
-      { label: 'text/plain', path, headers: { 'content-type': 'text/plain' }, body: '{"title":"x"}', check: status(415, 'UNSUPPORTED_MEDIA_TYPE') },
       { label: 'a form', path, headers: { 'content-type': 'application/x-www-form-urlencoded' }, body: 'title=x', check: status(415, 'UNSUPPORTED_MEDIA_TYPE') },
       { label: 'JSON in a charset we do not read', path, headers: { 'content-type': 'application/json; charset=latin1' }, body: '{}', check: status(415, 'UNSUPPORTED_MEDIA_TYPE') },
-      { label: 'no content type', path, body: '{"title":"x"}', check: status(415, 'UNSUPPORTED_MEDIA_TYPE') },
       { label: 'over a megabyte', path, headers: { 'content-type': 'application/json' }, body: MEGABYTE_AND_A_BIT, check: status(413, 'PAYLOAD_TOO_LARGE') },
     );
     if (target.multipart) cases.push(...multipartCases(path, target.multipart));
@@ -221,6 +225,7 @@ export async function hostileSetup() {
   return {
     world,
     tally,
+    cpuAtStart,
     attack,
     close: () => server.close(),
   };

@@ -230,16 +230,24 @@ const NUMBER_TRAPS: Array<[string, unknown]> = [
  * number past an `integer` column, or below it. Sent when the schema accepts them; the server must
  * still refuse them in words, never with a 500 from the database.
  */
-export const DATABASE_TRAPS: Array<[string, unknown]> = [
-  ['2^31, one past a PostgreSQL integer', 2_147_483_648],
-  ['-2^31 - 1, one below a PostgreSQL integer', -2_147_483_649],
-];
+export const DATABASE_TRAPS: Record<'number' | 'string', Array<[string, unknown]>> = {
+  number: [
+    ['2^31, one past a PostgreSQL integer', 2_147_483_648],
+    ['-2^31 - 1, one below a PostgreSQL integer', -2_147_483_649],
+  ],
+  // Text no PostgreSQL text or JSONB column stores: the one text rule refuses it, so only a field outside the rule gets here.
+  string: [
+    ['a NUL byte', 'a\u0000b'],
+    ['half of an emoji', 'a\uD83Db'],
+  ],
+};
 
 /** The fields of the example changed to a value the schema accepts and the database cannot store. */
 export function databaseTrapBodies(schema: z.ZodType, example: unknown, shape: z.ZodType = schema): HostileBody[] {
   const bodies: HostileBody[] = [];
-  for (const field of fieldsOf(shape, example).filter((f) => f.kind === 'number')) {
-    for (const [what, value] of DATABASE_TRAPS) bodies.push({ label: `${field.path.join('.')}: ${what}`, body: withValue(example, field.path, value), path: field.path });
+  for (const field of fieldsOf(shape, example)) {
+    if (field.kind !== 'number' && field.kind !== 'string') continue;
+    for (const [what, value] of DATABASE_TRAPS[field.kind]) bodies.push({ label: `${field.path.join('.')}: ${what}`, body: withValue(example, field.path, value), path: field.path });
   }
   return bodies.filter((b) => refusedFields(schema, b.body) === null);
 }

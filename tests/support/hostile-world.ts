@@ -23,7 +23,10 @@ import { caller, type Caller } from './hostile-client';
 export const CALLERS = ['owner', 'organiser', 'judge', 'gate', 'admin', 'other'] as const;
 export type CallerName = (typeof CALLERS)[number] | 'anonymous';
 
-export async function createWorld(baseUrl: string) {
+/** How far the world's show has gone: taking entries, or being judged (its car checked in at the gate). */
+export type Stage = 'registration' | 'judging';
+
+export async function createWorld(baseUrl: string, stage: Stage = 'registration') {
   const tag = randomUUID().slice(0, 8);
   const show = await showWithClasses({ settings: { entryFee: 0 } });
   const { eventId, classIds } = show;
@@ -52,6 +55,14 @@ export async function createWorld(baseUrl: string) {
   const invited = await show.organiser.client.post(`/api/events/${eventId}/invitations`, { email: uniqueEmail('invitee'), role: 'judge' });
   expect(invited.status, JSON.stringify(invited.body)).toBe(201);
 
+  if (stage === 'judging') {
+    const organiser = show.organiser.client;
+    const step = async (action: string) => expect((await organiser.post(`/api/events/${eventId}/lifecycle`, { action })).status).toBe(200);
+    await step('close_registration');
+    await step('open_gate');
+    expect((await organiser.post(`/api/events/${eventId}/gate/check-in`, { number: entered.body.entry.number, takeCash: false })).status).toBe(200);
+    await step('start_judging');
+  }
   const criterion = await Criterion.findOne({ where: { eventId } });
   const dynoRun = await DynoRun.findOne({ where: { buildId: build.id } });
   const weighIn = await WeighIn.findOne({ where: { buildId: build.id } });
