@@ -34,9 +34,11 @@ type Issue = { path: PropertyKey[]; message: string; code?: string; keys?: reado
  * A key the schema does not know (a strict object's `unrecognized_keys`) is named as its own field.
  */
 export function fieldsFromIssues(issues: ReadonlyArray<Issue>): Record<string, string> {
-  const fields: Record<string, string> = {};
+  // A Map, not an object: a key such as "__proto__" or "constructor" is a field like any other
+  // (an object would take it for one of its own built-ins and leave it unnamed).
+  const fields = new Map<string, string>();
   const put = (key: string, message: string) => {
-    if (!(key in fields)) fields[key] = message;
+    if (!fields.has(key)) fields.set(key, message);
   };
   for (const issue of issues) {
     const at = issue.path.map(String).join('.');
@@ -44,5 +46,5 @@ export function fieldsFromIssues(issues: ReadonlyArray<Issue>): Record<string, s
       for (const k of issue.keys) put(at ? `${at}.${k}` : k, `There is no field "${k}" here.`);
     } else put(at || '_', issue.message);
   }
-  return fields;
+  return Object.fromEntries(fields);
 }

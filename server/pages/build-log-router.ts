@@ -1,6 +1,7 @@
 import express, { Router, type ErrorRequestHandler, type Response } from 'express';
 import { QUESTION_HONEYPOT, VisitorQuestionSchema } from '@shared/schemas/build-questions';
 import { questionLimiter } from '../middlewares/rate-limits';
+import { readForm } from '../middlewares/validate';
 import { loadPublicBuild } from '../services/public/public-builds';
 import { loadAllPublicPosts, loadFeedPosts } from '../services/public/public-build-log';
 import { receiveVisitorQuestion } from '../services/builds/build-questions';
@@ -57,7 +58,7 @@ buildLogPagesRouter.post(
     const code = codeOf(req.params.code);
     const build = await loadPublicBuild(code);
     if (!build) return notFound(res);
-    const parsed = VisitorQuestionSchema.safeParse(req.body ?? {});
+    const parsed = readForm(req, VisitorQuestionSchema);
     if (!parsed.success) return answer(res, code, { kind: 'invalid', message: parsed.error.issues[0]?.message ?? 'Your question could not be read.' });
     // The honeypot was filled: a robot. It is told what a person is told, and nothing is kept.
     if (parsed.data[QUESTION_HONEYPOT]) return res.set('Cache-Control', 'no-store').redirect(303, `/c/${code}/asked`);

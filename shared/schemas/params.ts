@@ -1,7 +1,8 @@
 import { z } from 'zod';
 
-/** Largest id a PostgreSQL `integer` column holds. */
-const MAX_ID = 2_147_483_647;
+/** Largest value a PostgreSQL `integer` column holds: every id, and any whole number kept in such a column. */
+export const MAX_INTEGER_COLUMN = 2_147_483_647;
+const MAX_ID = MAX_INTEGER_COLUMN;
 
 /**
  * A row id in a path: decimal digits only. `0x25`, `37e0`, ` 37` and `37 ` are refused,

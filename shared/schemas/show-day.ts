@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { lineText, requiredLine, shortText } from './text';
 import { ASKABLE_PRIVATE_FIELDS, ENTRY_STATUSES } from '../constants';
-import { IdSchema } from './params';
+import { IdSchema, MAX_INTEGER_COLUMN } from './params';
 import { EntryStatusSchema } from './entry';
 import { EmailSchema } from './user';
 
@@ -191,7 +191,8 @@ export const GATE_SYNC_MAX = 100;
 /** One check-in a gate phone made with no signal: its own id for it, its count, the number, cash or not, and the phone's clock. */
 export const GateQueuedCheckInSchema = z.object({
   clientId: z.uuid({ error: 'Each check-in needs its id.' }),
-  sequence: z.number().int().positive(),
+  // Kept in gate_check_ins.sequence, an integer column: a count past it is refused here, not by the database (a 500).
+  sequence: z.number({ error: 'Each check-in needs its place in the phone’s queue.' }).int().positive().max(MAX_INTEGER_COLUMN, { error: 'The phone’s queue count is too large.' }),
   number: z.number().int().positive().max(99999),
   takeCash: z.boolean(),
   at: z.iso.datetime({ offset: true, error: 'The phone’s time is an ISO date.' }),

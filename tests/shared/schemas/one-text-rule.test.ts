@@ -6,7 +6,7 @@ import { textPaths, withValueAt } from '../../support/zod-text-paths';
 
 // Every string a route reads goes through the one text rule (shared/schemas/text.ts): NUL, half an
 // emoji and other control characters are refused, and every field has a length limit. The schemas
-// are found where the server uses them (each parseBody/parseQuery/parseParams and safeParse in
+// are found where the server uses them (each parseBody/parseQuery/parseParams/readForm and safeParse in
 // server/routes and server/pages), so a new route's schema is walked the day it is added.
 
 const schemaModules = import.meta.glob<Record<string, unknown>>('../../../shared/schemas/*.ts', { eager: true });
@@ -18,7 +18,7 @@ for (const mod of Object.values(schemaModules)) for (const [name, value] of Obje
 
 const used = new Set<string>();
 for (const source of Object.values(serverSources)) {
-  for (const m of source.matchAll(/parse(?:Body|Query|Params)\(req, (\w+)\)/g)) used.add(m[1]!);
+  for (const m of source.matchAll(/(?:parse(?:Body|Query|Params)|readForm)\(req, (\w+)\)/g)) used.add(m[1]!);
   for (const m of source.matchAll(/(\w+Schema)\.safeParse\(/g)) used.add(m[1]!);
 }
 
