@@ -264,8 +264,11 @@ function expectFieldsNamed(route: string, hostile: HostileBody, answer: RawAnswe
   }
   const error = (answer.json as { error: { code: string; fields?: Record<string, string> } }).error;
   expect(error.code, what).toBe('VALIDATION_FAILED');
-  expect(error.fields, what).toEqual(refusedFields(schema, hostile.body));
+  const schemaFields = refusedFields(schema, hostile.body);
+  expect(error.fields, what).toEqual(schemaFields);
   const changed = (hostile.paths ?? [hostile.path]).map((p) => p.join('.'));
+  // Leaving out an optional field can make others required (no dyno curve: then its peaks): the schema names those, as the server did.
+  if (!Object.keys(schemaFields ?? {}).some((f) => changed.some((at) => related(f, at)))) return;
   expect(Object.keys(error.fields ?? {}).some((f) => changed.some((at) => related(f, at))), `${what}: ${changed.join(' or ') || 'the body'} is not named`).toBe(true);
 }
 
