@@ -9,7 +9,7 @@ import { headlineOf } from '@shared/build-sheet/headline';
 import { DISPLACEMENT_ROW, engineLine, sectionViews, type SectionView } from '@shared/build-sheet/spec-lines';
 import { DynoChart } from '@templates/charts/dyno-chart';
 import { BrakeSplitBar, FrontViewSketch } from '@templates/charts/engineering-diagrams';
-import { shownEngineering } from '@shared/build-sheet/engineering-shown';
+import { rollCentreWords, shownEngineering } from '@shared/build-sheet/engineering-shown';
 import { PAGE_CSS } from './page-styles';
 import { PageHead } from './page-head';
 import { BUILD_LOG_CSS } from './build-log-styles';
@@ -169,7 +169,7 @@ function WorkedOut({ build, units }: { build: PublicBuild; units: UnitSystem }) 
       ) : null}
       {shown.geometry ? (
         <figure className="sketch">
-          <FrontViewSketch input={shown.geometry.input} centres={shown.geometry.centres} />
+          <FrontViewSketch input={shown.geometry.input} centres={shown.geometry.centres} rcHeight={shown.geometry.centres.rollCentreHeightMm !== null ? rollCentreWords(shown.geometry.centres.rollCentreHeightMm, units) : undefined} />
           <figcaption>Front view of the right-hand front corner: the arms, the tyre and the roll centre (RC).</figcaption>
         </figure>
       ) : null}

@@ -166,7 +166,7 @@ function Entries({ e, listing }: { e: PublicEvent; listing: PublicEntryListing }
             ? query.q
               ? `No car matches “${query.q}”${chosen ? ` in ${chosen.name}` : ''}.`
               : 'No confirmed entries yet.'
-            : `${query.q ? `${countOf(total, 'car')} match “${query.q}”` : countOf(total, 'car')}${chosen ? ` in ${chosen.name}` : ''}${pages > 1 ? ` · ${first}–${Math.min(first + PUBLIC_EVENT_ENTRIES_PER_PAGE - 1, total)} shown, page ${query.page} of ${pages}` : ''}`}
+            : `${query.q ? `${countOf(total, 'car')} ${total === 1 ? 'matches' : 'match'} “${query.q}”` : countOf(total, 'car')}${chosen ? ` in ${chosen.name}` : ''}${pages > 1 ? ` · ${first}–${Math.min(first + PUBLIC_EVENT_ENTRIES_PER_PAGE - 1, total)} shown, page ${query.page} of ${pages}` : ''}`}
       </p>
       {total > 0 && listing.entries.length === 0 ? (
         <p>

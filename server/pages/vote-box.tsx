@@ -16,7 +16,7 @@ function VoteBox({ state }: { state: VoteBoxState }) {
     return (
       <div id={state.anchor} className="vote" role="status">
         <p className="voted">
-          <strong>Thank you for voting.</strong> Your people&apos;s choice vote in this show went to {state.thisCar ? 'this car' : state.number ? `entry ${state.number}` : 'another car'}. One vote per visitor.
+          <strong>Thank you for voting.</strong> Your people’s choice vote in this show went to {state.thisCar ? 'this car' : state.number ? `entry ${state.number}` : 'another car'}. One vote per visitor.
         </p>
       </div>
     );
@@ -29,7 +29,7 @@ function VoteBox({ state }: { state: VoteBoxState }) {
           Vote for this car
         </button>
       </form>
-      <p className="vnote">People&apos;s choice: one vote per visitor in this show.</p>
+      <p className="vnote">People’s choice: one vote per visitor in this show.</p>
     </div>
   );
 }

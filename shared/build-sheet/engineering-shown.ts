@@ -26,6 +26,14 @@ const length = (mm: number, units: UnitSystem) => {
   const unit = preferredUnit('length', units);
   return unit === 'in' ? `${formatNumber(convert('length', mm, 'mm', 'in'), { decimals: 1 })}\u00a0in` : `${formatNumber(mm, { decimals: 0 })}\u00a0mm`;
 };
+/**
+ * The camber change over the first 25 mm of bump, per inch where the page reads in inches: 1 in is 25.4 mm
+ * (exact, by definition), and over so short a travel the curve is taken as straight (common practice).
+ */
+const camberGainWords = (gainPer25Mm: number, units: UnitSystem) =>
+  preferredUnit('length', units) === 'in' ? `${signed((gainPer25Mm * 25.4) / 25, 2)}° per inch of bump est.` : `${signed(gainPer25Mm, 2)}° per 25\u00a0mm of bump est.`;
+/** The roll-centre height the front-view sketch labels, in the page's units. */
+export const rollCentreWords = (mm: number, units: UnitSystem) => length(mm, units).replace('\u00a0', ' ');
 const signed = (n: number, decimals: number) => `${n < 0 ? '−' : n > 0 ? '+' : ''}${formatNumber(Math.abs(n), { decimals })}`;
 
 /** The chosen figures in one unit system, or null when the owner chose none or none can be worked out. */
@@ -47,7 +55,7 @@ export function shownEngineering(build: Source, units: UnitSystem): ShownEnginee
       const rc = g.value.centres.rollCentreHeightMm;
       const gain = g.value.curve.camberGainPer25MmBumpDeg;
       if (rc !== null) figures.push({ key: 'rollCentre', label: 'Front roll-centre height', value: `${length(rc, units)} est.` });
-      if (gain !== null) figures.push({ key: 'camberGain', label: 'Front camber gain', value: `${signed(gain, 2)}° per 25\u00a0mm of bump est.` });
+      if (gain !== null) figures.push({ key: 'camberGain', label: 'Front camber gain', value: camberGainWords(gain, units) });
       if (rc !== null || gain !== null) geometry = g.value;
     }
     const cg = cgHeightFigures(chassis, build.weighIns);

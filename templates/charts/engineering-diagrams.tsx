@@ -8,8 +8,11 @@ const SIGNAL = '#D9481C';
 const GRAPHITE = '#55524C';
 const f0 = (n: number) => formatNumber(n, { decimals: 0 });
 
-/** Front view of the right-hand corner, centreline on the left; the instant centre is drawn when it fits. */
-export function FrontViewSketch({ input, centres, tyreDiameterMm = 650, tyreWidthMm = 225 }: { input: FrontGeometryInput; centres: FrontViewCentres; tyreDiameterMm?: number; tyreWidthMm?: number }) {
+/**
+ * Front view of the right-hand corner, centreline on the left; the instant centre is drawn when it fits.
+ * `rcHeight` says the roll-centre height in the reader's units ("4.2 in"); without it, millimetres.
+ */
+export function FrontViewSketch({ input, centres, tyreDiameterMm = 650, tyreWidthMm = 225, rcHeight }: { input: FrontGeometryInput; centres: FrontViewCentres; tyreDiameterMm?: number; tyreWidthMm?: number; rcHeight?: string }) {
   const cp = input.contactPatch;
   const pts: Point[] = [input.upper.inner, input.upper.outer, input.lower.inner, input.lower.outer, cp, { x: 0, y: 0 }, { x: cp.x + tyreWidthMm / 2, y: tyreDiameterMm }];
   const ic = centres.instantCentre;
@@ -30,7 +33,7 @@ export function FrontViewSketch({ input, centres, tyreDiameterMm = 650, tyreWidt
   // Strokes in drawing units: a sketch ~2 m wide drawn 300 px wide needs thick lines to show at all.
   const unit = Math.max(w, h) / 300;
   return (
-    <svg viewBox={`0 0 ${Math.ceil(w)} ${Math.ceil(h)}`} role="img" aria-label={`Front view of the front suspension: ${icShown ? 'instant centre and ' : ''}roll centre${rc !== null ? ` at ${f0(rc)} mm` : ''}`} data-testid="front-view-sketch" style={{ width: '100%', height: 'auto', maxHeight: 320 }}>
+    <svg viewBox={`0 0 ${Math.ceil(w)} ${Math.ceil(h)}`} role="img" aria-label={`Front view of the front suspension: ${icShown ? 'instant centre and ' : ''}roll centre${rc !== null ? ` at ${rcHeight ?? `${f0(rc)} mm`}` : ''}`} data-testid="front-view-sketch" style={{ width: '100%', height: 'auto', maxHeight: 320 }}>
       {line({ x: minX, y: 0 }, { x: maxX, y: 0 }, GRAPHITE, 1)}
       {line({ x: 0, y: minY }, { x: 0, y: maxY }, GRAPHITE, 1, '12 10')}
       <rect x={X(cp.x - tyreWidthMm / 2)} y={Y(tyreDiameterMm)} width={tyreWidthMm} height={tyreDiameterMm} rx={tyreWidthMm / 4} fill="none" stroke={INK} strokeWidth={2 * unit} />
@@ -49,7 +52,7 @@ export function FrontViewSketch({ input, centres, tyreDiameterMm = 650, tyreWidt
       {rc !== null ? (
         <>
           <circle cx={X(0)} cy={Y(rc)} r={label / 2} fill={SIGNAL} />
-          <text x={X(0) + label} y={Y(rc) - label / 2} fontSize={label} fill={SIGNAL}>RC {f0(rc)} mm</text>
+          <text x={X(0) + label} y={Y(rc) - label / 2} fontSize={label} fill={SIGNAL}>RC {rcHeight ?? `${f0(rc)} mm`}</text>
         </>
       ) : null}
     </svg>

@@ -24,7 +24,7 @@ describe('a big show’s public page on a phone with no script', () => {
     // The form keeps the class chosen; a number finds its car.
     await page.getByLabel('Find a car by title or number').fill('155');
     await page.getByRole('button', { name: 'Find' }).click();
-    await expect.poll(() => page.getByRole('status').textContent()).toContain('1 car match “155” in Customs');
+    await expect.poll(() => page.getByRole('status').textContent()).toContain('1 car matches “155” in Customs');
     await page.getByLabel('Class', { exact: true }).selectOption({ label: 'Every class' });
     await page.getByLabel('Find a car by title or number').fill('field car 29');
     await page.getByRole('button', { name: 'Find' }).click();

@@ -1,4 +1,4 @@
-import { wallTimeToInstant } from '@shared/calc/time-zone';
+import { instantToWallTime, wallTimeToInstant } from '@shared/calc/time-zone';
 import { Build } from '../../models/build';
 import { Event } from '../../models/event';
 import { EventMembership } from '../../models/event-membership';
@@ -76,12 +76,16 @@ export async function seedShowDay(): Promise<void> {
   const gate = await person('gate@placard.test');
   for (const number of arrived) await gateCheckIn(show, number, false, gate);
 
-  const day = new Date(now).toISOString().slice(0, 10);
+  // Today on the show's own clock (not the server's), 08:00 to 18:00; loaded outside those hours, on now
+  // all the same: from the hour before, for ten hours, so the gate is open while the show is on.
+  const day = instantToWallTime(new Date(now).toISOString(), DEMO_SHOW_DAY_SHOW.timeZone).slice(0, 10);
   const today = (time: string) => new Date(wallTimeToInstant(`${day}T${time}`, DEMO_SHOW_DAY_SHOW.timeZone));
+  const onNow = now >= today('08:00').getTime() && now < today('17:00').getTime();
+  const startsAt = onNow ? today('08:00') : new Date(Math.floor(now / 3600_000) * 3600_000 - 3600_000);
   await Event.update(
     {
-      startsAt: today('08:00'),
-      endsAt: today('18:00'),
+      startsAt,
+      endsAt: new Date(startsAt.getTime() + 10 * 3600_000),
       registrationOpensAt: new Date(today('09:00').getTime() - 30 * DAY),
       registrationClosesAt: new Date(today('23:59').getTime() - 2 * DAY),
     },

@@ -76,7 +76,7 @@ async function seedShows() {
   await withdrawEntry(pickup.id, await person('reuben.salas@placard.test'), false);
   const muscle = await enter('june.okafor@placard.test', '1969 Muscle Coupe', postwar.id);
   await confirmEntryPayment(muscle.id, 'demo_pay_muscle');
-  await withdrawEntry(muscle.id, await person('june.okafor@placard.test'), false); // full refund: before the date
+  await withdrawEntry(muscle.id, await person('june.okafor@placard.test'), false); // full refund: before the date; sent back in seeder 20261207-0101
   const split = await enter('june.okafor@placard.test', '1963 Split-Window Coupe', postwar.id);
   await confirmEntryPayment(split.id, 'demo_pay_split');
   await inviteToEvent(open.id, organiser, 'second.gate@placard.test', 'gate'); // still open

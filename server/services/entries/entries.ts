@@ -186,7 +186,9 @@ export async function listEntriesOfEvent(eventId: number) {
   return { entries, positions: await waitingPositions([eventId]) };
 }
 
-/** An owner's entries across shows, the soonest show first. */
+const SHOW_OVER = new Set(['results_published', 'archived']);
+
+/** An owner's entries across shows: shows still to come or on today first, the soonest first; then the shows that are over, the latest first. */
 export async function listEntriesOf(person: Person) {
   const eventIds = (await Entry.findAll({ where: { ownerId: person.id }, attributes: ['eventId'], group: ['eventId'] })).map((r) => r.eventId);
   const entries = await Entry.findAll({
@@ -194,7 +196,10 @@ export async function listEntriesOf(person: Person) {
     include: [...entryIncludes, { model: Event, as: 'event' }],
     order: [[{ model: Event, as: 'event' }, 'startsAt', 'ASC'], ['id', 'ASC']],
   });
-  return { entries, positions: await waitingPositions(eventIds) };
+  const over = (e: Entry) => SHOW_OVER.has(e.event!.status);
+  // Array sort is stable: among one show's entries the query's order (by entry) stands.
+  const ordered = [...entries.filter((e) => !over(e)), ...entries.filter(over).sort((a, b) => b.event!.startsAt.getTime() - a.event!.startsAt.getTime())];
+  return { entries: ordered, positions: await waitingPositions(eventIds) };
 }
 
 /** The show's public entry list: confirmed entries of published builds, by number (no owners' details). */

@@ -39,9 +39,17 @@ export async function sendEntryRefund(job: RefundJob): Promise<void> {
   const entry = await Entry.findByPk(job.entryId);
   if (!entry || entry.refundRef) return;
   const made = await refund({ checkoutId: job.checkoutId, amountMinor: job.amountMinor, idempotencyKey: `entry-${job.entryId}-refund` });
-  const recorded = await sequelize.transaction(async (transaction) => {
+  if (await recordEntryRefund(entry.id, made)) logger.info({ entryId: entry.id, refund: made.id, amount: made.amountMinor }, 'entry fee refunded');
+}
+
+/**
+ * Records a refund the payment service made for an entry: its reference, the amount, the history line and
+ * the entrant's notice. False when the entry already has one (two deliveries of the job at once record it once).
+ */
+export async function recordEntryRefund(entryId: number, made: { id: string; amountMinor: number }): Promise<boolean> {
+  return sequelize.transaction(async (transaction) => {
     // Locked and read again: two deliveries of the job at once record the one refund once.
-    const locked = await Entry.findByPk(entry.id, { lock: transaction.LOCK.UPDATE, transaction });
+    const locked = await Entry.findByPk(entryId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!locked || locked.refundRef) return false;
     await locked.update({ refundRef: made.id, refundedAt: new Date(), refundedAmount: made.amountMinor }, { transaction });
     await writeAudit({ eventId: locked.eventId, entryId: locked.id, actorId: null, action: 'refund_sent', before: { refundDue: locked.refundDue }, after: { refundRef: made.id, amount: made.amountMinor } }, transaction);
@@ -49,7 +57,6 @@ export async function sendEntryRefund(job: RefundJob): Promise<void> {
     if (event) await mailRefundSent(locked, event, made.amountMinor, transaction);
     return true;
   });
-  if (recorded) logger.info({ entryId: entry.id, refund: made.id, amount: made.amountMinor }, 'entry fee refunded');
 }
 
 async function sendIssueRefund(job: RefundJob, issueId: number): Promise<void> {

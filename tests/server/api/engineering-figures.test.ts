@@ -89,6 +89,11 @@ describe('the worked-out figures an owner chooses to show', () => {
     // A sketch the browser can draw: a plain-number viewBox (no thousands separators).
     expect(worked).toMatch(/<svg viewBox="0 0 \d+ \d+" role="img" aria-label="Front view of the front suspension: instant centre and roll centre at 102 mm" data-testid="front-view-sketch"/);
     expect(html).not.toMatch(/VIN-ENGINEERING|PLATE-ENG|NaN|Infinity/);
+    // Read in inches, the camber gain is per inch (1 in = 25.4 mm) and the sketch labels the roll centre in inches too.
+    const inches = (await request(testApp()).get(`/c/${build.code}?units=imperial`).expect(200)).text.match(/<section id="worked-out"[\s\S]*?<\/section>/)?.[0] ?? '';
+    expect(inches).toContain('−0.86° per inch of bump est.');
+    expect(inches).toMatch(/>RC 4\.0 in<\/text>/);
+    expect(inches).not.toMatch(/\bmm\b/);
 
     const card = await cardText(api, build.id);
     expect(card).toContain('WORKED OUT (ESTIMATES)');

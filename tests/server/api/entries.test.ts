@@ -197,6 +197,23 @@ describe('withdrawal, refunds and payment', () => {
     expect((await early.client.post(`/api/entries/${e1.id}/withdraw`)).status).toBe(409);
   });
 
+  it('lists the owner’s shows still to come first, soonest first, and the shows that are over after them, latest first', async () => {
+    const owner = await ownerWithBuild('Three-show coupe');
+    const shows = [await showWithClasses(), await showWithClasses(), await showWithClasses()];
+    for (const s of shows) expect((await owner.client.post(`/api/events/${s.eventId}/entries`, { buildId: owner.build.id, classId: s.classIds[0] })).status).toBe(201);
+    // Dated (and the two past ones finished) directly: walking two shows through judging is not what this checks.
+    const [coming, overLongAgo, overLately] = shows.map((s) => s.eventId) as [number, number, number];
+    const dated = (days: number) => {
+      const start = Date.now() + days * DAY;
+      return { startsAt: new Date(start), endsAt: new Date(start + 3600_000), registrationOpensAt: new Date(start - 30 * DAY), registrationClosesAt: new Date(start - DAY) };
+    };
+    await Event.update(dated(20), { where: { id: coming } });
+    await Event.update({ status: 'results_published', ...dated(-90) }, { where: { id: overLongAgo } });
+    await Event.update({ status: 'archived', ...dated(-10) }, { where: { id: overLately } });
+    const mine = (await owner.client.get('/api/entries')).body.entries as Array<{ event: { id: number } }>;
+    expect(mine.map((e) => e.event.id)).toEqual([coming, overLately, overLongAgo]);
+  });
+
   it('confirmEntryPayment confirms once; the same reference again changes nothing', async () => {
     const { eventId, classIds } = await showWithClasses();
     const owner = await ownerWithBuild();

@@ -56,7 +56,7 @@ describe('the public show page of a big show: paged and searchable without scrip
 
     const byTitle = await request(testApp()).get(`/e/${big.slug}?q=salt+ROADSTER`);
     expect(numbersOn(byTitle.text)).toEqual([4321]);
-    expect(byTitle.text).toContain('1 car match “salt ROADSTER”');
+    expect(byTitle.text).toContain('1 car matches “salt ROADSTER”');
     expect(byTitle.text).toMatch(/<input id="find-q" type="search"[^>]* name="q"[^>]* value="salt ROADSTER"\/>/);
 
     const byNumber = await request(testApp()).get(`/e/${big.slug}?q=4321&class=`);

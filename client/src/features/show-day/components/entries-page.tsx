@@ -3,6 +3,7 @@ import { Link, useParams } from 'react-router-dom';
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { ENTRY_STATUSES, ENTRY_STATUS_LABELS } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
+import { formatInZone } from '@shared/calc/time-zone';
 import { waitingListWords } from '@shared/words';
 import { PAYMENT_ISSUE_SHORT_LABEL, PAYMENT_STATE_LABELS, type EntryTableQuery, type EntryTableRow, type EntryTableSort } from '@shared/schemas/show-day';
 import { useShow } from '../api/get-show';
@@ -62,7 +63,7 @@ export function EntriesPage() {
           return r.paymentIssues.length ? <>{text} <strong className="text-danger">· {PAYMENT_ISSUE_SHORT_LABEL}</strong></> : text;
         },
       }),
-      column.accessor('checkedInAt', { header: 'Arrived', enableSorting: false, cell: (c) => (c.getValue() ? new Date(c.getValue()!).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' }) : '') }),
+      column.accessor('checkedInAt', { header: 'Arrived', enableSorting: false, cell: (c) => (c.getValue() ? formatInZone(c.getValue()!, timeZone, { timeStyle: 'short' }) : '') }), // on the show's clock
       column.accessor('waitingPosition', { header: 'Waiting', enableSorting: false, cell: (c) => waitingListWords(c.row.original, timeZone) }),
     ],
     [timeZone],

@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useState } from 'react';
-import { useParams } from 'react-router-dom';
+import { Link, useParams } from 'react-router-dom';
 import { formatMoney } from '@shared/calc/money';
 import { CHECK_IN_UNDO_SECONDS, PAYMENT_STATE_LABELS, type GateCard } from '@shared/schemas/show-day';
 import { useShow } from '../api/get-show';
@@ -192,6 +192,12 @@ export function GatePage() {
           {online && counts.data ? <WalkUpForm eventId={eventId} classes={counts.data.classes} fee={show.data && show.data.entryFee > 0 ? { amount: show.data.entryFee, currency: show.data.currency } : null} onEntered={(c) => { setCard(c); setJustChecked(true); setNotFound(null); }} /> : null}
           {online ? <Counts eventId={eventId} /> : null}
         </>
+      ) : null}
+      {/* The way to another show's gate, or out: the gate sits outside the app's menu. Its screens need the signal. */}
+      {online ? (
+        <p className="mt-8">
+          <Link to="/shows" className="inline-flex min-h-11 items-center underline">Your shows</Link>
+        </p>
       ) : null}
     </div>
   );

@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import type { EventDetail } from '@shared/schemas/show';
 import { ADDRESS_HASH_SHOWN } from '@shared/schemas/peoples-choice';
-import { countOf, formatDateTime } from '@shared/words';
+import { countOf } from '@shared/words';
+import { formatInZone } from '@shared/calc/time-zone';
 import { Button } from '@client/components/ui/button';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { Notice } from '@client/components/ui/notice';
@@ -48,9 +49,9 @@ export function PeoplesChoicePanel({ show }: { show: EventDetail }) {
     >
       <div className="space-y-5">
         {pc.open ? (
-          <Notice tone="ok">Voting is open{pc.openedAt ? `, since ${formatDateTime(pc.openedAt)}` : ''}: each entered car’s public page has a vote button. One vote per visitor.</Notice>
+          <Notice tone="ok">Voting is open{pc.openedAt ? `, since ${formatInZone(pc.openedAt, show.timeZone, { dateStyle: 'medium', timeStyle: 'short' })}` : ''}: each entered car’s public page has a vote button. One vote per visitor.</Notice>
         ) : pc.mayOpen ? (
-          <p className="text-graphite">Voting is closed{pc.closedAt ? ` (closed ${formatDateTime(pc.closedAt)})` : ''}. Open it and visitors vote on the public page of each car, one vote each.</p>
+          <p className="text-graphite">Voting is closed{pc.closedAt ? ` (closed ${formatInZone(pc.closedAt, show.timeZone, { dateStyle: 'medium', timeStyle: 'short' })})` : ''}. Open it and visitors vote on the public page of each car, one vote each.</p>
         ) : (
           <p className="text-graphite">Voting can be opened on show day and while the show is being judged.</p>
         )}
