@@ -37,7 +37,8 @@ const clean = (values: BrakesSection) => {
     if (sizes.length) e.pistonDiametersMm = sizes;
     else delete e.pistonDiametersMm;
   }
-  return out;
+  // An end left with nothing in it says nothing (else an untouched panel would count as an edit).
+  return cleanValues(out) as BrakesSection;
 };
 const FIELDS = Object.keys(BrakesSectionSchema.shape);
 
