@@ -1,5 +1,5 @@
 import { expect } from 'vitest';
-import { randomBytes, createHash } from 'node:crypto';
+import { randomBytes, randomUUID, createHash } from 'node:crypto';
 import { apiClient, type ApiClient } from '../../support/api-client';
 import { createUser } from '../../support/factories';
 import { createBuild, createFullBuild } from '../../support/build-factory';
@@ -11,6 +11,7 @@ import { EventInvitation } from '@server/models/event-invitation';
 import { ManualTieBreak } from '@server/models/manual-tie-break';
 import { EventMembership } from '@server/models/event-membership';
 import { Entry } from '@server/models/entry';
+import { CardPrint } from '@server/models/card-print';
 import { CaughtMail } from '@server/models/caught-mail';
 import { receiveVisitorQuestion } from '@server/services/builds/build-questions';
 
@@ -162,6 +163,12 @@ export async function buildFixture() {
   expect(print.status, JSON.stringify(print.body)).toBe(202);
   const bPrint = await b.organiser.client.post(`/api/events/${b.eventId}/card-prints`, {});
   expect(bPrint.status).toBe(202);
+  // Held as running by a worker that is never stale, so a card worker another test file started in this
+  // process neither takes these prints nor finishes them: every cell sees the same print, not yet ready.
+  await CardPrint.update(
+    { status: 'running', workerToken: randomUUID(), heldBy: 'authorization-matrix', heartbeatAt: new Date(Date.now() + 365 * 86400_000) },
+    { where: { id: [print.body.print.id, bPrint.body.print.id] } },
+  );
 
   const criteriaOf = async (client: ApiClient, eventId: number) => ((await client.get(`/api/events/${eventId}`)).body.event.criteria as Array<{ id: number }>).map((c) => c.id);
   const criteria = await criteriaOf(organiser.client, a.eventId);

@@ -18,7 +18,7 @@ export const JUDGING_ROWS: Row[] = [
   { route: 'POST /api/events/:id/card-prints', rule: 'showManage', ok: 200, body: () => ({}), note: 'the fixture started one already: answered with that print' },
   { route: 'GET /api/events/:id/card-prints/latest', rule: 'showManage', ok: 200 },
   { route: 'GET /api/events/:id/card-prints/:printId', rule: 'showManage', ok: 200, path: (f) => A(f, `/card-prints/${f.printId}`) },
-  { route: 'GET /api/events/:id/card-prints/:printId/cards.pdf', rule: 'showManage', ok: 409, path: (f) => A(f, `/card-prints/${f.printId}/cards.pdf`), note: 'no worker prints in this file: the file is not ready' },
+  { route: 'GET /api/events/:id/card-prints/:printId/cards.pdf', rule: 'showManage', ok: 409, path: (f) => A(f, `/card-prints/${f.printId}/cards.pdf`), note: 'the fixture holds the print as running: the file is not ready' },
   { route: 'POST /api/events/:id/reminders', rule: 'showManage', ok: 409, note: 'reminders go before the show day, not while it is judged' },
   { route: 'GET /api/entries/:id/card.pdf', rule: 'entryOwnerOrOrganiser', ok: 200 },
   { route: 'GET /api/events/:id/peoples-choice', rule: 'showManage', ok: 200 },
