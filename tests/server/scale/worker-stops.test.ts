@@ -140,8 +140,11 @@ describe('job workers that stop in the middle of a bulk print', () => {
     const { print, pages } = await printFinished(organiser, show, printId);
     const answers = await downloads.stop();
 
-    // The survivor finished it, drawing only what the killed worker had not cached.
-    expect((await CardPrint.findByPk(printId))!.heldBy).toMatch(new RegExp(`:${survivor.pid}$`));
+    // A live worker finished it (the survivor, or on a slow machine the third, started meanwhile), drawing only what the killed one had not cached.
+    const finisher = (await CardPrint.findByPk(printId))!.heldBy;
+    expect(finisher).not.toMatch(new RegExp(`:${victim.pid}$`));
+    const thirdPid = (await third!).pid;
+    expect([survivor.pid, thirdPid].map((pid) => `:${pid}`).some((end) => finisher?.endsWith(end)), `finished by ${finisher}`).toBe(true);
     expect(print).toMatchObject({ status: 'done', done: CARS, total: CARS });
     expect(print.rendered).toBeGreaterThan(0);
     expect(print.rendered).toBeLessThanOrEqual(CARS - mid.done);
