@@ -1,20 +1,3 @@
-import { afterAll, beforeAll, describe, it } from 'vitest';
-import { cpuSecondsSince, hostileSetup, writeRoutesOf } from '../../support/hostile-attack';
+import { describeHostileInput } from '../../support/hostile-file';
 
-// Hostile input on every write route of the shows group, made from each route's own zod schema
-// (tests/support/hostile-attack.ts): never a 5xx, always the error shape naming the field, no row changed.
-
-let hostile: Awaited<ReturnType<typeof hostileSetup>>;
-beforeAll(async () => {
-  hostile = await hostileSetup();
-});
-afterAll(async () => {
-  console.log(`hostile input, shows: ${hostile.tally.routes} write routes (${hostile.tally.variants} with their path variants), ${hostile.tally.cases} requests, ${cpuSecondsSince(hostile.cpuAtStart).toFixed(1)} s of CPU in this process`);
-  await hostile.close();
-});
-
-describe('hostile input: shows', () => {
-  it.each(writeRoutesOf('shows').map((r) => [r.key, r] as const))('%s', async (_key, route) => {
-    await hostile.attack(route);
-  });
-});
+describeHostileInput('shows');
