@@ -5,7 +5,7 @@
 import { buildClientIfStale } from '@server/cli/build-client';
 import { startBenchServer, getOnce, BROWSER_HEADERS, type BenchServer } from './lib/bench-server';
 import { visit, type Visit } from './lib/load';
-import { startStaff, type StaffOrder } from './lib/staff-client';
+import { startMorningStaff, type StaffOrder } from './lib/staff-client';
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { launch, measureWeakLink, type WeakTiming } from './lib/weak';
@@ -49,16 +49,7 @@ async function main() {
   const server = await startBenchServer('placard_bench_morning', { sizes: SIZES, morning: { entries: 400, checkedIn: 150, judges: 10 } });
   const s = server.scenario;
   const show = s.morning!;
-  const staff = await startStaff({
-    base: server.base,
-    eventId: show.id,
-    password: s.password,
-    judges: s.judges.map((j) => j.email),
-    gate: s.gate.email,
-    judgedEntryIds: show.judgedEntryIds,
-    criteria: show.criterionIds.map((id, i) => ({ id, maxPoints: [10, 10, 5][i]! })),
-    expectedNumbers: show.expectedNumbers,
-  });
+  const staff = await startMorningStaff(server);
   const rows: Row[] = [];
   const notes: string[] = [];
   try {

@@ -7,6 +7,7 @@ import { fork, type ChildProcess } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
 import { fileURLToPath } from 'node:url';
 import { remoteClient, type RemoteClient } from '../../support/remote-client';
+import type { Scenario } from './bench-server';
 
 export type StaffSetup = { base: string; eventId: number; password: string; judges: string[]; gate: string; judgedEntryIds: number[]; criteria: Array<{ id: number; maxPoints: number }>; expectedNumbers: number[] };
 export type StaffOrder = {
@@ -142,3 +143,18 @@ async function staffMain(): Promise<void> {
 }
 
 if (process.argv.includes('--staff')) await staffMain();
+
+/** The judges and the gate of the bench server's show-morning scenario, signed in and ready to work. */
+export function startMorningStaff({ base, scenario: s }: { base: string; scenario: Scenario }) {
+  const show = s.morning!;
+  return startStaff({
+    base,
+    eventId: show.id,
+    password: s.password,
+    judges: s.judges.map((j) => j.email),
+    gate: s.gate.email,
+    judgedEntryIds: show.judgedEntryIds,
+    criteria: show.criterionIds.map((id, i) => ({ id, maxPoints: [10, 10, 5][i]! })),
+    expectedNumbers: show.expectedNumbers,
+  });
+}
