@@ -35,7 +35,8 @@ export const BROWSER_HEADERS = { 'accept-encoding': 'gzip, deflate, br', 'accept
 export async function startBenchServer(database: string, spec: ScenarioSpec, env: Record<string, string> = {}): Promise<BenchServer> {
   let output = '';
   const child = fork(fileURLToPath(import.meta.url), ['--serve'], {
-    execArgv: ['--import', 'tsx'],
+    // BENCH_CPU_PROF=<folder>: the server writes a V8 CPU profile there when it stops (open it in Chromium's DevTools).
+    execArgv: ['--import', 'tsx', ...(process.env.BENCH_CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_CPU_PROF}`] : [])],
     env: {
       ...process.env,
       TSX_TSCONFIG_PATH: 'server/tsconfig.runtime.json',

@@ -1,0 +1,34 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { gunzipSync, inflateRawSync } from 'node:zlib';
+import { joinGzip, joinPlain, piecesOf, storedBlocks } from '@server/pages/page-pieces';
+
+// A page with holes, filled per visitor: what the browser inflates must be exactly the page with its
+// pieces in place. Node's own gunzip (zlib) is the reference decoder.
+describe('a cached page joined with a visitor’s pieces', () => {
+  it('inflates to the plain page for any page, marks and pieces, long pieces included', () => {
+    const text = fc.string({ unit: 'binary', maxLength: 400 });
+    fc.assert(
+      fc.property(fc.array(text, { minLength: 1, maxLength: 4 }), fc.array(fc.oneof(text, fc.constant('x'.repeat(70_000))), { minLength: 3, maxLength: 3 }), (between, fills) => {
+        const marks = ['<!--hole-a-->', '<!--hole-b-->', '<!--hole-c-->'];
+        const html = between.map((part, i) => part + (i < between.length - 1 ? marks[i % 3] : '')).join('');
+        const pieces = piecesOf(html, marks);
+        const fill = (mark: string) => fills[marks.indexOf(mark)]!;
+        const plain = joinPlain(pieces, fill);
+        expect(gunzipSync(joinGzip(pieces, fill)).equals(plain)).toBe(true);
+        expect(plain.toString('utf8')).toBe(html.replace(/<!--hole-([abc])-->/g, (_, k: string) => fills['abc'.indexOf(k)]!));
+      }),
+      { numRuns: 60 },
+    );
+  });
+
+  it('writes a piece as stored blocks of at most 65,535 bytes that a decoder reads back as they are', () => {
+    const piece = Buffer.from('é'.repeat(40_000)); // 80,000 bytes: two blocks
+    const blocks = storedBlocks(piece);
+    expect(blocks.filter((_, i) => i % 2 === 1).map((b) => b.length)).toEqual([65_535, 14_465]);
+    // A final empty stored block (header 0x01) ends the stream for the check.
+    const stream = Buffer.concat([...blocks, Buffer.from([1, 0, 0, 0xff, 0xff])]);
+    expect(inflateRawSync(stream).equals(piece)).toBe(true);
+    expect(storedBlocks(Buffer.alloc(0))).toEqual([]);
+  });
+});
