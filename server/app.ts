@@ -12,6 +12,7 @@ import { passport } from './auth/passport';
 import { sessionMiddleware } from './session-store';
 import { csrfProtection } from './middlewares/csrf';
 import { apiLimiter } from './middlewares/rate-limits';
+import { visitorTurns } from './middlewares/visitor-turns';
 import { emptyBodyIsNoBody, jsonBodiesOnly, noteEmptyBody } from './middlewares/body-type';
 import { apiNotFound, errorHandler } from './middlewares/error-handler';
 import { healthRouter } from './routes/health';
@@ -113,6 +114,7 @@ export function createApp(): Express {
   const app = express();
   app.disable('x-powered-by');
   if (config.trustProxy) app.set('trust proxy', 1);
+  app.use(visitorTurns); // first: a visitor's request costs nothing more until its turn
   app.use(
     helmet({
       contentSecurityPolicy: {

@@ -27,6 +27,9 @@ const EnvSchema = z.object({
   PUBLIC_DB_MAX_WAITING: z.coerce.number().int().min(0).max(100_000).default(1000),
   /** The public page cache's size per process (rendered pages in three encodings). */
   PAGE_CACHE_MAX_MB: z.coerce.number().min(1).max(4096).default(64),
+  /** Visitors' requests (anything but the signed-in API) a process starts per turn of its event loop, and how many may wait. */
+  VISITOR_REQUESTS_PER_TURN: z.coerce.number().int().min(1).max(10_000).default(4),
+  VISITOR_QUEUE_MAX: z.coerce.number().int().min(1).max(1_000_000).default(5000),
   /** How often each process merges its API request counters into PostgreSQL (shared by every process). */
   RATE_LIMIT_SYNC_MS: z.coerce.number().int().min(50).max(60_000).default(1000),
   SESSION_SECRET: z.string().min(16).optional(),
@@ -198,6 +201,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     publicDbMaxWaiting: e.PUBLIC_DB_MAX_WAITING,
     pageCacheMaxBytes: Math.round(e.PAGE_CACHE_MAX_MB * 1024 * 1024),
     rateLimitSyncMs: e.RATE_LIMIT_SYNC_MS,
+    /**
+     * Visitors take turns on the event loop (`visitorTurns`): this many start per turn, after which the loop
+     * answers whatever signed-in work became ready; more than `visitorQueueMax` waiting get a 503 at once.
+     */
+    visitorRequestsPerTurn: e.VISITOR_REQUESTS_PER_TURN,
+    visitorQueueMax: e.VISITOR_QUEUE_MAX,
     /**
      * How long one statement of a request may run: PostgreSQL cancels it then (`statement_timeout`), and the
      * client gives up a moment later if the server does not answer at all (`query_timeout`). Migrations and

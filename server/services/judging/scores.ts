@@ -91,15 +91,71 @@ export async function submitScores(eventId: number, judgeId: number, input: Scor
     const deviceId = input.deviceId ?? null;
     const order = (item: { deviceTime: string; sequence?: number | undefined }) => ({ deviceId, deviceSeq: deviceId ? (item.sequence ?? 0) : new Date(item.deviceTime).getTime() });
     const applied: ScoreApplied[] = [];
-    for (const s of input.scores) {
-      const line = { eventId, judgeId, entryId: s.entryId, criterionId: s.criterionId };
-      applied.push(await record(UPSERT_SCORE, HOLDER_OF_SCORE, { ...line, points: s.points, comment: s.comment, deviceTime: new Date(s.deviceTime), clientId: s.clientId, ...order(s) }, transaction));
-    }
+    const lines = input.scores.map((s) => ({ entryId: s.entryId, criterionId: s.criterionId, points: s.points, comment: s.comment, deviceTime: new Date(s.deviceTime), clientId: s.clientId, ...order(s) }));
+    if (canRecordAtOnce(lines)) applied.push(...(await recordScoresAtOnce(eventId, judgeId, deviceId, lines, transaction)));
+    else for (const line of lines) applied.push(await record(UPSERT_SCORE, HOLDER_OF_SCORE, { eventId, judgeId, ...line }, transaction));
     for (const n of input.notes) {
       const line = { eventId, judgeId, entryId: n.entryId };
       applied.push(await record(UPSERT_NOTE, HOLDER_OF_NOTE, { ...line, comment: n.comment, deviceTime: new Date(n.deviceTime), clientId: n.clientId, ...order(n) }, transaction));
     }
     return applied;
+  });
+}
+
+type ScoreLine = { entryId: number; criterionId: number; points: number; comment: string; deviceTime: Date; clientId: string; deviceId: string | null; deviceSeq: number };
+
+/** One statement does a whole sheet only when no two lines share an id or a box (then line order cannot matter). */
+function canRecordAtOnce(lines: ScoreLine[]): boolean {
+  const ids = new Set(lines.map((l) => l.clientId));
+  const boxes = new Set(lines.map((l) => `${l.entryId}|${l.criterionId}`));
+  return lines.length > 1 && ids.size === lines.length && boxes.size === lines.length;
+}
+
+/*
+ * What `record` does line by line, for every line of a sheet in one statement (one round trip, however
+ * long the sheet): receipts for the new ids, the upsert for those, and for each replay the holder of its
+ * box as it stood before this send (the statement's snapshot; no other line of the send wrote that box).
+ */
+const RECORD_SCORES_AT_ONCE = `
+  WITH input AS (
+    SELECT * FROM jsonb_to_recordset(CAST(:lines AS jsonb))
+      AS x(i int, entry_id int, criterion_id int, points int, comment text, device_time timestamptz, client_id uuid, device_seq bigint)
+  ), fresh AS (
+    INSERT INTO score_receipts (client_id, judge_id, received_at)
+    SELECT client_id, :judgeId, now() FROM input
+    ON CONFLICT DO NOTHING RETURNING client_id
+  ), written AS (
+    INSERT INTO scores (event_id, entry_id, judge_id, criterion_id, points, comment, device_time, client_id, device_id, device_seq, received_at, created_at, updated_at)
+    SELECT :eventId, entry_id, :judgeId, criterion_id, points, comment, device_time, client_id, CAST(:deviceId AS uuid), device_seq, now(), now(), now()
+    FROM input WHERE client_id IN (SELECT client_id FROM fresh)
+    ON CONFLICT (entry_id, judge_id, criterion_id) DO UPDATE
+      SET points = EXCLUDED.points, comment = EXCLUDED.comment, device_time = EXCLUDED.device_time, client_id = EXCLUDED.client_id,
+          device_id = EXCLUDED.device_id, device_seq = EXCLUDED.device_seq, received_at = now(), updated_at = now()
+      ${LATER_THAN_STORED('scores')}
+    RETURNING client_id
+  )
+  SELECT input.i, fresh.client_id IS NOT NULL AS "fresh", written.client_id IS NOT NULL AS "applied",
+         CAST(holder.client_id AS text) AS "holderClientId", CAST(holder.device_id AS text) AS "holderDeviceId"
+  FROM input
+  LEFT JOIN fresh ON fresh.client_id = input.client_id
+  LEFT JOIN written ON written.client_id = input.client_id
+  LEFT JOIN scores holder ON fresh.client_id IS NULL AND holder.entry_id = input.entry_id AND holder.judge_id = :judgeId AND holder.criterion_id = input.criterion_id
+  ORDER BY input.i`;
+
+async function recordScoresAtOnce(eventId: number, judgeId: number, deviceId: string | null, lines: ScoreLine[], transaction: Transaction): Promise<ScoreApplied[]> {
+  const json = JSON.stringify(lines.map((l, i) => ({ i, entry_id: l.entryId, criterion_id: l.criterionId, points: l.points, comment: l.comment, device_time: l.deviceTime.toISOString(), client_id: l.clientId, device_seq: l.deviceSeq })));
+  const rows = await sequelize.query<{ i: number; fresh: boolean; applied: boolean; holderClientId: string | null; holderDeviceId: string | null }>(RECORD_SCORES_AT_ONCE, {
+    replacements: { lines: json, eventId, judgeId, deviceId },
+    type: QueryTypes.SELECT,
+    transaction,
+  });
+  // PostgreSQL gives uuids back in lower case; a phone's id is answered as the phone wrote it.
+  const lower = (id: string | null) => id?.toLowerCase() ?? null;
+  return rows.map((r): ScoreApplied => {
+    const clientId = lines[r.i]!.clientId;
+    if (r.fresh) return { clientId, applied: r.applied };
+    const replaced = r.holderClientId !== null && r.holderClientId !== lower(clientId) && r.holderDeviceId !== lower(deviceId);
+    return { clientId, applied: false, ...(replaced ? { replacedByOtherDevice: true as const } : {}) };
   });
 }
 
