@@ -27,6 +27,8 @@ const EnvSchema = z.object({
   PUBLIC_DB_MAX_WAITING: z.coerce.number().int().min(0).max(100_000).default(1000),
   /** The public page cache's size per process (rendered pages in three encodings). */
   PAGE_CACHE_MAX_MB: z.coerce.number().min(1).max(4096).default(64),
+  /** Old-generation growth past live memory before V8 collects, in a web process (0: V8's own factor). */
+  HEAP_GROWING_PERCENT: z.coerce.number().int().min(0).max(300).default(20),
   /** Visitors' requests (anything but the signed-in API) a process starts per turn of its event loop, and how many may wait. */
   VISITOR_REQUESTS_PER_TURN: z.coerce.number().int().min(1).max(10_000).default(4),
   VISITOR_QUEUE_MAX: z.coerce.number().int().min(1).max(1_000_000).default(5000),
@@ -206,6 +208,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
      * answers whatever signed-in work became ready; more than `visitorQueueMax` waiting get a 503 at once.
      */
     visitorRequestsPerTurn: e.VISITOR_REQUESTS_PER_TURN,
+    /** `boundHeapGrowth()` (heap-growth.ts): the old generation is collected once it is this much over what is live. */
+    heapGrowingPercent: e.HEAP_GROWING_PERCENT,
     visitorQueueMax: e.VISITOR_QUEUE_MAX,
     /**
      * How long one statement of a request may run: PostgreSQL cancels it then (`statement_timeout`), and the

@@ -27,7 +27,7 @@ export type Scenario = {
   buildCodes: string[];
 };
 export type Snapshot = { staticPath: string; bytes: number; encodedBytes: number; encoding: string };
-export type BenchServer = { base: string; pid: number; scenario: Scenario; child: ChildProcess; snapshot: (pagePath: string) => Promise<Snapshot>; stop: () => Promise<void> };
+export type BenchServer = { base: string; pid: number; scenario: Scenario; child: ChildProcess; snapshot: (pagePath: string) => Promise<Snapshot>; memory: () => Promise<NodeJS.MemoryUsage>; stop: () => Promise<void> };
 
 /** A browser's request headers for a page (accept-encoding as Chromium sends it, less zstd, which the server does not offer). */
 export const BROWSER_HEADERS = { 'accept-encoding': 'gzip, deflate, br', 'accept-language': 'en-GB,en;q=0.9', accept: 'text/html,application/xhtml+xml' };
@@ -36,7 +36,8 @@ export async function startBenchServer(database: string, spec: ScenarioSpec, env
   let output = '';
   const child = fork(fileURLToPath(import.meta.url), ['--serve'], {
     // BENCH_CPU_PROF=<folder>: the server writes a V8 CPU profile there when it stops (open it in Chromium's DevTools).
-    execArgv: ['--import', 'tsx', ...(process.env.BENCH_CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_CPU_PROF}`] : [])],
+    // BENCH_NODE_FLAGS: more flags for the server's node (V8 settings to try, say), separated by spaces.
+    execArgv: ['--import', 'tsx', ...(process.env.BENCH_CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_CPU_PROF}`] : []), ...(process.env.BENCH_NODE_FLAGS?.split(' ').filter(Boolean) ?? [])],
     env: {
       ...process.env,
       TSX_TSCONFIG_PATH: 'server/tsconfig.runtime.json',
@@ -75,6 +76,7 @@ export async function startBenchServer(database: string, spec: ScenarioSpec, env
     scenario: ready.scenario,
     child,
     snapshot: (pagePath) => ask<Snapshot>('snapshot', pagePath),
+    memory: () => ask<NodeJS.MemoryUsage>('memory', null),
     stop: () =>
       new Promise<void>((resolve) => {
         if (child.exitCode !== null || child.signalCode !== null) return resolve();
@@ -133,6 +135,8 @@ async function serve(): Promise<void> {
   const { pageChangeHandlers } = await import('@server/pages/page-listener');
   const { publicPageCache } = await import('@server/pages/page-cache');
   const { config } = await import('@server/config');
+  const { boundHeapGrowth } = await import('@server/heap-growth');
+  boundHeapGrowth(); // as listen() does under npm start
   // As under npm start: this process hears committed changes, so its cached pages are trusted until one arrives.
   await new ChannelListener({ connectionString: config.databaseUrl, ...pageChangeHandlers(publicPageCache) }).start();
   const dir = mkdtempSync(path.join(tmpdir(), 'placard-bench-static-'));
@@ -145,6 +149,8 @@ async function serve(): Promise<void> {
 
   let files = 0;
   const handlers: Record<string, (args: never) => Promise<unknown>> = {
+    /** The server's own memory figures (RSS, V8's heap, buffers outside it), for telling what grew. */
+    memory: async () => process.memoryUsage(),
     /** The page as a browser gets it, kept as a static file: the plain bytes and the compressed ones the page route sent. */
     snapshot: async (pagePath: string) => {
       const plain = await getOnce(`${base}${pagePath}`, { ...BROWSER_HEADERS, 'accept-encoding': 'identity' });
