@@ -13,7 +13,7 @@ import type { CachedPage, VoteSlot } from './page-cache';
 import { cachedPage, sendCached } from './cached-page';
 import { joinGzip, joinPlain, type PagePieces } from './page-pieces';
 import { pageTags } from './page-dependencies';
-import { encodingFor } from './send-html';
+import { encodingsAccepted } from './send-html';
 import { OSWALD_URL } from './page-styles';
 import { config } from '../config';
 import { formTokenFor, readVoterCookie, voterOf, votesCast } from './voter';
@@ -112,12 +112,12 @@ function sendWithVoteBoxes(req: Request, res: Response, page: CachedPage, votes:
     // vote carry its real Origin for the check, and still tells other sites nothing.
     'Referrer-Policy': 'same-origin',
   });
-  const encoding = encodingFor(req);
+  const takes = encodingsAccepted(req);
   res.type('html');
   // gzip joins the page's parts compressed once with the boxes; a browser that takes only brotli gets it made now.
-  if (encoding !== 'identity' && req.acceptsEncodings('gzip')) return void res.set('Content-Encoding', 'gzip').end(joinGzip(pieces, fill));
+  if (takes.gzip) return void res.set('Content-Encoding', 'gzip').end(joinGzip(pieces, fill));
   const html = joinPlain(pieces, fill);
-  if (encoding === 'br') return void res.set('Content-Encoding', 'br').end(brotliCompressSync(html, { params: { [zlib.BROTLI_PARAM_QUALITY]: 5 } }));
+  if (takes.br) return void res.set('Content-Encoding', 'br').end(brotliCompressSync(html, { params: { [zlib.BROTLI_PARAM_QUALITY]: 5 } }));
   res.end(html);
 }
 

@@ -12,11 +12,24 @@ import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
  * browsers list "gzip, deflate, br" with equal weight and brotli is the smaller. A request naming no
  * encoding at all gets the plain bytes: a bare client (curl, a script) may not decompress.
  */
+/** What an Accept-Encoding header takes, by header: browsers send a handful of different ones, so each is negotiated once. */
+const accepted = new Map<string, { br: boolean; gzip: boolean }>();
+
+/** Whether the request takes brotli and gzip (Express's negotiation: q-values, `*` and `identity;q=0` included). */
+export function encodingsAccepted(req: Request): { br: boolean; gzip: boolean } {
+  const header = req.get('accept-encoding');
+  if (!header) return { br: false, gzip: false };
+  let known = accepted.get(header);
+  if (!known) {
+    if (accepted.size >= 256) accepted.clear(); // odd headers by the thousand cannot grow it
+    accepted.set(header, (known = { br: Boolean(req.acceptsEncodings('br')), gzip: Boolean(req.acceptsEncodings('gzip')) }));
+  }
+  return known;
+}
+
 export function encodingFor(req: Request): 'br' | 'gzip' | 'identity' {
-  if (!req.get('accept-encoding')) return 'identity';
-  if (req.acceptsEncodings('br')) return 'br';
-  if (req.acceptsEncodings('gzip')) return 'gzip';
-  return 'identity';
+  const { br, gzip } = encodingsAccepted(req);
+  return br ? 'br' : gzip ? 'gzip' : 'identity';
 }
 
 export function sendHtml(req: Request, res: Response, html: string, cacheControl: string): void {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { gunzipSync, inflateRawSync } from 'node:zlib';
-import { joinGzip, joinPlain, piecesOf, storedBlocks } from '@server/pages/page-pieces';
+import { crc32, gunzipSync, inflateRawSync } from 'node:zlib';
+import { crc32Combine, joinGzip, joinPlain, piecesOf, storedBlocks } from '@server/pages/page-pieces';
 
 // A page with holes, filled per visitor: what the browser inflates must be exactly the page with its
 // pieces in place. Node's own gunzip (zlib) is the reference decoder.
@@ -30,5 +30,21 @@ describe('a cached page joined with a visitor’s pieces', () => {
     const stream = Buffer.concat([...blocks, Buffer.from([1, 0, 0, 0xff, 0xff])]);
     expect(inflateRawSync(stream).equals(piece)).toBe(true);
     expect(storedBlocks(Buffer.alloc(0))).toEqual([]);
+  });
+});
+
+describe('CRC-32 of joined bytes from the parts’ own CRCs', () => {
+  it('equals zlib’s CRC-32 of the joined bytes, empty parts and long ones included', () => {
+    const bytes = fc.oneof(fc.uint8Array({ maxLength: 300 }), fc.constant(new Uint8Array(70_000).fill(7)));
+    fc.assert(
+      fc.property(bytes, bytes, (a, b) => {
+        const [x, y] = [Buffer.from(a), Buffer.from(b)];
+        const crcOf = (buf: Buffer) => (buf.length ? crc32(buf) : 0);
+        expect(crc32Combine(crcOf(x), crcOf(y), y.length)).toBe(crcOf(Buffer.concat([x, y])));
+      }),
+      { numRuns: 200 },
+    );
+    // CRC-32/ISO-HDLC's check value, "123456789" → CBF43926 (the CRC catalogue's, from memory), joined from "1234" and "56789".
+    expect(crc32Combine(crc32('1234'), crc32('56789'), 5).toString(16)).toBe('cbf43926');
   });
 });
