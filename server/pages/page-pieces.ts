@@ -89,8 +89,11 @@ export function storedBlocks(bytes: Buffer): Buffer[] {
   return out;
 }
 
-/** The same page as one gzip member: the fixed parts as compressed once, each filled hole as stored blocks. */
-export function joinGzip(p: PagePieces, fill: (mark: string) => string): Buffer {
+/**
+ * The same page as one gzip member, in the chunks to write one after another (no copy of the page per
+ * response): the fixed parts as compressed once, each filled hole as stored blocks.
+ */
+export function gzipChunks(p: PagePieces, fill: (mark: string) => string): { chunks: Buffer[]; length: number } {
   const out: Buffer[] = [GZIP_HEADER, p.deflated[0]!];
   let crc = p.crcs[0]!;
   let size = p.parts[0]!.length;
@@ -106,5 +109,8 @@ export function joinGzip(p: PagePieces, fill: (mark: string) => string): Buffer 
   trailer.writeUInt32LE(crc >>> 0, 0);
   trailer.writeUInt32LE(size >>> 0, 4);
   out.push(FINAL_BLOCK, trailer);
-  return Buffer.concat(out);
+  return { chunks: out, length: out.reduce((n, b) => n + b.length, 0) };
 }
+
+/** The same, as one buffer. */
+export const joinGzip = (p: PagePieces, fill: (mark: string) => string): Buffer => Buffer.concat(gzipChunks(p, fill).chunks);

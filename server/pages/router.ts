@@ -11,7 +11,7 @@ import { presentBuildOverTime } from '../presenters/build-log';
 import { NOT_FOUND_HTML, renderPublicBuildPage } from './public-build-page';
 import type { CachedPage, VoteSlot } from './page-cache';
 import { cachedPage, sendCached } from './cached-page';
-import { joinGzip, joinPlain, type PagePieces } from './page-pieces';
+import { gzipChunks, joinPlain, type PagePieces } from './page-pieces';
 import { pageTags } from './page-dependencies';
 import { encodingsAccepted } from './send-html';
 import { OSWALD_URL } from './page-styles';
@@ -115,7 +115,13 @@ function sendWithVoteBoxes(req: Request, res: Response, page: CachedPage, votes:
   const takes = encodingsAccepted(req);
   res.type('html');
   // gzip joins the page's parts compressed once with the boxes; a browser that takes only brotli gets it made now.
-  if (takes.gzip) return void res.set('Content-Encoding', 'gzip').end(joinGzip(pieces, fill));
+  if (takes.gzip) {
+    const { chunks, length } = gzipChunks(pieces, fill);
+    res.set({ 'Content-Encoding': 'gzip', 'Content-Length': String(length) });
+    res.cork(); // one write to the socket, without joining the page into a new buffer first
+    for (const chunk of chunks) res.write(chunk);
+    return void res.end();
+  }
   const html = joinPlain(pieces, fill);
   if (takes.br) return void res.set('Content-Encoding', 'br').end(brotliCompressSync(html, { params: { [zlib.BROTLI_PARAM_QUALITY]: 5 } }));
   res.end(html);
