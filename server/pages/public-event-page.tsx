@@ -137,7 +137,8 @@ function Entries({ e, listing }: { e: PublicEvent; listing: PublicEntryListing }
               {c.name}
             </a>
             <span className="muted">{countOf(perClass[c.id] ?? 0, 'car')}</span>
-            <span className="places">{placesLeftWords(c.placesLeft)}</span>
+            {/* Places matter only while the show takes entries: afterwards "no limit" would read as an invitation. */}
+            {e.status === 'registration_open' && <span className="places">{placesLeftWords(c.placesLeft)}</span>}
           </li>
         ))}
       </ul>

@@ -45,4 +45,12 @@ describe('before an owner pays: the refund rule and the places left in each clas
     expect(page).toMatch(/>Open class<\/a>.*?No limit on places/);
     expect(page).toMatch(/>Small class<\/a>.*?1 place left/);
   });
+
+  it('says nothing of places once the show no longer takes entries', async () => {
+    const { organiser, eventId, slug } = await showWithClasses({ classes: [{ name: 'Open class' }, { name: 'Small class', capacity: 1 }] });
+    expect((await organiser.client.post(`/api/events/${eventId}/lifecycle`, { action: 'close_registration' })).status).toBe(200);
+    const page = (await request(testApp()).get(`/e/${slug}`)).text;
+    expect(page).toMatch(/>Small class<\/a>/);
+    expect(page).not.toMatch(/No limit on places|place left|places left|waiting list/);
+  });
 });
