@@ -1,5 +1,5 @@
 import { renderToStaticMarkup } from 'react-dom/server';
-import { formatInZone } from '@shared/calc/time-zone';
+import { formatInZone, spanInZone } from '@shared/calc/time-zone';
 import { PUBLIC_EVENT_ENTRIES_PER_PAGE, type PublicEntryLine, type PublicEntryListing, type PublicEvent, type PublicEventPageQuery } from '@shared/schemas/public-event';
 import { countOf } from '@shared/words';
 import { placesLeftWords, refundRuleWords } from '@shared/entry-terms-words';
@@ -225,7 +225,7 @@ function Page({ e, listing }: { e: PublicEvent; listing: PublicEntryListing }) {
           <dl className="meta">
             <dt>When</dt>
             <dd>
-              {when(e, e.startsAt)} – {when(e, e.endsAt)} <span className="muted">({e.timeZone})</span>
+              {spanInZone(e.startsAt, e.endsAt, e.timeZone)} <span className="muted">({e.timeZone})</span>
             </dd>
             <dt>Where</dt>
             <dd>

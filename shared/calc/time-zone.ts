@@ -54,3 +54,14 @@ export function instantToWallTime(iso: string, timeZone: string): string {
 export function formatInZone(iso: string, timeZone: string, options: Intl.DateTimeFormatOptions = { dateStyle: 'full', timeStyle: 'short' }, locale = 'en-GB'): string {
   return new Intl.DateTimeFormat(locale, { ...options, timeZone }).format(new Date(iso));
 }
+
+/**
+ * A show's span in its own zone, the day said once when it starts and ends on the same day:
+ * "Sat, 5 December 2026, 08:00–16:00", else "Sat, 5 December 2026, 08:00 – Sun, 6 December 2026, 16:00".
+ */
+export function spanInZone(startIso: string, endIso: string, timeZone: string, month: 'long' | 'short' = 'long'): string {
+  const day = (iso: string) => formatInZone(iso, timeZone, { weekday: 'short', day: 'numeric', month, year: 'numeric' });
+  const time = (iso: string) => formatInZone(iso, timeZone, { hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+  if (day(startIso) === day(endIso)) return `${day(startIso)}, ${time(startIso)}–${time(endIso)}`;
+  return `${day(startIso)}, ${time(startIso)} – ${day(endIso)}, ${time(endIso)}`;
+}

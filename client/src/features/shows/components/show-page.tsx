@@ -1,6 +1,7 @@
 import { Link, useParams } from 'react-router-dom';
 import { EVENT_ROLE_LABELS, EVENT_STATUS_LABELS } from '@shared/constants';
 import { formatMoney } from '@shared/calc/money';
+import { spanInZone } from '@shared/calc/time-zone';
 import { PageHeader } from '@client/components/ui/page-header';
 import { Panel } from '@client/components/ui/panel';
 import { ErrorState, LoadingState } from '@client/components/ui/states';
@@ -46,7 +47,7 @@ export function ShowPage() {
       ) : null}
       {!a.manage && (show.myRoles.includes('gate') || a.checkIn) ? <GatePanel show={show} /> : null}
       <Panel title="The show">
-        <p>{showTime(show.startsAt, show.timeZone)} – {showTime(show.endsAt, show.timeZone)} ({show.timeZone})</p>
+        <p>{spanInZone(show.startsAt, show.endsAt, show.timeZone, 'short')} ({show.timeZone})</p>
         <p>{show.venueName}{show.venueAddress ? `, ${show.venueAddress}` : ''}</p>
         <p>Entries {showTime(show.registrationOpensAt, show.timeZone)} – {showTime(show.registrationClosesAt, show.timeZone)} · fee {show.entryFee === 0 ? 'free' : formatMoney(show.entryFee, show.currency)}</p>
       </Panel>
