@@ -67,19 +67,25 @@ export function useAutosave<T extends FieldValues>({ form, formKey, keyOf, saved
     const attempt = (async () => {
       const sentKey = currentKey();
       let why: string | null = null;
-      await form.handleSubmit(
-        async (data) => {
-          const result = await latest.current.send(data);
-          if (result.stored) stored.current = { ...stored.current, sent: sentKey, answer: result.answerKey };
-          else why = result.why;
-        },
-        (errors) => {
-          why = latest.current.refused(errors);
-        },
-      )();
+      try {
+        await form.handleSubmit(
+          async (data) => {
+            const result = await latest.current.send(data);
+            if (result.stored) stored.current = { ...stored.current, sent: sentKey, answer: result.answerKey };
+            else why = result.why;
+          },
+          (errors) => {
+            why = latest.current.refused(errors);
+          },
+        )();
+      } catch (err) {
+        // Whatever went wrong, the panel must not say "Saving…" for ever: it says it failed, and why.
+        why = err instanceof Error && err.message ? err.message : 'This part could not be saved.';
+      } finally {
+        running.current = null;
+      }
       failed.current = why !== null;
       setFailure(why ?? '');
-      running.current = null;
       return why;
     })();
     running.current = attempt;
