@@ -98,7 +98,8 @@ function clientRouter() {
       return;
     }
     res.set('Cache-Control', 'no-cache').vary('Accept-Encoding').type('html');
-    const encoding = req.acceptsEncodings('br', 'gzip', 'identity');
+    // Brotli whenever the browser takes it (a browser lists gzip first, with the same weight).
+    const encoding = req.acceptsEncodings('br') ? 'br' : req.acceptsEncodings('gzip', 'identity');
     if (encoding === 'br') res.set('Content-Encoding', 'br').send(brotliCompressSync(html, { params: { [zlib.BROTLI_PARAM_QUALITY]: 5 } }));
     else if (encoding === 'gzip') res.set('Content-Encoding', 'gzip').send(gzipSync(html));
     else res.send(html);

@@ -48,10 +48,13 @@ export const CLIENT_SCREENS: Screen[] = [
   { path: /^\/gate(\/|$)/, modules: [MODULES.gate], offline: 'gate' },
 ];
 
-type ManifestChunk = { file: string; imports?: string[]; dynamicImports?: string[]; css?: string[] };
+type ManifestChunk = { file: string; isEntry?: boolean; imports?: string[]; dynamicImports?: string[]; css?: string[] };
 type Manifest = Record<string, ManifestChunk>;
 
-/** The files a chunk needs at once (it and its static imports), or with `dynamic` everything it may ever load. */
+/**
+ * The files a chunk needs at once (it and its static imports), or with `dynamic` everything it may load later
+ * too: its own dynamic imports, though not the entry's (every other screen of the app).
+ */
 export function chunkFiles(manifest: Manifest, keys: string[], { dynamic = false } = {}): string[] {
   const seen = new Set<string>();
   const visit = (key: string) => {
@@ -60,7 +63,7 @@ export function chunkFiles(manifest: Manifest, keys: string[], { dynamic = false
     if (!chunk) throw new Error(`The client build's manifest has no ${key}: did a screen move? (server/client-shell.ts)`);
     seen.add(key);
     for (const next of chunk.imports ?? []) visit(next);
-    if (dynamic) for (const next of chunk.dynamicImports ?? []) visit(next);
+    if (dynamic && !chunk.isEntry) for (const next of chunk.dynamicImports ?? []) visit(next);
   };
   keys.forEach(visit);
   return [...seen].flatMap((k) => [manifest[k]!.file, ...(manifest[k]!.css ?? [])]).map((f) => `/${f}`);
