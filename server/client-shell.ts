@@ -10,6 +10,9 @@ import { fileURLToPath } from 'node:url';
 
 export const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
+/** What the app layout and every signed-in screen read first (`client/src/features/session/api/get-session.ts`). */
+const SESSION = '/api/session';
+
 /** The lazy screens of `client/src/app/router.tsx`, by their source path (the build manifest's keys). */
 const MODULES = {
   signIn: 'src/features/session/components/sign-in-page.tsx',
@@ -24,8 +27,8 @@ type Screen = {
   path: RegExp;
   /** The router's lazy modules this address renders: preloaded with their static imports. */
   modules: string[];
-  /** The first API answer the screen waits for, from the address's id. */
-  data?: (id: string) => string;
+  /** The first API answer the screen reads, from the address's id when it has one. */
+  data?: (id: string | undefined) => string;
   /** The area whose service worker keeps this page: every chunk of `OFFLINE_AREAS[area]` is listed in it. */
   offline?: keyof typeof OFFLINE_AREAS;
 };
@@ -38,12 +41,12 @@ export const OFFLINE_AREAS = {
 
 /** App addresses opened cold (from a link, a bookmark, a reload), in the router's order; keep in step with router.tsx. */
 export const CLIENT_SCREENS: Screen[] = [
-  { path: /^\/sign-in\/?$/, modules: [MODULES.signIn] },
-  { path: /^\/judge\/?$/, modules: [MODULES.judgeLayout, MODULES.judgeHome], offline: 'judge' },
-  { path: /^\/judge\/(\d{1,15})\/?$/, modules: [MODULES.judgeLayout, MODULES.judgeCars], data: (id) => `/api/events/${id}/judging/mine`, offline: 'judge' },
-  { path: /^\/judge\/(\d{1,15})\/cars\/\d{1,15}\/?$/, modules: [MODULES.judgeLayout, MODULES.scoreSheet], data: (id) => `/api/events/${id}/judging/mine`, offline: 'judge' },
+  { path: /^\/sign-in\/?$/, modules: [MODULES.signIn], data: () => SESSION },
+  { path: /^\/judge\/?$/, modules: [MODULES.judgeLayout, MODULES.judgeHome], data: () => SESSION, offline: 'judge' },
+  { path: /^\/judge\/(\d{1,15})\/?$/, modules: [MODULES.judgeLayout, MODULES.judgeCars], data: (id) => `/api/events/${id!}/judging/mine`, offline: 'judge' },
+  { path: /^\/judge\/(\d{1,15})\/cars\/\d{1,15}\/?$/, modules: [MODULES.judgeLayout, MODULES.scoreSheet], data: (id) => `/api/events/${id!}/judging/mine`, offline: 'judge' },
   { path: /^\/judge\//, modules: [MODULES.judgeLayout], offline: 'judge' },
-  { path: /^\/gate\/(\d{1,15})\/?$/, modules: [MODULES.gate], data: (id) => `/api/events/${id}`, offline: 'gate' },
+  { path: /^\/gate\/(\d{1,15})\/?$/, modules: [MODULES.gate], data: (id) => `/api/events/${id!}`, offline: 'gate' },
   // The gate's worker keeps the page at /gate: it needs the gate's chunks named too.
   { path: /^\/gate(\/|$)/, modules: [MODULES.gate], offline: 'gate' },
 ];
@@ -94,13 +97,13 @@ const attr = (url: string) => {
 export function clientShellHtml(pathname: string): string | null {
   const b = readBuilt();
   if (!b) return null;
-  const screen = CLIENT_SCREENS.find((s) => s.path.test(pathname));
-  if (!screen || !b.manifest['index.html']) return b.html;
+  // Any other address renders in the app layout, which asks for the session first: that answer is on its way too.
+  const screen = CLIENT_SCREENS.find((s) => s.path.test(pathname)) ?? { path: /./, modules: [], data: () => SESSION };
+  if (!b.manifest['index.html']) return b.html;
   const named = new Set([...b.html.matchAll(/(?:src|href)="(\/assets\/[^"]+)"/g)].map((m) => m[1]!));
   const preloads = chunkFiles(b.manifest, screen.modules).filter((f) => !named.has(f) && f.endsWith('.js'));
   const hints = preloads.map((f) => `<link rel="modulepreload" crossorigin href="${attr(f)}">`);
-  const id = screen.path.exec(pathname)?.[1];
-  if (screen.data && id) hints.push(`<link rel="preload" as="fetch" crossorigin href="${attr(screen.data(id))}">`);
+  if (screen.data) hints.push(`<link rel="preload" as="fetch" crossorigin href="${attr(screen.data(screen.path.exec(pathname)?.[1]))}">`);
   if (screen.offline) {
     const kept = chunkFiles(b.manifest, OFFLINE_AREAS[screen.offline], { dynamic: true }).filter((f) => !named.has(f) && !preloads.includes(f));
     // Read by the area's service worker (offline-shell-sw.js keeps every "/assets/…" the page names); not run.

@@ -61,7 +61,9 @@ describe('the page the server sends for an app address', () => {
     const signIn = await page('/sign-in');
     expect(modulepreloads(signIn.text)).toContain(`/${manifest[SCREENS.signIn]!.file}`);
     expect(modulepreloads(signIn.text)).not.toContain(`/${manifest[SCREENS.gate]!.file}`);
-    expect(fetchPreloads(signIn.text)).toEqual([]);
+    // Sign-in, like every screen in the app layout, reads the session first.
+    expect(fetchPreloads(signIn.text)).toEqual(['/api/session']);
+    expect(fetchPreloads((await page('/shows/3')).text)).toEqual(['/api/session']);
     expect(signIn.text).not.toContain('placard-offline-assets');
     // The same for everyone (no session read, nothing personal), revalidated on each visit.
     expect(signIn.headers['cache-control']).toBe('no-cache');
@@ -69,6 +71,7 @@ describe('the page the server sends for an app address', () => {
 
     // Only digits reach a preload: anything else gets the page without one.
     expect(fetchPreloads((await page('/judge/12%22%3E')).text)).toEqual([]);
+    expect(fetchPreloads((await page('/gate/7x')).text)).toEqual([]);
   });
 
   it('paints its opening text without waiting for the stylesheet', async () => {
