@@ -2,7 +2,6 @@ import expressStaticGzip from 'express-static-gzip';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
-import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
 import path from 'node:path';
 import './models/index';
 import { config } from './config';
@@ -47,6 +46,7 @@ import { votePagesRouter } from './pages/vote-router';
 import { buildLogPagesRouter } from './pages/build-log-router';
 import { resultsRouter } from './routes/results';
 import { CLIENT_DIST, clientShellHtml } from './client-shell';
+import { sendCompressed } from './middlewares/send-compressed';
 
 
 function apiRouter() {
@@ -97,12 +97,8 @@ function clientRouter() {
       res.status(503).type('text/plain').send('The client is not built yet: run `npm run build` (npm start does it for you).');
       return;
     }
-    res.set('Cache-Control', 'no-cache').vary('Accept-Encoding').type('html');
-    // Brotli whenever the browser takes it (a browser lists gzip first, with the same weight).
-    const encoding = req.acceptsEncodings('br') ? 'br' : req.acceptsEncodings('gzip', 'identity');
-    if (encoding === 'br') res.set('Content-Encoding', 'br').send(brotliCompressSync(html, { params: { [zlib.BROTLI_PARAM_QUALITY]: 5 } }));
-    else if (encoding === 'gzip') res.set('Content-Encoding', 'gzip').send(gzipSync(html));
-    else res.send(html);
+    res.set('Cache-Control', 'no-cache').type('html');
+    sendCompressed(req, res, html);
   });
   return client;
 }

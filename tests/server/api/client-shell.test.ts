@@ -2,7 +2,9 @@ import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
+import express from 'express';
 import { testApp } from '../../support/api-client';
+import { sendCompressedJson } from '@server/middlewares/send-compressed';
 
 // npm test builds the client first; the manifest is the build's own account of which file holds which screen.
 const DIST = path.resolve(import.meta.dirname, '../../../dist/client');
@@ -101,5 +103,21 @@ describe('the page the server sends for an app address', () => {
     expect(res.headers['content-encoding']).toBe('br');
     expect(res.headers.vary).toMatch(/Accept-Encoding/);
     expect(res.text).toContain('/api/events/7');
+  });
+
+  it('compresses the JSON a phone waits for (the judge’s cars, the gate’s roster) once that is worth it', async () => {
+    const app = express().get('/view', (req, res) => sendCompressedJson(req, res, { cars: Array.from({ length: Number(req.query.cars) }, (_, i) => ({ number: i + 1, title: `Car ${i + 1}` })) }));
+    const get = (cars: number, encoding: string) => request(app).get(`/view?cars=${cars}`).set('Accept-Encoding', encoding);
+    const big = await get(60, 'gzip, deflate, br');
+    expect(big.headers['content-encoding']).toBe('br');
+    expect(big.headers['content-type']).toMatch(/json/);
+    expect(big.headers.vary).toMatch(/Accept-Encoding/);
+    expect(big.body.cars).toHaveLength(60);
+    expect((await get(60, 'gzip, deflate')).headers['content-encoding']).toBe('gzip');
+    const plain = await get(60, 'identity');
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(plain.body.cars[59]).toEqual({ number: 60, title: 'Car 60' });
+    // Under 1 KB the headers would cost more than they save.
+    expect((await get(2, 'gzip, deflate, br')).headers['content-encoding']).toBeUndefined();
   });
 });
