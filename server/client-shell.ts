@@ -7,6 +7,7 @@
 import { existsSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { logger } from './logger';
 
 export const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -97,6 +98,16 @@ const attr = (url: string) => {
 export function clientShellHtml(pathname: string): string | null {
   const b = readBuilt();
   if (!b) return null;
+  try {
+    return withHints(b, pathname);
+  } catch (err) {
+    // A screen moved without this file: the page still works, only slower on one bar (the test names the screen).
+    logger.warn({ err }, 'the app page is sent without its screen hints');
+    return b.html;
+  }
+}
+
+function withHints(b: Built, pathname: string): string {
   // Any other address renders in the app layout, which asks for the session first: that answer is on its way too.
   const screen = CLIENT_SCREENS.find((s) => s.path.test(pathname)) ?? { path: /./, modules: [], data: () => SESSION };
   if (!b.manifest['index.html']) return b.html;
