@@ -2,9 +2,7 @@ import expressStaticGzip from 'express-static-gzip';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
-import { existsSync } from 'node:fs';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import './models/index';
 import { config } from './config';
 import { httpLogSerializers, logger } from './logger';
@@ -48,8 +46,9 @@ import { peoplesChoiceRouter } from './routes/peoples-choice';
 import { votePagesRouter } from './pages/vote-router';
 import { buildLogPagesRouter } from './pages/build-log-router';
 import { resultsRouter } from './routes/results';
+import { CLIENT_DIST, clientShellHtml } from './client-shell';
+import { sendCompressed } from './middlewares/send-compressed';
 
-const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
 function apiRouter() {
   const api = express.Router();
@@ -92,13 +91,15 @@ function clientRouter() {
   );
   // The rest (the service workers, the icons): an hour, revalidated; the .br or .gz copy when the browser takes it.
   client.use(expressStaticGzip(CLIENT_DIST, { enableBrotli: true, orderPreference: ['br', 'gz'], index: false, serveStatic: { index: false, maxAge: '1h' } }));
-  client.get('/{*splat}', (_req, res) => {
-    const index = path.join(CLIENT_DIST, 'index.html');
-    if (!existsSync(index)) {
+  // The app's page, naming what this address's screen needs (server/client-shell.ts).
+  client.get('/{*splat}', (req, res) => {
+    const html = clientShellHtml(req.path);
+    if (html === null) {
       res.status(503).type('text/plain').send('The client is not built yet: run `npm run build` (npm start does it for you).');
       return;
     }
-    res.set('Cache-Control', 'no-cache').sendFile(index);
+    res.set('Cache-Control', 'no-cache').type('html');
+    sendCompressed(req, res, html);
   });
   return client;
 }

@@ -1,4 +1,4 @@
-import { BUILD_CODE_ALPHABET } from './schemas/build';
+import { BUILD_CODE_ALPHABET } from './build-code';
 import type { GateProblem } from './schemas/show-day';
 
 const CODE = new RegExp(`^[${BUILD_CODE_ALPHABET}]{6,8}$`);

@@ -7,16 +7,26 @@ const PAGE = `/${AREA}`;
 const SHELL = `placard-${AREA}-shell-v1`;
 const ASSETS = `placard-${AREA}-assets-v1`;
 
+/**
+ * Everything the page names under /assets (its entry, its screen's modulepreloads, and the list of the area's
+ * other chunks the server puts in it: server/client-shell.ts) is kept, so a reload with no signal finds it
+ * all. Only what is not kept yet is fetched: the names carry a content hash.
+ */
+async function keepAssetsOf(html) {
+  const assets = [...new Set([...html.matchAll(/"(\/assets\/[^"]+)"/g)].map((m) => m[1]))];
+  const assetCache = await caches.open(ASSETS);
+  const missing = [];
+  for (const url of assets) if (!(await assetCache.match(url))) missing.push(url);
+  await assetCache.addAll(missing);
+}
+
 async function cacheShell() {
   const cache = await caches.open(SHELL);
   const res = await fetch(PAGE, { cache: 'no-store' });
   if (!res.ok) return;
   const html = await res.clone().text();
   await cache.put(PAGE, res);
-  // Everything the shell names under /assets is fetched now, so a reload with no signal finds it all.
-  const assets = [...html.matchAll(/(?:src|href)="(\/assets\/[^"]+)"/g)].map((m) => m[1]);
-  const assetCache = await caches.open(ASSETS);
-  await assetCache.addAll([...new Set(assets)]);
+  await keepAssetsOf(html);
 }
 
 self.addEventListener('install', (event) => {
@@ -43,7 +53,12 @@ self.addEventListener('fetch', (event) => {
     event.respondWith(
       fetch(req)
         .then(async (res) => {
-          if (res.ok) await (await caches.open(SHELL)).put(PAGE, res.clone());
+          if (res.ok) {
+            await (await caches.open(SHELL)).put(PAGE, res.clone());
+            // A newer build names new chunks: keep them too, after the page is answered.
+            const page = res.clone();
+            event.waitUntil(page.text().then(keepAssetsOf).catch(() => undefined));
+          }
           return res;
         })
         .catch(async () => (await caches.match(PAGE, { cacheName: SHELL })) ?? Response.error()),

@@ -3,6 +3,7 @@ import { IdParamSchema, IdSchema } from '@shared/schemas/params';
 import { JudgeClassesSchema, ScoreSubmitSchema } from '@shared/schemas/judging';
 import { parseBody, parseParams } from '../middlewares/validate';
 import { currentUser, requireUser } from '../middlewares/authenticate';
+import { sendCompressedJson } from '../middlewares/send-compressed';
 import { loadEventFor } from './load-for';
 import { findEvent } from '../services/shows/events';
 import { loadResultsReview } from '../services/results/results-review';
@@ -28,7 +29,8 @@ judgingRouter.get('/judging', async (req, res) => {
 judgingRouter.get('/events/:id/judging/mine', async (req, res) => {
   const { event } = await loadEventFor(req, 'viewOwnSheets');
   const view = await loadJudgeView(event.id, currentUser(req).id);
-  res.set('Cache-Control', 'private, no-store').json(presentJudgeView(view, judgingClosedReason(event)));
+  res.set('Cache-Control', 'private, no-store');
+  sendCompressedJson(req, res, presentJudgeView(view, judgingClosedReason(event)));
 });
 
 /** Scores and car comments from a judge's phone; idempotent per device id, newest device time wins. */

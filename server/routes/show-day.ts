@@ -18,6 +18,7 @@ import type { Actor } from '../policies/actor';
 import { presentGateCard, presentGateCounts, presentGateRoster, presentGateSyncResult } from '../presenters/gate';
 import { presentAuditLine } from '../presenters/event';
 import { loadEntryFor, loadEventFor } from './load-for';
+import { sendCompressedJson } from '../middlewares/send-compressed';
 
 /** Show day: the organiser's entries table and its actions, the CSV export, and the gate. */
 export const showDayRouter = Router();
@@ -108,7 +109,7 @@ showDayRouter.get('/events/:id/gate/counts', requireUser, async (req, res) => {
 showDayRouter.get('/events/:id/gate/roster', requireUser, async (req, res) => {
   const { event } = await loadEventFor(req, 'checkIn');
   res.set('Cache-Control', 'private, no-store');
-  res.json(presentGateRoster(event, true, await gateRoster(event.id), new Date()));
+  sendCompressedJson(req, res, presentGateRoster(event, true, await gateRoster(event.id), new Date()));
 });
 
 /** Check-ins a phone queued with no signal: each applied once (by its id), each answered. */

@@ -7,6 +7,7 @@ import { curvePeaks, DYNO_PEAK_LIMITS, DYNO_POINT_LIMITS, type CurvePeaks } from
 import { text } from './text';
 import { calendarDate } from './dates';
 import { megabytes } from '../words';
+import { BUILD_CODE_ALPHABET, BUILD_CODE_LENGTH } from '../build-code';
 
 export const BUILD_STYLES = ['hot-rod', 'street-rod', 'custom', 'restomod', 'pro-touring', 'muscle', 'gasser', 'rat-rod', 'lowrider', 'truck', 'drag', 'other'] as const;
 export const BUILD_STYLE_LABELS: Record<(typeof BUILD_STYLES)[number], string> = {
@@ -24,9 +25,7 @@ export const BUILD_STYLE_LABELS: Record<(typeof BUILD_STYLES)[number], string> =
   other: 'Other',
 };
 
-/** The short public code in /c/<code>: no 0/O, 1/I/L, so it reads aloud and types back. */
-export const BUILD_CODE_ALPHABET = '23456789ABCDEFGHJKMNPQRSTUVWXYZ';
-export const BUILD_CODE_LENGTH = 7;
+export { BUILD_CODE_ALPHABET, BUILD_CODE_LENGTH };
 export const BuildCodeSchema = z.string().regex(new RegExp(`^[${BUILD_CODE_ALPHABET}]{6,8}$`), { error: 'Not a build code.' });
 
 export const TITLE_MAX = 120;

@@ -4,6 +4,7 @@ import { ASKABLE_PRIVATE_FIELDS, ENTRY_STATUSES } from '../constants';
 import { IdSchema, MAX_INTEGER_COLUMN } from './params';
 import { EntryStatusSchema } from './entry';
 import { EmailSchema } from './user';
+import { CHECK_IN_UNDO_SECONDS, GATE_SYNC_MAX, PAYMENT_STATES, PAYMENT_STATE_LABELS, type PaymentState } from '../gate-phone';
 
 /** The organiser's entries table: one page at a time, sorted and filtered on the server. */
 export const ENTRY_TABLE_SORTS = ['number', 'title', 'owner', 'class', 'status', 'created'] as const;
@@ -28,9 +29,7 @@ export type EntryTableQuery = z.infer<typeof EntryTableQuerySchema>;
 export const EntryExportQuerySchema = EntryTableQuerySchema.omit({ page: true, pageSize: true });
 export type EntryExportQuery = z.infer<typeof EntryExportQuerySchema>;
 
-export const PAYMENT_STATES = ['free', 'unpaid', 'paid', 'refund_due', 'refunded'] as const;
-export type PaymentState = (typeof PAYMENT_STATES)[number];
-export const PAYMENT_STATE_LABELS: Record<PaymentState, string> = { free: 'Free', unpaid: 'Unpaid', paid: 'Paid', refund_due: 'Refund due', refunded: 'Refunded' };
+export { PAYMENT_STATES, PAYMENT_STATE_LABELS, type PaymentState };
 
 /** Pure: what a person reads in the payment column. A refund the payment service sent is done, not due. */
 export function paymentStateOf(e: { feeAmount: number; paidAt: string | Date | null; refundDue: number | null; refundedAt?: string | Date | null; status: string }): PaymentState {
@@ -133,8 +132,7 @@ export type GateCheckInInput = z.infer<typeof GateCheckInSchema>;
 export const GateCardParamsSchema = z.object({ id: IdSchema, number: z.coerce.number().int().positive().max(99999) });
 export const GateUndoSchema = z.object({ entryId: z.number({ error: 'Which entry?' }).int().positive() });
 
-/** Undo a check-in within this long (seconds). */
-export const CHECK_IN_UNDO_SECONDS = 60;
+export { CHECK_IN_UNDO_SECONDS };
 
 export const GATE_PROBLEMS = ['unknown_code', 'not_entered', 'other_show', 'unpaid', 'withdrawn', 'waiting_list', 'already_checked_in'] as const;
 export type GateProblem = (typeof GATE_PROBLEMS)[number];
@@ -186,8 +184,7 @@ export const GateRosterSchema = z.object({
 });
 export type GateRoster = z.infer<typeof GateRosterSchema>;
 
-/** At most this many queued check-ins go in one request (a phone sends the rest next). */
-export const GATE_SYNC_MAX = 100;
+export { GATE_SYNC_MAX };
 /** One check-in a gate phone made with no signal: its own id for it, its count, the number, cash or not, and the phone's clock. */
 export const GateQueuedCheckInSchema = z.object({
   clientId: z.uuid({ error: 'Each check-in needs its id.' }),

@@ -3,15 +3,9 @@ import { createBrowserRouter, Navigate, useParams, type RouteObject } from 'reac
 import { AppLayout } from '@client/components/layouts/app-layout';
 import { RequireUser } from '@client/components/layouts/require-user';
 import { ServerPage } from './server-page';
-import { SignInPage } from '@client/features/session/components/sign-in-page';
 import { NotFoundPage } from './not-found-page';
 import { RouteError } from './route-error';
 import { LoadingState } from '@client/components/ui/states';
-import { JudgeLayout } from '@client/features/judging/components/judge-layout';
-import { JudgeHomePage } from '@client/features/judging/components/judge-home-page';
-import { JudgeCarsPage } from '@client/features/judging/components/judge-cars-page';
-import { ScoreSheetPage } from '@client/features/judging/components/score-sheet-page';
-import { GatePage } from '@client/features/show-day/components/gate-page';
 
 function RedirectToGate() {
   return <Navigate replace to={`/gate/${useParams().id}`} />;
@@ -32,21 +26,42 @@ function lazyScreen(path: string, load: () => Promise<ComponentType>, { signedIn
   };
 }
 
+/**
+ * Each screen's code is a chunk of its own, loaded when its address is opened. For the addresses a person opens
+ * cold on one bar of signal (sign-in, the judge's screens, the gate) the server names the screen's chunks in the
+ * page it sends (`server/client-shell.ts`, `CLIENT_SCREENS`: keep it in step with the imports here), so they
+ * download beside the entry instead of after it; `main.tsx` renders once they are in. The judges' and the gate's
+ * service workers keep every chunk of their screens, so those still open with no signal.
+ */
 export const router = createBrowserRouter([
-  // The judge's screens are in the main bundle and outside the app layout: they must open from the
-  // device's copy with no signal, so nothing on them waits for the session or a lazy chunk.
+  // The judge's screens are outside the app layout: nothing on them waits for the session, so they open
+  // from the device's copy with no signal.
   {
     path: '/judge',
-    element: <JudgeLayout />,
+    lazy: async () => ({ Component: (await import('@client/features/judging/components/judge-layout')).JudgeLayout }),
     errorElement: <RouteError />,
     children: [
-      { index: true, element: <RequireUser><JudgeHomePage /></RequireUser>, errorElement: <RouteError /> },
-      { path: ':eventId', element: <JudgeCarsPage />, errorElement: <RouteError /> },
-      { path: ':eventId/cars/:entryId', element: <ScoreSheetPage />, errorElement: <RouteError /> },
+      {
+        index: true,
+        lazy: async () => {
+          const { JudgeHomePage } = await import('@client/features/judging/components/judge-home-page');
+          return { element: <RequireUser><JudgeHomePage /></RequireUser> };
+        },
+        errorElement: <RouteError />,
+      },
+      { path: ':eventId', lazy: async () => ({ Component: (await import('@client/features/judging/components/judge-cars-page')).JudgeCarsPage }), errorElement: <RouteError /> },
+      { path: ':eventId/cars/:entryId', lazy: async () => ({ Component: (await import('@client/features/judging/components/score-sheet-page')).ScoreSheetPage }), errorElement: <RouteError /> },
     ],
   },
-  // The gate, like the judge's screens: in the main bundle and outside the app layout, so it reloads with no signal.
-  { path: '/gate/:id', element: <main id="main" className="min-h-screen bg-paper px-3 pb-24 pt-3 text-ink"><GatePage /></main>, errorElement: <RouteError /> },
+  // The gate, like the judge's screens: outside the app layout, so it reloads with no signal.
+  {
+    path: '/gate/:id',
+    lazy: async () => {
+      const { GatePage } = await import('@client/features/show-day/components/gate-page');
+      return { element: <main id="main" className="min-h-screen bg-paper px-3 pb-24 pt-3 text-ink"><GatePage /></main> };
+    },
+    errorElement: <RouteError />,
+  },
   {
     element: <AppLayout />,
     errorElement: <RouteError />,
@@ -55,7 +70,7 @@ export const router = createBrowserRouter([
     children: [
       { path: '/', element: <ServerPage />, errorElement: <RouteError /> },
       { path: '/c', element: <ServerPage />, errorElement: <RouteError /> },
-      { path: '/sign-in', element: <SignInPage />, errorElement: <RouteError /> },
+      lazyScreen('/sign-in', async () => (await import('@client/features/session/components/sign-in-page')).SignInPage, { signedIn: false }),
       lazyScreen('/sign-up', async () => (await import('@client/features/session/components/sign-up-page')).SignUpPage, { signedIn: false }),
       lazyScreen('/reset-password', async () => (await import('@client/features/account/components/reset-password-page')).ResetPasswordPage, { signedIn: false }),
       lazyScreen('/verify-email', async () => (await import('@client/features/account/components/verify-email-page')).VerifyEmailPage, { signedIn: false }),

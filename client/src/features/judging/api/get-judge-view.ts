@@ -12,7 +12,8 @@ export async function getJudgeView(eventId: number): Promise<JudgeViewResult> {
   try {
     const view = await api<JudgeView>(`/api/events/${eventId}/judging/mine`);
     const fetchedAt = Date.now();
-    await saveView(eventId, view, fetchedAt);
+    // Kept for opening with no signal; the screen does not wait for the write (a first one creates the database).
+    void saveView(eventId, view, fetchedAt).catch(() => undefined);
     return { view, fromDevice: false, fetchedAt };
   } catch (err) {
     const kept = err instanceof ApiError && err.code === 'NETWORK' ? await readView(eventId) : undefined;

@@ -4,6 +4,15 @@ import { Link, Outlet } from 'react-router-dom';
 import { useOnline } from './use-online';
 
 /**
+ * Each judge's screen is a chunk of its own (the first load on one bar carries only the one opened). Once the
+ * page is up the others load too, so a car's sheet opens with no signal even before the worker keeps them.
+ */
+function warmJudgeScreens() {
+  const idle = (globalThis as { requestIdleCallback?: (cb: () => void) => number }).requestIdleCallback ?? ((cb: () => void) => setTimeout(cb, 1000));
+  idle(() => void Promise.all([import('./judge-home-page'), import('./judge-cars-page'), import('./score-sheet-page')]).catch(() => undefined));
+}
+
+/**
  * The judge's frame: a slim bar and the page, nothing that needs the network, so the screens
  * open from the device's copy with no signal at all.
  */
@@ -14,6 +23,7 @@ export function JudgeLayout() {
   useEffect(() => {
     // Scoped to /judge: the rest of the app keeps the network's answers.
     if ('serviceWorker' in navigator && import.meta.env.PROD) void navigator.serviceWorker.register('/judge-sw.js', { scope: '/judge' });
+    warmJudgeScreens();
   }, []);
   return (
     <div className="min-h-screen bg-paper text-ink">

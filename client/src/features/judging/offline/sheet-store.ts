@@ -1,4 +1,4 @@
-import { createStore, get, set, update } from 'idb-keyval';
+import { createStore, get, setMany, update } from 'idb-keyval';
 import type { JudgeView, NoteItem, ScoreItem } from '@shared/schemas/judging';
 
 /**
@@ -30,8 +30,7 @@ export async function writeLines(eventId: number, change: (lines: Record<string,
 
 /** The last copy of the judge's cars and sheet fetched from the server, for opening the screens with no signal. */
 export async function saveView(eventId: number, view: JudgeView, fetchedAt: number) {
-  await set(viewKey(eventId), view, store);
-  await set(`${viewKey(eventId)}:at`, fetchedAt, store);
+  await setMany([[viewKey(eventId), view], [`${viewKey(eventId)}:at`, fetchedAt]], store);
 }
 export async function readView(eventId: number): Promise<{ view: JudgeView; fetchedAt: number } | undefined> {
   const view = await get<JudgeView>(viewKey(eventId), store);

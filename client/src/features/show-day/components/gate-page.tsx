@@ -1,7 +1,8 @@
-import { useCallback, useEffect, useState } from 'react';
+import { lazy, Suspense, useCallback, useEffect, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { formatMoney } from '@shared/calc/money';
-import { CHECK_IN_UNDO_SECONDS, PAYMENT_STATE_LABELS, type GateCard } from '@shared/schemas/show-day';
+import { CHECK_IN_UNDO_SECONDS, PAYMENT_STATE_LABELS } from '@shared/gate-phone';
+import type { GateCard } from '@shared/schemas/show-day';
 import { useShow } from '../api/get-show';
 import { useCheckInAtGate } from '../api/check-in-at-gate';
 import { useGateCounts } from '../api/get-gate-counts';
@@ -12,12 +13,15 @@ import { lookUpOnPhone } from '../offline/local-lookup';
 import { useGateQueue } from '../offline/use-gate-queue';
 import { readQueue } from '../offline/gate-store';
 import { GateOutboxPanel } from './gate-outbox-panel';
-import { WalkUpForm } from './walk-up-form';
 import { ApiError } from '@client/lib/api';
 import { useOnline } from '@client/features/judging/components/use-online';
 import { useUndoCheckIn } from '../api/undo-check-in';
 import { useQrScanner, warmQrDecoder } from './use-qr-scanner';
 import { LoadingState, ErrorState } from '@client/components/ui/states';
+
+// The walk-up form (a form library and the shared schemas) loads once the screen is up: it is for a car with no
+// entry, online only, and the gate's first load on one bar stays light. The gate's worker keeps its chunk too.
+const WalkUpForm = lazy(async () => ({ default: (await import('./walk-up-form')).WalkUpForm }));
 
 const big = 'min-h-12 w-full border-2 px-4 py-3 font-display text-xl uppercase tracking-wide disabled:opacity-50';
 
@@ -189,7 +193,7 @@ export function GatePage() {
             />
           ) : null}
           <GateOutboxPanel queue={queue} />
-          {online && counts.data ? <WalkUpForm eventId={eventId} classes={counts.data.classes} fee={show.data && show.data.entryFee > 0 ? { amount: show.data.entryFee, currency: show.data.currency } : null} onEntered={(c) => { setCard(c); setJustChecked(true); setNotFound(null); }} /> : null}
+          {online && counts.data ? <Suspense fallback={null}><WalkUpForm eventId={eventId} classes={counts.data.classes} fee={show.data && show.data.entryFee > 0 ? { amount: show.data.entryFee, currency: show.data.currency } : null} onEntered={(c) => { setCard(c); setJustChecked(true); setNotFound(null); }} /></Suspense> : null}
           {online ? <Counts eventId={eventId} /> : null}
         </>
       ) : null}

@@ -1,5 +1,5 @@
 import { refusedForGood, startOfflineSendLoop } from '@client/lib/offline-send-loop';
-import { GATE_SYNC_MAX } from '@shared/schemas/show-day';
+import { GATE_SYNC_MAX } from '@shared/gate-phone';
 import { sendGateCheckIns } from '../api/send-gate-check-ins';
 import { gateDeviceId, nextGateSequence } from './gate-device';
 import { readQueue, writeQueue, type QueuedCheckIn } from './gate-store';
