@@ -3,6 +3,7 @@ import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 import { fileURLToPath } from 'node:url';
 import { TEST_ENV } from './tests/support/test-env.ts';
+import LongestFirstSequencer from './tests/support/longest-first.ts';
 
 const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 
@@ -38,6 +39,8 @@ function testConfig() {
     reporters: ['default', './tests/support/project-times-reporter.ts'],
     // Two cores: two workers, and the browser journeys start only when the API files are done.
     maxWorkers: 2,
+    // Isolated and unit files before the api files, the longest file of a project first (tests/support/longest-first.ts).
+    sequence: { sequencer: LongestFirstSequencer },
     projects: [
       project('unit', { include: ['tests/shared/**/*.test.ts', 'tests/client/**/*.test.ts', 'tests/lint/**/*.test.ts', ...PURE_SERVER_TESTS.map(glob)], pool: 'threads', isolate: false, sequence: { groupOrder: 0 } }),
       project('api', { include: ['tests/server/**/*.test.ts'], exclude: [...PURE_SERVER_TESTS, ...ISOLATED_TESTS, ...SLOW_TESTS].map(glob), pool: 'forks', isolate: false, sequence: { groupOrder: 0 } }),
