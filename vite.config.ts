@@ -4,6 +4,7 @@ import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 import { fileURLToPath } from 'node:url';
 import { TEST_ENV } from './tests/support/test-env.ts';
+import LongestFirstSequencer from './tests/support/longest-first.ts';
 
 const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 
@@ -39,11 +40,15 @@ function testConfig() {
     reporters: ['default', './tests/support/project-times-reporter.ts'],
     // Two cores: two workers, and the browser journeys start only when the API files are done.
     maxWorkers: 2,
+    // Isolated and unit files before the api files, the longest file of a project first (tests/support/longest-first.ts).
+    sequence: { sequencer: LongestFirstSequencer },
     projects: [
       project('unit', { include: ['tests/shared/**/*.test.ts', 'tests/client/**/*.test.ts', 'tests/lint/**/*.test.ts', ...PURE_SERVER_TESTS.map(glob)], pool: 'threads', isolate: false, sequence: { groupOrder: 0 } }),
       project('api', { include: ['tests/server/**/*.test.ts'], exclude: [...PURE_SERVER_TESTS, ...ISOLATED_TESTS, ...SLOW_TESTS].map(glob), pool: 'forks', isolate: false, sequence: { groupOrder: 0 } }),
       project('isolated', { include: ISOLATED_TESTS.map(glob), pool: 'forks', isolate: true, sequence: { groupOrder: 0 } }),
-      project('browser', { include: BROWSER_TESTS.map(glob), pool: 'forks', isolate: false, sequence: { groupOrder: 1 } }),
+      // A poll of a screen asks Chromium to find elements by role in the whole page (the editor is 19,000 px long):
+      // every 150 ms instead of vitest's 50 ms leaves the two cores to the browsers and the server.
+      project('browser', { include: BROWSER_TESTS.map(glob), pool: 'forks', isolate: false, expect: { poll: { timeout: 10_000, interval: 150 } }, sequence: { groupOrder: 1 } }),
       project('slow', { include: SLOW_TESTS.map(glob), pool: 'forks', isolate: false, testTimeout: 300_000, hookTimeout: 180_000, expect: { poll: { timeout: 60_000 } }, sequence: { groupOrder: 2 } }),
     ],
   };

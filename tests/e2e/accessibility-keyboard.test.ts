@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { judgedShow } from '../support/results-factory';
 import { focusInside, tabThrough } from '../support/axe-keyboard';
@@ -45,7 +45,7 @@ describe("the organiser's screens by keyboard", () => {
 
   it('reaches every control of the show page and the entries table by Tab, each with a visible focus mark', async () => {
     const page = await (await env.browser.newContext({ viewport: { width: 1366, height: 900 } })).newPage();
-    await signInInBrowser(page, env.baseUrl, show.organiser.email, DEFAULT_PASSWORD, `/shows/${show.eventId}`);
+    await openSignedIn(page, env.baseUrl, show.organiser.email, DEFAULT_PASSWORD, `/shows/${show.eventId}`);
     await settle(page);
     // The screen holds what the organiser runs: the classes, the judging progress and the results.
     for (const name of ['Classes', 'Judging', 'Results']) await page.getByRole('heading', { name, exact: true }).first().waitFor();
@@ -63,7 +63,7 @@ describe("the organiser's screens by keyboard", () => {
 
   it('opens, keeps and gives back the focus in the dialogs: publish results, an entry, and the question inside it', async () => {
     const page = await (await env.browser.newContext({ viewport: { width: 1366, height: 900 } })).newPage();
-    await signInInBrowser(page, env.baseUrl, show.organiser.email, DEFAULT_PASSWORD, `/shows/${show.eventId}`);
+    await openSignedIn(page, env.baseUrl, show.organiser.email, DEFAULT_PASSWORD, `/shows/${show.eventId}`);
     await settle(page);
 
     // Publish results: Enter on the button opens the question, Tab stays in it, Escape closes it and the focus is back.

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { randomUUID } from 'node:crypto';
 import type { Browser, Page } from 'playwright-core';
-import { keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 import { waitForMail } from '../support/mailbox';
@@ -10,11 +10,7 @@ const env = useBrowserAndServer();
 
 async function signInAs(browser: Browser, baseUrl: string, who: { email: string; password: string }, viewport: { width: number; height: number }): Promise<Page> {
   const page = await browser.newPage({ viewport });
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(who.email);
-  await page.getByLabel('Password').fill(who.password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(/\/(account|builds|admin\/accounts)$/);
+  await openSignedIn(page, baseUrl, who.email, who.password, '/admin/accounts');
   return page;
 }
 
@@ -36,7 +32,6 @@ describe('the site admin’s accounts page', () => {
     const build = await createBuild(owner.user.id, { title: 'Bronze fastback', published: true });
 
     const page = await signInAs(env.browser, env.baseUrl, admin, { width: 1280, height: 900 });
-    await page.goto(`${env.baseUrl}/admin/accounts`);
     await page.getByLabel('Search by name or e-mail').fill('Brennecke');
     await page.getByText('1 account matches “Brennecke”.').waitFor();
     await page.getByRole('button', { name: 'Open Odalys Brennecke' }).click();
@@ -92,7 +87,6 @@ describe('the site admin’s accounts page', () => {
     const admin = await createUser({ isSiteAdmin: true, name: 'Keeper Of Counts' });
     const { tag } = await threeSams();
     const page = await signInAs(env.browser, env.baseUrl, admin, { width: 1366, height: 900 });
-    await page.goto(`${env.baseUrl}/admin/accounts`);
     await page.getByText(/^[\d,]+ accounts in all\.$/).waitFor();
     const search = page.getByLabel('Search by name or e-mail');
     await search.fill(tag);
@@ -137,7 +131,6 @@ describe('the site admin’s accounts page', () => {
     const admin = await createUser({ isSiteAdmin: true, name: 'Keeper Of Phones' });
     const { tag, names } = await threeSams();
     const phone = await signInAs(env.browser, env.baseUrl, admin, { width: 390, height: 844 });
-    await phone.goto(`${env.baseUrl}/admin/accounts`);
     await phone.getByLabel('Search by name or e-mail').fill(tag);
     await phone.getByText(`3 accounts match “${tag}”.`).waitFor();
     expect(await phone.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
@@ -29,7 +29,7 @@ describe('leaving the build editor never drops an edit', () => {
       const page = await context.newPage();
       const pageErrors: string[] = [];
       page.on('pageerror', (err) => pageErrors.push(err.message));
-      await signInInBrowser(page, env.baseUrl, email, password, editorPath);
+      await openSignedIn(page, env.baseUrl, email, password, editorPath);
 
       // Change a figure and leave at once: no pause for the autosave, no Save button.
       const engine = page.getByRole('form', { name: 'Engine' });
@@ -94,7 +94,7 @@ describe('leaving the build editor never drops an edit', () => {
     const build = await createBuild(user.id, { title: 'The Ash Pickup' });
     const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+    await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}`);
     // The server's answer stands in for a rule only the server knows: its field error is the reason shown.
     const refusal = { error: { code: 'VALIDATION_FAILED', message: 'Check the highlighted fields.', fields: { exhaust: 'Exhaust is refused by the server for this test.' } } };
     await page.route(`**/api/builds/${build.id}/sections/engine`, (route) => route.fulfill({ status: 400, contentType: 'application/json', body: JSON.stringify(refusal) }));
@@ -121,7 +121,7 @@ describe('leaving the build editor never drops an edit', () => {
     const build = await createBuild(user.id, { title: 'The Pewter Wagon' });
     const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+    await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     // The engine's save reaches the server first, but its answer is held back until the wheels' save has answered.
     let engineSent!: () => void;
@@ -159,7 +159,7 @@ describe('leaving the build editor never drops an edit', () => {
     const build = await createBuild(user.id, { title: 'The Umber Sedan' });
     const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, email, password, '/builds');
+    await openSignedIn(page, env.baseUrl, email, password, '/builds');
     await page.getByRole('link', { name: 'The Umber Sedan' }).click();
     await page.waitForURL(`${env.baseUrl}/builds/${build.id}`);
 
@@ -193,7 +193,7 @@ describe('leaving the build editor never drops an edit', () => {
     const build = await createBuild(user.id, { title: 'The Ochre Pickup' });
     const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+    await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     await page.getByRole('button', { name: 'Add a dyno run' }).click();
     const run = page.getByRole('form', { name: 'Add a dyno run' });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Locator } from 'playwright-core';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 import { findBuild, setPublished } from '@server/services/builds/builds';
@@ -17,7 +17,7 @@ describe('brake and front-geometry numbers in the build editor', () => {
     const build = await createBuild(user.id, { title: 'The Quarry Roadster' });
     const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+    await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     // The worked example of tests/shared/calc/front-geometry.test.ts: RC 102 mm, fvsa 1860 mm.
     const chassis = page.getByRole('form', { name: 'Chassis and suspension' });

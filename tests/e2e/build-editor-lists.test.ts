@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -44,7 +44,7 @@ describe('credits and extra lines in the build editor', () => {
     page.on('request', (r) => {
       if (r.method() !== 'GET' && r.url().includes('/api/builds/')) writes.push(`${r.method()} ${r.url()}`);
     });
-    await signInInBrowser(page, env.baseUrl, email, password, editorPath);
+    await openSignedIn(page, env.baseUrl, email, password, editorPath);
 
     // Opening a full build sheet changes nothing: every panel reads as stored, none waits to save.
     const statuses = page.locator('form[aria-label] [role=status]');

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import sharp from 'sharp';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
@@ -28,7 +28,7 @@ describe('photos in the build editor', () => {
     const editorPath = `/builds/${build.id}`;
     const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, email, password, editorPath);
+    await openSignedIn(page, env.baseUrl, email, password, editorPath);
     const photos = page.getByTestId('photos-panel');
     const input = photos.locator('input[type=file]');
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Locator } from 'playwright-core';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
@@ -19,7 +19,7 @@ describe('spec-check messages in the build editor', () => {
     const build = await createBuild(user.id, { title: 'The Flint Gasser' });
     const context = await env.browser.newContext({ viewport: { width: 1366, height: 900 }, locale: 'en-GB' });
     const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+    await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     // Two figures marked measured, neither with a date.
     const engine = page.getByRole('form', { name: 'Engine' });

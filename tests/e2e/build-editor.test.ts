@@ -4,7 +4,7 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 
 const env = useBrowserAndServer();
@@ -34,7 +34,7 @@ describe('the build editor in the browser', () => {
     const pageErrors: string[] = [];
     page.on('pageerror', (err) => pageErrors.push(err.message));
 
-    await signInInBrowser(page, env.baseUrl, email, password, '/builds');
+    await openSignedIn(page, env.baseUrl, email, password, '/builds');
     await expect.poll(() => page.getByText('No builds yet').count()).toBe(1);
     await page.getByRole('button', { name: 'New build' }).click();
     // Title is required: the shared schema says so before anything is sent.
@@ -167,7 +167,7 @@ describe('the build editor in the browser', () => {
     // The desktop layout: section nav, forms and the sticky numbers panel side by side.
     const desk = await env.browser.newContext({ viewport: { width: 1280, height: 900 }, locale: 'en-GB' });
     const deskPage = await desk.newPage();
-    await signInInBrowser(deskPage, env.baseUrl, email, password, new URL(buildUrl).pathname);
+    await openSignedIn(deskPage, env.baseUrl, email, password, new URL(buildUrl).pathname);
     const panel = deskPage.getByTestId('numbers-panel');
     await expect.poll(() => panel.textContent()).toMatch(/Displacement/);
     await expect.poll(() => panel.textContent()).toMatch(/At the flywheel/);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser, DEFAULT_PASSWORD } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 import { jpegWithGps } from '../support/images';
@@ -22,10 +22,7 @@ describe('the build log: the owner writes a post on a phone; a visitor reads the
 
     const ownerPhone = await env.browser.newContext({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true });
     const editor = await ownerPhone.newPage();
-    await editor.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(`/builds/${build.id}`)}`);
-    await editor.getByLabel('E-mail').fill(email);
-    await editor.getByLabel('Password').fill(DEFAULT_PASSWORD);
-    await editor.getByRole('button', { name: 'Sign in' }).click();
+    await openSignedIn(editor, env.baseUrl, email, DEFAULT_PASSWORD, `/builds/${build.id}`);
     const panel = editor.locator('section#section-log');
     await panel.getByRole('button', { name: 'Write a post' }).click();
     const form = panel.getByRole('form', { name: 'Write a post' });

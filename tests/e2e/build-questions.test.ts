@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser, DEFAULT_PASSWORD } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 import { createLogPost } from '@server/services/builds/build-log';
@@ -46,10 +46,7 @@ describe('a visitor asks on a phone without script; the owner answers in the edi
     // The owner, on a phone with script, finds it waiting in the editor and answers it.
     const ownerPhone = await env.browser.newContext({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true });
     const editor = await ownerPhone.newPage();
-    await editor.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(`/builds/${build.id}`)}`);
-    await editor.getByLabel('E-mail').fill(email);
-    await editor.getByLabel('Password').fill(DEFAULT_PASSWORD);
-    await editor.getByRole('button', { name: 'Sign in' }).click();
+    await openSignedIn(editor, env.baseUrl, email, DEFAULT_PASSWORD, `/builds/${build.id}`);
     const panel = editor.locator('section#section-questions');
     await panel.getByRole('heading', { name: 'Questions (1 waiting)' }).waitFor();
     await panel.scrollIntoViewIfNeeded();

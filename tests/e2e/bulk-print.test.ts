@@ -2,8 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
-import type { Page } from 'playwright-core';
-import { KEEP_SCREENSHOTS, SCREENSHOT_DIR, keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { KEEP_SCREENSHOTS, SCREENSHOT_DIR, keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { PDFTOPPM, pdfText, rasterize, readQr } from '../support/pdf';
 import { cardWorker, numberOnPage, pagesOf, showWithConfirmedEntries } from '../support/card-print-helpers';
@@ -11,13 +10,6 @@ import { cardWorker, numberOnPage, pagesOf, showWithConfirmedEntries } from '../
 const env = useBrowserAndServer();
 beforeAll(() => cardWorker()); // the server runs in this process; so does the worker that draws its prints
 
-async function signIn(page: Page, email: string) {
-  await page.goto(`${env.baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-}
 
 /** Pages of a PDF as PNGs beside the screenshots, to look at. */
 const pdfToPngs = (file: string, name: string, last = 2) => KEEP_SCREENSHOTS && execFileSync(PDFTOPPM, ['-r', '60', '-png', '-f', '1', '-l', String(last), file, path.join(SCREENSHOT_DIR, name)]);
@@ -32,8 +24,7 @@ describe('numbered cards in bulk, from the organiser’s entries page', () => {
     const s = await showWithConfirmedEntries(entries, { showName: 'Stonebridge Summer Nationals' });
     const context = await env.browser.newContext({ viewport: { width: 1280, height: 900 }, acceptDownloads: true });
     const page = await context.newPage();
-    await signIn(page, s.organiser.email);
-    await page.goto(`${env.baseUrl}/shows/${s.eventId}/entries`);
+    await openSignedIn(page, env.baseUrl, s.organiser.email, DEFAULT_PASSWORD, `/shows/${s.eventId}/entries`);
     const panel = page.locator('section', { has: page.getByRole('heading', { name: 'Numbered cards' }) });
     await panel.getByRole('button', { name: 'Print numbered cards' }).waitFor();
 
@@ -84,8 +75,7 @@ describe('numbered cards in bulk, from the organiser’s entries page', () => {
     // The owner downloads the card of one entry from their entries page.
     const owner = await env.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, acceptDownloads: true });
     const ownerPage = await owner.newPage();
-    await signIn(ownerPage, s.owner.email);
-    await ownerPage.goto(`${env.baseUrl}/entries`);
+    await openSignedIn(ownerPage, env.baseUrl, s.owner.email, DEFAULT_PASSWORD, '/entries');
     const third = expected[2]!;
     const cardLink = ownerPage.getByRole('link', { name: `Download the card for No. ${third.number}`, exact: true });
     await cardLink.waitFor();

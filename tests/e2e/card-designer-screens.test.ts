@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -17,12 +17,7 @@ async function openDesigner(viewport: { width: number; height: number }, story?:
   const build = await createFullBuild(user.id, story ? { story } : {});
   const context = await env.browser.newContext({ viewport, isMobile: viewport.width < 500, hasTouch: viewport.width < 500 });
   const page = await context.newPage();
-  await page.goto(`${env.baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-  await page.goto(`${env.baseUrl}/builds/${build.id}/card`);
+  await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}/card`);
   await expect.poll(() => page.getByTitle('Card preview').getAttribute('data-state')).toBe('ready');
   return { context, page };
 }

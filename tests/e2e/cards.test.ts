@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 import { mediaBoxes, pageCount } from '../support/pdf';
@@ -14,13 +14,7 @@ describe('the card designer', () => {
     const build = await createFullBuild(user.id);
     const context = await env.browser.newContext({ viewport: { width: 1280, height: 900 }, acceptDownloads: true });
     const page = await context.newPage();
-    await page.goto(`${env.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill(email);
-    await page.getByLabel('Password').fill(password);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-
-    await page.goto(`${env.baseUrl}/builds/${build.id}/card`);
+    await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}/card`);
     await expect.poll(() => page.getByRole('heading', { name: 'Windshield card' }).count()).toBe(1);
     const preview = page.getByTitle('Card preview');
     await expect.poll(() => preview.getAttribute('data-src')).toContain('design=poster&paper=letter&orientation=portrait');

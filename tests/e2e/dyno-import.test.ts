@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -17,7 +17,7 @@ async function openNewRunOnPhone(ownerName: string, facility: string) {
   const build = await createFullBuild(user.id);
   const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
   const page = await context.newPage();
-  await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+  await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}`);
   const dyno = page.getByTestId('dyno-panel');
   await dyno.getByRole('button', { name: 'Add a dyno run' }).click();
   const run = page.getByRole('form', { name: 'Add a dyno run' });

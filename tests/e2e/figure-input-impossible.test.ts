@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
@@ -10,7 +10,7 @@ describe('a figure’s live conversion', () => {
     const { user, email, password } = await createUser({ name: 'Tobin Raske' });
     const build = await createBuild(user.id, { title: 'The Cinder Sedan' });
     const page = await env.browser.newPage({ viewport: { width: 390, height: 844 }, locale: 'en-GB' });
-    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+    await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     const chassis = page.getByRole('form', { name: 'Chassis and suspension' });
     const field = chassis.getByRole('group', { name: 'Spring rate' }).first();

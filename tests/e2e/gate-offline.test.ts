@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { AuditLine } from '@server/models/audit-line';
 import { Entry } from '@server/models/entry';
 import { confirmEntryPayment } from '@server/services/entries/entries';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { showWithClasses } from '../support/event-factory';
 import { enter, enterAs, memberOf, step } from '../support/show-day-factory';
@@ -22,7 +22,7 @@ describe('the gate on a phone with no signal', () => {
 
     const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true });
     const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, gate.email, DEFAULT_PASSWORD, `/shows/${eventId}`);
+    await openSignedIn(page, env.baseUrl, gate.email, DEFAULT_PASSWORD, `/shows/${eventId}`);
     await page.getByRole('link', { name: 'Check cars in' }).click();
     await page.waitForURL(`**/gate/${eventId}`);
     await page.getByRole('heading', { name: /Gate · Autumn Field Meet/ }).waitFor();

@@ -6,7 +6,7 @@ import path from 'node:path';
 import { chromium } from 'playwright-core';
 import { Entry } from '@server/models/entry';
 import { confirmEntryPayment } from '@server/services/entries/entries';
-import { CHROMIUM, CHROMIUM_ARGS, keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { CHROMIUM, CHROMIUM_ARGS, keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { showWithClasses } from '../support/event-factory';
 import { enter, memberOf, step } from '../support/show-day-factory';
@@ -48,7 +48,7 @@ describe('the gate on a phone: walk-ups and another show’s card', () => {
     try {
       const context = await browser.newContext({ ...PHONE, permissions: ['camera'] });
       const page = await context.newPage();
-      await signInInBrowser(page, env.baseUrl, gate.email, DEFAULT_PASSWORD, `/gate/${here.eventId}`);
+      await openSignedIn(page, env.baseUrl, gate.email, DEFAULT_PASSWORD, `/gate/${here.eventId}`);
       await page.getByRole('heading', { name: /Gate · Harbour Lights Meet/ }).waitFor();
       await page.getByRole('button', { name: 'Scan a card' }).click();
       const scanned = page.getByRole('region', { name: 'Scanned car' });
@@ -71,7 +71,7 @@ describe('the gate on a phone: walk-ups and another show’s card', () => {
 
     const context = await env.browser.newContext(PHONE);
     const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, gate.email, DEFAULT_PASSWORD, `/gate/${eventId}`);
+    await openSignedIn(page, env.baseUrl, gate.email, DEFAULT_PASSWORD, `/gate/${eventId}`);
     await page.getByRole('heading', { name: /Gate · Harbour Lights Meet/ }).waitFor();
     await page.getByText('Walk-up entry').click();
     const walkUpForm = page.locator('details', { hasText: 'Walk-up entry' });

@@ -4,7 +4,7 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { chromium } from 'playwright-core';
-import { CHROMIUM, CHROMIUM_ARGS, keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { CHROMIUM, CHROMIUM_ARGS, keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { showWithClasses } from '../support/event-factory';
 import { enter, enterAs, memberOf, step } from '../support/show-day-factory';
@@ -49,13 +49,7 @@ describe('the gate on a phone', () => {
     try {
       const context = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, permissions: ['camera'] });
       const page = await context.newPage();
-      await page.goto(`${env.baseUrl}/sign-in`);
-      await page.getByLabel('E-mail').fill(gate.email);
-      await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
-      await page.getByRole('button', { name: 'Sign in' }).click();
-      await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-
-      await page.goto(`${env.baseUrl}/shows/${eventId}/gate`);
+      await openSignedIn(page, env.baseUrl, gate.email, DEFAULT_PASSWORD, `/shows/${eventId}/gate`);
       await page.getByRole('button', { name: 'Scan a card' }).click();
       const car = page.getByRole('region', { name: 'Scanned car' });
       await expect.poll(() => car.getByText('Scanned roadster').count()).toBe(1);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { Score } from '@server/models/score';
-import { keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { judgeOf, showInJudging } from '../support/judging-factory';
 
@@ -15,11 +15,7 @@ describe('judging on a phone with no signal', () => {
     const context = await env.browser.newContext({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true });
     const page = await context.newPage();
     const list = `/judge/${show.eventId}`;
-    await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(list)}`);
-    await page.getByLabel('E-mail').fill(judge.email);
-    await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(`**${list}`);
+    await openSignedIn(page, env.baseUrl, judge.email, DEFAULT_PASSWORD, list);
     await expect.poll(() => page.getByText('My cars: 0 of 4 scored').count()).toBe(1);
     // The service worker has kept the shell and its assets once it is active (it then answers the next load of /judge…).
     await expect.poll(() => page.evaluate(async () => (await navigator.serviceWorker.getRegistration('/judge'))?.active?.state)).toBe('activated');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { judgeOf, scoreItem, showInJudging } from '../support/judging-factory';
 
@@ -14,10 +14,7 @@ describe('the organiser watches judging', () => {
 
     const context = await env.browser.newContext({ viewport: { width: 1100, height: 900 } });
     const page = await context.newPage();
-    await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(`/shows/${show.eventId}`)}`);
-    await page.getByLabel('E-mail').fill(show.organiser.email);
-    await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await openSignedIn(page, env.baseUrl, show.organiser.email, DEFAULT_PASSWORD, `/shows/${show.eventId}`);
     const panel = page.locator('section', { has: page.getByRole('heading', { name: 'Judging', exact: true }) });
     await panel.getByRole('row', { name: /Pat Marker/ }).waitFor();
     expect(await panel.getByRole('row', { name: /Pat Marker/ }).innerText()).toMatch(/1 \/ 2\s+0\s+1\s+2/);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createBuild } from '../support/build-factory';
 
@@ -10,7 +10,7 @@ describe('lengths the sheet keeps in millimetres', () => {
     const { user, email, password } = await createUser({ name: 'Dace Morrow' });
     const build = await createBuild(user.id, { title: 'The Quarry Coupe' });
     const page = await env.browser.newPage({ viewport: { width: 1366, height: 900 }, locale: 'en-US' });
-    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+    await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
     const chassis = page.getByRole('form', { name: 'Chassis and suspension' });
     // A US browser works in inches: every box starts in inches.
@@ -42,7 +42,7 @@ describe('lengths the sheet keeps in millimetres', () => {
     const { user, email, password } = await createUser({ name: 'Dace Morrow' });
     const build = await createBuild(user.id, { title: 'The Flint Roadster' });
     const page = await env.browser.newPage({ viewport: { width: 1366, height: 900 }, locale: 'en-US' });
-    await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+    await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}`);
     const chassis = page.getByRole('form', { name: 'Chassis and suspension' });
     const stored = async () => {
       const res = await page.request.get(`${env.baseUrl}/api/builds/${build.id}`);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -14,7 +14,7 @@ describe('My builds in one unit system', () => {
     await createFullBuild(owner.user.id);
     const context = await env.browser.newContext({ viewport, locale: 'en-GB' });
     const page = await context.newPage();
-    await signInInBrowser(page, env.baseUrl, owner.email, owner.password);
+    await openSignedIn(page, env.baseUrl, owner.email, owner.password);
 
     const card = page.getByRole('listitem').filter({ hasText: 'Night Shift' });
     const figures = () => card.locator('dd').allInnerTexts();

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { Entry } from '@server/models/entry';
 import { confirmEntryPayment } from '@server/services/entries/entries';
-import { signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { openSignedIn, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { showWithClasses } from '../support/event-factory';
 import { enter } from '../support/show-day-factory';
@@ -15,7 +15,7 @@ async function organiserPage(email: string, next: string, timezoneId = 'UTC'): P
   // The browser's clock is in another zone than the show's, so a time shown in the browser's zone is caught.
   const context = await env.browser.newContext({ viewport: DESKTOP, timezoneId });
   const page = await context.newPage();
-  await signInInBrowser(page, env.baseUrl, email, DEFAULT_PASSWORD, next);
+  await openSignedIn(page, env.baseUrl, email, DEFAULT_PASSWORD, next);
   return page;
 }
 

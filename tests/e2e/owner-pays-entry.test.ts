@@ -3,7 +3,7 @@ import type { Browser } from 'playwright-core';
 import { config } from '@server/config';
 import { User } from '@server/models/user';
 import { Entry } from '@server/models/entry';
-import { launchBrowser, keepScreenshot } from '../support/browser';
+import { launchBrowser, keepScreenshot, openSignedIn } from '../support/browser';
 import { createBuild } from '../support/build-factory';
 import { showWithClasses } from '../support/event-factory';
 import { DEFAULT_PASSWORD, uniqueEmail } from '../support/factories';
@@ -70,12 +70,7 @@ describe('an owner entering a paid show', () => {
 
     // The organiser sees the paid entry in the show's entries table.
     const desk = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-    await desk.goto(`${env.baseUrl}/sign-in`);
-    await desk.getByLabel('E-mail').fill(organiser.email);
-    await desk.getByLabel('Password').fill(DEFAULT_PASSWORD);
-    await desk.getByRole('button', { name: 'Sign in' }).click();
-    await desk.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
-    await desk.goto(`${env.baseUrl}/shows/${eventId}/entries`);
+    await openSignedIn(desk, env.baseUrl, organiser.email, DEFAULT_PASSWORD, `/shows/${eventId}/entries`);
     const row = desk.getByRole('row', { name: /Sectioned sedan delivery/ });
     await row.waitFor();
     await expect.poll(() => row.innerText()).toMatch(/Rae Paysworth[\s\S]*Confirmed[\s\S]*Paid/);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { Build } from '@server/models/build';
 import { Entry } from '@server/models/entry';
-import { keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { showInJudging } from '../support/judging-factory';
 
@@ -53,10 +53,7 @@ describe('people’s choice on a phone with JavaScript turned off', () => {
     // The organiser's panel: one vote for car 1, one address; voiding it asks first.
     const desk = await env.browser.newContext({ viewport: { width: 1100, height: 900 } });
     const org = await desk.newPage();
-    await org.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(`/shows/${show.eventId}`)}`);
-    await org.getByLabel('E-mail').fill(show.organiser.email);
-    await org.getByLabel('Password').fill(DEFAULT_PASSWORD);
-    await org.getByRole('button', { name: 'Sign in' }).click();
+    await openSignedIn(org, env.baseUrl, show.organiser.email, DEFAULT_PASSWORD, `/shows/${show.eventId}`);
     const panel = org.locator('section', { has: org.getByRole('heading', { name: 'People’s choice', exact: true }) });
     await panel.getByRole('row', { name: /First car/ }).waitFor();
     expect(await panel.getByRole('row', { name: /First car/ }).innerText()).toMatch(/^1\s+First car\s*leading\s+Hot rods\s+1$/i);

@@ -1,16 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { DEFAULT_PASSWORD } from '../support/factories';
 import { judgedShow } from '../support/results-factory';
 
 const env = useBrowserAndServer();
 
-async function signIn(page: import('playwright-core').Page, email: string, next: string) {
-  await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-}
+const signIn = (page: import('playwright-core').Page, email: string, next: string) => openSignedIn(page, env.baseUrl, email, DEFAULT_PASSWORD, next);
 
 describe('publishing results', () => {
   it('the organiser reviews, orders a tie by hand, publishes; the public page and the owner see the results', { timeout: 400_000 }, async () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { keepScreenshot, signInInBrowser, useBrowserAndServer } from '../support/browser';
+import { keepScreenshot, openSignedIn, useBrowserAndServer } from '../support/browser';
 import { createUser } from '../support/factories';
 import { createFullBuild } from '../support/build-factory';
 
@@ -14,7 +14,7 @@ describe('the editor says what shared/ says', () => {
       const build = await createFullBuild(user.id, { vin: 'VIN-OF-THE-OWNER-1' });
       const context = await env.browser.newContext({ viewport, locale: 'en-US' });
       const page = await context.newPage();
-      await signInInBrowser(page, env.baseUrl, email, password, `/builds/${build.id}`);
+      await openSignedIn(page, env.baseUrl, email, password, `/builds/${build.id}`);
 
       const engine = page.getByRole('form', { name: 'Engine' });
       await engine.getByLabel('Bore unit').selectOption('in');

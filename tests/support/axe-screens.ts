@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContextOptions, Page } from 'playwright-core';
-import { useBrowserAndServer, signInInBrowser, keepScreenshot } from './browser';
+import { useBrowserAndServer, openSignedIn, keepScreenshot } from './browser';
 import { AxeLedger, pagesOfTheServer, screensOfTheApp, ACCEPTED } from './axe';
 import { describeShowSideWalk } from './show-side-walk';
 import { judgedShow } from './results-factory';
@@ -68,7 +68,7 @@ export function describeAccessibility(device: 'phone' | 'desktop', options: Brow
       // (its router follows the address, as on Back), so the app and axe stay loaded between screens.
       const context = async (role: string, email?: string, next = '/builds') => {
         const page = await (await env.browser.newContext({ ...options, bypassCSP: true })).newPage();
-        if (email) await signInInBrowser(page, env.baseUrl, email, DEFAULT_PASSWORD, next);
+        if (email) await openSignedIn(page, env.baseUrl, email, DEFAULT_PASSWORD, next);
         const check = async (shot?: string) => {
           await settled(page).catch((e: Error) => problems.push(`${role} at ${page.url()}: did not settle: ${e.message.split('\n')[0]}`));
           problems.push(...(await axe.check(page, role)));

@@ -16,11 +16,13 @@ import { votePagesRouter } from '@server/pages/vote-router';
  * Accessibility checks with axe-core's own engine, injected into the page (`page.addScriptTag`;
  * the context is made with `bypassCSP: true`, since the app's content security policy refuses an
  * inline script). A screen passes with no serious or critical violation, less the exceptions below.
+ * Only the rules that can report a serious or critical violation are run (`rulesThatCanFail`): the
+ * others (landmarks, heading order, region…) are moderate or minor by axe's own rule table.
  */
 const AXE_SOURCE = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
 
-/** The impacts that fail a screen. Moderate and minor findings are printed, not failed. */
-const FAILING = new Set(['serious', 'critical']);
+/** The impacts that fail a screen. */
+const FAILING = ['serious', 'critical'];
 
 /**
  * Findings we accept, each with why. `where` matches the screen's path; `target` the element's selector.
@@ -30,18 +32,45 @@ export const ACCEPTED: ReadonlyArray<{ rule: string; where?: RegExp; target?: Re
 
 type Finding = { rule: string; impact: string; help: string; targets: string[] };
 
+/** What axe-core keeps of a rule (`axe._audit.rules`): a rule's `impact`, when set, is the impact of each of its violations. */
+type AxeRule = { id: string; enabled: boolean; tags: string[]; impact?: string; any: Array<{ id: string }>; all: Array<{ id: string }>; none: Array<{ id: string }> };
+
 declare global {
   interface Window {
-    axe?: { run: (context: Document, options: object) => Promise<AxeResults> };
+    axe?: {
+      run: (context: Document, options: object) => Promise<AxeResults>;
+      _audit: { rules: AxeRule[]; data: { checks: Record<string, { impact?: string } | undefined> } };
+    };
+    /** The rules of this page's axe that can fail a screen, worked out once per page load. */
+    axeRulesThatCanFail?: string[];
   }
+}
+
+/**
+ * The rules axe runs by default (enabled, not experimental) whose violations can be serious or
+ * critical: the rule's own impact when axe gives it one (axe then puts it on every violation of the
+ * rule), else the highest impact of its checks. Runs in the page, and keeps the list there.
+ */
+function rulesThatCanFail(failing: string[]): string[] {
+  const { rules, data } = window.axe!._audit;
+  window.axeRulesThatCanFail = rules
+    .filter((r) => r.enabled && !r.tags.includes('experimental'))
+    .filter((r) => (r.impact ? [r.impact] : [...r.any, ...r.all, ...r.none].map((c) => data.checks[c.id]?.impact)).some((i) => i !== undefined && failing.includes(i)))
+    .map((r) => r.id);
+  return window.axeRulesThatCanFail;
 }
 
 /** Runs axe on the screen now shown and returns its serious and critical findings, less the accepted ones, as lines. */
 export async function axeFindings(page: Page, where: string): Promise<{ failing: string[]; minor: string[] }> {
-  if (!(await page.evaluate(() => typeof window.axe === 'object'))) await page.addScriptTag({ content: AXE_SOURCE });
+  if (!(await page.evaluate(() => typeof window.axe === 'object'))) {
+    await page.addScriptTag({ content: AXE_SOURCE });
+    // axe's rule table is read from its internals: if that ever changes shape, fail loudly rather than check nothing.
+    const rules = await page.evaluate(rulesThatCanFail, FAILING);
+    if (!['color-contrast', 'label', 'button-name', 'image-alt', 'aria-valid-attr-value'].every((r) => rules.includes(r))) throw new Error(`axe's rules that can fail look wrong: ${rules.join(', ')}`);
+  }
   const found: Finding[] = await page.evaluate(async () => {
     // No preload: it fetches every stylesheet again for one rule (css-orientation-lock), which then reports nothing.
-    const results = await window.axe!.run(document, { resultTypes: ['violations'], preload: false });
+    const results = await window.axe!.run(document, { runOnly: { type: 'rule', values: window.axeRulesThatCanFail! }, resultTypes: ['violations'], preload: false });
     return results.violations.map((v) => ({ rule: v.id, impact: v.impact ?? 'minor', help: v.help, targets: v.nodes.map((n) => n.target.join(' ')) }));
   });
   const failing: string[] = [];
@@ -50,7 +79,7 @@ export async function axeFindings(page: Page, where: string): Promise<{ failing:
     const targets = f.targets.filter((t) => !ACCEPTED.some((a) => a.rule === f.rule && (a.where?.test(where) ?? true) && (a.target?.test(t) ?? true)));
     if (targets.length === 0) continue;
     const line = `${where}: ${f.rule} (${f.impact}) ${f.help}: ${targets.slice(0, 4).join(' | ')}${targets.length > 4 ? ` … ${targets.length} in all` : ''}`;
-    (FAILING.has(f.impact) ? failing : minor).push(line);
+    (FAILING.includes(f.impact) ? failing : minor).push(line);
   }
   return { failing, minor };
 }

@@ -86,6 +86,21 @@ export function useBrowserAndServer(): BrowserAndServer {
   return env;
 }
 
+/**
+ * Signs in with the API the sign-in form uses (GET then POST /api/session with the CSRF token), in the
+ * page's own context so the browser holds the session cookie, then opens `next`: for journeys that are
+ * not about signing in, which need not load and fill the sign-in screen first. Journeys about signing
+ * in (auth, password reset, where each role lands, a turned-off account) use `signInInBrowser`.
+ */
+export async function openSignedIn(page: Page, baseUrl: string, email: string, password: string, next = '/builds'): Promise<void> {
+  const session = await page.request.get(`${baseUrl}/api/session`);
+  const { csrfToken } = (await session.json()) as { csrfToken: string };
+  const signedIn = await page.request.post(`${baseUrl}/api/session`, { data: { email, password }, headers: { 'x-csrf-token': csrfToken } });
+  if (!signedIn.ok()) throw new Error(`${email} could not sign in: ${signedIn.status()} ${await signedIn.text()}`);
+  if (!((await signedIn.json()) as { user: unknown }).user) throw new Error(`${email} is not signed in after POST /api/session`);
+  await page.goto(`${baseUrl}${next}`);
+}
+
 /** Signs in through the form, as a person would, and waits until the app has gone on to `next`. */
 export async function signInInBrowser(page: Page, baseUrl: string, email: string, password: string, next = '/builds'): Promise<void> {
   await page.goto(`${baseUrl}/sign-in?next=${encodeURIComponent(next)}`);
