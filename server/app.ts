@@ -1,16 +1,15 @@
 import expressStaticGzip from 'express-static-gzip';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
-import { pinoHttp } from 'pino-http';
 import path from 'node:path';
 import './models/index';
 import { config } from './config';
-import { httpLogSerializers, logger } from './logger';
 import { passport } from './auth/passport';
 import { sessionMiddleware } from './session-store';
 import { csrfProtection } from './middlewares/csrf';
 import { apiLimiter } from './middlewares/rate-limits';
 import { visitorTurns } from './middlewares/visitor-turns';
+import { requestLog } from './middlewares/request-log';
 import { emptyBodyIsNoBody, jsonBodiesOnly, noteEmptyBody } from './middlewares/body-type';
 import { apiNotFound, errorHandler } from './middlewares/error-handler';
 import { healthRouter } from './routes/health';
@@ -124,7 +123,7 @@ export function createApp(): Express {
       strictTransportSecurity: config.secureCookies,
     }),
   );
-  app.use(pinoHttp({ logger, serializers: httpLogSerializers, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(requestLog());
   app.use('/api', apiRouter());
   app.use(mediaRouter); // uploaded photos under /media
   app.use(votePagesRouter); // people's choice votes from the public build page (form POSTs, no session)

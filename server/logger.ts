@@ -1,11 +1,10 @@
 import { pino } from 'pino';
 import { config } from './config';
 
-export const logger = pino({
-  level: config.logLevel,
-  // Never write credentials or cookies to the log.
-  redact: ['req.headers.cookie', 'req.headers.authorization', 'req.headers["x-csrf-token"]', 'res.headers["set-cookie"]', '*.password', '*.newPassword', '*.currentPassword'],
-});
+/** Never written to the log: credentials and cookies. */
+export const LOG_REDACT = ['req.headers.cookie', 'req.headers.authorization', 'req.headers["x-csrf-token"]', 'res.headers["set-cookie"]', '*.password', '*.newPassword', '*.currentPassword'];
+
+export const logger = pino({ level: config.logLevel, redact: LOG_REDACT });
 
 // Query values that are credentials: the password-reset link carries its token in ?token=.
 const SECRET_PARAM = /token|password|secret/i;

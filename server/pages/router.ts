@@ -129,6 +129,7 @@ function sendWithVoteBoxes(req: Request, res: Response, page: CachedPage, votes:
 
 /** The show whose card's QR code was scanned (`?show=<slug>`): its entry leads the page. */
 function showFirstOf(req: Request): string | undefined {
+  if (req.query.show === undefined) return undefined; // most visits: no failed parse (and its error object) per request
   const parsed = EventSlugSchema.safeParse(req.query.show);
   return parsed.success ? parsed.data : undefined;
 }

@@ -3,10 +3,10 @@ import request from 'supertest';
 import { Writable } from 'node:stream';
 import express from 'express';
 import { pino } from 'pino';
-import { pinoHttp } from 'pino-http';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '@server/db/sequelize';
-import { httpLogSerializers } from '@server/logger';
+import { LOG_REDACT } from '@server/logger';
+import { requestLog } from '@server/middlewares/request-log';
 import { CARD_RENDER_LIMIT, PHOTO_UPLOAD_LIMIT } from '@server/middlewares/rate-limits';
 import { Photo } from '@server/models/photo';
 import { apiClient, testApp } from '../../support/api-client';
@@ -55,7 +55,7 @@ describe('malformed requests are answered as the client’s mistake, never as a 
 });
 
 describe('the request log', () => {
-  it('never writes a password-reset token (or any query value named token) to the log', async () => {
+  const logTo = (level: 'info' | 'warn') => {
     const lines: string[] = [];
     const sink = new Writable({
       write(chunk: Buffer, _enc, done) {
@@ -64,12 +64,32 @@ describe('the request log', () => {
       },
     });
     const app = express();
-    app.use(pinoHttp({ logger: pino({ level: 'info' }, sink), serializers: httpLogSerializers }));
+    app.use(requestLog(pino({ level, redact: LOG_REDACT }, sink)));
     app.get('/reset-password', (_req, res) => res.send('ok'));
-    await request(app).get('/reset-password?token=SECRETTOKENVALUE123456&units=metric').expect(200);
-    const log = lines.join('');
-    expect(log).toContain('/reset-password');
-    expect(log).not.toContain('SECRETTOKENVALUE123456');
+    app.get('/broken', (req, res) => {
+      req.log.error('something broke');
+      res.status(500).send('no');
+    });
+    return { app, log: () => lines.join('') };
+  };
+
+  it('never writes a password-reset token (or any query value named token) to the log', async () => {
+    const { app, log } = logTo('info');
+    await request(app).get('/reset-password?token=SECRETTOKENVALUE123456&units=metric').set('Cookie', 'placard.sid=COOKIEVALUE').expect(200);
+    expect(log()).toContain('/reset-password');
+    expect(log()).not.toMatch(/SECRETTOKENVALUE123456|COOKIEVALUE/);
+  });
+
+  it('above info writes no request lines, yet an error logged for a request names it, token and cookie left out', async () => {
+    const { app, log } = logTo('warn');
+    await request(app).get('/reset-password?token=SECRETTOKENVALUE123456').expect(200);
+    expect(log()).toBe('');
+    await request(app).get('/broken?token=SECRETTOKENVALUE123456&units=metric').set('Cookie', 'placard.sid=COOKIEVALUE').expect(500);
+    const line = JSON.parse(log()) as { msg: string; req: { method: string; url: string; headers: { cookie: string } } };
+    expect(line.msg).toBe('something broke');
+    expect(line.req.method).toBe('GET');
+    expect(line.req.url).toMatch(/^\/broken\?token=%5BRedacted%5D&units=metric$/);
+    expect(line.req.headers.cookie).toBe('[Redacted]');
   });
 });
 
