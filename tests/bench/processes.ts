@@ -19,16 +19,17 @@ const RUNS = Number(process.env.BENCH_RUNS ?? 3);
 const CONNECTIONS = 100;
 const base = `http://127.0.0.1:${PORT}`;
 const WITH_WRK = ensureWrk();
-const load = (paths: string[], seconds: number): Promise<Visit> => (WITH_WRK ? Promise.resolve(wrkVisit(base, paths, CONNECTIONS, seconds)) : visit(base, paths, CONNECTIONS, seconds));
+const load = (paths: string[], seconds: number, at = base, connections = CONNECTIONS): Promise<Visit> => (WITH_WRK ? wrkVisit(at, paths, connections, seconds) : visit(at, paths, connections, seconds));
 
 /** `npm start -- --web-processes n` in a process group of its own; resolves once /api/health answers 200. */
-async function start(n: number): Promise<{ child: ChildProcess; output: () => string }> {
+async function start(n: number, port = PORT, env: Record<string, string> = {}): Promise<{ child: ChildProcess; output: () => string }> {
   let output = '';
+  const base = `http://127.0.0.1:${port}`;
   const child = spawn('npm', ['start', '--', '--web-processes', String(n)], {
     cwd: ROOT,
     detached: true,
     stdio: ['ignore', 'pipe', 'pipe'],
-    env: { ...process.env, PORT: String(PORT), HOST: '127.0.0.1', LOG_LEVEL: 'warn', PAYMENTS_ONLINE: 'false', MAIL_CATCHER_PORT: process.env.PLACARD_TEST_MAIL_PORT ?? '0', NODE_ENV: 'development', API_RATE_LIMIT_PER_MINUTE: '10000000' },
+    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', LOG_LEVEL: 'warn', PAYMENTS_ONLINE: 'false', MAIL_CATCHER_PORT: process.env.PLACARD_TEST_MAIL_PORT ?? '0', NODE_ENV: 'development', API_RATE_LIMIT_PER_MINUTE: '10000000', ...env },
   });
   child.stdout!.on('data', (c: Buffer) => (output += c.toString()));
   child.stderr!.on('data', (c: Buffer) => (output += c.toString()));
@@ -109,9 +110,35 @@ async function measure(n: number): Promise<{ runs: Visit[]; pages: string[]; sta
   }
 }
 
+/**
+ * The machine's own ceiling, for reading the ratio: two independent `npm start -- --web-processes 1` (no
+ * cluster, nothing shared but PostgreSQL and the machine) on two ports, each with its own load generator
+ * and half the connections, at the same time. Their sum over one of them alone is what a second process
+ * can add on these two cores, whatever the cluster module does.
+ */
+async function measureIndependentPair(): Promise<{ runs: Visit[]; pages: string[] }> {
+  const first = await start(1);
+  const second = await start(1, PORT + 1, { RUN_JOBS: 'false' });
+  const otherBase = `http://127.0.0.1:${PORT + 1}`;
+  try {
+    await Promise.all([settle(first.child.pid!), settle(second.child.pid!)]);
+    const pages = await publicPages();
+    await Promise.all([load(pages, 5), load(pages, 5, otherBase)]);
+    const runs = await repeat(RUNS, async () => {
+      const [a, b] = await Promise.all([load(pages, SECONDS, base, CONNECTIONS / 2), load(pages, SECONDS, otherBase, CONNECTIONS / 2)]);
+      return { ...a, rps: a.rps + b.rps, requests: a.requests + b.requests, errors: a.errors + b.errors, p50: Math.max(a.p50, b.p50), p99: Math.max(a.p99, b.p99), errorKinds: [a.errorKinds, b.errorKinds].filter(Boolean).join('; ') };
+    });
+    return { runs, pages };
+  } finally {
+    await stop(second.child);
+    await stop(first.child);
+  }
+}
+
 async function main() {
   const one = await measure(1);
   const two = await measure(2);
+  const pair = await measureIndependentPair();
   const m = (runs: Visit[], pick: (v: Visit) => number) => median(runs.map(pick));
   const gain = m(two.runs, (v) => v.rps) / m(one.runs, (v) => v.rps);
   const errors = [...one.runs, ...two.runs].reduce((t, v) => t + v.errors, 0);
@@ -121,8 +148,13 @@ async function main() {
       measured: `${rate(m(x.runs, (v) => v.rps))} (runs: ${x.runs.map((v) => Math.round(v.rps)).join(', ')}), p50 ${ms(m(x.runs, (v) => v.p50))}, p99 ${ms(m(x.runs, (v) => v.p99))}; ready in ${x.startedS.toFixed(0)} s${x.restarts ? `, ${x.restarts} web processes restarted` : ''}${x.runs.some((v) => v.errors) ? `; errors: ${x.runs.map((v) => v.errorKinds).filter(Boolean).join('; ')}` : ''}`,
     })),
     { what: 'two processes / one', measured: `${ratio(gain)}${errors ? `, ${errors} errors` : ''}`, goal: '≥ 1.6 ×', met: gain >= 1.6 && errors === 0 },
+    {
+      what: 'the machine: two independent single processes / one',
+      measured: `${ratio(m(pair.runs, (v) => v.rps) / m(one.runs, (v) => v.rps))} (${rate(m(pair.runs, (v) => v.rps))}, runs: ${pair.runs.map((v) => Math.round(v.rps)).join(', ')}; each its own load generator, ${CONNECTIONS / 2} connections)`,
+    },
   ], [
     'Each is measured once its processes have finished starting (under a fifth of a core together for a second) and after 5 s of warm-up.',
+    'The last row is the ceiling on this machine: two servers that share nothing but PostgreSQL, loaded at once; the cluster cannot do better than it.',
     WITH_WRK
       ? 'The load generator is wrk (one thread, C) on the same two cores as the server processes and PostgreSQL: it takes a small share of them.'
       : 'The load generator is autocannon on the same two cores as the server processes and PostgreSQL (wrk could not be installed): it takes about as much CPU per request as a server process, so two processes cannot have both cores to themselves.',

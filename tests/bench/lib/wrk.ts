@@ -2,7 +2,7 @@
 // server with itself on more cores. autocannon parses every answer in JavaScript and takes about as much
 // CPU per request as the server it measures; on a 2-core machine that share is taken from the server.
 // wrk's share is a small fraction of it. Installed on first use when we may (root), like the tests' tools.
-import { spawnSync } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -39,15 +39,26 @@ function millis(text: string | undefined): number {
   return Number(m[1]) * { us: 0.001, ms: 1, s: 1000, m: 60_000 }[m[2] as 'us' | 'ms' | 's' | 'm'];
 }
 
+/** wrk's output, once it has run. */
+function runWrk(args: string[]): Promise<string> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(WRK, args, { stdio: ['ignore', 'pipe', 'pipe'] });
+    let out = '';
+    let err = '';
+    child.stdout.on('data', (c: Buffer) => (out += c.toString()));
+    child.stderr.on('data', (c: Buffer) => (err += c.toString()));
+    child.on('error', reject);
+    child.on('close', (code) => (code === 0 ? resolve(out) : reject(new Error(`wrk failed: ${err || out}`))));
+  });
+}
+
 /** `connections` visitors on one wrk thread, asking for `paths` in turn for `seconds`. */
-export function wrkVisit(base: string, paths: string[], connections: number, seconds: number, headers: Record<string, string> = {}): Visit {
+export async function wrkVisit(base: string, paths: string[], connections: number, seconds: number, headers: Record<string, string> = {}): Promise<Visit> {
   const dir = mkdtempSync(path.join(tmpdir(), 'placard-wrk-'));
   try {
     const file = path.join(dir, 'walk.lua');
     writeFileSync(file, script(paths, { ...BROWSER_HEADERS, ...headers }));
-    const r = spawnSync(WRK, ['-t1', `-c${connections}`, `-d${seconds}s`, '--latency', '--timeout', '10s', '-s', file, base], { encoding: 'utf8' });
-    if (r.status !== 0) throw new Error(`wrk failed: ${r.stderr || r.stdout}`);
-    const out = r.stdout;
+    const out = await runWrk(['-t1', `-c${connections}`, `-d${seconds}s`, '--latency', '--timeout', '10s', '-s', file, base]);
     const rps = Number(/Requests\/sec:\s+([\d.]+)/.exec(out)?.[1]);
     const requests = Number(/(\d+) requests in/.exec(out)?.[1]);
     const socket = /Socket errors: connect (\d+), read (\d+), write (\d+), timeout (\d+)/.exec(out);
