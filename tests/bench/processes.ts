@@ -154,7 +154,7 @@ async function main() {
     },
   ], [
     'Each is measured once its processes have finished starting (under a fifth of a core together for a second) and after 5 s of warm-up.',
-    'The last row is the ceiling on this machine: two servers that share nothing but PostgreSQL, loaded at once; the cluster cannot do better than it.',
+    'The last row is the ceiling on this machine: two servers that share nothing but PostgreSQL, loaded at once: what a second process can add here, whatever the cluster module does.',
     WITH_WRK
       ? 'The load generator is wrk (one thread, C) on the same two cores as the server processes and PostgreSQL: it takes a small share of them.'
       : 'The load generator is autocannon on the same two cores as the server processes and PostgreSQL (wrk could not be installed): it takes about as much CPU per request as a server process, so two processes cannot have both cores to themselves.',
