@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { Writable } from 'node:stream';
 import express from 'express';
-import { pino } from 'pino';
+import { pino, type Logger } from 'pino';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '@server/db/sequelize';
 import { LOG_REDACT } from '@server/logger';
@@ -67,7 +67,7 @@ describe('the request log', () => {
     app.use(requestLog(pino({ level, redact: LOG_REDACT }, sink)));
     app.get('/reset-password', (_req, res) => res.send('ok'));
     app.get('/broken', (req, res) => {
-      req.log.error('something broke');
+      (req as typeof req & { log: Logger }).log.error('something broke'); // as the error handler logs
       res.status(500).send('no');
     });
     return { app, log: () => lines.join('') };
