@@ -13,6 +13,9 @@ export async function prepareTestDatabase(): Promise<() => Promise<void>> {
   const { migrate } = await import('@server/db/migrator');
   await sequelize.query('DROP SCHEMA public CASCADE; CREATE SCHEMA public; DROP SCHEMA IF EXISTS pgboss CASCADE;');
   await migrate();
+  // Commits of the test database do not wait for the disk: nothing here must outlive a crash of the machine,
+  // and every commit is still atomic and seen at once. (The restart tests use a cluster of their own.)
+  await sequelize.query(`ALTER DATABASE "${TEST_ENV.DB_NAME}" SET synchronous_commit = off`);
   const { startMailCatcher } = await import('@server/mail/catcher');
   const catcher = await startMailCatcher(Number(TEST_ENV.MAIL_CATCHER_PORT));
   // The one mail worker of the run, as the server would run it: test files queue, this process sends.
