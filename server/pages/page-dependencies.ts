@@ -22,8 +22,8 @@ export const PAGE_SOURCES = {
   build_log_posts: ['build:build_id'],
   build_questions: ['build:build_id'],
   users: ['user:id', 'users'],
-  events: ['event:id', 'events'],
-  event_classes: ['event:event_id'],
+  events: ['event:id', 'events', 'show:id'],
+  event_classes: ['event:event_id', 'show:event_id'],
   entries: ['event:event_id', 'build:build_id'],
   published_results: ['event:event_id'],
 } as const satisfies Record<string, readonly string[]>;
@@ -32,17 +32,21 @@ export const PAGE_SOURCES = {
 export const pageTags = {
   /** The home page: the newest published builds (and their owners), and the shows taking entries. */
   home: () => ['builds', 'users', 'events'],
-  /** A car's page: the build, its owner, and each show it is entered in (its class, number and vote). */
-  build: (buildId: number, ownerId: number, eventIds: number[]) => [`build:${buildId}`, `user:${ownerId}`, ...eventIds.map((id) => `event:${id}`)],
+  /**
+   * A car's page: the build, its owner, and each show it is entered in: the show's own row and classes
+   * (`show:`; its name, status, voting, the class name), while its own entry names the build. Another
+   * car's entry (a check-in every few seconds on show day) leaves it alone, as `event:` would not.
+   */
+  build: (buildId: number, ownerId: number, eventIds: number[]) => [`build:${buildId}`, `user:${ownerId}`, ...eventIds.map((id) => `show:${id}`)],
   /** A show's page: the show, its classes, entries and results, and the title of each car listed. */
   event: (eventId: number, buildIds: number[]) => [`event:${eventId}`, ...buildIds.map((id) => `build:${id}`)],
 };
 
 const quote = (s: string) => `'${s.replace(/'/g, "''")}'`;
 
-/** SQL that (re)installs the trigger of every table in PAGE_SOURCES; a migration runs it whenever the list changes. */
-export function pageChangeTriggersSql(): string {
-  const perTable = Object.entries(PAGE_SOURCES).map(
+/** SQL that (re)installs the trigger of every table in PAGE_SOURCES (or an older list, for a migration's down); a migration runs it whenever the list changes. */
+export function pageChangeTriggersSql(sources: Record<string, readonly string[]> = PAGE_SOURCES): string {
+  const perTable = Object.entries(sources).map(
     ([table, tags]) => `
     DROP TRIGGER IF EXISTS placard_page_change ON ${table};
     CREATE TRIGGER placard_page_change AFTER INSERT OR UPDATE OR DELETE ON ${table}

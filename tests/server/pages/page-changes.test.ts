@@ -96,6 +96,24 @@ describe('a change to a show reaches its cached public pages at once', () => {
     expect(queries).toBe(before);
     expect(publicPageCache.size).toBeGreaterThan(0);
   });
+
+  it('another car’s check-in leaves a car’s cached page in place; its class renamed reaches it', async () => {
+    const show = await showInJudging({ notArrived: 1 });
+    const code = show.owner.build.code; // the first car entered
+    const late = show.entries.at(-1)!;
+    await cachedText(`/c/${code}`);
+    await checkIn(show.organiser.client, show.eventId, late.number);
+    // The control: the show's page hears of the check-in...
+    await expect.poll(async () => (await textOf(`/e/${show.slug}`)).match(/On the field/g)?.length, soon).toBe(show.entries.length);
+    // ...while the first car's page was never dropped.
+    const before = queries;
+    await get(`/c/${code}`).expect(200);
+    expect(queries, 'the car’s page served from the cache').toBe(before);
+
+    const classId = show.entries[0]!.classId;
+    expect((await show.organiser.client.patch(`/api/events/${show.eventId}/classes/${classId}`, { name: 'Renamed hot rods', capacity: null })).status).toBe(200);
+    await expect.poll(() => textOf(`/c/${code}`), soon).toContain('Renamed hot rods');
+  });
 });
 
 describe('a change to the build over time reaches the car’s cached page at once', () => {
