@@ -15,7 +15,7 @@ export const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.u
 const SESSION = '/api/session';
 
 /** The lazy screens of `client/src/app/router.tsx`, by their source path (the build manifest's keys). */
-const MODULES = {
+export const SCREEN_MODULES = {
   signIn: 'src/features/session/components/sign-in-page.tsx',
   judgeLayout: 'src/features/judging/components/judge-layout.tsx',
   judgeHome: 'src/features/judging/components/judge-home-page.tsx',
@@ -36,20 +36,20 @@ type Screen = {
 
 /** Each worker's screens: the chunks the judge-sw.js and gate-sw.js keep come from these (and what they import). */
 export const OFFLINE_AREAS = {
-  judge: [MODULES.judgeLayout, MODULES.judgeHome, MODULES.judgeCars, MODULES.scoreSheet],
-  gate: [MODULES.gate],
+  judge: [SCREEN_MODULES.judgeLayout, SCREEN_MODULES.judgeHome, SCREEN_MODULES.judgeCars, SCREEN_MODULES.scoreSheet],
+  gate: [SCREEN_MODULES.gate],
 };
 
 /** App addresses opened cold (from a link, a bookmark, a reload), in the router's order; keep in step with router.tsx. */
 export const CLIENT_SCREENS: Screen[] = [
-  { path: /^\/sign-in\/?$/, modules: [MODULES.signIn], data: () => SESSION },
-  { path: /^\/judge\/?$/, modules: [MODULES.judgeLayout, MODULES.judgeHome], data: () => SESSION, offline: 'judge' },
-  { path: /^\/judge\/(\d{1,15})\/?$/, modules: [MODULES.judgeLayout, MODULES.judgeCars], data: (id) => `/api/events/${id!}/judging/mine`, offline: 'judge' },
-  { path: /^\/judge\/(\d{1,15})\/cars\/\d{1,15}\/?$/, modules: [MODULES.judgeLayout, MODULES.scoreSheet], data: (id) => `/api/events/${id!}/judging/mine`, offline: 'judge' },
-  { path: /^\/judge\//, modules: [MODULES.judgeLayout], offline: 'judge' },
-  { path: /^\/gate\/(\d{1,15})\/?$/, modules: [MODULES.gate], data: (id) => `/api/events/${id!}`, offline: 'gate' },
+  { path: /^\/sign-in\/?$/, modules: [SCREEN_MODULES.signIn], data: () => SESSION },
+  { path: /^\/judge\/?$/, modules: [SCREEN_MODULES.judgeLayout, SCREEN_MODULES.judgeHome], data: () => SESSION, offline: 'judge' },
+  { path: /^\/judge\/(\d{1,15})\/?$/, modules: [SCREEN_MODULES.judgeLayout, SCREEN_MODULES.judgeCars], data: (id) => `/api/events/${id!}/judging/mine`, offline: 'judge' },
+  { path: /^\/judge\/(\d{1,15})\/cars\/\d{1,15}\/?$/, modules: [SCREEN_MODULES.judgeLayout, SCREEN_MODULES.scoreSheet], data: (id) => `/api/events/${id!}/judging/mine`, offline: 'judge' },
+  { path: /^\/judge\//, modules: [SCREEN_MODULES.judgeLayout], offline: 'judge' },
+  { path: /^\/gate\/(\d{1,15})\/?$/, modules: [SCREEN_MODULES.gate], data: (id) => `/api/events/${id!}`, offline: 'gate' },
   // The gate's worker keeps the page at /gate: it needs the gate's chunks named too.
-  { path: /^\/gate(\/|$)/, modules: [MODULES.gate], offline: 'gate' },
+  { path: /^\/gate(\/|$)/, modules: [SCREEN_MODULES.gate], offline: 'gate' },
 ];
 
 type ManifestChunk = { file: string; isEntry?: boolean; imports?: string[]; dynamicImports?: string[]; css?: string[] };

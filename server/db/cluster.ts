@@ -9,6 +9,7 @@ import { userInfo } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import pg from 'pg';
+import { installDebianPackages } from '../debian-packages';
 
 const PROJECT_ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const DB_USER = 'placard';
@@ -35,10 +36,7 @@ function findBinDir(): string | undefined {
 function installPostgres(): string {
   if (!isRoot()) throw new Error("PostgreSQL's server binaries are missing: install Debian's `postgresql` package.");
   console.log("Installing Debian's postgresql package (first run on this machine)…");
-  for (const args of [['update'], ['install', '-y', '--no-install-recommends', 'postgresql']]) {
-    const r = spawnSync('apt-get', args, { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
-    if (r.status !== 0) throw new Error(`apt-get ${args.join(' ')} failed`);
-  }
+  installDebianPackages(['postgresql']);
   const dir = findBinDir();
   if (!dir) throw new Error('PostgreSQL installed but initdb was not found under /usr/lib/postgresql');
   return dir;

@@ -111,6 +111,3 @@ export function gzipChunks(p: PagePieces, fill: (mark: string) => string): { chu
   out.push(FINAL_BLOCK, trailer);
   return { chunks: out, length: out.reduce((n, b) => n + b.length, 0) };
 }
-
-/** The same, as one buffer. */
-export const joinGzip = (p: PagePieces, fill: (mark: string) => string): Buffer => Buffer.concat(gzipChunks(p, fill).chunks);

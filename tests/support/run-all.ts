@@ -4,12 +4,13 @@
 // rules live there) are `npm run check`, which CI runs after the tests; PLACARD_CHECKS=1 runs them
 // beside the tests as well. `npm test -- <files>` (or `--project <name>`) runs just those;
 // `npm run test:quick` is the unit and api projects.
-import { spawn, spawnSync } from 'node:child_process';
+import { spawn } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ensureDatabase } from '@server/db/cluster';
 import { buildClientIfStale } from '@server/cli/build-client';
+import { installDebianPackages } from '@server/debian-packages';
 import { CHROMIUM } from './browser';
 
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
@@ -27,10 +28,7 @@ function ensureTools() {
   if (!missing.length) return;
   if (process.getuid?.() !== 0) throw new Error(`Missing Debian packages for the tests: ${missing.join(', ')} (apt-get install ${missing.join(' ')}).`);
   console.log(`Installing Debian's ${missing.join(' and ')} for the tests…`);
-  for (const args of [['update'], ['install', '-y', '--no-install-recommends', ...missing]]) {
-    const r = spawnSync('apt-get', args, { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
-    if (r.status !== 0) throw new Error(`apt-get ${args.join(' ')} failed`);
-  }
+  installDebianPackages(missing);
 }
 
 type Outcome = { name: string; status: number; seconds: number; output: string };

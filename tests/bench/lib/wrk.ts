@@ -2,7 +2,8 @@
 // server with itself on more cores. autocannon parses every answer in JavaScript and takes about as much
 // CPU per request as the server it measures; on a 2-core machine that share is taken from the server.
 // wrk's share is a small fraction of it. Installed on first use when we may (root), like the tests' tools.
-import { spawn, spawnSync } from 'node:child_process';
+import { spawn } from 'node:child_process';
+import { installDebianPackages } from '@server/debian-packages';
 import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -16,8 +17,8 @@ export function ensureWrk(): boolean {
   if (existsSync(WRK)) return true;
   if (process.getuid?.() !== 0) return false;
   console.log("Installing Debian's wrk for the bench…");
-  const r = spawnSync('apt-get', ['install', '-y', '--no-install-recommends', 'wrk'], { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
-  return r.status === 0 && existsSync(WRK);
+  installDebianPackages(['wrk']);
+  return existsSync(WRK);
 }
 
 const lua = (s: string) => `"${s.replace(/[\\"]/g, (c) => `\\${c}`)}"`;

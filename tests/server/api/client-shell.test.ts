@@ -5,21 +5,16 @@ import path from 'node:path';
 import express from 'express';
 import { testApp } from '../../support/api-client';
 import { sendCompressedJson } from '@server/middlewares/send-compressed';
+import { CLIENT_DIST, SCREEN_MODULES } from '@server/client-shell';
 
 // npm test builds the client first; the manifest is the build's own account of which file holds which screen.
-const DIST = path.resolve(import.meta.dirname, '../../../dist/client');
+const DIST = CLIENT_DIST;
 type Chunk = { file: string; isEntry?: boolean; imports?: string[]; dynamicImports?: string[]; css?: string[] };
 const manifest = JSON.parse(readFileSync(path.join(DIST, '.vite/manifest.json'), 'utf8')) as Record<string, Chunk>;
 const router = readFileSync(path.resolve(import.meta.dirname, '../../../client/src/app/router.tsx'), 'utf8');
 
-const SCREENS = {
-  signIn: 'src/features/session/components/sign-in-page.tsx',
-  judgeLayout: 'src/features/judging/components/judge-layout.tsx',
-  judgeHome: 'src/features/judging/components/judge-home-page.tsx',
-  judgeCars: 'src/features/judging/components/judge-cars-page.tsx',
-  scoreSheet: 'src/features/judging/components/score-sheet-page.tsx',
-  gate: 'src/features/show-day/components/gate-page.tsx',
-};
+// The server's own list of lazy screens: each must be a chunk of the build and a lazy import of the router.
+const SCREENS = SCREEN_MODULES;
 
 /**
  * Every file a screen may load, its dynamic imports included (not the entry's: those are the app's other

@@ -120,16 +120,20 @@ async function printFinished(client: RemoteClient, show: Show, printId: number) 
   return { print: print!, pages: (await PDFDocument.load(file.body as Buffer)).getPageCount() };
 }
 
+/** The show's organiser starts its bulk print, keeps pressing download, and the print is waited for mid-way. */
+async function printStartedAndMidWay(show: Show) {
+  const organiser = await organiserOf(show);
+  const started = await organiser.post(`/api/events/${show.eventId}/card-prints`, {});
+  expect(started.status).toBe(202);
+  const printId = (started.body as { print: { id: number } }).print.id;
+  const downloads = downloadsWhilePrinting(organiser, show, printId);
+  return { organiser, printId, downloads, mid: await midPrint(printId) };
+}
+
 describe('job workers that stop in the middle of a bulk print', () => {
   it('a worker killed with SIGKILL: another takes the print over and finishes it, and no partial file is ever served', async () => {
     const show = shows[0];
-    const organiser = await organiserOf(show);
-    const started = await organiser.post(`/api/events/${show.eventId}/card-prints`, {});
-    expect(started.status).toBe(202);
-    const printId = (started.body as { print: { id: number } }).print.id;
-    const downloads = downloadsWhilePrinting(organiser, show, printId);
-
-    const mid = await midPrint(printId);
+    const { organiser, printId, downloads, mid } = await printStartedAndMidWay(show);
     const victim = workerOf(mid)!;
     const survivor = workers.find((w) => w !== victim)!;
     expect(victim, `held by ${mid.heldBy}`).toBeDefined();
@@ -159,13 +163,7 @@ describe('job workers that stop in the middle of a bulk print', () => {
     expect(third, 'the third worker was started by the test before').toBeDefined();
     workers.push(await third!);
     const show = shows[1];
-    const organiser = await organiserOf(show);
-    const started = await organiser.post(`/api/events/${show.eventId}/card-prints`, {});
-    expect(started.status).toBe(202);
-    const printId = (started.body as { print: { id: number } }).print.id;
-    const downloads = downloadsWhilePrinting(organiser, show, printId);
-
-    const mid = await midPrint(printId);
+    const { organiser, printId, downloads, mid } = await printStartedAndMidWay(show);
     const stopped = workerOf(mid)!;
     expect(stopped, `held by ${mid.heldBy}`).toBeDefined();
     stopped.child.kill('SIGTERM');
