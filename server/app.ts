@@ -1,5 +1,5 @@
 import expressStaticGzip from 'express-static-gzip';
-import express, { type Express } from 'express';
+import express, { type Express, type Request, type RequestHandler, type Response } from 'express';
 import helmet from 'helmet';
 import path from 'node:path';
 import './models/index';
@@ -46,6 +46,8 @@ import { votePagesRouter } from './pages/vote-router';
 import { buildLogPagesRouter } from './pages/build-log-router';
 import { resultsRouter } from './routes/results';
 import { CLIENT_DIST, clientShellHtml } from './client-shell';
+import { firstScreenFor, FIRST_SCREENS_FOR_SOMEONE } from './first-screens/first-screen';
+import { policyWithEarlyScript } from './first-screens/early-script';
 import { sendCompressed } from './middlewares/send-compressed';
 
 
@@ -90,17 +92,26 @@ function clientRouter() {
   );
   // The rest (the service workers, the icons): an hour, revalidated; the .br or .gz copy when the browser takes it.
   client.use(expressStaticGzip(CLIENT_DIST, { enableBrotli: true, orderPreference: ['br', 'gz'], index: false, serveStatic: { index: false, maxAge: '1h' } }));
-  // The app's page, naming what this address's screen needs (server/client-shell.ts).
-  client.get('/{*splat}', (req, res) => {
-    const html = clientShellHtml(req.path);
-    if (html === null) {
-      res.status(503).type('text/plain').send('The client is not built yet: run `npm run build` (npm start does it for you).');
-      return;
-    }
-    res.set('Cache-Control', 'no-cache').type('html');
-    sendCompressed(req, res, html);
-  });
+  // The app's page, naming what this address's screen needs (server/client-shell.ts), with the first screen the
+  // server draws for it (first-screens/): the gate's needs the person's session, read when it can be.
+  client.get(FIRST_SCREENS_FOR_SOMEONE, ...sessionIfReadable, sendAppPage);
+  client.get('/{*splat}', sendAppPage);
   return client;
+}
+
+/** The session for a page that only draws more with it: a database away for a moment costs that, not the page. */
+const sessionIfReadable: RequestHandler[] = [...sessionMiddleware, passport.session()].map((read) => (req, res, next) => read(req, res, () => next()));
+
+async function sendAppPage(req: Request, res: Response) {
+  const screen = await firstScreenFor(req);
+  const html = clientShellHtml(req.path, screen?.html);
+  if (html === null) {
+    res.status(503).type('text/plain').send('The client is not built yet: run `npm run build` (npm start does it for you).');
+    return;
+  }
+  if (screen) res.set('Content-Security-Policy', policyWithEarlyScript(String(res.getHeader('Content-Security-Policy') ?? '')));
+  res.set('Cache-Control', screen?.personal ? 'private, no-cache' : 'no-cache').type('html');
+  sendCompressed(req, res, html);
 }
 
 /** What each kind of payment reference confirms when its webhook arrives: wired here, in one place. */

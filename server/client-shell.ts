@@ -8,6 +8,7 @@ import { existsSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { logger } from './logger';
+import { EARLY_SCRIPT } from './first-screens/early-script';
 
 export const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -94,17 +95,30 @@ const attr = (url: string) => {
   return url;
 };
 
-/** The app's page for `pathname`, with its screen's hints; null when the client is not built. */
-export function clientShellHtml(pathname: string): string | null {
+/** Where the built page's opening text stands: a first screen drawn by the server takes its place. */
+const OPENING = '<p aria-live="polite">Opening…</p>';
+
+/**
+ * The app's page for `pathname`, with its screen's hints and, when the server drew one (first-screens/), that
+ * first screen in place of the opening text with the script that holds its form; null when the client is not built.
+ */
+export function clientShellHtml(pathname: string, firstScreen?: string): string | null {
   const b = readBuilt();
   if (!b) return null;
+  const html = firstScreen ? withFirstScreen(b.html, firstScreen) : b.html;
   try {
-    return withHints(b, pathname);
+    return withHints({ ...b, html }, pathname);
   } catch (err) {
     // A screen moved without this file: the page still works, only slower on one bar (the test names the screen).
     logger.warn({ err }, 'the app page is sent without its screen hints');
-    return b.html;
+    return html;
   }
+}
+
+function withFirstScreen(html: string, screen: string): string {
+  if (!html.includes(OPENING) || !html.includes('</body>')) throw new Error('The built index.html has no opening text to replace (server/client-shell.ts).');
+  // Functions, not strings, as replacements: a show's name may hold `$&`, which a string replacement would expand.
+  return html.replace(OPENING, () => screen).replace('</body>', () => `  <script>${EARLY_SCRIPT}</script>\n  </body>`);
 }
 
 function withHints(b: Built, pathname: string): string {

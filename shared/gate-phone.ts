@@ -11,3 +11,14 @@ export const CHECK_IN_UNDO_SECONDS = 60;
 
 /** At most this many queued check-ins go in one request (a phone sends the rest next). */
 export const GATE_SYNC_MAX = 100;
+
+/** The gate screen's words, the same on the screen the server draws first and on the app's (server/first-screens). */
+export const GATE_WORDS = {
+  heading: (showName: string) => `Gate · ${showName}`,
+  scan: 'Scan a card',
+  entryNumber: 'Entry number',
+  find: 'Find',
+  /** Shown when the number is sent before the app's code has arrived: the app sends it on arrival. */
+  findingSoon: 'Finding that car as soon as the gate has finished loading…',
+  stillLoading: 'The camera and the check-in buttons are on their way.',
+} as const;

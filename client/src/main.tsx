@@ -3,6 +3,7 @@ import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router-dom';
 import { Providers } from './app/providers';
 import { router } from './app/router';
+import { keepEarlyForms } from './lib/early-form';
 import './styles.css';
 
 /**
@@ -37,12 +38,15 @@ function routerReady(): Promise<void> {
   });
 }
 
-void Promise.all([stylesheetApplied(), routerReady()]).then(() =>
-  createRoot(document.getElementById('root')!).render(
+void Promise.all([stylesheetApplied(), routerReady()]).then(() => {
+  const root = document.getElementById('root')!;
+  // A first screen the server drew (the gate, sign-in) may hold what the person typed: the app's screen takes it on.
+  keepEarlyForms(root);
+  createRoot(root).render(
     <StrictMode>
       <Providers>
         <RouterProvider router={router} />
       </Providers>
     </StrictMode>,
-  ),
-);
+  );
+});

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { useSignIn } from '../api/sign-in';
 import { fieldMessages, splitServerErrors } from '@client/lib/form-errors';
@@ -10,6 +10,8 @@ import { safeNext } from '../safe-next';
 import { landingAfterSignIn } from '@client/features/shows/api/landing';
 import { useSession } from '../api/get-session';
 import { AlreadySignedIn } from './already-signed-in';
+import { SIGN_IN_WORDS } from '@shared/sign-in-words';
+import { useEarlyForm } from '@client/lib/early-form';
 
 const FIELDS = ['email', 'password'] as const;
 type Field = (typeof FIELDS)[number];
@@ -28,6 +30,15 @@ export function SignInPage() {
   const { data: session } = useSession();
   const [formError, setFormError] = useState('');
   const [errors, setErrors] = useState<Partial<Record<Field, string>>>({});
+  // What was typed on the form the server drew before this code arrived carries on here; if it was sent, it is sent now.
+  const early = useEarlyForm('sign-in');
+  const formRef = useRef<HTMLFormElement>(null);
+  const earlySend = useRef(early?.sent ?? false);
+  useEffect(() => {
+    if (!earlySend.current || !formRef.current) return;
+    earlySend.current = false;
+    formRef.current.requestSubmit();
+  });
 
   const showErrors = (form: HTMLFormElement, fields: Partial<Record<Field, string>>) => {
     setErrors(fields);
@@ -62,14 +73,14 @@ export function SignInPage() {
 
   return (
     <div className="mx-auto max-w-md">
-      <PageHeader title="Sign in" />
+      <PageHeader title={SIGN_IN_WORDS.heading} />
       {params.get('reset') === 'done' ? <Notice tone="ok">Your password is changed. Sign in with the new one.</Notice> : null}
-      <form onSubmit={(e) => void onSubmit(e)} onFocus={() => void loadSchema()} noValidate className="mt-4 flex flex-col gap-4">
+      <form ref={formRef} onSubmit={(e) => void onSubmit(e)} onFocus={() => void loadSchema()} noValidate className="mt-4 flex flex-col gap-4">
         {formError ? <Notice tone="danger">{formError}</Notice> : null}
-        <TextField label="E-mail" name="email" type="email" autoComplete="email" inputMode="email" onChange={clearOnEdit('email')} error={errors.email} />
-        <TextField label="Password" name="password" type="password" autoComplete="current-password" onChange={clearOnEdit('password')} error={errors.password} />
+        <TextField label={SIGN_IN_WORDS.email} name="email" type="email" autoComplete="email" inputMode="email" defaultValue={early?.values.email} autoFocus={early?.focused === 'email'} onChange={clearOnEdit('email')} error={errors.email} />
+        <TextField label={SIGN_IN_WORDS.password} name="password" type="password" autoComplete="current-password" defaultValue={early?.values.password} autoFocus={early?.focused === 'password'} onChange={clearOnEdit('password')} error={errors.password} />
         <Button type="submit" busy={signIn.isPending}>
-          Sign in
+          {SIGN_IN_WORDS.send}
         </Button>
       </form>
       <p className="mt-6 flex flex-wrap justify-between gap-2 text-sm">

@@ -1,7 +1,7 @@
-import { lazy, Suspense, useCallback, useEffect, useState } from 'react';
+import { lazy, Suspense, useCallback, useEffect, useRef, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { formatMoney } from '@shared/calc/money';
-import { CHECK_IN_UNDO_SECONDS, PAYMENT_STATE_LABELS } from '@shared/gate-phone';
+import { CHECK_IN_UNDO_SECONDS, GATE_WORDS, PAYMENT_STATE_LABELS } from '@shared/gate-phone';
 import type { GateCard } from '@shared/schemas/show-day';
 import { useShow } from '../api/get-show';
 import { useCheckInAtGate } from '../api/check-in-at-gate';
@@ -18,6 +18,7 @@ import { useOnline } from '@client/features/judging/components/use-online';
 import { useUndoCheckIn } from '../api/undo-check-in';
 import { useQrScanner, warmQrDecoder } from './use-qr-scanner';
 import { LoadingState, ErrorState } from '@client/components/ui/states';
+import { useEarlyForm } from '@client/lib/early-form';
 
 // The walk-up form (a form library and the shared schemas) loads once the screen is up: it is for a car with no
 // entry, online only, and the gate's first load on one bar stays light. The gate's worker keeps its chunk too.
@@ -116,7 +117,10 @@ export function GatePage() {
   const [notFound, setNotFound] = useState<string | null>(null);
   const [justChecked, setJustChecked] = useState(false);
   const [camera, setCamera] = useState(false);
-  const [typed, setTyped] = useState('');
+  // The number typed (and perhaps sent) on the gate the server drew before this code arrived carries on here.
+  const early = useEarlyForm('gate');
+  const [typed, setTyped] = useState(() => (early?.values.number ?? '').replace(/\D/g, ''));
+  const earlySend = useRef(early?.sent ?? false);
   const found = (c: GateCard) => {
     setCard(c);
     setNotFound(null);
@@ -146,14 +150,21 @@ export function GatePage() {
   const { videoRef, error: cameraError } = useQrScanner(camera, onCode);
 
   const name = show.data?.name ?? roster.data?.show.name;
+  const open = show.data?.abilities.checkIn ?? roster.data?.show.checkIn ?? false;
+  useEffect(() => {
+    // Sent before the code arrived: looked up once the gate is known to be open (a closed gate says why instead).
+    if (!open || !earlySend.current) return;
+    earlySend.current = false;
+    const n = Number(typed);
+    if (Number.isInteger(n) && n > 0) find({ number: n });
+  }, [open, typed, find]);
   if (!name && (show.isPending || (roster.isPending && roster.fetchStatus !== 'idle'))) return <LoadingState />;
   if (!name) return <ErrorState error={show.error ?? roster.error} />;
-  const open = show.data?.abilities.checkIn ?? roster.data?.show.checkIn ?? false;
   const lookUpError = lookUp.error instanceof ApiError && lookUp.error.code === 'NETWORK' ? null : lookUp.error;
   return (
     <div className="mx-auto max-w-md text-lg">
       <div className="flex items-baseline justify-between gap-2">
-        <h1 className="font-display text-3xl uppercase">Gate · {name}</h1>
+        <h1 className="font-display text-3xl uppercase">{GATE_WORDS.heading(name)}</h1>
         <span role="status" className={`shrink-0 font-display text-sm uppercase tracking-wide ${online ? 'text-ok' : 'text-danger'}`}>{online ? 'Online' : 'No signal'}</span>
       </div>
       {!open ? <p role="alert" className="mt-3 border-l-8 border-caution p-3">The gate opens on show day; an organiser opens it from the show's steps.</p> : null}
@@ -162,7 +173,7 @@ export function GatePage() {
           <div className="mt-3 border-2 border-ink bg-ink">
             {camera ? <video ref={videoRef} muted playsInline aria-label="Camera" className="aspect-square w-full object-cover" /> : null}
             <button type="button" className={`${big} border-ink ${camera ? 'bg-paper text-ink' : 'bg-signal-ink text-paper'}`} onClick={() => setCamera((c) => !c)}>
-              {camera ? 'Stop camera' : 'Scan a card'}
+              {camera ? 'Stop camera' : GATE_WORDS.scan}
             </button>
           </div>
           {cameraError ? <p role="alert" className="mt-2 text-danger">{cameraError}</p> : null}
@@ -174,8 +185,8 @@ export function GatePage() {
               if (Number.isInteger(n) && n > 0) find({ number: n });
             }}
           >
-            <input inputMode="numeric" pattern="[0-9]*" aria-label="Entry number" placeholder="Entry number" value={typed} onChange={(e) => setTyped(e.target.value.replace(/\D/g, ''))} className="min-h-12 min-w-0 flex-1 border-2 border-ink bg-white px-3 text-2xl tabular-nums" />
-            <button type="submit" className="min-h-12 min-w-24 shrink-0 border-2 border-ink bg-ink px-4 font-display text-xl uppercase text-paper">Find</button>
+            <input inputMode="numeric" pattern="[0-9]*" aria-label={GATE_WORDS.entryNumber} placeholder={GATE_WORDS.entryNumber} autoFocus={early?.focused === 'number'} value={typed} onChange={(e) => setTyped(e.target.value.replace(/\D/g, ''))} className="min-h-12 min-w-0 flex-1 border-2 border-ink bg-white px-3 text-2xl tabular-nums" />
+            <button type="submit" className="min-h-12 min-w-24 shrink-0 border-2 border-ink bg-ink px-4 font-display text-xl uppercase text-paper">{GATE_WORDS.find}</button>
           </form>
           {lookUp.isPending ? <LoadingState label="Looking up…" /> : null}
           {lookUpError ? <p role="alert" className="mt-3 border-l-8 border-danger p-3 text-xl font-semibold">{lookUpError.message}</p> : null}

@@ -1,0 +1,21 @@
+// The one script in the app's page itself, run as soon as a first screen the server drew is parsed (seconds
+// before the app's code arrives on one bar of signal). It holds a drawn form's send until the app takes over
+// (client/src/lib/early-form.ts reads what was typed and whether it was sent), instead of letting the browser
+// leave the page and drop the app's code half-downloaded. A page kept by a phone's service worker for another
+// address (its gate page is one copy for every show) shows the opening text instead, not the wrong show's gate.
+import { createHash } from 'node:crypto';
+
+export const EARLY_SCRIPT =
+  "(function(){var d=document.querySelector('[data-early-path]');if(!d)return;" +
+  "if(d.getAttribute('data-early-path')!==location.pathname){d.outerHTML='<p aria-live=\"polite\">Opening…</p>';return}" +
+  "d.querySelectorAll('form').forEach(function(f){f.addEventListener('submit',function(e){e.preventDefault();" +
+  "f.setAttribute('data-early-sent','');var n=d.querySelector('[data-early-note]');if(n)n.hidden=false})})})();";
+
+/** The script's CSP source: the policy allows this inline script by its hash and no other (CSP 3, §8.4 hash-source). */
+export const EARLY_SCRIPT_SOURCE = `'sha256-${createHash('sha256').update(EARLY_SCRIPT).digest('base64')}'`;
+
+/** Helmet's policy with the early script allowed: only the pages that carry it get the wider policy. */
+export function policyWithEarlyScript(policy: string): string {
+  if (!/(^|;)\s*script-src /.test(policy)) throw new Error(`No script-src to widen in: ${policy}`);
+  return policy.replace(/((?:^|;)\s*script-src )/, `$1${EARLY_SCRIPT_SOURCE} `);
+}

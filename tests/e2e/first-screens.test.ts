@@ -1,0 +1,78 @@
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { keepScreenshot, useBrowserAndServer } from '../support/browser';
+import { createUser, DEFAULT_PASSWORD } from '../support/factories';
+import { showWithClasses } from '../support/event-factory';
+import { enter, memberOf, step } from '../support/show-day-factory';
+
+const env = useBrowserAndServer();
+const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
+
+/**
+ * The app's entry script held back, as on one bar of signal where it takes seconds: the test decides when it
+ * arrives. Also gathers what the browser refused under the page's content security policy.
+ */
+async function withAppHeld(page: Page) {
+  let release!: () => void;
+  const arrived = new Promise<void>((resolve) => (release = resolve));
+  await page.route(/\/assets\/index-[\w-]+\.js$/, async (route) => {
+    await arrived;
+    await route.continue();
+  });
+  const refused: string[] = [];
+  page.on('console', (m) => void (m.type() === 'error' && /Content Security Policy/i.test(m.text()) ? refused.push(m.text()) : undefined));
+  return { release, refused };
+}
+
+describe('the first screens the server draws before the app arrives', () => {
+  it('let the gate type a number and send it before the app has loaded; the app looks the car up when it arrives', async () => {
+    const show = await showWithClasses({ settings: { name: 'Lamplight Meet' }, classes: [{ name: 'Hot rods' }] });
+    await enter(show.eventId, show.classIds[0]!, 'Early bird coupe');
+    await step(show.organiser.client, show.eventId, 'close_registration', 'open_gate');
+    const gate = await memberOf(show.eventId, 'gate', 'Gale Gatewood');
+
+    const page = await env.browser.newPage(PHONE);
+    const session = await page.request.get(`${env.baseUrl}/api/session`);
+    const { csrfToken } = (await session.json()) as { csrfToken: string };
+    expect((await page.request.post(`${env.baseUrl}/api/session`, { data: { email: gate.email, password: DEFAULT_PASSWORD }, headers: { 'x-csrf-token': csrfToken } })).ok()).toBe(true);
+    const app = await withAppHeld(page);
+    await page.goto(`${env.baseUrl}/gate/${show.eventId}`, { waitUntil: 'commit' });
+
+    // The app's code has not arrived: the box is the server's, and it takes the number now.
+    await page.getByRole('heading', { name: 'Gate · Lamplight Meet' }).waitFor();
+    expect(await page.locator('[data-early-path]').count()).toBe(1);
+    await page.getByLabel('Entry number').fill('1');
+    await page.getByLabel('Entry number').press('Enter');
+    await page.getByText('Finding that car as soon as the gate has finished loading…').waitFor();
+    expect(page.url()).toBe(`${env.baseUrl}/gate/${show.eventId}`); // the send was held, the page never left
+    await keepScreenshot(page, 'first-screen-gate-held.png');
+
+    app.release();
+    const car = page.getByRole('region', { name: 'Scanned car' });
+    await car.getByText('No. 1').waitFor();
+    expect(await car.getByText('Early bird coupe').count()).toBe(1);
+    expect(await car.getByRole('button', { name: 'Check in' }).count()).toBe(1);
+    expect(await page.getByLabel('Entry number').inputValue()).toBe('1');
+    expect(await page.locator('[data-early-path]').count()).toBe(0);
+    expect(app.refused).toEqual([]);
+    await keepScreenshot(page, 'first-screen-gate-answered.png');
+  });
+
+  it('let a person type their e-mail and password and send them before the app has loaded, and signs them in when it arrives', async () => {
+    const person = await createUser({ name: 'Rhea Early' });
+    const page = await env.browser.newPage(PHONE);
+    const app = await withAppHeld(page);
+    await page.goto(`${env.baseUrl}/sign-in?next=${encodeURIComponent('/builds')}`, { waitUntil: 'commit' });
+    await page.getByLabel('E-mail').fill(person.email);
+    await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByText('Signing you in as soon as the page has finished loading…').waitFor();
+    expect(await page.locator('[data-early-path]').count()).toBe(1);
+    await keepScreenshot(page, 'first-screen-sign-in-held.png');
+
+    app.release();
+    await page.waitForURL(`${env.baseUrl}/builds`);
+    await page.getByRole('heading', { name: 'My builds' }).waitFor();
+    expect(app.refused).toEqual([]);
+  });
+});

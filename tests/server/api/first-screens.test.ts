@@ -1,0 +1,83 @@
+import { describe, expect, it } from 'vitest';
+import { createHash } from 'node:crypto';
+import request from 'supertest';
+import { testApp } from '../../support/api-client';
+import { showWithClasses, signedIn } from '../../support/event-factory';
+import { memberOf, step } from '../../support/show-day-factory';
+
+import { EARLY_SCRIPT_SOURCE } from '@server/first-screens/early-script';
+
+// The first screens the server draws on app addresses opened cold on a weak signal (server/first-screens/).
+const root = (html: string) => html.slice(html.indexOf('<div id="root">'), html.indexOf('<noscript>'));
+const early = (html: string) => /data-early-path="([^"]+)"/.exec(html)?.[1] ?? null;
+const inlineScripts = (html: string) => [...html.matchAll(/<script>([\s\S]*?)<\/script>/g)].map((m) => m[1]!);
+const scriptSrc = (res: request.Response) => /script-src ([^;]+)/.exec(String(res.headers['content-security-policy']))![1]!;
+const sha256 = (text: string) => `'sha256-${createHash('sha256').update(text).digest('base64')}'`;
+
+/** Every inline script the page carries is allowed by the page's own policy (by hash), and no page allows more. */
+function expectPolicyFits(res: request.Response) {
+  const scripts = inlineScripts(res.text);
+  const allowed = scriptSrc(res).split(' ').filter((s) => s.startsWith("'sha256-"));
+  expect(allowed).toEqual(scripts.map(sha256));
+}
+
+describe('the first screen the server draws before the app arrives', () => {
+  it('is the sign-in form on /sign-in, the same for everyone, with its one script allowed by hash', async () => {
+    const res = await request(testApp()).get('/sign-in').set('Accept-Encoding', 'identity');
+    expect(res.status).toBe(200);
+    expect(early(res.text)).toBe('/sign-in');
+    expect(res.text).toContain('data-early-form="sign-in"');
+    expect(res.text).toMatch(/<label>E-mail<input [^>]*type="email"[^>]*name="email"/);
+    expect(res.text).toMatch(/<label>Password<input [^>]*type="password"[^>]*name="password"/);
+    expect(root(res.text)).not.toContain('Opening…');
+    expect(res.headers['cache-control']).toBe('no-cache');
+    expect(inlineScripts(res.text)).toHaveLength(1);
+    expect(scriptSrc(res)).toContain(EARLY_SCRIPT_SOURCE);
+    expectPolicyFits(res);
+  });
+
+  it('is the gate’s number box for the gate staff of a show on show day only, kept out of shared caches', async () => {
+    // A name with what a string replacement or the HTML would misread: it must come out as typed, escaped.
+    const show = await showWithClasses({ settings: { name: 'Dusk $& Dawn <Meet>' } });
+    const gate = await memberOf(show.eventId, 'gate', 'Gale Gatewood');
+    const stranger = await signedIn({ name: 'No Role' });
+    const address = `/gate/${show.eventId}`;
+
+    // Before show day the gate is closed: the opening text, and the app says why.
+    const closed = await gate.client.get(address).set('Accept-Encoding', 'identity');
+    expect(closed.status).toBe(200);
+    expect(early(closed.text)).toBeNull();
+    expect(root(closed.text)).toContain('Opening…');
+    expect(inlineScripts(closed.text)).toHaveLength(0);
+    expectPolicyFits(closed);
+
+    await step(show.organiser.client, show.eventId, 'close_registration', 'open_gate');
+    const open = await gate.client.get(address).set('Accept-Encoding', 'identity');
+    expect(early(open.text)).toBe(address);
+    expect(open.text).toContain('<h1>Gate · Dusk $&amp; Dawn &lt;Meet&gt;</h1>');
+    const box = /<input [^>]*name="number"[^>]*>/.exec(open.text)?.[0];
+    expect(box).toContain('aria-label="Entry number"');
+    expect(box).toContain('inputMode="numeric"');
+    expect(open.headers['cache-control']).toBe('private, no-cache');
+    expectPolicyFits(open);
+    // The page still names the screen's chunks and first answer.
+    expect(open.text).toContain(`<link rel="preload" as="fetch" crossorigin href="/api/events/${show.eventId}">`);
+
+    // The organiser may check in too; nobody else gets the box: not signed in, no role, another show's id.
+    expect(early((await show.organiser.client.get(address)).text)).toBe(address);
+    for (const res of [await request(testApp()).get(address), await stranger.client.get(address), await gate.client.get(`/gate/${show.eventId + 1000}`)]) {
+      expect(res.status).toBe(200);
+      expect(early(res.text)).toBeNull();
+      expectPolicyFits(res);
+    }
+  });
+
+  it('is not drawn on the other app addresses, whose policy stays without any inline script', async () => {
+    for (const address of ['/judge/12', '/builds', '/sign-in/extra', '/gate/12/more']) {
+      const res = await request(testApp()).get(address).set('Accept-Encoding', 'identity');
+      expect(res.status, address).toBe(200);
+      expect(early(res.text), address).toBeNull();
+      expect(scriptSrc(res), address).toBe("'self'");
+    }
+  });
+});
