@@ -40,8 +40,10 @@ function routerReady(): Promise<void> {
 
 void Promise.all([stylesheetApplied(), routerReady()]).then(() => {
   const root = document.getElementById('root')!;
-  // A first screen the server drew (the gate, sign-in) may hold what the person typed: the app's screen takes it on.
-  keepEarlyForms(root);
+  // A first screen the server drew (sign-in, the gate, a judge's cars) may hold what the person typed, or a car
+  // they tapped: the app's screen takes it on.
+  const tapped = keepEarlyForms(root);
+  if (tapped) void router.navigate(tapped);
   createRoot(root).render(
     <StrictMode>
       <Providers>

@@ -1,15 +1,18 @@
 // The one script in the app's page itself, run as soon as a first screen the server drew is parsed (seconds
-// before the app's code arrives on one bar of signal). It holds a drawn form's send until the app takes over
-// (client/src/lib/early-form.ts reads what was typed and whether it was sent), instead of letting the browser
-// leave the page and drop the app's code half-downloaded. A page kept by a phone's service worker for another
-// address (its gate page is one copy for every show) shows the opening text instead, not the wrong show's gate.
+// before the app's code arrives on one bar of signal). It holds a drawn form's send, or a tapped link, until the
+// app takes over (client/src/lib/early-form.ts reads what was typed, whether it was sent, where to go), instead of
+// letting the browser leave the page and drop the app's code half-downloaded. A page opened through a phone's
+// service worker shows the opening text instead: its app is kept on the phone and opens within a second, and the
+// page the worker keeps (one copy for every show) may be another show's or out of date.
 import { createHash } from 'node:crypto';
 
 export const EARLY_SCRIPT =
   "(function(){var d=document.querySelector('[data-early-path]');if(!d)return;" +
-  "if(d.getAttribute('data-early-path')!==location.pathname){d.outerHTML='<p aria-live=\"polite\">Opening…</p>';return}" +
-  "d.querySelectorAll('form').forEach(function(f){f.addEventListener('submit',function(e){e.preventDefault();" +
-  "f.setAttribute('data-early-sent','');var n=d.querySelector('[data-early-note]');if(n)n.hidden=false})})})();";
+  "if(d.getAttribute('data-early-path')!==location.pathname||navigator.serviceWorker&&navigator.serviceWorker.controller)" +
+  "{d.outerHTML='<p aria-live=\"polite\">Opening…</p>';return}" +
+  "function held(e){e.preventDefault();var n=d.querySelector('[data-early-note]');if(n)n.hidden=false}" +
+  "d.querySelectorAll('form').forEach(function(f){f.addEventListener('submit',function(e){held(e);f.setAttribute('data-early-sent','')})});" +
+  "d.querySelectorAll('a[href]').forEach(function(a){a.addEventListener('click',function(e){held(e);d.setAttribute('data-early-go',a.getAttribute('href'))})})})();";
 
 /** The script's CSP source: the policy allows this inline script by its hash and no other (CSP 3, §8.4 hash-source). */
 export const EARLY_SCRIPT_SOURCE = `'sha256-${createHash('sha256').update(EARLY_SCRIPT).digest('base64')}'`;

@@ -135,7 +135,7 @@ async function main() {
     const secs = (x: number | null | undefined) => (x === null || x === undefined || !Number.isFinite(x) ? '–' : `${(x / 1000).toFixed(2)} s`);
     rows.push({
       what: 'sign-in, judge first load, gate on one bar',
-      measured: `first text ${secs(signIn?.fcp)} / ${secs(judge?.fcp)} / ${secs(gate?.fcp)}; gate usable ${secs(gate?.usable)}${weak.some((t) => t.error) ? ' (a load failed)' : ''}${kept && existsSync(kept) ? ' (weak-link table)' : ''}`,
+      measured: `first text ${secs(signIn?.fcp)} / ${secs(judge?.fcp)} / ${secs(gate?.fcp)}; gate usable ${secs(gate?.usable)} (first answer ${secs(gate?.answered)})${weak.some((t) => t.error) ? ' (a load failed)' : ''}${kept && existsSync(kept) ? ' (weak-link table)' : ''}`,
       goal: 'first text < 2 s; gate usable < 3 s',
       met: weak.length === 3 && weak.every((t) => !t.error && t.fcp < 2000) && (gate?.usable ?? Infinity) < 3000,
     });

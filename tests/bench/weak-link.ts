@@ -21,12 +21,26 @@ export function appPages(s: Awaited<ReturnType<typeof startBenchServer>>['scenar
   return [
     { name: 'sign-in /sign-in', path: '/sign-in', kind: 'signed-in', usable: (p) => p.getByLabel('E-mail').waitFor() },
     { name: "judge's cars /judge/<id>", path: `/judge/${eventId}`, kind: 'signed-in', as: who(s.judges[0]!.email), usable: (p) => p.getByText(/My cars/).first().waitFor(), workerScope: '/judge' },
-    { name: 'gate /gate/<id>', path: `/gate/${eventId}`, kind: 'signed-in', as: who(s.gate.email), usable: (p) => p.getByLabel('Entry number').waitFor() },
+    {
+      name: 'gate /gate/<id>',
+      path: `/gate/${eventId}`,
+      kind: 'signed-in',
+      as: who(s.gate.email),
+      usable: (p) => p.getByLabel('Entry number').waitFor(),
+      // The gate's first look-up, typed and sent the moment the box shows: its answer needs the app's code.
+      answer: async (p) => {
+        await p.getByLabel('Entry number').fill('1');
+        await p.getByLabel('Entry number').press('Enter');
+        await p.getByRole('region', { name: 'Scanned car' }).getByText('No. 1').waitFor();
+      },
+    },
   ];
 }
 
 export function weakRow(t: WeakTiming): Row {
-  const measured = t.error ? `failed: ${t.error}` : `text ${secs(t.fcp)}, largest paint ${secs(t.lcp)}${t.usable !== null ? `, usable ${secs(t.usable)}` : ''}`;
+  const measured = t.error
+    ? `failed: ${t.error}`
+    : `text ${secs(t.fcp)}, largest paint ${secs(t.lcp)}${t.usable !== null ? `, usable ${secs(t.usable)}` : ''}${t.answered ? `, first answer ${secs(t.answered)}` : ''}`;
   if (t.kind === 'public') return { what: t.name, measured, goal: 'text < 1.5 s, largest paint < 2.5 s', met: !t.error && t.fcp < 1500 && t.lcp < 2500 };
   const done = t.usable ?? t.lcp;
   if (t.warm) return { what: `${t.name}, worker warm`, measured, goal: 'usable < 1 s', met: !t.error && done < 1000 };
@@ -50,6 +64,7 @@ async function main() {
     if (process.env.BENCH_RUN_DIR) writeFileSync(path.join(process.env.BENCH_RUN_DIR, WEAK_RESULTS), JSON.stringify(results));
     printTable(`Weak link: Chromium at ${WEAK_LINK.kbitPerSecond} kbit/s, ${WEAK_LINK.rttMs} ms round trip, phone viewport, empty cache`, results.map(weakRow), [
       'first text = first contentful paint; largest paint = the last largest-contentful-paint entry; usable = the screen\'s main control shown.',
+      'Sign-in and the gate are drawn by the server (server/first-screens/): their box takes input at first paint; first answer = No. 1 typed and sent then, until the gate shows the car (it needs the app\'s code).',
       'With the worker warm its own fetch of the page is not slowed (Chromium emulates the network per page, not for the worker): the figure leaves out one round trip.',
     ]);
   } finally {

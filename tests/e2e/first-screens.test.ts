@@ -4,6 +4,7 @@ import { keepScreenshot, useBrowserAndServer } from '../support/browser';
 import { createUser, DEFAULT_PASSWORD } from '../support/factories';
 import { showWithClasses } from '../support/event-factory';
 import { enter, memberOf, step } from '../support/show-day-factory';
+import { judgeOf, showInJudging } from '../support/judging-factory';
 
 const env = useBrowserAndServer();
 const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
@@ -12,6 +13,12 @@ const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isM
  * The app's entry script held back, as on one bar of signal where it takes seconds: the test decides when it
  * arrives. Also gathers what the browser refused under the page's content security policy.
  */
+async function signInThroughApi(page: Page, email: string) {
+  const session = await page.request.get(`${env.baseUrl}/api/session`);
+  const { csrfToken } = (await session.json()) as { csrfToken: string };
+  expect((await page.request.post(`${env.baseUrl}/api/session`, { data: { email, password: DEFAULT_PASSWORD }, headers: { 'x-csrf-token': csrfToken } })).ok()).toBe(true);
+}
+
 async function withAppHeld(page: Page) {
   let release!: () => void;
   const arrived = new Promise<void>((resolve) => (release = resolve));
@@ -32,9 +39,7 @@ describe('the first screens the server draws before the app arrives', () => {
     const gate = await memberOf(show.eventId, 'gate', 'Gale Gatewood');
 
     const page = await env.browser.newPage(PHONE);
-    const session = await page.request.get(`${env.baseUrl}/api/session`);
-    const { csrfToken } = (await session.json()) as { csrfToken: string };
-    expect((await page.request.post(`${env.baseUrl}/api/session`, { data: { email: gate.email, password: DEFAULT_PASSWORD }, headers: { 'x-csrf-token': csrfToken } })).ok()).toBe(true);
+    await signInThroughApi(page, gate.email);
     const app = await withAppHeld(page);
     await page.goto(`${env.baseUrl}/gate/${show.eventId}`, { waitUntil: 'commit' });
 
@@ -73,6 +78,28 @@ describe('the first screens the server draws before the app arrives', () => {
     app.release();
     await page.waitForURL(`${env.baseUrl}/builds`);
     await page.getByRole('heading', { name: 'My builds' }).waitFor();
+    expect(app.refused).toEqual([]);
+  });
+
+  it('let a judge tap a car on their list before the app has loaded; the app opens that car’s sheet when it arrives', async () => {
+    const show = await showInJudging({ carsPerClass: 1 });
+    const judge = await judgeOf(show.eventId, 'Jude Early');
+    expect((await show.organiser.client.put(`/api/events/${show.eventId}/judges/${judge.user.id}/classes`, { allClasses: true })).status).toBe(200);
+    const [, second] = show.entries;
+
+    const page = await env.browser.newPage(PHONE);
+    await signInThroughApi(page, judge.email);
+    const app = await withAppHeld(page);
+    await page.goto(`${env.baseUrl}/judge/${show.eventId}`, { waitUntil: 'commit' });
+    await page.getByText(/^My cars: 0 of 2 scored/).waitFor();
+    await keepScreenshot(page, 'first-screen-judge-held.png');
+    await page.getByRole('link', { name: new RegExp(`^${second!.number} `) }).click();
+    await page.getByText('Opening that car as soon as your cars have finished loading…').waitFor();
+    expect(page.url()).toBe(`${env.baseUrl}/judge/${show.eventId}`);
+
+    app.release();
+    await page.waitForURL(`${env.baseUrl}/judge/${show.eventId}/cars/${second!.id}`);
+    await page.getByRole('heading', { name: 'Car 2' }).waitFor(); // the factory's second car
     expect(app.refused).toEqual([]);
   });
 });

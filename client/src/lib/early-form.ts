@@ -10,8 +10,11 @@ export type EarlyForm = { values: Record<string, string>; sent: boolean; focused
 
 const kept = new Map<string, EarlyForm>();
 
-/** Reads every drawn form under `root` (main.tsx calls this once, before the first render). */
-export function keepEarlyForms(root: ParentNode): void {
+/**
+ * Reads every drawn form under `root` (main.tsx calls this once, before the first render), and answers the
+ * address of a link tapped on the drawn screen (held by its early script), for the app to open at once.
+ */
+export function keepEarlyForms(root: ParentNode): string | null {
   for (const form of Array.from(root.querySelectorAll<HTMLFormElement>('form[data-early-form]'))) {
     const values: Record<string, string> = {};
     let focused: string | null = null;
@@ -25,6 +28,9 @@ export function keepEarlyForms(root: ParentNode): void {
     }
     kept.set(form.dataset.earlyForm!, { values, sent: form.hasAttribute('data-early-sent'), focused });
   }
+  const go = root.querySelector<HTMLElement>('[data-early-go]')?.dataset.earlyGo ?? null;
+  // Only an address of this app, as the drawn screen's own links are.
+  return go && go.startsWith('/') && !go.startsWith('//') ? go : null;
 }
 
 /** The drawn form of this screen as the person left it, for the screen's first render only (a later visit starts empty). */

@@ -16,10 +16,12 @@ export type WeakPage = {
   as?: { email: string; password: string };
   /** What a person waits for on an app screen: the page is usable once it shows. */
   usable?: (page: Page) => Promise<void>;
+  /** What the person then does at once, and the answer they wait for (timed from the same start). */
+  answer?: (page: Page) => Promise<void>;
   /** Also measure a second load once the page's service worker (this scope) is active. */
   workerScope?: string;
 };
-export type WeakTiming = { name: string; kind: WeakPage['kind']; warm: boolean; fcp: number; lcp: number; usable: number | null; error?: string };
+export type WeakTiming = { name: string; kind: WeakPage['kind']; warm: boolean; fcp: number; lcp: number; usable: number | null; answered?: number | null; error?: string };
 
 const LCP_WATCH = `window.__lcp = 0; try { new PerformanceObserver((l) => { for (const e of l.getEntries()) window.__lcp = e.startTime; }).observe({ type: 'largest-contentful-paint', buffered: true }); } catch {}`;
 
@@ -30,18 +32,23 @@ async function throttle(context: BrowserContext, page: Page): Promise<void> {
   await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: WEAK_LINK.rttMs, downloadThroughput: bytesPerSecond, uploadThroughput: bytesPerSecond });
 }
 
-async function timings(page: Page, usable: WeakPage['usable']): Promise<{ fcp: number; lcp: number; usable: number | null }> {
+async function timings(page: Page, usable: WeakPage['usable'], answer?: WeakPage['answer']): Promise<{ fcp: number; lcp: number; usable: number | null; answered: number | null }> {
   let usableAt: number | null = null;
+  let answeredAt: number | null = null;
   if (usable) {
     await usable(page);
     usableAt = await page.evaluate(() => performance.now());
+  }
+  if (answer) {
+    await answer(page);
+    answeredAt = await page.evaluate(() => performance.now());
   }
   await page.waitForLoadState('load');
   await page.waitForTimeout(300); // a last LCP entry may follow the load event by a frame or two
   return page.evaluate((u) => {
     const fcp = performance.getEntriesByName('first-contentful-paint')[0]?.startTime ?? NaN;
-    return { fcp, lcp: (window as unknown as { __lcp: number }).__lcp || NaN, usable: u };
-  }, usableAt);
+    return { fcp, lcp: (window as unknown as { __lcp: number }).__lcp || NaN, usable: u.usable, answered: u.answered };
+  }, { usable: usableAt, answered: answeredAt });
 }
 
 async function signIn(context: BrowserContext, base: string, who: { email: string; password: string }): Promise<void> {
@@ -67,7 +74,7 @@ export async function measureWeakLink(browser: Browser, base: string, pages: Wea
       const page = await context.newPage();
       await throttle(context, page);
       await page.goto(`${base}${p.path}`, { waitUntil: 'commit' });
-      out.push({ name: p.name, kind: p.kind, warm: false, ...(await timings(page, p.usable)) });
+      out.push({ name: p.name, kind: p.kind, warm: false, ...(await timings(page, p.usable, p.answer)) });
       if (p.workerScope) {
         const scope = p.workerScope;
         const deadline = Date.now() + 60_000;

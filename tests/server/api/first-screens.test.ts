@@ -5,6 +5,7 @@ import { testApp } from '../../support/api-client';
 import { showWithClasses, signedIn } from '../../support/event-factory';
 import { memberOf, step } from '../../support/show-day-factory';
 
+import { judgeOf, scoreItem, showInJudging } from '../../support/judging-factory';
 import { EARLY_SCRIPT_SOURCE } from '@server/first-screens/early-script';
 
 // The first screens the server draws on app addresses opened cold on a weak signal (server/first-screens/).
@@ -72,8 +73,35 @@ describe('the first screen the server draws before the app arrives', () => {
     }
   });
 
+  it('is a judge’s cars for that judge while the show is judged: each car’s state as the server holds it, then the cars still expected', async () => {
+    const show = await showInJudging({ carsPerClass: 2, notArrived: 1 });
+    const judge = await judgeOf(show.eventId, 'Jude Early');
+    expect((await show.organiser.client.put(`/api/events/${show.eventId}/judges/${judge.user.id}/classes`, { allClasses: true })).status).toBe(200);
+    const view = (await judge.client.get(`/api/events/${show.eventId}/judging/mine`)).body;
+    const [first] = view.cars as Array<{ entryId: number; number: number; title: string }>;
+    const sent = await judge.client.post(`/api/events/${show.eventId}/scores`, { scores: view.criteria.map((c: { id: number }) => scoreItem(first!.entryId, c.id, 5)) });
+    expect(sent.status, JSON.stringify(sent.body)).toBe(200);
+
+    const address = `/judge/${show.eventId}`;
+    const res = await judge.client.get(address).set('Accept-Encoding', 'identity');
+    expect(early(res.text)).toBe(address);
+    expect(res.text).toContain(`My cars: 1 of ${view.cars.length} scored · 1 still expected`);
+    expect(res.text).toContain(`<a href="/judge/${show.eventId}/cars/${first!.entryId}"><b>${first!.number}</b> ${first!.title} · `);
+    expect(res.text).toMatch(/ · Scored<\/a>/);
+    expect(res.text).toMatch(/ · Not yet<\/a>/);
+    expect(res.text).toContain('Still expected at the gate');
+    expect(res.headers['cache-control']).toBe('private, no-cache');
+    expectPolicyFits(res);
+
+    // The organiser, another show's judge address and nobody signed in: the app's own answer, no list.
+    for (const other of [await show.organiser.client.get(address), await judge.client.get(`/judge/${show.eventId + 1000}`), await request(testApp()).get(address)]) {
+      expect(early(other.text)).toBeNull();
+      expectPolicyFits(other);
+    }
+  });
+
   it('is not drawn on the other app addresses, whose policy stays without any inline script', async () => {
-    for (const address of ['/judge/12', '/builds', '/sign-in/extra', '/gate/12/more']) {
+    for (const address of ['/judge', '/judge/12/cars/3', '/builds', '/sign-in/extra', '/gate/12/more']) {
       const res = await request(testApp()).get(address).set('Accept-Encoding', 'identity');
       expect(res.status, address).toBe(200);
       expect(early(res.text), address).toBeNull();
