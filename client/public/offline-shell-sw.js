@@ -6,6 +6,9 @@ const AREA = self.PLACARD_OFFLINE_AREA; // 'judge' or 'gate', set by the worker 
 const PAGE = `/${AREA}`;
 const SHELL = `placard-${AREA}-shell-v1`;
 const ASSETS = `placard-${AREA}-assets-v1`;
+// Told to the server on the area's pages: the app is kept here and opens at once, so the server draws no first
+// screen into them (server/first-screens/): none is kept with someone's cars in it, and the page comes sooner.
+const KEPT = { 'X-Placard-Worker': 'app-kept' };
 
 /**
  * Everything the page names under /assets (its entry, its screen's modulepreloads, and the list of the area's
@@ -22,7 +25,7 @@ async function keepAssetsOf(html) {
 
 async function cacheShell() {
   const cache = await caches.open(SHELL);
-  const res = await fetch(PAGE, { cache: 'no-store' });
+  const res = await fetch(PAGE, { cache: 'no-store', headers: KEPT });
   if (!res.ok) return;
   const html = await res.clone().text();
   await cache.put(PAGE, res);
@@ -51,7 +54,8 @@ self.addEventListener('fetch', (event) => {
   // The area's pages: the network when there is one (and keep the newest shell), else the kept shell.
   if (req.mode === 'navigate' && url.pathname.startsWith(PAGE)) {
     event.respondWith(
-      fetch(req)
+      // A navigation's request cannot be re-sent with a header as it is; as a same-origin GET with the cookies, it can.
+      fetch(new Request(req, { headers: KEPT }))
         .then(async (res) => {
           if (res.ok) {
             await (await caches.open(SHELL)).put(PAGE, res.clone());

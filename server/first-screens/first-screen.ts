@@ -21,8 +21,13 @@ const SIGN_IN = /^\/sign-in$/;
 const GATE = /^\/gate\/(\d{1,15})$/;
 const JUDGE_CARS = /^\/judge\/(\d{1,15})$/;
 
+/** Sent by the judges' and the gate's service workers (client/public/offline-shell-sw.js): the app is on the phone. */
+export const APP_KEPT_HEADER = 'x-placard-worker';
+
 /** The screen the server draws for this address, or null. Never fails the page: at worst the opening text. */
 export async function firstScreenFor(req: Request): Promise<FirstScreen | null> {
+  // A phone whose worker keeps the app opens it within a second: a drawing would cost the page time, not save it.
+  if (req.get(APP_KEPT_HEADER)) return null;
   if (SIGN_IN.test(req.path)) return { html: signInScreenHtml(), personal: false };
   const gate = GATE.exec(req.path);
   if (gate) return gateScreen(req.user as User | undefined, Number(gate[1]));

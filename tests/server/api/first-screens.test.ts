@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
 import request from 'supertest';
 import { testApp } from '../../support/api-client';
 import { showWithClasses, signedIn } from '../../support/event-factory';
@@ -7,6 +9,7 @@ import { memberOf, step } from '../../support/show-day-factory';
 
 import { judgeOf, scoreItem, showInJudging } from '../../support/judging-factory';
 import { EARLY_SCRIPT_SOURCE } from '@server/first-screens/early-script';
+import { APP_KEPT_HEADER } from '@server/first-screens/first-screen';
 
 // The first screens the server draws on app addresses opened cold on a weak signal (server/first-screens/).
 const root = (html: string) => html.slice(html.indexOf('<div id="root">'), html.indexOf('<noscript>'));
@@ -63,6 +66,12 @@ describe('the first screen the server draws before the app arrives', () => {
     expectPolicyFits(open);
     // The page still names the screen's chunks and first answer.
     expect(open.text).toContain(`<link rel="preload" as="fetch" crossorigin href="/api/events/${show.eventId}">`);
+
+    // Through the gate's service worker the app is on the phone already: no drawing, nothing personal kept.
+    expect(readFileSync(path.resolve(import.meta.dirname, '../../../client/public/offline-shell-sw.js'), 'utf8').toLowerCase()).toContain(`'${APP_KEPT_HEADER}': 'app-kept'`);
+    const kept = await gate.client.get(address).set(APP_KEPT_HEADER, 'app-kept');
+    expect(early(kept.text)).toBeNull();
+    expect(kept.headers['cache-control']).toBe('no-cache');
 
     // The organiser may check in too; nobody else gets the box: not signed in, no role, another show's id.
     expect(early((await show.organiser.client.get(address)).text)).toBe(address);
