@@ -94,7 +94,7 @@ function clientRouter() {
   client.use(expressStaticGzip(CLIENT_DIST, { enableBrotli: true, orderPreference: ['br', 'gz'], index: false, serveStatic: { index: false, maxAge: '1h' } }));
   // The app's page, naming what this address's screen needs (server/client-shell.ts), with the first screen the
   // server draws for it (first-screens/): the gate's needs the person's session, read when it can be.
-  client.get(FIRST_SCREENS_FOR_SOMEONE, ...sessionIfReadable, sendAppPage);
+  for (const address of FIRST_SCREENS_FOR_SOMEONE) client.get(address, ...sessionIfReadable, sendAppPage);
   client.get('/{*splat}', sendAppPage);
   return client;
 }

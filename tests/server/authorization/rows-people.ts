@@ -43,6 +43,9 @@ export const PEOPLE_ROWS: Row[] = [
   { route: 'GET /c/:code', rule: 'public', ok: 200, path: (f) => `/c/${f.build.code}` },
   { route: 'GET /e/:slug', rule: 'public', ok: 200, path: (f) => `/e/${f.showA.slug}` },
   { route: 'GET /e/:slug/calendar.ics', rule: 'public', ok: 200, path: (f) => `/e/${f.showA.slug}/calendar.ics` },
+  // The app's page for everyone; what the server draws into it for whom is tests/server/api/first-screens.test.ts.
+  { route: 'GET /gate/:id', rule: 'public', ok: 200, path: (f) => `/gate/${f.showA.id}` },
+  { route: 'GET /judge/:id', rule: 'public', ok: 200, path: (f) => `/judge/${f.showA.id}` },
   { route: 'GET /{*splat}', rule: 'public', ok: 200, path: () => '/builds' },
 ];
 
