@@ -2,7 +2,9 @@
 // acts on at once (sign-in, the gate, a judge's cars). Everything else gets the opening text until the app arrives.
 import type { Request } from 'express';
 import type { User } from '../models/user';
-import { canEvent } from '../policies/event';
+import { canEvent, type EventAction } from '../policies/event';
+import type { Event } from '../models/event';
+import { IdSchema } from '@shared/schemas/params';
 import { actorInEvent } from '../services/shows/event-actor';
 import { findEvent } from '../services/shows/events';
 import { logger } from '../logger';
@@ -17,51 +19,41 @@ import { signInScreenHtml } from './sign-in-screen';
 /** The drawn screen's markup, and whether it is about the person asking (then no shared cache may keep it). */
 export type FirstScreen = { html: string; personal: boolean };
 
-const SIGN_IN = /^\/sign-in$/;
-const GATE = /^\/gate\/(\d{1,15})$/;
-const JUDGE_CARS = /^\/judge\/(\d{1,15})$/;
-
 /** Sent by the judges' and the gate's service workers (client/public/offline-shell-sw.js): the app is on the phone. */
 export const APP_KEPT_HEADER = 'x-placard-worker';
+
+/** A screen about one show for one person: drawn only when the policy allows them `action` there now. */
+type ShowScreen = { path: RegExp; action: EventAction; draw: (event: Event, person: User) => string | Promise<string> };
+
+const SIGN_IN = /^\/sign-in$/;
+const SHOW_SCREENS: ShowScreen[] = [
+  // The gate's box for someone who may check in at this show now.
+  { path: /^\/gate\/(\d+)$/, action: 'checkIn', draw: (event) => gateScreenHtml(event.id, event.name) },
+  // A judge's cars for a judge of this show while it is judged, from the API's own view of them.
+  { path: /^\/judge\/(\d+)$/, action: 'viewOwnSheets', draw: async (event, person) => judgeScreenHtml(presentJudgeView(await loadJudgeView(event.id, person.id), judgingClosedReason(event))) },
+];
 
 /** The screen the server draws for this address, or null. Never fails the page: at worst the opening text. */
 export async function firstScreenFor(req: Request): Promise<FirstScreen | null> {
   // A phone whose worker keeps the app opens it within a second: a drawing would cost the page time, not save it.
   if (req.get(APP_KEPT_HEADER)) return null;
   if (SIGN_IN.test(req.path)) return { html: signInScreenHtml(), personal: false };
-  const gate = GATE.exec(req.path);
-  if (gate) return gateScreen(req.user as User | undefined, Number(gate[1]));
-  const judge = JUDGE_CARS.exec(req.path);
-  if (judge) return judgeScreen(req.user as User | undefined, Number(judge[1]));
+  for (const screen of SHOW_SCREENS) {
+    const match = screen.path.exec(req.path);
+    if (match) return showScreen(req.user as User | undefined, match[1]!, screen);
+  }
   return null;
 }
 
-/** The gate's box only for someone who may check in at this show now; anyone else waits for the app's answer. */
-async function gateScreen(person: User | undefined, eventId: number): Promise<FirstScreen | null> {
-  if (!person || !Number.isSafeInteger(eventId)) return null;
-  return drawn('gate', async () => {
-    const [event, actor] = await Promise.all([findEvent(eventId), actorInEvent(person, eventId)]);
-    return canEvent(actor, 'checkIn', event) ? gateScreenHtml(event.id, event.name) : null;
-  });
-}
-
-/** A judge's cars only for a judge of this show while it is judged (the app's own answer for everyone else). */
-async function judgeScreen(person: User | undefined, eventId: number): Promise<FirstScreen | null> {
-  if (!person || !Number.isSafeInteger(eventId)) return null;
-  return drawn('judge', async () => {
-    const [event, actor] = await Promise.all([findEvent(eventId), actorInEvent(person, eventId)]);
-    if (!canEvent(actor, 'viewOwnSheets', event)) return null;
-    return judgeScreenHtml(presentJudgeView(await loadJudgeView(event.id, person.id), judgingClosedReason(event)));
-  });
-}
-
-/** A personal drawn screen, or none: a missing show answers 404 in the app; a database away costs only the drawing. */
-async function drawn(what: string, draw: () => Promise<string | null>): Promise<FirstScreen | null> {
+/** Anyone the policy refuses waits for the app's own answer; a missing show is the app's 404; a database away costs only the drawing. */
+async function showScreen(person: User | undefined, id: string, screen: ShowScreen): Promise<FirstScreen | null> {
+  const eventId = IdSchema.safeParse(id);
+  if (!person || !eventId.success) return null;
   try {
-    const html = await draw();
-    return html === null ? null : { html, personal: true };
+    const [event, actor] = await Promise.all([findEvent(eventId.data), actorInEvent(person, eventId.data)]);
+    return canEvent(actor, screen.action, event) ? { html: await screen.draw(event, person), personal: true } : null;
   } catch (err) {
-    if (!(err instanceof NotFoundError)) logger.warn({ err }, `the ${what} page is sent without its first screen`);
+    if (!(err instanceof NotFoundError)) logger.warn({ err }, `${screen.path.source}: the page is sent without its first screen`);
     return null;
   }
 }

@@ -75,7 +75,7 @@ describe('the first screen the server draws before the app arrives', () => {
 
     // The organiser may check in too; nobody else gets the box: not signed in, no role, another show's id.
     expect(early((await show.organiser.client.get(address)).text)).toBe(address);
-    for (const res of [await request(testApp()).get(address), await stranger.client.get(address), await gate.client.get(`/gate/${show.eventId + 1000}`)]) {
+    for (const res of [await request(testApp()).get(address), await stranger.client.get(address), await gate.client.get(`/gate/${show.eventId + 1000}`), await gate.client.get('/gate/99999999999'), await gate.client.get('/gate/0')]) {
       expect(res.status).toBe(200);
       expect(early(res.text)).toBeNull();
       expectPolicyFits(res);
