@@ -18,7 +18,11 @@ export const GATE_WORDS = {
   scan: 'Scan a card',
   entryNumber: 'Entry number',
   find: 'Find',
-  /** Shown when the number is sent before the app's code has arrived: the app sends it on arrival. */
-  findingSoon: 'Finding that car as soon as the gate has finished loading…',
+  /** Under the gate the server draws, until the app's code has arrived. */
   stillLoading: 'The camera and the check-in buttons are on their way.',
+  /** The scanned car's lines: "No. 12", "Class: Hot rods", "Payment: Paid". */
+  numberPrefix: 'No. ',
+  classPrefix: 'Class: ',
+  paymentPrefix: 'Payment: ',
+  lookUpFailed: 'That look-up did not go through. Send it again.',
 } as const;

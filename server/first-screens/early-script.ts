@@ -10,9 +10,18 @@ export const EARLY_SCRIPT =
   "(function(){var d=document.querySelector('[data-early-path]');if(!d)return;" +
   "if(d.getAttribute('data-early-path')!==location.pathname||navigator.serviceWorker&&navigator.serviceWorker.controller)" +
   "{d.outerHTML='<p aria-live=\"polite\">Opening…</p>';return}" +
-  "function held(e){e.preventDefault();var n=d.querySelector('[data-early-note]');if(n)n.hidden=false}" +
-  "d.querySelectorAll('form').forEach(function(f){f.addEventListener('submit',function(e){held(e);f.setAttribute('data-early-sent','')})});" +
-  "d.querySelectorAll('a[href]').forEach(function(a){a.addEventListener('click',function(e){held(e);d.setAttribute('data-early-go',a.getAttribute('href'))})})})();";
+  "var n=d.querySelector('[data-early-note]');function held(e){e.preventDefault();if(n)n.hidden=false}" +
+  "d.querySelectorAll('form').forEach(function(f){f.addEventListener('submit',function(e){held(e);f.setAttribute('data-early-sent','');if(f.dataset.earlyLookup)look(f)})});" +
+  "d.querySelectorAll('a[href]').forEach(function(a){a.addEventListener('click',function(e){held(e);d.setAttribute('data-early-go',a.getAttribute('href'))})});" +
+  // A form with a look-up address asks it now (a GET of the person's own session) and shows the answer as text;
+  // the answer is kept on the form for the app, which then adds what needs its code (the check-in buttons).
+  "function look(f){var i=f.querySelector('input'),w=JSON.parse(f.dataset.earlyWords),b=d.querySelector('[data-early-answer]');" +
+  "fetch(f.dataset.earlyLookup+'?'+i.name+'='+encodeURIComponent(i.value),{credentials:'same-origin'}).then(function(r){return r.text().then(function(t){" +
+  "var j=JSON.parse(t),c=j.card,e=c&&c.entry;b.textContent='';" +
+  "function line(x,k){var p=document.createElement('p');p.textContent=x;if(k)p.className=k;b.appendChild(p)}" +
+  "if(!r.ok){line(j.error&&j.error.message||w.failed,'early-alert')}else{f.setAttribute('data-early-reply',t);" +
+  "if(e){line(w.number+(e.number==null?'—':e.number),'early-big');line(e.title,'early-title');line(w.cls+e.className);line(w.payment+(w.payments[e.payment]||e.payment))}" +
+  "if(c.message)line(c.message,'early-alert')}b.hidden=false})}).catch(function(){})}})();";
 
 /** The script's CSP source: the policy allows this inline script by its hash and no other (CSP 3, §8.4 hash-source). */
 export const EARLY_SCRIPT_SOURCE = `'sha256-${createHash('sha256').update(EARLY_SCRIPT).digest('base64')}'`;

@@ -46,17 +46,25 @@ describe('the first screens the server draws before the app arrives', () => {
     // The app's code has not arrived: the box is the server's, and it takes the number now.
     await page.getByRole('heading', { name: 'Gate · Lamplight Meet' }).waitFor();
     expect(await page.locator('[data-early-path]').count()).toBe(1);
+    const lookUps: string[] = [];
+    page.on('request', (r) => void (r.url().includes('/gate/lookup') ? lookUps.push(r.url()) : undefined));
     await page.getByLabel('Entry number').fill('1');
     await page.getByLabel('Entry number').press('Enter');
-    await page.getByText('Finding that car as soon as the gate has finished loading…').waitFor();
+    // The page looks the number up itself and shows the car; the buttons wait for the app.
+    const car = page.getByRole('region', { name: 'Scanned car' });
+    await car.getByText('No. 1').waitFor();
+    expect(await car.getByText('Early bird coupe').count()).toBe(1);
+    expect(await car.getByText('Payment: Unpaid').count()).toBe(1);
+    expect(await car.getByText('Entry 1 is not paid yet. Take the fee in cash to check it in.').count()).toBe(1);
+    await page.getByText('The camera and the check-in buttons are on their way.').waitFor();
+    expect(await car.getByRole('button').count()).toBe(0);
     expect(page.url()).toBe(`${env.baseUrl}/gate/${show.eventId}`); // the send was held, the page never left
     await keepScreenshot(page, 'first-screen-gate-held.png');
 
     app.release();
-    const car = page.getByRole('region', { name: 'Scanned car' });
-    await car.getByText('No. 1').waitFor();
+    await car.getByRole('button', { name: 'Take €25.00 cash and check in' }).waitFor();
     expect(await car.getByText('Early bird coupe').count()).toBe(1);
-    expect(await car.getByRole('button', { name: 'Check in' }).count()).toBe(1);
+    expect(lookUps, 'the app keeps the car the page found: one look-up').toHaveLength(1);
     expect(await page.getByLabel('Entry number').inputValue()).toBe('1');
     expect(await page.locator('[data-early-path]').count()).toBe(0);
     expect(app.refused).toEqual([]);

@@ -3,10 +3,10 @@ import { useEffect, useState } from 'react';
 /**
  * What a person did on a first screen the server drew before the app's code arrived (server/first-screens/): the
  * values they typed, whether they sent the form (its send is held by the page's early script) and which box had
- * the focus. Kept once, just before React's first render replaces the drawn screen, and handed to the app's own
+ * the focus, and the answer the page's early script already had for it (the gate's look-up). Kept once, just before React's first render replaces the drawn screen, and handed to the app's own
  * screen, which carries on from there: nothing typed on a weak signal is lost to the app's arrival.
  */
-export type EarlyForm = { values: Record<string, string>; sent: boolean; focused: string | null };
+export type EarlyForm = { values: Record<string, string>; sent: boolean; focused: string | null; answer: unknown };
 
 const kept = new Map<string, EarlyForm>();
 
@@ -26,11 +26,21 @@ export function keepEarlyForms(root: ParentNode): string | null {
       if (field === document.activeElement) focused = field.name;
       field.readOnly = true;
     }
-    kept.set(form.dataset.earlyForm!, { values, sent: form.hasAttribute('data-early-sent'), focused });
+    kept.set(form.dataset.earlyForm!, { values, sent: form.hasAttribute('data-early-sent'), focused, answer: parsed(form.dataset.earlyReply) });
   }
   const go = root.querySelector<HTMLElement>('[data-early-go]')?.dataset.earlyGo ?? null;
   // Only an address of this app, as the drawn screen's own links are.
   return go && go.startsWith('/') && !go.startsWith('//') ? go : null;
+}
+
+/** The early look-up's answer as the API sent it (it is the same API the app reads), or null. */
+function parsed(json: string | undefined): unknown {
+  if (!json) return null;
+  try {
+    return JSON.parse(json) as unknown;
+  } catch {
+    return null;
+  }
 }
 
 /** The drawn form of this screen as the person left it, for the screen's first render only (a later visit starts empty). */

@@ -74,10 +74,10 @@ function CarCard({ eventId, card, onChange, justChecked }: { eventId: number; ca
       <div className="p-3">
         {e ? (
           <>
-            <p className="font-display text-5xl tabular-nums">No. {e.number ?? '—'}</p>
+            <p className="font-display text-5xl tabular-nums">{GATE_WORDS.numberPrefix}{e.number ?? '—'}</p>
             <p className="text-2xl font-semibold">{e.title}</p>
-            <p className="text-xl">Class: {e.className}</p>
-            <p className="text-xl">Payment: {PAYMENT_STATE_LABELS[e.payment]}{e.payment === 'unpaid' ? ` (${formatMoney(e.feeAmount, e.currency)})` : ''}</p>
+            <p className="text-xl">{GATE_WORDS.classPrefix}{e.className}</p>
+            <p className="text-xl">{GATE_WORDS.paymentPrefix}{PAYMENT_STATE_LABELS[e.payment]}{e.payment === 'unpaid' ? ` (${formatMoney(e.feeAmount, e.currency)})` : ''}</p>
           </>
         ) : null}
         {justChecked ? <p role="status" className="mt-3 border-l-8 border-ok bg-ok/10 p-3 text-2xl font-semibold">Checked in.</p> : null}
@@ -113,14 +113,15 @@ export function GatePage() {
   const queue = useGateQueue(eventId);
   const lookUp = useLookUpGateCard(eventId);
   const counts = useGateCounts(eventId);
-  const [card, setCard] = useState<GateCard | null>(null);
   const [notFound, setNotFound] = useState<string | null>(null);
   const [justChecked, setJustChecked] = useState(false);
   const [camera, setCamera] = useState(false);
   // The number typed (and perhaps sent) on the gate the server drew before this code arrived carries on here.
   const early = useEarlyForm('gate');
   const [typed, setTyped] = useState(() => (early?.values.number ?? '').replace(/\D/g, ''));
-  const earlySend = useRef(early?.sent ?? false);
+  // The car the drawn gate already found (the same API's answer, kept on its form) stays up: no second look-up.
+  const [card, setCard] = useState<GateCard | null>(() => (early?.answer as { card?: GateCard } | null)?.card ?? null);
+  const earlySend = useRef((early?.sent ?? false) && !card);
   const found = (c: GateCard) => {
     setCard(c);
     setNotFound(null);
