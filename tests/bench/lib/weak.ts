@@ -16,6 +16,11 @@ export type WeakPage = {
   as?: { email: string; password: string };
   /** What a person waits for on an app screen: the page is usable once it shows. */
   usable?: (page: Page) => Promise<void>;
+  /**
+   * The same, as a test the page runs on every frame from its start (a JavaScript expression): the time is read
+   * in the page at the frame the control arrives, not when the bench's own wait returns (up to 0.5 s later).
+   */
+  usableWhen?: string;
   /** What the person then does at once, and the answer they wait for (timed from the same start). */
   answer?: (page: Page) => Promise<void>;
   /** Also measure a second load once the page's service worker (this scope) is active. */
@@ -32,12 +37,17 @@ async function throttle(context: BrowserContext, page: Page): Promise<void> {
   await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: WEAK_LINK.rttMs, downloadThroughput: bytesPerSecond, uploadThroughput: bytesPerSecond });
 }
 
+/** Records in `window.__usableAt` the first frame at which `expression` holds. */
+const usableWatch = (expression: string) =>
+  `window.__usableAt = 0; (function frame() { try { if (${expression}) { window.__usableAt = performance.now(); return; } } catch {} requestAnimationFrame(frame); })();`;
+
 async function timings(page: Page, usable: WeakPage['usable'], answer?: WeakPage['answer']): Promise<{ fcp: number; lcp: number; usable: number | null; answered: number | null }> {
   let usableAt: number | null = null;
   let answeredAt: number | null = null;
   if (usable) {
     await usable(page);
-    usableAt = await page.evaluate(() => performance.now());
+    // The page's own frame time when it has one; else when the bench's wait returned.
+    usableAt = await page.evaluate(() => (window as unknown as { __usableAt?: number }).__usableAt || performance.now());
   }
   if (answer) {
     await answer(page);
@@ -71,6 +81,7 @@ export async function measureWeakLink(browser: Browser, base: string, pages: Wea
     try {
       if (p.as) await signIn(context, base, p.as);
       await context.addInitScript(LCP_WATCH);
+      if (p.usableWhen) await context.addInitScript(usableWatch(p.usableWhen));
       const page = await context.newPage();
       await throttle(context, page);
       await page.goto(`${base}${p.path}`, { waitUntil: 'commit' });
