@@ -66,9 +66,14 @@ export function carriesSignedSession(req: Request): boolean {
   return got.length === want.length && timingSafeEqual(got, want);
 }
 
-/** Probes (an orchestrator's health and readiness checks) and the signed-in API go first. */
+/** The judges' and the gate's own pages: a signed-in person's, which the server draws from their session. */
+const STAFF_PAGES = /^\/(?:gate|judge)(?:\/|$)/;
+
+/** Probes (an orchestrator's health and readiness checks), the signed-in API and the staff's pages go first. */
 const goesFirst = (req: Request) =>
-  req.path.startsWith('/api/') && (req.path === '/api/health' || req.path === '/api/ready' || (!req.path.startsWith('/api/public/') && carriesSignedSession(req)));
+  req.path === '/api/health' ||
+  req.path === '/api/ready' ||
+  (((req.path.startsWith('/api/') && !req.path.startsWith('/api/public/')) || STAFF_PAGES.test(req.path)) && carriesSignedSession(req));
 
 /** How many visitors' requests are waiting for their turn now. */
 export const visitorsWaiting = () => waiting.length - head;

@@ -28,6 +28,18 @@ describe('visitors take turns; signed-in work does not wait', () => {
     expect(visitorsWaiting()).toBe(0);
   });
 
+  it('starts the judges’ and the gate’s pages at once for a signed-in person, not for a visitor', async () => {
+    const started: string[] = [];
+    const session = `placard.sid=${encodeURIComponent(signed('abc123'))}`;
+    visitorTurns(request('/e/show'), response().res, () => started.push('visitor'));
+    visitorTurns(request('/gate/7'), response().res, () => started.push('gate, no session'));
+    visitorTurns(request('/judge/7', session), response().res, () => started.push('judge'));
+    visitorTurns(request('/gate/7', session), response().res, () => started.push('gate'));
+    visitorTurns(request('/gatehouse', session), response().res, () => started.push('another page'));
+    expect(started).toEqual(['judge', 'gate']);
+    await expect.poll(() => started.length).toBe(5);
+  });
+
   it('gives no priority to a made-up or foreign session cookie, to the public JSON, or to a page', async () => {
     const cases = [
       request('/api/events/1/scores', 'placard.sid=s%3Aabc123.forged'),
