@@ -8,7 +8,7 @@ import { existsSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { logger } from './logger';
-import { EARLY_SCRIPT } from './first-screens/early-script';
+import { EARLY_SCRIPT, OPENING } from './first-screens/early-script';
 
 export const CLIENT_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist/client');
 
@@ -94,9 +94,6 @@ const attr = (url: string) => {
   if (!/^\/[\w./-]+$/.test(url)) throw new Error(`Not a URL for the app's page: ${url}`);
   return url;
 };
-
-/** Where the built page's opening text stands: a first screen drawn by the server takes its place. */
-const OPENING = '<p aria-live="polite">Opening…</p>';
 
 /**
  * The app's page for `pathname`, with its screen's hints and, when the server drew one (first-screens/), that

@@ -6,10 +6,13 @@
 // page the worker keeps (one copy for every show) may be another show's or out of date.
 import { createHash } from 'node:crypto';
 
+/** The built page's opening text (client/index.html): a first screen drawn by the server takes its place. */
+export const OPENING = '<p aria-live="polite">Opening…</p>';
+
 export const EARLY_SCRIPT =
   "(function(){var d=document.querySelector('[data-early-path]');if(!d)return;" +
   "if(d.getAttribute('data-early-path')!==location.pathname||navigator.serviceWorker&&navigator.serviceWorker.controller)" +
-  "{d.outerHTML='<p aria-live=\"polite\">Opening…</p>';return}" +
+  `{d.outerHTML=${JSON.stringify(OPENING)};return}` +
   "var n=d.querySelector('[data-early-note]');function held(e){e.preventDefault();if(n)n.hidden=false}" +
   "d.querySelectorAll('form').forEach(function(f){f.addEventListener('submit',function(e){held(e);f.setAttribute('data-early-sent','');if(f.dataset.earlyLookup)look(f)})});" +
   "d.querySelectorAll('a[href]').forEach(function(a){a.addEventListener('click',function(e){held(e);d.setAttribute('data-early-go',a.getAttribute('href'))})});" +
