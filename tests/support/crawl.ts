@@ -41,12 +41,28 @@ function watchForErrors(page: Page): string[] {
   return errors;
 }
 
+/**
+ * What the screen shows now, read in one look at the page (a walk settles every screen on each device:
+ * Playwright's role queries took a third of the walk): how many status lines say Loading, and the
+ * headings, each by the roles' own rules (a status is `role="status"` or an `<output>`, a heading h1–h6
+ * or `role="heading"`; nothing hidden or under `aria-hidden` counts).
+ */
+function screenNow(): { loading: number; headings: string[] } {
+  const shown = (el: Element) => el.checkVisibility({ visibilityProperty: true }) && !el.closest('[aria-hidden="true"]');
+  const words = (el: Element) => (el.textContent ?? '').replace(/\s+/g, ' ').trim();
+  const loading = [...document.querySelectorAll('[role="status"], output')].filter((el) => shown(el) && /^Loading/.test(words(el))).length;
+  const headings = [...document.querySelectorAll('h1, h2, h3, h4, h5, h6, [role="heading"]')].filter(shown).map(words);
+  return { loading, headings };
+}
+
 /** Waits until the screen has stopped loading, then says what is wrong with it, if anything. */
 async function settle(page: Page): Promise<string | null> {
   await page.locator('main h1').first().waitFor();
-  await expect.poll(() => page.getByRole('status').filter({ hasText: /^Loading/ }).count()).toBe(0);
-  if (await page.getByRole('heading', { name: 'This screen broke' }).count()) return 'the screen broke (error boundary)';
-  if (await page.getByRole('heading', { name: /not found/i }).count()) return 'a link led to a page that is not there';
+  let now = { loading: 0, headings: [] as string[] };
+  await expect.poll(async () => (now = await page.evaluate(screenNow)).loading).toBe(0);
+  if (now.headings.some((h) => /this screen broke/i.test(h))) return 'the screen broke (error boundary)';
+  // The app's own not-found screen says "Nothing parked here" (client/src/app/not-found-page.tsx).
+  if (now.headings.some((h) => /not found|nothing parked here/i.test(h))) return 'a link led to a page that is not there';
   return null;
 }
 
