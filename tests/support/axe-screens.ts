@@ -5,6 +5,7 @@ import type { Page } from 'playwright-core';
 import { useBrowserAndServer, openSignedIn, keepScreenshot } from './browser';
 import { AxeLedger, pagesOfTheServer, screensOfTheApp, ACCEPTED } from './axe';
 import { describeShowSideWalk } from './show-side-walk';
+import { screenNow } from './crawl';
 import { judgedShow } from './results-factory';
 import { showWithClasses, signedIn } from './event-factory';
 import { createFullBuild } from './build-factory';
@@ -26,7 +27,7 @@ const EXEMPT = new Map<string, string>([
 /** Waits until the screen (the app's or the server's) has its heading and nothing says Loading. */
 async function settled(page: Page): Promise<void> {
   await page.locator('h1').first().waitFor();
-  await expect.poll(() => page.getByRole('status').filter({ hasText: /^Loading/ }).count()).toBe(0);
+  await expect.poll(async () => (await page.evaluate(screenNow)).loading).toBe(0);
 }
 
 /**

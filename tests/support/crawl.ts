@@ -47,7 +47,7 @@ function watchForErrors(page: Page): string[] {
  * headings, each by the roles' own rules (a status is `role="status"` or an `<output>`, a heading h1–h6
  * or `role="heading"`; nothing hidden or under `aria-hidden` counts).
  */
-function screenNow(): { loading: number; headings: string[] } {
+export function screenNow(): { loading: number; headings: string[] } {
   const shown = (el: Element) => el.checkVisibility({ visibilityProperty: true }) && !el.closest('[aria-hidden="true"]');
   const words = (el: Element) => (el.textContent ?? '').replace(/\s+/g, ' ').trim();
   const loading = [...document.querySelectorAll('[role="status"], output')].filter((el) => shown(el) && /^Loading/.test(words(el))).length;
