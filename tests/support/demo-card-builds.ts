@@ -63,9 +63,16 @@ export async function createDemoCardBuilds(owner?: Awaited<ReturnType<typeof cre
   return out;
 }
 
-/** The demo builds as `createDemoCardBuilds` makes them, without the database (unsaved models through the public presenter). */
-export async function demoCardBuildsInMemory(): Promise<DemoCardBuild[]> {
-  return Promise.all(DEMO_BUILDS.map((demo, i) => demoCardBuildInMemory(demo, i + 1)));
+let inMemory: Promise<readonly DemoCardBuild[]> | undefined;
+
+/**
+ * The demo builds as `createDemoCardBuilds` makes them, without the database (unsaved models through the
+ * public presenter). Made once per test worker (their photos take a couple of seconds through sharp), so the
+ * layout corpora of one worker share them: read them, never change them.
+ */
+export function demoCardBuildsInMemory(): Promise<readonly DemoCardBuild[]> {
+  inMemory ??= Promise.all(DEMO_BUILDS.map((demo, i) => demoCardBuildInMemory(demo, i + 1)));
+  return inMemory;
 }
 
 async function demoCardBuildInMemory(demo: DemoBuild, id: number): Promise<DemoCardBuild> {

@@ -9,8 +9,7 @@ import { BaseSequencer, type TestSpecification } from 'vitest/node';
  *   seconds below (a fresh checkout, as on CI, has no cache; vitest would then take the largest file first).
  */
 const SECONDS_WITHOUT_CACHE: Record<string, number> = {
-  'tests/e2e/accessibility-phone.test.ts': 50,
-  'tests/e2e/accessibility-desktop.test.ts': 50,
+  'tests/e2e/accessibility.test.ts': 50,
   'tests/e2e/bulk-print.test.ts': 35,
   'tests/e2e/build-editor-autosave.test.ts': 30,
   'tests/e2e/build-editor.test.ts': 25,

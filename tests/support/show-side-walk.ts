@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContextOptions, Page } from 'playwright-core';
 import { useBrowserAndServer } from './browser';
-import { walkShowSide, type WalkedShow } from './crawl';
+import { walkShowSide, type WalkedShow, type WalkView } from './crawl';
+import type { Device } from './devices';
 import { showWithClasses, signedIn } from './event-factory';
 import { enter, memberOf, step } from './show-day-factory';
 import { judgeOf, showInJudging } from './judging-factory';
@@ -15,10 +15,13 @@ type Person = { role: string; email: string };
  * Every role reaches every screen of the show side by clicking the product's own links (never by
  * typing an address), forward and back, and nothing breaks on the way: no error boundary, no script or
  * console error. Screens that share a cached answer are reached one after the other here, which is how
- * two shapes under one cache key were found breaking. One file per device, so the two run side by side.
- * With `axe`, every screen of each role's walk is also checked for accessibility (tests/support/axe.ts).
+ * two shapes under one cache key were found breaking. Each role walks once for all `devices`: the
+ * roles take turns at which device the walk clicks on (and signs in with), and every screen is drawn
+ * again and checked on each other device (`walkShowSide`). With `axe` (a ledger per device), every
+ * screen of each role's walk is also checked for accessibility on each device (tests/support/axe.ts).
  */
-export function describeShowSideWalk(device: string, options: BrowserContextOptions, axe?: AxeLedger): void {
+export function describeShowSideWalk(devices: readonly [Device, ...Device[]], axe?: ReadonlyMap<Device, AxeLedger>): void {
+  const onEvery = devices.map((d) => `a ${d.name}`).join(' and on ');
   const env = useBrowserAndServer();
   const people: Person[] = [];
   const shows: WalkedShow[] = [];
@@ -51,22 +54,27 @@ export function describeShowSideWalk(device: string, options: BrowserContextOpti
 
   describe('the show side, walked by every role through its own links', () => {
     // Six walks, and with axe a check of each new screen: longer than the project's minute, never stuck (each action has its 20 s).
-    it(`breaks no screen on a ${device}`, { timeout: 150_000 }, async () => {
+    it(`breaks no screen on ${onEvery}`, { timeout: 150_000 }, async () => {
       const walks: string[] = [];
       const landings: Record<string, string> = {};
       // Every role walks before the findings are shown, so one run lists them all.
       const found: string[] = [];
-      for (const person of people) {
-        const context = await env.browser.newContext({ ...options, bypassCSP: axe !== undefined });
+      for (const [turn, person] of people.entries()) {
+        // The devices in turn: the first is the one this role signs in and clicks on.
+        const order = devices.map((_, i) => devices[(turn + i) % devices.length]!);
+        const context = await env.browser.newContext({ ...order[0]!.options, bypassCSP: axe !== undefined });
         // A co-organiser sees what the organiser sees: axe looks at those screens once, as the organiser.
-        const onScreen = axe && person.role !== 'co-organiser' ? (page: Page) => axe.check(page, person.role) : undefined;
-        const { landedOn, reached, problems } = await walkShowSide(await context.newPage(), env.baseUrl, person.email, { shows, onScreen });
+        const views = order.map((device): WalkView => {
+          const ledger = person.role === 'co-organiser' ? undefined : axe?.get(device);
+          return { device, onScreen: ledger && ((page) => ledger.check(page, person.role)) };
+        });
+        const { landedOn, reached, problems } = await walkShowSide(await context.newPage(), env.baseUrl, person.email, { shows, views: views as [WalkView, ...WalkView[]] });
         await context.close();
         found.push(...problems.map((p) => `${person.role}: ${p}`));
         landings[person.role] = landedOn;
         walks.push(`${person.role}: ${reached.join(' ')}`);
       }
-      expect(found, `on a ${device}`).toEqual([]);
+      expect(found).toEqual([]);
       // Each role lands on its day: the organisers on the show's Today, the gate on the scanner, the judge on their cars.
       const [onTheDay, judged] = shows as [WalkedShow, WalkedShow];
       expect(landings).toEqual({

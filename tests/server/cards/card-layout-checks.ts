@@ -29,7 +29,7 @@ const ALL = PAPERS.flatMap((paper) => ORIENTATIONS.map((orientation) => ({ paper
 const EXACT_PT: Record<Paper, [number, number]> = { letter: [612, 792], tabloid: [792, 1224], a4: [595.2756, 841.8898], a3: [841.8898, 1190.5512] };
 const norm = (s: string) => s.replace(/\s+/g, '').toUpperCase();
 
-function corpus(demo: DemoCardBuild[]): Case[] {
+function corpus(demo: readonly DemoCardBuild[]): Case[] {
   const every = (name: string, build: PublicBuild, show: CardShow | null, cover: CoverImage | null = null): Case[] => ALL.map((c) => ({ name, build, show, cover, ...c }));
   const [complete, ...others] = demo;
   return [
@@ -56,19 +56,22 @@ const SCAN_AROUND_PT = 5 * (72 / 25.4);
 
 /**
  * Lays out every case and prints them as pages of one document (as the bulk print of a show does),
- * so pdf.js reads the fonts once; the cases that also scan their QR code are rendered alone through
- * the card service too, exactly as an owner downloads them.
+ * so pdf.js reads the fonts once; the cases that also scan their QR code alone are rendered only
+ * through the card service, exactly as an owner downloads them (and checked from that PDF).
  */
 async function renderAll(design: CardDesign, cases: Case[]): Promise<Rendered[]> {
   registerCardFonts();
-  const laid = cases.map((c) => layoutCard(cardContent(c.build, settingsOf(design, c), { show: c.show, cover: c.cover, highlight: c.highlight }), design, c.paper, c.orientation));
+  const together = cases.filter((c) => !c.alone);
+  const laid = together.map((c) => layoutCard(cardContent(c.build, settingsOf(design, c), { show: c.show, cover: c.cover, highlight: c.highlight }), design, c.paper, c.orientation));
   const doc = createElement(CardDocument, { page: createElement(Fragment, null, ...laid.map((l, i) => cloneElement(l.page, { key: i }))), title: `${design} corpus` });
   const all = await renderToBuffer(doc as Parameters<typeof renderToBuffer>[0]);
   const layouts = await readCardLayouts(all);
   const scans = rasterizePages(all, SCAN_DPI);
+  expect({ pages: layouts.length, scans: scans.length }).toEqual({ pages: together.length, scans: together.length });
   return Promise.all(
-    cases.map(async (c, i) => {
-      if (!c.alone) return { pdf: null, layout: { ...layouts[i]!, pages: 1 }, leftOff: laid[i]!.leftOff, scan: scans[i]! };
+    cases.map(async (c) => {
+      const i = together.indexOf(c);
+      if (i >= 0) return { pdf: null, layout: { ...layouts[i]!, pages: 1 }, leftOff: laid[i]!.leftOff, scan: scans[i]! };
       const { pdf, leftOff } = await renderCard(c.build, settingsOf(design, c), { show: c.show, cover: c.cover, highlight: c.highlight });
       return { pdf, layout: await readCardLayout(pdf), leftOff, scan: rasterize(pdf, SCAN_DPI) };
     }),
